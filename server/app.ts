@@ -1,0 +1,91 @@
+// createApp(): the Express application, without listen (tests use it with supertest).
+import fs from 'node:fs';
+import path from 'node:path';
+import { randomBytes } from 'node:crypto';
+import express, { type Express, Router } from 'express';
+import session from 'express-session';
+import connectPgSimple from 'connect-pg-simple';
+import helmet from 'helmet';
+import passport from 'passport';
+import { configurePassport } from './modules/auth/passport';
+import { authRoutes, signInLimiter } from './modules/auth/router';
+import { userRoutes } from './modules/users/router';
+import { jobRoutes } from './modules/jobs/router';
+import { mailRoutes } from './modules/mail/router';
+import { csrfProtection } from './middleware/csrf';
+import { errorHandler, notFoundApi } from './middleware/errors';
+import { routeTable, toHandlers, type AnyRoute } from './http/route-table';
+import { extraRoutes } from './http/extra-routes';
+import { env } from './config/env';
+
+export interface AppOptions {
+  databaseUrl: string;
+  sessionSecret?: string;
+  /** serve the built client from dist/ (production start) */
+  serveClient?: boolean;
+}
+
+export function allRoutes(): AnyRoute[] {
+  return [...authRoutes(signInLimiter()), ...userRoutes, ...jobRoutes, ...mailRoutes, ...extraRoutes()];
+}
+
+export function createApp(opts: AppOptions): Express {
+  const e = env();
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', 'loopback');
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          defaultSrc: ["'self'"],
+          imgSrc: ["'self'", 'data:', 'blob:'],
+          styleSrc: ["'self'", "'unsafe-inline'"],
+          fontSrc: ["'self'", 'data:'],
+          scriptSrc: ["'self'"],
+          connectSrc: ["'self'"],
+          objectSrc: ["'none'"],
+          frameAncestors: ["'none'"],
+          upgradeInsecureRequests: null,
+        },
+      },
+      crossOriginEmbedderPolicy: false,
+    }),
+  );
+  app.use('/api', express.json({ limit: '1mb' }));
+
+  const PgStore = connectPgSimple(session);
+  app.use(
+    session({
+      name: 'pw.sid',
+      secret: opts.sessionSecret ?? e.SESSION_SECRET ?? randomBytes(32).toString('hex'),
+      store: new PgStore({ conString: opts.databaseUrl, tableName: 'session', createTableIfMissing: false, pruneSessionInterval: 60 * 15 }),
+      resave: false,
+      saveUninitialized: false,
+      rolling: true,
+      cookie: { httpOnly: true, sameSite: 'lax', secure: e.NODE_ENV === 'production' && e.APP_URL.startsWith('https'), maxAge: 12 * 60 * 60 * 1000 },
+    }),
+  );
+  configurePassport();
+  app.use(passport.session());
+  app.use('/api', csrfProtection);
+
+  const api = Router();
+  routeTable.length = 0;
+  for (const spec of allRoutes()) {
+    routeTable.push(spec);
+    api[spec.method](spec.path, ...toHandlers(spec));
+  }
+  app.use(api);
+  app.use('/api', notFoundApi);
+
+  if (opts.serveClient) {
+    const dist = path.resolve(import.meta.dirname, '..', 'dist');
+    if (fs.existsSync(dist)) {
+      app.use(express.static(dist, { index: false, maxAge: '1h' }));
+      app.get('/{*splat}', (_req, res) => res.sendFile(path.join(dist, 'index.html')));
+    }
+  }
+  app.use(errorHandler);
+  return app;
+}

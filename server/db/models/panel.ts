@@ -1,0 +1,43 @@
+import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
+import type { Organisation } from './organisation';
+import type { Job } from './job';
+import type { Load } from './load';
+
+export class Panel extends Model<InferAttributes<Panel>, InferCreationAttributes<Panel>> {
+  declare id: CreationOptional<number>;
+  declare organisationId: ForeignKey<Organisation['id']>;
+  declare jobId: ForeignKey<Job['id']>;
+  declare name: string;
+  declare description: CreationOptional<string>;
+  declare mounting: CreationOptional<string>;
+  declare status: CreationOptional<string>;
+  declare revisionNumber: number | null;
+  declare markupPercent: CreationOptional<number>;
+  declare labourRate: CreationOptional<number>;
+  declare archivedAt: Date | null;
+  declare version: CreationOptional<number>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+  declare job?: NonAttribute<Job>;
+  declare loads?: NonAttribute<Load[]>;
+
+  static initModel(sequelize: Sequelize) {
+    Panel.init(
+      {
+        id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
+        name: { type: DataTypes.STRING(200), allowNull: false },
+        description: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
+        mounting: { type: DataTypes.STRING(30), allowNull: false, defaultValue: 'wall-mounted' },
+        status: { type: DataTypes.STRING(20), allowNull: false, defaultValue: 'draft' },
+        revisionNumber: { type: DataTypes.INTEGER, allowNull: true },
+        markupPercent: { type: DataTypes.DOUBLE, allowNull: false, defaultValue: 15 },
+        labourRate: { type: DataTypes.DOUBLE, allowNull: false, defaultValue: 85 },
+        archivedAt: { type: DataTypes.DATE, allowNull: true },
+        version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'panels' },
+    );
+  }
+}

@@ -1,0 +1,29 @@
+import { Sequelize } from 'sequelize';
+import { initModels } from './models/index';
+
+let instance: Sequelize | null = null;
+
+/** Opens the connection pool once per process and wires the models. */
+export function connectDatabase(url: string, opts: { logSql?: boolean; poolMax?: number } = {}): Sequelize {
+  if (instance) return instance;
+  instance = new Sequelize(url, {
+    dialect: 'postgres',
+    logging: opts.logSql ? (sql) => console.log(sql) : false,
+    pool: { max: opts.poolMax ?? 20, min: 0, idle: 10_000 },
+    define: { underscored: true },
+  });
+  initModels(instance);
+  return instance;
+}
+
+export function db(): Sequelize {
+  if (!instance) throw new Error('database not connected');
+  return instance;
+}
+
+export async function closeDatabase() {
+  if (instance) {
+    await instance.close();
+    instance = null;
+  }
+}

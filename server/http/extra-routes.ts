@@ -1,0 +1,6 @@
+// Routes of the panel, catalogue and bill-of-materials modules, collected here so app.ts stays short.
+import type { AnyRoute } from './route-table';
+
+export function extraRoutes(): AnyRoute[] {
+  return [];
+}

@@ -1,0 +1,28 @@
+import nodemailer, { type Transporter } from 'nodemailer';
+import { env } from '../../config/env';
+
+let transporter: Transporter | null = null;
+
+/** SMTP_URL in production; the local fake (smtp://127.0.0.1:PW_SMTP_FAKE_PORT) otherwise. */
+function transport(): Transporter {
+  if (!transporter) {
+    const e = env();
+    const url = e.SMTP_URL ?? `smtp://127.0.0.1:${e.PW_SMTP_FAKE_PORT}`;
+    transporter = nodemailer.createTransport(url);
+  }
+  return transporter;
+}
+
+export function resetMailer() {
+  transporter = null;
+}
+
+export async function sendMail(to: string[], subject: string, text: string) {
+  if (to.length === 0) return;
+  try {
+    await transport().sendMail({ from: env().MAIL_FROM, to, subject, text });
+  } catch (err) {
+    // Mail is a notification: a failed send is logged, never a failed request.
+    console.error('[mail] not sent:', err instanceof Error ? err.message : err);
+  }
+}

@@ -1,0 +1,17 @@
+import { z } from 'zod';
+import { defineRoute } from '../../http/route-table';
+import { MailMessage } from '../../db/models/mail-message';
+
+export const mailRoutes = [
+  defineRoute({
+    method: 'get',
+    path: '/api/outbox',
+    access: ['admin'],
+    summary: 'Messages captured by the development mail server',
+    query: z.object({ limit: z.coerce.number().int().min(1).max(500).default(100) }),
+    handler: async ({ query }) => {
+      const rows = await MailMessage.findAll({ order: [['id', 'DESC']], limit: query.limit });
+      return rows.map((m) => ({ id: m.id, to: m.toAddress, from: m.fromAddress, subject: m.subject, body: m.body, createdAt: m.createdAt }));
+    },
+  }),
+];

@@ -1,0 +1,75 @@
+import { NavLink, Outlet, useNavigate, useNavigation } from 'react-router-dom';
+import { useQuery } from '@tanstack/react-query';
+import { hasRole, sessionQueries, useSignOut } from '../../features/auth/api/session';
+import { ROLE_LABELS, type Role } from '../../../shared/schemas/auth';
+import { ErrorBoundary } from './error-boundary';
+
+function Mark() {
+  return (
+    <svg viewBox="0 0 24 24" className="h-6 w-6" aria-hidden>
+      <rect x="1" y="1" width="22" height="22" rx="4" fill="none" stroke="#c4814a" strokeWidth="2" />
+      <path d="M7 18V6h6a3.5 3.5 0 010 7H7" fill="none" stroke="#e8ecef" strokeWidth="2.2" />
+    </svg>
+  );
+}
+
+export function AppLayout() {
+  const { data: me } = useQuery(sessionQueries.me());
+  const signOut = useSignOut();
+  const navigate = useNavigate();
+  const navigation = useNavigation();
+  const links: Array<{ to: string; label: string; show: boolean }> = [
+    { to: '/jobs', label: 'Jobs', show: true },
+    { to: '/catalogue', label: 'Catalogue', show: true },
+    { to: '/labour-units', label: 'Labour units', show: true },
+    { to: '/people', label: 'People', show: hasRole(me, 'admin') },
+    { to: '/outbox', label: 'Outbox', show: hasRole(me, 'admin') },
+  ];
+  return (
+    <div className="min-h-screen">
+      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:bg-panel focus:p-2">
+        Skip to content
+      </a>
+      <header className="bg-header text-header-ink">
+        <div className="mx-auto flex max-w-[1400px] items-center gap-6 px-4 py-2">
+          <NavLink to="/jobs" className="flex items-center gap-2 text-lg font-bold tracking-wide">
+            <Mark /> Panelwright
+          </NavLink>
+          <nav aria-label="Main" className="flex gap-1">
+            {links
+              .filter((l) => l.show)
+              .map((l) => (
+                <NavLink
+                  key={l.to}
+                  to={l.to}
+                  className={({ isActive }) =>
+                    `rounded px-3 py-1.5 text-sm font-medium ${isActive ? 'bg-white/10 text-white shadow-[inset_0_-2px_0_#c4814a]' : 'text-header-ink/80 hover:text-white'}`
+                  }
+                >
+                  {l.label}
+                </NavLink>
+              ))}
+          </nav>
+          <div className="ml-auto flex items-center gap-3 text-sm">
+            <span title={me?.organisationName}>
+              {me?.name} <span className="text-header-ink/60">· {me?.roles.map((r) => ROLE_LABELS[r as Role]).join(', ')}</span>
+            </span>
+            <button
+              type="button"
+              className="rounded border border-white/20 px-2 py-1 hover:border-copper-500"
+              onClick={() => signOut.mutate(undefined, { onSettled: () => navigate('/sign-in') })}
+            >
+              Sign out
+            </button>
+          </div>
+        </div>
+        {navigation.state === 'loading' ? <div className="h-0.5 animate-pulse bg-copper-500" /> : <div className="h-0.5" />}
+      </header>
+      <main id="main" className="mx-auto max-w-[1400px] px-4 py-5">
+        <ErrorBoundary>
+          <Outlet />
+        </ErrorBoundary>
+      </main>
+    </div>
+  );
+}

@@ -1,0 +1,80 @@
+import { useForm } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { z } from 'zod';
+import { CODE_EDITIONS, JobInputSchema, type JobInput } from '../../../../shared/schemas/job';
+import { Field, inputClass } from '../../../components/ui/field';
+import { Button } from '../../../components/ui/button';
+import { ErrorNote } from '../../../components/ui/feedback';
+import { ApiError } from '../../../lib/api-client';
+
+type FormIn = z.input<typeof JobInputSchema>;
+type FormOut = z.output<typeof JobInputSchema>;
+
+export function JobForm({ initial, onSubmit, pending, error, submitLabel }: { initial?: Partial<JobInput>; onSubmit: (v: FormOut) => void; pending: boolean; error: unknown; submitLabel: string }) {
+  const { register, handleSubmit, formState, setError } = useForm<FormIn, unknown, FormOut>({
+    resolver: zodResolver(JobInputSchema),
+    defaultValues: { supplyVolts: 480, supplyPhases: 3, supplyHz: 60, availableFaultKa: 22, ambientC: 30, codeEdition: '2023', customer: '', site: '', notes: '', ...initial },
+  });
+  if (error instanceof ApiError) {
+    for (const i of error.fieldIssues) {
+      const name = i.path.replace(/^body\./, '') as keyof FormIn;
+      if (!formState.errors[name]) setError(name, { message: i.message });
+    }
+  }
+  const e = formState.errors;
+  return (
+    <form onSubmit={handleSubmit(onSubmit)} noValidate className="grid max-w-3xl grid-cols-2 gap-4 rounded border border-line bg-panel p-5">
+      <Field label="Job number" error={e.number?.message}>{(p) => <input {...p} {...register('number')} className={inputClass} />}</Field>
+      <Field label="Name" error={e.name?.message}>{(p) => <input {...p} {...register('name')} className={inputClass} />}</Field>
+      <Field label="Customer" error={e.customer?.message}>{(p) => <input {...p} {...register('customer')} className={inputClass} />}</Field>
+      <Field label="Site" error={e.site?.message}>{(p) => <input {...p} {...register('site')} className={inputClass} />}</Field>
+      <Field label="Supply voltage" unit="V" error={e.supplyVolts?.message}>{(p) => <input {...p} {...register('supplyVolts')} inputMode="numeric" className={inputClass} />}</Field>
+      <div className="grid grid-cols-2 gap-3">
+        <Field label="Phases" error={e.supplyPhases?.message}>
+          {(p) => (
+            <select {...p} {...register('supplyPhases')} className={inputClass}>
+              <option value={3}>3</option>
+              <option value={1}>1</option>
+            </select>
+          )}
+        </Field>
+        <Field label="Frequency" unit="Hz" error={e.supplyHz?.message}>
+          {(p) => (
+            <select {...p} {...register('supplyHz')} className={inputClass}>
+              <option value={60}>60</option>
+              <option value={50}>50</option>
+            </select>
+          )}
+        </Field>
+      </div>
+      <Field label="Available fault current at the panel" unit="kA" hint="From the utility or the short-circuit study (NEC 409.22)" error={e.availableFaultKa?.message}>
+        {(p) => <input {...p} {...register('availableFaultKa')} inputMode="decimal" className={inputClass} />}
+      </Field>
+      <Field label="Ambient temperature" unit="°C" error={e.ambientC?.message}>{(p) => <input {...p} {...register('ambientC')} inputMode="decimal" className={inputClass} />}</Field>
+      <Field label="Code edition" error={e.codeEdition?.message}>
+        {(p) => (
+          <select {...p} {...register('codeEdition')} className={inputClass}>
+            {CODE_EDITIONS.map((c) => (
+              <option key={c} value={c}>
+                NEC {c}
+              </option>
+            ))}
+          </select>
+        )}
+      </Field>
+      <div className="col-span-2">
+        <Field label="Notes" error={e.notes?.message}>{(p) => <textarea {...p} {...register('notes')} rows={3} className={inputClass} />}</Field>
+      </div>
+      {error && !(error instanceof ApiError && error.fieldIssues.length) ? (
+        <div className="col-span-2">
+          <ErrorNote error={error} />
+        </div>
+      ) : null}
+      <div className="col-span-2">
+        <Button type="submit" disabled={pending}>
+          {pending ? 'Saving…' : submitLabel}
+        </Button>
+      </div>
+    </form>
+  );
+}
