@@ -7,6 +7,7 @@ import session from 'express-session';
 import connectPgSimple from 'connect-pg-simple';
 import helmet from 'helmet';
 import passport from 'passport';
+import pg from 'pg';
 import { configurePassport } from './modules/auth/passport';
 import { authRoutes, signInLimiter } from './modules/auth/router';
 import { userRoutes } from './modules/users/router';
@@ -55,11 +56,14 @@ export function createApp(opts: AppOptions): Express {
   app.use('/api', express.json({ limit: '1mb' }));
 
   const PgStore = connectPgSimple(session);
+  const sessionPool = new pg.Pool({ connectionString: opts.databaseUrl, max: 5 });
+  sessionPool.on('error', () => undefined); // an idle client dropped by the server; the pool reconnects
+  app.locals.sessionPool = sessionPool;
   app.use(
     session({
       name: 'pw.sid',
       secret: opts.sessionSecret ?? e.SESSION_SECRET ?? randomBytes(32).toString('hex'),
-      store: new PgStore({ conString: opts.databaseUrl, tableName: 'session', createTableIfMissing: false, pruneSessionInterval: 60 * 15 }),
+      store: new PgStore({ pool: sessionPool, tableName: 'session', createTableIfMissing: false, pruneSessionInterval: e.NODE_ENV === 'test' ? false : 60 * 15 }),
       resave: false,
       saveUninitialized: false,
       rolling: true,

@@ -1,12 +1,10 @@
-import path from 'node:path';
 import { Umzug, SequelizeStorage } from 'umzug';
 import type { QueryInterface, Sequelize } from 'sequelize';
+import { migrations } from './migrations/index';
 
 export function migrator(sequelize: Sequelize) {
   return new Umzug<QueryInterface>({
-    migrations: {
-      glob: ['migrations/*.ts', { cwd: path.join(import.meta.dirname) }],
-    },
+    migrations: migrations.map(([name, m]) => ({ name, up: m.up, down: m.down })),
     context: sequelize.getQueryInterface(),
     storage: new SequelizeStorage({ sequelize, tableName: 'schema_migrations' }),
     logger: undefined,

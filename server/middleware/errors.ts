@@ -17,7 +17,7 @@ const STATUS: Record<string, number> = {
 };
 
 export const notFoundApi: RequestHandler = (req, res) => {
-  res.status(404).json({ error: { code: 'not_found', message: `No API route ${req.method} ${req.path}`, details: null } });
+  res.status(404).json({ error: { code: 'not_found', message: `No API route ${req.method} ${req.originalUrl.split("?")[0]}`, details: null } });
 };
 
 export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {

@@ -1,0 +1,46 @@
+// npm run -s select -- FILE.json
+// Reads { "supply": {...}, "loads": [...] }, prints { "results": [...], "panel": {...} }.
+// Exit 0 on success; 2 with { "errors": [{ "path", "message" }] } on invalid input, an unreadable
+// file or bad JSON; 1 with { "errors": [...] } when the rule files are invalid. Never a stack trace.
+
+import { readFileSync } from 'node:fs';
+import { DomainError, ValidationError } from '../../shared/errors';
+import { getSelector } from '../engine/rule-files';
+
+type CliError = { path: string; message: string };
+
+function finish(code: number, body: unknown): never {
+  process.stdout.write(`${JSON.stringify(body, null, 2)}\n`);
+  process.exit(code);
+}
+
+async function main(argv: string[]): Promise<void> {
+  const file = argv[0];
+  if (!file || argv.length > 1) {
+    finish(2, { errors: [{ path: '', message: 'usage: npm run -s select -- FILE.json' }] satisfies CliError[] });
+  }
+  let text: string;
+  try {
+    text = readFileSync(file, 'utf8');
+  } catch (e) {
+    const code = (e as NodeJS.ErrnoException).code;
+    finish(2, { errors: [{ path: '', message: `cannot read ${file}${code ? ` (${code})` : ''}` }] });
+  }
+  let input: unknown;
+  try {
+    input = JSON.parse(text);
+  } catch (e) {
+    finish(2, { errors: [{ path: '', message: `${file} is not valid JSON: ${(e as Error).message}` }] });
+  }
+  try {
+    const out = await getSelector().selectPanel(input as never);
+    finish(0, { results: out.results, panel: out.panel, codeEdition: out.codeEdition });
+  } catch (e) {
+    if (e instanceof ValidationError) finish(2, { errors: e.details });
+    if (e instanceof DomainError) finish(1, { errors: [{ path: '', message: e.message, code: e.code }] });
+    finish(1, { errors: [{ path: '', message: `internal error: ${(e as Error)?.message ?? String(e)}` }] });
+  }
+}
+
+process.on('uncaughtException', (e) => finish(1, { errors: [{ path: '', message: `internal error: ${e.message}` }] }));
+void main(process.argv.slice(2));
