@@ -1,6 +1,7 @@
 // Routes of the panel, catalogue and bill-of-materials modules, collected here so app.ts stays short.
 import type { AnyRoute } from './route-table';
+import { panelRoutes } from '../modules/panels/router';
 
 export function extraRoutes(): AnyRoute[] {
-  return [];
+  return [...panelRoutes];
 }

@@ -1,4 +1,10 @@
 // The migrations in order. Imported statically so that tsx, vitest and a bundler all load them alike.
 import * as m0001 from './0001-foundation';
+import * as m0002 from './0002-panel-rollup';
+import * as m0003 from './0003-catalogue-fields';
 
-export const migrations = [['0001-foundation', m0001]] as const;
+export const migrations = [
+  ['0001-foundation', m0001],
+  ['0002-panel-rollup', m0002],
+  ['0003-catalogue-fields', m0003],
+] as const;

@@ -14,6 +14,8 @@ export class CatalogueItem extends Model<InferAttributes<CatalogueItem>, InferCr
   declare labourHours: CreationOptional<number>;
   declare leadTimeDays: CreationOptional<number>;
   declare active: CreationOptional<boolean>;
+  declare unit: CreationOptional<string>;
+  declare terminations: CreationOptional<number>;
   declare version: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -32,6 +34,8 @@ export class CatalogueItem extends Model<InferAttributes<CatalogueItem>, InferCr
         labourHours: { type: DataTypes.DOUBLE, allowNull: false, defaultValue: 0 },
         leadTimeDays: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         active: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
+        unit: { type: DataTypes.STRING(10), allowNull: false, defaultValue: 'ea' },
+        terminations: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,

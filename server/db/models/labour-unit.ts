@@ -7,6 +7,7 @@ export class LabourUnit extends Model<InferAttributes<LabourUnit>, InferCreation
   declare key: string;
   declare label: string;
   declare hours: number;
+  declare per: CreationOptional<string>;
   declare version: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -18,6 +19,7 @@ export class LabourUnit extends Model<InferAttributes<LabourUnit>, InferCreation
         key: { type: DataTypes.STRING(60), allowNull: false },
         label: { type: DataTypes.STRING(200), allowNull: false },
         hours: { type: DataTypes.DOUBLE, allowNull: false },
+        per: { type: DataTypes.STRING(20), allowNull: false, defaultValue: 'each' },
         version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,

@@ -15,6 +15,9 @@ export class Panel extends Model<InferAttributes<Panel>, InferCreationAttributes
   declare markupPercent: CreationOptional<number>;
   declare labourRate: CreationOptional<number>;
   declare archivedAt: Date | null;
+  declare rollup: Record<string, unknown> | null;
+  declare submittedAt: Date | null;
+  declare bomGeneratedAt: CreationOptional<Date | null>;
   declare version: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -33,6 +36,9 @@ export class Panel extends Model<InferAttributes<Panel>, InferCreationAttributes
         markupPercent: { type: DataTypes.DOUBLE, allowNull: false, defaultValue: 15 },
         labourRate: { type: DataTypes.DOUBLE, allowNull: false, defaultValue: 85 },
         archivedAt: { type: DataTypes.DATE, allowNull: true },
+        rollup: { type: DataTypes.JSONB, allowNull: true },
+        submittedAt: { type: DataTypes.DATE, allowNull: true },
+        bomGeneratedAt: { type: DataTypes.DATE, allowNull: true },
         version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,

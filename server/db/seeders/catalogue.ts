@@ -1,4 +1,32 @@
+// Loads the generic catalogue (catalog/*.json) and the shop's labour units into an organisation.
+import fs from 'node:fs';
+import path from 'node:path';
 import type { Transaction } from 'sequelize';
+import { CatalogueFileSchema, LabourUnitsFileSchema, type CatalogueItem } from '../../../shared/schemas/catalogue';
+import { CatalogueItem as CatalogueRow } from '../models/catalogue-item';
+import { LabourUnit as LabourRow } from '../models/labour-unit';
+import { fromItem } from '../../modules/catalogue/repository';
 
-/** Loads catalog/*.json into the organisation's catalogue (filled in with the catalogue module). */
-export async function seedCatalogue(_organisationId: number, _transaction: Transaction) {}
+export const CATALOG_DIR = path.resolve(import.meta.dirname, '..', '..', '..', 'catalog');
+
+export function readSeedCatalogue(dir = CATALOG_DIR): CatalogueItem[] {
+  const items: CatalogueItem[] = [];
+  for (const f of fs.readdirSync(dir).filter((n) => n.endsWith('.json') && n !== 'labour-units.json').sort()) {
+    const parsed = CatalogueFileSchema.safeParse(JSON.parse(fs.readFileSync(path.join(dir, f), 'utf8')));
+    if (!parsed.success) throw new Error(`catalog/${f}: ${parsed.error.issues[0]?.message}`);
+    items.push(...parsed.data);
+  }
+  return items;
+}
+
+export function readSeedLabourUnits(dir = CATALOG_DIR) {
+  return LabourUnitsFileSchema.parse(JSON.parse(fs.readFileSync(path.join(dir, 'labour-units.json'), 'utf8')));
+}
+
+export async function seedCatalogue(organisationId: number, transaction: Transaction) {
+  await CatalogueRow.bulkCreate(readSeedCatalogue().map((i) => fromItem(organisationId, i)), { transaction });
+  await LabourRow.bulkCreate(
+    readSeedLabourUnits().map((u) => ({ organisationId, key: u.key, label: u.description, hours: u.hours, per: u.per })),
+    { transaction },
+  );
+}

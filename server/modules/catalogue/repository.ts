@@ -1,0 +1,50 @@
+import type { Transaction } from 'sequelize';
+import { CatalogueItem as CatalogueRow } from '../../db/models/catalogue-item';
+import { LabourUnit as LabourRow } from '../../db/models/labour-unit';
+import type { CatalogueItem, LabourUnit } from '../../../shared/schemas/catalogue';
+
+export function toItem(r: CatalogueRow): CatalogueItem {
+  return {
+    code: r.code,
+    description: r.description,
+    category: r.category as CatalogueItem['category'],
+    unit: r.unit as CatalogueItem['unit'],
+    ratings: r.ratings as CatalogueItem['ratings'],
+    sccrKa: r.sccrKa,
+    heatLossW: r.heatLossW,
+    unitCost: r.unitCost,
+    labourHours: r.labourHours,
+    terminations: r.terminations,
+    leadTimeDays: r.leadTimeDays,
+    active: r.active,
+  };
+}
+
+export function fromItem(organisationId: number, i: CatalogueItem) {
+  return {
+    organisationId,
+    code: i.code,
+    description: i.description,
+    category: i.category,
+    unit: i.unit,
+    ratings: i.ratings as Record<string, unknown>,
+    sccrKa: i.sccrKa,
+    heatLossW: i.heatLossW,
+    unitCost: i.unitCost,
+    labourHours: i.labourHours,
+    terminations: i.terminations,
+    leadTimeDays: i.leadTimeDays,
+    active: i.active,
+  };
+}
+
+/** The organisation's whole catalogue, in the shared shape (one query). */
+export async function catalogueFor(organisationId: number, transaction?: Transaction): Promise<CatalogueItem[]> {
+  const rows = await CatalogueRow.findAll({ where: { organisationId }, order: [['category', 'ASC'], ['code', 'ASC']], transaction });
+  return rows.map(toItem);
+}
+
+export async function labourUnitsFor(organisationId: number, transaction?: Transaction): Promise<LabourUnit[]> {
+  const rows = await LabourRow.findAll({ where: { organisationId }, order: [['key', 'ASC']], transaction });
+  return rows.map((r) => ({ key: r.key as LabourUnit['key'], description: r.label, hours: r.hours, per: r.per as LabourUnit['per'] }));
+}

@@ -1,0 +1,64 @@
+import { QueryTypes, type Transaction } from 'sequelize';
+import { db } from '../../db/sequelize';
+import { Panel } from '../../db/models/panel';
+import { Load } from '../../db/models/load';
+import { Job } from '../../db/models/job';
+import { Comment } from '../../db/models/comment';
+import { Revision } from '../../db/models/revision';
+import { User } from '../../db/models/user';
+import type { PanelSummary } from '../../../shared/schemas/panel';
+
+export async function listPanels(organisationId: number, jobId: number): Promise<PanelSummary[]> {
+  return db().query<PanelSummary>(
+    `select p.id, p.job_id as "jobId", p.name, p.description, p.mounting, p.status, p.revision_number as "revisionNumber",
+            p.archived_at as "archivedAt", p.version, p.updated_at as "updatedAt",
+            (select count(*)::int from loads l where l.panel_id = p.id) as "motorCount"
+       from panels p where p.organisation_id = :organisationId and p.job_id = :jobId
+      order by p.archived_at nulls first, p.name, p.id`,
+    { replacements: { organisationId, jobId }, type: QueryTypes.SELECT },
+  );
+}
+
+/** The panel with its job, in one query (the job supplies the supply data). */
+export async function findPanelWithJob(organisationId: number, id: number, transaction?: Transaction, lock = false) {
+  return Panel.findOne({
+    where: { organisationId, id },
+    include: [{ model: Job, as: 'job', required: true }],
+    transaction,
+    lock: lock && transaction ? { level: transaction.LOCK.UPDATE, of: Panel } : undefined,
+  });
+}
+
+export async function loadsOf(panelId: number, transaction?: Transaction) {
+  return Load.findAll({ where: { panelId }, order: [['position', 'ASC'], ['id', 'ASC']], transaction });
+}
+
+export async function commentsOf(panelId: number) {
+  return Comment.findAll({ where: { panelId }, include: [{ model: User, as: 'author', attributes: ['name'] }], order: [['id', 'ASC']] });
+}
+
+export async function revisionsOf(panelId: number) {
+  return db().query<{ number: number; approvedAt: string; approvedBy: string | null }>(
+    `select r.number, r.approved_at as "approvedAt", u.name as "approvedBy"
+       from revisions r left join users u on u.id = r.approved_by where r.panel_id = :panelId order by r.number`,
+    { replacements: { panelId }, type: QueryTypes.SELECT },
+  );
+}
+
+export async function findLoad(organisationId: number, id: number, transaction?: Transaction) {
+  return Load.findOne({ where: { organisationId, id }, transaction });
+}
+
+export async function bumpPanel(organisationId: number, id: number, version: number, values: Record<string, unknown>, transaction?: Transaction) {
+  const [count] = await Panel.update({ ...values, version: version + 1 }, { where: { organisationId, id, version }, transaction });
+  return count;
+}
+
+export async function usersWithRole(organisationId: number, role: string) {
+  return db().query<{ email: string; name: string }>(`select email, name from users where organisation_id = :organisationId and active and :role = any(roles)`, {
+    replacements: { organisationId, role },
+    type: QueryTypes.SELECT,
+  });
+}
+
+export { Panel, Load, Revision, Comment };

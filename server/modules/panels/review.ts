@@ -1,0 +1,119 @@
+// Sign-off: Draft → In review → Signed off (a frozen revision R0, R1 …) or Returned.
+import { db } from '../../db/sequelize';
+import type { CurrentUser } from '../../../shared/schemas/auth';
+import type { PanelState } from '../../../shared/schemas/panel';
+import type { BomLine } from '../../../shared/schemas/catalogue';
+import { computeTotals, diffBoms } from '../../../shared/calc/bom';
+import { ConflictError, NotFoundError, ValidationError } from '../../../shared/errors';
+import * as repo from './repository';
+import { loadView, panelDetail, requirePanel } from './service';
+import { recordActivity } from '../activity/service';
+import { regenerateBom } from '../bom/service';
+import { sendMail } from '../mail/mailer';
+import { env } from '../../config/env';
+
+function link(panelId: number, jobId: number) {
+  return `${env().APP_URL}/jobs/${jobId}/panels/${panelId}`;
+}
+
+export async function submitForReview(actor: CurrentUser, panelId: number, version: number, comment: string) {
+  const result = await db().transaction(async (t) => {
+    const p = await requirePanel(actor, panelId, t, true);
+    if (p.version !== version) throw new ConflictError(`Someone else changed panel ${p.name} since you opened it: reload and try again`);
+    if (!['draft', 'returned'].includes(p.status)) throw new ConflictError(`Panel ${p.name} is ${p.status.replace('_', ' ')}: only a draft or returned panel can be submitted`);
+    const loads = await repo.loadsOf(p.id, t);
+    if (loads.length === 0) throw new ValidationError('Add at least one motor before submitting', [{ path: 'loads', message: 'no motors' }]);
+    const broken = loads.map(loadView).filter((l) => !l.selection || l.selection.errors.length > 0);
+    if (broken.length) throw new ValidationError(`Fix the motors with errors first: ${broken.map((l) => l.tag).join(', ')}`, broken.map((l) => ({ path: `loads.${l.tag}`, message: l.selection?.errors.join('; ') ?? 'no selection' })));
+    await repo.bumpPanel(actor.organisationId, p.id, p.version, { status: 'in_review', submittedAt: new Date() }, t);
+    if (comment) await repo.Comment.create({ organisationId: actor.organisationId, panelId: p.id, loadId: null, userId: actor.id, body: comment }, { transaction: t });
+    await recordActivity(actor, { entity: 'panel', entityId: p.id, jobId: p.jobId, panelId: p.id, action: 'submitted', summary: `Submitted ${p.name} for sign-off (${loads.length} motors)` }, t);
+    return p;
+  });
+  const engineers = await repo.usersWithRole(actor.organisationId, 'engineer');
+  await sendMail(
+    engineers.map((e) => e.email),
+    `Sign-off requested: ${result.job.number} ${result.name}`,
+    `${actor.name} submitted panel ${result.name} of job ${result.job.number} for sign-off.\n\n${comment ? `Note: ${comment}\n\n` : ''}Review it: ${link(result.id, result.jobId)}\n`,
+  );
+  return panelDetail(actor, panelId);
+}
+
+export async function returnPanel(actor: CurrentUser, panelId: number, version: number, comment: string) {
+  if (!comment) throw new ValidationError('Say what must change when returning a panel', [{ path: 'body.comment', message: 'required when returning' }]);
+  const p = await db().transaction(async (t) => {
+    const p = await requirePanel(actor, panelId, t, true);
+    if (p.version !== version) throw new ConflictError(`Someone else changed panel ${p.name} since you opened it: reload and try again`);
+    if (p.status !== 'in_review') throw new ConflictError(`Panel ${p.name} is not in review`);
+    await repo.bumpPanel(actor.organisationId, p.id, p.version, { status: 'returned' }, t);
+    await repo.Comment.create({ organisationId: actor.organisationId, panelId: p.id, loadId: null, userId: actor.id, body: `Returned: ${comment}` }, { transaction: t });
+    await recordActivity(actor, { entity: 'panel', entityId: p.id, jobId: p.jobId, panelId: p.id, action: 'returned', summary: `Returned ${p.name}: ${comment.slice(0, 120)}` }, t);
+    return p;
+  });
+  const designers = await repo.usersWithRole(actor.organisationId, 'designer');
+  await sendMail(designers.map((d) => d.email), `Returned: ${p.job.number} ${p.name}`, `${actor.name} returned panel ${p.name}.\n\n${comment}\n\n${link(p.id, p.jobId)}\n`);
+  return panelDetail(actor, panelId);
+}
+
+/** Signs off: rebuilds the bill of materials and freezes selections and BOM as the next revision, in one transaction. */
+export async function approvePanel(actor: CurrentUser, panelId: number, version: number, comment: string, opts: { failAfterFreeze?: boolean } = {}) {
+  const p = await db().transaction(async (t) => {
+    const p = await requirePanel(actor, panelId, t, true);
+    if (p.version !== version) throw new ConflictError(`Someone else changed panel ${p.name} since you opened it: reload and try again`);
+    if (p.status !== 'in_review') throw new ConflictError(`Panel ${p.name} is not in review`);
+    const lines = await regenerateBom(actor.organisationId, p, t);
+    const loads = (await repo.loadsOf(p.id, t)).map(loadView);
+    const number = p.revisionNumber === null ? 0 : p.revisionNumber + 1;
+    const snapshot = {
+      panel: { name: p.name, mounting: p.mounting, markupPercent: p.markupPercent, labourRate: p.labourRate },
+      job: { number: p.job.number, supplyVolts: p.job.supplyVolts, supplyPhases: p.job.supplyPhases, supplyHz: p.job.supplyHz, availableFaultKa: p.job.availableFaultKa, ambientC: p.job.ambientC, codeEdition: p.job.codeEdition },
+      rollup: p.rollup,
+      loads,
+      bom: lines,
+      totals: computeTotals(lines, p.markupPercent, p.labourRate),
+      comment,
+    };
+    await repo.Revision.create({ organisationId: actor.organisationId, panelId: p.id, number, snapshot, approvedBy: actor.id, approvedAt: new Date() }, { transaction: t });
+    if (opts.failAfterFreeze) throw new Error('failure injected after the revision was written');
+    await repo.bumpPanel(actor.organisationId, p.id, p.version, { status: 'signed_off', revisionNumber: number, bomGeneratedAt: new Date() }, t);
+    await recordActivity(actor, { entity: 'panel', entityId: p.id, jobId: p.jobId, panelId: p.id, action: 'signed-off', summary: `Signed off ${p.name} as R${number}${comment ? `: ${comment.slice(0, 100)}` : ''}` }, t);
+    return Object.assign(p, { revisionNumber: number });
+  });
+  const designers = await repo.usersWithRole(actor.organisationId, 'designer');
+  const estimators = await repo.usersWithRole(actor.organisationId, 'estimator');
+  await sendMail(
+    [...new Set([...designers, ...estimators].map((u) => u.email))],
+    `Signed off: ${p.job.number} ${p.name} R${p.revisionNumber}`,
+    `${actor.name} signed off panel ${p.name} as revision R${p.revisionNumber}.\n\n${comment ? `${comment}\n\n` : ''}${link(p.id, p.jobId)}\n`,
+  );
+  return panelDetail(actor, panelId);
+}
+
+export async function getRevision(actor: CurrentUser, panelId: number, number: number) {
+  await requirePanel(actor, panelId);
+  const r = await repo.Revision.findOne({ where: { organisationId: actor.organisationId, panelId, number } });
+  if (!r) throw new NotFoundError(`Revision R${number}`);
+  return { number: r.number, approvedAt: r.approvedAt, snapshot: r.snapshot };
+}
+
+/** The change report between two revisions: lines added, removed, changed, and the cost delta. */
+export async function compareRevisions(actor: CurrentUser, panelId: number, a: number, b: number) {
+  const [ra, rb] = await Promise.all([getRevision(actor, panelId, a), getRevision(actor, panelId, b)]);
+  const la = (ra.snapshot as { bom: BomLine[] }).bom;
+  const lb = (rb.snapshot as { bom: BomLine[] }).bom;
+  const ta = (ra.snapshot as { totals: { sell: number; materialCost: number; labourHours: number } }).totals;
+  const tb = (rb.snapshot as { totals: { sell: number; materialCost: number; labourHours: number } }).totals;
+  const loadsA = new Map(((ra.snapshot as { loads: Array<{ tag: string; answers: unknown }> }).loads ?? []).map((l) => [l.tag, JSON.stringify(l.answers)]));
+  const loadsB = new Map(((rb.snapshot as { loads: Array<{ tag: string; answers: unknown }> }).loads ?? []).map((l) => [l.tag, JSON.stringify(l.answers)]));
+  return {
+    from: a,
+    to: b,
+    bom: diffBoms(la, lb),
+    totals: { from: ta, to: tb, sellDelta: Math.round((tb.sell - ta.sell) * 100) / 100, materialDelta: Math.round((tb.materialCost - ta.materialCost) * 100) / 100 },
+    motors: {
+      added: [...loadsB.keys()].filter((k) => !loadsA.has(k)),
+      removed: [...loadsA.keys()].filter((k) => !loadsB.has(k)),
+      changed: [...loadsB.keys()].filter((k) => loadsA.has(k) && loadsA.get(k) !== loadsB.get(k)),
+    },
+  };
+}

@@ -1,0 +1,151 @@
+import { z } from 'zod';
+import { defineRoute } from '../../http/route-table';
+import { IdParamSchema } from '../../../shared/schemas/auth';
+import { BulkEditSchema, CommentInputSchema, PanelInputSchema, PanelUpdateSchema, ReviewActionSchema } from '../../../shared/schemas/panel';
+import { OverridesPutSchema } from '../../../shared/schemas/override';
+import * as service from './service';
+import * as review from './review';
+
+const ALL = ['admin', 'designer', 'estimator', 'engineer'] as const;
+const DESIGN = ['admin', 'designer'] as const;
+const ENGINEER = ['engineer'] as const;
+const COMMENT = ['admin', 'designer', 'engineer', 'estimator'] as const;
+
+const PanelId = z.object({ panelId: z.coerce.number().int().positive() });
+const LoadId = z.object({ loadId: z.coerce.number().int().positive() });
+const LoadBody = z.object({ answers: z.record(z.string(), z.unknown()), version: z.number().int().min(0).optional() });
+
+export const panelRoutes = [
+  defineRoute({ method: 'get', path: '/api/jobs/:id/panels', access: ALL, summary: 'Panels of a job', params: IdParamSchema, handler: ({ user, params }) => service.listPanels(user, params.id) }),
+  defineRoute({
+    method: 'post',
+    path: '/api/jobs/:id/panels',
+    access: DESIGN,
+    summary: 'New panel',
+    params: IdParamSchema,
+    body: PanelInputSchema,
+    handler: ({ user, params, body }) => service.createPanel(user, params.id, body),
+  }),
+  defineRoute({ method: 'get', path: '/api/panels/:panelId', access: ALL, summary: 'A panel with its motors, selections, comments and revisions', params: PanelId, handler: ({ user, params }) => service.panelDetail(user, params.panelId) }),
+  defineRoute({
+    method: 'patch',
+    path: '/api/panels/:panelId',
+    access: ['admin', 'designer', 'estimator'],
+    summary: 'Change panel settings (estimators: markup and labour rate)',
+    params: PanelId,
+    body: PanelUpdateSchema,
+    handler: ({ user, params, body }) => {
+      const { version, ...changes } = body;
+      if (!user.roles.some((r) => r === 'admin' || r === 'designer')) {
+        for (const k of Object.keys(changes)) if (k !== 'markupPercent' && k !== 'labourRate') service.assertRole(user, 'admin', 'designer');
+      }
+      return service.updatePanel(user, params.panelId, changes, version);
+    },
+  }),
+  defineRoute({ method: 'post', path: '/api/panels/:panelId/duplicate', access: DESIGN, summary: 'Duplicate a panel with its motors', params: PanelId, handler: ({ user, params }) => service.duplicatePanel(user, params.panelId) }),
+  defineRoute({
+    method: 'post',
+    path: '/api/panels/:panelId/archive',
+    access: DESIGN,
+    summary: 'Archive or restore a panel',
+    params: PanelId,
+    body: z.object({ archived: z.boolean(), version: z.number().int().min(0) }),
+    status: 200,
+    handler: ({ user, params, body }) => service.archivePanel(user, params.panelId, body.archived, body.version),
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/api/panels/:panelId/loads',
+    access: DESIGN,
+    summary: 'Add a motor',
+    params: PanelId,
+    body: z.object({ answers: z.record(z.string(), z.unknown()), panelVersion: z.number().int().min(0).optional() }),
+    handler: ({ user, params, body }) => service.addLoad(user, params.panelId, body.answers, body.panelVersion ?? null),
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/api/panels/:panelId/loads/bulk-edit',
+    access: DESIGN,
+    summary: 'Change shared answers on several motors',
+    params: PanelId,
+    body: BulkEditSchema,
+    status: 200,
+    handler: ({ user, params, body }) => service.bulkEdit(user, params.panelId, body.loadIds, body.changes, body.panelVersion),
+  }),
+  defineRoute({
+    method: 'put',
+    path: '/api/loads/:loadId',
+    access: DESIGN,
+    summary: "Change a motor's answers",
+    params: LoadId,
+    body: LoadBody.extend({ version: z.number().int().min(0) }),
+    handler: ({ user, params, body }) => service.updateLoad(user, params.loadId, body.answers, body.version),
+  }),
+  defineRoute({ method: 'post', path: '/api/loads/:loadId/copy', access: DESIGN, summary: 'Copy a motor', params: LoadId, handler: ({ user, params }) => service.copyLoad(user, params.loadId) }),
+  defineRoute({ method: 'delete', path: '/api/loads/:loadId', access: DESIGN, summary: 'Remove a motor', params: LoadId, handler: ({ user, params }) => service.deleteLoad(user, params.loadId) }),
+  defineRoute({
+    method: 'put',
+    path: '/api/loads/:loadId/overrides',
+    access: DESIGN,
+    summary: "Set a motor's overrides, each with a justification",
+    params: LoadId,
+    body: OverridesPutSchema,
+    handler: ({ user, params, body }) => service.setOverrides(user, params.loadId, body.overrides, body.version),
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/api/panels/:panelId/comments',
+    access: COMMENT,
+    summary: 'Comment on a panel or one of its motors',
+    params: PanelId,
+    body: CommentInputSchema,
+    handler: ({ user, params, body }) => service.addComment(user, params.panelId, body.body, body.loadId),
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/api/panels/:panelId/submit',
+    access: DESIGN,
+    summary: 'Submit for sign-off',
+    params: PanelId,
+    body: ReviewActionSchema,
+    status: 200,
+    handler: ({ user, params, body }) => review.submitForReview(user, params.panelId, body.version, body.comment),
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/api/panels/:panelId/return',
+    access: ENGINEER,
+    summary: 'Return to the designer with a comment',
+    params: PanelId,
+    body: ReviewActionSchema,
+    status: 200,
+    handler: ({ user, params, body }) => review.returnPanel(user, params.panelId, body.version, body.comment),
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/api/panels/:panelId/approve',
+    access: ENGINEER,
+    summary: 'Sign off: freeze the next revision',
+    params: PanelId,
+    body: ReviewActionSchema,
+    status: 200,
+    handler: ({ user, params, body }) => review.approvePanel(user, params.panelId, body.version, body.comment),
+  }),
+  defineRoute({
+    method: 'get',
+    path: '/api/panels/:panelId/revisions/:number',
+    access: ALL,
+    summary: 'One frozen revision',
+    params: PanelId.extend({ number: z.coerce.number().int().min(0) }),
+    handler: ({ user, params }) => review.getRevision(user, params.panelId, params.number),
+  }),
+  defineRoute({
+    method: 'get',
+    path: '/api/panels/:panelId/change-report',
+    access: ALL,
+    summary: 'Change report between two revisions',
+    params: PanelId,
+    query: z.object({ from: z.coerce.number().int().min(0), to: z.coerce.number().int().min(0) }),
+    handler: ({ user, params, query }) => review.compareRevisions(user, params.panelId, query.from, query.to),
+  }),
+];

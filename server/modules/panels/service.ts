@@ -1,0 +1,336 @@
+import type { Transaction } from 'sequelize';
+import { db } from '../../db/sequelize';
+import type { CurrentUser } from '../../../shared/schemas/auth';
+import type { CommentView, LoadView, PanelDetail, PanelState } from '../../../shared/schemas/panel';
+import type { LoadInput } from '../../../shared/schemas/load';
+import { LoadSchema } from '../../../shared/schemas/load';
+import type { LoadSelection, PanelRollup } from '../../../shared/schemas/selection';
+import type { OverrideInput, StoredOverride } from '../../../shared/schemas/override';
+import { applyOverrides, checkOverride } from '../../../shared/calc/overrides';
+import { ConflictError, ForbiddenError, NotFoundError, ValidationError, zodIssues } from '../../../shared/errors';
+import * as repo from './repository';
+import { selectAll, selectOne } from './selection';
+import { recordActivity } from '../activity/service';
+import { getJob } from '../jobs/service';
+import type { Panel } from '../../db/models/panel';
+import type { Load } from '../../db/models/load';
+import type { Job } from '../../db/models/job';
+
+const EDITABLE: PanelState[] = ['draft', 'returned', 'signed_off'];
+
+export function loadView(l: Load): LoadView {
+  const selection = (l.selection ?? null) as LoadSelection | null;
+  const overrides = (l.overrides ?? []) as unknown as StoredOverride[];
+  return {
+    id: l.id,
+    tag: l.tag,
+    position: l.position,
+    answers: l.answers,
+    selection,
+    effective: selection ? applyOverrides(selection, overrides) : null,
+    overrides,
+    version: l.version,
+  };
+}
+
+function jobPart(j: Job) {
+  return {
+    id: j.id,
+    number: j.number,
+    name: j.name,
+    supplyVolts: j.supplyVolts,
+    supplyPhases: j.supplyPhases,
+    supplyHz: j.supplyHz,
+    availableFaultKa: j.availableFaultKa,
+    ambientC: j.ambientC,
+    codeEdition: j.codeEdition,
+  };
+}
+
+export async function listPanels(actor: CurrentUser, jobId: number) {
+  await getJob(actor, jobId);
+  return repo.listPanels(actor.organisationId, jobId);
+}
+
+export async function requirePanel(actor: CurrentUser, id: number, transaction?: Transaction, lock = false): Promise<Panel & { job: Job }> {
+  const p = await repo.findPanelWithJob(actor.organisationId, id, transaction, lock);
+  if (!p || !p.job) throw new NotFoundError('Panel');
+  return p as Panel & { job: Job };
+}
+
+/** Everything a panel page shows, in four queries whatever the motor count. */
+export async function panelDetail(actor: CurrentUser, id: number): Promise<PanelDetail> {
+  const p = await requirePanel(actor, id);
+  const [loads, comments, revisions] = await Promise.all([repo.loadsOf(p.id), repo.commentsOf(p.id), repo.revisionsOf(p.id)]);
+  return {
+    id: p.id,
+    jobId: p.jobId,
+    name: p.name,
+    description: p.description,
+    mounting: p.mounting,
+    status: p.status as PanelState,
+    revisionNumber: p.revisionNumber,
+    motorCount: loads.length,
+    archivedAt: p.archivedAt ? p.archivedAt.toISOString() : null,
+    version: p.version,
+    updatedAt: p.updatedAt.toISOString(),
+    markupPercent: p.markupPercent,
+    labourRate: p.labourRate,
+    rollup: (p.rollup ?? null) as PanelRollup | null,
+    job: jobPart(p.job),
+    loads: loads.map(loadView),
+    comments: comments.map(
+      (c): CommentView => ({ id: c.id, loadId: c.loadId, body: c.body, author: (c as unknown as { author?: { name: string } }).author?.name ?? null, at: c.createdAt.toISOString() }),
+    ),
+    revisions: revisions.map((r) => ({ ...r, approvedAt: new Date(r.approvedAt).toISOString() })),
+  };
+}
+
+export async function createPanel(actor: CurrentUser, jobId: number, values: { name: string; description: string; mounting: string; markupPercent: number; labourRate: number }) {
+  const job = await getJob(actor, jobId);
+  const p = await repo.Panel.create({ ...values, organisationId: actor.organisationId, jobId: job.id, revisionNumber: null, archivedAt: null, rollup: null, submittedAt: null });
+  await recordActivity(actor, { entity: 'panel', entityId: p.id, jobId, panelId: p.id, action: 'created', summary: `Created panel ${p.name}` });
+  return panelDetail(actor, p.id);
+}
+
+/**
+ * Opens a change to a panel inside a transaction: locks the panel row, refuses while it is in review,
+ * checks the version the client saw, and turns a signed-off panel into a new draft revision.
+ */
+async function changePanel<T>(
+  actor: CurrentUser,
+  panelId: number,
+  panelVersion: number | null,
+  what: string,
+  fn: (p: Panel & { job: Job }, t: Transaction) => Promise<T>,
+): Promise<T> {
+  return db().transaction(async (t) => {
+    const p = await requirePanel(actor, panelId, t, true);
+    if (!EDITABLE.includes(p.status as PanelState)) {
+      throw new ConflictError(`Panel ${p.name} is in review: the engineer must return it before it can change`);
+    }
+    if (panelVersion !== null && panelVersion !== p.version) {
+      throw new ConflictError(`Someone else changed panel ${p.name} since you opened it: reload to see their change, then apply yours again`);
+    }
+    if (p.status === 'signed_off') {
+      await recordActivity(actor, { entity: 'panel', entityId: p.id, jobId: p.jobId, panelId: p.id, action: 'reopened', summary: `Opened a new draft after R${p.revisionNumber} (${what})` }, t);
+      p.status = 'draft';
+    }
+    const out = await fn(p, t);
+    await repo.bumpPanel(actor.organisationId, p.id, p.version, { status: p.status, ...(p.changed('rollup') ? { rollup: p.rollup } : {}) }, t);
+    return out;
+  });
+}
+
+/** Recomputes the panel roll-up from every motor's answers (the same selector as the browser). */
+async function refreshRollup(p: Panel & { job: Job }, t: Transaction) {
+  const loads = await repo.loadsOf(p.id, t);
+  const out = await selectAll(p.job, loads.map((l) => l.answers as LoadInput));
+  p.rollup = out ? (out.panel as unknown as Record<string, unknown>) : null;
+  p.changed('rollup', true);
+}
+
+function parseAnswers(raw: unknown, prefix = 'body.answers'): LoadInput {
+  const r = LoadSchema.safeParse(raw);
+  if (!r.success) {
+    const issues = zodIssues(r.error.issues).map((i) => ({ ...i, path: i.path ? `${prefix}.${i.path}` : prefix }));
+    throw new ValidationError(`The motor's answers have ${issues.length} problem${issues.length === 1 ? '' : 's'}`, issues);
+  }
+  return raw as LoadInput;
+}
+
+async function tagTaken(panelId: number, tag: string, t: Transaction, exceptId?: number) {
+  const rows = await repo.loadsOf(panelId, t);
+  return rows.some((l) => l.tag.toLowerCase() === tag.toLowerCase() && l.id !== exceptId);
+}
+
+export async function addLoad(actor: CurrentUser, panelId: number, answers: unknown, panelVersion: number | null) {
+  const input = parseAnswers(answers);
+  return changePanel(actor, panelId, panelVersion, `added ${input.tag}`, async (p, t) => {
+    if (await tagTaken(p.id, input.tag, t)) throw new ValidationError(`Tag ${input.tag} is already on this panel`, [{ path: 'body.answers.tag', message: 'already on this panel' }]);
+    const selection = await selectOne(p.job, input);
+    const position = (await repo.Load.max<number, Load>('position', { where: { panelId: p.id }, transaction: t })) ?? 0;
+    const l = await repo.Load.create(
+      { organisationId: actor.organisationId, panelId: p.id, tag: input.tag, position: position + 1, answers: input as Record<string, unknown>, selection: selection as unknown as Record<string, unknown>, overrides: [] },
+      { transaction: t },
+    );
+    await refreshRollup(p, t);
+    await recordActivity(actor, { entity: 'load', entityId: l.id, jobId: p.jobId, panelId: p.id, action: 'added', summary: `Added motor ${input.tag} to ${p.name}` }, t);
+    return loadView(l);
+  });
+}
+
+export async function addLoads(actor: CurrentUser, panelId: number, answersList: LoadInput[], t: Transaction, p: Panel & { job: Job }) {
+  const existing = await repo.loadsOf(p.id, t);
+  const tags = new Set(existing.map((l) => l.tag.toLowerCase()));
+  let position = existing.reduce((m, l) => Math.max(m, l.position), 0);
+  const out = await selectAll(p.job, answersList);
+  const rows = answersList.map((a, i) => {
+    if (tags.has(a.tag.toLowerCase())) throw new ValidationError(`Tag ${a.tag} is already on this panel`, [{ path: `rows[${i}].tag`, message: 'already on this panel' }]);
+    tags.add(a.tag.toLowerCase());
+    return { organisationId: actor.organisationId, panelId: p.id, tag: a.tag, position: ++position, answers: a as Record<string, unknown>, selection: out!.results[i] as unknown as Record<string, unknown>, overrides: [] };
+  });
+  await repo.Load.bulkCreate(rows, { transaction: t });
+  await refreshRollup(p, t);
+  return rows.length;
+}
+
+export { changePanel };
+
+async function requireLoad(actor: CurrentUser, loadId: number) {
+  const l = await repo.findLoad(actor.organisationId, loadId);
+  if (!l) throw new NotFoundError('Motor');
+  return l;
+}
+
+export async function updateLoad(actor: CurrentUser, loadId: number, answers: unknown, version: number) {
+  const input = parseAnswers(answers);
+  const found = await requireLoad(actor, loadId);
+  return changePanel(actor, found.panelId, null, `changed ${input.tag}`, async (p, t) => {
+    const l = (await repo.findLoad(actor.organisationId, loadId, t))!;
+    if (l.version !== version) throw new ConflictError(`Someone else changed motor ${l.tag} since you opened it: reload to see their change, then apply yours again`);
+    if (input.tag !== l.tag && (await tagTaken(p.id, input.tag, t, l.id))) throw new ValidationError(`Tag ${input.tag} is already on this panel`, [{ path: 'body.answers.tag', message: 'already on this panel' }]);
+    const selection = await selectOne(p.job, input);
+    const diff: Record<string, unknown> = {};
+    for (const k of new Set([...Object.keys(l.answers), ...Object.keys(input)])) {
+      const a = JSON.stringify((l.answers as Record<string, unknown>)[k]);
+      const b = JSON.stringify((input as Record<string, unknown>)[k]);
+      if (a !== b) diff[k] = { from: (l.answers as Record<string, unknown>)[k] ?? null, to: (input as Record<string, unknown>)[k] ?? null };
+    }
+    const [count] = await repo.Load.update(
+      { tag: input.tag, answers: input as Record<string, unknown>, selection: selection as unknown as Record<string, unknown>, version: version + 1 },
+      { where: { id: l.id, version }, transaction: t },
+    );
+    if (count === 0) throw new ConflictError(`Someone else changed motor ${l.tag}: reload and apply your change again`);
+    await refreshRollup(p, t);
+    await recordActivity(actor, { entity: 'load', entityId: l.id, jobId: p.jobId, panelId: p.id, action: 'changed', summary: `Changed motor ${input.tag}: ${Object.keys(diff).join(', ') || 'no answers'}`, diff }, t);
+    return loadView((await repo.findLoad(actor.organisationId, loadId, t))!);
+  });
+}
+
+export async function copyLoad(actor: CurrentUser, loadId: number) {
+  const l = await requireLoad(actor, loadId);
+  const siblings = await repo.loadsOf(l.panelId);
+  const tags = new Set(siblings.map((s) => s.tag.toLowerCase()));
+  let n = 2;
+  let tag = `${l.tag}-${n}`;
+  while (tags.has(tag.toLowerCase())) tag = `${l.tag}-${++n}`;
+  return addLoad(actor, l.panelId, { ...l.answers, tag: tag.slice(0, 40) }, null);
+}
+
+export async function deleteLoad(actor: CurrentUser, loadId: number) {
+  const l = await requireLoad(actor, loadId);
+  await changePanel(actor, l.panelId, null, `removed ${l.tag}`, async (p, t) => {
+    await repo.Load.destroy({ where: { id: l.id }, transaction: t });
+    await refreshRollup(p, t);
+    await recordActivity(actor, { entity: 'load', entityId: l.id, jobId: p.jobId, panelId: p.id, action: 'removed', summary: `Removed motor ${l.tag} from ${p.name}` }, t);
+  });
+}
+
+export async function bulkEdit(actor: CurrentUser, panelId: number, loadIds: number[], changes: Record<string, unknown>, panelVersion: number) {
+  return changePanel(actor, panelId, panelVersion, 'bulk edit', async (p, t) => {
+    const loads = (await repo.loadsOf(p.id, t)).filter((l) => loadIds.includes(l.id));
+    if (loads.length !== loadIds.length) throw new NotFoundError('One of the motors');
+    const inputs = loads.map((l, i) => parseAnswers({ ...l.answers, ...changes }, `loads[${i}]`));
+    const out = await selectAll(p.job, inputs);
+    for (let i = 0; i < loads.length; i++) {
+      await repo.Load.update(
+        { answers: inputs[i] as Record<string, unknown>, selection: out!.results[i] as unknown as Record<string, unknown>, version: loads[i].version + 1 },
+        { where: { id: loads[i].id }, transaction: t },
+      );
+    }
+    await refreshRollup(p, t);
+    await recordActivity(actor, { entity: 'panel', entityId: p.id, jobId: p.jobId, panelId: p.id, action: 'bulk-edit', summary: `Changed ${Object.keys(changes).join(', ')} on ${loads.length} motors`, diff: changes }, t);
+    return { updated: loads.length };
+  });
+}
+
+export async function setOverrides(actor: CurrentUser, loadId: number, overrides: OverrideInput[], version: number) {
+  const found = await requireLoad(actor, loadId);
+  return changePanel(actor, found.panelId, null, `overrides on ${found.tag}`, async (p, t) => {
+    const l = (await repo.findLoad(actor.organisationId, loadId, t))!;
+    if (l.version !== version) throw new ConflictError(`Someone else changed motor ${l.tag}: reload and apply your change again`);
+    const sel = l.selection as unknown as LoadSelection | null;
+    if (!sel) throw new ValidationError('This motor has no selection to override');
+    const fields = new Set<string>();
+    const previous = new Map(((l.overrides ?? []) as unknown as StoredOverride[]).map((o) => [o.field, o]));
+    const stored: StoredOverride[] = overrides.map((o, i) => {
+      if (fields.has(o.field)) throw new ValidationError(`${o.field} is overridden twice`, [{ path: `body.overrides[${i}].field`, message: 'duplicate' }]);
+      fields.add(o.field);
+      const warnings = checkOverride(sel, o, i);
+      const [a, b] = o.field.split('.');
+      const was = (sel as unknown as Record<string, Record<string, unknown>>)[a]?.[b] ?? null;
+      const prev = previous.get(o.field);
+      const same = prev && prev.value === o.value && prev.justification === o.justification;
+      return { ...o, was, warnings, by: same ? prev.by : actor.name, at: same ? prev.at : new Date().toISOString() };
+    });
+    await repo.Load.update({ overrides: stored as unknown as Array<Record<string, unknown>>, version: version + 1 }, { where: { id: l.id }, transaction: t });
+    await recordActivity(
+      actor,
+      { entity: 'load', entityId: l.id, jobId: p.jobId, panelId: p.id, action: 'override', summary: `Overrides on ${l.tag}: ${stored.map((o) => `${o.field} = ${o.value}`).join('; ') || 'none'}`, diff: { overrides: stored } },
+      t,
+    );
+    return loadView((await repo.findLoad(actor.organisationId, loadId, t))!);
+  });
+}
+
+export async function updatePanel(actor: CurrentUser, panelId: number, changes: Record<string, unknown>, version: number) {
+  await changePanel(actor, panelId, version, 'panel settings', async (p, t) => {
+    await repo.Panel.update(changes, { where: { id: p.id }, transaction: t });
+    await recordActivity(actor, { entity: 'panel', entityId: p.id, jobId: p.jobId, panelId: p.id, action: 'updated', summary: `Changed panel ${p.name}: ${Object.keys(changes).join(', ')}`, diff: changes }, t);
+  });
+  return panelDetail(actor, panelId);
+}
+
+export async function duplicatePanel(actor: CurrentUser, panelId: number) {
+  const src = await requirePanel(actor, panelId);
+  const loads = await repo.loadsOf(src.id);
+  const id = await db().transaction(async (t) => {
+    const p = await repo.Panel.create(
+      {
+        organisationId: actor.organisationId,
+        jobId: src.jobId,
+        name: `${src.name} (copy)`.slice(0, 200),
+        description: src.description,
+        mounting: src.mounting,
+        markupPercent: src.markupPercent,
+        labourRate: src.labourRate,
+        revisionNumber: null,
+        archivedAt: null,
+        rollup: src.rollup,
+        submittedAt: null,
+      },
+      { transaction: t },
+    );
+    await repo.Load.bulkCreate(
+      loads.map((l) => ({ organisationId: actor.organisationId, panelId: p.id, tag: l.tag, position: l.position, answers: l.answers, selection: l.selection, overrides: l.overrides })),
+      { transaction: t },
+    );
+    await recordActivity(actor, { entity: 'panel', entityId: p.id, jobId: src.jobId, panelId: p.id, action: 'duplicated', summary: `Duplicated panel ${src.name} with ${loads.length} motors` }, t);
+    return p.id;
+  });
+  return panelDetail(actor, id);
+}
+
+export async function archivePanel(actor: CurrentUser, panelId: number, archived: boolean, version: number) {
+  const p = await requirePanel(actor, panelId);
+  const count = await repo.bumpPanel(actor.organisationId, p.id, version, { archivedAt: archived ? new Date() : null });
+  if (count === 0) throw new ConflictError(`Someone else changed panel ${p.name}: reload and try again`);
+  await recordActivity(actor, { entity: 'panel', entityId: p.id, jobId: p.jobId, panelId: p.id, action: archived ? 'archived' : 'restored', summary: `${archived ? 'Archived' : 'Restored'} panel ${p.name}` });
+  return panelDetail(actor, panelId);
+}
+
+export async function addComment(actor: CurrentUser, panelId: number, body: string, loadId: number | null) {
+  const p = await requirePanel(actor, panelId);
+  if (loadId !== null) {
+    const l = await repo.findLoad(actor.organisationId, loadId);
+    if (!l || l.panelId !== p.id) throw new ValidationError('That motor is not on this panel', [{ path: 'body.loadId', message: 'not on this panel' }]);
+  }
+  const c = await repo.Comment.create({ organisationId: actor.organisationId, panelId: p.id, loadId, userId: actor.id, body });
+  await recordActivity(actor, { entity: 'comment', entityId: c.id, jobId: p.jobId, panelId: p.id, action: 'commented', summary: `Commented on ${p.name}: ${body.slice(0, 80)}` });
+  return { id: c.id, loadId, body, author: actor.name, at: c.createdAt.toISOString() } satisfies CommentView;
+}
+
+export function assertRole(actor: CurrentUser, ...roles: string[]) {
+  if (!actor.roles.some((r) => roles.includes(r))) throw new ForbiddenError();
+}

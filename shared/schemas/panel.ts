@@ -1,0 +1,100 @@
+import { z } from 'zod';
+import type { LoadSelection, PanelRollup } from './selection';
+import type { StoredOverride } from './override';
+
+export const MOUNTINGS = ['free-standing', 'wall-mounted', 'row-end', 'row-middle', 'wall-row-end', 'wall-row-middle'] as const;
+export const MOUNTING_LABELS: Record<(typeof MOUNTINGS)[number], string> = {
+  'free-standing': 'Free-standing, all sides exposed',
+  'wall-mounted': 'Wall-mounted',
+  'row-end': 'First or last in a row, free-standing',
+  'row-middle': 'Middle of a row, free-standing',
+  'wall-row-end': 'First or last in a row, wall-mounted',
+  'wall-row-middle': 'Middle of a row, wall-mounted',
+};
+
+export const PANEL_STATES = ['draft', 'in_review', 'signed_off', 'returned'] as const;
+export type PanelState = (typeof PANEL_STATES)[number];
+
+export const PanelInputSchema = z.object({
+  name: z.string().trim().min(1, 'Enter a panel name').max(200),
+  description: z.string().trim().max(2000).default(''),
+  mounting: z.enum(MOUNTINGS).default('wall-mounted'),
+  markupPercent: z.coerce.number().min(0).max(300).default(15),
+  labourRate: z.coerce.number().min(0).max(1000).default(85),
+});
+export type PanelInput = z.input<typeof PanelInputSchema>;
+
+export const PanelUpdateSchema = PanelInputSchema.partial().extend({ version: z.number().int().min(0) }).strict();
+
+export interface PanelSummary {
+  id: number;
+  jobId: number;
+  name: string;
+  description: string;
+  mounting: string;
+  status: PanelState;
+  revisionNumber: number | null;
+  motorCount: number;
+  archivedAt: string | null;
+  version: number;
+  updatedAt: string;
+}
+
+export interface LoadView {
+  id: number;
+  tag: string;
+  position: number;
+  answers: Record<string, unknown>;
+  selection: LoadSelection | null;
+  /** the selection with overrides applied: what the bill of materials and the checks use */
+  effective: LoadSelection | null;
+  overrides: StoredOverride[];
+  version: number;
+}
+
+export interface CommentView {
+  id: number;
+  loadId: number | null;
+  body: string;
+  author: string | null;
+  at: string;
+}
+
+export interface PanelDetail extends PanelSummary {
+  markupPercent: number;
+  labourRate: number;
+  rollup: PanelRollup | null;
+  job: { id: number; number: string; name: string; supplyVolts: number; supplyPhases: number; supplyHz: number; availableFaultKa: number; ambientC: number; codeEdition: string };
+  loads: LoadView[];
+  comments: CommentView[];
+  revisions: Array<{ number: number; approvedAt: string; approvedBy: string | null }>;
+}
+
+export const CommentInputSchema = z.object({
+  body: z.string().trim().min(1, 'Write a comment').max(5000),
+  loadId: z.number().int().positive().nullable().default(null),
+});
+
+export const ReviewActionSchema = z.object({
+  version: z.number().int().min(0),
+  comment: z.string().trim().max(5000).default(''),
+});
+
+export const BulkEditSchema = z.object({
+  loadIds: z.array(z.number().int().positive()).min(1).max(2000),
+  changes: z
+    .object({
+      environment: z.string().optional(),
+      scpdType: z.string().optional(),
+      conductor: z.object({ material: z.enum(['cu', 'al']), tempRatingC: z.union([z.literal(60), z.literal(75), z.literal(90)]) }).optional(),
+      critical: z.boolean().optional(),
+      reverseRotationHazard: z.boolean().optional(),
+      inertia: z.string().optional(),
+      startingLimit: z.string().optional(),
+      cableLengthFt: z.number().min(0).max(10000).optional(),
+      hz: z.number().optional(),
+    })
+    .strict()
+    .refine((c) => Object.keys(c).length > 0, 'Choose at least one answer to change'),
+  panelVersion: z.number().int().min(0),
+});

@@ -1,0 +1,102 @@
+import { describe, expect, it } from 'vitest';
+import { PassThrough } from 'node:stream';
+import { writeSubmittalPdf, type SubmittalData, type SubmittalPdfOptions } from '../../../server/modules/submittal/pdf';
+import { calculatePanelSccr } from '../../../shared/calc/sccr';
+import { calculateHeat } from '../../../shared/calc/heat';
+import { sizeControlTransformer } from '../../../shared/calc/control-power';
+import { panelNameplate } from '../../../shared/calc/nameplate';
+import { connectionCard } from '../../../shared/calc/connections';
+import { blowerVfd, conveyorFvr, pumpFvnr, rollup } from './fixtures';
+import { extractPdfText } from './pdf-text';
+
+function data(): SubmittalData {
+  const sccr = calculatePanelSccr({
+    feeder: [{ code: 'PDB-1', category: 'power-distribution-block', description: 'distribution block', sccrKa: 50 }],
+    buckets: [
+      { tag: 'P-101', hp: 10, components: [{ code: 'C-09', category: 'contactor', description: 'contactor' }] },
+      { tag: 'CV-201', hp: 25, components: [{ code: 'C-32', category: 'contactor', description: 'contactor', sccrKa: 65 }] },
+    ],
+    availableFaultKa: 22,
+  });
+  return {
+    job: { number: 'J-2041', name: 'Clarifier upgrade', customer: 'Cedar Flats water works', site: 'Plant 2', availableFaultKa: 22, ambientC: 30, codeEdition: 'NEC 2023' },
+    panel: { name: 'MCP-1', revision: 'R1', date: '2025-03-14', enclosureType: '12', shopName: 'Cedar Flats Panel Works' },
+    selections: [pumpFvnr, conveyorFvr, blowerVfd],
+    rollup,
+    sccr,
+    heat: calculateHeat({
+      enclosure: { heightM: 2, widthM: 0.8, depthM: 0.6, mounting: 'wall-mounted' },
+      sources: [
+        { bucketTag: 'B-301', code: 'VFD-40', description: 'drive', category: 'vfd', heatLossW: 600, ratedAmps: 40, loadAmps: 30 },
+        { bucketTag: 'P-101', code: 'C-09', description: 'contactor', category: 'contactor', heatLossW: 90 },
+      ],
+      ambientC: 30,
+    }),
+    controlPower: sizeControlTransformer({
+      loads: [{ description: 'coil', kind: 'coil', qty: 4, sealedVa: 45, inrushVa: 150 }],
+      primaryVolts: 480,
+      secondaryVolts: 120,
+    }),
+    nameplate: panelNameplate({ rollup, supply: { volts: 480, phases: 3, hz: 60 }, sccrKa: sccr.panelSccrKa, enclosureType: '12', shopName: 'Cedar Flats Panel Works' }),
+    connectionCards: [
+      { tag: 'P-101', card: connectionCard({ motor: 'three-phase', leads: 9, winding: 'wye', voltage: 'high' }) },
+      { tag: 'DC-1', card: connectionCard({ motor: 'dc', field: 'series' }) },
+    ],
+  };
+}
+
+async function render(opts: SubmittalPdfOptions): Promise<{ buf: Buffer; font: string }> {
+  const stream = new PassThrough();
+  const chunks: Buffer[] = [];
+  stream.on('data', (c: Buffer) => chunks.push(c));
+  const { font } = await writeSubmittalPdf(data(), stream, opts);
+  return { buf: Buffer.concat(chunks), font };
+}
+
+describe('PDF submittal', () => {
+  for (const fontChoice of ['barlow', 'helvetica'] as const) {
+    it(`writes a readable document (${fontChoice})`, async () => {
+      const { buf, font } = await render({ compress: false, font: fontChoice });
+      expect(buf.subarray(0, 5).toString()).toBe('%PDF-');
+      expect(font).toBe(fontChoice === 'barlow' ? 'Barlow' : 'Helvetica');
+      if (fontChoice === 'barlow') expect(buf.toString('latin1')).toMatch(/\/BaseFont \/[A-Z]{6}\+Barlow/);
+      const text = extractPdfText(buf);
+      for (const s of [
+        'Panel submittal',
+        'J-2041 - Clarifier upgrade',
+        'MCP-1',
+        'R1',
+        '2025-03-14',
+        'Load schedule',
+        'P-101',
+        '25 A dual-element fuses',
+        'NEC 2023 430.52(C)(1)',
+        'Protection summary',
+        'One-line diagrams',
+        'Short-circuit current rating worksheet',
+        'assumed for an unmarked component: UL 508A Table SB4.1',
+        'Panel SCCR: 5 kA',
+        'Verdict: below-available',
+        'Heat calculation',
+        'IEC TR 60890 simplified method',
+        'Control power transformer',
+        '200 VA',
+        '430.72(C)(4)',
+        'Motor connection cards',
+        'T4-T7 T5-T8 T6-T9',
+        'Never run a DC series motor unloaded.',
+        'Check motor rotation before coupling the load.',
+        'De-energise and lock out before work.',
+        'the authority having jurisdiction',
+        'a qualified person verifies every value',
+      ]) {
+        expect(text, s).toContain(s);
+      }
+      expect(text).not.toContain('?'); // every character within the font's range
+    });
+  }
+  it('compresses by default', async () => {
+    const { buf } = await render({});
+    expect(buf.toString('latin1')).toContain('/FlateDecode');
+  });
+});
