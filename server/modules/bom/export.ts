@@ -200,7 +200,7 @@ export async function writeBomWorkbook(job: BomExportJob, panels: readonly BomEx
         const row = ws.addRow([
           text(l.bucket),
           text(categoryLabel(l.category)),
-          text(l.code ?? ''),
+          l.code ? text(l.code) : null,
           text(l.description),
           l.quantity,
           l.unit,
@@ -264,7 +264,7 @@ export async function writeBomWorkbook(job: BomExportJob, panels: readonly BomEx
   let rr = 4;
   for (const g of roll) {
     const row = ru.addRow([
-      text(g.code ?? ''),
+      g.code ? text(g.code) : null,
       text(g.description),
       text(categoryLabel(g.category)),
       g.unit,

@@ -204,8 +204,8 @@ function validateTable(cells: CellValue[][], cellErrors: NonNullable<Table['cell
 // --- CSV ---------------------------------------------------------------------------------------
 
 function readCsv(buffer: Buffer): Table {
-  if (buffer.includes(0)) return { cells: [], error: 'not a CSV text file (it contains binary data)' };
   if (buffer[0] === 0x50 && buffer[1] === 0x4b) return { cells: [], error: 'this looks like an .xlsx workbook, not a CSV file' };
+  if (buffer.includes(0)) return { cells: [], error: 'not a CSV text file (it contains binary data)' };
   let text = buffer.toString('utf8');
   if (text.charCodeAt(0) === 0xfeff) text = text.slice(1);
   const rows: CellValue[][] = [];

@@ -1,0 +1,88 @@
+// Conductor selection from NEC Table 310.16 with the ambient correction of Table 310.15(B)(1)(1)
+// and the termination limit of 110.14(C): the allowable ampacity is the corrected ampacity at the
+// insulation rating, but not above the ampacity at the termination rating (75 °C terminals
+// assumed; 60 °C insulation stays at 60 °C). Motor branch conductors: 430.22 (125 % of table FLC).
+// Where no single conductor through 1000 kcmil suffices, parallel sets of 1/0 AWG or larger per
+// 310.10(G), each set up to 500 kcmil (common practice), in separate raceways.
+
+import { OutsideTableError } from '../errors';
+import { nec, type CodeEdition } from '../standards/code-edition';
+import { ambientCorrectionFactor, table310_15B1 } from '../standards/nec-table-310-15-b-1';
+import { TABLE_310_16, ampacity310_16, sizesFor, type ConductorMaterial, type TempRating } from '../standards/nec-table-310-16';
+
+export const TERMINATION_TEMP_C: TempRating = 75;
+
+export interface ConductorChoice {
+  size: string;
+  sets: number;
+  /** allowable ampacity of the whole (all parallel sets) after correction and the termination limit */
+  ampacity: number;
+  material: ConductorMaterial;
+  tempRatingC: TempRating;
+  basis: string;
+  cautions: string[];
+}
+
+const round2 = (x: number) => Math.round(x * 100) / 100;
+
+export function allowableAmpacity(size: string, material: ConductorMaterial, insulation: TempRating, ambientC: number, edition: CodeEdition): number {
+  const termination = Math.min(insulation, TERMINATION_TEMP_C) as TempRating;
+  const corrected = ampacity310_16(size, material, insulation) * ambientCorrectionFactor(ambientC, insulation, edition);
+  return round2(Math.min(corrected, ampacity310_16(size, material, termination)));
+}
+
+export function selectConductor(
+  minAmpacity: number,
+  opts: { material: ConductorMaterial; tempRatingC: TempRating; ambientC: number },
+  edition: CodeEdition,
+): ConductorChoice {
+  const { material, tempRatingC, ambientC } = opts;
+  const sizes = sizesFor(material);
+  const parts = [TABLE_310_16];
+  const cautions: string[] = [];
+  const factor = ambientCorrectionFactor(ambientC, tempRatingC, edition);
+  if (factor !== 1) parts.push(`${table310_15B1(edition)} (${ambientC} °C ambient, factor ${factor})`);
+  if (tempRatingC > TERMINATION_TEMP_C) {
+    parts.push('110.14(C) (75 °C terminations)');
+    cautions.push('90 °C insulation: ampacity limited to the 75 °C column for the terminations (110.14(C)); the 90 °C column serves only for correction and adjustment.');
+  }
+  const label = `${material === 'cu' ? 'copper' : 'aluminum'} ${tempRatingC} °C`;
+  for (const size of sizes) {
+    const a = allowableAmpacity(size, material, tempRatingC, ambientC, edition);
+    if (a + 1e-9 >= minAmpacity) {
+      return { size, sets: 1, ampacity: a, material, tempRatingC, basis: nec(edition, parts.join(', ')) + ` (${label})`, cautions };
+    }
+  }
+  const parallelSizes = sizes.filter((s) => sizes.indexOf(s) >= sizes.indexOf('1/0 AWG') && sizes.indexOf(s) <= sizes.indexOf('500 kcmil'));
+  for (let sets = 2; sets <= 12; sets++) {
+    for (const size of parallelSizes) {
+      const a = allowableAmpacity(size, material, tempRatingC, ambientC, edition) * sets;
+      if (a + 1e-9 >= minAmpacity) {
+        cautions.push(`${sets} parallel sets (310.10(G)): each set in its own raceway, same length, material, size and termination; more than three current-carrying conductors in one raceway need the adjustment of 310.15(C)(1).`);
+        return {
+          size: `${sets} × ${size} per phase`,
+          sets,
+          ampacity: round2(a),
+          material,
+          tempRatingC,
+          basis: nec(edition, [...parts, '310.10(G)'].join(', ')) + ` (${label}; parallel sets up to 500 kcmil, common practice)`,
+          cautions,
+        };
+      }
+    }
+  }
+  throw new OutsideTableError(TABLE_310_16, `no conductor arrangement up to 12 parallel sets carries ${minAmpacity} A`);
+}
+
+/** Motor branch-circuit conductors, 430.22: at least 125 % of the table FLC. */
+export function branchConductor(
+  input: { flcAmps: number; material: ConductorMaterial; tempRatingC: TempRating; ambientC: number; driveInputAmps?: number },
+  edition: CodeEdition,
+): ConductorChoice & { minAmpacity: number } {
+  const byMotor = round2(input.flcAmps * 1.25);
+  const byDrive = input.driveInputAmps !== undefined ? round2(input.driveInputAmps * 1.25) : 0;
+  const minAmpacity = Math.max(byMotor, byDrive);
+  const choice = selectConductor(minAmpacity, input, edition);
+  const clause = byDrive > byMotor ? '430.122(A) (125 % of the drive rated input current)' : '430.22 (125 % of table FLC)';
+  return { ...choice, minAmpacity, basis: `${nec(edition, clause)}; ${choice.basis}` };
+}

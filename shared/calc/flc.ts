@@ -1,0 +1,121 @@
+// Full-load current per NEC 430.6(A)(1): the table current (Tables 430.247, 430.248, 430.250)
+// sizes conductors, short-circuit protection, disconnects and feeders. kW ratings are converted
+// to horsepower; ratings between rows are interpolated as 430.6(A)(1) does for motors marked in
+// amperes; outside the tables the nameplate current is used when given, else it is an error.
+
+import { OutsideTableError } from '../errors';
+import type { AssumedInput } from '../schemas/selection';
+import { nec, type CodeEdition } from '../standards/code-edition';
+import { formatHp, sameHp } from '../standards/hp-rows';
+import { TABLE_430_247, column430247, dcFlc, hpRows430247 } from '../standards/nec-table-430-247';
+import { TABLE_430_248, column430248, hpRows430248, singlePhaseFlc } from '../standards/nec-table-430-248';
+import { TABLE_430_250, column430250, hpRows430250, threePhaseFlc } from '../standards/nec-table-430-250';
+
+export const WATTS_PER_HP = 745.7;
+/** common practice: a kW rating within 2 % of a horsepower row is treated as that row */
+export const KW_ROW_TOLERANCE = 0.02;
+
+export interface FlcInput {
+  supply: 'ac3' | 'ac1' | 'dc';
+  hp?: number;
+  kw?: number;
+  volts: number;
+  fla?: number;
+}
+
+export interface FlcResult {
+  flcAmps: number;
+  /** table column voltage, or null where the nameplate current was used */
+  tableVolts: number | null;
+  /** horsepower used (converted from kW where needed) */
+  hp: number;
+  source: string;
+  basis: string;
+  assumed: AssumedInput[];
+  cautions: string[];
+}
+
+interface TableView {
+  name: string;
+  column: number;
+  rows: number[];
+  value: (hp: number) => number;
+}
+
+function tableView(supply: FlcInput['supply'], volts: number): TableView {
+  if (supply === 'ac3') {
+    const c = column430250(volts);
+    return { name: TABLE_430_250, column: c, rows: hpRows430250(c), value: (hp) => threePhaseFlc(hp, c) };
+  }
+  if (supply === 'ac1') {
+    const c = column430248(volts);
+    return { name: TABLE_430_248, column: c, rows: hpRows430248(), value: (hp) => singlePhaseFlc(hp, c) };
+  }
+  const c = column430247(volts);
+  return { name: TABLE_430_247, column: c, rows: hpRows430247(c), value: (hp) => dcFlc(hp, c) };
+}
+
+function round2(x: number): number {
+  return Math.round(x * 100) / 100;
+}
+
+export function fullLoadCurrent(input: FlcInput, edition: CodeEdition): FlcResult {
+  const assumed: AssumedInput[] = [];
+  const cautions: string[] = [];
+  let hp: number;
+  if (input.hp !== undefined) hp = input.hp;
+  else if (input.kw !== undefined) hp = (input.kw * 1000) / WATTS_PER_HP;
+  else throw new OutsideTableError('430.6(A)(1)', 'hp or kw is required');
+
+  const fromNameplate = (why: string): FlcResult => {
+    cautions.push(`${why}; the nameplate current ${input.fla} A is used for conductors and protection in place of a table value — confirm with the engineer.`);
+    return {
+      flcAmps: input.fla as number,
+      tableVolts: null,
+      hp: round2(hp),
+      source: `nameplate FLA (${why})`,
+      basis: nec(edition, '430.6(A)(1)') + ', nameplate current',
+      assumed,
+      cautions,
+    };
+  };
+
+  let view: TableView;
+  try {
+    view = tableView(input.supply, input.volts);
+  } catch (e) {
+    if (e instanceof OutsideTableError && input.fla !== undefined) return fromNameplate(e.message);
+    throw e;
+  }
+
+  const basis = nec(edition, `430.6(A)(1), ${view.name}`);
+  const source = `${view.name} (${view.column} V column)`;
+
+  if (input.kw !== undefined) {
+    const near = view.rows.find((r) => Math.abs(hp - r) / r <= KW_ROW_TOLERANCE);
+    if (near !== undefined) {
+      assumed.push({ field: 'kw', assumed: `${formatHp(near)} hp row`, note: `${input.kw} kW = ${round2(hp)} hp, within 2 % of the ${formatHp(near)} hp row (common practice)` });
+      return { flcAmps: view.value(near), tableVolts: view.column, hp: round2(hp), source, basis, assumed, cautions };
+    }
+  } else {
+    const row = view.rows.find((r) => sameHp(r, hp));
+    if (row !== undefined) return { flcAmps: view.value(row), tableVolts: view.column, hp, source, basis, assumed, cautions };
+  }
+
+  const lower = [...view.rows].reverse().find((r) => r < hp);
+  const upper = view.rows.find((r) => r > hp);
+  if (lower === undefined || upper === undefined) {
+    const why = `${view.name}: ${formatHp(round2(hp))} hp is outside the table at ${view.column} V`;
+    if (input.fla !== undefined) return fromNameplate(why);
+    throw new OutsideTableError(view.name, `${formatHp(round2(hp))} hp is outside the table at ${view.column} V; give the nameplate FLA`);
+  }
+  const a = view.value(lower);
+  const b = view.value(upper);
+  const flc = round2(a + ((b - a) * (hp - lower)) / (upper - lower));
+  assumed.push({
+    field: input.kw !== undefined ? 'kw' : 'hp',
+    assumed: `${flc} A interpolated between the ${formatHp(lower)} and ${formatHp(upper)} hp rows`,
+    note: `${round2(hp)} hp is not a row of ${view.name}; interpolated as 430.6(A)(1) does for motors marked in amperes`,
+  });
+  return { flcAmps: flc, tableVolts: view.column, hp: round2(hp), source: `${source}, interpolated`, basis, assumed, cautions };
+}

@@ -1,0 +1,81 @@
+// Motor branch-circuit short-circuit and ground-fault protection, NEC 430.52(C)(1) and
+// Table 430.52, percent of the table FLC; Exception 1 permits the next higher standard rating of
+// Table 240.6(A); Exception 2 (motor will not start) only as an explicit override with a reason,
+// and then "in no case exceeding" its limit, so the rating is taken at or below it.
+// Instantaneous-trip breakers: 430.52(C)(3), adjustable setting, listed combination controller.
+
+import { ValidationError } from '../errors';
+import type { ScpdType } from '../schemas/selection';
+import { nec, type CodeEdition } from '../standards/code-edition';
+import { nextHigherStandard, nextLowerStandard } from '../standards/nec-table-240-6a';
+import { exception2LimitPercent, maxPercent430_52, type MotorKind } from '../standards/nec-table-430-52';
+
+export interface ScpdResult {
+  type: ScpdType;
+  maxPercent: number;
+  ratingAmps: number;
+  computedMaxAmps: number;
+  basis: string;
+  exception: 'none' | 'exception-1' | 'exception-2';
+}
+
+export function motorKind(load: { supply: 'ac3' | 'ac1' | 'dc'; rotor?: string; design?: string; energyEfficient?: boolean }): MotorKind {
+  if (load.supply === 'dc') return 'dc-constant-voltage';
+  if (load.supply === 'ac1') return 'single-phase';
+  if (load.rotor === 'wound-rotor') return 'wound-rotor';
+  if (load.design === 'B' && load.energyEfficient) return 'squirrel-cage-design-b-energy-efficient';
+  return 'squirrel-cage';
+}
+
+function family(type: ScpdType): 'fuse' | 'breaker' {
+  return type === 'dual-element-fuse' || type === 'non-time-delay-fuse' ? 'fuse' : 'breaker';
+}
+
+const round2 = (x: number) => Math.round(x * 100) / 100;
+
+export function branchProtection(
+  input: { flcAmps: number; type: ScpdType; motor: MotorKind; override?: { maxPercent: number; reason: string } },
+  edition: CodeEdition,
+): ScpdResult {
+  const tablePercent = maxPercent430_52(input.motor, input.type);
+  if (input.override) {
+    const limit = exception2LimitPercent(input.motor, input.type, input.flcAmps);
+    if (input.override.maxPercent > limit) {
+      throw new ValidationError(`scpdOverride.maxPercent ${input.override.maxPercent} % exceeds the ${limit} % limit of 430.52(C)(1) Exception 2 for this device`, [
+        { path: 'scpdOverride.maxPercent', message: `at most ${limit} % for ${input.type}` },
+      ]);
+    }
+    const computed = round2((input.flcAmps * input.override.maxPercent) / 100);
+    const clause = input.type === 'instantaneous-trip-breaker' ? '430.52(C)(3) Exception No. 1' : '430.52(C)(1) Exception No. 2';
+    const rating = input.type === 'instantaneous-trip-breaker' ? Math.floor(computed * 10) / 10 : nextLowerStandard(computed, edition, family(input.type));
+    return {
+      type: input.type,
+      maxPercent: input.override.maxPercent,
+      computedMaxAmps: computed,
+      ratingAmps: rating,
+      basis: nec(edition, `${clause} (override: ${input.override.reason}), Table 240.6(A)`),
+      exception: 'exception-2',
+    };
+  }
+  const computed = round2((input.flcAmps * tablePercent) / 100);
+  if (input.type === 'instantaneous-trip-breaker') {
+    return {
+      type: input.type,
+      maxPercent: tablePercent,
+      computedMaxAmps: computed,
+      // an adjustable trip setting, not a standard rating: set at or below the computed maximum
+      ratingAmps: Math.floor(computed * 10) / 10,
+      basis: nec(edition, '430.52(C)(3), Table 430.52'),
+      exception: 'none',
+    };
+  }
+  const rating = nextHigherStandard(computed, edition, family(input.type));
+  return {
+    type: input.type,
+    maxPercent: tablePercent,
+    computedMaxAmps: computed,
+    ratingAmps: rating,
+    basis: nec(edition, rating > computed + 1e-9 ? '430.52(C)(1) Exception No. 1, Table 430.52, Table 240.6(A)' : '430.52(C)(1), Table 430.52, Table 240.6(A)'),
+    exception: rating > computed + 1e-9 ? 'exception-1' : 'none',
+  };
+}

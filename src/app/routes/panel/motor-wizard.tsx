@@ -1,0 +1,395 @@
+import { useEffect, useMemo, useState } from 'react';
+import { useForm, useWatch, type FieldErrors } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useQuery } from '@tanstack/react-query';
+import { useNavigate, useParams } from 'react-router-dom';
+import { LoadSchema, type LoadInput } from '../../../../shared/schemas/load';
+import type { LoadSelection } from '../../../../shared/schemas/selection';
+import { panelQueries, useSaveLoad } from '../../../features/panels/api/panels';
+import { SelectionSummary } from '../../../features/panels/components/selection-summary';
+import { OverrideEditor } from '../../../features/panels/components/override-editor';
+import { ENVIRONMENT_LABELS } from '../../../features/panels/components/answer-labels';
+import { browserSelector } from '../../../lib/selector';
+import { Field, inputClass } from '../../../components/ui/field';
+import { Button } from '../../../components/ui/button';
+import { Caution, ErrorNote } from '../../../components/ui/feedback';
+import { ApiError } from '../../../lib/api-client';
+import type { CodeEdition } from '../../../../shared/standards/code-edition';
+
+const STEPS = ['Nameplate', 'Duty', 'Site & hazards', 'Protection'] as const;
+const STEP_FIELDS: Record<(typeof STEPS)[number], string[]> = {
+  Nameplate: ['tag', 'description', 'supply', 'hp', 'kw', 'volts', 'hz', 'fla', 'serviceFactor', 'tempRiseC', 'codeLetter', 'design', 'energyEfficient', 'poles', 'rotor', 'singlePhaseType', 'dcField', 'leads', 'connection'],
+  Duty: ['duty', 'jogging', 'plugging', 'reversing', 'speedControl', 'turndown', 'torque', 'startingLimit', 'starterPreference', 'insideDelta', 'inertia', 'twoSpeed', 'quickStop'],
+  'Site & hazards': ['environment', 'reverseRotationHazard', 'critical', 'cableLengthFt'],
+  Protection: ['scpdType', 'conductor'],
+};
+
+const num = { setValueAs: (v: unknown) => (v === '' || v === null || v === undefined ? undefined : Number(v)) };
+const opt = { setValueAs: (v: unknown) => (v === '' || v === null || v === undefined ? undefined : v) };
+const optNum = { setValueAs: (v: unknown) => (v === '' || v === null || v === undefined ? undefined : Number(v)) };
+
+const DEFAULTS: LoadInput = {
+  tag: '',
+  supply: 'ac3',
+  volts: 460,
+  hz: 60,
+  serviceFactor: 1.15,
+  duty: 'continuous',
+  speedControl: 'fixed',
+  startingLimit: 'none',
+  inertia: 'normal',
+  scpdType: 'inverse-time-breaker',
+  conductor: { material: 'cu', tempRatingC: 75 },
+  environment: 'indoor-dusty',
+  reversing: false,
+  jogging: false,
+  plugging: false,
+  critical: false,
+  reverseRotationHazard: false,
+};
+
+/** Drops empty strings and NaN that form inputs leave behind, so the schema sees "not given". */
+function clean(v: Record<string, unknown>): Record<string, unknown> {
+  const out: Record<string, unknown> = {};
+  for (const [k, x] of Object.entries(v)) {
+    if (x === '' || x === undefined || (typeof x === 'number' && Number.isNaN(x))) continue;
+    out[k] = x;
+  }
+  return out;
+}
+
+function firstStepWithError(errors: FieldErrors): number {
+  const keys = Object.keys(errors);
+  const i = STEPS.findIndex((s) => STEP_FIELDS[s].some((f) => keys.includes(f)));
+  return i < 0 ? 0 : i;
+}
+
+export function Component() {
+  const { panelId, loadId, jobId } = useParams();
+  const navigate = useNavigate();
+  const { data: p } = useQuery(panelQueries.detail(Number(panelId)));
+  const existing = loadId ? p?.loads.find((l) => l.id === Number(loadId)) : undefined;
+  const save = useSaveLoad(Number(panelId));
+  const [step, setStep] = useState(0);
+  const form = useForm<LoadInput>({
+    resolver: zodResolver(LoadSchema) as never,
+    defaultValues: existing ? (existing.answers as LoadInput) : DEFAULTS,
+    mode: 'onChange',
+  });
+  const { register, handleSubmit, formState, control, setError } = form;
+  const values = useWatch({ control }) as Record<string, unknown>;
+  const supplyKind = values.supply as string;
+  const variable = values.speedControl === 'variable';
+  const [preview, setPreview] = useState<{ sel: LoadSelection | null; error: string | null }>({ sel: null, error: null });
+  const valuesKey = JSON.stringify(values);
+
+  // Live preview: the same engine as the server, in the browser, as the answers change.
+  useEffect(() => {
+    if (!p) return;
+    const t = setTimeout(() => {
+      const parsed = LoadSchema.safeParse(clean(values));
+      if (!parsed.success) {
+        setPreview((x) => ({ sel: x.sel, error: `Complete the answers to see the selection (${parsed.error.issues[0]?.path.join('.')}: ${parsed.error.issues[0]?.message})` }));
+        return;
+      }
+      browserSelector((p.job.codeEdition === '2020' ? '2020' : '2023') as CodeEdition)
+        .selectLoad(clean(values) as LoadInput, { volts: p.job.supplyVolts, phases: p.job.supplyPhases as 1 | 3, hz: p.job.supplyHz as 50 | 60, availableFaultKa: p.job.availableFaultKa, ambientC: p.job.ambientC })
+        .then((sel) => setPreview({ sel, error: null }))
+        .catch((e: Error) => setPreview({ sel: null, error: e.message }));
+    }, 150);
+    return () => clearTimeout(t);
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [valuesKey, p?.job.codeEdition]);
+
+  const serverErrors = useMemo(() => (save.error instanceof ApiError ? save.error.fieldIssues : []), [save.error]);
+  useEffect(() => {
+    for (const i of serverErrors) {
+      const name = i.path.replace(/^body\.answers\./, '');
+      setError(name as keyof LoadInput, { message: i.message });
+    }
+  }, [serverErrors, setError]);
+
+  if (!p) return null;
+  const e = formState.errors as Record<string, { message?: string } | undefined>;
+  const onSubmit = handleSubmit(
+    (v) =>
+      save.mutate(
+        { loadId: existing?.id, answers: clean(v as Record<string, unknown>), version: existing?.version },
+        { onSuccess: () => navigate(`/jobs/${jobId}/panels/${panelId}/motors`) },
+      ),
+    (errs) => setStep(firstStepWithError(errs)),
+  );
+  const stepName = STEPS[step];
+  return (
+    <div className="grid grid-cols-1 gap-5 lg:grid-cols-[minmax(0,1fr)_430px]">
+      <form onSubmit={onSubmit} noValidate className="rounded border border-line bg-panel" aria-label="Motor wizard">
+        <div className="flex items-center justify-between border-b border-line px-4 py-2">
+          <h2 className="text-lg font-semibold">{existing ? `Motor ${existing.tag}` : 'New motor'}</h2>
+          <ol className="flex gap-1 text-sm" aria-label="Steps">
+            {STEPS.map((s, i) => (
+              <li key={s}>
+                <button
+                  type="button"
+                  aria-current={i === step ? 'step' : undefined}
+                  onClick={() => setStep(i)}
+                  className={`rounded px-2 py-1 font-semibold ${i === step ? 'bg-header text-white' : 'text-ink-soft hover:bg-copper-50'}`}
+                >
+                  {i + 1}. {s}
+                  {STEP_FIELDS[s].some((f) => e[f]) ? <span className="ml-1 text-state-returned">⚠</span> : null}
+                </button>
+              </li>
+            ))}
+          </ol>
+        </div>
+        <div className="grid grid-cols-2 gap-4 p-4 md:grid-cols-3">
+          {stepName === 'Nameplate' ? (
+            <>
+              <Field label="Tag" error={e.tag?.message} hint="Unique on this panel, e.g. P-101">{(a) => <input {...a} {...register('tag')} className={inputClass} autoFocus />}</Field>
+              <div className="col-span-2"><Field label="Description" error={e.description?.message}>{(a) => <input {...a} {...register('description', opt)} className={inputClass} />}</Field></div>
+              <Field label="Supply" error={e.supply?.message}>
+                {(a) => (
+                  <select {...a} {...register('supply')} className={inputClass}>
+                    <option value="ac3">Three-phase AC</option>
+                    <option value="ac1">Single-phase AC</option>
+                    <option value="dc">DC</option>
+                  </select>
+                )}
+              </Field>
+              <Field label="Horsepower" unit="hp" error={e.hp?.message} hint="Or give kW instead">{(a) => <input {...a} {...register('hp', optNum)} inputMode="decimal" className={inputClass} />}</Field>
+              <Field label="Kilowatts" unit="kW" error={e.kw?.message}>{(a) => <input {...a} {...register('kw', optNum)} inputMode="decimal" className={inputClass} />}</Field>
+              <Field label="Rated voltage" unit="V" error={e.volts?.message}>{(a) => <input {...a} {...register('volts', num)} inputMode="numeric" className={inputClass} />}</Field>
+              <Field label="Frequency" unit="Hz" error={e.hz?.message}>
+                {(a) => (
+                  <select {...a} {...register('hz', num)} className={inputClass}>
+                    <option value={60}>60</option>
+                    <option value={50}>50</option>
+                  </select>
+                )}
+              </Field>
+              <Field label="Nameplate FLA" unit="A" error={e.fla?.message} hint="Sizes the overload (430.6(A)(2))">{(a) => <input {...a} {...register('fla', optNum)} inputMode="decimal" className={inputClass} />}</Field>
+              <Field label="Service factor" error={e.serviceFactor?.message}>{(a) => <input {...a} {...register('serviceFactor', optNum)} inputMode="decimal" className={inputClass} />}</Field>
+              <Field label="Temperature rise" unit="°C" error={e.tempRiseC?.message}>{(a) => <input {...a} {...register('tempRiseC', optNum)} inputMode="decimal" className={inputClass} />}</Field>
+              {supplyKind !== 'dc' ? (
+                <Field label="NEMA code letter" error={e.codeLetter?.message} hint="Locked-rotor kVA/hp, Table 430.7(B)">
+                  {(a) => (
+                    <select {...a} {...register('codeLetter', opt)} className={inputClass}>
+                      <option value="">Not known</option>
+                      {'ABCDEFGHJKLMNPRSTUV'.split('').map((c) => <option key={c} value={c}>{c}</option>)}
+                    </select>
+                  )}
+                </Field>
+              ) : null}
+              {supplyKind === 'ac3' ? (
+                <>
+                  <Field label="NEMA design" error={e.design?.message}>
+                    {(a) => (
+                      <select {...a} {...register('design', opt)} className={inputClass}>
+                        <option value="">Not known</option>
+                        {['A', 'B', 'C', 'D'].map((c) => <option key={c} value={c}>Design {c}</option>)}
+                      </select>
+                    )}
+                  </Field>
+                  <Field label="Rotor" error={e.rotor?.message}>
+                    {(a) => (
+                      <select {...a} {...register('rotor')} className={inputClass}>
+                        <option value="squirrel-cage">Squirrel cage</option>
+                        <option value="wound-rotor">Wound rotor</option>
+                      </select>
+                    )}
+                  </Field>
+                  <Field label="Leads" error={e.leads?.message}>
+                    {(a) => (
+                      <select {...a} {...register('leads', optNum)} className={inputClass}>
+                        <option value="">Not known</option>
+                        {[3, 6, 9, 12].map((n) => <option key={n} value={n}>{n} leads</option>)}
+                      </select>
+                    )}
+                  </Field>
+                  <Field label="Winding connection" error={e.connection?.message}>
+                    {(a) => (
+                      <select {...a} {...register('connection', opt)} className={inputClass}>
+                        <option value="">Not known</option>
+                        <option value="wye">Wye (star)</option>
+                        <option value="delta">Delta</option>
+                      </select>
+                    )}
+                  </Field>
+                  <label className="flex items-center gap-2 self-end text-sm"><input type="checkbox" {...register('energyEfficient')} /> Energy-efficient Design B</label>
+                </>
+              ) : null}
+              {supplyKind === 'ac1' ? (
+                <Field label="Single-phase type" error={e.singlePhaseType?.message}>
+                  {(a) => (
+                    <select {...a} {...register('singlePhaseType', opt)} className={inputClass}>
+                      <option value="">Not known</option>
+                      <option value="split-phase">Split-phase</option>
+                      <option value="capacitor-start">Capacitor-start</option>
+                      <option value="psc">Permanent-split capacitor</option>
+                      <option value="two-value-capacitor">Two-value capacitor</option>
+                    </select>
+                  )}
+                </Field>
+              ) : null}
+              {supplyKind === 'dc' ? (
+                <Field label="DC field" error={e.dcField?.message}>
+                  {(a) => (
+                    <select {...a} {...register('dcField', opt)} className={inputClass}>
+                      <option value="">Not known</option>
+                      <option value="shunt">Shunt</option>
+                      <option value="series">Series</option>
+                      <option value="compound">Compound</option>
+                    </select>
+                  )}
+                </Field>
+              ) : null}
+              <Field label="Poles" error={e.poles?.message}>{(a) => <input {...a} {...register('poles', optNum)} inputMode="numeric" className={inputClass} />}</Field>
+            </>
+          ) : null}
+          {stepName === 'Duty' ? (
+            <>
+              <Field label="Duty" error={e.duty?.message}>
+                {(a) => (
+                  <select {...a} {...register('duty')} className={inputClass}>
+                    <option value="continuous">Continuous</option>
+                    <option value="intermittent">Intermittent</option>
+                  </select>
+                )}
+              </Field>
+              <Field label="Speed" error={e.speedControl?.message}>
+                {(a) => (
+                  <select {...a} {...register('speedControl')} className={inputClass}>
+                    <option value="fixed">Fixed speed</option>
+                    <option value="variable">Variable speed</option>
+                  </select>
+                )}
+              </Field>
+              <Field label="Starting" error={e.startingLimit?.message}>
+                {(a) => (
+                  <select {...a} {...register('startingLimit')} className={inputClass}>
+                    <option value="none">Full-voltage starting allowed</option>
+                    <option value="reduced-inrush">Inrush must be limited</option>
+                  </select>
+                )}
+              </Field>
+              {variable ? (
+                <>
+                  <Field label="Turndown" unit="ratio, e.g. 10 for 10:1" error={e.turndown?.message}>{(a) => <input {...a} {...register('turndown', optNum)} inputMode="decimal" className={inputClass} />}</Field>
+                  <Field label="Load torque" error={e.torque?.message}>
+                    {(a) => (
+                      <select {...a} {...register('torque', opt)} className={inputClass}>
+                        <option value="">Not known</option>
+                        <option value="variable">Variable torque (fans, pumps)</option>
+                        <option value="constant">Constant torque (conveyors, mixers)</option>
+                      </select>
+                    )}
+                  </Field>
+                </>
+              ) : null}
+              {values.startingLimit === 'reduced-inrush' && supplyKind === 'ac3' ? (
+                <Field label="Reduced-voltage method" error={e.starterPreference?.message}>
+                  {(a) => (
+                    <select {...a} {...register('starterPreference', opt)} className={inputClass}>
+                      <option value="">Let the rules choose</option>
+                      <option value="rvss">Solid-state soft starter</option>
+                      <option value="wye-delta">Wye-delta (six-lead delta motor)</option>
+                      <option value="part-winding">Part-winding</option>
+                    </select>
+                  )}
+                </Field>
+              ) : null}
+              <Field label="Load inertia" error={e.inertia?.message} hint="Decides the overload trip class">
+                {(a) => (
+                  <select {...a} {...register('inertia')} className={inputClass}>
+                    <option value="normal">Normal</option>
+                    <option value="high">High</option>
+                    <option value="very-high">Very high (large fans, centrifuges)</option>
+                  </select>
+                )}
+              </Field>
+              <fieldset className="col-span-full flex flex-wrap gap-5 text-sm">
+                <legend className="mb-1 text-xs font-semibold uppercase text-ink-soft">Operation</legend>
+                <label className="flex items-center gap-2"><input type="checkbox" {...register('reversing')} /> Runs in both directions</label>
+                <label className="flex items-center gap-2"><input type="checkbox" {...register('jogging')} /> Jogging</label>
+                <label className="flex items-center gap-2"><input type="checkbox" {...register('plugging')} /> Plugging</label>
+                <label className="flex items-center gap-2"><input type="checkbox" {...register('twoSpeed')} /> Two-speed motor</label>
+                {supplyKind === 'dc' ? <label className="flex items-center gap-2"><input type="checkbox" {...register('quickStop')} /> Quick stops (dynamic braking)</label> : null}
+                {supplyKind === 'ac3' ? <label className="flex items-center gap-2"><input type="checkbox" {...register('insideDelta')} /> Soft starter inside the delta</label> : null}
+              </fieldset>
+            </>
+          ) : null}
+          {stepName === 'Site & hazards' ? (
+            <>
+              <div className="col-span-2">
+                <Field label="Environment at the panel" error={e.environment?.message} hint="Decides the NEMA 250 enclosure type">
+                  {(a) => (
+                    <select {...a} {...register('environment', opt)} className={inputClass}>
+                      <option value="">Not known (assume indoor, dusty)</option>
+                      {Object.entries(ENVIRONMENT_LABELS).map(([k, v]) => <option key={k} value={k}>{v}</option>)}
+                    </select>
+                  )}
+                </Field>
+              </div>
+              <Field label="Cable length to the motor" unit="ft" error={e.cableLengthFt?.message} hint="Long drive leads need an output filter">{(a) => <input {...a} {...register('cableLengthFt', optNum)} inputMode="decimal" className={inputClass} />}</Field>
+              <fieldset className="col-span-full space-y-2 text-sm">
+                <legend className="mb-1 text-xs font-semibold uppercase text-ink-soft">Hazards</legend>
+                <label className="flex items-center gap-2"><input type="checkbox" {...register('reverseRotationHazard')} /> Running backwards would damage the machine or hurt someone (screw compressor, hoist, one-way coupling)</label>
+                <label className="flex items-center gap-2"><input type="checkbox" {...register('critical')} /> Critical load: loss of a phase must trip and alarm</label>
+              </fieldset>
+            </>
+          ) : null}
+          {stepName === 'Protection' ? (
+            <>
+              <Field label="Branch protective device" error={e.scpdType?.message}>
+                {(a) => (
+                  <select {...a} {...register('scpdType')} className={inputClass}>
+                    <option value="inverse-time-breaker">Inverse-time circuit breaker</option>
+                    <option value="instantaneous-trip-breaker">Instantaneous-trip breaker (listed combination)</option>
+                    <option value="dual-element-fuse">Dual-element time-delay fuse</option>
+                    <option value="non-time-delay-fuse">Non-time-delay fuse</option>
+                  </select>
+                )}
+              </Field>
+              <Field label="Conductor material" error={undefined}>
+                {(a) => (
+                  <select {...a} {...register('conductor.material')} className={inputClass}>
+                    <option value="cu">Copper</option>
+                    <option value="al">Aluminium</option>
+                  </select>
+                )}
+              </Field>
+              <Field label="Termination temperature" unit="°C" error={undefined} hint="75 °C is usual for starter terminals (110.14(C))">
+                {(a) => (
+                  <select {...a} {...register('conductor.tempRatingC', num)} className={inputClass}>
+                    <option value={75}>75</option>
+                    <option value={60}>60</option>
+                    <option value={90}>90</option>
+                  </select>
+                )}
+              </Field>
+            </>
+          ) : null}
+        </div>
+        <div className="flex items-center gap-2 border-t border-line px-4 py-3">
+          <Button variant="secondary" disabled={step === 0} onClick={() => setStep((s) => s - 1)}>‹ Back</Button>
+          {step < STEPS.length - 1 ? <Button variant="secondary" onClick={() => setStep((s) => s + 1)}>Next ›</Button> : null}
+          <Button type="submit" className="ml-auto" disabled={save.isPending}>
+            {save.isPending ? 'Saving…' : existing ? 'Save motor' : 'Add motor'}
+          </Button>
+          <Button variant="ghost" onClick={() => navigate(`/jobs/${jobId}/panels/${panelId}/motors`)}>Cancel</Button>
+        </div>
+        {save.error && !(save.error instanceof ApiError && save.error.fieldIssues.length) ? <div className="px-4 pb-3"><ErrorNote error={save.error} /></div> : null}
+      </form>
+      <aside className="space-y-3" aria-label="Selection preview">
+        <div className="rounded border border-line bg-panel p-4">
+          <h2 className="mb-2 flex items-center justify-between text-lg font-semibold">
+            Selection <span className="text-xs font-normal text-ink-soft">live, NEC {p.job.codeEdition}</span>
+          </h2>
+          {preview.error ? <p className="mb-2 text-sm text-state-review">◔ {preview.error}</p> : null}
+          {preview.sel ? <SelectionSummary selection={preview.sel} /> : null}
+        </div>
+        {existing?.selection ? <OverrideEditor panelId={Number(panelId)} load={existing} /> : null}
+        <Caution compact />
+      </aside>
+    </div>
+  );
+}

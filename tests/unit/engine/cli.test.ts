@@ -1,0 +1,69 @@
+// The select CLI run as a child process, as other tools will run it.
+import { execFile } from 'node:child_process';
+import { mkdtempSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { describe, expect, it } from 'vitest';
+
+const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../..');
+
+function run(...args: string[]): Promise<{ code: number; stdout: string; stderr: string }> {
+  return new Promise((resolve) => {
+    execFile('npx', ['tsx', 'server/cli/select.ts', ...args], { cwd: root, timeout: 60_000 }, (err, stdout, stderr) => {
+      const code = err ? (typeof err.code === 'number' ? err.code : 1) : 0;
+      resolve({ code, stdout, stderr });
+    });
+  });
+}
+
+describe('npm run -s select -- FILE.json', () => {
+  it('prints one result per load in input order and the panel roll-up', async () => {
+    const { code, stdout, stderr } = await run('tests/fixtures/select-sample.json');
+    expect(stderr).toBe('');
+    expect(code).toBe(0);
+    const out = JSON.parse(stdout);
+    expect(out.results.map((r: { tag: string }) => r.tag)).toEqual(['P-101', 'CV-201', 'F-301', 'C-401', 'AG-501', 'SP-601', 'HS-701', 'W-801']);
+    const [p101, cv201, f301, c401, ag501, sp601, hs701, w801] = out.results;
+    expect(p101).toMatchObject({ flcAmps: 34, scpd: { ratingAmps: 90 }, conductor: { size: '8 AWG' }, overload: { maxSettingAmps: 38.75 }, relays: { phaseLoss: true } }); // NEC 2023 Tables 430.250, 430.52, 310.16
+    expect(cv201.starter).toMatchObject({ type: 'FVR', reversingContactors: true, interlock: true, iecCategory: 'AC-4' });
+    expect(cv201.enclosure).toMatchObject({ nemaType: '4X', ipCode: 'IP66' });
+    expect(f301.starter.type).toBe('VFD');
+    expect(f301.overload.tripClass).toBe(30);
+    expect(c401.starter.type).toBe('wye-delta');
+    expect(c401.relays).toMatchObject({ phaseLoss: true, phaseReversal: true });
+    expect(ag501.starter.type).toBe('RVSS');
+    expect(ag501.enclosure.flagForEngineer).toBe(true);
+    expect(ag501.assumed.map((a: { field: string }) => a.field)).toContain('kw');
+    expect(sp601.flcAmps).toBe(16); // NEC 2023 Table 430.248
+    expect(hs701.cautions.join(' ')).toMatch(/DC series motor unloaded/);
+    expect(w801.starter.type).toBe('dc-drive');
+    expect(out.panel.feeder).toMatchObject({ minAmpacity: 317, conductorSize: '400 kcmil', ocpdMaxAmps: 500 }); // 430.24, 430.62(A)
+    for (const r of out.results) expect(r.errors).toEqual([]);
+  }, 60_000);
+
+  it('invalid input exits 2 and names each bad field', async () => {
+    const { code, stdout } = await run('tests/fixtures/select-invalid.json');
+    expect(code).toBe(2);
+    const { errors } = JSON.parse(stdout);
+    const paths = errors.map((e: { path: string }) => e.path);
+    expect(paths).toContain('loads[1].hp');
+    expect(paths).toContain('loads[2].dcField');
+    expect(paths).toContain('loads[3].hp');
+    expect(paths).toContain('loads[3].scpdType');
+    expect(stdout).not.toMatch(/\bat .*\.ts:\d+/); // no stack trace
+  }, 60_000);
+
+  it('a missing file and bad JSON exit 2 with an error, never a stack trace', async () => {
+    const missing = await run('tests/fixtures/does-not-exist.json');
+    expect(missing.code).toBe(2);
+    expect(JSON.parse(missing.stdout).errors[0].message).toMatch(/cannot read .*ENOENT/);
+    const dir = mkdtempSync(path.join(tmpdir(), 'pw-cli-'));
+    const bad = path.join(dir, 'bad.json');
+    writeFileSync(bad, '{ "supply": ');
+    const r = await run(bad);
+    expect(r.code).toBe(2);
+    expect(JSON.parse(r.stdout).errors[0].message).toMatch(/not valid JSON/);
+    expect(r.stderr).toBe('');
+  }, 60_000);
+});

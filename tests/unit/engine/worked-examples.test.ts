@@ -1,0 +1,153 @@
+// Worked branch-circuit examples end to end through selectLoad / selectPanel with the repository's
+// rules. Expected values from the NEC 2023 tables and clauses named beside each.
+import { describe, expect, it } from 'vitest';
+import { ValidationError } from '../../../shared/errors';
+import { motor, selector, selector2020, supply240, supply480 } from './selector-setup';
+
+describe('worked branch circuits (NEC 2023)', () => {
+  it('25 hp, 460 V, three-phase, SF 1.15, nameplate 31 A, inverse-time breaker', async () => {
+    const r = await selector.selectLoad(motor({ tag: 'P-101', hp: 25, volts: 460, fla: 31, serviceFactor: 1.15, codeLetter: 'G', poles: 4 }), supply480);
+    expect(r.flcAmps).toBe(34); // NEC 2023 Table 430.250
+    expect(r.tableVolts).toBe(460);
+    expect(r.conductor.minAmpacity).toBe(42.5); // 430.22: 125 % x 34
+    expect(r.conductor.size).toBe('8 AWG'); // Table 310.16 Cu 75 °C: 50 A
+    expect(r.conductor.ampacity).toBe(50);
+    expect(r.scpd.computedMaxAmps).toBe(85); // Table 430.52: 250 % x 34
+    expect(r.scpd.ratingAmps).toBe(90); // 430.52(C)(1) Exc. 1 -> Table 240.6(A) next higher
+    expect(r.scpd.basis).toBe('NEC 2023 430.52(C)(1) Exception No. 1, Table 430.52, Table 240.6(A)');
+    expect(r.overload.maxPercent).toBe(125); // 430.32(A)(1), SF 1.15
+    expect(r.overload.maxSettingAmps).toBe(38.75); // 125 % x 31 A nameplate (430.6(A)(2))
+    expect(r.disconnect.minAmps).toBe(39.1); // 430.110(A): 115 % x 34
+    expect(r.disconnect.minHp).toBe(25); // 430.109(A)
+    expect(r.starter).toMatchObject({ type: 'FVNR', nemaSize: '2', iecCategory: 'AC-3', iecAmps: 34, reversingContactors: false }); // NEMA ICS 2: size 2 = 25 hp at 460 V
+    expect(r.lockedRotorAmps).toMatchObject({ min: 175.7, max: 197.4 }); // Table 430.7(B), letter G
+    expect(r.synchronousRpm).toBe(1800); // 120 x 60 / 4
+    expect(r.errors).toEqual([]);
+    expect(r.assumed).toEqual([]);
+  });
+
+  it('10 hp, 230 V, three-phase, SF 1.0, nameplate 27 A, dual-element fuses', async () => {
+    const r = await selector.selectLoad(motor({ hp: 10, volts: 230, fla: 27, serviceFactor: 1.0, scpdType: 'dual-element-fuse', codeLetter: 'H' }), supply240);
+    expect(r.flcAmps).toBe(28); // NEC 2023 Table 430.250
+    expect(r.conductor.size).toBe('10 AWG'); // 35 A needed, Table 310.16 10 AWG Cu 75 °C = 35 A
+    expect(r.scpd.computedMaxAmps).toBe(49); // 175 % x 28
+    expect(r.scpd.ratingAmps).toBe(50); // Table 240.6(A)
+    expect(r.overload.maxPercent).toBe(115); // 430.32(A)(1), SF 1.0
+    expect(r.overload.maxSettingAmps).toBe(31.05);
+    expect(r.disconnect.minAmps).toBe(32.2);
+    expect(r.starter.nemaSize).toBe('2'); // NEMA ICS 2: size 1 = 7.5 hp at 230 V
+    expect(r.relays.phaseLossByOverload).toBe(true); // fused branch (common practice)
+  });
+
+  it('1 hp, 115 V, single-phase: 16 A, 14 AWG, 40 A inverse-time breaker (240.4(G) -> Article 430)', async () => {
+    const r = await selector.selectLoad(motor({ supply: 'ac1', hp: 1, volts: 115, fla: 14.2, serviceFactor: 1.25, singlePhaseType: 'capacitor-start' }), supply240);
+    expect(r.flcAmps).toBe(16); // NEC 2023 Table 430.248
+    expect(r.conductor.size).toBe('14 AWG'); // 20 A at 75 °C, Table 310.16
+    expect(r.scpd.ratingAmps).toBe(40); // 250 % x 16 = 40, a standard rating
+    expect(r.scpd.basis).toBe('NEC 2023 430.52(C)(1), Table 430.52, Table 240.6(A)');
+    expect(r.overload.maxSettingAmps).toBe(17.75); // 125 % x 14.2
+    expect(r.starter.nemaSize).toBe('0'); // NEMA ICS 2, 1 hp at 115 V single-phase
+  });
+
+  it('5 hp, 240 V DC shunt motor: 20 A, 12 AWG, 30 A breaker at 150 %, field-loss protection', async () => {
+    const r = await selector.selectLoad(motor({ supply: 'dc', hp: 5, volts: 240, dcField: 'shunt' }), supply480);
+    expect(r.flcAmps).toBe(20); // NEC 2023 Table 430.247
+    expect(r.conductor.size).toBe('12 AWG'); // 25 A, Table 310.16 Cu 75 °C
+    expect(r.scpd.maxPercent).toBe(150); // Table 430.52, DC constant voltage
+    expect(r.scpd.ratingAmps).toBe(30);
+    expect(r.starter.type).toBe('dc-armature-resistance');
+    expect(r.starter.nemaSize).toBeNull();
+    expect(r.dc).toEqual({ fieldLossProtection: true, dynamicBraking: false, field: 'shunt' });
+    expect(r.lockedRotorAmps).toBeNull();
+  });
+
+  it('50 hp, 460 V wound-rotor, non-time-delay fuses: 65 A x 150 % = 97.5 -> 100 A; 4 AWG', async () => {
+    const r = await selector.selectLoad(motor({ hp: 50, volts: 460, rotor: 'wound-rotor', scpdType: 'non-time-delay-fuse' }), supply480);
+    expect(r.flcAmps).toBe(65); // NEC 2023 Table 430.250
+    expect(r.scpd.computedMaxAmps).toBe(97.5); // Table 430.52 wound rotor 150 %
+    expect(r.scpd.ratingAmps).toBe(100);
+    expect(r.conductor.size).toBe('4 AWG'); // 81.25 A -> 85 A
+    expect(r.cautions.some((c) => c.includes('430.23'))).toBe(true);
+  });
+
+  it('15 hp, 208 V Design B energy-efficient, instantaneous trip: 46.2 A x 1100 % = 508.2 A', async () => {
+    const r = await selector.selectLoad(motor({ hp: 15, volts: 208, design: 'B', energyEfficient: true, scpdType: 'instantaneous-trip-breaker' }), { ...supply240, volts: 208 });
+    expect(r.flcAmps).toBe(46.2); // NEC 2023 Table 430.250
+    expect(r.scpd.maxPercent).toBe(1100); // Table 430.52
+    expect(r.scpd.ratingAmps).toBe(508.2);
+    expect(r.scpd.basis).toMatch(/430\.52\(C\)\(3\)/);
+    expect(r.cautions.some((c) => c.includes('listed combination motor controller'))).toBe(true);
+  });
+
+  it('the edition setting reaches every citation: NEC 2020 selector, 1/2 hp 460 V -> 15 A breaker', async () => {
+    const r = await selector2020.selectLoad(motor({ hp: 0.5, volts: 460 }), supply480);
+    expect(r.scpd.ratingAmps).toBe(15); // NEC 2020 Table 240.6(A) starts at 15 A
+    const r23 = await selector.selectLoad(motor({ hp: 0.5, volts: 460 }), supply480);
+    expect(r23.scpd.ratingAmps).toBe(10); // NEC 2023 Table 240.6(A) lists 10 A
+    for (const t of r.trace) expect(t.basis).not.toMatch(/NEC 2023/);
+    expect(r.trace.some((t) => t.basis.includes('NEC 2020'))).toBe(true);
+  });
+
+  it('a 400 V motor without nameplate current is an error on that load; with FLA it uses the nameplate and says so', async () => {
+    const bad = await selector.selectLoad(motor({ hp: 10, volts: 400 }), supply480);
+    expect(bad.errors[0]).toMatch(/Table 430\.250: 400 V/);
+    const ok = await selector.selectLoad(motor({ hp: 10, volts: 400, fla: 15.5 }), supply480);
+    expect(ok.errors).toEqual([]);
+    expect(ok.flcAmps).toBe(15.5);
+    expect(ok.starter.nemaSize).toBeNull(); // NEMA ICS 2 has no 400 V column
+    expect(ok.starter.iecAmps).toBe(15.5);
+    expect(ok.cautions.some((c) => c.startsWith('No NEMA size'))).toBe(true);
+    expect(ok.tableVolts).toBeNull();
+    expect(ok.cautions.some((c) => c.includes('nameplate current 15.5 A'))).toBe(true);
+  });
+
+  it('assumed inputs are flagged: no FLA, no code letter, no environment, no service factor', async () => {
+    const r = await selector.selectLoad({ tag: 'X', supply: 'ac3', hp: 10, volts: 460 }, supply480);
+    expect(r.assumed.map((a) => a.field).sort()).toEqual(['codeLetter', 'environment', 'fla', 'serviceFactor']);
+    expect(r.flaAmps).toBe(14); // table FLC stands in for the nameplate
+    expect(r.overload.maxSettingAmps).toBe(16.1); // 115 % x 14
+    expect(r.enclosure).toEqual({ nemaType: '12', ipCode: 'IP52', flagForEngineer: true });
+  });
+
+  it('invalid input throws ValidationError with field paths', async () => {
+    await expect(selector.selectLoad({ tag: 'X', supply: 'ac3', volts: 460 } as never, supply480)).rejects.toThrow(ValidationError);
+    try {
+      await selector.selectPanel({ supply: supply480, loads: [motor({}), { tag: 'Y', supply: 'ac1', hp: 1, volts: 115, dcField: 'shunt' } as never] });
+      expect.unreachable();
+    } catch (e) {
+      expect((e as ValidationError).details).toContainEqual({ path: 'loads[1].dcField', message: 'dcField applies to dc motors only' });
+    }
+  });
+});
+
+describe('panel roll-up through selectPanel (NEC 2023 430.24, 430.62(A))', () => {
+  it('25, 10 and 5 hp at 460 V on inverse-time breakers: 64.1 A -> 6 AWG; 110 A feeder device', async () => {
+    const out = await selector.selectPanel({
+      supply: supply480,
+      loads: [motor({ tag: 'A', hp: 25 }), motor({ tag: 'B', hp: 10 }), motor({ tag: 'C', hp: 5 })],
+    });
+    expect(out.results.map((r) => r.scpd.ratingAmps)).toEqual([90, 35, 20]); // 85->90, 35, 19->20
+    expect(out.panel.feeder.minAmpacity).toBe(64.1);
+    expect(out.panel.feeder.conductorSize).toBe('6 AWG');
+    expect(out.panel.feeder.ocpdMaxAmps).toBe(110);
+    expect(out.panel.totalFlcAmps).toBe(55.6);
+    expect(out.panel.largestMotorTag).toBe('A');
+    expect(out.codeEdition).toBe('NEC 2023');
+  });
+  it('an instantaneous-trip branch counts at the feeder device percentage (430.62(A)); DC and other voltages are left out with a note', async () => {
+    const out = await selector.selectPanel({
+      supply: supply480,
+      loads: [
+        motor({ tag: 'A', hp: 25, scpdType: 'instantaneous-trip-breaker' }),
+        motor({ tag: 'B', hp: 10 }),
+        motor({ tag: 'DC', supply: 'dc', hp: 5, volts: 240, dcField: 'shunt' }),
+        motor({ tag: 'SP', supply: 'ac1', hp: 1, volts: 115 }),
+      ],
+    });
+    // A: 34 A x 250 % (inverse-time feeder device) = 85 -> 90 A; 90 + 14 = 104 -> 100 A
+    expect(out.panel.feeder.ocpdMaxAmps).toBe(100);
+    expect(out.panel.feeder.minAmpacity).toBe(56.5);
+    expect(out.panel.notes?.some((n) => n.startsWith('DC:'))).toBe(true);
+    expect(out.panel.notes?.some((n) => n.startsWith('SP:'))).toBe(true);
+  });
+});
