@@ -425,6 +425,14 @@ export function normaliseWireSize(size: string): WireSize | null {
   return (WIRE_SIZES as readonly string[]).includes(s) ? (s as WireSize) : null;
 }
 
+/** A conductor as the engine writes it: "10 AWG", or parallel sets "3 × 350 kcmil per phase". */
+export function parseConductor(text: string): { size: WireSize; sets: number } | null {
+  const m = /^\s*(\d+)\s*[×x]\s*(.+?)(\s+per\s+phase)?\s*$/i.exec(text);
+  const size = normaliseWireSize(m ? m[2]! : text);
+  const sets = m ? Number(m[1]) : 1;
+  return size && sets >= 1 ? { size, sets } : null;
+}
+
 const hpKey = (v: number | null): HpVolts | null =>
   v !== null && (HP_VOLTS as readonly string[]).includes(String(v)) ? (String(v) as HpVolts) : null;
 
@@ -658,11 +666,13 @@ export function buildBom(input: BuildBomInput): BuildBomResult {
 
     // Terminals and wire
     const leads = (s.supply === 'ac3' ? 3 : 2) * (t === 'wye-delta' || t === 'part-winding' ? 2 : 1) + (s.dc && s.dc.field !== 'series' ? 2 : 0);
-    const size = normaliseWireSize(s.conductor.size);
-    if (size) {
-      b.add(tag, { category: 'terminal-block', kind: 'feed-through', wireSize: size, minAmps: s.conductor.minAmpacity }, leads);
-      b.add(tag, { category: 'terminal-block', kind: 'ground', wireSize: size }, 1);
-      b.add(tag, { category: 'wire', kind: 'power', wireSize: size }, Math.ceil(leads * wireFt));
+    const cond = parseConductor(s.conductor.size);
+    if (cond) {
+      // one terminal and one run per conductor of each parallel set; each terminal carries its share
+      b.add(tag, { category: 'terminal-block', kind: 'feed-through', wireSize: cond.size, minAmps: round2(s.conductor.minAmpacity / cond.sets) }, leads * cond.sets);
+      b.add(tag, { category: 'terminal-block', kind: 'ground', wireSize: cond.size }, 1);
+      if (s.conductor.material === 'cu') b.add(tag, { category: 'wire', kind: 'power', wireSize: cond.size }, Math.ceil(leads * cond.sets * wireFt));
+      else b.unmatched(tag, 'wire', Math.ceil(leads * cond.sets * wireFt), `Wire: aluminum ${cond.size} (the catalogue's wire is copper)`);
     } else {
       b.unmatched(tag, 'terminal-block', leads + 1, `Terminal blocks: conductor size "${s.conductor.size}" is not a known AWG/kcmil size`);
       b.unmatched(tag, 'wire', Math.ceil(leads * wireFt), `Wire: conductor size "${s.conductor.size}" is not a known AWG/kcmil size`);
@@ -693,9 +703,9 @@ export function buildBom(input: BuildBomInput): BuildBomResult {
     const pdb = b.find(pdbReq);
     const pdbQty = pdb ? Math.ceil(input.selections.length / (pdb.ratings.outputs ?? 1)) : 1;
     b.add(P, pdbReq, pdbQty);
-    const feederSize = normaliseWireSize(input.panel.feeder.conductorSize);
-    // main to distribution block: one conductor per pole, 4 ft each (common practice estimate)
-    if (feederSize) b.add(P, { category: 'wire', kind: 'power', wireSize: feederSize }, panelPoles * 4);
+    const feeder = parseConductor(input.panel.feeder.conductorSize);
+    // main to distribution block: one conductor per pole and parallel set, 4 ft each (common practice estimate)
+    if (feeder) b.add(P, { category: 'wire', kind: 'power', wireSize: feeder.size }, panelPoles * feeder.sets * 4);
     else b.unmatched(P, 'wire', panelPoles * 4, `Wire: feeder conductor size "${input.panel.feeder.conductorSize}" is not a known AWG/kcmil size`);
   }
 

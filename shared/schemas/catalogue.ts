@@ -173,7 +173,8 @@ export const PartCodeSchema = z
   .string()
   .regex(/^[A-Z0-9][A-Z0-9-]{2,39}$/, 'part code: 3–40 upper-case letters, digits or hyphens');
 
-export const CatalogueItemSchema = z
+/** The item's fields without the cross-field checks (for .partial()/.pick() in request schemas); validate with CatalogueItemSchema. */
+export const CatalogueItemBaseSchema = z
   .object({
     code: PartCodeSchema,
     description: z.string().trim().min(1).max(200),
@@ -192,8 +193,9 @@ export const CatalogueItemSchema = z
     leadTimeDays: z.number().int().nonnegative(),
     active: z.boolean().default(true),
   })
-  .strict()
-  .superRefine((item, ctx) => {
+  .strict();
+
+export const CatalogueItemSchema = CatalogueItemBaseSchema.superRefine((item, ctx) => {
     for (const key of REQUIRED_RATINGS[item.category]) {
       if (item.ratings[key] === undefined) {
         ctx.addIssue({

@@ -1,0 +1,112 @@
+// Benchmark: the bill of materials of a 200-motor job (selections from the engine), built and written to .xlsx.
+// Figures, not a timed test. Targets (issue 4): build < 1 s, .xlsx < 2 s.
+//   npm run -s bench:bom
+import fs from 'node:fs';
+import path from 'node:path';
+import { Writable } from 'node:stream';
+import { performance } from 'node:perf_hooks';
+import { buildBom } from '../shared/calc/bom';
+import { CatalogueFileSchema, LabourUnitsFileSchema } from '../shared/schemas/catalogue';
+import type { LoadInput, SelectionInput } from '../shared/schemas/load';
+import { createSelector } from '../shared/engine/selector';
+import type { SelectionOutput } from '../shared/schemas/selection';
+import { loadRuleFiles } from '../server/engine/rule-files';
+import { writeBomWorkbook } from '../server/modules/bom/export';
+
+const MOTORS = 200;
+const PANELS = 4;
+
+/** deterministic pseudo-random (mulberry32) so every run times the same job */
+function rng(seed: number): () => number {
+  let a = seed;
+  return () => {
+    a = (a + 0x6d2b79f5) | 0;
+    let t = Math.imul(a ^ (a >>> 15), 1 | a);
+    t = (t + Math.imul(t ^ (t >>> 7), 61 | t)) ^ t;
+    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
+  };
+}
+
+function job(n: number): SelectionInput {
+  const r = rng(4242);
+  const pick = <T,>(xs: readonly T[]): T => xs[Math.floor(r() * xs.length)] as T;
+  const loads: LoadInput[] = [];
+  for (let i = 0; i < n; i++) {
+    const kind = r();
+    const base = { tag: `M-${String(i + 1).padStart(3, '0')}`, environment: 'indoor-dusty' as const, reversing: r() < 0.2, critical: r() < 0.1, inertia: pick(['normal', 'normal', 'high'] as const) };
+    if (kind < 0.8) {
+      loads.push({ ...base, supply: 'ac3', hp: pick([0.5, 1, 2, 3, 5, 7.5, 10, 15, 20, 25, 40, 50]), volts: 460, serviceFactor: 1.15, codeLetter: 'G', speedControl: r() < 0.25 ? 'variable' : 'fixed', startingLimit: r() < 0.1 ? 'reduced-inrush' : 'none', jogging: r() < 0.05, reverseRotationHazard: r() < 0.1, cableLengthFt: Math.round(r() * 300), scpdType: pick(['inverse-time-breaker', 'dual-element-fuse'] as const) });
+    } else if (kind < 0.92) {
+      loads.push({ ...base, supply: 'ac1', hp: pick([0.5, 1, 2, 3]), volts: 230, singlePhaseType: 'capacitor-start' });
+    } else {
+      loads.push({ ...base, supply: 'dc', hp: pick([1, 2, 5, 10]), volts: 240, dcField: pick(['shunt', 'compound'] as const) });
+    }
+  }
+  return { supply: { volts: 480, phases: 3, hz: 60, availableFaultKa: 65, ambientC: 30 }, loads };
+}
+
+function loadCatalogue() {
+  const dir = path.resolve(import.meta.dirname, '../catalog');
+  const files = fs.readdirSync(dir).filter((f) => f.endsWith('.json') && f !== 'labour-units.json');
+  const catalogue = files.flatMap((f) => CatalogueFileSchema.parse(JSON.parse(fs.readFileSync(path.join(dir, f), 'utf8'))));
+  const labourUnits = LabourUnitsFileSchema.parse(JSON.parse(fs.readFileSync(path.join(dir, 'labour-units.json'), 'utf8')));
+  return { catalogue, labourUnits };
+}
+
+const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)]!;
+
+async function main(): Promise<void> {
+  const input = job(MOTORS);
+  const selector = createSelector(loadRuleFiles());
+  const per = Math.ceil(MOTORS / PANELS);
+  const panelInputs = Array.from({ length: PANELS }, (_, i) => ({ ...input, loads: input.loads.slice(i * per, (i + 1) * per) }));
+  const selections: SelectionOutput[] = [];
+  for (const p of panelInputs) selections.push(await selector.selectPanel(p));
+  const { catalogue, labourUnits } = loadCatalogue();
+
+  const build = () =>
+    selections.map((s, i) =>
+      buildBom({ panelName: `MCC-${i + 1}`, selections: s.results, panel: s.panel, supply: { volts: input.supply.volts, phases: input.supply.phases, hz: input.supply.hz ?? 60 }, enclosureType: '12', catalogue, labourUnits, markupPercent: 15, labourRatePerHour: 85 }),
+    );
+  build(); // warm-up (JIT), not timed
+  const buildTimes: number[] = [];
+  let boms = build();
+  for (let i = 0; i < 7; i++) {
+    const t = performance.now();
+    boms = build();
+    buildTimes.push(performance.now() - t);
+  }
+  const lines = boms.reduce((n, b) => n + b.lines.length, 0);
+  const unmatched = boms.flatMap((b) => b.lines.filter((l) => l.status === 'unmatched'));
+
+  const panels = boms.map((b, i) => ({ name: `MCC-${i + 1}`, lines: b.lines }));
+  const jobInfo = { number: 'J-BENCH', name: 'Benchmark job', markupPercent: 15, labourRatePerHour: 85 };
+  const writeTimes: number[] = [];
+  let bytes = 0;
+  for (let i = 0; i < 4; i++) {
+    let n = 0;
+    const sink = new Writable({ write(chunk: Buffer, _e, cb) { n += chunk.length; cb(); } });
+    const done = new Promise((r) => sink.on('finish', r));
+    const t = performance.now();
+    await writeBomWorkbook(jobInfo, panels, sink);
+    await done;
+    if (i > 0) writeTimes.push(performance.now() - t); // first run is warm-up
+    bytes = n;
+  }
+
+  console.log(`bill of materials, ${MOTORS} motors in ${PANELS} panels, ${catalogue.length} catalogue items`);
+  console.log(`  lines: ${lines}, unmatched: ${unmatched.length}`);
+  console.log(`  build:  median ${median(buildTimes).toFixed(1)} ms, min ${Math.min(...buildTimes).toFixed(1)} ms (target < 1000 ms)`);
+  console.log(`  .xlsx:  median ${median(writeTimes).toFixed(1)} ms, min ${Math.min(...writeTimes).toFixed(1)} ms, ${(bytes / 1024).toFixed(0)} kB (target < 2000 ms)`);
+  if (unmatched.length > 0) {
+    const byNeed = new Map<string, number>();
+    for (const u of unmatched) byNeed.set(u.requiredRatings ?? u.category, (byNeed.get(u.requiredRatings ?? u.category) ?? 0) + 1);
+    console.log('  unmatched needs:');
+    for (const [need, n] of [...byNeed].sort((a, b) => b[1] - a[1]).slice(0, 15)) console.log(`    ${n} × ${need}`);
+  }
+}
+
+main().catch((e) => {
+  console.error(e);
+  process.exit(1);
+});
