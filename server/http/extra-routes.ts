@@ -1,7 +1,8 @@
 // Routes of the panel, catalogue and bill-of-materials modules, collected here so app.ts stays short.
 import type { AnyRoute } from './route-table';
 import { panelRoutes } from '../modules/panels/router';
+import { importRoutes } from '../modules/panels/import-router';
 
 export function extraRoutes(): AnyRoute[] {
-  return [...panelRoutes];
+  return [...panelRoutes, ...importRoutes];
 }

@@ -1,5 +1,7 @@
-import { Empty } from '../../../components/ui/feedback';
+import { useParams } from 'react-router-dom';
+import { ActivityList } from '../../../features/jobs/components/activity-list';
 
 export function Component() {
-  return <Empty title="This section is being built" />;
+  const { jobId, panelId } = useParams();
+  return <ActivityList jobId={Number(jobId)} panelId={Number(panelId)} />;
 }

@@ -1,5 +1,140 @@
-import { Empty } from '../../../components/ui/feedback';
+import { useState } from 'react';
+import { useQuery } from '@tanstack/react-query';
+import { useParams } from 'react-router-dom';
+import { panelQueries, usePanelAction } from '../../../features/panels/api/panels';
+import { hasRole, sessionQueries } from '../../../features/auth/api/session';
+import { SignOffState } from '../../../components/ui/status';
+import { Button } from '../../../components/ui/button';
+import { Caution, ErrorNote, Loading } from '../../../components/ui/feedback';
+import { inputClass } from '../../../components/ui/field';
+
+const money = (n: number) => n.toLocaleString(undefined, { style: 'currency', currency: 'USD' });
+
+function ChangeReport({ panelId, from, to }: { panelId: number; from: number; to: number }) {
+  const r = useQuery(panelQueries.changeReport(panelId, from, to));
+  if (r.isPending) return <Loading what="Comparing revisions" />;
+  if (r.isError) return <ErrorNote error={r.error} />;
+  const d = r.data;
+  const rows = [
+    ...d.bom.added.map((e) => ({ kind: 'Added', e })),
+    ...d.bom.removed.map((e) => ({ kind: 'Removed', e })),
+    ...d.bom.changed.map((e) => ({ kind: 'Changed', e })),
+  ];
+  return (
+    <div className="space-y-2" aria-label="Change report">
+      <p className="text-sm">
+        Motors added: <strong>{d.motors.added.join(', ') || 'none'}</strong> · removed: <strong>{d.motors.removed.join(', ') || 'none'}</strong> · changed:{' '}
+        <strong>{d.motors.changed.join(', ') || 'none'}</strong>
+      </p>
+      <p className="text-sm">
+        Material {money(d.totals.from.materialCost)} → {money(d.totals.to.materialCost)} (<strong>{d.totals.materialDelta >= 0 ? '+' : ''}{money(d.totals.materialDelta)}</strong>) · Sell{' '}
+        {money(d.totals.from.sell)} → {money(d.totals.to.sell)} (<strong data-testid="sell-delta">{d.totals.sellDelta >= 0 ? '+' : ''}{money(d.totals.sellDelta)}</strong>)
+      </p>
+      {rows.length === 0 ? (
+        <p className="text-sm text-ink-soft">The bills of materials are the same.</p>
+      ) : (
+        <table className="dense w-full text-sm">
+          <thead className="text-left text-xs uppercase text-ink-soft">
+            <tr><th className="py-1">Change</th><th>Bucket</th><th>Part</th><th>Description</th><th className="text-right">Qty before</th><th className="text-right">Qty after</th><th className="text-right">Cost Δ ($)</th></tr>
+          </thead>
+          <tbody>
+            {rows.map(({ kind, e }) => (
+              <tr key={`${kind}-${e.key}`} className="border-t border-line/60">
+                <td className="py-1 font-semibold">{kind === 'Added' ? '＋' : kind === 'Removed' ? '−' : '≠'} {kind}</td>
+                <td>{e.bucket}</td>
+                <td>{e.code ?? '—'}</td>
+                <td>{e.description}</td>
+                <td className="text-right">{e.before?.quantity ?? '—'}</td>
+                <td className="text-right">{e.after?.quantity ?? '—'}</td>
+                <td className="text-right">{e.costDelta.toFixed(2)}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      )}
+    </div>
+  );
+}
 
 export function Component() {
-  return <Empty title="This section is being built" />;
+  const panelId = Number(useParams().panelId);
+  const { data: p } = useQuery(panelQueries.detail(panelId));
+  const { data: me } = useQuery(sessionQueries.me());
+  const act = usePanelAction(panelId);
+  const [comment, setComment] = useState('');
+  const revs = p?.revisions ?? [];
+  const [from, setFrom] = useState<number | null>(null);
+  const [to, setTo] = useState<number | null>(null);
+  if (!p) return null;
+  const isDesigner = hasRole(me, 'designer', 'admin');
+  const isEngineer = hasRole(me, 'engineer');
+  const run = (action: 'submit' | 'return' | 'approve') => act.mutate({ action, version: p.version, comment }, { onSuccess: () => setComment('') });
+  const a = from ?? (revs.length > 1 ? revs[revs.length - 2].number : null);
+  const b = to ?? (revs.length > 1 ? revs[revs.length - 1].number : null);
+  return (
+    <div className="grid gap-5 lg:grid-cols-[minmax(0,1fr)_380px]">
+      <div className="space-y-5">
+        <section className="rounded border border-line bg-panel p-4">
+          <h2 className="mb-2 flex items-center gap-2 text-lg font-semibold">Sign-off <SignOffState state={p.status} /></h2>
+          <p className="mb-3 text-sm text-ink-soft">Draft → In review → Signed off (a frozen revision) or Returned. Changing a signed-off panel opens a new draft.</p>
+          <textarea aria-label="Sign-off comment" className={inputClass} rows={3} placeholder={p.status === 'in_review' && isEngineer ? 'What must change (required to return)' : 'Note (optional)'} value={comment} onChange={(e) => setComment(e.target.value)} />
+          <div className="mt-2 flex flex-wrap gap-2">
+            {isDesigner && (p.status === 'draft' || p.status === 'returned') ? <Button onClick={() => run('submit')} disabled={act.isPending}>Submit for sign-off</Button> : null}
+            {isEngineer && p.status === 'in_review' ? (
+              <>
+                <Button onClick={() => run('approve')} disabled={act.isPending}>✔ Sign off as R{p.revisionNumber === null ? 0 : p.revisionNumber + 1}</Button>
+                <Button variant="danger" onClick={() => run('return')} disabled={act.isPending || !comment.trim()}>↩ Return to designer</Button>
+              </>
+            ) : null}
+            {p.status === 'in_review' && !isEngineer ? <p className="text-sm text-state-review">◔ Waiting for an engineer.</p> : null}
+          </div>
+          {act.error ? <div className="mt-2"><ErrorNote error={act.error} /></div> : null}
+          <div className="mt-3"><Caution compact /></div>
+        </section>
+        <section className="rounded border border-line bg-panel p-4">
+          <h2 className="mb-2 text-lg font-semibold">Change report</h2>
+          {revs.length < 2 ? (
+            <p className="text-sm text-ink-soft">Two signed-off revisions are needed to compare. {revs.length === 1 ? `R${revs[0].number} exists.` : ''}</p>
+          ) : (
+            <>
+              <div className="mb-2 flex items-center gap-2 text-sm">
+                Compare
+                <select aria-label="From revision" className={`${inputClass} w-24`} value={a ?? ''} onChange={(e) => setFrom(Number(e.target.value))}>
+                  {revs.map((r) => <option key={r.number} value={r.number}>R{r.number}</option>)}
+                </select>
+                with
+                <select aria-label="To revision" className={`${inputClass} w-24`} value={b ?? ''} onChange={(e) => setTo(Number(e.target.value))}>
+                  {revs.map((r) => <option key={r.number} value={r.number}>R{r.number}</option>)}
+                </select>
+              </div>
+              {a !== null && b !== null ? <ChangeReport panelId={panelId} from={a} to={b} /> : null}
+            </>
+          )}
+        </section>
+      </div>
+      <aside className="space-y-4">
+        <section className="rounded border border-line bg-panel p-4">
+          <h2 className="mb-2 text-lg font-semibold">Revisions</h2>
+          {revs.length === 0 ? <p className="text-sm text-ink-soft">None yet.</p> : (
+            <ul className="text-sm">
+              {revs.map((r) => <li key={r.number}><strong>R{r.number}</strong> signed off by {r.approvedBy ?? '—'} on {new Date(r.approvedAt).toLocaleString()}</li>)}
+            </ul>
+          )}
+        </section>
+        <section className="rounded border border-line bg-panel p-4" aria-label="Comments">
+          <h2 className="mb-2 text-lg font-semibold">Comments</h2>
+          {p.comments.length === 0 ? <p className="text-sm text-ink-soft">None yet.</p> : (
+            <ul className="space-y-2 text-sm">
+              {p.comments.map((c) => (
+                <li key={c.id}>
+                  <strong>{c.author}</strong>{c.loadId ? ` on ${p.loads.find((l) => l.id === c.loadId)?.tag ?? 'a motor'}` : ''}: {c.body}
+                  <div className="text-xs text-ink-soft">{new Date(c.at).toLocaleString()}</div>
+                </li>
+              ))}
+            </ul>
+          )}
+        </section>
+      </aside>
+    </div>
+  );
 }

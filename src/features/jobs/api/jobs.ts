@@ -18,6 +18,7 @@ export interface ActivityEntry {
   user: string | null;
   at: string;
   diff: Record<string, unknown> | null;
+  panelId: number | null;
 }
 
 export const jobQueries = {

@@ -1,0 +1,60 @@
+import multer from 'multer';
+import { z } from 'zod';
+import { defineRoute } from '../../http/route-table';
+import { ValidationError } from '../../../shared/errors';
+import { MAX_IMPORT_BYTES, commitImport, importTemplate, panelPreview } from './import';
+
+const DESIGN = ['admin', 'designer'] as const;
+const PanelId = z.object({ panelId: z.coerce.number().int().positive() });
+
+const upload = multer({
+  storage: multer.memoryStorage(),
+  limits: { fileSize: MAX_IMPORT_BYTES, files: 1, fields: 5, parts: 6 },
+}).single('file');
+
+function requireFile(file: Express.Multer.File | undefined): Express.Multer.File {
+  if (!file) throw new ValidationError('Choose an .xlsx or .csv file to upload', [{ path: 'file', message: 'no file uploaded' }]);
+  return file;
+}
+
+export const importRoutes = [
+  defineRoute({
+    method: 'get',
+    path: '/api/panels/:panelId/import/template',
+    access: DESIGN,
+    summary: 'Motor-list template (.xlsx)',
+    params: PanelId,
+    handler: async ({ res }) => {
+      const buf = await importTemplate();
+      res.setHeader('content-type', 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet');
+      res.setHeader('content-disposition', 'attachment; filename="panelwright-motor-list.xlsx"');
+      res.end(buf);
+      return undefined;
+    },
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/api/panels/:panelId/import/preview',
+    access: DESIGN,
+    summary: 'Preview a motor-list upload: every row with its problems, nothing saved',
+    params: PanelId,
+    before: [upload],
+    status: 200,
+    handler: ({ user, params, req }) => {
+      const f = requireFile(req.file);
+      return panelPreview(user, params.panelId, f.buffer, f.originalname);
+    },
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/api/panels/:panelId/import/commit',
+    access: DESIGN,
+    summary: 'Import a motor list: all rows or none',
+    params: PanelId,
+    before: [upload],
+    handler: ({ user, params, req }) => {
+      const f = requireFile(req.file);
+      return commitImport(user, params.panelId, f.buffer, f.originalname);
+    },
+  }),
+];

@@ -1,0 +1,206 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import ExcelJS from 'exceljs';
+import type { SMTPServer } from 'smtp-server';
+import { send, signInAs, type Session } from '../setup/api';
+import { startFakeSmtp } from '../../server/modules/mail/fake-smtp';
+import { resetMailer } from '../../server/modules/mail/mailer';
+import { resetEnvCache } from '../../server/config/env';
+import { MailMessage } from '../../server/db/models/mail-message';
+import { Revision } from '../../server/db/models/revision';
+
+let smtp: SMTPServer;
+const uniq = () => `P-${Date.now().toString(36)}-${Math.floor(Math.random() * 1e5)}`;
+
+async function newPanel(designer: Session) {
+  const job = (await send(designer, 'post', '/api/jobs', { number: uniq(), name: 'Filter gallery', availableFaultKa: 22 }).expect(201)).body;
+  const panel = (await send(designer, 'post', `/api/jobs/${job.id}/panels`, { name: 'MCC-F' }).expect(201)).body;
+  return { job, panel };
+}
+
+async function waitForMail(subjectPart: string) {
+  for (let i = 0; i < 40; i++) {
+    const m = await MailMessage.findOne({ where: {}, order: [['id', 'DESC']] });
+    const all = await MailMessage.findAll();
+    const hit = all.find((x) => x.subject.includes(subjectPart));
+    if (hit) return hit;
+    void m;
+    await new Promise((r) => setTimeout(r, 100));
+  }
+  return null;
+}
+
+beforeAll(async () => {
+  const port = 30000 + Math.floor(Math.random() * 20000);
+  process.env.PW_SMTP_FAKE_PORT = String(port);
+  resetEnvCache();
+  resetMailer();
+  smtp = await startFakeSmtp(port);
+});
+afterAll(async () => {
+  await new Promise<void>((r) => smtp.close(() => r()));
+});
+
+describe('motors on a panel', () => {
+  it('stores the engine selection on save: 25 hp 460 V worked example', async () => {
+    const designer = await signInAs('designer');
+    const { panel } = await newPanel(designer);
+    const r = await send(designer, 'post', `/api/panels/${panel.id}/loads`, { answers: { tag: 'P-1', supply: 'ac3', hp: 25, volts: 460, fla: 31, serviceFactor: 1.15, environment: 'indoor-dusty' } }).expect(201);
+    // NEC 2023 Table 430.250: 25 hp 460 V = 34 A; 430.22: 42.5 A -> 8 AWG Cu 75 °C (50 A, Table 310.16);
+    // Table 430.52 inverse-time breaker 250 % = 85 A -> next standard 90 A (240.6(A)); 430.32(A)(1) 125 % x 31 = 38.75 A.
+    expect(r.body.selection).toMatchObject({ flcAmps: 34, conductor: { size: '8 AWG' }, scpd: { ratingAmps: 90 }, overload: { maxSettingAmps: 38.75 } });
+    const detail = (await designer.agent.get(`/api/panels/${panel.id}`).expect(200)).body;
+    // 430.24 with one motor: 125 % of 34 A = 42.5 A
+    expect(detail.rollup.feeder.minAmpacity).toBe(42.5);
+  });
+
+  it('names the bad answer field and refuses a duplicate tag', async () => {
+    const designer = await signInAs('designer');
+    const { panel } = await newPanel(designer);
+    const bad = await send(designer, 'post', `/api/panels/${panel.id}/loads`, { answers: { tag: 'M-1', supply: 'ac3', volts: 460 } }).expect(400);
+    expect(bad.body.error.details.map((d: { path: string }) => d.path)).toContain('body.answers.hp');
+    await send(designer, 'post', `/api/panels/${panel.id}/loads`, { answers: { tag: 'M-1', supply: 'ac3', hp: 5, volts: 460 } }).expect(201);
+    const dup = await send(designer, 'post', `/api/panels/${panel.id}/loads`, { answers: { tag: 'm-1', supply: 'ac3', hp: 5, volts: 460 } }).expect(400);
+    expect(dup.body.error.details[0].path).toBe('body.answers.tag');
+  });
+
+  it('keeps overrides with their justification and refuses an undersized conductor', async () => {
+    const designer = await signInAs('designer');
+    const { panel } = await newPanel(designer);
+    const load = (await send(designer, 'post', `/api/panels/${panel.id}/loads`, { answers: { tag: 'K-1', supply: 'ac3', hp: 25, volts: 460 } }).expect(201)).body;
+    const small = await send(designer, 'put', `/api/loads/${load.id}/overrides`, { version: load.version, overrides: [{ field: 'conductor.size', value: '12 AWG', justification: 'Existing cable in the field is 12 AWG' }] }).expect(400);
+    expect(small.body.error.message).toMatch(/below the 42.5 A that 430.22 requires/);
+    const ok = await send(designer, 'put', `/api/loads/${load.id}/overrides`, { version: load.version, overrides: [{ field: 'starter.nemaSize', value: '3', justification: 'Shop standard: size 3 for all pump buckets' }] }).expect(200);
+    expect(ok.body.effective.starter.nemaSize).toBe('3');
+    expect(ok.body.selection.starter.nemaSize).toBe('2');
+    expect(ok.body.overrides[0]).toMatchObject({ field: 'starter.nemaSize', was: '2', by: 'Dev Halloran' });
+    const short = await send(designer, 'put', `/api/loads/${load.id}/overrides`, { version: ok.body.version, overrides: [{ field: 'starter.nemaSize', value: '4', justification: 'bigger' }] }).expect(400);
+    expect(short.body.error.details[0].path).toBe('body.overrides[0].justification');
+  });
+});
+
+describe('review and sign-off', () => {
+  it('moves Draft → In review → Returned → In review → Signed off, with the right roles, mail and a frozen revision', async () => {
+    const designer = await signInAs('designer');
+    const engineer = await signInAs('engineer');
+    const estimator = await signInAs('estimator');
+    const { job, panel } = await newPanel(designer);
+    await send(designer, 'post', `/api/panels/${panel.id}/loads`, { answers: { tag: 'P-1', supply: 'ac3', hp: 10, volts: 460, environment: 'indoor-dusty' } }).expect(201);
+    let p = (await designer.agent.get(`/api/panels/${panel.id}`)).body;
+
+    await send(engineer, 'post', `/api/panels/${panel.id}/approve`, { version: p.version }).expect(409); // still a draft
+    await send(estimator, 'post', `/api/panels/${panel.id}/submit`, { version: p.version }).expect(403);
+    p = (await send(designer, 'post', `/api/panels/${panel.id}/submit`, { version: p.version, comment: 'Ready' }).expect(200)).body;
+    expect(p.status).toBe('in_review');
+    expect(await waitForMail(`Sign-off requested: ${job.number}`)).not.toBeNull();
+
+    // motors are read-only in review
+    const locked = await send(designer, 'post', `/api/panels/${panel.id}/loads`, { answers: { tag: 'P-2', supply: 'ac3', hp: 5, volts: 460 } }).expect(409);
+    expect(locked.body.error.message).toMatch(/in review/);
+    // a designer cannot approve or return
+    await send(designer, 'post', `/api/panels/${panel.id}/approve`, { version: p.version }).expect(403);
+    await send(designer, 'post', `/api/panels/${panel.id}/return`, { version: p.version, comment: 'x' }).expect(403);
+    // returning needs a comment
+    const noComment = await send(engineer, 'post', `/api/panels/${panel.id}/return`, { version: p.version, comment: '' }).expect(400);
+    expect(noComment.body.error.details[0].path).toBe('body.comment');
+    p = (await send(engineer, 'post', `/api/panels/${panel.id}/return`, { version: p.version, comment: 'Use a dual-element fuse on P-1' }).expect(200)).body;
+    expect(p.status).toBe('returned');
+    expect(await waitForMail(`Returned: ${job.number}`)).not.toBeNull();
+
+    const loadId = p.loads[0].id;
+    const fixed = await send(designer, 'put', `/api/loads/${loadId}`, { version: p.loads[0].version, answers: { ...p.loads[0].answers, scpdType: 'dual-element-fuse' } }).expect(200);
+    // Table 430.52 dual-element fuse 175 % of 14 A (Table 430.250, 10 hp 460 V) = 24.5 A -> next standard 25 A
+    expect(fixed.body.selection.scpd).toMatchObject({ type: 'dual-element-fuse', ratingAmps: 25 });
+    p = (await designer.agent.get(`/api/panels/${panel.id}`)).body;
+    p = (await send(designer, 'post', `/api/panels/${panel.id}/submit`, { version: p.version }).expect(200)).body;
+    p = (await send(engineer, 'post', `/api/panels/${panel.id}/approve`, { version: p.version, comment: 'OK' }).expect(200)).body;
+    expect(p.status).toBe('signed_off');
+    expect(p.revisionNumber).toBe(0);
+    expect(await waitForMail(`Signed off: ${job.number}`)).not.toBeNull();
+
+    const r0 = (await estimator.agent.get(`/api/panels/${panel.id}/revisions/0`).expect(200)).body;
+    expect(r0.snapshot.loads[0].selection.scpd.ratingAmps).toBe(25);
+    expect(r0.snapshot.bom.length).toBeGreaterThan(3);
+
+    // editing a signed-off panel opens a new draft; R0 stays as it was
+    const again = (await designer.agent.get(`/api/panels/${panel.id}`)).body;
+    await send(designer, 'post', `/api/panels/${panel.id}/loads`, { answers: { tag: 'P-2', supply: 'ac3', hp: 20, volts: 460 } }).expect(201);
+    const draft = (await designer.agent.get(`/api/panels/${panel.id}`)).body;
+    expect(draft.status).toBe('draft');
+    expect(draft.version).toBeGreaterThan(again.version);
+    const r0again = (await estimator.agent.get(`/api/panels/${panel.id}/revisions/0`).expect(200)).body;
+    expect(r0again.snapshot).toEqual(r0.snapshot);
+
+    // second sign-off and the change report R0 → R1 with the cost delta
+    let d = (await send(designer, 'post', `/api/panels/${panel.id}/submit`, { version: draft.version }).expect(200)).body;
+    d = (await send(engineer, 'post', `/api/panels/${panel.id}/approve`, { version: d.version }).expect(200)).body;
+    expect(d.revisionNumber).toBe(1);
+    const report = (await estimator.agent.get(`/api/panels/${panel.id}/change-report?from=0&to=1`).expect(200)).body;
+    expect(report.motors.added).toEqual(['P-2']);
+    expect(report.bom.added.length).toBeGreaterThan(0);
+    expect(report.totals.sellDelta).toBeGreaterThan(0);
+    expect(await Revision.count({ where: { panelId: panel.id } })).toBe(2);
+  });
+});
+
+describe('motor-list import', () => {
+  async function workbook(rows: Array<Record<string, unknown>>) {
+    const wb = new ExcelJS.Workbook();
+    const ws = wb.addWorksheet('Motors');
+    const headers = ['tag', 'description', 'supply', 'hp', 'volts', 'reversing', 'environment'];
+    ws.addRow(headers);
+    for (const r of rows) ws.addRow(headers.map((h) => r[h] ?? ''));
+    return Buffer.from(await wb.xlsx.writeBuffer());
+  }
+
+  it('previews each row with its problems and imports nothing while one row is bad', async () => {
+    const designer = await signInAs('designer');
+    const { panel } = await newPanel(designer);
+    const file = await workbook([
+      { tag: 'A-1', supply: 'ac3', hp: 10, volts: 460 },
+      { tag: 'A-2', supply: 'ac3', hp: 'ten', volts: 460 },
+      { tag: 'A-1', supply: 'ac3', hp: 5, volts: 460 },
+      { tag: 'A-4', supply: 'ac9', hp: 5, volts: 460, reversing: 'maybe' },
+    ]);
+    const prev = await designer.agent.post(`/api/panels/${panel.id}/import/preview`).set('x-csrf-token', designer.token).attach('file', file, 'motors.xlsx').expect(200);
+    expect(prev.body.ok).toBe(false);
+    const problems = Object.fromEntries(prev.body.rows.map((r: { row: number; problems: Array<{ column: string }> }) => [r.row, r.problems.map((p) => p.column)]));
+    expect(problems).toEqual({ 2: [], 3: ['hp'], 4: ['tag'], 5: ['reversing'] });
+    const commit = await designer.agent.post(`/api/panels/${panel.id}/import/commit`).set('x-csrf-token', designer.token).attach('file', file, 'motors.xlsx').expect(400);
+    expect(commit.body.error.message).toMatch(/nothing was imported/);
+    const after = (await designer.agent.get(`/api/panels/${panel.id}`)).body;
+    expect(after.loads).toEqual([]);
+  });
+
+  it('imports a good file in one go, from .xlsx and from .csv', async () => {
+    const designer = await signInAs('designer');
+    const { panel } = await newPanel(designer);
+    const file = await workbook([
+      { tag: 'B-1', description: 'Mixer', supply: 'ac3', hp: 15, volts: 460, environment: 'washdown' },
+      { tag: 'B-2', supply: 'ac3', hp: 3, volts: 460, reversing: 'yes' },
+    ]);
+    const r = await designer.agent.post(`/api/panels/${panel.id}/import/commit`).set('x-csrf-token', designer.token).attach('file', file, 'motors.xlsx').expect(201);
+    expect(r.body.imported).toBe(2);
+    const csv = 'tag,supply,hp,volts\r\nB-3,ac1,1,115\r\n"B-4",ac3,7.5,460\r\n';
+    await designer.agent.post(`/api/panels/${panel.id}/import/commit`).set('x-csrf-token', designer.token).attach('file', Buffer.from(csv), 'more.csv').expect(201);
+    const p = (await designer.agent.get(`/api/panels/${panel.id}`)).body;
+    expect(p.loads.map((l: { tag: string }) => l.tag)).toEqual(['B-1', 'B-2', 'B-3', 'B-4']);
+    const b1 = p.loads[0].selection;
+    expect(b1.enclosure.nemaType).toMatch(/^4X?$/); // NEMA 250: washdown -> Type 4 or 4X
+    expect(p.loads[1].selection.starter.type).toBe('FVR');
+  });
+
+  it('refuses a file that is not a spreadsheet, and a template can be downloaded', async () => {
+    const designer = await signInAs('designer');
+    const { panel } = await newPanel(designer);
+    const r = await designer.agent.post(`/api/panels/${panel.id}/import/preview`).set('x-csrf-token', designer.token).attach('file', Buffer.from('%PDF-1.4 not a workbook'), 'motors.xlsx').expect(415);
+    expect(r.body.error.code).toBe('unsupported_file');
+    const t = await designer.agent.get(`/api/panels/${panel.id}/import/template`).buffer(true).parse((res, cb) => {
+      const chunks: Buffer[] = [];
+      res.on('data', (c: Buffer) => chunks.push(c));
+      res.on('end', () => cb(null, Buffer.concat(chunks)));
+    }).expect(200);
+    const wb = new ExcelJS.Workbook();
+    await wb.xlsx.load(t.body as ArrayBuffer);
+    expect(wb.getWorksheet('Motors')!.getRow(1).getCell(1).value).toBe('tag');
+  });
+});
