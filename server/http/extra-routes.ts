@@ -2,7 +2,10 @@
 import type { AnyRoute } from './route-table';
 import { panelRoutes } from '../modules/panels/router';
 import { importRoutes } from '../modules/panels/import-router';
+import { estimatingRoutes } from '../modules/bom/router';
+import { backupRoutes } from '../modules/backup/router';
+import { checkRoutes } from '../modules/checks/router';
 
 export function extraRoutes(): AnyRoute[] {
-  return [...panelRoutes, ...importRoutes];
+  return [...panelRoutes, ...importRoutes, ...estimatingRoutes, ...backupRoutes, ...checkRoutes];
 }

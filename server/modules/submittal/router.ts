@@ -1,0 +1,66 @@
+import { z } from 'zod';
+import { defineRoute } from '../../http/route-table';
+import { ConflictError } from '../../../shared/errors';
+import { computeChecks } from '../checks/service';
+import { writeSubmittalPdf, type SubmittalData } from './pdf';
+
+const ALL = ['admin', 'designer', 'estimator', 'engineer'] as const;
+const PanelId = z.object({ panelId: z.coerce.number().int().positive() });
+
+/** A file name from the job number and panel name: letters, digits, dot, dash and underscore only. */
+export function submittalFileName(jobNumber: string, panelName: string): string {
+  const clean = `${jobNumber} ${panelName}`
+    .normalize('NFKD')
+    .replace(/[^A-Za-z0-9._-]+/g, '-')
+    .replace(/-+/g, '-')
+    .replace(/^[-.]+|[-.]+$/g, '')
+    .slice(0, 120);
+  return `${clean || 'panel'}-submittal.pdf`;
+}
+
+export const submittalRoutes = [
+  defineRoute({
+    method: 'get',
+    path: '/api/panels/:panelId/submittal.pdf',
+    access: ALL,
+    summary: 'The panel submittal as a PDF (download)',
+    params: PanelId,
+    handler: async ({ user, params, res }) => {
+      const { checks, selections, rollup } = await computeChecks(user, params.panelId);
+      const missing = [
+        selections.length === 0 ? 'the panel has no motors' : null,
+        checks.heat.result ? null : checks.heat.reason,
+        checks.nameplate.result ? null : checks.nameplate.reason,
+        checks.controlPower.result ? null : checks.controlPower.reason,
+      ].filter((x): x is string => !!x);
+      if (missing.length > 0 || !rollup || !checks.heat.result || !checks.nameplate.result || !checks.controlPower.result) {
+        throw new ConflictError(`The submittal cannot be written yet: ${missing.join(' ')}`);
+      }
+      const data: SubmittalData = {
+        job: {
+          number: checks.job.number,
+          name: checks.job.name,
+          customer: checks.job.customer,
+          site: checks.job.site,
+          availableFaultKa: checks.job.availableFaultKa,
+          ambientC: checks.job.ambientC,
+          codeEdition: `NEC ${checks.job.codeEdition}`,
+        },
+        panel: { name: checks.panel.name, revision: checks.panel.revision, date: new Date().toISOString().slice(0, 10), enclosureType: checks.panel.enclosureType },
+        selections,
+        rollup,
+        nameplate: checks.nameplate.result,
+        sccr: checks.sccr,
+        heat: checks.heat.result,
+        controlPower: checks.controlPower.result,
+        connectionCards: checks.connectionCards.flatMap((c) => (c.card ? [{ tag: c.tag, card: c.card }] : [])),
+      };
+      res.status(200);
+      res.setHeader('content-type', 'application/pdf');
+      res.setHeader('content-disposition', `attachment; filename="${submittalFileName(checks.job.number, checks.panel.name)}"`);
+      res.setHeader('cache-control', 'no-store');
+      await writeSubmittalPdf(data, res);
+      return undefined;
+    },
+  }),
+];

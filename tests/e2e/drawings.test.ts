@@ -1,0 +1,48 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Browser } from 'playwright-core';
+import { baseUrl, launch, newPage, screenshot, signInThroughForm } from '../setup/browser';
+
+const DEMO_TAGS = ['P-101', 'P-102', 'P-110', 'C-201', 'K-301', 'M-401', 'V-501', 'H-601'];
+
+describe('drawings in the browser', () => {
+  let browser: Browser;
+  beforeAll(async () => {
+    browser = await launch();
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+
+  it('shows the engineer a one-line and a connection card per motor, and the submittal download', async () => {
+    const page = await newPage(browser);
+    await signInThroughForm(page, 'engineer');
+    await page.waitForURL(/\/jobs$/);
+    await page.getByRole('table', { name: 'Jobs' }).getByRole('link', { name: 'J-2041' }).click();
+    await page.getByRole('link', { name: 'MCC-1 Pump hall' }).first().click();
+    await page.getByRole('navigation', { name: 'Panel sections' }).getByRole('link', { name: 'Drawings' }).click();
+    await page.waitForURL(/\/drawings$/);
+
+    for (const tag of DEMO_TAGS) {
+      const oneLine = page.getByRole('img', { name: new RegExp(`^One-line of ${tag}:`) });
+      await oneLine.waitFor();
+      expect(await oneLine.evaluate((el) => el.tagName.toLowerCase())).toBe('svg');
+    }
+    // K-301 is a six-lead motor on a wye-delta starter: its card shows both steps (NEMA MG 1 lead markings)
+    const k301 = page.getByRole('img', { name: /^Three-phase, six leads, wye start \/ delta run\./ });
+    await k301.waitFor();
+    expect(await k301.getAttribute('aria-labelledby')).toBeTruthy();
+    expect(await page.getByRole('img', { name: /^DC compound motor\./ }).count()).toBe(1);
+    expect(await page.getByRole('note').filter({ hasText: 'Check rotation before coupling the load.' }).count()).toBe(DEMO_TAGS.length);
+    expect(await page.getByText('To reverse:', { exact: false }).count()).toBeGreaterThanOrEqual(DEMO_TAGS.length);
+
+    const link = page.getByRole('link', { name: /Download submittal \(PDF\)/ });
+    const href = await link.getAttribute('href');
+    expect(href).toMatch(/^\/api\/panels\/\d+\/submittal\.pdf$/);
+    const pdf = await page.request.get(`${baseUrl()}${href}`);
+    expect(pdf.status()).toBe(200);
+    expect(pdf.headers()['content-type']).toBe('application/pdf');
+    expect((await pdf.body()).subarray(0, 5).toString('latin1')).toBe('%PDF-');
+
+    await screenshot(page, 'drawings');
+  });
+});

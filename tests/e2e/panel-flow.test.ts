@@ -1,0 +1,148 @@
+// The whole path of the three users: a designer adds motors through the wizard and by import and
+// submits; an engineer returns the panel with a comment and then signs off the fix; an estimator
+// downloads the bill of materials and sees the difference between two revisions.
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import ExcelJS from 'exceljs';
+import type { Browser, Page } from 'playwright-core';
+import { baseUrl, launch, newPage, screenshot, signInThroughForm } from '../setup/browser';
+
+let browser: Browser;
+let panelUrl = '';
+
+async function fillWizard(page: Page, v: { tag: string; hp: string; fla?: string; reversing?: boolean; reverseHazard?: boolean }) {
+  await page.getByLabel('Tag').fill(v.tag);
+  await page.getByLabel('Horsepower').fill(v.hp);
+  if (v.fla) await page.getByLabel('Nameplate FLA').fill(v.fla);
+  await page.getByRole('button', { name: /2\. Duty/ }).click();
+  if (v.reversing) await page.getByLabel('Runs in both directions').check();
+  await page.getByRole('button', { name: /3\. Site & hazards/ }).click();
+  if (v.reverseHazard) await page.getByLabel(/Running backwards would damage/).check();
+}
+
+beforeAll(async () => {
+  browser = await launch();
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+describe('designer → engineer → estimator', () => {
+  it('designer creates a panel, adds a motor with the wizard (live preview), imports two more and submits', async () => {
+    const page = await newPage(browser);
+    await signInThroughForm(page, 'designer');
+    await page.waitForURL(/\/jobs$/);
+    await page.getByRole('link', { name: 'J-2042' }).click();
+    await page.getByLabel('New panel name').fill('MCC-S Sludge press');
+    await page.getByRole('button', { name: '+ Add panel' }).click();
+    await page.getByRole('link', { name: 'MCC-S Sludge press' }).click();
+    await page.waitForURL(/\/panels\/\d+\/motors$/);
+    panelUrl = page.url().replace(/\/motors$/, '');
+
+    await page.getByRole('link', { name: '+ Add motor' }).click();
+    await fillWizard(page, { tag: 'SP-1', hp: '25', fla: '31', reversing: true, reverseHazard: true });
+    // the live preview runs the engine in the browser: FVR with phase reversal for this motor
+    const preview = page.getByRole('complementary', { name: 'Selection preview' });
+    await preview.getByText(/FVR size 2/).waitFor();
+    await preview.getByText(/Phase reversal/).waitFor();
+    await screenshot(page, 'wizard-preview');
+    await page.getByRole('button', { name: 'Add motor' }).click();
+    await page.waitForURL(/\/motors$/);
+    const motors = page.getByRole('table', { name: 'Motors' });
+    await motors.getByRole('link', { name: 'SP-1' }).waitFor();
+
+    await page.getByRole('link', { name: 'Import motor list' }).click();
+    const csv = path.join(os.tmpdir(), `motors-${Date.now()}.csv`);
+    fs.writeFileSync(csv, 'tag,description,supply,hp,volts,environment\r\nSP-2,Polymer pump,ac3,5,460,washdown\r\nSP-3,Cake conveyor,ac3,10,460,indoor-dusty\r\n');
+    await page.getByLabel('Motor list file').setInputFiles(csv);
+    await page.getByText('✔ 2 rows are ready to import.').waitFor();
+    await page.getByRole('button', { name: /Import 2 motors/ }).click();
+    await page.waitForURL(/\/motors$/);
+    await motors.getByRole('link', { name: 'SP-3' }).waitFor();
+    await screenshot(page, 'motors-list');
+
+    await page.getByRole('link', { name: 'Sign-off' }).click();
+    await page.getByRole('button', { name: 'Submit for sign-off' }).click();
+    await page.getByText('In review').first().waitFor();
+  });
+
+  it('engineer reviews the protection choices, comments on a motor and returns the panel', async () => {
+    const page = await newPage(browser);
+    await signInThroughForm(page, 'engineer');
+    await page.waitForURL(/\/jobs$/);
+    await page.goto(`${panelUrl}/protection`);
+    const card = page.getByRole('article', { name: 'Motor SP-1' });
+    await card.getByText(/430\.52/).first().waitFor();
+    await card.getByLabel('Comment on SP-1').fill('Use a dual-element fuse for SP-1');
+    await card.getByRole('button', { name: 'Comment' }).click();
+    await card.getByText('Use a dual-element fuse for SP-1').waitFor();
+    await screenshot(page, 'protection-review');
+    await page.getByRole('link', { name: 'Sign-off' }).click();
+    await page.getByLabel('Sign-off comment').fill('Change SP-1 to fuses, then resubmit');
+    await page.getByRole('button', { name: '↩ Return to designer' }).click();
+    await page.getByText('Returned', { exact: true }).first().waitFor();
+  });
+
+  it('designer fixes the motor and resubmits; engineer signs off R0', async () => {
+    const page = await newPage(browser);
+    await signInThroughForm(page, 'designer');
+    await page.waitForURL(/\/jobs$/);
+    await page.goto(`${panelUrl}/motors`);
+    await page.getByRole('table', { name: 'Motors' }).getByRole('link', { name: 'SP-1' }).click();
+    await page.getByRole('button', { name: /4\. Protection/ }).click();
+    await page.getByLabel('Branch protective device').selectOption('dual-element-fuse');
+    await page.getByRole('complementary', { name: 'Selection preview' }).getByText(/Dual-element fuse 60 A/).waitFor();
+    await page.getByRole('button', { name: 'Save motor' }).click();
+    await page.waitForURL(/\/motors$/);
+    await page.getByRole('link', { name: 'Sign-off' }).click();
+    await page.getByRole('button', { name: 'Submit for sign-off' }).click();
+    await page.getByText('In review').first().waitFor();
+
+    const eng = await newPage(browser);
+    await signInThroughForm(eng, 'engineer');
+    await eng.waitForURL(/\/jobs$/);
+    await eng.goto(`${panelUrl}/sign-off`);
+    await eng.getByRole('button', { name: /Sign off as R0/ }).click();
+    await eng.getByText('Signed off', { exact: true }).first().waitFor();
+  });
+
+  it('a change order makes R1; the estimator downloads the .xlsx and sees the difference R0 → R1', async () => {
+    const page = await newPage(browser);
+    await signInThroughForm(page, 'designer');
+    await page.waitForURL(/\/jobs$/);
+    await page.goto(`${panelUrl}/motors/new`);
+    await fillWizard(page, { tag: 'SP-4', hp: '15' });
+    await page.getByRole('button', { name: 'Add motor' }).click();
+    await page.waitForURL(/\/motors$/);
+    await page.getByRole('link', { name: 'Sign-off' }).click();
+    await page.getByRole('button', { name: 'Submit for sign-off' }).click();
+    await page.getByText('In review').first().waitFor();
+    const eng = await newPage(browser);
+    await signInThroughForm(eng, 'engineer');
+    await eng.waitForURL(/\/jobs$/);
+    await eng.goto(`${panelUrl}/sign-off`);
+    await eng.getByRole('button', { name: /Sign off as R1/ }).click();
+    await eng.getByText('Signed off', { exact: true }).first().waitFor();
+
+    const est = await newPage(browser);
+    await signInThroughForm(est, 'estimator');
+    await est.waitForURL(/\/jobs$/);
+    await est.goto(`${panelUrl}/sign-off`);
+    const report = est.getByLabel('Change report');
+    await report.getByText(/Motors added:\s*SP-4/).waitFor();
+    const delta = await report.getByTestId('sell-delta').textContent();
+    expect(delta).toMatch(/^\+\$[\d,]+\.\d\d$/);
+    await screenshot(est, 'change-report');
+
+    await est.goto(`${panelUrl}/bill-of-materials`);
+    const [download] = await Promise.all([est.waitForEvent('download'), est.getByRole('link', { name: /\.xlsx/ }).first().click()]);
+    const file = await download.path();
+    const wb = new ExcelJS.Workbook();
+    await wb.xlsx.readFile(file!);
+    const names = wb.worksheets.map((w) => w.name);
+    expect(names.some((n) => /summary/i.test(n))).toBe(true);
+    expect(JSON.stringify(wb.worksheets.map((w) => w.getSheetValues()))).toContain('SP-4');
+  });
+});
