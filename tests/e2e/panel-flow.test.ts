@@ -13,7 +13,7 @@ let browser: Browser;
 let panelUrl = '';
 
 async function fillWizard(page: Page, v: { tag: string; hp: string; fla?: string; reversing?: boolean; reverseHazard?: boolean }) {
-  await page.getByLabel('Tag').fill(v.tag);
+  await page.getByLabel('Tag', { exact: true }).fill(v.tag);
   await page.getByLabel('Horsepower').fill(v.hp);
   if (v.fla) await page.getByLabel('Nameplate FLA').fill(v.fla);
   await page.getByRole('button', { name: /2\. Duty/ }).click();
@@ -65,7 +65,7 @@ describe('designer → engineer → estimator', () => {
 
     await page.getByRole('link', { name: 'Sign-off' }).click();
     await page.getByRole('button', { name: 'Submit for sign-off' }).click();
-    await page.getByText('In review').first().waitFor();
+    await page.locator('[data-state="in_review"]').first().waitFor();
   });
 
   it('engineer reviews the protection choices, comments on a motor and returns the panel', async () => {
@@ -82,7 +82,7 @@ describe('designer → engineer → estimator', () => {
     await page.getByRole('link', { name: 'Sign-off' }).click();
     await page.getByLabel('Sign-off comment').fill('Change SP-1 to fuses, then resubmit');
     await page.getByRole('button', { name: '↩ Return to designer' }).click();
-    await page.getByText('Returned', { exact: true }).first().waitFor();
+    await page.locator('[data-state="returned"]').first().waitFor();
   });
 
   it('designer fixes the motor and resubmits; engineer signs off R0', async () => {
@@ -98,14 +98,14 @@ describe('designer → engineer → estimator', () => {
     await page.waitForURL(/\/motors$/);
     await page.getByRole('link', { name: 'Sign-off' }).click();
     await page.getByRole('button', { name: 'Submit for sign-off' }).click();
-    await page.getByText('In review').first().waitFor();
+    await page.locator('[data-state="in_review"]').first().waitFor();
 
     const eng = await newPage(browser);
     await signInThroughForm(eng, 'engineer');
     await eng.waitForURL(/\/jobs$/);
     await eng.goto(`${panelUrl}/sign-off`);
     await eng.getByRole('button', { name: /Sign off as R0/ }).click();
-    await eng.getByText('Signed off', { exact: true }).first().waitFor();
+    await eng.locator('[data-state="signed_off"]').first().waitFor();
   });
 
   it('a change order makes R1; the estimator downloads the .xlsx and sees the difference R0 → R1', async () => {
@@ -118,13 +118,13 @@ describe('designer → engineer → estimator', () => {
     await page.waitForURL(/\/motors$/);
     await page.getByRole('link', { name: 'Sign-off' }).click();
     await page.getByRole('button', { name: 'Submit for sign-off' }).click();
-    await page.getByText('In review').first().waitFor();
+    await page.locator('[data-state="in_review"]').first().waitFor();
     const eng = await newPage(browser);
     await signInThroughForm(eng, 'engineer');
     await eng.waitForURL(/\/jobs$/);
     await eng.goto(`${panelUrl}/sign-off`);
     await eng.getByRole('button', { name: /Sign off as R1/ }).click();
-    await eng.getByText('Signed off', { exact: true }).first().waitFor();
+    await eng.locator('[data-state="signed_off"]').first().waitFor();
 
     const est = await newPage(browser);
     await signInThroughForm(est, 'estimator');

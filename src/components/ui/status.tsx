@@ -9,7 +9,7 @@ const STATES: Record<string, { label: string; icon: string; cls: string }> = {
 export function SignOffState({ state }: { state: string }) {
   const s = STATES[state] ?? STATES.draft;
   return (
-    <span className={`inline-flex items-center gap-1 rounded-sm border px-1.5 py-0.5 text-xs font-semibold ${s.cls}`}>
+    <span data-state={state} className={`inline-flex items-center gap-1 rounded-sm border px-1.5 py-0.5 text-xs font-semibold ${s.cls}`}>
       <span aria-hidden>{s.icon}</span>
       {s.label}
     </span>

@@ -40,7 +40,7 @@ function ChangeReport({ panelId, from, to }: { panelId: number; from: number; to
           <tbody>
             {rows.map(({ kind, e }) => (
               <tr key={`${kind}-${e.key}`} className="border-t border-line/60">
-                <td className="py-1 font-semibold">{kind === 'Added' ? '＋' : kind === 'Removed' ? '−' : '≠'} {kind}</td>
+                <td className="py-1 font-semibold">{kind === 'Added' ? '+' : kind === 'Removed' ? '−' : '≠'} {kind}</td>
                 <td>{e.bucket}</td>
                 <td>{e.code ?? '—'}</td>
                 <td>{e.description}</td>
