@@ -56,17 +56,17 @@ export function createApp(opts: AppOptions): Express {
   app.use('/api', express.json({ limit: '1mb' }));
 
   const PgStore = connectPgSimple(session);
-  const sessionPool = new pg.Pool({ connectionString: opts.databaseUrl, max: 5 });
+  const sessionPool = new pg.Pool({ connectionString: opts.databaseUrl, max: 10 });
   sessionPool.on('error', () => undefined); // an idle client dropped by the server; the pool reconnects
   app.locals.sessionPool = sessionPool;
   app.use(
     session({
       name: 'pw.sid',
       secret: opts.sessionSecret ?? e.SESSION_SECRET ?? randomBytes(32).toString('hex'),
-      store: new PgStore({ pool: sessionPool, tableName: 'session', createTableIfMissing: false, pruneSessionInterval: e.NODE_ENV === 'test' ? false : 60 * 15 }),
+      store: new PgStore({ pool: sessionPool, tableName: 'session', createTableIfMissing: false, disableTouch: true, pruneSessionInterval: e.NODE_ENV === 'test' ? false : 60 * 15 }),
       resave: false,
       saveUninitialized: false,
-      rolling: true,
+      rolling: false,
       cookie: { httpOnly: true, sameSite: 'lax', secure: e.NODE_ENV === 'production' && e.APP_URL.startsWith('https'), maxAge: 12 * 60 * 60 * 1000 },
     }),
   );

@@ -15,16 +15,25 @@ export const MOUNTING_LABELS: Record<(typeof MOUNTINGS)[number], string> = {
 export const PANEL_STATES = ['draft', 'in_review', 'signed_off', 'returned'] as const;
 export type PanelState = (typeof PANEL_STATES)[number];
 
-export const PanelInputSchema = z.object({
+// Field rules without defaults, so that a partial update never fills in absent fields.
+const panelFields = {
   name: z.string().trim().min(1, 'Enter a panel name').max(200),
-  description: z.string().trim().max(2000).default(''),
-  mounting: z.enum(MOUNTINGS).default('wall-mounted'),
-  markupPercent: z.coerce.number().min(0).max(300).default(15),
-  labourRate: z.coerce.number().min(0).max(1000).default(85),
+  description: z.string().trim().max(2000),
+  mounting: z.enum(MOUNTINGS),
+  markupPercent: z.coerce.number().min(0).max(300),
+  labourRate: z.coerce.number().min(0).max(1000),
+};
+
+export const PanelInputSchema = z.object({
+  ...panelFields,
+  description: panelFields.description.default(''),
+  mounting: panelFields.mounting.default('wall-mounted'),
+  markupPercent: panelFields.markupPercent.default(15),
+  labourRate: panelFields.labourRate.default(85),
 });
 export type PanelInput = z.input<typeof PanelInputSchema>;
 
-export const PanelUpdateSchema = PanelInputSchema.partial().extend({ version: z.number().int().min(0) }).strict();
+export const PanelUpdateSchema = z.object(panelFields).partial().extend({ version: z.number().int().min(0) }).strict();
 
 export interface PanelSummary {
   id: number;
@@ -46,7 +55,7 @@ export interface LoadView {
   position: number;
   answers: Record<string, unknown>;
   selection: LoadSelection | null;
-  /** the selection with overrides applied: what the bill of materials and the checks use */
+  /** the selection with overrides applied (what the bill of materials and the checks use); null in a panel's answer when there is no override, to keep the answer small: then it equals `selection` */
   effective: LoadSelection | null;
   overrides: StoredOverride[];
   version: number;

@@ -78,7 +78,7 @@ export async function panelDetail(actor: CurrentUser, id: number): Promise<Panel
     labourRate: p.labourRate,
     rollup: (p.rollup ?? null) as PanelRollup | null,
     job: jobPart(p.job),
-    loads: loads.map(loadView),
+    loads: loads.map(loadView).map((l) => (l.overrides.length ? l : { ...l, effective: null })),
     comments: comments.map(
       (c): CommentView => ({ id: c.id, loadId: c.loadId, body: c.body, author: (c as unknown as { author?: { name: string } }).author?.name ?? null, at: c.createdAt.toISOString() }),
     ),

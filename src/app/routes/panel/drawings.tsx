@@ -17,7 +17,7 @@ export async function loader({ params }: LoaderFunctionArgs) {
 const ROTATION = 'Check rotation before coupling the load.';
 
 function Bucket({ load, card }: { load: LoadView; card: PanelChecks['connectionCards'][number] | undefined }) {
-  const s = load.effective;
+  const s = load.effective ?? load.selection;
   const answers = load.answers as { description?: string; hp?: number; kw?: number; volts?: number; supply?: string };
   const rating = [answers.hp !== undefined ? `${answers.hp} hp` : answers.kw !== undefined ? `${answers.kw} kW` : null, answers.volts !== undefined ? `${answers.volts} V` : null, answers.supply === 'dc' ? 'DC' : answers.supply === 'ac1' ? '1φ' : '3φ']
     .filter(Boolean)

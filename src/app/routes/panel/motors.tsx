@@ -95,7 +95,7 @@ export function Component() {
             </thead>
             <tbody>
               {p.loads.map((l) => {
-                const s = l.effective;
+                const s = l.effective ?? l.selection;
                 const bad = !s || s.errors.length > 0;
                 return (
                   <tr key={l.id} className={`border-b border-line/60 last:border-0 ${bad ? 'bg-bad-bg' : 'hover:bg-copper-50'}`}>

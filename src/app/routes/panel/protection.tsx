@@ -61,9 +61,9 @@ export function Component() {
         {p.loads.map((l) => (
           <article key={l.id} className={`rounded border bg-panel p-4 ${l.overrides.length ? 'border-copper-500/60' : 'border-line'}`} aria-label={`Motor ${l.tag}`}>
             <h3 className="mb-2 flex items-baseline gap-2 text-base font-semibold">
-              {l.tag} <span className="text-sm font-normal text-ink-soft">{String(l.answers.description ?? '')} · {l.effective?.hp ?? '?'} hp {String(l.answers.volts)} V</span>
+              {l.tag} <span className="text-sm font-normal text-ink-soft">{String(l.answers.description ?? '')} · {(l.effective ?? l.selection)?.hp ?? '?'} hp {String(l.answers.volts)} V</span>
             </h3>
-            {l.effective ? <SelectionSummary selection={l.effective} overridden={l.overrides.map((o) => o.field)} /> : <p className="text-sm text-state-returned">✖ No selection</p>}
+            {(l.effective ?? l.selection) ? <SelectionSummary selection={(l.effective ?? l.selection)!} overridden={l.overrides.map((o) => o.field)} /> : <p className="text-sm text-state-returned">✖ No selection</p>}
             <div className="mt-3 border-t border-line pt-2">
               {p.comments.filter((c) => c.loadId === l.id).map((c) => (
                 <p key={c.id} className="text-sm"><strong>{c.author}:</strong> {c.body}</p>
