@@ -12,13 +12,13 @@ function stepHeight(step: ConnectionStep): number {
   const lines = LINE_ORDER.filter((l) => step.lineGroups[l]);
   const maxLeads = Math.max(1, ...lines.map((l) => step.lineGroups[l]!.length));
   const joinedRows = step.joined.length + (step.insulated.length > 0 ? 1 : 0);
-  return 34 + maxLeads * LEAD_H + (joinedRows > 0 ? 16 + joinedRows * LEAD_H : 0) + 12;
+  return 34 + maxLeads * LEAD_H + (joinedRows > 0 ? 26 + joinedRows * LEAD_H : 0) + 12;
 }
 
 function Step({ step, y }: { step: ConnectionStep; y: number }) {
   const lines = LINE_ORDER.filter((l) => step.lineGroups[l]);
   const maxLeads = Math.max(1, ...lines.map((l) => step.lineGroups[l]!.length));
-  const joinedY = y + 34 + maxLeads * LEAD_H + 16;
+  const joinedY = y + 34 + maxLeads * LEAD_H + 26;
   return (
     <g fontFamily={FONT}>
       <text x={12} y={y + 12} fontSize={12} fontWeight={600} fill={SLATE}>
@@ -46,7 +46,7 @@ function Step({ step, y }: { step: ConnectionStep; y: number }) {
         );
       })}
       {step.joined.length > 0 || step.insulated.length > 0 ? (
-        <text x={12} y={joinedY - 4} fontSize={10} fill={SLATE}>
+        <text x={12} y={joinedY - 14} fontSize={10} fill={SLATE}>
           Joined and insulated together
         </text>
       ) : null}
