@@ -7,6 +7,8 @@ import { Load } from '../../server/db/models/load';
 import { Organisation } from '../../server/db/models/organisation';
 import { DEMO_ORGANISATION } from '../../server/db/seeders/demo';
 import { selectOne } from '../../server/modules/panels/selection';
+import { CatalogueItem } from '../../server/db/models/catalogue-item';
+import { BomLineRow } from '../../server/db/models/bom-line';
 
 export async function paramValues(): Promise<Record<string, string>> {
   const org = await Organisation.findOne({ where: { name: DEMO_ORGANISATION } });
@@ -16,5 +18,16 @@ export async function paramValues(): Promise<Record<string, string>> {
   const panel = await Panel.create({ organisationId, jobId: job.id, name: 'Role matrix panel', revisionNumber: null, archivedAt: null, rollup: null, submittedAt: null });
   const answers = { tag: 'RM-1', supply: 'ac3' as const, hp: 10, volts: 460 };
   const load = await Load.create({ organisationId, panelId: panel.id, tag: 'RM-1', answers, selection: (await selectOne(job, answers)) as unknown as Record<string, unknown>, overrides: [] });
-  return { id: String(job.id), userId: String(user!.id), panelId: String(panel.id), loadId: String(load.id), number: '0' };
+  const item = await CatalogueItem.create({
+    organisationId, code: `RM-ITEM-${Date.now().toString(36).toUpperCase()}`, category: 'fuse', description: 'Role matrix fuse',
+    ratings: { volts: 600, amps: 10, fuseClass: 'CC', timeDelay: true }, sccrKa: null, unitCost: 5, active: false,
+  });
+  const line = await BomLineRow.create({
+    organisationId, panelId: panel.id, position: 0,
+    line: { bucket: '(panel)', category: 'freight', code: null, description: 'Role matrix freight', quantity: 1, unit: 'ea', unitCost: 10, unitLabourHours: 0, heatLossW: 0, sccrKa: null, status: 'manual', requiredRatings: null, source: 'manual', swapReason: null },
+  });
+  return {
+    id: String(job.id), userId: String(user!.id), panelId: String(panel.id), loadId: String(load.id), number: '0',
+    itemId: String(item.id), lineId: String(line.id), key: 'termination',
+  };
 }

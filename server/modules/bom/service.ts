@@ -6,12 +6,16 @@ import { BomLineRow } from '../../db/models/bom-line';
 import { Panel } from '../../db/models/panel';
 import type { Job } from '../../db/models/job';
 import type { CurrentUser } from '../../../shared/schemas/auth';
-import type { BomLine, BomTotals } from '../../../shared/schemas/catalogue';
+import { BomLineSchema, PANEL_BUCKET, type BomLine, type BomTotals, type CatalogueItem } from '../../../shared/schemas/catalogue';
+import { NotFoundError, ValidationError, zodIssues } from '../../../shared/errors';
+import type { BomExportJob, BomExportPanel } from './export';
+import { getJob } from '../jobs/service';
 import type { LoadSelection, PanelRollup } from '../../../shared/schemas/selection';
-import { buildBom, computeTotals } from '../../../shared/calc/bom';
+import { buildBom, computeTotals, unitLabourHours } from '../../../shared/calc/bom';
+import { recordActivity } from '../activity/service';
 import { catalogueFor, labourUnitsFor } from '../catalogue/repository';
 import { loadsOf } from '../panels/repository';
-import { loadView } from '../panels/service';
+import { loadView, requirePanel } from '../panels/service';
 
 /** Most protective enclosure type among the buckets (common practice: one enclosure serves the worst environment). */
 const STRINGENCY = ['1', '12', '3R', '4', '4X', '9', '7'];
@@ -40,15 +44,28 @@ export async function effectiveSelections(panelId: number, t?: Transaction): Pro
   return loads.map(loadView).flatMap((l) => (l.effective ? [l.effective] : []));
 }
 
-/** Rebuilds the automatic lines; manual lines stay, and a swap stays where its bucket and category still exist. */
-export async function regenerateBom(organisationId: number, panel: Panel & { job: Job }, t: Transaction) {
-  const [selections, catalogue, labourUnits, oldRows] = await Promise.all([
-    effectiveSelections(panel.id, t),
-    catalogueFor(organisationId, t),
-    labourUnitsFor(organisationId, t),
-    BomLineRow.findAll({ where: { panelId: panel.id }, order: [['position', 'ASC']], transaction: t }),
-  ]);
-  const old = oldRows.map((r) => r.line as unknown as BomLine);
+export interface RegenerateOptions {
+  /** take today's catalogue prices for every line (otherwise a line that stays keeps the unit cost it was priced at) */
+  reprice?: boolean;
+}
+
+/** Key of a line for "the same line after a rebuild": bucket, category and its order among them. */
+function ordinalKeys(lines: readonly BomLine[]): string[] {
+  const seen = new Map<string, number>();
+  return lines.map((l) => {
+    const k = `${l.bucket}\u0000${l.category}`;
+    const n = seen.get(k) ?? 0;
+    seen.set(k, n + 1);
+    return `${k}\u0000${n}`;
+  });
+}
+
+/**
+ * The lines a rebuild would store, without writing: automatic lines from the selections, swaps re-applied
+ * to the same line (bucket, category and order), manual lines kept; a line whose part stays keeps its frozen unit cost.
+ */
+export async function planBom(organisationId: number, panel: Panel & { job: Job }, old: readonly BomLine[], t?: Transaction, opts: RegenerateOptions = {}): Promise<BomLine[]> {
+  const [selections, catalogue, labourUnits] = await Promise.all([effectiveSelections(panel.id, t), catalogueFor(organisationId, t), labourUnitsFor(organisationId, t)]);
   const rollup = (panel.rollup ?? { feeder: { minAmpacity: 0, conductorSize: 'none', ocpdMaxAmps: 0, basis: '' }, totalFlcAmps: 0, largestMotorTag: null }) as unknown as PanelRollup;
   const built = buildBom({
     panelName: panel.name,
@@ -60,35 +77,270 @@ export async function regenerateBom(organisationId: number, panel: Panel & { job
     labourUnits,
   });
   const byCode = new Map(catalogue.map((c) => [c.code, c]));
-  const swaps = old.filter((l) => l.source === 'swapped');
-  const lines: BomLine[] = built.lines.map((l) => {
-    const swap = swaps.find((s) => s.bucket === l.bucket && s.category === l.category);
-    if (!swap) return l;
-    const item = swap.code ? byCode.get(swap.code) : undefined;
-    return item ? { ...l, code: item.code, description: item.description, unitCost: item.unitCost, status: 'matched', requiredRatings: null, source: 'swapped', swapReason: swap.swapReason } : l;
+  const labour = new Map(labourUnits.map((u) => [u.key, u]));
+  const autoOld = old.filter((l) => l.source !== 'manual');
+  const oldKeys = ordinalKeys(autoOld);
+  const swaps = new Map<string, BomLine>();
+  const frozen = new Map<string, number>();
+  autoOld.forEach((l, i) => {
+    if (l.source === 'swapped') swaps.set(oldKeys[i]!, l);
+    if (l.code) frozen.set(`${l.bucket}\u0000${l.category}\u0000${l.code}`, l.unitCost);
+  });
+  const builtKeys = ordinalKeys(built.lines);
+  const lines: BomLine[] = built.lines.map((l, i) => {
+    const swap = swaps.get(builtKeys[i]!);
+    const item = swap?.code ? byCode.get(swap.code) : undefined;
+    let line: BomLine = l;
+    if (swap && item && item.category === l.category) {
+      line = {
+        ...l,
+        code: item.code,
+        description: item.description,
+        unit: item.unit,
+        unitCost: item.unitCost,
+        unitLabourHours: unitLabourHours(item.category, item, labour),
+        heatLossW: item.heatLossW,
+        sccrKa: item.sccrKa,
+        status: 'matched',
+        requiredRatings: null,
+        source: 'swapped',
+        swapReason: swap.swapReason,
+      };
+    }
+    const kept = !opts.reprice && line.code ? frozen.get(`${line.bucket}\u0000${line.category}\u0000${line.code}`) : undefined;
+    return kept !== undefined ? { ...line, unitCost: kept } : line;
   });
   lines.push(...old.filter((l) => l.source === 'manual'));
+  return lines;
+}
+
+/** Rebuilds the automatic lines; manual lines stay, a swap stays on its line, and prices stay frozen unless `reprice`. */
+export async function regenerateBom(organisationId: number, panel: Panel & { job: Job }, t: Transaction, opts: RegenerateOptions = {}) {
+  const oldRows = await BomLineRow.findAll({ where: { panelId: panel.id }, order: [['position', 'ASC'], ['id', 'ASC']], transaction: t });
+  const lines = await planBom(organisationId, panel, oldRows.map((r) => r.line as unknown as BomLine), t, opts);
   await BomLineRow.destroy({ where: { panelId: panel.id }, transaction: t });
   await BomLineRow.bulkCreate(
     lines.map((line, position) => ({ organisationId, panelId: panel.id, position, line: line as unknown as Record<string, unknown> })),
     { transaction: t },
   );
-  await Panel.update({ bomGeneratedAt: new Date() }, { where: { id: panel.id }, transaction: t });
+  await Panel.update({ bomGeneratedAt: new Date() }, { where: { id: panel.id }, transaction: t, silent: true });
   return lines;
 }
 
-export async function storedBom(actor: CurrentUser, panel: Panel): Promise<StoredBom> {
+/** What decides a stored bill of materials: its automatic lines' parts and quantities (prices excluded: they stay frozen). */
+function designSignature(lines: readonly BomLine[]): string {
+  return JSON.stringify(lines.filter((l) => l.source !== 'manual').map((l) => [l.bucket, l.category, l.code, l.quantity, l.status, l.requiredRatings]));
+}
+
+export async function storedBom(actor: CurrentUser, panel: Panel & { job: Job }): Promise<StoredBom> {
   const rows = await BomLineRow.findAll({ where: { organisationId: actor.organisationId, panelId: panel.id }, order: [['position', 'ASC'], ['id', 'ASC']] });
   const lines = rows.map((r) => ({ ...(r.line as unknown as BomLine), id: r.id, position: r.position }));
+  // Stale when a rebuild now would give other parts or quantities (motors, overrides or the catalogue changed).
+  const plan = panel.bomGeneratedAt ? await planBom(actor.organisationId, panel, lines) : null;
   return {
     lines,
     totals: computeTotals(lines, panel.markupPercent, panel.labourRate),
     generatedAt: panel.bomGeneratedAt ? panel.bomGeneratedAt.toISOString() : null,
-    stale: !panel.bomGeneratedAt || panel.bomGeneratedAt < panel.updatedAt,
+    stale: !plan || designSignature(plan) !== designSignature(lines),
     enclosureType: panelEnclosureType(await effectiveSelections(panel.id)),
   };
 }
 
-export async function rebuild(actor: CurrentUser, panel: Panel & { job: Job }) {
-  await db().transaction((t) => regenerateBom(actor.organisationId, panel, t));
+export async function rebuild(actor: CurrentUser, panel: Panel & { job: Job }, opts: RegenerateOptions = {}) {
+  await db().transaction(async (t) => {
+    await regenerateBom(actor.organisationId, panel, t, opts);
+    await recordActivity(
+      actor,
+      { entity: 'bom', entityId: panel.id, jobId: panel.jobId, panelId: panel.id, action: 'rebuilt', summary: `Rebuilt the bill of materials of ${panel.name}${opts.reprice ? " at today's catalogue prices" : ''}` },
+      t,
+    );
+  });
+}
+
+// ---------------------------------------------------------------------------------------------
+// The estimator's changes to single lines
+
+export interface ManualLineInput {
+  bucket?: string;
+  category: BomLine['category'];
+  code?: string | null;
+  description?: string;
+  quantity: number;
+  unit?: BomLine['unit'];
+  unitCost?: number;
+  unitLabourHours?: number;
+}
+
+async function lockedPanel(actor: CurrentUser, panelId: number, t: Transaction) {
+  return requirePanel(actor, panelId, t, true);
+}
+
+async function requireLine(panelId: number, lineId: number, t: Transaction) {
+  const r = await BomLineRow.findOne({ where: { id: lineId, panelId }, transaction: t });
+  if (!r) throw new NotFoundError('Bill-of-materials line');
+  return r;
+}
+
+function checkLine(line: BomLine): BomLine {
+  const r = BomLineSchema.safeParse(line);
+  if (!r.success) {
+    const issues = zodIssues(r.error.issues).map((i) => ({ ...i, path: `body.${i.path}` }));
+    throw new ValidationError(`The line has ${issues.length} problem${issues.length === 1 ? '' : 's'}: ${issues.map((i) => `${i.path} ${i.message}`).join('; ')}`, issues);
+  }
+  return r.data;
+}
+
+/** Freight, engineering hours, spares …: a line kept through every rebuild; with a code, the part's price and labour are the defaults. */
+export async function addManualLine(actor: CurrentUser, panelId: number, input: ManualLineInput) {
+  return db().transaction(async (t) => {
+    const panel = await lockedPanel(actor, panelId, t);
+    let item: CatalogueItem | undefined;
+    if (input.code) {
+      item = (await catalogueFor(actor.organisationId, t)).find((c) => c.code === input.code);
+      if (!item) throw new ValidationError(`There is no catalogue item ${input.code}`, [{ path: 'body.code', message: 'not in the catalogue' }]);
+    }
+    const labour = new Map((await labourUnitsFor(actor.organisationId, t)).map((u) => [u.key, u]));
+    const description = input.description?.trim() || item?.description;
+    if (!description) throw new ValidationError('Describe the line', [{ path: 'body.description', message: 'required without a part code' }]);
+    const line = checkLine({
+      bucket: input.bucket?.trim() || PANEL_BUCKET,
+      category: input.category,
+      code: item?.code ?? null,
+      description,
+      quantity: input.quantity,
+      unit: input.unit ?? item?.unit ?? 'ea',
+      unitCost: input.unitCost ?? item?.unitCost ?? 0,
+      unitLabourHours: input.unitLabourHours ?? (item ? unitLabourHours(item.category, item, labour) : 0),
+      heatLossW: item?.heatLossW ?? 0,
+      sccrKa: item?.sccrKa ?? null,
+      status: 'manual',
+      requiredRatings: null,
+      source: 'manual',
+      swapReason: null,
+    });
+    const last = (await BomLineRow.max('position', { where: { panelId: panel.id }, transaction: t })) as number | null;
+    const row = await BomLineRow.create({ organisationId: actor.organisationId, panelId: panel.id, position: (last ?? -1) + 1, line: line as unknown as Record<string, unknown> }, { transaction: t });
+    await recordActivity(
+      actor,
+      { entity: 'bom', entityId: panel.id, jobId: panel.jobId, panelId: panel.id, action: 'line-added', summary: `Added ${line.quantity} ${line.unit} "${line.description}" to ${panel.name}`, diff: { line } },
+      t,
+    );
+    return { ...line, id: row.id, position: row.position };
+  });
+}
+
+export interface LineChanges {
+  quantity?: number;
+  description?: string;
+  unitCost?: number;
+  unitLabourHours?: number;
+  /** swap for this catalogue item (same category), with a reason */
+  swapCode?: string;
+  swapReason?: string;
+}
+
+/**
+ * Change one line. A manual line takes any change. An automatic line's quantity follows the design,
+ * so it may only be swapped for an equivalent item (same category, active) with a reason; the swapped
+ * line takes the new item's price, every other line keeps its frozen unit cost.
+ */
+export async function updateLine(actor: CurrentUser, panelId: number, lineId: number, changes: LineChanges) {
+  return db().transaction(async (t) => {
+    const panel = await lockedPanel(actor, panelId, t);
+    const row = await requireLine(panel.id, lineId, t);
+    const before = row.line as unknown as BomLine;
+    let after: BomLine = { ...before };
+    if (changes.swapCode !== undefined) {
+      const reason = changes.swapReason?.trim();
+      if (!reason) throw new ValidationError('Give the reason for the swap', [{ path: 'body.swapReason', message: 'a swap needs a reason' }]);
+      if (before.source === 'manual') throw new ValidationError('A manual line is changed directly, not swapped', [{ path: 'body.swapCode', message: 'not for a manual line' }]);
+      const item = (await catalogueFor(actor.organisationId, t)).find((c) => c.code === changes.swapCode);
+      if (!item) throw new ValidationError(`There is no catalogue item ${changes.swapCode}`, [{ path: 'body.swapCode', message: 'not in the catalogue' }]);
+      if (!item.active) throw new ValidationError(`${item.code} is deactivated`, [{ path: 'body.swapCode', message: 'deactivated item' }]);
+      if (item.category !== before.category) {
+        throw new ValidationError(`${item.code} is not an equivalent: it is not in the line's category`, [{ path: 'body.swapCode', message: `must be a ${before.category}` }]);
+      }
+      const labour = new Map((await labourUnitsFor(actor.organisationId, t)).map((u) => [u.key, u]));
+      after = {
+        ...after,
+        code: item.code,
+        description: item.description,
+        unit: item.unit,
+        unitCost: item.unitCost,
+        unitLabourHours: unitLabourHours(item.category, item, labour),
+        heatLossW: item.heatLossW,
+        sccrKa: item.sccrKa,
+        status: 'matched',
+        requiredRatings: null,
+        source: 'swapped',
+        swapReason: reason,
+      };
+    }
+    const direct = (['quantity', 'description', 'unitCost', 'unitLabourHours'] as const).filter((k) => changes[k] !== undefined);
+    if (direct.length > 0) {
+      if (before.source !== 'manual') {
+        throw new ValidationError('The quantity and price of an automatic line follow the design and the catalogue: swap the part, or add a manual line', [
+          { path: `body.${direct[0]}`, message: 'only manual lines are edited directly' },
+        ]);
+      }
+      after = { ...after, ...Object.fromEntries(direct.map((k) => [k, changes[k]])) };
+    }
+    if (changes.swapCode === undefined && direct.length === 0) throw new ValidationError('Nothing to change', [{ path: 'body', message: 'give a quantity or a part to swap to' }]);
+    after = checkLine(after);
+    await BomLineRow.update({ line: after as unknown as Record<string, unknown> }, { where: { id: row.id }, transaction: t });
+    const diff = Object.fromEntries(Object.keys(after).filter((k) => JSON.stringify(after[k as keyof BomLine]) !== JSON.stringify(before[k as keyof BomLine])).map((k) => [k, [before[k as keyof BomLine], after[k as keyof BomLine]]]));
+    const summary = changes.swapCode !== undefined
+      ? `Swapped ${before.code ?? 'an unmatched line'} for ${after.code} in ${before.bucket} of ${panel.name}: ${after.swapReason}`
+      : `Changed "${after.description}" in ${panel.name}: ${direct.join(', ')}`;
+    await recordActivity(actor, { entity: 'bom', entityId: panel.id, jobId: panel.jobId, panelId: panel.id, action: changes.swapCode !== undefined ? 'line-swapped' : 'line-changed', summary, diff }, t);
+    return { ...after, id: row.id, position: row.position };
+  });
+}
+
+export async function deleteLine(actor: CurrentUser, panelId: number, lineId: number) {
+  await db().transaction(async (t) => {
+    const panel = await lockedPanel(actor, panelId, t);
+    const row = await requireLine(panel.id, lineId, t);
+    const line = row.line as unknown as BomLine;
+    if (line.source !== 'manual') throw new ValidationError('Only manual lines are removed; the rebuild decides the automatic ones', [{ path: 'lineId', message: 'not a manual line' }]);
+    await row.destroy({ transaction: t });
+    await recordActivity(actor, { entity: 'bom', entityId: panel.id, jobId: panel.jobId, panelId: panel.id, action: 'line-removed', summary: `Removed "${line.description}" from ${panel.name}`, diff: { line } }, t);
+  });
+}
+
+/** Active catalogue items a line may be swapped for: the same category, cheapest first. */
+export async function swapCandidates(actor: CurrentUser, panelId: number, lineId: number) {
+  const panel = await requirePanel(actor, panelId);
+  const row = await db().transaction((t) => requireLine(panel.id, lineId, t));
+  const line = row.line as unknown as BomLine;
+  const items = await catalogueFor(actor.organisationId);
+  return items
+    .filter((i) => i.active && i.category === line.category && i.code !== line.code)
+    .sort((a, b) => a.unitCost - b.unitCost || a.code.localeCompare(b.code))
+    .map((i) => ({ code: i.code, description: i.description, unitCost: i.unitCost, leadTimeDays: i.leadTimeDays, ratings: i.ratings }));
+}
+
+// ---------------------------------------------------------------------------------------------
+// Export
+
+export async function panelExport(actor: CurrentUser, panelId: number): Promise<{ job: BomExportJob; panels: BomExportPanel[]; fileBase: string }> {
+  const panel = await requirePanel(actor, panelId);
+  const rows = await BomLineRow.findAll({ where: { organisationId: actor.organisationId, panelId: panel.id }, order: [['position', 'ASC'], ['id', 'ASC']] });
+  return {
+    job: { number: panel.job.number, name: panel.job.name, customer: panel.job.customer || undefined, markupPercent: panel.markupPercent, labourRatePerHour: panel.labourRate },
+    panels: [{ name: panel.name, lines: rows.map((r) => r.line as unknown as BomLine) }],
+    fileBase: `${panel.job.number}-${panel.name}-bom`,
+  };
+}
+
+/** Every panel of the job that is not archived. The summary's rate and markup are the first panel's (each panel's own are on the page). */
+export async function jobExport(actor: CurrentUser, jobId: number): Promise<{ job: BomExportJob; panels: BomExportPanel[]; fileBase: string }> {
+  const job = await getJob(actor, jobId);
+  const panels = await Panel.findAll({ where: { organisationId: actor.organisationId, jobId: job.id, archivedAt: null }, order: [['name', 'ASC'], ['id', 'ASC']] });
+  const rows = await BomLineRow.findAll({ where: { organisationId: actor.organisationId, panelId: panels.map((p) => p.id) }, order: [['position', 'ASC'], ['id', 'ASC']] });
+  return {
+    job: { number: job.number, name: job.name, customer: job.customer || undefined, markupPercent: panels[0]?.markupPercent ?? 15, labourRatePerHour: panels[0]?.labourRate ?? 85 },
+    panels: panels.map((p) => ({ name: p.name, lines: rows.filter((r) => r.panelId === p.id).map((r) => r.line as unknown as BomLine) })),
+    fileBase: `${job.number}-bom`,
+  };
 }

@@ -1,0 +1,156 @@
+import type { Response } from 'express';
+import { z } from 'zod';
+import { defineRoute, type AnyRoute } from '../../http/route-table';
+import { IdParamSchema } from '../../../shared/schemas/auth';
+import { BomCategorySchema, PartCodeSchema, UnitSchema } from '../../../shared/schemas/catalogue';
+import { catalogueRoutes } from '../catalogue/router';
+import { requirePanel } from '../panels/service';
+import { writeBomCsv, writeBomWorkbook, type BomExportJob, type BomExportPanel } from './export';
+import * as service from './service';
+
+const ALL = ['admin', 'designer', 'estimator', 'engineer'] as const;
+const REBUILD = ['admin', 'estimator', 'designer'] as const;
+const ESTIMATE = ['admin', 'estimator'] as const;
+
+const PanelId = z.object({ panelId: z.coerce.number().int().positive() });
+const LineId = PanelId.extend({ lineId: z.coerce.number().int().positive() });
+const money = z.number().finite().nonnegative().max(10_000_000);
+const hours = z.number().finite().nonnegative().max(10_000);
+
+const ManualLineBody = z
+  .object({
+    bucket: z.string().trim().max(60).optional(),
+    category: BomCategorySchema,
+    code: PartCodeSchema.nullable().optional(),
+    description: z.string().trim().max(300).optional(),
+    quantity: z.number().finite().positive().max(1_000_000),
+    unit: UnitSchema.optional(),
+    unitCost: money.optional(),
+    unitLabourHours: hours.optional(),
+  })
+  .strict();
+
+const LinePatchBody = z
+  .object({
+    quantity: z.number().finite().positive().max(1_000_000).optional(),
+    description: z.string().trim().min(1).max(300).optional(),
+    unitCost: money.optional(),
+    unitLabourHours: hours.optional(),
+    swapCode: PartCodeSchema.optional(),
+    swapReason: z.string().trim().max(500).optional(),
+  })
+  .strict();
+
+/** An ASCII file name for content-disposition, with the exact name in filename* (RFC 6266). */
+function attachment(res: Response, base: string, ext: 'xlsx' | 'csv') {
+  const name = `${base}.${ext}`;
+  const ascii = name.replace(/[^A-Za-z0-9._-]+/g, '-').replace(/-+/g, '-');
+  res.setHeader('content-disposition', `attachment; filename="${ascii}"; filename*=UTF-8''${encodeURIComponent(name)}`);
+  res.setHeader(
+    'content-type',
+    ext === 'xlsx' ? 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet' : 'text/csv; charset=utf-8',
+  );
+}
+
+async function stream(res: Response, out: { job: BomExportJob; panels: BomExportPanel[]; fileBase: string }, ext: 'xlsx' | 'csv') {
+  attachment(res, out.fileBase, ext);
+  if (ext === 'xlsx') await writeBomWorkbook(out.job, out.panels, res);
+  else await writeBomCsv(out.job, out.panels, res);
+  return undefined;
+}
+
+export const bomRoutes = [
+  defineRoute({
+    method: 'get',
+    path: '/api/panels/:panelId/bom',
+    access: ALL,
+    summary: "A panel's bill of materials with totals and the stale flag",
+    params: PanelId,
+    handler: async ({ user, params }) => service.storedBom(user, await requirePanel(user, params.panelId)),
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/api/panels/:panelId/bom/rebuild',
+    access: REBUILD,
+    summary: 'Rebuild the automatic lines from the selections (manual lines and swaps kept; reprice to take today\'s catalogue prices)',
+    params: PanelId,
+    body: z.object({ reprice: z.boolean().default(false) }).strict(),
+    status: 200,
+    handler: async ({ user, params, body }) => {
+      await service.rebuild(user, await requirePanel(user, params.panelId), { reprice: body.reprice });
+      return service.storedBom(user, await requirePanel(user, params.panelId));
+    },
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/api/panels/:panelId/bom/lines',
+    access: ESTIMATE,
+    summary: 'Add a manual line (freight, engineering hours, spares …)',
+    params: PanelId,
+    body: ManualLineBody,
+    handler: ({ user, params, body }) => service.addManualLine(user, params.panelId, body),
+  }),
+  defineRoute({
+    method: 'patch',
+    path: '/api/panels/:panelId/bom/lines/:lineId',
+    access: ESTIMATE,
+    summary: 'Change a manual line, or swap a line for an equivalent catalogue item with a reason',
+    params: LineId,
+    body: LinePatchBody,
+    handler: ({ user, params, body }) => service.updateLine(user, params.panelId, params.lineId, body),
+  }),
+  defineRoute({
+    method: 'delete',
+    path: '/api/panels/:panelId/bom/lines/:lineId',
+    access: ESTIMATE,
+    summary: 'Remove a manual line',
+    params: LineId,
+    handler: async ({ user, params }) => {
+      await service.deleteLine(user, params.panelId, params.lineId);
+      return undefined;
+    },
+  }),
+  defineRoute({
+    method: 'get',
+    path: '/api/panels/:panelId/bom/lines/:lineId/alternatives',
+    access: ALL,
+    summary: 'Active catalogue items of the same category a line may be swapped for',
+    params: LineId,
+    handler: ({ user, params }) => service.swapCandidates(user, params.panelId, params.lineId),
+  }),
+  defineRoute({
+    method: 'get',
+    path: '/api/panels/:panelId/bom.xlsx',
+    access: ALL,
+    summary: "A panel's bill of materials as .xlsx (streamed)",
+    params: PanelId,
+    handler: async ({ user, params, res }) => stream(res, await service.panelExport(user, params.panelId), 'xlsx'),
+  }),
+  defineRoute({
+    method: 'get',
+    path: '/api/panels/:panelId/bom.csv',
+    access: ALL,
+    summary: "A panel's bill of materials as .csv",
+    params: PanelId,
+    handler: async ({ user, params, res }) => stream(res, await service.panelExport(user, params.panelId), 'csv'),
+  }),
+  defineRoute({
+    method: 'get',
+    path: '/api/jobs/:id/bom.xlsx',
+    access: ALL,
+    summary: "A job's bill of materials (every panel not archived) as .xlsx (streamed)",
+    params: IdParamSchema,
+    handler: async ({ user, params, res }) => stream(res, await service.jobExport(user, params.id), 'xlsx'),
+  }),
+  defineRoute({
+    method: 'get',
+    path: '/api/jobs/:id/bom.csv',
+    access: ALL,
+    summary: "A job's bill of materials as .csv",
+    params: IdParamSchema,
+    handler: async ({ user, params, res }) => stream(res, await service.jobExport(user, params.id), 'csv'),
+  }),
+];
+
+/** The estimator's routes: catalogue, labour units and bills of materials. */
+export const estimatingRoutes: AnyRoute[] = [...catalogueRoutes, ...bomRoutes];

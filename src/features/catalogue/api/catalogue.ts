@@ -1,0 +1,86 @@
+import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
+import { api, get, patch, post, qs } from '../../../lib/api-client';
+import type { CatalogueItem, CatalogueItemInput, Category, LabourUnit } from '../../../../shared/schemas/catalogue';
+
+/** A catalogue item as the API returns it. */
+export type CatalogueEntry = CatalogueItem & { id: number; version: number; updatedAt: string };
+export type LabourUnitEntry = LabourUnit & { version: number };
+
+export interface CatalogueFilters {
+  category?: Category;
+  q?: string;
+  active?: 'true' | 'false' | 'all';
+}
+
+export interface HistoryEntry {
+  id: number;
+  action: string;
+  summary: string;
+  diff: Record<string, unknown> | null;
+  user: string | null;
+  at: string;
+}
+
+export interface ImportSummary {
+  created: number;
+  updated: number;
+  unchanged: number;
+}
+
+export const catalogueQueries = {
+  all: () => ['catalogue'] as const,
+  lists: () => [...catalogueQueries.all(), 'list'] as const,
+  list: (f: CatalogueFilters = {}) =>
+    queryOptions({
+      queryKey: [...catalogueQueries.lists(), f],
+      queryFn: () => get<CatalogueEntry[]>(`/api/catalogue/items${qs({ category: f.category, q: f.q, active: f.active })}`),
+    }),
+  history: (itemId: number) =>
+    queryOptions({ queryKey: [...catalogueQueries.all(), 'history', itemId], queryFn: () => get<HistoryEntry[]>(`/api/catalogue/items/${itemId}/history`) }),
+  labourUnits: () => queryOptions({ queryKey: [...catalogueQueries.all(), 'labour-units'], queryFn: () => get<LabourUnitEntry[]>('/api/labour-units') }),
+};
+
+export const CATALOGUE_EXPORT = { xlsx: '/api/catalogue.xlsx', csv: '/api/catalogue.csv' } as const;
+
+function useInvalidateCatalogue() {
+  const qc = useQueryClient();
+  return () => qc.invalidateQueries({ queryKey: catalogueQueries.all() });
+}
+
+export function useCreateItem() {
+  const invalidate = useInvalidateCatalogue();
+  return useMutation({ mutationFn: (v: CatalogueItemInput) => post<CatalogueEntry>('/api/catalogue/items', v), onSuccess: invalidate });
+}
+
+export type ItemChanges = Partial<Omit<CatalogueItemInput, 'code'>>;
+
+export function useUpdateItem() {
+  const invalidate = useInvalidateCatalogue();
+  return useMutation({
+    mutationFn: (v: { id: number; version: number; changes: ItemChanges }) => patch<CatalogueEntry>(`/api/catalogue/items/${v.id}`, { ...v.changes, version: v.version }),
+    onSettled: invalidate,
+  });
+}
+
+export function useImportCatalogue() {
+  const invalidate = useInvalidateCatalogue();
+  return useMutation({
+    mutationFn: (file: File) => {
+      const fd = new FormData();
+      fd.append('file', file);
+      return api<ImportSummary>('POST', '/api/catalogue/import', fd);
+    },
+    onSuccess: invalidate,
+  });
+}
+
+export function useUpdateLabourUnit() {
+  const invalidate = useInvalidateCatalogue();
+  return useMutation({
+    mutationFn: (v: { key: string; version: number; hours?: number; description?: string }) => {
+      const { key, ...body } = v;
+      return patch<LabourUnitEntry>(`/api/labour-units/${key}`, body);
+    },
+    onSettled: invalidate,
+  });
+}

@@ -1,0 +1,126 @@
+// The estimator's path: J-2041 → MCC-1 → Bill of materials → rebuild → totals → .xlsx download opened with exceljs.
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Browser } from 'playwright-core';
+import ExcelJS from 'exceljs';
+import fs from 'node:fs';
+import { baseUrl, launch, newPage, screenshot, signInThroughForm } from '../setup/browser';
+
+const parseMoney = (s: string) => Number(s.replace(/[^0-9.]/g, ''));
+
+describe('estimator in the browser', () => {
+  let browser: Browser;
+  beforeAll(async () => {
+    browser = await launch();
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+
+  it('rebuilds the bill of materials of MCC-1, reads its totals and downloads the .xlsx', async () => {
+    const page = await newPage(browser);
+    await signInThroughForm(page, 'estimator');
+    await page.waitForURL(/\/jobs$/);
+    await page.getByRole('table', { name: 'Jobs' }).getByRole('link', { name: 'J-2041' }).click();
+    await page.getByRole('link', { name: 'MCC-1 Pump hall' }).click();
+    await page.getByRole('navigation', { name: 'Panel sections' }).getByRole('link', { name: 'Bill of materials' }).click();
+    await page.waitForURL(/\/bill-of-materials$/);
+
+    // the demo panel has never been built: the page says so and offers the rebuild
+    await page.getByText('This panel has no bill of materials yet.').waitFor();
+    await page.getByRole('button', { name: 'Rebuild', exact: true }).click();
+    const table = page.getByRole('table', { name: 'Bill of materials' });
+    await table.waitFor();
+    await page.getByText('✔ Up to date with the motors and the catalogue.').waitFor();
+
+    // a subtotal row per bucket, motors and panel items
+    for (const tag of ['P-101', 'P-110', 'C-201', 'H-601']) await table.getByRole('row', { name: new RegExp(`^Subtotal ${tag}`) }).waitFor();
+    await table.getByRole('row', { name: /^Subtotal \(panel\)/ }).waitFor();
+
+    // footer totals: sell = cost + markup, as the page shows them
+    const foot = table.locator('tfoot');
+    const cell = async (label: string) => parseMoney((await foot.getByRole('row').filter({ has: page.getByRole('rowheader', { name: label, exact: true }) }).locator('td').nth(1).textContent()) ?? '');
+    const cost = await cell('Cost (material + labour)');
+    const markup = await cell('Markup 15 %');
+    const sell = await cell('Sell');
+    expect(cost).toBeGreaterThan(1000);
+    expect(markup).toBeCloseTo(Math.round(cost * 15) / 100, 2); // demo panel markup 15 %
+    expect(sell).toBeCloseTo(cost + markup, 2);
+    await screenshot(page, 'bom');
+
+    // the estimator sees the editing controls
+    await expect(page.getByRole('button', { name: '+ Manual line' }).isVisible()).resolves.toBe(true);
+    expect(await table.getByRole('button', { name: 'Swap' }).count()).toBeGreaterThan(5);
+
+    const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('link', { name: /Export \.xlsx/ }).click()]);
+    // the exact name comes through filename* (RFC 6266); an ASCII fallback is in filename
+    expect(download.suggestedFilename()).toBe('J-2041-MCC-1 Pump hall-bom.xlsx');
+    const file = await download.path();
+    const wb = new ExcelJS.Workbook();
+    await wb.xlsx.load(fs.readFileSync(file) as unknown as ArrayBuffer);
+    expect(wb.worksheets.map((w) => w.name)).toEqual(['Summary', 'MCC-1 Pump hall', 'Roll-up by part']);
+    const summary = wb.getWorksheet('Summary')!;
+    const sellCell = summary.getRow(6).getCell(7).value as { formula: string; result: number };
+    expect(sellCell.formula).toMatch(/^'MCC-1 Pump hall'!H\d+$/);
+    expect(sellCell.result).toBeCloseTo(sell, 2);
+    const ws = wb.getWorksheet('MCC-1 Pump hall')!;
+    expect((ws.getRow(6).getCell(8).value as { formula: string }).formula).toBe('ROUND(E6*G6,2)');
+  });
+
+  it('shows the catalogue grouped by category and the labour units, read-only for an engineer', async () => {
+    const page = await newPage(browser);
+    await signInThroughForm(page, 'engineer');
+    await page.waitForURL(/\/jobs$/);
+    await page.goto(`${baseUrl()}/catalogue`);
+    const table = page.getByRole('table', { name: 'Catalogue' });
+    await table.waitFor();
+    await table.getByRole('button', { name: /^Contactors \(\d+\)$/ }).click();
+    expect(await table.getByRole('row').count()).toBeGreaterThan(10);
+    expect(await page.getByRole('button', { name: '+ Add item' }).count()).toBe(0);
+    expect(await table.getByRole('button', { name: /Unit cost of .* Edit/ }).count()).toBe(0);
+    await screenshot(page, 'catalogue-engineer');
+    await page.goto(`${baseUrl()}/labour-units`);
+    await page.getByRole('table', { name: 'Labour units' }).getByText('termination', { exact: true }).waitFor();
+  });
+
+  it('lets an estimator change a price inline and see it in the item history', async () => {
+    const page = await newPage(browser);
+    await signInThroughForm(page, 'estimator');
+    await page.waitForURL(/\/jobs$/);
+    await page.goto(`${baseUrl()}/catalogue`);
+    const table = page.getByRole('table', { name: 'Catalogue' });
+    await table.waitFor();
+    await page.getByRole('textbox', { name: 'Code or description' }).fill('PW-TB');
+    const edit = table.getByRole('button', { name: /^Unit cost of PW-TB/ }).first();
+    const label = (await edit.getAttribute('aria-label'))!;
+    const code = /Unit cost of (\S+):/.exec(label)![1]!;
+    await edit.click();
+    const input = table.getByRole('textbox', { name: `Unit cost of ${code}` });
+    await input.fill('4.44');
+    await input.press('Enter');
+    await table.getByRole('button', { name: `Unit cost of ${code}: 4.44. Edit` }).waitFor();
+    await table.getByRole('row').filter({ hasText: code }).getByRole('button', { name: 'History' }).click();
+    const history = page.getByRole('region', { name: `History of ${code}` });
+    await history.getByText(/unitCost: .* → 4.44/).waitFor();
+    // only the price changed: the item's other fields are untouched
+    expect(await history.getByText(/^terminations:/).count()).toBe(0);
+    await screenshot(page, 'catalogue-estimator');
+
+    // add an item through the form: the category decides which ratings it asks for
+    await page.getByRole('button', { name: '+ Add item' }).click();
+    const form = page.getByRole('form', { name: 'Add catalogue item' });
+    await form.getByLabel('Code').fill('PW-FU-CC-TEST-E2E');
+    await form.getByLabel('Description').fill('Fuse, class CC, time-delay, 7 A, 600 V (browser test)');
+    await form.getByLabel('Category').selectOption('fuse');
+    await form.getByRole('button', { name: 'Add item' }).click();
+    await form.getByText('Invalid input: expected number, received undefined').first().waitFor();
+    await form.getByLabel('Unit cost').fill('9.9');
+    await form.getByLabel('Lead time').fill('4');
+    await form.getByLabel('volts').fill('600');
+    await form.getByLabel('amps').fill('7');
+    await form.getByLabel('fuseClass').fill('CC');
+    await form.getByLabel('timeDelay').check();
+    await screenshot(page, 'catalogue-add-item');
+    await form.getByRole('button', { name: 'Add item' }).click();
+    await page.getByText('✔ Added PW-FU-CC-TEST-E2E.').waitFor();
+  });
+});
