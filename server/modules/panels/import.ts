@@ -1,6 +1,7 @@
 // Motor-list import: a template, a preview that marks each row's problems before anything is saved,
 // then an all-or-nothing commit. Columns are the selection engine's input fields.
 import ExcelJS from 'exceljs';
+import { parse } from 'csv-parse/sync';
 import type { CurrentUser } from '../../../shared/schemas/auth';
 import { LoadSchema, type LoadInput } from '../../../shared/schemas/load';
 import { DomainError, ValidationError, zodIssues } from '../../../shared/errors';
@@ -111,7 +112,9 @@ async function readRows(buffer: Buffer, filename: string): Promise<string[][]> {
   if (lower.endsWith('.csv')) {
     const text = buffer.toString('utf8').replace(/^\uFEFF/, '');
     if (text.includes('\u0000')) throw new UnsupportedFile('The file is not a text CSV');
-    return parseCsv(text);
+    const rows = parseCsv(text);
+    if (rows.length > MAX_IMPORT_ROWS + 1) throw new ValidationError(`At most ${MAX_IMPORT_ROWS} motors per file`, [{ path: 'file', message: 'too many rows' }]);
+    return rows;
   }
   if (!lower.endsWith('.xlsx')) throw new UnsupportedFile('Upload an .xlsx or .csv file');
   const packageProblem = checkXlsxPackage(buffer);
@@ -134,39 +137,13 @@ async function readRows(buffer: Buffer, filename: string): Promise<string[][]> {
   return Array.from(rows, (r) => r ?? []);
 }
 
-/** RFC 4180 CSV: quoted fields, doubled quotes, CRLF or LF. */
+/** RFC 4180 CSV (quoted fields, doubled quotes, CRLF or LF) through csv-parse, with the row limit. */
 export function parseCsv(text: string): string[][] {
-  const rows: string[][] = [];
-  let row: string[] = [];
-  let field = '';
-  let quoted = false;
-  for (let i = 0; i < text.length; i++) {
-    const ch = text[i];
-    if (quoted) {
-      if (ch === '"') {
-        if (text[i + 1] === '"') {
-          field += '"';
-          i++;
-        } else quoted = false;
-      } else field += ch;
-    } else if (ch === '"') quoted = true;
-    else if (ch === ',') {
-      row.push(field.trim());
-      field = '';
-    } else if (ch === '\n' || ch === '\r') {
-      if (ch === '\r' && text[i + 1] === '\n') i++;
-      row.push(field.trim());
-      rows.push(row);
-      row = [];
-      field = '';
-      if (rows.length > MAX_IMPORT_ROWS + 1) throw new ValidationError(`At most ${MAX_IMPORT_ROWS} motors per file`, [{ path: 'file', message: 'too many rows' }]);
-    } else field += ch;
+  try {
+    return parse(text, { relax_column_count: true, trim: true, skip_empty_lines: true, to_line: MAX_IMPORT_ROWS + 2 }) as string[][];
+  } catch (err) {
+    throw new ValidationError(`The CSV could not be read: ${(err as Error).message}`, [{ path: 'file', message: 'not a readable CSV' }]);
   }
-  if (field !== '' || row.length) {
-    row.push(field.trim());
-    rows.push(row);
-  }
-  return rows;
 }
 
 export async function previewImport(buffer: Buffer, filename: string, existingTags: string[] = []): Promise<{ rows: PreviewRow[]; ok: boolean; columns: string[] }> {
