@@ -275,6 +275,11 @@ export function unitLabourHours(category: Category, item: CatalogueItem | null, 
 const round2 = (n: number): number => Math.round((n + Number.EPSILON) * 100) / 100;
 const round4 = (n: number): number => Math.round((n + Number.EPSILON) * 10000) / 10000;
 
+/** A line swapped by the estimator for an equivalent item: the item's price, labour, heat and rating, with the reason. */
+export function swappedLine(line: BomLine, item: CatalogueItem, labour: LabourTable, reason: string | null): BomLine {
+  return { ...matchedLine(line.bucket, item, line.quantity, labour), source: 'swapped', swapReason: reason };
+}
+
 function matchedLine(bucket: string, item: CatalogueItem, quantity: number, labour: LabourTable): BomLine {
   return {
     bucket,

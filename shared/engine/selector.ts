@@ -40,6 +40,8 @@ export interface Selector {
   readonly ruleCount: number;
   selectLoad(load: LoadInput, supply: SupplyInput): Promise<LoadSelection>;
   selectPanel(input: SelectionInput): Promise<SelectionOutput>;
+  /** The panel roll-up (430.24, 430.62(A)) from selections already made, without running the rules again. */
+  panelRollup(supply: SupplyInput, loads: ReadonlyArray<LoadInput>, results: ReadonlyArray<LoadSelection>): SelectionOutput['panel'];
 }
 
 /** Decisions every load needs; a rule set that leaves one undecided reports it as an error on the load. */
@@ -443,5 +445,11 @@ export function createSelector(ruleFiles: ReadonlyArray<RuleFileInput>, options:
     return { feeder: f.feeder, totalFlcAmps: f.totalFlcAmps, largestMotorTag: f.largestMotorTag, notes: [...notes, ...f.notes], errors: [...errors, ...f.errors] };
   }
 
-  return { codeEdition: edition, ruleCount: rules.length, selectLoad, selectPanel };
+  function panelRollup(supply: SupplyInput, loads: ReadonlyArray<LoadInput>, results: ReadonlyArray<LoadSelection>): SelectionOutput['panel'] {
+    const s = parseOrThrow(SupplySchema, supply, 'supply');
+    const parsed = loads.map((l, i) => parseOrThrow(LoadSchema, l, `loads[${i}]`));
+    return rollup(s, parsed, [...results]);
+  }
+
+  return { codeEdition: edition, ruleCount: rules.length, selectLoad, selectPanel, panelRollup };
 }

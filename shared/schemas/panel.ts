@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import type { LoadSelection, PanelRollup } from './selection';
 import type { StoredOverride } from './override';
+import type { JobSummary } from './job';
 
 export const MOUNTINGS = ['free-standing', 'wall-mounted', 'row-end', 'row-middle', 'wall-row-end', 'wall-row-middle'] as const;
 export const MOUNTING_LABELS: Record<(typeof MOUNTINGS)[number], string> = {
@@ -73,7 +74,7 @@ export interface PanelDetail extends PanelSummary {
   markupPercent: number;
   labourRate: number;
   rollup: PanelRollup | null;
-  job: { id: number; number: string; name: string; supplyVolts: number; supplyPhases: number; supplyHz: number; availableFaultKa: number; ambientC: number; codeEdition: string };
+  job: Omit<JobSummary, 'panelCount' | 'motorCount'>;
   loads: LoadView[];
   comments: CommentView[];
   revisions: Array<{ number: number; approvedAt: string; approvedBy: string | null }>;

@@ -204,3 +204,44 @@ describe('motor-list import', () => {
     expect(wb.getWorksheet('Motors')!.getRow(1).getCell(1).value).toBe('tag');
   });
 });
+
+describe('job changes that the selections depend on', () => {
+  it("selects every motor again when the job's ambient changes, and refuses while a panel is in review", async () => {
+    const designer = await signInAs('designer');
+    const engineer = await signInAs('engineer');
+    const { job, panel } = await newPanel(designer);
+    await send(designer, 'post', `/api/panels/${panel.id}/loads`, { answers: { tag: 'A-1', supply: 'ac3', hp: 25, volts: 460 } }).expect(201);
+    let p = (await designer.agent.get(`/api/panels/${panel.id}`)).body;
+    // NEC 2023 430.22: 125 % of 34 A (Table 430.250) = 42.5 A; at 30 °C 8 AWG Cu 75 °C carries 50 A (Table 310.16)
+    expect(p.loads[0].selection.conductor.size).toBe('8 AWG');
+    p = (await send(designer, 'post', `/api/panels/${panel.id}/submit`, { version: p.version }).expect(200)).body;
+    const j = (await designer.agent.get(`/api/jobs/${job.id}`)).body;
+    const refused = await send(designer, 'patch', `/api/jobs/${job.id}`, { ambientC: 50, version: j.version }).expect(409);
+    expect(refused.body.error.message).toMatch(/in review/);
+    p = (await send(engineer, 'post', `/api/panels/${panel.id}/approve`, { version: p.version }).expect(200)).body;
+    expect(p.status).toBe('signed_off');
+
+    const j2 = (await designer.agent.get(`/api/jobs/${job.id}`)).body;
+    expect(j2.ambientC).toBe(30); // the refused change was not written
+    await send(designer, 'patch', `/api/jobs/${job.id}`, { ambientC: 50, version: j2.version }).expect(200);
+    const after = (await designer.agent.get(`/api/panels/${panel.id}`)).body;
+    // Table 310.15(B)(1)(1): 75 °C insulation at 46–50 °C ambient, factor 0.75: 8 AWG 50 A x 0.75 = 37.5 A < 42.5 A,
+    // 6 AWG 65 A x 0.75 = 48.75 A >= 42.5 A
+    expect(after.loads[0].selection.conductor.size).toBe('6 AWG');
+    expect(after.status).toBe('draft');
+    expect(after.rollup.feeder.minAmpacity).toBe(42.5);
+  });
+
+  it('changes a shared answer on several motors in one go', async () => {
+    const designer = await signInAs('designer');
+    const { panel } = await newPanel(designer);
+    for (const tag of ['W-1', 'W-2', 'W-3']) await send(designer, 'post', `/api/panels/${panel.id}/loads`, { answers: { tag, supply: 'ac3', hp: 5, volts: 460, environment: 'indoor-dry' } }).expect(201);
+    let p = (await designer.agent.get(`/api/panels/${panel.id}`)).body;
+    const ids = p.loads.slice(0, 2).map((l: { id: number }) => l.id);
+    await send(designer, 'post', `/api/panels/${panel.id}/loads/bulk-edit`, { loadIds: ids, changes: { environment: 'washdown' }, panelVersion: p.version }).expect(200);
+    p = (await designer.agent.get(`/api/panels/${panel.id}`)).body;
+    // NEMA 250: indoor dry -> Type 1; washdown -> Type 4 or 4X
+    expect(p.loads.map((l: { selection: { enclosure: { nemaType: string } } }) => l.selection.enclosure.nemaType)).toEqual([expect.stringMatching(/^4X?$/), expect.stringMatching(/^4X?$/), '1']);
+    expect(p.loads.map((l: { version: number }) => l.version)).toEqual([1, 1, 0]);
+  });
+});

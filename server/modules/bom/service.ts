@@ -11,7 +11,7 @@ import { NotFoundError, ValidationError, zodIssues } from '../../../shared/error
 import type { BomExportJob, BomExportPanel } from './export';
 import { getJob } from '../jobs/service';
 import type { LoadSelection, PanelRollup } from '../../../shared/schemas/selection';
-import { buildBom, computeTotals, unitLabourHours } from '../../../shared/calc/bom';
+import { buildBom, computeTotals, swappedLine, unitLabourHours } from '../../../shared/calc/bom';
 import { recordActivity } from '../activity/service';
 import { catalogueFor, labourUnitsFor } from '../catalogue/repository';
 import { loadsOf } from '../panels/repository';
@@ -92,20 +92,7 @@ export async function planBom(organisationId: number, panel: Panel & { job: Job 
     const item = swap?.code ? byCode.get(swap.code) : undefined;
     let line: BomLine = l;
     if (swap && item && item.category === l.category) {
-      line = {
-        ...l,
-        code: item.code,
-        description: item.description,
-        unit: item.unit,
-        unitCost: item.unitCost,
-        unitLabourHours: unitLabourHours(item.category, item, labour),
-        heatLossW: item.heatLossW,
-        sccrKa: item.sccrKa,
-        status: 'matched',
-        requiredRatings: null,
-        source: 'swapped',
-        swapReason: swap.swapReason,
-      };
+      line = swappedLine(l, item, labour, swap.swapReason);
     }
     const kept = !opts.reprice && line.code ? frozen.get(`${line.bucket}\u0000${line.category}\u0000${line.code}`) : undefined;
     return kept !== undefined ? { ...line, unitCost: kept } : line;
@@ -261,20 +248,7 @@ export async function updateLine(actor: CurrentUser, panelId: number, lineId: nu
         throw new ValidationError(`${item.code} is not an equivalent: it is not in the line's category`, [{ path: 'body.swapCode', message: `must be a ${before.category}` }]);
       }
       const labour = new Map((await labourUnitsFor(actor.organisationId, t)).map((u) => [u.key, u]));
-      after = {
-        ...after,
-        code: item.code,
-        description: item.description,
-        unit: item.unit,
-        unitCost: item.unitCost,
-        unitLabourHours: unitLabourHours(item.category, item, labour),
-        heatLossW: item.heatLossW,
-        sccrKa: item.sccrKa,
-        status: 'matched',
-        requiredRatings: null,
-        source: 'swapped',
-        swapReason: reason,
-      };
+      after = swappedLine(after, item, labour, reason);
     }
     const direct = (['quantity', 'description', 'unitCost', 'unitLabourHours'] as const).filter((k) => changes[k] !== undefined);
     if (direct.length > 0) {

@@ -4,6 +4,11 @@ import { ConflictError, NotFoundError, ValidationError } from '../../../shared/e
 import * as repo from './repository';
 import { recordActivity } from '../activity/service';
 import type { Job } from '../../db/models/job';
+import { db } from '../../db/sequelize';
+import { reselectJobPanels } from '../panels/service';
+
+/** Job fields the motor selections depend on. */
+const SELECTION_FIELDS = ['supplyVolts', 'supplyPhases', 'supplyHz', 'ambientC', 'codeEdition'] as const;
 
 export function jobView(j: Job) {
   return {
@@ -55,9 +60,13 @@ export async function updateJob(actor: CurrentUser, id: number, input: Partial<J
     const before = (job as unknown as Record<string, unknown>)[k];
     if (before !== v) diff[k] = { from: before, to: v };
   }
-  const count = await repo.updateJobVersioned(actor.organisationId, id, version, changes);
-  if (count === 0) throw new ConflictError('Someone else changed this job since you opened it: reload to see their change, then apply yours again');
-  await recordActivity(actor, { entity: 'job', entityId: id, jobId: id, action: 'updated', summary: `Changed job ${job.number}: ${Object.keys(diff).join(', ') || 'no fields'}`, diff });
+  const reselect = SELECTION_FIELDS.filter((f) => f in diff);
+  await db().transaction(async (t) => {
+    const count = await repo.updateJobVersioned(actor.organisationId, id, version, changes, t);
+    if (count === 0) throw new ConflictError('Someone else changed this job since you opened it: reload to see their change, then apply yours again');
+    await recordActivity(actor, { entity: 'job', entityId: id, jobId: id, action: 'updated', summary: `Changed job ${job.number}: ${Object.keys(diff).join(', ') || 'no fields'}`, diff }, t);
+    if (reselect.length) await reselectJobPanels(actor, id, reselect.join(', '), t);
+  });
   return jobView((await repo.findJob(actor.organisationId, id))!);
 }
 

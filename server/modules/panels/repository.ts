@@ -61,4 +61,4 @@ export async function usersWithRole(organisationId: number, role: string) {
   });
 }
 
-export { Panel, Load, Revision, Comment };
+export { Panel, Load, Revision, Comment, Job };

@@ -4,15 +4,10 @@ import { getSelector } from '../../engine/rule-files';
 import type { LoadInput, SupplyInput } from '../../../shared/schemas/load';
 import type { LoadSelection, SelectionOutput } from '../../../shared/schemas/selection';
 import type { CodeEdition } from '../../../shared/standards/code-edition';
+import type { JobSummary } from '../../../shared/schemas/job';
+import type { PanelRollup } from '../../../shared/schemas/selection';
 
-export interface JobSupply {
-  supplyVolts: number;
-  supplyPhases: number;
-  supplyHz: number;
-  availableFaultKa: number;
-  ambientC: number;
-  codeEdition: string;
-}
+export type JobSupply = Pick<JobSummary, 'supplyVolts' | 'supplyPhases' | 'supplyHz' | 'availableFaultKa' | 'ambientC' | 'codeEdition'>;
 
 export function supplyOf(job: JobSupply): SupplyInput {
   return {
@@ -30,6 +25,12 @@ function edition(job: JobSupply): CodeEdition {
 
 export async function selectOne(job: JobSupply, answers: LoadInput): Promise<LoadSelection> {
   return getSelector(edition(job)).selectLoad(answers, supplyOf(job));
+}
+
+/** The panel roll-up from the stored selections: no rules run again. */
+export function rollupOf(job: JobSupply, answers: LoadInput[], selections: LoadSelection[]): PanelRollup | null {
+  if (answers.length === 0) return null;
+  return getSelector(edition(job)).panelRollup(supplyOf(job), answers, selections);
 }
 
 export async function selectAll(job: JobSupply, answers: LoadInput[]): Promise<SelectionOutput | null> {

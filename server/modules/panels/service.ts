@@ -9,9 +9,9 @@ import type { OverrideInput, StoredOverride } from '../../../shared/schemas/over
 import { applyOverrides, checkOverride } from '../../../shared/calc/overrides';
 import { ConflictError, ForbiddenError, NotFoundError, ValidationError, zodIssues } from '../../../shared/errors';
 import * as repo from './repository';
-import { selectAll, selectOne } from './selection';
+import { rollupOf, selectAll, selectOne } from './selection';
 import { recordActivity } from '../activity/service';
-import { getJob } from '../jobs/service';
+import { getJob, jobView } from '../jobs/service';
 import type { Panel } from '../../db/models/panel';
 import type { Load } from '../../db/models/load';
 import type { Job } from '../../db/models/job';
@@ -30,20 +30,6 @@ export function loadView(l: Load): LoadView {
     effective: selection ? applyOverrides(selection, overrides) : null,
     overrides,
     version: l.version,
-  };
-}
-
-function jobPart(j: Job) {
-  return {
-    id: j.id,
-    number: j.number,
-    name: j.name,
-    supplyVolts: j.supplyVolts,
-    supplyPhases: j.supplyPhases,
-    supplyHz: j.supplyHz,
-    availableFaultKa: j.availableFaultKa,
-    ambientC: j.ambientC,
-    codeEdition: j.codeEdition,
   };
 }
 
@@ -77,7 +63,7 @@ export async function panelDetail(actor: CurrentUser, id: number): Promise<Panel
     markupPercent: p.markupPercent,
     labourRate: p.labourRate,
     rollup: (p.rollup ?? null) as PanelRollup | null,
-    job: jobPart(p.job),
+    job: jobView(p.job) as unknown as PanelDetail['job'], // dates travel as ISO strings
     loads: loads.map(loadView).map((l) => (l.overrides.length ? l : { ...l, effective: null })),
     comments: comments.map(
       (c): CommentView => ({ id: c.id, loadId: c.loadId, body: c.body, author: (c as unknown as { author?: { name: string } }).author?.name ?? null, at: c.createdAt.toISOString() }),
@@ -122,10 +108,27 @@ async function changePanel<T>(
   });
 }
 
-/** Recomputes the panel roll-up from every motor's answers (the same selector as the browser). */
+/** Recomputes the panel roll-up from the motors' stored selections (the rules do not run again). */
 async function refreshRollup(p: Panel & { job: Job }, t: Transaction) {
+  const loads = (await repo.loadsOf(p.id, t)).filter((l) => l.selection);
+  const rollup = rollupOf(p.job, loads.map((l) => l.answers as LoadInput), loads.map((l) => l.selection as unknown as LoadSelection));
+  p.rollup = rollup as unknown as Record<string, unknown> | null;
+  p.changed('rollup', true);
+}
+
+/**
+ * Runs the rules again for every motor of a panel (the job's supply, ambient or code edition changed)
+ * and stores the new selections and roll-up, in the caller's transaction.
+ */
+export async function reselectPanel(p: Panel & { job: Job }, t: Transaction) {
   const loads = await repo.loadsOf(p.id, t);
   const out = await selectAll(p.job, loads.map((l) => l.answers as LoadInput));
+  if (out) {
+    await repo.Load.bulkCreate(
+      loads.map((l, i) => ({ ...l.get({ plain: true }), selection: out.results[i] as unknown as Record<string, unknown>, version: l.version + 1 })),
+      { updateOnDuplicate: ['selection', 'version', 'updatedAt'], transaction: t },
+    );
+  }
   p.rollup = out ? (out.panel as unknown as Record<string, unknown>) : null;
   p.changed('rollup', true);
 }
@@ -158,6 +161,18 @@ export async function addLoad(actor: CurrentUser, panelId: number, answers: unkn
     await recordActivity(actor, { entity: 'load', entityId: l.id, jobId: p.jobId, panelId: p.id, action: 'added', summary: `Added motor ${input.tag} to ${p.name}` }, t);
     return loadView(l);
   });
+}
+
+/** A change to the job's supply, ambient or code edition: every active panel's motors are selected again. */
+export async function reselectJobPanels(actor: CurrentUser, jobId: number, what: string, t: Transaction) {
+  const panels = await repo.Panel.findAll({ where: { organisationId: actor.organisationId, jobId, archivedAt: null }, include: [{ model: repo.Job, as: 'job', required: true }], transaction: t, lock: { level: t.LOCK.UPDATE, of: repo.Panel } });
+  for (const p of panels as Array<Panel & { job: Job }>) {
+    if (p.status === 'in_review') throw new ConflictError(`Panel ${p.name} is in review: the engineer must return it before the job's ${what} can change`);
+    await reselectPanel(p, t);
+    const reopened = p.status === 'signed_off';
+    await repo.bumpPanel(actor.organisationId, p.id, p.version, { status: reopened ? 'draft' : p.status, rollup: p.rollup }, t);
+    if (reopened) await recordActivity(actor, { entity: 'panel', entityId: p.id, jobId, panelId: p.id, action: 'reopened', summary: `Opened a new draft after R${p.revisionNumber}: the job's ${what} changed` }, t);
+  }
 }
 
 export async function addLoads(actor: CurrentUser, panelId: number, answersList: LoadInput[], t: Transaction, p: Panel & { job: Job }) {
@@ -233,12 +248,11 @@ export async function bulkEdit(actor: CurrentUser, panelId: number, loadIds: num
     if (loads.length !== loadIds.length) throw new NotFoundError('One of the motors');
     const inputs = loads.map((l, i) => parseAnswers({ ...l.answers, ...changes }, `loads[${i}]`));
     const out = await selectAll(p.job, inputs);
-    for (let i = 0; i < loads.length; i++) {
-      await repo.Load.update(
-        { answers: inputs[i] as Record<string, unknown>, selection: out!.results[i] as unknown as Record<string, unknown>, version: loads[i].version + 1 },
-        { where: { id: loads[i].id }, transaction: t },
-      );
-    }
+    // one statement for all the motors
+    await repo.Load.bulkCreate(
+      loads.map((l, i) => ({ ...l.get({ plain: true }), answers: inputs[i] as Record<string, unknown>, selection: out!.results[i] as unknown as Record<string, unknown>, version: l.version + 1 })),
+      { updateOnDuplicate: ['answers', 'selection', 'version', 'updatedAt'], transaction: t },
+    );
     await refreshRollup(p, t);
     await recordActivity(actor, { entity: 'panel', entityId: p.id, jobId: p.jobId, panelId: p.id, action: 'bulk-edit', summary: `Changed ${Object.keys(changes).join(', ')} on ${loads.length} motors`, diff: changes }, t);
     return { updated: loads.length };
