@@ -245,3 +245,20 @@ describe('job changes that the selections depend on', () => {
     expect(p.loads.map((l: { version: number }) => l.version)).toEqual([1, 1, 0]);
   });
 });
+
+describe("the panel page's data", () => {
+  it('answers 304 to an unchanged panel and shows a new comment or motor at once', async () => {
+    const designer = await signInAs('designer');
+    const { panel } = await newPanel(designer);
+    const first = await designer.agent.get(`/api/panels/${panel.id}`).expect(200);
+    const etag = first.headers.etag as string;
+    expect(etag).toMatch(/^W\//);
+    await designer.agent.get(`/api/panels/${panel.id}`).set('if-none-match', etag).expect(304);
+    await send(designer, 'post', `/api/panels/${panel.id}/comments`, { body: 'Check the door clearance', loadId: null }).expect(201);
+    const afterComment = await designer.agent.get(`/api/panels/${panel.id}`).set('if-none-match', etag).expect(200);
+    expect(afterComment.body.comments.map((c: { body: string }) => c.body)).toEqual(['Check the door clearance']);
+    await send(designer, 'post', `/api/panels/${panel.id}/loads`, { answers: { tag: 'Z-1', supply: 'ac3', hp: 2, volts: 460 } }).expect(201);
+    const afterMotor = await designer.agent.get(`/api/panels/${panel.id}`).set('if-none-match', afterComment.headers.etag as string).expect(200);
+    expect(afterMotor.body.loads.map((l: { tag: string }) => l.tag)).toEqual(['Z-1']);
+  });
+});

@@ -45,6 +45,11 @@ export async function revisionsOf(panelId: number) {
   );
 }
 
+/** Marks a panel changed without a new version (a comment): its cached answer is no longer current. */
+export async function touchPanel(id: number, transaction?: Transaction) {
+  await db().query('update panels set updated_at = now() where id = :id', { replacements: { id }, transaction });
+}
+
 export async function findLoad(organisationId: number, id: number, transaction?: Transaction) {
   return Load.findOne({ where: { organisationId, id }, transaction });
 }

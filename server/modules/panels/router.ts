@@ -26,7 +26,14 @@ export const panelRoutes = [
     body: PanelInputSchema,
     handler: ({ user, params, body }) => service.createPanel(user, params.id, body),
   }),
-  defineRoute({ method: 'get', path: '/api/panels/:panelId', access: ALL, summary: 'A panel with its motors, selections, comments and revisions', params: PanelId, handler: ({ user, params }) => service.panelDetail(user, params.panelId) }),
+  defineRoute({ method: 'get', path: '/api/panels/:panelId', access: ALL, summary: 'A panel with its motors, selections, comments and revisions', params: PanelId, handler: async ({ user, params, req, res }) => {
+      const { json, key } = await service.panelDetailJson(user, params.panelId);
+      res.setHeader('ETag', `W/"${key}"`);
+      res.setHeader('Cache-Control', 'private, no-cache');
+      if (req.fresh) res.status(304).end();
+      else res.type('application/json').send(json);
+      return undefined;
+    } }),
   defineRoute({
     method: 'patch',
     path: '/api/panels/:panelId',

@@ -44,9 +44,32 @@ export async function requirePanel(actor: CurrentUser, id: number, transaction?:
   return p as Panel & { job: Job };
 }
 
+/**
+ * The panel page's data as JSON text, kept per process and keyed by the panel's and the job's
+ * updated_at (every change to motors, overrides, comments, state or job touches one of them), so that
+ * a repeated read costs one query and no serialisation. The key is read from the database on every
+ * call, so several server instances stay correct.
+ */
+const detailCache = new Map<number, { key: string; json: string }>();
+const DETAIL_CACHE_MAX = 500;
+
+export async function panelDetailJson(actor: CurrentUser, id: number): Promise<{ json: string; key: string }> {
+  const p = await requirePanel(actor, id);
+  const key = `${p.id}.${p.version}.${p.updatedAt.getTime()}.${p.job.updatedAt.getTime()}`;
+  const hit = detailCache.get(p.id);
+  if (hit && hit.key === key) return hit;
+  const entry = { key, json: JSON.stringify(await panelDetailOf(p)) };
+  if (detailCache.size >= DETAIL_CACHE_MAX) detailCache.delete(detailCache.keys().next().value as number);
+  detailCache.set(p.id, entry);
+  return entry;
+}
+
 /** Everything a panel page shows, in four queries whatever the motor count. */
 export async function panelDetail(actor: CurrentUser, id: number): Promise<PanelDetail> {
-  const p = await requirePanel(actor, id);
+  return panelDetailOf(await requirePanel(actor, id));
+}
+
+async function panelDetailOf(p: Panel & { job: Job }): Promise<PanelDetail> {
   const [loads, comments, revisions] = await Promise.all([repo.loadsOf(p.id), repo.commentsOf(p.id), repo.revisionsOf(p.id)]);
   return {
     id: p.id,
@@ -341,6 +364,7 @@ export async function addComment(actor: CurrentUser, panelId: number, body: stri
     if (!l || l.panelId !== p.id) throw new ValidationError('That motor is not on this panel', [{ path: 'body.loadId', message: 'not on this panel' }]);
   }
   const c = await repo.Comment.create({ organisationId: actor.organisationId, panelId: p.id, loadId, userId: actor.id, body });
+  await repo.touchPanel(p.id);
   await recordActivity(actor, { entity: 'comment', entityId: c.id, jobId: p.jobId, panelId: p.id, action: 'commented', summary: `Commented on ${p.name}: ${body.slice(0, 80)}` });
   return { id: c.id, loadId, body, author: actor.name, at: c.createdAt.toISOString() } satisfies CommentView;
 }
