@@ -9,25 +9,20 @@ import { User } from '../../db/models/user';
 import type { CurrentUser } from '../../../shared/schemas/auth';
 import {
   CatalogueItemSchema,
+  type CatalogueEntry,
+  type CatalogueFilter,
   type CatalogueItem,
-  type CatalogueItemInput,
-  type Category,
+  type HistoryEntry,
+  type ImportSummary,
+  type ItemChanges,
   type LabourKey,
   type LabourUnit,
+  type LabourUnitEntry,
 } from '../../../shared/schemas/catalogue';
 import { ConflictError, NotFoundError, ValidationError, zodIssues } from '../../../shared/errors';
 import { recordActivity } from '../activity/service';
 import { fromItem, toItem } from './repository';
 import { parseCatalogueFile, type ImportError } from './spreadsheet';
-
-export type CatalogueEntry = CatalogueItem & { id: number; version: number; updatedAt: string };
-export type LabourUnitEntry = LabourUnit & { version: number };
-
-export interface CatalogueFilter {
-  category?: Category;
-  q?: string;
-  active?: 'true' | 'false' | 'all';
-}
 
 const entry = (r: CatalogueRow): CatalogueEntry => ({ ...toItem(r), id: r.id, version: r.version, updatedAt: r.updatedAt.toISOString() });
 
@@ -94,8 +89,6 @@ export async function createItem(actor: CurrentUser, item: CatalogueItem): Promi
   });
 }
 
-export type ItemChanges = Partial<Omit<CatalogueItemInput, 'code'>>;
-
 export async function updateItem(actor: CurrentUser, id: number, changes: ItemChanges, version: number): Promise<CatalogueEntry> {
   return db().transaction(async (t) => {
     const r = await requireItem(actor, id, t, true);
@@ -119,15 +112,6 @@ export function setActive(actor: CurrentUser, id: number, active: boolean, versi
   return updateItem(actor, id, { active }, version);
 }
 
-export interface HistoryEntry {
-  id: number;
-  action: string;
-  summary: string;
-  diff: Record<string, unknown> | null;
-  user: string | null;
-  at: string;
-}
-
 export async function itemHistory(actor: CurrentUser, id: number): Promise<HistoryEntry[]> {
   await requireItem(actor, id);
   const rows = await Activity.findAll({
@@ -149,12 +133,6 @@ export async function itemHistory(actor: CurrentUser, id: number): Promise<Histo
 export async function allItems(actor: CurrentUser): Promise<CatalogueItem[]> {
   const rows = await CatalogueRow.findAll({ where: { organisationId: actor.organisationId }, order: [['category', 'ASC'], ['code', 'ASC']] });
   return rows.map(toItem);
-}
-
-export interface ImportSummary {
-  created: number;
-  updated: number;
-  unchanged: number;
 }
 
 /** Thrown when an import file has problems: every problem by row and column, nothing written. */

@@ -2,16 +2,8 @@
 // DC field) and its selection (starter type). The card itself comes from shared/calc/connections.
 import { connectionCard, type ConnectionCard, type ConnectionRequest } from '../../../shared/calc/connections';
 import type { LoadSelection } from '../../../shared/schemas/selection';
+import type { MotorConnectionCard } from '../../../shared/schemas/checks';
 
-export interface MotorConnectionCard {
-  loadId: number;
-  tag: string;
-  card: ConnectionCard | null;
-  /** what the card takes for granted that the answers do not say */
-  assumptions: string[];
-  /** why there is no card */
-  reason: string | null;
-}
 
 /** Dual-voltage three-phase motors are wound 230/460 V: at 380 V or more the high-voltage connection (common practice). */
 const HIGH_VOLTAGE_FROM = 380;

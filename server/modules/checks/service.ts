@@ -7,6 +7,7 @@ import type { CurrentUser } from '../../../shared/schemas/auth';
 import type { BomLine, CatalogueItem } from '../../../shared/schemas/catalogue';
 import { PANEL_BUCKET } from '../../../shared/schemas/catalogue';
 import type { LoadSelection, PanelRollup } from '../../../shared/schemas/selection';
+import type { ControlPowerCheck, ExcludedComponent, HeatCheck, NameplateCheck, PanelChecks, SccrCheck } from '../../../shared/schemas/checks';
 import { buildBom, indexCatalogue, selectItem } from '../../../shared/calc/bom';
 import {
   calculatePanelSccr,
@@ -17,65 +18,20 @@ import {
   type SccrResult,
   type SccrWayOut,
 } from '../../../shared/calc/sccr';
-import { calculateHeat, type EnclosureMounting, type HeatResult, type HeatSourceInput } from '../../../shared/calc/heat';
-import { sizeControlTransformer, type ControlPowerResult } from '../../../shared/calc/control-power';
-import { panelNameplate, type NameplateResult } from '../../../shared/calc/nameplate';
+import { calculateHeat, type EnclosureMounting, type HeatSourceInput } from '../../../shared/calc/heat';
+import { sizeControlTransformer } from '../../../shared/calc/control-power';
+import { panelNameplate } from '../../../shared/calc/nameplate';
 import { catalogueFor, labourUnitsFor } from '../catalogue/repository';
 import { loadsOf } from '../panels/repository';
 import { loadView, requirePanel } from '../panels/service';
 import { panelEnclosureType } from '../bom/service';
 import { storedBomLines } from './repository';
-import { motorConnectionCard, type MotorConnectionCard } from './connection';
+import { motorConnectionCard } from './connection';
 import type { Panel } from '../../db/models/panel';
 import type { Job } from '../../db/models/job';
 
 /** Control circuit voltage of the panel (the bill of materials' default). */
 export const CONTROL_VOLTS = 120;
-
-export interface ExcludedComponent {
-  location: string;
-  code: string | null;
-  description: string;
-  reason: string;
-}
-
-export interface SccrCheck extends SccrResult {
-  /** parts of the bill of materials left out of the power-circuit worksheet, with the reason */
-  excluded: ExcludedComponent[];
-}
-
-export interface HeatCheck {
-  result: HeatResult | null;
-  enclosure: null | { code: string | null; description: string; heightMm: number; widthMm: number; depthMm: number; sections: number; mounting: EnclosureMounting };
-  reason: string | null;
-}
-
-export interface ControlPowerCheck {
-  result: ControlPowerResult | null;
-  /** the transformer in the bill of materials, and whether it is at least the size needed */
-  fitted: null | { code: string | null; description: string; va: number | null; adequate: boolean | null };
-  basis: string;
-  reason: string | null;
-}
-
-export interface NameplateCheck {
-  result: NameplateResult | null;
-  reason: string | null;
-}
-
-export interface PanelChecks {
-  panel: { id: number; name: string; mounting: string; enclosureType: string; revision: string };
-  job: { id: number; number: string; name: string; customer: string; site: string; supplyVolts: number; supplyPhases: number; supplyHz: number; availableFaultKa: number; ambientC: number; codeEdition: string };
-  bom: { source: 'stored' | 'in-memory'; stale: boolean; unmatchedLines: number; note: string | null };
-  /** motors left out of the checks because their selection has errors */
-  motorsWithErrors: string[];
-  sccr: SccrCheck;
-  heat: HeatCheck;
-  controlPower: ControlPowerCheck;
-  nameplate: NameplateCheck;
-  connectionCards: MotorConnectionCard[];
-  cautions: string[];
-}
 
 export const CHECK_CAUTIONS = [
   'Results support, not replace, a qualified person’s design; a qualified person verifies them.',

@@ -2,7 +2,8 @@ import { useCallback } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import { queryClient } from '../../lib/query-client';
 import { hasRole, sessionQueries } from '../../features/auth/api/session';
-import { catalogueQueries, useUpdateLabourUnit, type LabourUnitEntry } from '../../features/catalogue/api/catalogue';
+import { catalogueQueries, useUpdateLabourUnit } from '../../features/catalogue/api/catalogue';
+import type { LabourUnitEntry } from '../../../shared/schemas/catalogue';
 import { LabourUnitsTable } from '../../features/catalogue/components/labour-units-table';
 import { ErrorNote, Loading, PageHeader } from '../../components/ui/feedback';
 

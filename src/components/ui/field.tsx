@@ -1,4 +1,5 @@
 import { useId, type ReactNode } from 'react';
+import type { UseFormRegisterReturn } from 'react-hook-form';
 
 export const inputClass =
   'w-full rounded border border-line bg-panel px-2 py-1.5 text-sm text-ink placeholder:text-ink-soft/60 focus:border-copper-500 aria-[invalid=true]:border-state-returned';
@@ -36,5 +37,43 @@ export function Field({
         </p>
       ) : null}
     </div>
+  );
+}
+
+/** One choice of a select: its value and the text shown. */
+export type SelectOption = readonly [value: string | number, text: string];
+
+/** A labelled select (see Field) over `options`; `notGiven` adds a first option of value '' with that text. */
+export function SelectField({
+  label,
+  unit,
+  error,
+  hint,
+  field,
+  notGiven,
+  options,
+}: {
+  label: string;
+  unit?: string;
+  error?: string;
+  hint?: string;
+  /** the form registration of the select, e.g. register('duty') */
+  field: UseFormRegisterReturn;
+  notGiven?: string;
+  options: readonly SelectOption[];
+}) {
+  return (
+    <Field label={label} unit={unit} error={error} hint={hint}>
+      {(a) => (
+        <select {...a} {...field} className={inputClass}>
+          {notGiven !== undefined ? <option value="">{notGiven}</option> : null}
+          {options.map(([value, text]) => (
+            <option key={value} value={value}>
+              {text}
+            </option>
+          ))}
+        </select>
+      )}
+    </Field>
   );
 }

@@ -1,7 +1,8 @@
 import { useQuery } from '@tanstack/react-query';
 import { useParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { panelQueries } from '../../../features/panels/api/panels';
-import { checkQueries, submittalPdfUrl, type PanelChecks } from '../../../features/checks/api/checks';
+import { checkQueries, submittalPdfUrl } from '../../../features/checks/api/checks';
+import type { PanelChecks } from '../../../../shared/schemas/checks';
 import { OneLine } from '../../../features/drawings/components/one-line';
 import { ConnectionCardDrawing } from '../../../features/drawings/components/connection-card';
 import { queryClient } from '../../../lib/query-client';

@@ -10,7 +10,7 @@ import { SelectionSummary } from '../../../features/panels/components/selection-
 import { OverrideEditor } from '../../../features/panels/components/override-editor';
 import { ENVIRONMENT_LABELS } from '../../../features/panels/components/answer-labels';
 import { browserSelector } from '../../../lib/selector';
-import { Field, inputClass } from '../../../components/ui/field';
+import { Field, SelectField, inputClass, type SelectOption } from '../../../components/ui/field';
 import { Button } from '../../../components/ui/button';
 import { Caution, ErrorNote } from '../../../components/ui/feedback';
 import { ApiError } from '../../../lib/api-client';
@@ -27,6 +27,10 @@ const STEP_FIELDS: Record<(typeof STEPS)[number], string[]> = {
 const num = { setValueAs: (v: unknown) => (v === '' || v === null || v === undefined ? undefined : Number(v)) };
 const opt = { setValueAs: (v: unknown) => (v === '' || v === null || v === undefined ? undefined : v) };
 const optNum = { setValueAs: (v: unknown) => (v === '' || v === null || v === undefined ? undefined : Number(v)) };
+
+const CODE_LETTERS: SelectOption[] = 'ABCDEFGHJKLMNPRSTUV'.split('').map((c) => [c, c]);
+const DESIGNS: SelectOption[] = ['A', 'B', 'C', 'D'].map((c) => [c, `Design ${c}`]);
+const LEADS: SelectOption[] = [3, 6, 9, 12].map((n) => [n, `${n} leads`]);
 
 const DEFAULTS: LoadInput = {
   tag: '',
@@ -146,166 +150,79 @@ export function Component() {
             <>
               <Field label="Tag" error={e.tag?.message} hint="Unique on this panel, e.g. P-101">{(a) => <input {...a} {...register('tag')} className={inputClass} autoFocus />}</Field>
               <div className="col-span-2"><Field label="Description" error={e.description?.message}>{(a) => <input {...a} {...register('description', opt)} className={inputClass} />}</Field></div>
-              <Field label="Supply" error={e.supply?.message}>
-                {(a) => (
-                  <select {...a} {...register('supply')} className={inputClass}>
-                    <option value="ac3">Three-phase AC</option>
-                    <option value="ac1">Single-phase AC</option>
-                    <option value="dc">DC</option>
-                  </select>
-                )}
-              </Field>
+              <SelectField label="Supply" error={e.supply?.message} field={register('supply')} options={[['ac3', 'Three-phase AC'], ['ac1', 'Single-phase AC'], ['dc', 'DC']]} />
               <Field label="Horsepower" unit="hp" error={e.hp?.message} hint="Or give kW instead">{(a) => <input {...a} {...register('hp', optNum)} inputMode="decimal" className={inputClass} />}</Field>
               <Field label="Kilowatts" unit="kW" error={e.kw?.message}>{(a) => <input {...a} {...register('kw', optNum)} inputMode="decimal" className={inputClass} />}</Field>
               <Field label="Rated voltage" unit="V" error={e.volts?.message}>{(a) => <input {...a} {...register('volts', num)} inputMode="numeric" className={inputClass} />}</Field>
-              <Field label="Frequency" unit="Hz" error={e.hz?.message}>
-                {(a) => (
-                  <select {...a} {...register('hz', num)} className={inputClass}>
-                    <option value={60}>60</option>
-                    <option value={50}>50</option>
-                  </select>
-                )}
-              </Field>
+              <SelectField label="Frequency" unit="Hz" error={e.hz?.message} field={register('hz', num)} options={[[60, '60'], [50, '50']]} />
               <Field label="Nameplate FLA" unit="A" error={e.fla?.message} hint="Sizes the overload (430.6(A)(2))">{(a) => <input {...a} {...register('fla', optNum)} inputMode="decimal" className={inputClass} />}</Field>
               <Field label="Service factor" error={e.serviceFactor?.message}>{(a) => <input {...a} {...register('serviceFactor', optNum)} inputMode="decimal" className={inputClass} />}</Field>
               <Field label="Temperature rise" unit="°C" error={e.tempRiseC?.message}>{(a) => <input {...a} {...register('tempRiseC', optNum)} inputMode="decimal" className={inputClass} />}</Field>
               {supplyKind !== 'dc' ? (
-                <Field label="NEMA code letter" error={e.codeLetter?.message} hint="Locked-rotor kVA/hp, Table 430.7(B)">
-                  {(a) => (
-                    <select {...a} {...register('codeLetter', opt)} className={inputClass}>
-                      <option value="">Not known</option>
-                      {'ABCDEFGHJKLMNPRSTUV'.split('').map((c) => <option key={c} value={c}>{c}</option>)}
-                    </select>
-                  )}
-                </Field>
+                <SelectField label="NEMA code letter" error={e.codeLetter?.message} hint="Locked-rotor kVA/hp, Table 430.7(B)" field={register('codeLetter', opt)} notGiven="Not known" options={CODE_LETTERS} />
               ) : null}
               {supplyKind === 'ac3' ? (
                 <>
-                  <Field label="NEMA design" error={e.design?.message}>
-                    {(a) => (
-                      <select {...a} {...register('design', opt)} className={inputClass}>
-                        <option value="">Not known</option>
-                        {['A', 'B', 'C', 'D'].map((c) => <option key={c} value={c}>Design {c}</option>)}
-                      </select>
-                    )}
-                  </Field>
-                  <Field label="Rotor" error={e.rotor?.message}>
-                    {(a) => (
-                      <select {...a} {...register('rotor')} className={inputClass}>
-                        <option value="squirrel-cage">Squirrel cage</option>
-                        <option value="wound-rotor">Wound rotor</option>
-                      </select>
-                    )}
-                  </Field>
-                  <Field label="Leads" error={e.leads?.message}>
-                    {(a) => (
-                      <select {...a} {...register('leads', optNum)} className={inputClass}>
-                        <option value="">Not known</option>
-                        {[3, 6, 9, 12].map((n) => <option key={n} value={n}>{n} leads</option>)}
-                      </select>
-                    )}
-                  </Field>
-                  <Field label="Winding connection" error={e.connection?.message}>
-                    {(a) => (
-                      <select {...a} {...register('connection', opt)} className={inputClass}>
-                        <option value="">Not known</option>
-                        <option value="wye">Wye (star)</option>
-                        <option value="delta">Delta</option>
-                      </select>
-                    )}
-                  </Field>
+                  <SelectField label="NEMA design" error={e.design?.message} field={register('design', opt)} notGiven="Not known" options={DESIGNS} />
+                  <SelectField label="Rotor" error={e.rotor?.message} field={register('rotor')} options={[['squirrel-cage', 'Squirrel cage'], ['wound-rotor', 'Wound rotor']]} />
+                  <SelectField label="Leads" error={e.leads?.message} field={register('leads', optNum)} notGiven="Not known" options={LEADS} />
+                  <SelectField label="Winding connection" error={e.connection?.message} field={register('connection', opt)} notGiven="Not known" options={[['wye', 'Wye (star)'], ['delta', 'Delta']]} />
                   <label className="flex items-center gap-2 self-end text-sm"><input type="checkbox" {...register('energyEfficient')} /> Energy-efficient Design B</label>
                 </>
               ) : null}
               {supplyKind === 'ac1' ? (
-                <Field label="Single-phase type" error={e.singlePhaseType?.message}>
-                  {(a) => (
-                    <select {...a} {...register('singlePhaseType', opt)} className={inputClass}>
-                      <option value="">Not known</option>
-                      <option value="split-phase">Split-phase</option>
-                      <option value="capacitor-start">Capacitor-start</option>
-                      <option value="psc">Permanent-split capacitor</option>
-                      <option value="two-value-capacitor">Two-value capacitor</option>
-                    </select>
-                  )}
-                </Field>
+                <SelectField
+                  label="Single-phase type"
+                  error={e.singlePhaseType?.message}
+                  field={register('singlePhaseType', opt)}
+                  notGiven="Not known"
+                  options={[['split-phase', 'Split-phase'], ['capacitor-start', 'Capacitor-start'], ['psc', 'Permanent-split capacitor'], ['two-value-capacitor', 'Two-value capacitor']]}
+                />
               ) : null}
               {supplyKind === 'dc' ? (
-                <Field label="DC field" error={e.dcField?.message}>
-                  {(a) => (
-                    <select {...a} {...register('dcField', opt)} className={inputClass}>
-                      <option value="">Not known</option>
-                      <option value="shunt">Shunt</option>
-                      <option value="series">Series</option>
-                      <option value="compound">Compound</option>
-                    </select>
-                  )}
-                </Field>
+                <SelectField label="DC field" error={e.dcField?.message} field={register('dcField', opt)} notGiven="Not known" options={[['shunt', 'Shunt'], ['series', 'Series'], ['compound', 'Compound']]} />
               ) : null}
               <Field label="Poles" error={e.poles?.message}>{(a) => <input {...a} {...register('poles', optNum)} inputMode="numeric" className={inputClass} />}</Field>
             </>
           ) : null}
           {stepName === 'Duty' ? (
             <>
-              <Field label="Duty" error={e.duty?.message}>
-                {(a) => (
-                  <select {...a} {...register('duty')} className={inputClass}>
-                    <option value="continuous">Continuous</option>
-                    <option value="intermittent">Intermittent</option>
-                  </select>
-                )}
-              </Field>
-              <Field label="Speed" error={e.speedControl?.message}>
-                {(a) => (
-                  <select {...a} {...register('speedControl')} className={inputClass}>
-                    <option value="fixed">Fixed speed</option>
-                    <option value="variable">Variable speed</option>
-                  </select>
-                )}
-              </Field>
-              <Field label="Starting" error={e.startingLimit?.message}>
-                {(a) => (
-                  <select {...a} {...register('startingLimit')} className={inputClass}>
-                    <option value="none">Full-voltage starting allowed</option>
-                    <option value="reduced-inrush">Inrush must be limited</option>
-                  </select>
-                )}
-              </Field>
+              <SelectField label="Duty" error={e.duty?.message} field={register('duty')} options={[['continuous', 'Continuous'], ['intermittent', 'Intermittent']]} />
+              <SelectField label="Speed" error={e.speedControl?.message} field={register('speedControl')} options={[['fixed', 'Fixed speed'], ['variable', 'Variable speed']]} />
+              <SelectField
+                label="Starting"
+                error={e.startingLimit?.message}
+                field={register('startingLimit')}
+                options={[['none', 'Full-voltage starting allowed'], ['reduced-inrush', 'Inrush must be limited']]}
+              />
               {variable ? (
                 <>
                   <Field label="Turndown" unit="ratio, e.g. 10 for 10:1" error={e.turndown?.message}>{(a) => <input {...a} {...register('turndown', optNum)} inputMode="decimal" className={inputClass} />}</Field>
-                  <Field label="Load torque" error={e.torque?.message}>
-                    {(a) => (
-                      <select {...a} {...register('torque', opt)} className={inputClass}>
-                        <option value="">Not known</option>
-                        <option value="variable">Variable torque (fans, pumps)</option>
-                        <option value="constant">Constant torque (conveyors, mixers)</option>
-                      </select>
-                    )}
-                  </Field>
+                  <SelectField
+                    label="Load torque"
+                    error={e.torque?.message}
+                    field={register('torque', opt)}
+                    notGiven="Not known"
+                    options={[['variable', 'Variable torque (fans, pumps)'], ['constant', 'Constant torque (conveyors, mixers)']]}
+                  />
                 </>
               ) : null}
               {values.startingLimit === 'reduced-inrush' && supplyKind === 'ac3' ? (
-                <Field label="Reduced-voltage method" error={e.starterPreference?.message}>
-                  {(a) => (
-                    <select {...a} {...register('starterPreference', opt)} className={inputClass}>
-                      <option value="">Let the rules choose</option>
-                      <option value="rvss">Solid-state soft starter</option>
-                      <option value="wye-delta">Wye-delta (six-lead delta motor)</option>
-                      <option value="part-winding">Part-winding</option>
-                    </select>
-                  )}
-                </Field>
+                <SelectField
+                  label="Reduced-voltage method"
+                  error={e.starterPreference?.message}
+                  field={register('starterPreference', opt)}
+                  notGiven="Let the rules choose"
+                  options={[['rvss', 'Solid-state soft starter'], ['wye-delta', 'Wye-delta (six-lead delta motor)'], ['part-winding', 'Part-winding']]}
+                />
               ) : null}
-              <Field label="Load inertia" error={e.inertia?.message} hint="Decides the overload trip class">
-                {(a) => (
-                  <select {...a} {...register('inertia')} className={inputClass}>
-                    <option value="normal">Normal</option>
-                    <option value="high">High</option>
-                    <option value="very-high">Very high (large fans, centrifuges)</option>
-                  </select>
-                )}
-              </Field>
+              <SelectField
+                label="Load inertia"
+                error={e.inertia?.message}
+                hint="Decides the overload trip class"
+                field={register('inertia')}
+                options={[['normal', 'Normal'], ['high', 'High'], ['very-high', 'Very high (large fans, centrifuges)']]}
+              />
               <fieldset className="col-span-full flex flex-wrap gap-5 text-sm">
                 <legend className="mb-1 text-xs font-semibold uppercase text-ink-soft">Operation</legend>
                 <label className="flex items-center gap-2"><input type="checkbox" {...register('reversing')} /> Runs in both directions</label>
@@ -320,14 +237,14 @@ export function Component() {
           {stepName === 'Site & hazards' ? (
             <>
               <div className="col-span-2">
-                <Field label="Environment at the panel" error={e.environment?.message} hint="Decides the NEMA 250 enclosure type">
-                  {(a) => (
-                    <select {...a} {...register('environment', opt)} className={inputClass}>
-                      <option value="">Not known (assume indoor, dusty)</option>
-                      {Object.entries(ENVIRONMENT_LABELS).map(([k, v]) => <option key={k} value={k}>{v}</option>)}
-                    </select>
-                  )}
-                </Field>
+                <SelectField
+                  label="Environment at the panel"
+                  error={e.environment?.message}
+                  hint="Decides the NEMA 250 enclosure type"
+                  field={register('environment', opt)}
+                  notGiven="Not known (assume indoor, dusty)"
+                  options={Object.entries(ENVIRONMENT_LABELS)}
+                />
               </div>
               <Field label="Cable length to the motor" unit="ft" error={e.cableLengthFt?.message} hint="Long drive leads need an output filter">{(a) => <input {...a} {...register('cableLengthFt', optNum)} inputMode="decimal" className={inputClass} />}</Field>
               <fieldset className="col-span-full space-y-2 text-sm">
@@ -339,33 +256,25 @@ export function Component() {
           ) : null}
           {stepName === 'Protection' ? (
             <>
-              <Field label="Branch protective device" error={e.scpdType?.message}>
-                {(a) => (
-                  <select {...a} {...register('scpdType')} className={inputClass}>
-                    <option value="inverse-time-breaker">Inverse-time circuit breaker</option>
-                    <option value="instantaneous-trip-breaker">Instantaneous-trip breaker (listed combination)</option>
-                    <option value="dual-element-fuse">Dual-element time-delay fuse</option>
-                    <option value="non-time-delay-fuse">Non-time-delay fuse</option>
-                  </select>
-                )}
-              </Field>
-              <Field label="Conductor material" error={undefined}>
-                {(a) => (
-                  <select {...a} {...register('conductor.material')} className={inputClass}>
-                    <option value="cu">Copper</option>
-                    <option value="al">Aluminium</option>
-                  </select>
-                )}
-              </Field>
-              <Field label="Termination temperature" unit="°C" error={undefined} hint="75 °C is usual for starter terminals (110.14(C))">
-                {(a) => (
-                  <select {...a} {...register('conductor.tempRatingC', num)} className={inputClass}>
-                    <option value={75}>75</option>
-                    <option value={60}>60</option>
-                    <option value={90}>90</option>
-                  </select>
-                )}
-              </Field>
+              <SelectField
+                label="Branch protective device"
+                error={e.scpdType?.message}
+                field={register('scpdType')}
+                options={[
+                  ['inverse-time-breaker', 'Inverse-time circuit breaker'],
+                  ['instantaneous-trip-breaker', 'Instantaneous-trip breaker (listed combination)'],
+                  ['dual-element-fuse', 'Dual-element time-delay fuse'],
+                  ['non-time-delay-fuse', 'Non-time-delay fuse'],
+                ]}
+              />
+              <SelectField label="Conductor material" field={register('conductor.material')} options={[['cu', 'Copper'], ['al', 'Aluminium']]} />
+              <SelectField
+                label="Termination temperature"
+                unit="°C"
+                hint="75 °C is usual for starter terminals (110.14(C))"
+                field={register('conductor.tempRatingC', num)}
+                options={[[75, '75'], [60, '60'], [90, '90']]}
+              />
             </>
           ) : null}
         </div>

@@ -13,6 +13,7 @@ import { extendedCost, extendedLabourHours } from '../../../../shared/calc/bom';
 import type { BomTotals } from '../../../../shared/schemas/catalogue';
 import type { StoredLine } from '../api/bom';
 import { bucketLabel, categoryLabel, hours, money, qty } from './format';
+import { DataCell, DataTableHead, DenseTable } from '../../../components/ui/data-table-parts';
 
 type Row = StoredLine & { extended: number; labour: number };
 const col = createColumnHelper<Row>();
@@ -146,7 +147,6 @@ export function BomTable({ lines, totals, actions, groupBy }: { lines: StoredLin
     groupedColumnMode: false,
   });
   const leafColumns = table.getVisibleLeafColumns();
-  const numeric = (id: string) => (table.getColumn(id)?.columnDef.meta as { numeric?: boolean } | undefined)?.numeric;
   const span = leafColumns.findIndex((c) => c.id === 'extended');
   const after = leafColumns.length - span - 1;
   const footer: Array<[string, string, string]> = [
@@ -157,77 +157,53 @@ export function BomTable({ lines, totals, actions, groupBy }: { lines: StoredLin
     ['Sell', '', money(totals.sell)],
   ];
   return (
-    <div className="overflow-x-auto rounded border border-line bg-panel">
-      <table className="dense w-full text-sm" aria-label="Bill of materials">
-        <thead className="border-b border-line bg-surface text-left text-xs uppercase tracking-wide text-ink-soft">
-          {table.getHeaderGroups().map((hg) => (
-            <tr key={hg.id}>
-              {hg.headers.map((h) => {
-                const sorted = h.column.getIsSorted();
-                return (
-                  <th key={h.id} className={`px-2 py-2 ${numeric(h.column.id) ? 'text-right' : ''}`} aria-sort={sorted ? (sorted === 'asc' ? 'ascending' : 'descending') : undefined}>
-                    {h.column.getCanSort() && h.column.id !== groupBy ? (
-                      <button type="button" className="inline-flex items-center gap-1 uppercase hover:text-ink" onClick={h.column.getToggleSortingHandler()}>
-                        {flexRender(h.column.columnDef.header, h.getContext())}
-                        <span aria-hidden>{sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : ''}</span>
-                      </button>
-                    ) : (
-                      flexRender(h.column.columnDef.header, h.getContext())
-                    )}
-                  </th>
-                );
-              })}
-            </tr>
-          ))}
-        </thead>
-        <tbody>
-          {table.getRowModel().rows.map((row) => {
-            if (row.getIsGrouped()) {
-              const key = String(row.getValue(groupBy));
-              const unmatched = row.subRows.filter((r) => r.original.status === 'unmatched').length;
-              return (
-                <tr key={row.id} className="border-y border-line bg-copper-50/70" aria-label={`Subtotal ${key}`}>
-                  <td colSpan={span} className="px-2 py-1.5 font-semibold">
-                    {groupBy === 'bucket' ? bucketLabel(key) : categoryLabel(key as StoredLine['category'])}
-                    <span className="ml-2 font-normal text-ink-soft">{row.subRows.length} line{row.subRows.length === 1 ? '' : 's'} · subtotal</span>
-                    {unmatched ? <span className="ml-2 text-xs font-semibold text-state-returned">✖ {unmatched} unmatched</span> : null}
-                  </td>
-                  {leafColumns.slice(span).map((c) => {
-                    const cell = row.getAllCells().find((x) => x.column.id === c.id)!;
-                    return (
-                      <td key={c.id} className={`px-2 py-1.5 ${numeric(c.id) ? 'text-right tabular-nums' : ''}`}>
-                        {cell.getIsAggregated() && (c.id === 'extended' || c.id === 'labour') ? flexRender(c.columnDef.aggregatedCell ?? c.columnDef.cell, cell.getContext()) : null}
-                      </td>
-                    );
-                  })}
-                </tr>
-              );
-            }
-            const l = row.original;
+    <DenseTable label="Bill of materials">
+      <DataTableHead table={table} canSort={(c) => c.getCanSort() && c.id !== groupBy} />
+      <tbody>
+        {table.getRowModel().rows.map((row) => {
+          if (row.getIsGrouped()) {
+            const key = String(row.getValue(groupBy));
+            const unmatched = row.subRows.filter((r) => r.original.status === 'unmatched').length;
             return (
-              <tr key={row.id} className={`border-b border-line/60 ${l.status === 'unmatched' ? 'bg-bad-bg' : 'hover:bg-copper-50'}`}>
-                {row.getVisibleCells().map((cell) => (
-                  <td key={cell.id} className={`px-2 py-1 align-top ${numeric(cell.column.id) ? 'text-right tabular-nums' : ''}`}>
-                    {flexRender(cell.column.columnDef.cell, cell.getContext())}
-                  </td>
-                ))}
+              <tr key={row.id} className="border-y border-line bg-copper-50/70" aria-label={`Subtotal ${key}`}>
+                <td colSpan={span} className="px-2 py-1.5 font-semibold">
+                  {groupBy === 'bucket' ? bucketLabel(key) : categoryLabel(key as StoredLine['category'])}
+                  <span className="ml-2 font-normal text-ink-soft">{row.subRows.length} line{row.subRows.length === 1 ? '' : 's'} · subtotal</span>
+                  {unmatched ? <span className="ml-2 text-xs font-semibold text-state-returned">✖ {unmatched} unmatched</span> : null}
+                </td>
+                {leafColumns.slice(span).map((c) => {
+                  const cell = row.getAllCells().find((x) => x.column.id === c.id)!;
+                  return (
+                    <DataCell key={c.id} cell={cell} className="px-2 py-1.5">
+                      {cell.getIsAggregated() && (c.id === 'extended' || c.id === 'labour') ? flexRender(c.columnDef.aggregatedCell ?? c.columnDef.cell, cell.getContext()) : null}
+                    </DataCell>
+                  );
+                })}
               </tr>
             );
-          })}
-        </tbody>
-        <tfoot className="border-t-2 border-ink/30 bg-surface" aria-label="Totals">
-          {footer.map(([label, middle, right], i) => (
-            <tr key={label} className={i === footer.length - 1 ? 'text-base font-bold' : 'font-semibold'}>
-              <th scope="row" colSpan={span - 2} className="px-2 py-1 text-right">{label}</th>
-              <td colSpan={2} className="px-2 py-1 text-right text-xs font-normal text-ink-soft">{middle && i > 0 ? middle : ''}</td>
-              <td className="px-2 py-1 text-right tabular-nums">{i === 0 ? middle : right}</td>
-              <td className="px-2 py-1" />
-              <td className="px-2 py-1 text-right tabular-nums">{i === 0 ? hours(totals.labourHours) : ''}</td>
-              {after > 2 ? <td colSpan={after - 2} /> : null}
+          }
+          const l = row.original;
+          return (
+            <tr key={row.id} className={`border-b border-line/60 ${l.status === 'unmatched' ? 'bg-bad-bg' : 'hover:bg-copper-50'}`}>
+              {row.getVisibleCells().map((cell) => (
+                <DataCell key={cell.id} cell={cell} className="px-2 py-1 align-top" />
+              ))}
             </tr>
-          ))}
-        </tfoot>
-      </table>
-    </div>
+          );
+        })}
+      </tbody>
+      <tfoot className="border-t-2 border-ink/30 bg-surface" aria-label="Totals">
+        {footer.map(([label, middle, right], i) => (
+          <tr key={label} className={i === footer.length - 1 ? 'text-base font-bold' : 'font-semibold'}>
+            <th scope="row" colSpan={span - 2} className="px-2 py-1 text-right">{label}</th>
+            <td colSpan={2} className="px-2 py-1 text-right text-xs font-normal text-ink-soft">{middle && i > 0 ? middle : ''}</td>
+            <td className="px-2 py-1 text-right tabular-nums">{i === 0 ? middle : right}</td>
+            <td className="px-2 py-1" />
+            <td className="px-2 py-1 text-right tabular-nums">{i === 0 ? hours(totals.labourHours) : ''}</td>
+            {after > 2 ? <td colSpan={after - 2} /> : null}
+          </tr>
+        ))}
+      </tfoot>
+    </DenseTable>
   );
 }

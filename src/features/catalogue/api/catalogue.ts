@@ -1,36 +1,19 @@
 import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
 import { api, get, patch, post, qs } from '../../../lib/api-client';
-import type { CatalogueItem, CatalogueItemInput, Category, LabourUnit } from '../../../../shared/schemas/catalogue';
-
-/** A catalogue item as the API returns it. */
-export type CatalogueEntry = CatalogueItem & { id: number; version: number; updatedAt: string };
-export type LabourUnitEntry = LabourUnit & { version: number };
-
-export interface CatalogueFilters {
-  category?: Category;
-  q?: string;
-  active?: 'true' | 'false' | 'all';
-}
-
-export interface HistoryEntry {
-  id: number;
-  action: string;
-  summary: string;
-  diff: Record<string, unknown> | null;
-  user: string | null;
-  at: string;
-}
-
-export interface ImportSummary {
-  created: number;
-  updated: number;
-  unchanged: number;
-}
+import type {
+  CatalogueEntry,
+  CatalogueFilter,
+  CatalogueItemInput,
+  HistoryEntry,
+  ImportSummary,
+  ItemChanges,
+  LabourUnitEntry,
+} from '../../../../shared/schemas/catalogue';
 
 export const catalogueQueries = {
   all: () => ['catalogue'] as const,
   lists: () => [...catalogueQueries.all(), 'list'] as const,
-  list: (f: CatalogueFilters = {}) =>
+  list: (f: CatalogueFilter = {}) =>
     queryOptions({
       queryKey: [...catalogueQueries.lists(), f],
       queryFn: () => get<CatalogueEntry[]>(`/api/catalogue/items${qs({ category: f.category, q: f.q, active: f.active })}`),
@@ -51,8 +34,6 @@ export function useCreateItem() {
   const invalidate = useInvalidateCatalogue();
   return useMutation({ mutationFn: (v: CatalogueItemInput) => post<CatalogueEntry>('/api/catalogue/items', v), onSuccess: invalidate });
 }
-
-export type ItemChanges = Partial<Omit<CatalogueItemInput, 'code'>>;
 
 export function useUpdateItem() {
   const invalidate = useInvalidateCatalogue();

@@ -1,7 +1,6 @@
 import { useMemo, useState } from 'react';
 import {
   createColumnHelper,
-  flexRender,
   getCoreRowModel,
   getExpandedRowModel,
   getFilteredRowModel,
@@ -12,9 +11,9 @@ import {
   type GroupingState,
   type SortingState,
 } from '@tanstack/react-table';
-import { CATEGORY_IDS, CATEGORY_LABELS, type Category, type Ratings } from '../../../../shared/schemas/catalogue';
-import type { CatalogueEntry, ItemChanges } from '../api/catalogue';
+import { CATEGORY_IDS, CATEGORY_LABELS, type CatalogueEntry, type Category, type ItemChanges, type Ratings } from '../../../../shared/schemas/catalogue';
 import { EditableNumber, money } from './editable-cell';
+import { DataCell, DataTableHead, DenseTable } from '../../../components/ui/data-table-parts';
 
 /** The ratings that identify an item, in a short line (volts, amps, hp, size, range …). */
 export function ratingsSummary(r: Ratings): string {
@@ -183,58 +182,30 @@ export function CatalogueTable({
         ) : null}
         <span className="ml-auto pb-1.5 text-sm text-ink-soft" aria-live="polite">{leafCount} item{leafCount === 1 ? '' : 's'}</span>
       </div>
-      <div className="max-h-[70vh] overflow-auto rounded border border-line bg-panel">
-        <table className="dense w-full text-sm" aria-label="Catalogue">
-          <thead className="sticky top-0 z-10 border-b border-line bg-surface text-left text-xs uppercase tracking-wide text-ink-soft">
-            {table.getHeaderGroups().map((hg) => (
-              <tr key={hg.id}>
-                {hg.headers.map((h) => {
-                  const numeric = (h.column.columnDef.meta as { numeric?: boolean } | undefined)?.numeric;
-                  const sorted = h.column.getIsSorted();
-                  return (
-                    <th key={h.id} className={`px-2 py-2 ${numeric ? 'text-right' : ''}`} aria-sort={sorted ? (sorted === 'asc' ? 'ascending' : 'descending') : undefined}>
-                      {h.column.getCanSort() ? (
-                        <button type="button" className="inline-flex items-center gap-1 uppercase hover:text-ink" onClick={h.column.getToggleSortingHandler()}>
-                          {flexRender(h.column.columnDef.header, h.getContext())}
-                          <span aria-hidden>{sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : ''}</span>
-                        </button>
-                      ) : (
-                        flexRender(h.column.columnDef.header, h.getContext())
-                      )}
-                    </th>
-                  );
-                })}
+      <DenseTable label="Catalogue" frameClassName="max-h-[70vh] overflow-auto">
+        <DataTableHead table={table} sticky />
+        <tbody>
+          {rows.map((row) =>
+            row.getIsGrouped() ? (
+              <tr key={row.id} className="border-b border-line bg-copper-50/60">
+                <td colSpan={row.getVisibleCells().length} className="px-2 py-1.5">
+                  <button type="button" className="inline-flex items-center gap-2 font-semibold" aria-expanded={row.getIsExpanded()} onClick={row.getToggleExpandedHandler()}>
+                    <span aria-hidden>{row.getIsExpanded() ? '▾' : '▸'}</span>
+                    {CATEGORY_LABELS[row.getValue('category') as Category]}
+                    <span className="font-normal text-ink-soft">({row.subRows.length})</span>
+                  </button>
+                </td>
               </tr>
-            ))}
-          </thead>
-          <tbody>
-            {rows.map((row) =>
-              row.getIsGrouped() ? (
-                <tr key={row.id} className="border-b border-line bg-copper-50/60">
-                  <td colSpan={row.getVisibleCells().length} className="px-2 py-1.5">
-                    <button type="button" className="inline-flex items-center gap-2 font-semibold" aria-expanded={row.getIsExpanded()} onClick={row.getToggleExpandedHandler()}>
-                      <span aria-hidden>{row.getIsExpanded() ? '▾' : '▸'}</span>
-                      {CATEGORY_LABELS[row.getValue('category') as Category]}
-                      <span className="font-normal text-ink-soft">({row.subRows.length})</span>
-                    </button>
-                  </td>
-                </tr>
-              ) : (
-                <tr key={row.id} className={`border-b border-line/60 last:border-0 ${row.original.active ? 'hover:bg-copper-50' : 'text-ink-soft'}`}>
-                  {row.getVisibleCells().map((cell) => {
-                    const numeric = (cell.column.columnDef.meta as { numeric?: boolean } | undefined)?.numeric;
-                    return (
-                      <td key={cell.id} className={`px-2 py-1 ${numeric ? 'text-right tabular-nums' : ''} ${cell.column.id === 'ratings' ? 'text-xs text-ink-soft' : ''}`}>
-                        {cell.getIsPlaceholder() ? null : flexRender(cell.column.columnDef.cell, cell.getContext())}
-                      </td>
-                    );
-                  })}
-                </tr>
-              ),
-            )}
-          </tbody>
-        </table>
-      </div>
+            ) : (
+              <tr key={row.id} className={`border-b border-line/60 last:border-0 ${row.original.active ? 'hover:bg-copper-50' : 'text-ink-soft'}`}>
+                {row.getVisibleCells().map((cell) => (
+                  <DataCell key={cell.id} cell={cell} className={`px-2 py-1 ${cell.column.id === 'ratings' ? 'text-xs text-ink-soft' : ''}`} empty={cell.getIsPlaceholder()} />
+                ))}
+              </tr>
+            ),
+          )}
+        </tbody>
+      </DenseTable>
     </div>
   );
 }

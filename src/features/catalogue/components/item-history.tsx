@@ -1,6 +1,7 @@
 import { useQuery } from '@tanstack/react-query';
 import { ErrorNote, Loading } from '../../../components/ui/feedback';
-import { catalogueQueries, type CatalogueEntry } from '../api/catalogue';
+import { catalogueQueries } from '../api/catalogue';
+import type { CatalogueEntry } from '../../../../shared/schemas/catalogue';
 
 const show = (v: unknown) => (v === null || v === undefined ? '—' : typeof v === 'object' ? JSON.stringify(v) : String(v));
 

@@ -1,7 +1,8 @@
 import { useMemo } from 'react';
-import { createColumnHelper, flexRender, getCoreRowModel, useReactTable } from '@tanstack/react-table';
-import type { LabourUnitEntry } from '../api/catalogue';
+import { createColumnHelper, getCoreRowModel, useReactTable } from '@tanstack/react-table';
+import type { LabourUnitEntry } from '../../../../shared/schemas/catalogue';
 import { EditableNumber } from './editable-cell';
+import { DataCell, DataTableHead, DenseTable } from '../../../components/ui/data-table-parts';
 
 const col = createColumnHelper<LabourUnitEntry>();
 const PER: Record<LabourUnitEntry['per'], string> = { each: 'each', termination: 'per termination', foot: 'per foot' };
@@ -24,31 +25,17 @@ export function LabourUnitsTable({ units, canEdit, onChange }: { units: LabourUn
   );
   const table = useReactTable({ data: units, columns, getCoreRowModel: getCoreRowModel() });
   return (
-    <div className="overflow-x-auto rounded border border-line bg-panel">
-      <table className="dense w-full text-sm" aria-label="Labour units">
-        <thead className="border-b border-line bg-surface text-left text-xs uppercase tracking-wide text-ink-soft">
-          {table.getHeaderGroups().map((hg) => (
-            <tr key={hg.id}>
-              {hg.headers.map((h) => (
-                <th key={h.id} className={`px-2 py-2 ${(h.column.columnDef.meta as { numeric?: boolean } | undefined)?.numeric ? 'text-right' : ''}`}>
-                  {flexRender(h.column.columnDef.header, h.getContext())}
-                </th>
-              ))}
-            </tr>
-          ))}
-        </thead>
-        <tbody>
-          {table.getRowModel().rows.map((r) => (
-            <tr key={r.id} className="border-b border-line/60 last:border-0">
-              {r.getVisibleCells().map((c) => (
-                <td key={c.id} className={`px-2 py-1.5 ${(c.column.columnDef.meta as { numeric?: boolean } | undefined)?.numeric ? 'text-right tabular-nums' : ''}`}>
-                  {flexRender(c.column.columnDef.cell, c.getContext())}
-                </td>
-              ))}
-            </tr>
-          ))}
-        </tbody>
-      </table>
-    </div>
+    <DenseTable label="Labour units">
+      <DataTableHead table={table} canSort={() => false} />
+      <tbody>
+        {table.getRowModel().rows.map((r) => (
+          <tr key={r.id} className="border-b border-line/60 last:border-0">
+            {r.getVisibleCells().map((c) => (
+              <DataCell key={c.id} cell={c} className="px-2 py-1.5" />
+            ))}
+          </tr>
+        ))}
+      </tbody>
+    </DenseTable>
   );
 }

@@ -1,6 +1,7 @@
 import { useQuery } from '@tanstack/react-query';
 import type { ReactNode } from 'react';
-import { checkQueries, type PanelChecks as Checks } from '../api/checks';
+import { checkQueries } from '../api/checks';
+import type { PanelChecks as Checks } from '../../../../shared/schemas/checks';
 import { Caution, ErrorNote, Loading } from '../../../components/ui/feedback';
 import { Verdict } from '../../../components/ui/status';
 import { Button } from '../../../components/ui/button';

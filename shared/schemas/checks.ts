@@ -1,0 +1,62 @@
+// The answer of GET /api/panels/:panelId/checks: the engineer's panel checks, as the server builds them and
+// the client reads them.
+import type { SccrResult } from '../calc/sccr';
+import type { EnclosureMounting, HeatResult } from '../calc/heat';
+import type { ControlPowerResult } from '../calc/control-power';
+import type { NameplateResult } from '../calc/nameplate';
+import type { ConnectionCard } from '../calc/connections';
+
+export interface ExcludedComponent {
+  location: string;
+  code: string | null;
+  description: string;
+  reason: string;
+}
+
+export interface SccrCheck extends SccrResult {
+  /** parts of the bill of materials left out of the power-circuit worksheet, with the reason */
+  excluded: ExcludedComponent[];
+}
+
+export interface HeatCheck {
+  result: HeatResult | null;
+  enclosure: null | { code: string | null; description: string; heightMm: number; widthMm: number; depthMm: number; sections: number; mounting: EnclosureMounting };
+  reason: string | null;
+}
+
+export interface ControlPowerCheck {
+  result: ControlPowerResult | null;
+  /** the transformer in the bill of materials, and whether it is at least the size needed */
+  fitted: null | { code: string | null; description: string; va: number | null; adequate: boolean | null };
+  basis: string;
+  reason: string | null;
+}
+
+export interface NameplateCheck {
+  result: NameplateResult | null;
+  reason: string | null;
+}
+
+export interface MotorConnectionCard {
+  loadId: number;
+  tag: string;
+  card: ConnectionCard | null;
+  /** what the card takes for granted that the answers do not say */
+  assumptions: string[];
+  /** why there is no card */
+  reason: string | null;
+}
+
+export interface PanelChecks {
+  panel: { id: number; name: string; mounting: string; enclosureType: string; revision: string };
+  job: { id: number; number: string; name: string; customer: string; site: string; supplyVolts: number; supplyPhases: number; supplyHz: number; availableFaultKa: number; ambientC: number; codeEdition: string };
+  bom: { source: 'stored' | 'in-memory'; stale: boolean; unmatchedLines: number; note: string | null };
+  /** motors left out of the checks because their selection has errors */
+  motorsWithErrors: string[];
+  sccr: SccrCheck;
+  heat: HeatCheck;
+  controlPower: ControlPowerCheck;
+  nameplate: NameplateCheck;
+  connectionCards: MotorConnectionCard[];
+  cautions: string[];
+}
