@@ -7,43 +7,14 @@ import { Writable } from 'node:stream';
 import { performance } from 'node:perf_hooks';
 import { buildBom } from '../shared/calc/bom';
 import { CatalogueFileSchema, LabourUnitsFileSchema } from '../shared/schemas/catalogue';
-import type { LoadInput, SelectionInput } from '../shared/schemas/load';
 import { createSelector } from '../shared/engine/selector';
 import type { SelectionOutput } from '../shared/schemas/selection';
 import { loadRuleFiles } from '../server/engine/rule-files';
 import { writeBomWorkbook } from '../server/modules/bom/export';
+import { BOM_MIX, median, motorLoads, timeRuns } from './bench-data';
 
 const MOTORS = 200;
 const PANELS = 4;
-
-/** deterministic pseudo-random (mulberry32) so every run times the same job */
-function rng(seed: number): () => number {
-  let a = seed;
-  return () => {
-    a = (a + 0x6d2b79f5) | 0;
-    let t = Math.imul(a ^ (a >>> 15), 1 | a);
-    t = (t + Math.imul(t ^ (t >>> 7), 61 | t)) ^ t;
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-
-function job(n: number): SelectionInput {
-  const r = rng(4242);
-  const pick = <T,>(xs: readonly T[]): T => xs[Math.floor(r() * xs.length)] as T;
-  const loads: LoadInput[] = [];
-  for (let i = 0; i < n; i++) {
-    const kind = r();
-    const base = { tag: `M-${String(i + 1).padStart(3, '0')}`, environment: 'indoor-dusty' as const, reversing: r() < 0.2, critical: r() < 0.1, inertia: pick(['normal', 'normal', 'high'] as const) };
-    if (kind < 0.8) {
-      loads.push({ ...base, supply: 'ac3', hp: pick([0.5, 1, 2, 3, 5, 7.5, 10, 15, 20, 25, 40, 50]), volts: 460, serviceFactor: 1.15, codeLetter: 'G', speedControl: r() < 0.25 ? 'variable' : 'fixed', startingLimit: r() < 0.1 ? 'reduced-inrush' : 'none', jogging: r() < 0.05, reverseRotationHazard: r() < 0.1, cableLengthFt: Math.round(r() * 300), scpdType: pick(['inverse-time-breaker', 'dual-element-fuse'] as const) });
-    } else if (kind < 0.92) {
-      loads.push({ ...base, supply: 'ac1', hp: pick([0.5, 1, 2, 3]), volts: 230, singlePhaseType: 'capacitor-start' });
-    } else {
-      loads.push({ ...base, supply: 'dc', hp: pick([1, 2, 5, 10]), volts: 240, dcField: pick(['shunt', 'compound'] as const) });
-    }
-  }
-  return { supply: { volts: 480, phases: 3, hz: 60, availableFaultKa: 65, ambientC: 30 }, loads };
-}
 
 function loadCatalogue() {
   const dir = path.resolve(import.meta.dirname, '../catalog');
@@ -53,10 +24,8 @@ function loadCatalogue() {
   return { catalogue, labourUnits };
 }
 
-const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)]!;
-
 async function main(): Promise<void> {
-  const input = job(MOTORS);
+  const input = motorLoads(MOTORS, BOM_MIX);
   const selector = createSelector(loadRuleFiles());
   const per = Math.ceil(MOTORS / PANELS);
   const panelInputs = Array.from({ length: PANELS }, (_, i) => ({ ...input, loads: input.loads.slice(i * per, (i + 1) * per) }));
@@ -69,13 +38,10 @@ async function main(): Promise<void> {
       buildBom({ panelName: `MCC-${i + 1}`, selections: s.results, panel: s.panel, supply: { volts: input.supply.volts, phases: input.supply.phases, hz: input.supply.hz ?? 60 }, enclosureType: '12', catalogue, labourUnits, markupPercent: 15, labourRatePerHour: 85 }),
     );
   build(); // warm-up (JIT), not timed
-  const buildTimes: number[] = [];
   let boms = build();
-  for (let i = 0; i < 7; i++) {
-    const t = performance.now();
+  const buildTimes = await timeRuns(7, () => {
     boms = build();
-    buildTimes.push(performance.now() - t);
-  }
+  });
   const lines = boms.reduce((n, b) => n + b.lines.length, 0);
   const unmatched = boms.flatMap((b) => b.lines.filter((l) => l.status === 'unmatched'));
 

@@ -40,85 +40,46 @@ const LOCKOUT = 'De-energise and lock out before working on the leads.';
 const MG1 = 'NEMA MG 1 lead markings';
 const THREE_PHASE_REVERSE = 'Interchange any two line leads (L1 and L3 by habit).';
 
+/** One connection step; lineGroups as given, nothing joined or insulated unless said. */
+function step(label: string, lineGroups: ConnectionStep['lineGroups'], joined: string[][] = [], insulated: string[] = []): ConnectionStep {
+  return { label, lineGroups, joined, insulated };
+}
+
+/** T1, T2, T3 alone on L1, L2, L3 */
+const lineOneLeadEach = (): ConnectionStep['lineGroups'] => ({ L1: ['T1'], L2: ['T2'], L3: ['T3'] });
+
+/** the winding halves in series: T4–T7, T5–T8, T6–T9 */
+const seriesJoints = (): string[][] => [
+  ['T4', 'T7'],
+  ['T5', 'T8'],
+  ['T6', 'T9'],
+];
+
+/** nine leads, high voltage: the same joints for wye and delta */
+const NINE_HIGH = step('Run (high voltage, halves in series)', lineOneLeadEach(), seriesJoints());
+
 const NINE: Record<'wye' | 'delta', Record<'low' | 'high', ConnectionStep>> = {
   wye: {
-    low: {
-      label: 'Run (low voltage, halves in parallel)',
-      lineGroups: { L1: ['T1', 'T7'], L2: ['T2', 'T8'], L3: ['T3', 'T9'] },
-      joined: [['T4', 'T5', 'T6']],
-      insulated: [],
-    },
-    high: {
-      label: 'Run (high voltage, halves in series)',
-      lineGroups: { L1: ['T1'], L2: ['T2'], L3: ['T3'] },
-      joined: [
-        ['T4', 'T7'],
-        ['T5', 'T8'],
-        ['T6', 'T9'],
-      ],
-      insulated: [],
-    },
+    low: step('Run (low voltage, halves in parallel)', { L1: ['T1', 'T7'], L2: ['T2', 'T8'], L3: ['T3', 'T9'] }, [['T4', 'T5', 'T6']]),
+    high: NINE_HIGH,
   },
   delta: {
-    low: {
-      label: 'Run (low voltage, halves in parallel)',
-      lineGroups: { L1: ['T1', 'T6', 'T7'], L2: ['T2', 'T4', 'T8'], L3: ['T3', 'T5', 'T9'] },
-      joined: [],
-      insulated: [],
-    },
-    high: {
-      label: 'Run (high voltage, halves in series)',
-      lineGroups: { L1: ['T1'], L2: ['T2'], L3: ['T3'] },
-      joined: [
-        ['T4', 'T7'],
-        ['T5', 'T8'],
-        ['T6', 'T9'],
-      ],
-      insulated: [],
-    },
+    low: step('Run (low voltage, halves in parallel)', { L1: ['T1', 'T6', 'T7'], L2: ['T2', 'T4', 'T8'], L3: ['T3', 'T5', 'T9'] }),
+    high: NINE_HIGH,
   },
 };
 
 const TWELVE: Record<'wye' | 'delta', Record<'low' | 'high', ConnectionStep>> = {
   wye: {
-    low: {
-      label: 'Run (low voltage, parallel wye)',
-      lineGroups: { L1: ['T1', 'T7'], L2: ['T2', 'T8'], L3: ['T3', 'T9'] },
-      joined: [
-        ['T4', 'T5', 'T6'],
-        ['T10', 'T11', 'T12'],
-      ],
-      insulated: [],
-    },
-    high: {
-      label: 'Run (high voltage, series wye)',
-      lineGroups: { L1: ['T1'], L2: ['T2'], L3: ['T3'] },
-      joined: [
-        ['T4', 'T7'],
-        ['T5', 'T8'],
-        ['T6', 'T9'],
-        ['T10', 'T11', 'T12'],
-      ],
-      insulated: [],
-    },
+    low: step('Run (low voltage, parallel wye)', { L1: ['T1', 'T7'], L2: ['T2', 'T8'], L3: ['T3', 'T9'] }, [
+      ['T4', 'T5', 'T6'],
+      ['T10', 'T11', 'T12'],
+    ]),
+    high: step('Run (high voltage, series wye)', lineOneLeadEach(), [...seriesJoints(), ['T10', 'T11', 'T12']]),
   },
   delta: {
-    low: {
-      label: 'Run (low voltage, parallel delta)',
-      lineGroups: { L1: ['T1', 'T6', 'T7', 'T12'], L2: ['T2', 'T4', 'T8', 'T10'], L3: ['T3', 'T5', 'T9', 'T11'] },
-      joined: [],
-      insulated: [],
-    },
-    high: {
-      label: 'Run (high voltage, series delta)',
-      lineGroups: { L1: ['T1', 'T12'], L2: ['T2', 'T10'], L3: ['T3', 'T11'] },
-      joined: [
-        ['T4', 'T7'],
-        ['T5', 'T8'],
-        ['T6', 'T9'],
-      ],
-      insulated: [],
-    },
+    low: step('Run (low voltage, parallel delta)', { L1: ['T1', 'T6', 'T7', 'T12'], L2: ['T2', 'T4', 'T8', 'T10'], L3: ['T3', 'T5', 'T9', 'T11'] }),
+    high: step('Run (high voltage, series delta)', { L1: ['T1', 'T12'], L2: ['T2', 'T10'], L3: ['T3', 'T11'] }, seriesJoints()),
   },
 };
 
@@ -133,7 +94,7 @@ export function connectionCard(req: ConnectionRequest): ConnectionCard {
         connection: 'single voltage',
         voltage: 'single',
         ratedVolts,
-        steps: [{ label: 'Run', lineGroups: { L1: ['T1'], L2: ['T2'], L3: ['T3'] }, joined: [], insulated: [] }],
+        steps: [step('Run', lineOneLeadEach())],
         reverse: THREE_PHASE_REVERSE,
         cautions: [ROTATION, LOCKOUT],
         basis: MG1,
@@ -149,18 +110,8 @@ export function connectionCard(req: ConnectionRequest): ConnectionCard {
         voltage: 'single',
         ratedVolts,
         steps: [
-          {
-            label: 'Start (wye)',
-            lineGroups: { L1: ['T1'], L2: ['T2'], L3: ['T3'] },
-            joined: [['T4', 'T5', 'T6']],
-            insulated: [],
-          },
-          {
-            label: 'Run (delta)',
-            lineGroups: { L1: ['T1', 'T6'], L2: ['T2', 'T4'], L3: ['T3', 'T5'] },
-            joined: [],
-            insulated: [],
-          },
+          step('Start (wye)', lineOneLeadEach(), [['T4', 'T5', 'T6']]),
+          step('Run (delta)', { L1: ['T1', 'T6'], L2: ['T2', 'T4'], L3: ['T3', 'T5'] }),
         ],
         reverse: `${THREE_PHASE_REVERSE} Swap the same two lines ahead of both the main and the delta contactor.`,
         cautions: [
@@ -182,12 +133,7 @@ export function connectionCard(req: ConnectionRequest): ConnectionCard {
         voltage: 'low',
         ratedVolts,
         steps: [
-          {
-            label: 'Start (first winding)',
-            lineGroups: { L1: ['T1'], L2: ['T2'], L3: ['T3'] },
-            joined: [['T4', 'T5', 'T6']],
-            insulated: ['T7', 'T8', 'T9'],
-          },
+          step('Start (first winding)', lineOneLeadEach(), [['T4', 'T5', 'T6']], ['T7', 'T8', 'T9']),
           { ...NINE.wye.low, label: 'Run (both windings)' },
         ],
         reverse: `${THREE_PHASE_REVERSE} Swap the same two lines for both windings.`,
@@ -197,7 +143,7 @@ export function connectionCard(req: ConnectionRequest): ConnectionCard {
       };
     }
     const table = req.leads === 9 ? NINE : TWELVE;
-    const step = table[req.winding][req.voltage];
+    const run = table[req.winding][req.voltage];
     const insulatedNote = req.voltage === 'low' ? 'Low voltage puts the winding halves in parallel.' : 'High voltage puts the winding halves in series.';
     return {
       title: `Three-phase, ${req.leads} leads, ${req.winding}, ${req.voltage} voltage`,
@@ -206,7 +152,7 @@ export function connectionCard(req: ConnectionRequest): ConnectionCard {
       connection: req.winding,
       voltage: req.voltage,
       ratedVolts,
-      steps: [step],
+      steps: [run],
       reverse: THREE_PHASE_REVERSE,
       cautions: [ROTATION, LOCKOUT],
       basis: MG1,
@@ -216,15 +162,10 @@ export function connectionCard(req: ConnectionRequest): ConnectionCard {
 
   if (req.motor === 'single-phase') {
     // Counter-clockwise rotation facing the end opposite the drive (from memory: check the motor's own diagram).
-    const step: ConnectionStep =
+    const run =
       req.voltage === 'low'
-        ? { label: 'Run (low voltage, run halves in parallel)', lineGroups: { L1: ['T1', 'T3', 'T8'], L2: ['T2', 'T4', 'T5'] }, joined: [], insulated: [] }
-        : {
-            label: 'Run (high voltage, run halves in series)',
-            lineGroups: { L1: ['T1'], L2: ['T4', 'T5'] },
-            joined: [['T2', 'T3', 'T8']],
-            insulated: [],
-          };
+        ? step('Run (low voltage, run halves in parallel)', { L1: ['T1', 'T3', 'T8'], L2: ['T2', 'T4', 'T5'] })
+        : step('Run (high voltage, run halves in series)', { L1: ['T1'], L2: ['T4', 'T5'] }, [['T2', 'T3', 'T8']]);
     return {
       title: `Single-phase dual voltage, ${req.voltage} voltage`,
       motor: 'single-phase',
@@ -232,7 +173,7 @@ export function connectionCard(req: ConnectionRequest): ConnectionCard {
       connection: 'dual voltage',
       voltage: req.voltage,
       ratedVolts,
-      steps: [step],
+      steps: [run],
       reverse: 'Interchange T5 and T8 (the start winding); never reverse both windings.',
       cautions: [ROTATION, LOCKOUT],
       basis: MG1,
@@ -246,14 +187,9 @@ export function connectionCard(req: ConnectionRequest): ConnectionCard {
   // DC
   const field = req.field;
   const steps: Record<typeof field, ConnectionStep> = {
-    shunt: { label: 'Run (shunt)', lineGroups: { 'A+': ['A1', 'F1'], 'A-': ['A2', 'F2'] }, joined: [], insulated: [] },
-    series: { label: 'Run (series)', lineGroups: { 'A+': ['A1'], 'A-': ['S2'] }, joined: [['A2', 'S1']], insulated: [] },
-    compound: {
-      label: 'Run (cumulative compound)',
-      lineGroups: { 'A+': ['A1', 'F1'], 'A-': ['S2', 'F2'] },
-      joined: [['A2', 'S1']],
-      insulated: [],
-    },
+    shunt: step('Run (shunt)', { 'A+': ['A1', 'F1'], 'A-': ['A2', 'F2'] }),
+    series: step('Run (series)', { 'A+': ['A1'], 'A-': ['S2'] }, [['A2', 'S1']]),
+    compound: step('Run (cumulative compound)', { 'A+': ['A1', 'F1'], 'A-': ['S2', 'F2'] }, [['A2', 'S1']]),
   };
   const cautions = [ROTATION, LOCKOUT];
   if (field === 'series' || field === 'compound') cautions.push('Never run a DC series motor unloaded: it runs away.');

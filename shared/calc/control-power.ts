@@ -101,65 +101,65 @@ function nextHigherStandard(x: number): number {
   return r;
 }
 
+/** One band of a protection table: applies below `belowAmps` rated current; the last band takes the rest. */
+interface ProtectionBand {
+  belowAmps: number;
+  maxPercent: number;
+  rounding: ProtectionChoice['rounding'];
+  basis: string;
+}
+
+/** NEC 2023 450.3(B), Table 450.3(B): the same bands on either side of the transformer. */
+const table450_3B = (side: 'primary' | 'secondary'): ProtectionBand[] => [
+  {
+    belowAmps: 9,
+    maxPercent: 167,
+    rounding: 'next-lower',
+    basis: `NEC 2023 450.3(B), Table 450.3(B): ${side} current less than 9 A, not more than 167 %`,
+  },
+  {
+    belowAmps: Infinity,
+    maxPercent: 125,
+    rounding: 'next-higher-standard',
+    basis: `NEC 2023 450.3(B), Table 450.3(B): ${side} current 9 A or more, 125 %; Note 1: next higher standard rating (240.6(A))`,
+  },
+];
+
+/** Primary side, primary and secondary both protected: NEC 2023 430.72(C)(4) below 2 A, then Table 450.3(B). */
+const PRIMARY_BANDS: readonly ProtectionBand[] = [
+  {
+    belowAmps: 2,
+    maxPercent: 500,
+    rounding: 'next-lower',
+    basis: 'NEC 2023 430.72(C)(4): primary current less than 2 A, not more than 500 %',
+  },
+  ...table450_3B('primary'),
+];
+
+const SECONDARY_BANDS: readonly ProtectionBand[] = table450_3B('secondary');
+
+function applyBand(bands: readonly ProtectionBand[], currentA: number): ProtectionChoice {
+  const band = bands.find((b) => currentA < b.belowAmps) ?? bands[bands.length - 1]!;
+  // percent / 100 first: 167 / 100 is the same double as 1.67
+  const max = currentA * (band.maxPercent / 100);
+  return {
+    currentA: r3(currentA),
+    maxPercent: band.maxPercent,
+    maxAmps: r3(max),
+    ratingAmps: band.rounding === 'next-lower' ? nextLower(max) : nextHigherStandard(max),
+    rounding: band.rounding,
+    basis: band.basis,
+  };
+}
+
 /** Primary protection (primary and secondary both protected). */
 export function primaryProtection(va: number, primaryVolts: number): ProtectionChoice {
-  const i = va / primaryVolts;
-  if (i < 2) {
-    const max = i * 5;
-    return {
-      currentA: r3(i),
-      maxPercent: 500,
-      maxAmps: r3(max),
-      ratingAmps: nextLower(max),
-      rounding: 'next-lower',
-      basis: 'NEC 2023 430.72(C)(4): primary current less than 2 A, not more than 500 %',
-    };
-  }
-  if (i < 9) {
-    const max = i * 1.67;
-    return {
-      currentA: r3(i),
-      maxPercent: 167,
-      maxAmps: r3(max),
-      ratingAmps: nextLower(max),
-      rounding: 'next-lower',
-      basis: 'NEC 2023 450.3(B), Table 450.3(B): primary current less than 9 A, not more than 167 %',
-    };
-  }
-  const max = i * 1.25;
-  return {
-    currentA: r3(i),
-    maxPercent: 125,
-    maxAmps: r3(max),
-    ratingAmps: nextHigherStandard(max),
-    rounding: 'next-higher-standard',
-    basis: 'NEC 2023 450.3(B), Table 450.3(B): primary current 9 A or more, 125 %; Note 1: next higher standard rating (240.6(A))',
-  };
+  return applyBand(PRIMARY_BANDS, va / primaryVolts);
 }
 
 /** Secondary protection. */
 export function secondaryProtection(va: number, secondaryVolts: number): ProtectionChoice {
-  const i = va / secondaryVolts;
-  if (i < 9) {
-    const max = i * 1.67;
-    return {
-      currentA: r3(i),
-      maxPercent: 167,
-      maxAmps: r3(max),
-      ratingAmps: nextLower(max),
-      rounding: 'next-lower',
-      basis: 'NEC 2023 450.3(B), Table 450.3(B): secondary current less than 9 A, not more than 167 %',
-    };
-  }
-  const max = i * 1.25;
-  return {
-    currentA: r3(i),
-    maxPercent: 125,
-    maxAmps: r3(max),
-    ratingAmps: nextHigherStandard(max),
-    rounding: 'next-higher-standard',
-    basis: 'NEC 2023 450.3(B), Table 450.3(B): secondary current 9 A or more, 125 %; Note 1: next higher standard rating (240.6(A))',
-  };
+  return applyBand(SECONDARY_BANDS, va / secondaryVolts);
 }
 
 export function nextStandardVa(va: number): number {

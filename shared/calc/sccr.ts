@@ -138,10 +138,10 @@ interface Evaluated {
   notes: string[];
 }
 
-function baseRating(
-  c: SccrComponentInput,
-  hp: number | null | undefined,
-): { ratingKa: number | null; source: SccrSource; basis: string } {
+/** A component's rating, where it comes from and why. */
+type Rating = Pick<SccrRow, 'ratingKa' | 'source' | 'basis'>;
+
+function baseRating(c: SccrComponentInput, hp: number | null | undefined): Rating {
   if (c.sccrKa !== undefined) {
     return { ratingKa: c.sccrKa, source: 'marked', basis: 'marked rating (catalogue)' };
   }
@@ -158,23 +158,27 @@ function baseRating(
   }
 }
 
+/** A worksheet row for one component at its location; limiting and belowAvailable are set once all rows are in. */
+function rowOf(location: string, c: SccrComponentInput, rating: Rating): SccrRow {
+  return {
+    location,
+    code: c.code,
+    description: c.description,
+    category: c.category,
+    qty: c.qty ?? 1,
+    ...rating,
+    limiting: false,
+    belowAvailable: false,
+  };
+}
+
 function evaluate(input: Omit<SccrInput, 'alternatives'>): Evaluated {
   const rows: SccrRow[] = [];
   const notes: string[] = [];
   const available = input.availableFaultKa;
 
   for (const c of input.feeder) {
-    const r = baseRating(c, input.feederHp);
-    rows.push({
-      location: 'feeder',
-      code: c.code,
-      description: c.description,
-      category: c.category,
-      qty: c.qty ?? 1,
-      ...r,
-      limiting: false,
-      belowAvailable: false,
-    });
+    rows.push(rowOf('feeder', c, baseRating(c, input.feederHp)));
   }
 
   const clFeeder = input.feeder.find((c) => c.currentLimiting && c.sccrKa !== undefined);
@@ -194,16 +198,7 @@ function evaluate(input: Omit<SccrInput, 'alternatives'>): Evaluated {
           basis: `tested combination ${combo.id} (${combo.source}), UL 508A SB4`,
         };
       }
-      const row: SccrRow = {
-        location: b.tag,
-        code: c.code,
-        description: c.description,
-        category: c.category,
-        qty: c.qty ?? 1,
-        ...r,
-        limiting: false,
-        belowAvailable: false,
-      };
+      const row = rowOf(b.tag, c, r);
       if (clFeeder && clFeeder.currentLimiting && available !== null && r.ratingKa !== null && r.source !== 'combination') {
         const raise = raiseByCurrentLimitingFeeder(
           {

@@ -3,6 +3,7 @@
 // unless `errors` is empty (one transaction).
 import { PassThrough, type Writable } from 'node:stream';
 import { inflateRawSync } from 'node:zlib';
+import { CsvError, parse } from 'csv-parse/sync';
 import ExcelJS from 'exceljs';
 import {
   CATALOGUE_COLUMNS,
@@ -203,52 +204,36 @@ function validateTable(cells: CellValue[][], cellErrors: NonNullable<Table['cell
 
 // --- CSV ---------------------------------------------------------------------------------------
 
+/**
+ * RFC 4180 CSV through csv-parse: quoted fields, doubled quotes, CRLF, LF or CR line ends. A quote inside an
+ * unquoted field stays as text (12" rail); blank lines stay as rows so row numbers match the file. The column
+ * and row limits are checked as each record is read.
+ */
 function readCsv(buffer: Buffer): Table {
   if (buffer[0] === 0x50 && buffer[1] === 0x4b) return { cells: [], error: 'this looks like an .xlsx workbook, not a CSV file' };
   if (buffer.includes(0)) return { cells: [], error: 'not a CSV text file (it contains binary data)' };
-  let text = buffer.toString('utf8');
-  if (text.charCodeAt(0) === 0xfeff) text = text.slice(1);
-  const rows: CellValue[][] = [];
-  let row: string[] = [];
-  let field = '';
-  let quoted = false;
-  const endField = () => {
-    row.push(field);
-    field = '';
-    if (row.length > IMPORT_LIMITS.maxColumns) throw new CsvLimit(`more than ${IMPORT_LIMITS.maxColumns} columns`);
-  };
-  const endRow = () => {
-    endField();
-    rows.push(row.map((v) => unneutraliseCsvText(v)));
-    row = [];
-    if (rows.length > IMPORT_LIMITS.maxRows + 1) throw new CsvLimit(`more than ${IMPORT_LIMITS.maxRows} rows`);
-  };
+  let records = 0;
   try {
-    for (let i = 0; i < text.length; i++) {
-      const ch = text[i]!;
-      if (quoted) {
-        if (ch === '"') {
-          if (text[i + 1] === '"') {
-            field += '"';
-            i++;
-          } else quoted = false;
-        } else field += ch;
-      } else if (ch === '"' && field === '') {
-        quoted = true;
-      } else if (ch === ',') endField();
-      else if (ch === '\n') endRow();
-      else if (ch === '\r') {
-        if (text[i + 1] === '\n') i++;
-        endRow();
-      } else field += ch;
-    }
-    if (quoted) return { cells: [], error: 'the CSV ends inside a quoted field (a closing " is missing)' };
-    if (field !== '' || row.length > 0) endRow();
+    const cells: CellValue[][] = parse(buffer.toString('utf8'), {
+      bom: true,
+      record_delimiter: ['\r\n', '\n', '\r'],
+      relax_quotes: true,
+      relax_column_count: true,
+      on_record: (record: string[]) => {
+        if (record.length > IMPORT_LIMITS.maxColumns) throw new CsvLimit(`more than ${IMPORT_LIMITS.maxColumns} columns`);
+        if (++records > IMPORT_LIMITS.maxRows + 1) throw new CsvLimit(`more than ${IMPORT_LIMITS.maxRows} rows`);
+        return record.map((v) => unneutraliseCsvText(v));
+      },
+    });
+    return { cells };
   } catch (e) {
     if (e instanceof CsvLimit) return { cells: [], error: `the file has ${e.message}` };
+    if (e instanceof CsvError) {
+      if (e.code === 'CSV_QUOTE_NOT_CLOSED') return { cells: [], error: 'the CSV ends inside a quoted field (a closing " is missing)' };
+      return { cells: [], error: `the CSV could not be read: ${e.message}` };
+    }
     throw e;
   }
-  return { cells: rows };
 }
 
 class CsvLimit extends Error {}

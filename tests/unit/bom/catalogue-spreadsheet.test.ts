@@ -208,3 +208,14 @@ describe('zip bomb and size limits', () => {
     expect((await parseCatalogueFile(big, 'csv')).errors[0]!.message).toMatch(/larger than 10 MB/);
   });
 });
+
+describe('a CSV that ends inside a quoted field', () => {
+  it('is refused with a row error and no rows', async () => {
+    const { parseCatalogueFile } = await import('../../../server/modules/catalogue/spreadsheet');
+    const { CATALOGUE_HEADERS } = await import('../../../shared/schemas/catalogue');
+    const text = `${CATALOGUE_HEADERS.join(',')}\r\nPW-CN-N1-120,"Contactor, size 1\r\n`;
+    const r = await parseCatalogueFile(Buffer.from(text), 'csv');
+    expect(r.rows).toEqual([]);
+    expect(r.errors.map((e) => e.message).join(' ')).toMatch(/ends inside a quoted field/);
+  });
+});

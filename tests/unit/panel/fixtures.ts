@@ -1,77 +1,29 @@
 // Hand-made LoadSelection objects for the panel-level tests (a fictional plant: "Cedar Flats water works").
 // Currents are NEC 2023 Table 430.250 values at the 460 V column (10 hp 14 A, 25 hp 34 A, 20 hp 27 A).
 import type { LoadSelection, PanelRollup } from '../../../shared/schemas/selection';
+import { loadSelection, type DeepPartial } from '../../fixtures/selection';
 
-type Patch = Partial<Omit<LoadSelection, 'starter' | 'overload' | 'scpd' | 'relays'>> & {
-  starter?: Partial<LoadSelection['starter']>;
-  overload?: Partial<LoadSelection['overload']>;
-  scpd?: Partial<LoadSelection['scpd']>;
-  relays?: Partial<LoadSelection['relays']>;
+/** The raw water pump every panel-test motor starts from: 10 hp on a 480 V supply, dual-element fuses. */
+const RAW_WATER_PUMP: DeepPartial<LoadSelection> = {
+  tag: 'P-101',
+  description: 'Raw water pump',
+  volts: 480,
+  flcSource: 'NEC 2023 Table 430.250, 10 hp at 460 V',
+  starter: { iecCategory: 'AC-3', iecAmps: 18, basis: 'NEMA ICS 2, 10 hp at 460 V: size 1' },
+  overload: { basis: 'NEC 2023 430.32(A)(1): 125 % of FLA 13.2 A' },
+  scpd: {
+    type: 'dual-element-fuse',
+    maxPercent: 175,
+    ratingAmps: 25,
+    computedMaxAmps: 24.5,
+    basis: 'NEC 2023 430.52(C)(1), Table 430.52: 175 %; Exc. 1 next higher 25 A (240.6(A))',
+  },
+  conductor: { size: '12 AWG', ampacity: 25, basis: 'NEC 2023 430.22, Table 310.16 75 °C' },
+  disconnect: { basis: 'NEC 2023 430.109, 430.110(A)' },
 };
 
-export function selection(patch: Patch = {}): LoadSelection {
-  const base: LoadSelection = {
-    tag: 'P-101',
-    description: 'Raw water pump',
-    supply: 'ac3',
-    hp: 10,
-    volts: 480,
-    tableVolts: 460,
-    flcAmps: 14,
-    flcSource: 'NEC 2023 Table 430.250, 10 hp at 460 V',
-    flaAmps: 13.2,
-    lockedRotorAmps: null,
-    synchronousRpm: 1800,
-    starter: {
-      type: 'FVNR',
-      nemaSize: '1',
-      iecCategory: 'AC-3',
-      iecAmps: 18,
-      reversingContactors: false,
-      interlock: false,
-      basis: 'NEMA ICS 2, 10 hp at 460 V: size 1',
-    },
-    overload: {
-      maxSettingAmps: 16.5,
-      maxPercent: 125,
-      tripClass: 20,
-      providedByDrive: false,
-      basis: 'NEC 2023 430.32(A)(1): 125 % of FLA 13.2 A',
-    },
-    scpd: {
-      type: 'dual-element-fuse',
-      maxPercent: 175,
-      ratingAmps: 25,
-      computedMaxAmps: 24.5,
-      basis: 'NEC 2023 430.52(C)(1), Table 430.52: 175 %; Exc. 1 next higher 25 A (240.6(A))',
-    },
-    conductor: {
-      minAmpacity: 17.5,
-      size: '12 AWG',
-      material: 'cu',
-      tempRatingC: 75,
-      ampacity: 25,
-      basis: 'NEC 2023 430.22, Table 310.16 75 °C',
-    },
-    disconnect: { minAmps: 16.1, minHp: 10, basis: 'NEC 2023 430.109, 430.110(A)' },
-    relays: { phaseLoss: false, phaseReversal: false, phaseLossByOverload: false },
-    enclosure: { nemaType: '12', ipCode: 'IP54', flagForEngineer: false },
-    vfd: null,
-    softStarter: null,
-    dc: null,
-    cautions: [],
-    assumed: [],
-    trace: [],
-    errors: [],
-  };
-  return {
-    ...base,
-    ...patch,
-    starter: { ...base.starter, ...patch.starter },
-    overload: { ...base.overload, ...patch.overload },
-    scpd: { ...base.scpd, ...patch.scpd },
-    relays: { ...base.relays, ...patch.relays },
-  };
+export function selection(patch: DeepPartial<LoadSelection> = {}): LoadSelection {
+  return loadSelection(RAW_WATER_PUMP, patch);
 }
 
 export const pumpFvnr = selection();
