@@ -5,6 +5,7 @@ import { Load } from '../models/load';
 import { Job } from '../models/job';
 import type { LoadInput } from '../../../shared/schemas/load';
 import { selectAll } from '../../modules/panels/selection';
+import { regenerateBom } from '../../modules/bom/service';
 
 export const DEMO_MOTORS: LoadInput[] = [
   { tag: 'P-101', description: 'Raw water pump 1', supply: 'ac3', hp: 150, volts: 460, fla: 172, serviceFactor: 1.15, codeLetter: 'G', design: 'B', startingLimit: 'reduced-inrush', critical: true, environment: 'indoor-dusty', inertia: 'normal' },
@@ -47,4 +48,6 @@ export async function seedDemoPanels(organisationId: number, jobId: number, tran
     })),
     { transaction },
   );
+  // the demo panel opens with its bill of materials built from the seeded catalogue
+  await regenerateBom(organisationId, Object.assign(panel, { job }), transaction);
 }

@@ -56,6 +56,11 @@ export function Component() {
         </dl>
       )}
       <JobPanels jobId={id} canEdit={canEdit} />
+      <p className="mt-2 text-sm">
+        Bill of materials of the whole job:{' '}
+        <a className="font-semibold text-copper-700 underline" href={`/api/jobs/${id}/bom.xlsx`}>⬇ .xlsx</a>{' '}
+        <a className="font-semibold text-copper-700 underline" href={`/api/jobs/${id}/bom.csv`}>⬇ .csv</a>
+      </p>
       <section className="mt-8">
         <h2 className="mb-2 text-lg font-semibold">Activity</h2>
         <ActivityList jobId={id} />
