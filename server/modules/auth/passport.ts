@@ -2,7 +2,7 @@ import argon2 from 'argon2';
 import passport from 'passport';
 import { Strategy as LocalStrategy } from 'passport-local';
 import type { CurrentUser, Role } from '../../../shared/schemas/auth';
-import { findUserByEmail, findUserById, markSignedIn } from '../users/repository';
+import { findSignedInUser, findUserByEmail, markSignedIn } from '../users/repository';
 
 // A hash to verify against when the e-mail is unknown, so that the answer takes the same time.
 let dummyHash: Promise<string> | null = null;
@@ -29,7 +29,7 @@ export function configurePassport() {
   passport.serializeUser((user, done) => done(null, (user as { id: number }).id));
   passport.deserializeUser(async (id: number, done) => {
     try {
-      const u = await findUserById(id);
+      const u = await findSignedInUser(id);
       if (!u || !u.active) return done(null, false);
       const current: CurrentUser = {
         id: u.id,

@@ -45,6 +45,16 @@ export async function revisionsOf(panelId: number) {
   );
 }
 
+/** The change stamp of a panel and its job, in one light query (the panel page's cache key). */
+export async function panelStamp(organisationId: number, id: number): Promise<string | null> {
+  const rows = await db().query<{ stamp: string }>(
+    `select p.id || '.' || p.version || '.' || (extract(epoch from p.updated_at) * 1000000)::bigint || '.' || (extract(epoch from j.updated_at) * 1000000)::bigint as stamp
+       from panels p join jobs j on j.id = p.job_id where p.organisation_id = :organisationId and p.id = :id`,
+    { replacements: { organisationId, id }, type: QueryTypes.SELECT },
+  );
+  return rows[0]?.stamp ?? null;
+}
+
 /** Marks a panel changed without a new version (a comment): its cached answer is no longer current. */
 export async function touchPanel(id: number, transaction?: Transaction) {
   await db().query('update panels set updated_at = now() where id = :id', { replacements: { id }, transaction });

@@ -50,17 +50,17 @@ export async function requirePanel(actor: CurrentUser, id: number, transaction?:
  * a repeated read costs one query and no serialisation. The key is read from the database on every
  * call, so several server instances stay correct.
  */
-const detailCache = new Map<number, { key: string; json: string }>();
+const detailCache = new Map<number, { key: string; json: Buffer }>();
 const DETAIL_CACHE_MAX = 500;
 
-export async function panelDetailJson(actor: CurrentUser, id: number): Promise<{ json: string; key: string }> {
-  const p = await requirePanel(actor, id);
-  const key = `${p.id}.${p.version}.${p.updatedAt.getTime()}.${p.job.updatedAt.getTime()}`;
-  const hit = detailCache.get(p.id);
+export async function panelDetailJson(actor: CurrentUser, id: number): Promise<{ json: Buffer; key: string }> {
+  const key = await repo.panelStamp(actor.organisationId, id);
+  if (!key) throw new NotFoundError('Panel');
+  const hit = detailCache.get(id);
   if (hit && hit.key === key) return hit;
-  const entry = { key, json: JSON.stringify(await panelDetailOf(p)) };
+  const entry = { key, json: Buffer.from(JSON.stringify(await panelDetailOf(await requirePanel(actor, id)))) };
   if (detailCache.size >= DETAIL_CACHE_MAX) detailCache.delete(detailCache.keys().next().value as number);
-  detailCache.set(p.id, entry);
+  detailCache.set(id, entry);
   return entry;
 }
 

@@ -18,7 +18,28 @@ export async function findUserByEmail(email: string) {
   return User.findOne({ where: { email } });
 }
 
-/** One query: the user with the organisation's name (runs on every signed-in request). */
+/**
+ * The signed-in user of a request, kept for a few seconds per process: every signed-in request needs
+ * it. A change through this process forgets it at once; another server instance sees a role change
+ * or a deactivation within USER_CACHE_MS.
+ */
+export const USER_CACHE_MS = 5000;
+const userCache = new Map<number, { at: number; row: UserRow | null }>();
+
+export function forgetUser(id: number) {
+  userCache.delete(id);
+}
+
+export async function findSignedInUser(id: number): Promise<UserRow | null> {
+  const hit = userCache.get(id);
+  if (hit && Date.now() - hit.at < USER_CACHE_MS) return hit.row;
+  const row = await findUserById(id);
+  if (userCache.size > 10_000) userCache.clear();
+  userCache.set(id, { at: Date.now(), row });
+  return row;
+}
+
+/** One query: the user with the organisation's name. */
 export async function findUserById(id: number): Promise<UserRow | null> {
   const rows = await db().query<UserRow>(
     `select u.id, u.organisation_id as "organisationId", o.name as "organisationName", u.email, u.name, u.roles, u.active, null as "passwordHash"
@@ -69,6 +90,7 @@ export async function findUserInOrganisation(organisationId: number, id: number)
 
 export async function updateUserVersioned(organisationId: number, id: number, version: number, values: Partial<{ name: string; roles: string[]; active: boolean }>) {
   const [count] = await User.update({ ...values, version: version + 1 }, { where: { organisationId, id, version } });
+  forgetUser(id);
   return count;
 }
 
@@ -78,6 +100,7 @@ export async function findByInviteToken(token: string) {
 
 export async function setPassword(id: number, passwordHash: string) {
   await User.update({ passwordHash, inviteToken: null }, { where: { id } });
+  forgetUser(id);
 }
 
 export async function countAdmins(organisationId: number) {
