@@ -90,7 +90,8 @@ async function load(base: string, urlPath: string, cookies: string[], seconds: n
         setupRequest: (req, context) => {
           const ctx = context as { cookie?: string };
           ctx.cookie ??= cookies[next++ % cookies.length];
-          return { ...req, headers: { ...req.headers, cookie: ctx.cookie! } };
+          // as a browser sends it: with its session cookie and accepting gzip
+          return { ...req, headers: { ...req.headers, cookie: ctx.cookie!, 'accept-encoding': 'gzip' } };
         },
       },
     ],

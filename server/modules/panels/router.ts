@@ -27,10 +27,12 @@ export const panelRoutes = [
     handler: ({ user, params, body }) => service.createPanel(user, params.id, body),
   }),
   defineRoute({ method: 'get', path: '/api/panels/:panelId', access: ALL, summary: 'A panel with its motors, selections, comments and revisions', params: PanelId, handler: async ({ user, params, req, res }) => {
-      const { json, key } = await service.panelDetailJson(user, params.panelId);
+      const { json, gzip, key } = await service.panelDetailJson(user, params.panelId);
       res.setHeader('ETag', `W/"${key}"`);
       res.setHeader('Cache-Control', 'private, no-cache');
+      res.setHeader('Vary', 'Accept-Encoding');
       if (req.fresh) res.status(304).end();
+      else if (req.acceptsEncodings('gzip')) res.type('application/json').setHeader('Content-Encoding', 'gzip').send(gzip);
       else res.type('application/json').send(json);
       return undefined;
     } }),

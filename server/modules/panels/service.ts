@@ -1,3 +1,4 @@
+import { gzipSync } from 'node:zlib';
 import type { Transaction } from 'sequelize';
 import { db } from '../../db/sequelize';
 import type { CurrentUser } from '../../../shared/schemas/auth';
@@ -50,15 +51,23 @@ export async function requirePanel(actor: CurrentUser, id: number, transaction?:
  * a repeated read costs one query and no serialisation. The key is read from the database on every
  * call, so several server instances stay correct.
  */
-const detailCache = new Map<number, { key: string; json: Buffer }>();
+const detailCache = new Map<number, PanelDetailBody>();
+
+export interface PanelDetailBody {
+  key: string;
+  json: Buffer;
+  /** the same JSON gzipped once, for clients that accept it (every browser) */
+  gzip: Buffer;
+}
 const DETAIL_CACHE_MAX = 500;
 
-export async function panelDetailJson(actor: CurrentUser, id: number): Promise<{ json: Buffer; key: string }> {
+export async function panelDetailJson(actor: CurrentUser, id: number): Promise<PanelDetailBody> {
   const key = await repo.panelStamp(actor.organisationId, id);
   if (!key) throw new NotFoundError('Panel');
   const hit = detailCache.get(id);
   if (hit && hit.key === key) return hit;
-  const entry = { key, json: Buffer.from(JSON.stringify(await panelDetailOf(await requirePanel(actor, id)))) };
+  const json = Buffer.from(JSON.stringify(await panelDetailOf(await requirePanel(actor, id))));
+  const entry = { key, json, gzip: gzipSync(json) };
   if (detailCache.size >= DETAIL_CACHE_MAX) detailCache.delete(detailCache.keys().next().value as number);
   detailCache.set(id, entry);
   return entry;
