@@ -25,11 +25,12 @@ describe('estimator in the browser', () => {
     await page.getByRole('navigation', { name: 'Panel sections' }).getByRole('link', { name: 'Bill of materials' }).click();
     await page.waitForURL(/\/bill-of-materials$/);
 
-    // the demo panel has never been built: the page says so and offers the rebuild
-    await page.getByText('This panel has no bill of materials yet.').waitFor();
+    // the demo panel comes with the bill of materials the seeder built: up to date, and still so after a rebuild
+    await page.getByText('✔ Up to date with the motors and the catalogue.').waitFor();
     await page.getByRole('button', { name: 'Rebuild', exact: true }).click();
     const table = page.getByRole('table', { name: 'Bill of materials' });
     await table.waitFor();
+    await page.getByRole('button', { name: 'Rebuild', exact: true }).waitFor({ state: 'visible' });
     await page.getByText('✔ Up to date with the motors and the catalogue.').waitFor();
 
     // a subtotal row per bucket, motors and panel items

@@ -22,6 +22,19 @@ async function fillWizard(page: Page, v: { tag: string; hp: string; fla?: string
   if (v.reverseHazard) await page.getByLabel(/Running backwards would damage/).check();
 }
 
+/** The designer submits from the Sign-off section; an engineer signs off the expected revision. */
+async function submitAndSignOff(page: Page, revision: string) {
+  await page.getByRole('link', { name: 'Sign-off' }).click();
+  await page.getByRole('button', { name: 'Submit for sign-off' }).click();
+  await page.locator('[data-state="in_review"]').first().waitFor();
+  const eng = await newPage(browser);
+  await signInThroughForm(eng, 'engineer');
+  await eng.waitForURL(/\/jobs$/);
+  await eng.goto(`${panelUrl}/sign-off`);
+  await eng.getByRole('button', { name: new RegExp(`Sign off as ${revision}`) }).click();
+  await eng.locator('[data-state="signed_off"]').first().waitFor();
+}
+
 beforeAll(async () => {
   browser = await launch();
 });
@@ -96,16 +109,7 @@ describe('designer → engineer → estimator', () => {
     await page.getByRole('complementary', { name: 'Selection preview' }).getByText(/Dual-element fuse 60 A/).waitFor();
     await page.getByRole('button', { name: 'Save motor' }).click();
     await page.waitForURL(/\/motors$/);
-    await page.getByRole('link', { name: 'Sign-off' }).click();
-    await page.getByRole('button', { name: 'Submit for sign-off' }).click();
-    await page.locator('[data-state="in_review"]').first().waitFor();
-
-    const eng = await newPage(browser);
-    await signInThroughForm(eng, 'engineer');
-    await eng.waitForURL(/\/jobs$/);
-    await eng.goto(`${panelUrl}/sign-off`);
-    await eng.getByRole('button', { name: /Sign off as R0/ }).click();
-    await eng.locator('[data-state="signed_off"]').first().waitFor();
+    await submitAndSignOff(page, 'R0');
   });
 
   it('a change order makes R1; the estimator downloads the .xlsx and sees the difference R0 → R1', async () => {
@@ -116,15 +120,7 @@ describe('designer → engineer → estimator', () => {
     await fillWizard(page, { tag: 'SP-4', hp: '15' });
     await page.getByRole('button', { name: 'Add motor' }).click();
     await page.waitForURL(/\/motors$/);
-    await page.getByRole('link', { name: 'Sign-off' }).click();
-    await page.getByRole('button', { name: 'Submit for sign-off' }).click();
-    await page.locator('[data-state="in_review"]').first().waitFor();
-    const eng = await newPage(browser);
-    await signInThroughForm(eng, 'engineer');
-    await eng.waitForURL(/\/jobs$/);
-    await eng.goto(`${panelUrl}/sign-off`);
-    await eng.getByRole('button', { name: /Sign off as R1/ }).click();
-    await eng.locator('[data-state="signed_off"]').first().waitFor();
+    await submitAndSignOff(page, 'R1');
 
     const est = await newPage(browser);
     await signInThroughForm(est, 'estimator');
