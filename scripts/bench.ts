@@ -48,6 +48,17 @@ async function serve(url: string) {
   const { connectDatabase } = await import('../server/db/sequelize');
   const { createApp } = await import('../server/app');
   connectDatabase(url, { poolMax: 20 });
+  // every statement this server sends (sessions, people, panels), read by the bench over IPC
+  let statements = 0;
+  const proto = pg.Client.prototype as unknown as { query: (...a: unknown[]) => unknown };
+  const query = proto.query;
+  proto.query = function (this: unknown, ...args: unknown[]) {
+    statements++;
+    return query.apply(this, args);
+  };
+  process.on('message', (m) => {
+    if (m === 'statements') process.send?.({ statements });
+  });
   const app = createApp({ databaseUrl: url, sessionSecret: 'bench-session-secret-not-for-use' });
   const server = app.listen(0, '127.0.0.1', () => console.log(`PORT ${(server.address() as AddressInfo).port}`));
   process.on('SIGTERM', () => {
@@ -189,11 +200,18 @@ async function main() {
     await closeDatabase();
 
     // (c)
-    child = spawn(process.execPath, [...process.execArgv, import.meta.filename, '--serve', url], {
+    // PW_BENCH_PROFILE=<dir> writes a CPU profile of the server process there
+    const profile = process.env.PW_BENCH_PROFILE ? ['--cpu-prof', `--cpu-prof-dir=${process.env.PW_BENCH_PROFILE}`] : [];
+    child = spawn(process.execPath, [...profile, ...process.execArgv, import.meta.filename, '--serve', url], {
       cwd: root,
       env: { ...process.env, NODE_ENV: 'production', PW_QUIET: '1', PW_SIGNIN_LIMIT: '1000' },
-      stdio: ['ignore', 'pipe', 'inherit'],
+      stdio: ['ignore', 'pipe', 'inherit', 'ipc'],
     });
+    const statements = () =>
+      new Promise<number>((resolve) => {
+        child!.once('message', (m) => resolve((m as { statements: number }).statements));
+        child!.send('statements');
+      });
     const port = await new Promise<number>((resolve, reject) => {
       let buf = '';
       child!.stdout!.on('data', (d: Buffer) => {
@@ -210,7 +228,9 @@ async function main() {
     const body = (await check.json()) as { loads?: unknown[] };
     if (check.status !== 200 || body.loads?.length !== 10) throw new Error(`GET ${urlPath} answered ${check.status}`);
     await load(base, urlPath, cookies, WARMUP_S);
+    const sqlBefore = await statements();
     const api = await load(base, urlPath, cookies, DURATION_S);
+    const sqlPerRequest = ((await statements()) - sqlBefore) / api.requests;
 
     // ---- the table ----
     const e = { engine: num(engine.out, /selectPanel, 500 motors.*?median ([\d.]+) ms/), sizing: num(engine.out, /sizing functions alone.*?median ([\d.]+) ms/), ratio: num(engine.out, /ratio engine \/ sizing alone: ([\d.]+)x/) };
@@ -226,6 +246,7 @@ async function main() {
       ['  p95', `${api.p95.toFixed(1)} ms`, api.p95 < BUDGET.p95Ms ? `< ${BUDGET.p95Ms} ms: met` : `< ${BUDGET.p95Ms} ms: NOT met`],
       ['  p99', `${api.p99.toFixed(1)} ms`, ''],
       ['  throughput', `${api.perSecond.toFixed(0)} requests/s (${api.requests} requests, ${api.non2xx} non-2xx, ${api.errors} errors)`, ''],
+      ['  SQL statements per request, whole server (session, person, panel)', sqlPerRequest.toFixed(3), ''],
       ...PANEL_MOTORS.map((n): [string, string, string] => [`SQL queries, panel data, ${n} motors`, String(queries[n]), queries[n]! <= BUDGET.queries ? `≤ ${BUDGET.queries}: met` : `≤ ${BUDGET.queries}: NOT met`]),
     ];
     const w0 = Math.max(...rows.map((r) => r[0].length));
@@ -238,9 +259,10 @@ async function main() {
     console.log(`| ${'-'.repeat(w0)} | ${'-'.repeat(w1)} | ------ |`);
     for (const [a, f, bud] of rows) console.log(`| ${a.padEnd(w0)} | ${f.padEnd(w1)} | ${bud} |`);
     console.log('');
-    console.log('SQL queries: one panelDetail call (the panel page\'s data), counted at the pg driver. Not counted: the');
-    console.log('request\'s own session read and touch (connect-pg-simple), the signed-in user lookup (passport), and the');
-    console.log('set-up statements of a newly opened pool connection. PW_BENCH_SQL=1 lists the counted statements.');
+    console.log('SQL queries, panel data: one panelDetail call (the panel page\'s data built from the database), counted at');
+    console.log('the pg driver; a newly opened pool connection\'s set-up is left out. PW_BENCH_SQL=1 lists the statements.');
+    console.log('SQL statements per request: everything the server process sent during the measured run, divided by the');
+    console.log('requests; repeated reads are answered from per-process caches kept current by the change feed.');
     console.log(`Load: autocannon in this process, the server in a child process (NODE_ENV=production), PostgreSQL on 127.0.0.1; one signed-in session per connection; ${WARMUP_S} s warm-up not counted.`);
     if (!engine.ok) console.log(`\nbench-engine failed:\n${engine.out}`);
     if (!bom.ok) console.log(`\nbench-bom failed:\n${bom.out}`);

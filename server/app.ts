@@ -8,12 +8,15 @@ import connectPgSimple from 'connect-pg-simple';
 import helmet from 'helmet';
 import passport from 'passport';
 import pg from 'pg';
+import onHeaders from 'on-headers';
 import { configurePassport } from './modules/auth/passport';
 import { authRoutes, signInLimiter } from './modules/auth/router';
 import { userRoutes } from './modules/users/router';
 import { jobRoutes } from './modules/jobs/router';
 import { mailRoutes } from './modules/mail/router';
 import { csrfProtection } from './middleware/csrf';
+import { CachedSessionStore } from './middleware/session-cache';
+import { changeFeed } from './db/change-feed';
 import { errorHandler, notFoundApi } from './middleware/errors';
 import { routeTable, toHandlers, type AnyRoute } from './http/route-table';
 import { extraRoutes } from './http/extra-routes';
@@ -25,6 +28,8 @@ export interface AppOptions {
   /** serve the built client from dist/ (production start) */
   serveClient?: boolean;
 }
+
+const SAFE_METHODS = new Set(['GET', 'HEAD', 'OPTIONS']);
 
 export function allRoutes(): AnyRoute[] {
   return [...authRoutes(signInLimiter()), ...userRoutes, ...jobRoutes, ...mailRoutes, ...extraRoutes()];
@@ -59,11 +64,24 @@ export function createApp(opts: AppOptions): Express {
   const sessionPool = new pg.Pool({ connectionString: opts.databaseUrl, max: 10 });
   sessionPool.on('error', () => undefined); // an idle client dropped by the server; the pool reconnects
   app.locals.sessionPool = sessionPool;
+  // Per-process caches (sessions, signed-in users, panel pages) stay correct through the change feed.
+  const feed = changeFeed();
+  void feed.start(opts.databaseUrl);
+  app.locals.changeFeed = feed;
+  app.use('/api', (req, res, next) => {
+    if (SAFE_METHODS.has(req.method)) return next();
+    feed.localWrite();
+    onHeaders(res, () => feed.localWrite());
+    next();
+  });
   app.use(
     session({
       name: 'pw.sid',
       secret: opts.sessionSecret ?? e.SESSION_SECRET ?? randomBytes(32).toString('hex'),
-      store: new PgStore({ pool: sessionPool, tableName: 'session', createTableIfMissing: false, disableTouch: true, pruneSessionInterval: e.NODE_ENV === 'test' ? false : 60 * 15 }),
+      store: new CachedSessionStore(
+        new PgStore({ pool: sessionPool, tableName: 'session', createTableIfMissing: false, disableTouch: true, pruneSessionInterval: e.NODE_ENV === 'test' ? false : 60 * 15 }),
+        feed,
+      ),
       resave: false,
       saveUninitialized: false,
       rolling: false,

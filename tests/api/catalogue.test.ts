@@ -1,6 +1,7 @@
 // Catalogue and labour-unit API: roles, optimistic versions, history, export/import round trip,
 // all-or-nothing imports, and the frozen unit cost of a stored bill-of-materials line.
 import { describe, expect, it } from 'vitest';
+import ExcelJS from 'exceljs';
 import { send, signInAs, type Session } from '../setup/api';
 
 const uniq = () => Date.now().toString(36).toUpperCase() + Math.floor(Math.random() * 1e4);
@@ -205,6 +206,50 @@ describe('catalogue export and import', () => {
     );
     expect(r.body.error.message).toMatch(/nothing was imported/);
     expect(content(await allItems(estimator))).toEqual(before);
+  });
+
+  it('keeps formula text of an uploaded workbook as text, takes a formula cell by its value, and neutralises both exports', async () => {
+    const estimator = await signInAs('estimator');
+    // a workbook as someone might send it: the exported sheet with one row added by hand
+    const wb = new ExcelJS.Workbook();
+    await wb.xlsx.load((await download(estimator, '/api/catalogue.xlsx')) as unknown as ArrayBuffer);
+    const ws = wb.worksheets[0]!;
+    const headers = (ws.getRow(1).values as unknown[]).slice(1).map(String);
+    const col = (h: string) => headers.indexOf(h) + 1;
+    const source = ws.getRow(2);
+    const code = `PW-FX-${uniq()}`;
+    const injected = '=HYPERLINK("http://example.invalid","open")';
+    const values = headers.map((_h, i) => source.getCell(i + 1).value);
+    const added = ws.addRow(values);
+    added.getCell(col('code')).value = code;
+    added.getCell(col('description')).value = injected;
+    added.getCell(col('unitCost')).value = { formula: 'ROUND(25/2,2)', result: 12.5 };
+    added.commit();
+    const file = Buffer.from(await wb.xlsx.writeBuffer());
+    const r = (await upload(estimator, 'hand-edited.xlsx', file, 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet').expect(200)).body;
+    expect(r).toMatchObject({ created: 1 });
+
+    const item = (await allItems(estimator)).find((i) => i.code === code)!;
+    expect(item.description).toBe(injected); // stored as the text it was
+    expect(item.unitCost).toBe(12.5); // the formula's value, not the formula
+
+    // CSV export: the text is prefixed with a quote, so a spreadsheet shows it and runs nothing
+    const csv = (await estimator.agent.get('/api/catalogue.csv').expect(200)).text;
+    const line = csv.split('\r\n').find((l) => l.startsWith(`${code},`))!;
+    expect(line).toContain(`"'=HYPERLINK(""http://example.invalid"",""open"")"`);
+    // .xlsx export: a plain string cell, never a formula
+    const out = new ExcelJS.Workbook();
+    await out.xlsx.load((await download(estimator, '/api/catalogue.xlsx')) as unknown as ArrayBuffer);
+    const sheet = out.worksheets[0]!;
+    let found: ExcelJS.CellValue | undefined;
+    sheet.eachRow((row) => {
+      if (row.getCell(col('code')).value === code) found = row.getCell(col('description')).value;
+    });
+    expect(found).toBe(injected);
+    // and the neutralised CSV comes back as the original text
+    const again = (await upload(estimator, 'again.csv', csv, 'text/csv').expect(200)).body as { updated: number };
+    expect(again.updated).toBe(0);
+    expect((await estimator.agent.get(`/api/catalogue/items/${item.id}`).expect(200)).body.description).toBe(injected);
   });
 
   it('refuses an empty file, a file that is not a spreadsheet, missing columns, and a wrong file type', async () => {

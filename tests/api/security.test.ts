@@ -198,6 +198,14 @@ describe('another organisation’s data', () => {
     expect(jobs.map((j) => j.id)).not.toContain(other.job.id);
   });
 
+  it('answers 404 for the other organisation’s panel even while that shop’s own reads keep it in memory', async () => {
+    const theirs = await signIn(other.user.email, other.password);
+    for (let i = 0; i < 3; i++) expect((await theirs.agent.get(`/api/panels/${other.panel.id}`).expect(200)).body.name).toBe('Other MCC');
+    const r = await admin.agent.get(`/api/panels/${other.panel.id}`);
+    expect(r.status).toBe(404);
+    expect(r.text).not.toContain('Other MCC');
+  });
+
   it('refuses to change the other organisation’s job, panel and motor, and changes nothing', async () => {
     const before = JSON.stringify([await Job.findByPk(other.job.id), await Panel.findByPk(other.panel.id), await Load.findByPk(other.load.id)]);
     const attempts: Array<[string, Promise<request.Response>]> = [

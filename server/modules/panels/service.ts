@@ -1,6 +1,7 @@
 import { gzipSync } from 'node:zlib';
 import type { Transaction } from 'sequelize';
 import { db } from '../../db/sequelize';
+import { changeFeed } from '../../db/change-feed';
 import type { CurrentUser } from '../../../shared/schemas/auth';
 import type { CommentView, LoadView, PanelDetail, PanelState } from '../../../shared/schemas/panel';
 import type { LoadInput } from '../../../shared/schemas/load';
@@ -46,28 +47,40 @@ export async function requirePanel(actor: CurrentUser, id: number, transaction?:
 }
 
 /**
- * The panel page's data as JSON text, kept per process and keyed by the panel's and the job's
- * updated_at (every change to motors, overrides, comments, state or job touches one of them), so that
- * a repeated read costs one query and no serialisation. The key is read from the database on every
- * call, so several server instances stay correct.
+ * The panel page's data as JSON text, kept per process and keyed by the panel's change stamp (its
+ * version and the panel's and job's updated_at: every change to motors, overrides, comments, state or
+ * job touches one of them). While the change feed is live and no panel or job has changed since the
+ * stamp was read, a repeated read costs no query; otherwise one stamp query, and a rebuild only if
+ * the stamp moved. A notification from any instance's change moves the feed's token.
  */
 const detailCache = new Map<number, PanelDetailBody>();
+const DETAIL_KINDS = ['p', 'j'] as const;
 
 export interface PanelDetailBody {
   key: string;
   json: Buffer;
   /** the same JSON gzipped once, for clients that accept it (every browser) */
   gzip: Buffer;
+  organisationId: number;
+  /** the change feed's token when the stamp was last read */
+  verified: number | null;
 }
 const DETAIL_CACHE_MAX = 500;
 
 export async function panelDetailJson(actor: CurrentUser, id: number): Promise<PanelDetailBody> {
+  const feed = changeFeed();
+  const hit = detailCache.get(id);
+  const mine = hit && hit.organisationId === actor.organisationId ? hit : undefined;
+  if (mine && feed.isCurrent(mine.verified, DETAIL_KINDS)) return mine;
+  const token = feed.token(DETAIL_KINDS);
   const key = await repo.panelStamp(actor.organisationId, id);
   if (!key) throw new NotFoundError('Panel');
-  const hit = detailCache.get(id);
-  if (hit && hit.key === key) return hit;
+  if (mine && mine.key === key) {
+    mine.verified = token;
+    return mine;
+  }
   const json = Buffer.from(JSON.stringify(await panelDetailOf(await requirePanel(actor, id))));
-  const entry = { key, json, gzip: gzipSync(json) };
+  const entry: PanelDetailBody = { key, json, gzip: gzipSync(json), organisationId: actor.organisationId, verified: token };
   if (detailCache.size >= DETAIL_CACHE_MAX) detailCache.delete(detailCache.keys().next().value as number);
   detailCache.set(id, entry);
   return entry;

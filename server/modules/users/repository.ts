@@ -1,5 +1,6 @@
 import { Op, QueryTypes } from 'sequelize';
 import { db } from '../../db/sequelize';
+import { changeFeed } from '../../db/change-feed';
 import { User } from '../../db/models/user';
 import { Organisation } from '../../db/models/organisation';
 
@@ -19,23 +20,25 @@ export async function findUserByEmail(email: string) {
 }
 
 /**
- * The signed-in user of a request, kept for a few seconds per process: every signed-in request needs
- * it. A change through this process forgets it at once; another server instance sees a role change
- * or a deactivation within USER_CACHE_MS.
+ * The signed-in user of a request, kept per process: every signed-in request needs it. An entry is
+ * served only while the change feed is live and no user row has changed since it was read (any
+ * instance's change arrives as a notification); a change through this process forgets it at once.
  */
-export const USER_CACHE_MS = 5000;
-const userCache = new Map<number, { at: number; row: UserRow | null }>();
+const USER_KINDS = ['u'] as const;
+const userCache = new Map<number, { token: number | null; row: UserRow | null }>();
 
 export function forgetUser(id: number) {
   userCache.delete(id);
 }
 
 export async function findSignedInUser(id: number): Promise<UserRow | null> {
+  const feed = changeFeed();
   const hit = userCache.get(id);
-  if (hit && Date.now() - hit.at < USER_CACHE_MS) return hit.row;
+  if (hit && feed.isCurrent(hit.token, USER_KINDS)) return hit.row;
+  const token = feed.token(USER_KINDS);
   const row = await findUserById(id);
   if (userCache.size > 10_000) userCache.clear();
-  userCache.set(id, { at: Date.now(), row });
+  userCache.set(id, { token, row });
   return row;
 }
 
