@@ -3,6 +3,7 @@ import type { Server } from 'node:http';
 import { createApp } from './app';
 import { prepareDatabase } from './boot';
 import { closeDatabase } from './db/sequelize';
+import type { ChangeFeed } from './db/change-feed';
 import { env } from './config/env';
 import { startFakeSmtp } from './modules/mail/fake-smtp';
 import { DEMO_USERS } from './db/seeders/demo';
@@ -30,6 +31,7 @@ export async function startServer(databaseUrl: string): Promise<Server> {
     console.log(`\n${signal}: closing`);
     server.close(async () => {
       smtp?.close(() => undefined);
+      await (app.locals.changeFeed as ChangeFeed).stop();
       await closeDatabase();
       process.exit(0);
     });

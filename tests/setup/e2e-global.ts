@@ -55,6 +55,7 @@ export default async function setup(project: TestProject) {
     await new Promise<void>((resolve) => server.close(() => resolve()));
     server.closeAllConnections?.();
     await new Promise<void>((resolve) => smtp.close(() => resolve()));
+    await (app.locals.changeFeed as { stop(): Promise<void> }).stop();
     await (app.locals.sessionPool as { end(): Promise<void> }).end();
     await closeDatabase();
     await dropDatabase(admin, name).catch(() => undefined);
