@@ -3,6 +3,7 @@
 // where nothing fits, an unmatched line stating the ratings it needs — never a guess.
 // Pure TypeScript: no Node or DOM imports.
 import type { LoadSelection, PanelRollup, StarterType } from '../schemas/selection';
+import { relayOf } from './overload';
 import {
   CATEGORIES,
   CATEGORY_LABELS,
@@ -611,11 +612,11 @@ export function buildBom(input: BuildBomInput): BuildBomResult {
       overloadBuiltIn = true;
     }
 
-    // Overload relay(s): dial set at nameplate FLA (wye-delta: FLA/√3 in the delta leg; part-winding: FLA/2 per winding) — common practice
+    // Overload relay(s): dial set at the current the relay carries (the selection's overload.relay:
+    // wye-delta FLA/√3 in the delta windings, common practice; part-winding FLA/2 per half-winding, NEC 430.4)
     if (!overloadBuiltIn && t !== 'dc-drive' && t !== 'dc-armature-resistance') {
-      const setting = round2(t === 'wye-delta' ? s.flaAmps / Math.sqrt(3) : t === 'part-winding' ? s.flaAmps / 2 : s.flaAmps);
-      const qty = t === 'two-speed' || t === 'part-winding' ? 2 : 1;
-      b.add(tag, { category: 'overload-relay', settingAmps: Math.min(setting, s.overload.maxSettingAmps), tripClass: s.overload.tripClass, ...(s.relays.phaseLossByOverload ? { detectsPhaseLoss: true } : {}) }, qty);
+      const relay = relayOf(s);
+      b.add(tag, { category: 'overload-relay', settingAmps: Math.min(relay.settingAmps, relay.maxAmps), tripClass: s.overload.tripClass, ...(s.relays.phaseLossByOverload ? { detectsPhaseLoss: true } : {}) }, relay.count);
     }
 
     // Branch short-circuit and ground-fault protection

@@ -4,6 +4,7 @@
 // (430.32(C) permits 140 % / 130 % where the motor will not start: an override, not a default.)
 
 import { nec, type CodeEdition } from '../standards/code-edition';
+import type { LoadSelection, OverloadRelay } from '../schemas/selection';
 
 export interface OverloadResult {
   maxSettingAmps: number;
@@ -28,4 +29,64 @@ export function overloadMaxSetting(input: { flaAmps: number; serviceFactor: numb
     basis: nec(edition, '430.32(A)(1)'),
     why,
   };
+}
+
+const round2 = (x: number) => Math.round(x * 100) / 100;
+
+/**
+ * Where the relay sits changes the current it sees:
+ * - wye-delta (star-delta) starter: the relay is normally wired in the motor leads of the delta
+ *   windings, so it carries the phase current, FLA/√3 (common practice; the starter maker's wiring
+ *   diagram governs: a relay in the incoming line is set at the full FLA);
+ * - standard part-winding start: each half-winding has its own relay with a trip current one-half of
+ *   that of 430.32 (NEC 430.4);
+ * - every other starter: one relay carrying the line current.
+ */
+export function overloadRelay(input: { flaAmps: number; maxSettingAmps: number; starterType: string }, edition: CodeEdition): OverloadRelay {
+  const { flaAmps, maxSettingAmps, starterType } = input;
+  if (starterType === 'wye-delta') {
+    const share = 1 / Math.sqrt(3);
+    return {
+      share,
+      count: 1,
+      settingAmps: round2(flaAmps * share),
+      maxAmps: round2(maxSettingAmps * share),
+      note: 'relay in the motor leads of the delta windings: it carries the phase current, FLA/√3 (set at the full FLA if the starter maker puts it in the incoming line)',
+      basis: `${nec(edition, '430.32(A)(1)')} limit × 1/√3; relay position: common practice, starter maker's diagram governs`,
+    };
+  }
+  if (starterType === 'part-winding') {
+    return {
+      share: 0.5,
+      count: 2,
+      settingAmps: round2(flaAmps / 2),
+      maxAmps: round2(maxSettingAmps / 2),
+      note: 'one relay per half-winding, each with one-half the trip current of 430.32',
+      basis: nec(edition, '430.4'),
+    };
+  }
+  return { share: 1, count: starterType === 'two-speed' ? 2 : 1, settingAmps: round2(flaAmps), maxAmps: round2(maxSettingAmps), note: null, basis: nec(edition, '430.32(A)(1)') };
+}
+
+/**
+ * The relay of a selection: the stored one, or for a selection stored before overload.relay existed,
+ * the same rule applied to its starter type (the edition is read from the overload's basis).
+ */
+export function relayOf(s: Pick<LoadSelection, 'flaAmps' | 'overload' | 'starter'>): OverloadRelay {
+  if (s.overload.relay) return s.overload.relay;
+  const edition: CodeEdition = /NEC 2020\b/.test(s.overload.basis) ? '2020' : '2023';
+  return overloadRelay({ flaAmps: s.flaAmps, maxSettingAmps: s.overload.maxSettingAmps, starterType: s.starter.type }, edition);
+}
+
+/**
+ * The relay as wired, in words, when it differs from one relay on the line current
+ * ("1 relay in the delta windings: set 17.9 A, max 22.37 A each"); null otherwise or when the drive
+ * provides the overload.
+ */
+export function relayWiringText(s: Pick<LoadSelection, 'flaAmps' | 'overload' | 'starter'>): string | null {
+  if (s.overload.providedByDrive) return null;
+  const relay = relayOf(s);
+  if (relay.share === 1) return null;
+  const where = relay.share === 0.5 ? 'one per half-winding' : 'in the delta windings';
+  return `${relay.count} relay${relay.count > 1 ? 's' : ''} ${where}: set ${relay.settingAmps} A, max ${relay.maxAmps} A each`;
 }

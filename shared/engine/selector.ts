@@ -15,7 +15,7 @@ import { feederRollup, type FeederBranch } from '../calc/feeder';
 import { fullLoadCurrent, WATTS_PER_HP, type FlcResult } from '../calc/flc';
 import { lockedRotorCurrent } from '../calc/locked-rotor';
 import { nemaStarterSize } from '../calc/nema-starter-size';
-import { overloadMaxSetting } from '../calc/overload';
+import { overloadMaxSetting, overloadRelay } from '../calc/overload';
 import { branchProtection, motorKind } from '../calc/scpd';
 import { synchronousRpm } from '../calc/synchronous-speed';
 import { LoadSchema, SelectionInputSchema, SupplySchema, type Load, type LoadInput, type SelectionInput, type Supply, type SupplyInput } from '../schemas/load';
@@ -269,6 +269,10 @@ export function createSelector(ruleFiles: ReadonlyArray<RuleFileInput>, options:
     if (ol && haveFlc) {
       trace.push({ ruleId: 'sizing.overload', decision: `overload.maxSettingAmps = ${ol.maxSettingAmps} (${ol.maxPercent} % of ${fla} A)`, reason: ol.why, basis: ol.basis });
     }
+    const relay = ol && haveFlc ? overloadRelay({ flaAmps: fla, maxSettingAmps: ol.maxSettingAmps, starterType }, edition) : null;
+    if (relay && relay.share !== 1) {
+      trace.push({ ruleId: 'sizing.overload-relay', decision: `overload.relay: ${relay.count} × set ${relay.settingAmps} A, ≤ ${relay.maxAmps} A`, reason: relay.note ?? '', basis: relay.basis });
+    }
 
     let scpd = haveFlc
       ? step('branch protection', () => branchProtection({ flcAmps, type: load.scpdType, motor: motorKind(load), override: load.scpdOverride }, edition))
@@ -365,6 +369,7 @@ export function createSelector(ruleFiles: ReadonlyArray<RuleFileInput>, options:
         tripClass: decisions['overload.tripClass'] as 10 | 20 | 30,
         providedByDrive: decisions['overload.providedByDrive'] ?? false,
         basis: `${ol?.basis ?? nec(edition, '430.32(A)(1)')}; trip class: ${ruleBasis('overload.tripClass')}`,
+        ...(relay ? { relay } : {}),
       },
       scpd: scpd
         ? { type: scpd.type, maxPercent: scpd.maxPercent, ratingAmps: scpd.ratingAmps, computedMaxAmps: scpd.computedMaxAmps, basis: scpd.basis }

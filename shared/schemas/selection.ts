@@ -40,6 +40,20 @@ export interface AssumedInput {
   note: string;
 }
 
+/** The overload relay as wired: the current it carries at full load, its dial setting and its limit. */
+export interface OverloadRelay {
+  /** the share of the motor's line current the relay carries: 1, 1/√3 or 1/2 */
+  share: number;
+  /** relays per motor */
+  count: number;
+  /** dial setting at full load: nameplate FLA × share */
+  settingAmps: number;
+  /** the 430.32(A)(1) limit as the relay sees it: maximum setting × share */
+  maxAmps: number;
+  note: string | null;
+  basis: string;
+}
+
 export interface LoadSelection {
   tag: string;
   description?: string;
@@ -75,6 +89,8 @@ export interface LoadSelection {
     /** where a listed drive's electronic overload serves (430.124) */
     providedByDrive: boolean;
     basis: string;
+    /** the relay as wired: share of line current, setting and limit per relay (absent in selections stored before it existed) */
+    relay?: OverloadRelay;
   };
   scpd: {
     type: ScpdType;

@@ -10,6 +10,7 @@ import type { HeatResult } from '../../../shared/calc/heat';
 import type { ControlPowerResult } from '../../../shared/calc/control-power';
 import type { NameplateResult } from '../../../shared/calc/nameplate';
 import type { ConnectionCard, LineName } from '../../../shared/calc/connections';
+import { relayOf, relayWiringText } from '../../../shared/calc/overload';
 
 export interface SubmittalData {
   job: {
@@ -163,7 +164,7 @@ export function oneLineText(s: LoadSelection): string {
   if (s.starter.type === 'VFD' || s.starter.type === 'dc-drive') parts.push(s.vfd ? `drive >= ${s.vfd.minOutputAmps} A` : 'drive');
   else if (s.starter.type === 'RVSS') parts.push(`soft starter${s.softStarter ? ` >= ${s.softStarter.minAmps} A${s.softStarter.bypass ? ' with bypass' : ''}` : ''}`);
   else parts.push(`${s.starter.reversingContactors ? 'reversing contactors' : 'contactor'} (${starterText(s)})`);
-  if (!s.overload.providedByDrive) parts.push(`overload class ${s.overload.tripClass}, max ${s.overload.maxSettingAmps} A`);
+  if (!s.overload.providedByDrive) parts.push(`overload class ${s.overload.tripClass}, ${relayWiringText(s) ?? `max ${s.overload.maxSettingAmps} A`}`);
   if (s.relays.phaseReversal) parts.push('phase-sequence relay (47)');
   if (s.relays.phaseLoss && !s.relays.phaseLossByOverload) parts.push('phase-loss relay');
   parts.push(`motor ${s.tag}${s.hp !== null ? ` ${s.hp} hp` : ''} ${s.volts} V`);
@@ -252,7 +253,13 @@ export function writeSubmittalPdf(
         ['Full-load current', `${fmt(s.flcAmps)} A`, s.flcSource],
         ['Starter', starterText(s), s.starter.basis],
         ['Branch SCPD', `${s.scpd.ratingAmps} A ${SCPD_WORDS[s.scpd.type]} (max ${s.scpd.maxPercent} % = ${fmt(s.scpd.computedMaxAmps)} A)`, s.scpd.basis],
-        ['Overload', s.overload.providedByDrive ? 'drive electronic overload' : `class ${s.overload.tripClass}, max ${fmt(s.overload.maxSettingAmps, 2)} A (${s.overload.maxPercent} %)`, s.overload.basis],
+        [
+          'Overload',
+          s.overload.providedByDrive
+            ? 'drive electronic overload'
+            : `class ${s.overload.tripClass}, max ${fmt(s.overload.maxSettingAmps, 2)} A (${s.overload.maxPercent} %)${relayWiringText(s) ? `; ${relayWiringText(s)}` : ''}`,
+          relayWiringText(s) ? `${s.overload.basis}; relay: ${relayOf(s).basis}` : s.overload.basis,
+        ],
         ['Conductor', `${s.conductor.size} ${s.conductor.material}, ${s.conductor.ampacity} A (min ${fmt(s.conductor.minAmpacity)} A)`, s.conductor.basis],
         ['Disconnect', `>= ${fmt(s.disconnect.minAmps)} A${s.disconnect.minHp !== null ? `, >= ${s.disconnect.minHp} hp` : ''}`, s.disconnect.basis],
       ],

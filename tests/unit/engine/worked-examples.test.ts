@@ -151,3 +151,30 @@ describe('panel roll-up through selectPanel (NEC 2023 430.24, 430.62(A))', () =>
     expect(out.panel.notes?.some((n) => n.startsWith('SP:'))).toBe(true);
   });
 });
+
+describe('the overload relay as wired', () => {
+  it('wye-delta: one relay in the delta windings, set at FLA/√3 with the 430.32 limit scaled alike (common practice)', async () => {
+    // 100 hp 460 V six-lead delta-run motor, nameplate 118 A, SF 1.15
+    const r = await selector.selectLoad(motor({ tag: 'C-401', hp: 100, volts: 460, fla: 118, serviceFactor: 1.15, leads: 6, connection: 'delta', startingLimit: 'reduced-inrush', starterPreference: 'wye-delta' }), supply480);
+    expect(r.starter.type).toBe('wye-delta');
+    expect(r.overload.maxSettingAmps).toBe(147.5); // NEC 2023 430.32(A)(1): 125 % × 118 A
+    // phase current in a delta winding = line current / √3: 118 / 1.732 = 68.13 A; 147.5 / 1.732 = 85.16 A
+    expect(r.overload.relay).toMatchObject({ count: 1, settingAmps: 68.13, maxAmps: 85.16 });
+    expect(r.overload.relay!.share).toBeCloseTo(0.57735, 5);
+    expect(r.overload.relay!.basis).toMatch(/common practice/);
+    expect(r.trace.some((t) => t.ruleId === 'sizing.overload-relay')).toBe(true);
+  });
+
+  it('part-winding: a relay per half-winding with one-half the trip current (NEC 2023 430.4)', async () => {
+    // 25 hp 230 V nine-lead wye motor started part-winding, nameplate 60 A, SF 1.0
+    const r = await selector.selectLoad(motor({ tag: 'F-3', hp: 25, volts: 230, fla: 60, serviceFactor: 1.0, leads: 9, connection: 'wye', startingLimit: 'reduced-inrush', starterPreference: 'part-winding' }), supply240);
+    expect(r.starter.type).toBe('part-winding');
+    expect(r.overload.maxSettingAmps).toBe(69); // 430.32(A)(1): 115 % × 60 A
+    expect(r.overload.relay).toMatchObject({ share: 0.5, count: 2, settingAmps: 30, maxAmps: 34.5, basis: 'NEC 2023 430.4' });
+  });
+
+  it('an across-the-line starter: one relay on the line current', async () => {
+    const r = await selector.selectLoad(motor({ hp: 25, volts: 460, fla: 31, serviceFactor: 1.15 }), supply480);
+    expect(r.overload.relay).toMatchObject({ share: 1, count: 1, settingAmps: 31, maxAmps: 38.75 });
+  });
+});

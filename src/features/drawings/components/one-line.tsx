@@ -1,4 +1,5 @@
 import type { LoadSelection } from '../../../../shared/schemas/selection';
+import { relayWiringText } from '../../../../shared/calc/overload';
 
 const SLATE = '#334155';
 const COPPER = '#b87333';
@@ -87,7 +88,7 @@ export function oneLineElements(s: LoadSelection): OneLineElement[] {
     out.push({
       kind: 'overload',
       label: `Overload, class ${s.overload.tripClass}`,
-      detail: `max ${s.overload.maxSettingAmps} A (${s.overload.maxPercent} % FLA)`,
+      detail: relayWiringText(s) ?? `max ${s.overload.maxSettingAmps} A (${s.overload.maxPercent} % FLA)`,
     });
   }
   const relays: string[] = [];

@@ -1,4 +1,5 @@
 import type { LoadSelection } from '../../../../shared/schemas/selection';
+import { relayOf, relayWiringText } from '../../../../shared/calc/overload';
 
 const SCPD_SHORT: Record<string, string> = {
   'inverse-time-breaker': 'Inverse-time CB',
@@ -25,11 +26,20 @@ export function relayLabel(s: LoadSelection) {
 /** The key results of one motor's selection, with reasons and citations: the live preview and the review card. */
 export function SelectionSummary({ selection, overridden = [] }: { selection: LoadSelection; overridden?: string[] }) {
   const s = selection;
+  const wiring = relayWiringText(s);
   const mark = (field: string) => (overridden.includes(field) ? <span className="ml-1 rounded bg-copper-100 px-1 text-[10px] font-bold text-copper-700" title="Overridden by the designer">OVERRIDE</span> : null);
   const rows: Array<[string, React.ReactNode, string]> = [
     ['Full-load current (table)', `${s.flcAmps} A`, s.flcSource],
     ['Starter', <>{starterLabel(s)}{mark('starter.type')}{mark('starter.nemaSize')}{s.starter.reversingContactors ? ' · reversing pair, mech. + elec. interlock' : ''}</>, s.starter.basis],
-    ['Overload', <>{s.overload.providedByDrive ? 'by the drive' : `≤ ${s.overload.maxSettingAmps} A (${s.overload.maxPercent} %)`}, class {s.overload.tripClass}{mark('overload.tripClass')}</>, s.overload.basis],
+    [
+      'Overload',
+      <>
+        {s.overload.providedByDrive ? 'by the drive' : `≤ ${s.overload.maxSettingAmps} A (${s.overload.maxPercent} %)`}, class {s.overload.tripClass}
+        {mark('overload.tripClass')}
+        {wiring ? <span className="block text-ink-soft" data-testid="overload-relay">{wiring}</span> : null}
+      </>,
+      wiring ? `${s.overload.basis}; relay: ${relayOf(s).basis}` : s.overload.basis,
+    ],
     ['Branch protection', <>{scpdLabel(s.scpd.type)} {s.scpd.ratingAmps} A{mark('scpd.ratingAmps')}{mark('scpd.type')} <span className="text-ink-soft">(max {s.scpd.maxPercent} % = {s.scpd.computedMaxAmps} A)</span></>, s.scpd.basis],
     ['Conductors', <>{s.conductor.size} {s.conductor.material === 'cu' ? 'Cu' : 'Al'} {s.conductor.tempRatingC} °C ({s.conductor.ampacity} A ≥ {s.conductor.minAmpacity} A){mark('conductor.size')}</>, s.conductor.basis],
     ['Disconnect', `≥ ${s.disconnect.minAmps} A${s.disconnect.minHp ? `, ≥ ${s.disconnect.minHp} hp` : ''}`, s.disconnect.basis],
