@@ -33,6 +33,7 @@ export class ChangeFeed {
   /** Connects and listens; resolves once listening (or once the first attempt failed: it retries). */
   async start(url: string): Promise<void> {
     if (!this.stopped && this.url === url) return;
+    if (!this.stopped) await this.stop(); // another database: its notifications are the ones that count
     this.url = url;
     this.stopped = false;
     await this.connect();

@@ -96,6 +96,9 @@ describe('designer → engineer → estimator', () => {
     await page.getByLabel('Sign-off comment').fill('Change SP-1 to fuses, then resubmit');
     await page.getByRole('button', { name: '↩ Return to designer' }).click();
     await page.locator('[data-state="returned"]').first().waitFor();
+    // returned: the next move is the panel builder's, and the engineer is told so instead of an empty form
+    await page.getByTestId('sign-off-waiting').waitFor();
+    expect(await page.getByLabel('Sign-off comment').count()).toBe(0);
   });
 
   it('designer fixes the motor and resubmits; engineer signs off R0', async () => {

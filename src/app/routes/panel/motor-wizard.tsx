@@ -68,6 +68,20 @@ function firstStepWithError(errors: FieldErrors): number {
   return i < 0 ? 0 : i;
 }
 
+/** Field names as the wizard labels them, for the preview's "what is missing" line. */
+const PREVIEW_LABELS: Record<string, string> = {
+  tag: 'tag', hp: 'horsepower or kW', kw: 'horsepower or kW', volts: 'rated voltage', fla: 'nameplate FLA', serviceFactor: 'service factor', supply: 'supply',
+};
+
+function missingAnswers(issues: ReadonlyArray<{ path: PropertyKey[]; message: string; code?: string }>): string {
+  const parts = issues.slice(0, 3).map((i) => {
+    const key = String(i.path[0] ?? '');
+    const name = PREVIEW_LABELS[key] ?? key.replace(/([A-Z])/g, ' $1').toLowerCase();
+    return /received undefined/.test(i.message) ? `${name} needed` : `${name}: ${i.message.charAt(0).toLowerCase()}${i.message.slice(1)}`;
+  });
+  return [...new Set(parts)].join('; ') + (issues.length > 3 ? ' …' : '');
+}
+
 export function Component() {
   const { panelId, loadId, jobId } = useParams();
   const navigate = useNavigate();
@@ -93,7 +107,7 @@ export function Component() {
     const t = setTimeout(() => {
       const parsed = LoadSchema.safeParse(clean(values));
       if (!parsed.success) {
-        setPreview((x) => ({ sel: x.sel, error: `Complete the answers to see the selection (${parsed.error.issues[0]?.path.join('.')}: ${parsed.error.issues[0]?.message})` }));
+        setPreview((x) => ({ sel: x.sel, error: `Complete the answers to see the selection: ${missingAnswers(parsed.error.issues)}` }));
         return;
       }
       browserSelector((p.job.codeEdition === '2020' ? '2020' : '2023') as CodeEdition)

@@ -68,6 +68,8 @@ export function Component() {
   if (!p) return null;
   const isDesigner = hasRole(me, 'designer', 'admin');
   const isEngineer = hasRole(me, 'engineer');
+  const canSubmit = isDesigner && (p.status === 'draft' || p.status === 'returned');
+  const canReview = isEngineer && p.status === 'in_review';
   const run = (action: 'submit' | 'return' | 'approve') => act.mutate({ action, version: p.version, comment }, { onSuccess: () => setComment('') });
   const a = from ?? (revs.length > 1 ? revs[revs.length - 2].number : null);
   const b = to ?? (revs.length > 1 ? revs[revs.length - 1].number : null);
@@ -77,16 +79,21 @@ export function Component() {
         <section className="rounded border border-line bg-panel p-4">
           <h2 className="mb-2 flex items-center gap-2 text-lg font-semibold">Sign-off <SignOffState state={p.status} /></h2>
           <p className="mb-3 text-sm text-ink-soft">Draft → In review → Signed off (a frozen revision) or Returned. Changing a signed-off panel opens a new draft.</p>
-          <textarea aria-label="Sign-off comment" className={inputClass} rows={3} placeholder={p.status === 'in_review' && isEngineer ? 'What must change (required to return)' : 'Note (optional)'} value={comment} onChange={(e) => setComment(e.target.value)} />
+          {canSubmit || canReview ? (
+            <textarea aria-label="Sign-off comment" className={inputClass} rows={3} placeholder={canReview ? 'What must change (required to return)' : 'Note (optional)'} value={comment} onChange={(e) => setComment(e.target.value)} />
+          ) : null}
           <div className="mt-2 flex flex-wrap gap-2">
-            {isDesigner && (p.status === 'draft' || p.status === 'returned') ? <Button onClick={() => run('submit')} disabled={act.isPending}>Submit for sign-off</Button> : null}
-            {isEngineer && p.status === 'in_review' ? (
+            {canSubmit ? <Button onClick={() => run('submit')} disabled={act.isPending}>Submit for sign-off</Button> : null}
+            {canReview ? (
               <>
                 <Button onClick={() => run('approve')} disabled={act.isPending}>✔ Sign off as R{p.revisionNumber === null ? 0 : p.revisionNumber + 1}</Button>
                 <Button variant="danger" onClick={() => run('return')} disabled={act.isPending || !comment.trim()}>↩ Return to designer</Button>
               </>
             ) : null}
             {p.status === 'in_review' && !isEngineer ? <p className="text-sm text-state-review">◔ Waiting for an engineer.</p> : null}
+            {(p.status === 'draft' || p.status === 'returned') && !isDesigner ? (
+              <p className="text-sm text-ink-soft" data-testid="sign-off-waiting">◔ Waiting for a panel builder to submit this panel for sign-off.</p>
+            ) : null}
           </div>
           {act.error ? <div className="mt-2"><ErrorNote error={act.error} /></div> : null}
           <div className="mt-3"><Caution compact /></div>
