@@ -10,8 +10,8 @@
 // connection (notifications may have been missed). While the feed is down, caches ask the database.
 import pg from 'pg';
 
-/** s: session (payload md5 of its id), u: user, j: job, p: panel */
-export type ChangeKind = 's' | 'u' | 'j' | 'p';
+/** s: session (payload md5 of its id), u: user, j: job, p: panel, c: catalogue (payload *) */
+export type ChangeKind = 's' | 'u' | 'j' | 'p' | 'c';
 type Listener = (kind: ChangeKind, key: string) => void;
 
 const CHANNEL = 'pw_change';
@@ -22,7 +22,7 @@ export class ChangeFeed {
   private stopped = true;
   private retryTimer: NodeJS.Timeout | null = null;
   private retryMs = 250;
-  private readonly counters: Record<ChangeKind, number> = { s: 0, u: 0, j: 0, p: 0 };
+  private readonly counters: Record<ChangeKind, number> = { s: 0, u: 0, j: 0, p: 0, c: 0 };
   private generation = 0;
   private readonly listeners = new Set<Listener>();
   /** true while the LISTEN connection is up */

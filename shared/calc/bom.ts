@@ -464,7 +464,7 @@ export interface BuildBomInput {
   panel: PanelRollup;
   supply: { volts: number; phases: number; hz: number };
   enclosureType: string;
-  catalogue: CatalogueItem[];
+  catalogue: readonly CatalogueItem[];
   labourUnits: LabourUnit[];
   /** control circuit voltage, V (default 120) */
   controlVolts?: number;
@@ -767,7 +767,7 @@ export interface CoolingInput {
   mounting: 'wall' | 'free-standing';
   ambientC: number;
   maxInternalC: number;
-  catalogue: CatalogueItem[] | CatalogueIndex;
+  catalogue: readonly CatalogueItem[] | CatalogueIndex;
   labourUnits: LabourUnit[];
   bucket?: string;
 }

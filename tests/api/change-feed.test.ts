@@ -12,6 +12,7 @@ import { changeFeed, type ChangeKind } from '../../server/db/change-feed';
 import { User } from '../../server/db/models/user';
 import { Organisation } from '../../server/db/models/organisation';
 import { DEMO_ORGANISATION } from '../../server/db/seeders/demo';
+import { catalogueFor } from '../../server/modules/catalogue/repository';
 
 const uniq = () => `CF-${Date.now().toString(36)}-${Math.floor(Math.random() * 1e5)}`;
 let other: pg.Client; // "another instance": its own connection, not this process's pools
@@ -167,6 +168,38 @@ describe('a change made by another instance', () => {
     expect(await quietRead(s)).toEqual([]); // the person is now held in memory
     await other.query('update users set active = false where id = $1', [u.id]);
     await until('401 for the deactivated person', async () => ((await getPanel(s)).status === 401 ? true : undefined));
+  });
+});
+
+describe('the catalogue', () => {
+  it('is read once and then kept, frozen, until a catalogue statement runs anywhere', async () => {
+    const org = (await Organisation.findOne({ where: { name: DEMO_ORGANISATION } }))!;
+    let items = await catalogueFor(org.id);
+    for (let i = 0; i < 10 && (await queriesDuring(() => catalogueFor(org.id))).length > 0; i++);
+    expect(await queriesDuring(async () => (items = await catalogueFor(org.id)))).toEqual([]);
+    expect(items.length).toBeGreaterThanOrEqual(758); // the seed catalogue
+    expect(Object.isFrozen(items) && Object.isFrozen(items[0]) && Object.isFrozen(items[0]!.ratings)).toBe(true);
+
+    // a price changed by another instance
+    const first = items[0]!;
+    await other.query('update catalogue_items set unit_cost = unit_cost + 1 where organisation_id = $1 and code = $2', [org.id, first.code]);
+    const changed = await until('the new price', async () => {
+      const now = (await catalogueFor(org.id)).find((c) => c.code === first.code)!;
+      return now.unitCost === first.unitCost + 1 ? now : undefined;
+    });
+    expect(changed.value.unitCost).toBe(first.unitCost + 1);
+
+    // an item added by another instance
+    const code = `PW-CF-${uniq()}`;
+    await other.query(
+      `insert into catalogue_items (organisation_id, code, description, category, unit, ratings, sccr_ka, heat_loss_w, unit_cost, labour_hours, terminations, lead_time_days, active, version, created_at, updated_at)
+       select organisation_id, $2, description, category, unit, ratings, sccr_ka, heat_loss_w, unit_cost, labour_hours, terminations, lead_time_days, active, 0, now(), now()
+         from catalogue_items where organisation_id = $1 and code = $3`,
+      [org.id, code, first.code],
+    );
+    await until('the new item', async () => ((await catalogueFor(org.id)).some((c) => c.code === code) ? true : undefined));
+    await other.query('update catalogue_items set unit_cost = unit_cost - 1 where organisation_id = $1 and code = $2', [org.id, first.code]);
+    await other.query('delete from catalogue_items where organisation_id = $1 and code = $2', [org.id, code]);
   });
 });
 

@@ -191,6 +191,9 @@ describe('queries of the checks', () => {
     const hook = (_options: unknown, query: unknown) => {
       if (!/from users u join organisations o/.test((query as { sql?: string }).sql ?? '')) count++;
     };
+    // first reads: the catalogue is then held in memory for both (it is the same for every panel)
+    await engineer.agent.get(`/api/panels/${panelId}/checks`).expect(200);
+    await engineer.agent.get(`/api/panels/${one.id}/checks`).expect(200);
     db().addHook('afterQuery', 'count-checks', hook);
     try {
       await engineer.agent.get(`/api/panels/${panelId}/checks`).expect(200);
@@ -198,7 +201,7 @@ describe('queries of the checks', () => {
       count = 0;
       await engineer.agent.get(`/api/panels/${one.id}/checks`).expect(200);
       expect(count).toBe(eight);
-      expect(eight).toBeGreaterThanOrEqual(4); // panel with job, motors, stored lines, catalogue
+      expect(eight).toBeGreaterThanOrEqual(3); // panel with job, motors, stored lines (the catalogue held in memory)
       expect(eight).toBeLessThanOrEqual(8);
     } finally {
       db().removeHook('afterQuery', 'count-checks');

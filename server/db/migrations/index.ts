@@ -3,10 +3,12 @@ import * as m0001 from './0001-foundation';
 import * as m0002 from './0002-panel-rollup';
 import * as m0003 from './0003-catalogue-fields';
 import * as m0004 from './0004-change-feed';
+import * as m0005 from './0005-catalogue-feed';
 
 export const migrations = [
   ['0001-foundation', m0001],
   ['0002-panel-rollup', m0002],
   ['0003-catalogue-fields', m0003],
   ['0004-change-feed', m0004],
+  ['0005-catalogue-feed', m0005],
 ] as const;

@@ -65,7 +65,10 @@ function ordinalKeys(lines: readonly BomLine[]): string[] {
  * to the same line (bucket, category and order), manual lines kept; a line whose part stays keeps its frozen unit cost.
  */
 export async function planBom(organisationId: number, panel: Panel & { job: Job }, old: readonly BomLine[], t?: Transaction, opts: RegenerateOptions = {}): Promise<BomLine[]> {
-  const [selections, catalogue, labourUnits] = await Promise.all([effectiveSelections(panel.id, t), catalogueFor(organisationId, t), labourUnitsFor(organisationId, t)]);
+  // one after the other: the three share the transaction's single connection
+  const selections = await effectiveSelections(panel.id, t);
+  const catalogue = await catalogueFor(organisationId, t);
+  const labourUnits = await labourUnitsFor(organisationId, t);
   const rollup = (panel.rollup ?? { feeder: { minAmpacity: 0, conductorSize: 'none', ocpdMaxAmps: 0, basis: '' }, totalFlcAmps: 0, largestMotorTag: null }) as unknown as PanelRollup;
   const built = buildBom({
     panelName: panel.name,

@@ -1,4 +1,5 @@
 import type { Transaction } from 'sequelize';
+import { changeFeed } from '../../db/change-feed';
 import { CatalogueItem as CatalogueRow } from '../../db/models/catalogue-item';
 import { LabourUnit as LabourRow } from '../../db/models/labour-unit';
 import type { CatalogueItem, LabourUnit } from '../../../shared/schemas/catalogue';
@@ -38,10 +39,26 @@ export function fromItem(organisationId: number, i: CatalogueItem) {
   };
 }
 
-/** The organisation's whole catalogue, in the shared shape (one query). */
-export async function catalogueFor(organisationId: number, transaction?: Transaction): Promise<CatalogueItem[]> {
+/**
+ * The organisation's whole catalogue, in the shared shape (one query). Outside a transaction it is
+ * kept per process while the change feed is live and no catalogue statement has run since (any
+ * instance's insert, update or delete moves the feed's token); the items are frozen, as every caller
+ * shares them. Inside a transaction it is always read, so the transaction sees its own snapshot.
+ */
+const CATALOGUE_KINDS = ['c'] as const;
+const catalogueCache = new Map<number, { token: number | null; items: readonly CatalogueItem[] }>();
+
+export async function catalogueFor(organisationId: number, transaction?: Transaction): Promise<readonly CatalogueItem[]> {
+  const feed = changeFeed();
+  if (!transaction) {
+    const hit = catalogueCache.get(organisationId);
+    if (hit && feed.isCurrent(hit.token, CATALOGUE_KINDS)) return hit.items;
+  }
+  const token = feed.token(CATALOGUE_KINDS);
   const rows = await CatalogueRow.findAll({ where: { organisationId }, order: [['category', 'ASC'], ['code', 'ASC']], transaction });
-  return rows.map(toItem);
+  const items = Object.freeze(rows.map((r) => Object.freeze({ ...toItem(r), ratings: Object.freeze({ ...toItem(r).ratings }) }) as CatalogueItem));
+  if (!transaction) catalogueCache.set(organisationId, { token, items });
+  return items;
 }
 
 export async function labourUnitsFor(organisationId: number, transaction?: Transaction): Promise<LabourUnit[]> {
