@@ -58,6 +58,7 @@ export const FACT_SCHEMAS = {
   supplyPhases: z.union([z.literal(1), z.literal(3)]),
   availableFaultKa: z.number(),
   ambientC: z.number(),
+  voltageUnbalancePercent: z.number(),
 } as const;
 
 export type FactName = keyof typeof FACT_SCHEMAS;
@@ -115,5 +116,6 @@ export function buildFacts(load: Load, supply: Supply, derived: { hp: number; fl
     supplyPhases: supply.phases,
     availableFaultKa: supply.availableFaultKa,
     ambientC: supply.ambientC,
+    voltageUnbalancePercent: supply.voltageUnbalancePercent,
   };
 }

@@ -16,10 +16,11 @@ import { fullLoadCurrent, WATTS_PER_HP, type FlcResult } from '../calc/flc';
 import { lockedRotorCurrent } from '../calc/locked-rotor';
 import { nemaStarterSize } from '../calc/nema-starter-size';
 import { overloadMaxSetting, overloadRelay } from '../calc/overload';
+import { unbalanceDerating } from '../standards/nema-mg1-voltage-unbalance';
 import { branchProtection, motorKind } from '../calc/scpd';
 import { synchronousRpm } from '../calc/synchronous-speed';
 import { LoadSchema, SelectionInputSchema, SupplySchema, type Load, type LoadInput, type SelectionInput, type Supply, type SupplyInput } from '../schemas/load';
-import type { AssumedInput, LoadSelection, SelectionOutput, StarterType, SupplyKind, TraceEntry } from '../schemas/selection';
+import type { AssumedInput, LoadSelection, SelectionOutput, StarterType, SupplyKind, TraceEntry, UnbalanceResult } from '../schemas/selection';
 import { DEFAULT_CODE_EDITION, nec, type CodeEdition } from '../standards/code-edition';
 import { enclosureType } from '../standards/nema-250-enclosure-types';
 import { DECISION_KEYS, type DecisionKey, type Decisions } from './decisions';
@@ -306,6 +307,30 @@ export function createSelector(ruleFiles: ReadonlyArray<RuleFileInput>, options:
     const disc = haveFlc ? step('disconnect', () => motorDisconnect({ flcAmps, hp: round2(hp), driveInputAmps: starterType === 'VFD' ? load.driveInputAmps : undefined }, edition)) : null;
     if (disc) trace.push({ ruleId: 'sizing.disconnect', decision: `disconnect.minAmps = ${disc.minAmps}, minHp = ${disc.minHp}`, reason: '115 % of the table FLC, horsepower rated', basis: disc.basis });
 
+    // The site's voltage unbalance: a motor on the line is derated (NEMA MG 1 14.35); behind a drive the
+    // rectifier takes it and the motor sees balanced output (common practice).
+    let unbalance: UnbalanceResult | null = null;
+    const unbalancePercent = supply.voltageUnbalancePercent;
+    if (load.supply === 'ac3' && unbalancePercent > 0) {
+      if (starterType === 'VFD') {
+        if (unbalancePercent > 1) cautions.push(`Voltage unbalance ${unbalancePercent} % at the site: the drive's input takes it (the motor sees balanced output); check the drive's limit for input unbalance and fit a line reactor where its instructions call for one (common practice).`);
+      } else {
+        const u = unbalanceDerating(unbalancePercent);
+        unbalance = { percent: u.percent, deratingFactor: u.factor, deratedHp: u.factor !== null && hp > 0 ? round2(hp * u.factor) : null, basis: u.basis };
+        trace.push({
+          ruleId: 'sizing.voltage-unbalance',
+          decision: u.factor === null ? 'unbalance.deratingFactor = none (above 5 %)' : `unbalance.deratingFactor = ${u.factor}`,
+          reason: `${u.percent} % voltage unbalance at the site`,
+          basis: u.basis,
+        });
+        if (u.factor === null) {
+          cautions.push(`Voltage unbalance ${u.percent} % at the site: operating a motor above 5 % unbalance is not recommended (NEMA MG 1 14.35); correct the supply first.`);
+        } else if (u.factor < 1) {
+          cautions.push(`Voltage unbalance ${u.percent} % at the site: the motor can deliver about ${u.factor} × its rating${unbalance.deratedHp !== null ? ` = ${unbalance.deratedHp} hp` : ''} (NEMA MG 1 14.35); check the driven load against that.`);
+        }
+      }
+    }
+
     let lockedRotorAmps: LoadSelection['lockedRotorAmps'] = null;
     if (ac && load.codeLetter !== undefined) {
       lockedRotorAmps = step('locked-rotor current', () => lockedRotorCurrent({ codeLetter: load.codeLetter as string, hp, volts: load.volts, phases }, edition));
@@ -387,6 +412,7 @@ export function createSelector(ruleFiles: ReadonlyArray<RuleFileInput>, options:
       vfd,
       softStarter,
       dc,
+      unbalance,
       cautions: [...new Set(cautions)],
       assumed,
       trace,

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import type { SupplyInput } from './load';
 
 export const CODE_EDITIONS = ['2023', '2020'] as const;
 
@@ -13,6 +14,7 @@ const jobFields = {
   supplyHz: z.coerce.number().int().refine((h) => h === 50 || h === 60, '50 or 60 Hz'),
   availableFaultKa: z.coerce.number().min(0.1, 'At least 0.1 kA').max(200, 'At most 200 kA'),
   ambientC: z.coerce.number().min(-40).max(60, 'At most 60 °C'),
+  voltageUnbalancePercent: z.coerce.number().min(0, 'At least 0 %').max(20, 'At most 20 %'),
   codeEdition: z.enum(CODE_EDITIONS),
   notes: z.string().max(5000),
 };
@@ -26,6 +28,7 @@ export const JobInputSchema = z.object({
   supplyHz: jobFields.supplyHz.default(60),
   availableFaultKa: jobFields.availableFaultKa.default(22),
   ambientC: jobFields.ambientC.default(30),
+  voltageUnbalancePercent: jobFields.voltageUnbalancePercent.default(0),
   codeEdition: jobFields.codeEdition.default('2023'),
   notes: jobFields.notes.default(''),
 });
@@ -51,6 +54,8 @@ export interface JobSummary {
   supplyHz: number;
   availableFaultKa: number;
   ambientC: number;
+  /** measured voltage unbalance at the site, % (NEMA MG 1 14.36); 0 when none is known */
+  voltageUnbalancePercent: number;
   codeEdition: string;
   notes: string;
   archivedAt: string | null;
@@ -58,4 +63,19 @@ export interface JobSummary {
   motorCount: number;
   version: number;
   updatedAt: string;
+}
+
+/** The job fields the selection engine's supply is made of. */
+export type JobSupplyFields = Pick<JobSummary, 'supplyVolts' | 'supplyPhases' | 'supplyHz' | 'availableFaultKa' | 'ambientC' | 'voltageUnbalancePercent'>;
+
+/** The selection engine's supply for a job (the server's stored selections and the browser preview alike). */
+export function jobSupply(job: JobSupplyFields): SupplyInput {
+  return {
+    volts: job.supplyVolts,
+    phases: job.supplyPhases as 1 | 3,
+    hz: job.supplyHz as 50 | 60,
+    availableFaultKa: job.availableFaultKa,
+    ambientC: job.ambientC,
+    voltageUnbalancePercent: job.voltageUnbalancePercent ?? 0,
+  };
 }

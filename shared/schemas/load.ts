@@ -12,6 +12,8 @@ export const SupplySchema = z
     hz: z.union([z.literal(50), z.literal(60)], { error: 'hz must be 50 or 60' }).default(60),
     availableFaultKa: positive('availableFaultKa').max(200, 'availableFaultKa above 200 kA is outside this product'),
     ambientC: z.number({ error: 'ambientC must be a number' }).min(-40).max(85),
+    /** Measured voltage unbalance at the site, % (NEMA MG 1 14.36); 0 when none is known. */
+    voltageUnbalancePercent: z.number({ error: 'voltageUnbalancePercent must be a number' }).min(0).max(20, 'voltageUnbalancePercent above 20 % is outside this product').default(0),
     /** Feeder conductors and protective device (optional; copper, 75 °C, inverse-time breaker by default). */
     feeder: z
       .object({

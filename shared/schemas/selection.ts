@@ -54,6 +54,16 @@ export interface OverloadRelay {
   basis: string;
 }
 
+/** A three-phase motor on the site's measured voltage unbalance (NEMA MG 1 14.35). */
+export interface UnbalanceResult {
+  percent: number;
+  /** factor on rated horsepower; null above 5 % (operation not recommended) */
+  deratingFactor: number | null;
+  /** rated horsepower × factor, when the horsepower is known */
+  deratedHp: number | null;
+  basis: string;
+}
+
 export interface LoadSelection {
   tag: string;
   description?: string;
@@ -121,6 +131,8 @@ export interface LoadSelection {
   };
   softStarter: null | { minAmps: number; insideDelta: boolean; bypass: boolean };
   dc: null | { fieldLossProtection: boolean; dynamicBraking: boolean; field: 'shunt' | 'series' | 'compound' };
+  /** the site's voltage unbalance and the derating it calls for (absent: none given, or not a three-phase motor on the line) */
+  unbalance?: UnbalanceResult | null;
   cautions: string[];
   assumed: AssumedInput[];
   trace: TraceEntry[];

@@ -123,6 +123,16 @@ describe('job backup', () => {
     expect(second.body.number).toBe('J-2041-copy-2');
   });
 
+  it('reads a backup written before the job carried its voltage unbalance (0 %), and keeps a given one', async () => {
+    const first = (await designer.agent.get(`/api/jobs/${demoJobId}/export`).expect(200)).body as JobBackup;
+    const { voltageUnbalancePercent: _dropped, ...olderJob } = first.job;
+    const older = await send(designer, 'post', '/api/jobs/import', { ...first, job: olderJob }).expect(201);
+    expect((await designer.agent.get(`/api/jobs/${older.body.id}`).expect(200)).body.voltageUnbalancePercent).toBe(0);
+    const given = await send(designer, 'post', '/api/jobs/import', { ...first, job: { ...first.job, voltageUnbalancePercent: 2.5 } }).expect(201);
+    const back = (await designer.agent.get(`/api/jobs/${given.body.id}/export`).expect(200)).body as JobBackup;
+    expect(back.job.voltageUnbalancePercent).toBe(2.5);
+  });
+
   it('round-trips a signed-off job with overrides, comments, a revision and its bill of materials', async () => {
     const first = (await designer.agent.get(`/api/jobs/${richJobId}/export`).expect(200)).body as JobBackup;
     const a = first.panels.find((p) => p.name === 'MCC-B1')!;

@@ -232,6 +232,27 @@ describe('job changes that the selections depend on', () => {
     expect(after.rollup.feeder.minAmpacity).toBe(42.5);
   });
 
+  it("derates every three-phase motor when the job's measured voltage unbalance is set (NEMA MG 1 14.35)", async () => {
+    const designer = await signInAs('designer');
+    const { job, panel } = await newPanel(designer);
+    await send(designer, 'post', `/api/panels/${panel.id}/loads`, { answers: { tag: 'U-1', supply: 'ac3', hp: 25, volts: 460 } }).expect(201);
+    let p = (await designer.agent.get(`/api/panels/${panel.id}`)).body;
+    expect(p.loads[0].selection.unbalance).toBeNull();
+    expect(p.job.voltageUnbalancePercent).toBe(0);
+    const j = (await designer.agent.get(`/api/jobs/${job.id}`)).body;
+    const bad = await send(designer, 'patch', `/api/jobs/${job.id}`, { voltageUnbalancePercent: -1, version: j.version }).expect(400);
+    expect(bad.body.error.details[0].path).toBe('body.voltageUnbalancePercent');
+    // 460, 467 and 450 V measured: 1.96 % (NEMA MG 1 14.36) -> about 0.952 x 25 hp on the Figure 14-1 line (from memory)
+    await send(designer, 'patch', `/api/jobs/${job.id}`, { voltageUnbalancePercent: 1.96, version: j.version }).expect(200);
+    p = (await designer.agent.get(`/api/panels/${panel.id}`)).body;
+    expect(p.job.voltageUnbalancePercent).toBe(1.96);
+    expect(p.loads[0].selection.unbalance).toMatchObject({ percent: 1.96, deratingFactor: 0.952, deratedHp: 23.8 });
+    expect(p.loads[0].selection.relays.phaseLoss).toBe(true); // common practice above 1 %
+    expect((await designer.agent.get(`/api/jobs/${job.id}`)).body.voltageUnbalancePercent).toBe(1.96);
+    const activity = (await designer.agent.get(`/api/jobs/${job.id}/activity`).expect(200)).body as Array<{ summary: string }>;
+    expect(activity.map((a) => a.summary)).toContain(`Changed job ${job.number}: voltage unbalance`);
+  });
+
   it('changes a shared answer on several motors in one go', async () => {
     const designer = await signInAs('designer');
     const { panel } = await newPanel(designer);

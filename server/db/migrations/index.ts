@@ -4,6 +4,7 @@ import * as m0002 from './0002-panel-rollup';
 import * as m0003 from './0003-catalogue-fields';
 import * as m0004 from './0004-change-feed';
 import * as m0005 from './0005-catalogue-feed';
+import * as m0006 from './0006-voltage-unbalance';
 
 export const migrations = [
   ['0001-foundation', m0001],
@@ -11,4 +12,5 @@ export const migrations = [
   ['0003-catalogue-fields', m0003],
   ['0004-change-feed', m0004],
   ['0005-catalogue-feed', m0005],
+  ['0006-voltage-unbalance', m0006],
 ] as const;

@@ -14,6 +14,7 @@ export class Job extends Model<InferAttributes<Job>, InferCreationAttributes<Job
   declare supplyHz: CreationOptional<number>;
   declare availableFaultKa: CreationOptional<number>;
   declare ambientC: CreationOptional<number>;
+  declare voltageUnbalancePercent: CreationOptional<number>;
   declare codeEdition: CreationOptional<string>;
   declare notes: CreationOptional<string>;
   declare archivedAt: Date | null;
@@ -36,6 +37,7 @@ export class Job extends Model<InferAttributes<Job>, InferCreationAttributes<Job
         supplyHz: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 60 },
         availableFaultKa: { type: DataTypes.DOUBLE, allowNull: false, defaultValue: 22 },
         ambientC: { type: DataTypes.DOUBLE, allowNull: false, defaultValue: 30 },
+        voltageUnbalancePercent: { type: DataTypes.DOUBLE, allowNull: false, defaultValue: 0 },
         codeEdition: { type: DataTypes.STRING(10), allowNull: false, defaultValue: '2023' },
         notes: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
         archivedAt: { type: DataTypes.DATE, allowNull: true },

@@ -96,6 +96,8 @@ export const JobBackupSchema = z
         supplyHz: z.union([z.literal(50), z.literal(60)]),
         availableFaultKa: z.number().min(0.1).max(200),
         ambientC: z.number().min(-40).max(60),
+        // absent in backups written before the field existed
+        voltageUnbalancePercent: z.number().min(0).max(20).default(0),
         codeEdition: z.enum(CODE_EDITIONS),
         notes: z.string().max(5000),
         archivedAt: isoDate.nullable(),

@@ -35,6 +35,7 @@ export async function exportJob(actor: CurrentUser, jobId: number): Promise<JobB
       supplyHz: job.supplyHz as 50 | 60,
       availableFaultKa: job.availableFaultKa,
       ambientC: job.ambientC,
+      voltageUnbalancePercent: job.voltageUnbalancePercent,
       codeEdition: job.codeEdition as JobBackup['job']['codeEdition'],
       notes: job.notes,
       archivedAt: iso(job.archivedAt),

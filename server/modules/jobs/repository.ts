@@ -9,7 +9,7 @@ const SORT: Record<string, string> = { number: 'j.number asc', name: 'j.name asc
 export async function listJobs(organisationId: number, opts: { q?: string; archived: boolean; sort: string }): Promise<JobSummary[]> {
   return db().query<JobSummary>(
     `select j.id, j.number, j.name, j.customer, j.site, j.supply_volts as "supplyVolts", j.supply_phases as "supplyPhases",
-            j.supply_hz as "supplyHz", j.available_fault_ka as "availableFaultKa", j.ambient_c as "ambientC",
+            j.supply_hz as "supplyHz", j.available_fault_ka as "availableFaultKa", j.ambient_c as "ambientC", j.voltage_unbalance_percent as "voltageUnbalancePercent",
             j.code_edition as "codeEdition", j.notes, j.archived_at as "archivedAt", j.version, j.updated_at as "updatedAt",
             (select count(*)::int from panels p where p.job_id = j.id and p.archived_at is null) as "panelCount",
             (select count(*)::int from loads l join panels p on p.id = l.panel_id where p.job_id = j.id and p.archived_at is null) as "motorCount"

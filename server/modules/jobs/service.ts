@@ -7,8 +7,24 @@ import type { Job } from '../../db/models/job';
 import { db } from '../../db/sequelize';
 import { reselectJobPanels } from '../panels/service';
 
+/** Job fields as the job form names them, for the activity log. */
+const JOB_FIELD_WORDS: Record<string, string> = {
+  number: 'job number',
+  name: 'name',
+  customer: 'customer',
+  site: 'site',
+  supplyVolts: 'supply voltage',
+  supplyPhases: 'phases',
+  supplyHz: 'frequency',
+  availableFaultKa: 'available fault current',
+  ambientC: 'ambient temperature',
+  voltageUnbalancePercent: 'voltage unbalance',
+  codeEdition: 'code edition',
+  notes: 'notes',
+};
+
 /** Job fields the motor selections depend on. */
-const SELECTION_FIELDS = ['supplyVolts', 'supplyPhases', 'supplyHz', 'ambientC', 'codeEdition'] as const;
+const SELECTION_FIELDS = ['supplyVolts', 'supplyPhases', 'supplyHz', 'ambientC', 'voltageUnbalancePercent', 'codeEdition'] as const;
 
 export function jobView(j: Job) {
   return {
@@ -22,6 +38,7 @@ export function jobView(j: Job) {
     supplyHz: j.supplyHz,
     availableFaultKa: j.availableFaultKa,
     ambientC: j.ambientC,
+    voltageUnbalancePercent: j.voltageUnbalancePercent,
     codeEdition: j.codeEdition,
     notes: j.notes,
     archivedAt: j.archivedAt,
@@ -64,7 +81,7 @@ export async function updateJob(actor: CurrentUser, id: number, input: Partial<J
   await db().transaction(async (t) => {
     const count = await repo.updateJobVersioned(actor.organisationId, id, version, changes, t);
     if (count === 0) throw new ConflictError('Someone else changed this job since you opened it: reload to see their change, then apply yours again');
-    await recordActivity(actor, { entity: 'job', entityId: id, jobId: id, action: 'updated', summary: `Changed job ${job.number}: ${Object.keys(diff).join(', ') || 'no fields'}`, diff }, t);
+    await recordActivity(actor, { entity: 'job', entityId: id, jobId: id, action: 'updated', summary: `Changed job ${job.number}: ${Object.keys(diff).map((k) => JOB_FIELD_WORDS[k] ?? k).join(', ') || 'no fields'}`, diff }, t);
     if (reselect.length) await reselectJobPanels(actor, id, reselect.join(', '), t);
   });
   return jobView((await repo.findJob(actor.organisationId, id))!);

@@ -1,23 +1,14 @@
 // The stored truth of a panel's selections: the same shared selector the browser previews with,
 // run on the server over the repository's rule files.
 import { getSelector } from '../../engine/rule-files';
-import type { LoadInput, SupplyInput } from '../../../shared/schemas/load';
+import type { LoadInput } from '../../../shared/schemas/load';
 import type { LoadSelection, SelectionOutput } from '../../../shared/schemas/selection';
 import type { CodeEdition } from '../../../shared/standards/code-edition';
-import type { JobSummary } from '../../../shared/schemas/job';
+import { jobSupply, type JobSummary, type JobSupplyFields } from '../../../shared/schemas/job';
 import type { PanelRollup } from '../../../shared/schemas/selection';
 
-export type JobSupply = Pick<JobSummary, 'supplyVolts' | 'supplyPhases' | 'supplyHz' | 'availableFaultKa' | 'ambientC' | 'codeEdition'>;
-
-export function supplyOf(job: JobSupply): SupplyInput {
-  return {
-    volts: job.supplyVolts,
-    phases: job.supplyPhases as 1 | 3,
-    hz: job.supplyHz as 50 | 60,
-    availableFaultKa: job.availableFaultKa,
-    ambientC: job.ambientC,
-  };
-}
+export type JobSupply = JobSupplyFields & Pick<JobSummary, 'codeEdition'>;
+export const supplyOf = jobSupply;
 
 function edition(job: JobSupply): CodeEdition {
   return (job.codeEdition === '2020' ? '2020' : '2023') as CodeEdition;

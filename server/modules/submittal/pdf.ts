@@ -261,6 +261,9 @@ export function writeSubmittalPdf(
           relayWiringText(s) ? `${s.overload.basis}; relay: ${relayOf(s).basis}` : s.overload.basis,
         ],
         ['Conductor', `${s.conductor.size} ${s.conductor.material}, ${s.conductor.ampacity} A (min ${fmt(s.conductor.minAmpacity)} A)`, s.conductor.basis],
+        ...(s.unbalance
+          ? [['Voltage unbalance', s.unbalance.deratingFactor === null ? `${s.unbalance.percent} %: above 5 %, not recommended` : `${s.unbalance.percent} %: derate to ${s.unbalance.deratingFactor} x rating${s.unbalance.deratedHp !== null ? ` = ${s.unbalance.deratedHp} hp` : ''}`, s.unbalance.basis]]
+          : []),
         ['Disconnect', `>= ${fmt(s.disconnect.minAmps)} A${s.disconnect.minHp !== null ? `, >= ${s.disconnect.minHp} hp` : ''}`, s.disconnect.basis],
       ],
     );

@@ -51,6 +51,7 @@ export function Component() {
           <div><dt className="text-xs uppercase text-ink-soft">Supply</dt><dd className="font-semibold">{j.supplyVolts} V {j.supplyPhases}φ {j.supplyHz} Hz</dd></div>
           <div><dt className="text-xs uppercase text-ink-soft">Available fault</dt><dd className="font-semibold">{j.availableFaultKa} kA</dd></div>
           <div><dt className="text-xs uppercase text-ink-soft">Ambient</dt><dd className="font-semibold">{j.ambientC} °C</dd></div>
+          <div><dt className="text-xs uppercase text-ink-soft">Voltage unbalance</dt><dd className="font-semibold">{j.voltageUnbalancePercent ? `${j.voltageUnbalancePercent} %` : 'not given'}</dd></div>
           <div><dt className="text-xs uppercase text-ink-soft">Code</dt><dd className="font-semibold">NEC {j.codeEdition}</dd></div>
           <div><dt className="text-xs uppercase text-ink-soft">Notes</dt><dd>{j.notes || '—'}</dd></div>
         </dl>

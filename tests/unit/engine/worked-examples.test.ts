@@ -178,3 +178,41 @@ describe('the overload relay as wired', () => {
     expect(r.overload.relay).toMatchObject({ share: 1, count: 1, settingAmps: 31, maxAmps: 38.75 });
   });
 });
+
+describe('a three-phase motor on an unbalanced supply (NEMA MG 1 14.35)', () => {
+  it('3 % unbalance: derated to 0.88 × 25 hp = 22 hp, with a phase-loss / unbalance relay (common practice) and a caution', async () => {
+    const r = await selector.selectLoad(motor({ hp: 25, volts: 460, fla: 31, serviceFactor: 1.15 }), { ...supply480, voltageUnbalancePercent: 3 });
+    expect(r.unbalance).toEqual({ percent: 3, deratingFactor: 0.88, deratedHp: 22, basis: expect.stringMatching(/NEMA MG 1 14\.35/) });
+    expect(r.relays.phaseLoss).toBe(true);
+    expect(r.cautions.some((c) => c.includes('about 0.88 × its rating = 22 hp'))).toBe(true);
+    // sizing is unchanged: the tables size for the nameplate, the derating limits the load
+    expect(r.flcAmps).toBe(34);
+    expect(r.scpd.ratingAmps).toBe(90);
+  });
+
+  it('0.8 % unbalance: shown, no derating, no relay added for it', async () => {
+    const r = await selector.selectLoad(motor({ hp: 25, volts: 460, fla: 31, serviceFactor: 1.15 }), { ...supply480, voltageUnbalancePercent: 0.8 });
+    expect(r.unbalance).toMatchObject({ percent: 0.8, deratingFactor: 1, deratedHp: 25 });
+    expect(r.relays.phaseLoss).toBe(false);
+    expect(r.cautions.some((c) => c.includes('unbalance'))).toBe(false);
+  });
+
+  it('above 5 %: no factor, and a caution to correct the supply first', async () => {
+    const r = await selector.selectLoad(motor({ hp: 25, volts: 460, fla: 31 }), { ...supply480, voltageUnbalancePercent: 6 });
+    expect(r.unbalance).toMatchObject({ percent: 6, deratingFactor: null, deratedHp: null });
+    expect(r.cautions.some((c) => c.includes('not recommended'))).toBe(true);
+  });
+
+  it('behind a drive the motor sees balanced output: no derating, the drive input takes it (common practice)', async () => {
+    const r = await selector.selectLoad(motor({ hp: 25, volts: 460, fla: 31, speedControl: 'variable' }), { ...supply480, voltageUnbalancePercent: 3 });
+    expect(r.starter.type).toBe('VFD');
+    expect(r.unbalance).toBeNull();
+    expect(r.relays.phaseLoss).toBe(false); // the drive's own input phase-loss trip serves
+    expect(r.cautions.some((c) => c.includes('drive’s input takes it') || c.includes("drive's input takes it"))).toBe(true);
+  });
+
+  it('no unbalance given: nothing shown', async () => {
+    const r = await selector.selectLoad(motor({ hp: 25, volts: 460 }), supply480);
+    expect(r.unbalance).toBeNull();
+  });
+});

@@ -8,6 +8,7 @@ import type { LoadSelection } from '../../../../shared/schemas/selection';
 import { panelQueries, useSaveLoad } from '../../../features/panels/api/panels';
 import { SelectionSummary } from '../../../features/panels/components/selection-summary';
 import { OverrideEditor } from '../../../features/panels/components/override-editor';
+import { jobSupply } from '../../../../shared/schemas/job';
 import { ENVIRONMENT_LABELS } from '../../../features/panels/components/answer-labels';
 import { browserSelector } from '../../../lib/selector';
 import { Field, SelectField, inputClass, type SelectOption } from '../../../components/ui/field';
@@ -111,7 +112,7 @@ export function Component() {
         return;
       }
       browserSelector((p.job.codeEdition === '2020' ? '2020' : '2023') as CodeEdition)
-        .selectLoad(clean(values) as LoadInput, { volts: p.job.supplyVolts, phases: p.job.supplyPhases as 1 | 3, hz: p.job.supplyHz as 50 | 60, availableFaultKa: p.job.availableFaultKa, ambientC: p.job.ambientC })
+        .selectLoad(clean(values) as LoadInput, jobSupply(p.job))
         .then((sel) => setPreview({ sel, error: null }))
         .catch((e: Error) => setPreview({ sel: null, error: e.message }));
     }, 150);

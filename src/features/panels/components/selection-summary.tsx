@@ -46,6 +46,14 @@ export function SelectionSummary({ selection, overridden = [] }: { selection: Lo
     ['Relays', <>{relayLabel(s)}{mark('relays.phaseLoss')}{mark('relays.phaseReversal')}</>, 'common practice'],
     ['Enclosure', <>NEMA Type {s.enclosure.nemaType} <span className="text-ink-soft">(≈ {s.enclosure.ipCode}, one-way comparison)</span>{mark('enclosure.nemaType')}{s.enclosure.flagForEngineer ? ' ⚑ engineer to confirm' : ''}</>, 'NEMA 250'],
   ];
+  if (s.unbalance) {
+    const u = s.unbalance;
+    rows.push([
+      'Voltage unbalance',
+      u.deratingFactor === null ? `${u.percent} % — above 5 %: not recommended` : `${u.percent} % → ${u.deratingFactor} × rating${u.deratedHp !== null ? ` = ${u.deratedHp} hp` : ''}`,
+      u.basis,
+    ]);
+  }
   if (s.vfd) rows.push(['Drive', `≥ ${s.vfd.minOutputAmps} A ${s.vfd.duty} duty${s.vfd.inverterDutyMotor ? ' · inverter-duty motor' : ''}${s.vfd.outputFilter !== 'none' ? ` · ${s.vfd.outputFilter} filter` : ''}`, s.vfd.basis]);
   if (s.softStarter) rows.push(['Soft starter', `≥ ${s.softStarter.minAmps} A${s.softStarter.insideDelta ? ' inside delta' : ''}${s.softStarter.bypass ? ' · bypass contactor' : ''}`, 'common practice']);
   if (s.dc) rows.push(['DC', `${s.dc.field} field${s.dc.fieldLossProtection ? ' · field-loss protection' : ''}${s.dc.dynamicBraking ? ' · dynamic braking' : ''}`, 'common practice']);
