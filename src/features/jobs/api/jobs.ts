@@ -42,7 +42,9 @@ export function useUpdateJob(id: number) {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: (values: Partial<JobInput> & { version: number }) => patch<JobDetail>(`/api/jobs/${id}`, values),
-    onSuccess: () => qc.invalidateQueries({ queryKey: jobQueries.all() }),
+    // a change of supply, ambient, unbalance or code edition selects the job's motors again: panels,
+    // their checks (under 'panels') and their bills of materials are then stale too
+    onSuccess: () => Promise.all([['jobs'], ['panels'], ['bom']].map((queryKey) => qc.invalidateQueries({ queryKey }))),
   });
 }
 
