@@ -252,6 +252,36 @@ describe('catalogue export and import', () => {
     expect((await estimator.agent.get(`/api/catalogue/items/${item.id}`).expect(200)).body.description).toBe(injected);
   });
 
+  it('refuses an oversized file (413), a package that expands to an absurd size, and too many rows, changing nothing', async () => {
+    const { IMPORT_LIMITS } = await import('../../server/modules/catalogue/spreadsheet');
+    const { makeZip } = await import('../unit/bom/zip');
+    const estimator = await signInAs('estimator');
+    const before = content(await allItems(estimator));
+    const big = await upload(estimator, 'catalogue.csv', Buffer.alloc(IMPORT_LIMITS.maxFileBytes + 1, 0x41), 'text/csv');
+    expect(big.status).toBe(413);
+    expect(big.body.error.code).toBe('payload_too_large');
+    // 64 MB of spaces deflated to a few dozen kB, its expanded size understated in the zip headers
+    const sheet = Buffer.concat([Buffer.from('<?xml version="1.0"?><worksheet xmlns="http://schemas.openxmlformats.org/spreadsheetml/2006/main"><sheetData>'), Buffer.alloc(64 * 1024 * 1024, 0x20), Buffer.from('</sheetData></worksheet>')]);
+    const bomb = makeZip([
+      { name: '[Content_Types].xml', data: Buffer.from('<?xml version="1.0"?><Types xmlns="http://schemas.openxmlformats.org/package/2006/content-types"/>') },
+      { name: 'xl/workbook.xml', data: Buffer.from('<?xml version="1.0"?><workbook xmlns="http://schemas.openxmlformats.org/spreadsheetml/2006/main"/>') },
+      { name: 'xl/worksheets/sheet1.xml', data: sheet, declaredSize: 4096 },
+    ]);
+    expect(bomb.length).toBeLessThan(IMPORT_LIMITS.maxFileBytes);
+    const started = Date.now();
+    const r = await upload(estimator, 'catalogue.xlsx', bomb, 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet');
+    expect(r.status).toBe(400);
+    expect(r.body.error.details[0].message).toMatch(/expands beyond|damaged/);
+    expect(Date.now() - started).toBeLessThan(10_000);
+    // one row over the limit: refused before any is written
+    const header = (await estimator.agent.get('/api/catalogue.csv').expect(200)).text.replace(/^\uFEFF/, '').split('\r\n')[0]!;
+    const rows = Array.from({ length: IMPORT_LIMITS.maxRows + 1 }, (_v, i) => `PW-ROWS-${i},x`);
+    const many = await upload(estimator, 'many.csv', [header, ...rows].join('\r\n'), 'text/csv');
+    expect(many.status).toBe(400);
+    expect(many.body.error.details[0].message).toBe(`the file has more than ${IMPORT_LIMITS.maxRows} rows`);
+    expect(content(await allItems(estimator))).toEqual(before);
+  });
+
   it('refuses an empty file, a file that is not a spreadsheet, missing columns, and a wrong file type', async () => {
     const estimator = await signInAs('estimator');
     const empty = await upload(estimator, 'empty.csv', '', 'text/csv').expect(400);
