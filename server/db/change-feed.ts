@@ -51,7 +51,9 @@ export class ChangeFeed {
 
   private async connect(): Promise<void> {
     if (this.stopped || !this.url) return;
-    const client = new pg.Client({ connectionString: this.url, application_name: 'panelwright-change-feed' });
+    // TCP keepalive: a connection silently dropped on the way (a firewall's idle timeout) ends with an
+    // error instead of leaving the feed deaf while it believes itself live
+    const client = new pg.Client({ connectionString: this.url, application_name: 'panelwright-change-feed', keepAlive: true, keepAliveInitialDelayMillis: 10_000 });
     client.on('notification', (msg) => {
       if (msg.channel !== CHANNEL || !msg.payload) return;
       this.received++;

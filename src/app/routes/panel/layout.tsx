@@ -40,9 +40,14 @@ export function Component() {
       <div className="mb-3 flex flex-wrap items-center gap-3">
         <h1 className="text-2xl font-semibold tracking-tight">{p.name}</h1>
         <SignOffState state={p.status} />
-        <span className="text-sm text-ink-soft">{p.revisionNumber === null ? 'No signed-off revision yet' : `Last signed off: R${p.revisionNumber}`}</span>
         <span className="text-sm text-ink-soft">
-          · {p.job.supplyVolts} V {p.job.supplyPhases}φ {p.job.supplyHz} Hz · {p.job.availableFaultKa} kA available · NEC {p.job.codeEdition}
+          {[
+            p.revisionNumber === null ? 'No signed-off revision yet' : `Last signed off: R${p.revisionNumber}`,
+            `${p.job.supplyVolts} V ${p.job.supplyPhases}φ ${p.job.supplyHz} Hz`,
+            `${p.job.availableFaultKa} kA available`,
+            ...(p.job.voltageUnbalancePercent > 0 ? [`${p.job.voltageUnbalancePercent} % voltage unbalance`] : []),
+            `NEC ${p.job.codeEdition}`,
+          ].join(' · ')}
         </span>
         {errors > 0 ? <span className="rounded bg-bad-bg px-2 py-0.5 text-xs font-semibold text-state-returned">✖ {errors} motor{errors > 1 ? 's' : ''} need fixing</span> : null}
         {hasRole(me, 'designer', 'admin') ? (
