@@ -8,6 +8,9 @@
 // moves on any notification of the kinds the cache depends on, on every state-changing request of
 // this process (before it runs and again before its answer is sent), and on any loss of the
 // connection (notifications may have been missed). While the feed is down, caches ask the database.
+// The connection proves that it hears before it is trusted, and again every 15 s: it sends a
+// notification of its own ("h:<nonce>") and must receive it within 5 s, or it is dropped.
+import { randomBytes } from 'node:crypto';
 import pg from 'pg';
 
 /** s: session (payload md5 of its id), u: user, j: job, p: panel, c: catalogue (payload *) */
@@ -29,6 +32,10 @@ export class ChangeFeed {
   live = false;
   /** notifications received since start (for tests and diagnostics) */
   received = 0;
+  private heartbeat = { everyMs: 15_000, timeoutMs: 5_000 };
+  private beatTimer: NodeJS.Timeout | null = null;
+  private beatNonce: string | null = null;
+  private beatHeard: (() => void) | null = null;
 
   /** Connects and listens; resolves once listening (or once the first attempt failed: it retries). */
   async start(url: string): Promise<void> {
@@ -57,16 +64,19 @@ export class ChangeFeed {
     client.on('notification', (msg) => {
       if (msg.channel !== CHANNEL || !msg.payload) return;
       this.received++;
-      const kind = msg.payload[0] as ChangeKind;
+      const kind = msg.payload[0];
       const key = msg.payload.slice(2);
-      if (kind in this.counters) this.counters[kind]++;
-      for (const l of this.listeners) l(kind, key);
+      if (kind === 'h') {
+        if (key === this.beatNonce) this.beatHeard?.();
+        return;
+      }
+      if (!(kind in this.counters)) return;
+      this.counters[kind as ChangeKind]++;
+      for (const l of this.listeners) l(kind as ChangeKind, key);
     });
     const onDown = () => {
       if (this.client !== client) return;
-      this.client = null;
-      this.lost();
-      this.scheduleRetry();
+      this.drop(client);
     };
     client.on('error', onDown);
     client.on('end', onDown);
@@ -78,19 +88,67 @@ export class ChangeFeed {
         return;
       }
       this.client = client;
+      // live only once a notification of our own has come back on this connection: a connection that
+      // cannot hear (a pooler that does not pass LISTEN through) never serves a cache
+      if (!(await this.beat(client))) {
+        if (this.client === client) this.drop(client);
+        return;
+      }
       this.retryMs = 250;
       this.generation++; // whatever was cached before this connection may have missed a change
       this.live = true;
+      this.beatTimer = setInterval(() => {
+        void this.beat(client).then((heard) => {
+          if (!heard && this.client === client) this.drop(client);
+        });
+      }, this.heartbeat.everyMs);
+      this.beatTimer.unref();
     } catch {
+      if (this.client === client) this.client = null;
       await client.end().catch(() => undefined);
       this.scheduleRetry();
     }
   }
 
+  /** Sends a notification through the connection and waits for it to come back. */
+  private beat(client: pg.Client): Promise<boolean> {
+    const nonce = randomBytes(8).toString('hex');
+    this.beatNonce = nonce;
+    return new Promise<boolean>((resolve) => {
+      const timer = setTimeout(() => done(false), this.heartbeat.timeoutMs);
+      timer.unref();
+      const done = (heard: boolean) => {
+        clearTimeout(timer);
+        if (this.beatNonce === nonce) {
+          this.beatNonce = null;
+          this.beatHeard = null;
+        }
+        resolve(heard);
+      };
+      this.beatHeard = () => done(true);
+      client.query('select pg_notify($1, $2)', [CHANNEL, `h:${nonce}`]).catch(() => done(false));
+    });
+  }
+
+  /** The connection can no longer be trusted: forget everything, close it, connect again later. */
+  private drop(client: pg.Client) {
+    this.client = null;
+    this.lost();
+    void client.end().catch(() => undefined);
+    this.scheduleRetry();
+  }
+
   private lost() {
     this.live = false;
     this.generation++;
+    if (this.beatTimer) clearInterval(this.beatTimer);
+    this.beatTimer = null;
     for (const l of this.listeners) l('s', '*');
+  }
+
+  /** How often the connection proves it still hears, and how long an answer may take (tests shorten both). */
+  setHeartbeat(everyMs: number, timeoutMs: number) {
+    this.heartbeat = { everyMs, timeoutMs };
   }
 
   private scheduleRetry() {

@@ -220,3 +220,32 @@ describe('when the feed is down', () => {
     expect(await quietRead(designer)).toEqual([]);
   });
 });
+
+describe('a connection that stops hearing', () => {
+  it('is dropped by the heartbeat and replaced, so no cache is served from a deaf feed', async () => {
+    const feed = changeFeed();
+    feed.setHeartbeat(200, 150);
+    // reconnect so that the short heartbeat applies
+    await other.query(`select pg_terminate_backend(pid) from pg_stat_activity where application_name = 'panelwright-change-feed' and datname = current_database()`);
+    await until('the feed to notice', async () => (feed.live ? undefined : true));
+    await until('the feed to listen again', async () => (feed.live ? true : undefined), 10_000);
+    expect(await quietRead(designer)).toEqual([]);
+
+    // the connection stays open but no notification reaches the process any more
+    const client = (feed as unknown as { client: { emit: (event: string, ...args: unknown[]) => boolean } }).client;
+    const emit = client.emit;
+    client.emit = function (this: unknown, event: string, ...args: unknown[]) {
+      return event === 'notification' ? true : emit.call(this, event, ...args);
+    };
+    await until('the heartbeat to notice', async () => (feed.live ? undefined : true), 3000);
+    // the deaf connection is gone: a change made elsewhere shows on the next read
+    const name = `Renamed after deafness ${uniq()}`;
+    await other.query('update panels set name = $1, version = version + 1, updated_at = now() where id = $2', [name, panelId]);
+    expect(((await getPanel(designer).expect(200)).body as { name: string }).name).toBe(name);
+    // and a new connection, which hears, takes over
+    await until('a new connection that hears', async () => (feed.live ? true : undefined), 10_000);
+    expect((feed as unknown as { client: unknown }).client).not.toBe(client);
+    expect(await quietRead(designer)).toEqual([]);
+    feed.setHeartbeat(15_000, 5_000);
+  });
+});
