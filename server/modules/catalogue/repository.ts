@@ -56,7 +56,12 @@ export async function catalogueFor(organisationId: number, transaction?: Transac
   }
   const token = feed.token(CATALOGUE_KINDS);
   const rows = await CatalogueRow.findAll({ where: { organisationId }, order: [['category', 'ASC'], ['code', 'ASC']], transaction });
-  const items = Object.freeze(rows.map((r) => Object.freeze({ ...toItem(r), ratings: Object.freeze({ ...toItem(r).ratings }) }) as CatalogueItem));
+  const items = Object.freeze(
+    rows.map((r) => {
+      const item = toItem(r);
+      return Object.freeze({ ...item, ratings: Object.freeze({ ...item.ratings }) }) as CatalogueItem;
+    }),
+  );
   if (!transaction) catalogueCache.set(organisationId, { token, items });
   return items;
 }

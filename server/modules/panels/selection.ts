@@ -8,23 +8,22 @@ import { jobSupply, type JobSummary, type JobSupplyFields } from '../../../share
 import type { PanelRollup } from '../../../shared/schemas/selection';
 
 export type JobSupply = JobSupplyFields & Pick<JobSummary, 'codeEdition'>;
-export const supplyOf = jobSupply;
 
 function edition(job: JobSupply): CodeEdition {
   return (job.codeEdition === '2020' ? '2020' : '2023') as CodeEdition;
 }
 
 export async function selectOne(job: JobSupply, answers: LoadInput): Promise<LoadSelection> {
-  return getSelector(edition(job)).selectLoad(answers, supplyOf(job));
+  return getSelector(edition(job)).selectLoad(answers, jobSupply(job));
 }
 
 /** The panel roll-up from the stored selections: no rules run again. */
 export function rollupOf(job: JobSupply, answers: LoadInput[], selections: LoadSelection[]): PanelRollup | null {
   if (answers.length === 0) return null;
-  return getSelector(edition(job)).panelRollup(supplyOf(job), answers, selections);
+  return getSelector(edition(job)).panelRollup(jobSupply(job), answers, selections);
 }
 
 export async function selectAll(job: JobSupply, answers: LoadInput[]): Promise<SelectionOutput | null> {
   if (answers.length === 0) return null;
-  return getSelector(edition(job)).selectPanel({ supply: supplyOf(job), loads: answers });
+  return getSelector(edition(job)).selectPanel({ supply: jobSupply(job), loads: answers });
 }
