@@ -6,7 +6,7 @@ import { calculateHeat } from '../../../shared/calc/heat';
 import { sizeControlTransformer } from '../../../shared/calc/control-power';
 import { panelNameplate } from '../../../shared/calc/nameplate';
 import { connectionCard } from '../../../shared/calc/connections';
-import { blowerVfd, conveyorFvr, pumpFvnr, rollup } from './fixtures';
+import { blowerVfd, conveyorFvr, pumpFvnr, rollup, selection } from './fixtures';
 import { extractPdfText } from './pdf-text';
 
 function data(): SubmittalData {
@@ -45,11 +45,11 @@ function data(): SubmittalData {
   };
 }
 
-async function render(opts: SubmittalPdfOptions): Promise<{ buf: Buffer; font: string }> {
+async function render(opts: SubmittalPdfOptions, d: SubmittalData = data()): Promise<{ buf: Buffer; font: string }> {
   const stream = new PassThrough();
   const chunks: Buffer[] = [];
   stream.on('data', (c: Buffer) => chunks.push(c));
-  const { font } = await writeSubmittalPdf(data(), stream, opts);
+  const { font } = await writeSubmittalPdf(d, stream, opts);
   return { buf: Buffer.concat(chunks), font };
 }
 
@@ -95,6 +95,27 @@ describe('PDF submittal', () => {
       expect(text).not.toContain('?'); // every character within the font's range
     });
   }
+  it('shows a wye-delta overload relay as wired and the site voltage unbalance', async () => {
+    // 60 hp blower, nameplate 70 A, SF 1.15: line limit 87.5 A (NEC 2023 430.32(A)(1)); in the delta windings
+    // 70/√3 = 40.41 A set, 87.5/√3 = 50.52 A max (common practice); 1.96 % unbalance -> 0.952 × 60 hp = 57.12 hp
+    const blower = selection({
+      tag: 'K-301',
+      description: 'Blower',
+      hp: 60,
+      flcAmps: 77,
+      flaAmps: 70,
+      starter: { type: 'wye-delta', nemaSize: null },
+      overload: { maxSettingAmps: 87.5, maxPercent: 125, relay: { share: 1 / Math.sqrt(3), count: 1, settingAmps: 40.41, maxAmps: 50.52, note: null, basis: 'NEC 2023 430.32(A)(1) limit x 1/sqrt(3); relay position: common practice' } },
+      unbalance: { percent: 1.96, deratingFactor: 0.952, deratedHp: 57.12, basis: 'NEMA MG 1 14.35, Figure 14-1 (curve values from memory)' },
+    });
+    const { buf } = await render({ compress: false }, { ...data(), selections: [blower] });
+    const text = extractPdfText(buf);
+    for (const s of ['1 relay in the delta windings: set 40.41 A, max 50.52 A each', 'Voltage unbalance', '1.96 %: derate to 0.952 x rating = 57.12 hp', 'NEMA MG 1 14.35']) {
+      expect(text, s).toContain(s);
+    }
+    expect(text).not.toContain('?');
+  });
+
   it('compresses by default', async () => {
     const { buf } = await render({});
     expect(buf.toString('latin1')).toContain('/FlateDecode');
