@@ -32,6 +32,8 @@ describe('drawings in the browser', () => {
     await k301.waitFor();
     expect(await k301.getAttribute('aria-labelledby')).toBeTruthy();
     expect(await page.getByRole('img', { name: /^DC compound motor\./ }).count()).toBe(1);
+    // its overload relay sits in the delta windings: 70 A / √3 = 40.41 A set, 87.5 A / √3 = 50.52 A max (common practice)
+    await page.getByText('1 relay in the delta windings: set 40.41 A, max 50.52 A each').first().waitFor();
     expect(await page.getByRole('note').filter({ hasText: 'Check rotation before coupling the load.' }).count()).toBe(DEMO_TAGS.length);
     expect(await page.getByText('To reverse:', { exact: false }).count()).toBeGreaterThanOrEqual(DEMO_TAGS.length);
 
@@ -44,5 +46,17 @@ describe('drawings in the browser', () => {
     expect((await pdf.body()).subarray(0, 5).toString('latin1')).toBe('%PDF-');
 
     await screenshot(page, 'drawings');
+  });
+
+  it('lists the wye-delta blower at its relay’s dial limit, never at the line value', async () => {
+    const page = await newPage(browser);
+    await signInThroughForm(page, 'engineer');
+    await page.waitForURL(/\/jobs$/);
+    await page.getByRole('table', { name: 'Jobs' }).getByRole('link', { name: 'J-2041' }).click();
+    await page.getByRole('link', { name: 'MCC-1 Pump hall' }).first().click();
+    const row = page.getByRole('table', { name: 'Motors' }).getByRole('row').filter({ hasText: 'K-301' });
+    // NEC 2023 430.32(A)(1): 125 % × 70 A = 87.5 A in line terms; in the delta windings 87.5 / √3 = 50.52 A
+    await row.getByText('50.52 (in Δ) · C20').waitFor();
+    expect(await row.getByText('87.5').count()).toBe(0);
   });
 });
