@@ -88,6 +88,9 @@ describe('designer → engineer → estimator', () => {
     await page.goto(`${panelUrl}/protection`);
     const card = page.getByRole('article', { name: 'Motor SP-1' });
     await card.getByText(/430\.52/).first().waitFor();
+    // the overload relay's dial at the nameplate FLA of 31 A; the trip limit 125 % = 38.75 A (NEC 2023 430.32(A)(1))
+    await card.getByText('dial at 31 A (nameplate FLA)').waitFor();
+    await card.getByText(/≤ 38\.75 A \(125 %\)/).waitFor();
     await card.getByLabel('Comment on SP-1').fill('Use a dual-element fuse for SP-1');
     await card.getByRole('button', { name: 'Comment' }).click();
     await card.getByText('Use a dual-element fuse for SP-1').waitFor();

@@ -26,7 +26,9 @@ export function relayLabel(s: LoadSelection) {
 /** The key results of one motor's selection, with reasons and citations: the live preview and the review card. */
 export function SelectionSummary({ selection, overridden = [] }: { selection: LoadSelection; overridden?: string[] }) {
   const s = selection;
-  const wiring = relayWiringText(s);
+  // the relay's dial: the current it carries at full load (nameplate FLA, or its share in a wye-delta or
+  // part-winding starter); the trip then falls within the 430.32 limit (common practice; the maker's instructions govern)
+  const wiring = s.overload.providedByDrive ? null : (relayWiringText(s) ?? `dial at ${relayOf(s).settingAmps} A (nameplate FLA)`);
   const mark = (field: string) => (overridden.includes(field) ? <span className="ml-1 rounded bg-copper-100 px-1 text-[10px] font-bold text-copper-700" title="Overridden by the designer">OVERRIDE</span> : null);
   const rows: Array<[string, React.ReactNode, string]> = [
     ['Full-load current (table)', `${s.flcAmps} A`, s.flcSource],
@@ -38,7 +40,7 @@ export function SelectionSummary({ selection, overridden = [] }: { selection: Lo
         {mark('overload.tripClass')}
         {wiring ? <span className="block text-ink-soft" data-testid="overload-relay">{wiring}</span> : null}
       </>,
-      wiring ? `${s.overload.basis}; relay: ${relayOf(s).basis}` : s.overload.basis,
+      wiring ? `${s.overload.basis}; dial: ${relayOf(s).share === 1 ? 'common practice' : relayOf(s).basis}, the relay maker's instructions govern` : s.overload.basis,
     ],
     ['Branch protection', <>{scpdLabel(s.scpd.type)} {s.scpd.ratingAmps} A{mark('scpd.ratingAmps')}{mark('scpd.type')} <span className="text-ink-soft">(max {s.scpd.maxPercent} % = {s.scpd.computedMaxAmps} A)</span></>, s.scpd.basis],
     ['Conductors', <>{s.conductor.size} {s.conductor.material === 'cu' ? 'Cu' : 'Al'} {s.conductor.tempRatingC} °C ({s.conductor.ampacity} A ≥ {s.conductor.minAmpacity} A){mark('conductor.size')}</>, s.conductor.basis],
