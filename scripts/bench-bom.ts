@@ -6,7 +6,8 @@ import path from 'node:path';
 import { Writable } from 'node:stream';
 import { performance } from 'node:perf_hooks';
 import { buildBom } from '../shared/calc/bom';
-import { CatalogueFileSchema, LabourUnitsFileSchema } from '../shared/schemas/catalogue';
+import { LabourUnitsFileSchema } from '../shared/schemas/catalogue';
+import { readSeedCatalogue } from '../server/db/seeders/catalogue';
 import { createSelector } from '../shared/engine/selector';
 import type { SelectionOutput } from '../shared/schemas/selection';
 import { loadRuleFiles } from '../server/engine/rule-files';
@@ -18,8 +19,7 @@ const PANELS = 4;
 
 function loadCatalogue() {
   const dir = path.resolve(import.meta.dirname, '../catalog');
-  const files = fs.readdirSync(dir).filter((f) => f.endsWith('.json') && f !== 'labour-units.json');
-  const catalogue = files.flatMap((f) => CatalogueFileSchema.parse(JSON.parse(fs.readFileSync(path.join(dir, f), 'utf8'))));
+  const catalogue = readSeedCatalogue(dir);
   const labourUnits = LabourUnitsFileSchema.parse(JSON.parse(fs.readFileSync(path.join(dir, 'labour-units.json'), 'utf8')));
   return { catalogue, labourUnits };
 }

@@ -64,15 +64,25 @@ describe('panel checks', () => {
     for (const tag of ['P-101', 'P-102', 'P-110', 'C-201', 'K-301', 'M-401', 'V-501', 'H-601']) expect(rows.some((r) => r.location === tag)).toBe(true);
   });
 
-  it('takes unmarked overload relays at the assumed rating by motor horsepower', () => {
+  it('takes the tested combinations of breaker, contactor and overload relay (UL 508A SB4; invented demo combination data)', () => {
     const rows = checks.sccr.rows as Row[];
-    // UL 508A Table SB4.1 (from memory): motor controller rated 0–50 hp 5 kA; 51–200 hp 10 kA
-    const c201 = rows.find((r) => r.location === 'C-201' && r.category === 'overload-relay')!; // 7.5 hp
-    expect(c201).toMatchObject({ source: 'assumed', ratingKa: 5 });
-    expect(c201.basis).toContain('UL 508A Table SB4.1');
-    const k301 = rows.find((r) => r.location === 'K-301' && r.category === 'overload-relay')!; // 60 hp
-    expect(k301).toMatchObject({ source: 'assumed', ratingKa: 10 });
-    // a catalogue part with a marked rating keeps it
+    // C-201: PW-BR-3P-030 + PW-CN-N1-120 + PW-OT-13A-C10 tested to 14 kA (no higher than the breaker's 14 kA);
+    // alone the overload relay would be taken at 5 kA (UL 508A Table SB4.1, 0–50 hp, from memory)
+    const c201 = rows.find((r) => r.location === 'C-201' && r.category === 'overload-relay')!;
+    expect(c201).toMatchObject({ source: 'combination', ratingKa: 14 });
+    expect(c201.basis).toContain('PW-CMB-N1-030');
+    const c201contactor = rows.find((r) => r.location === 'C-201' && r.category === 'contactor')!;
+    expect(c201contactor).toMatchObject({ source: 'combination', ratingKa: 14 });
+    const k301 = rows.find((r) => r.location === 'K-301' && r.category === 'overload-relay')!; // with the 25 kA breaker
+    expect(k301).toMatchObject({ source: 'combination', ratingKa: 25 });
+  });
+
+  it('takes unmarked terminal blocks at the assumed rating, and keeps marked ratings', () => {
+    const rows = checks.sccr.rows as Row[];
+    // UL 508A Table SB4.1 (from memory): terminal block 10 kA
+    const tb = rows.find((r) => r.category === 'terminal-block')!;
+    expect(tb).toMatchObject({ source: 'assumed', ratingKa: 10 });
+    expect(tb.basis).toContain('UL 508A Table SB4.1');
     const marked = rows.filter((r) => r.source === 'marked');
     expect(marked.length).toBeGreaterThan(0);
   });

@@ -9,6 +9,7 @@ import { DEMO_ORGANISATION } from '../../server/db/seeders/demo';
 import { selectOne } from '../../server/modules/panels/selection';
 import { CatalogueItem } from '../../server/db/models/catalogue-item';
 import { BomLineRow } from '../../server/db/models/bom-line';
+import { CombinationRatingRow } from '../../server/db/models/combination-rating';
 
 export async function paramValues(): Promise<Record<string, string>> {
   const org = await Organisation.findOne({ where: { name: DEMO_ORGANISATION } });
@@ -26,8 +27,11 @@ export async function paramValues(): Promise<Record<string, string>> {
     organisationId, panelId: panel.id, position: 0,
     line: { bucket: '(panel)', category: 'freight', code: null, description: 'Role matrix freight', quantity: 1, unit: 'ea', unitCost: 10, unitLabourHours: 0, heatLossW: 0, sccrKa: null, status: 'manual', requiredRatings: null, source: 'manual', swapReason: null },
   });
+  const combination = await CombinationRatingRow.create({
+    organisationId, ref: `RM-CMB-${Date.now().toString(36)}`, componentCodes: [item.code, 'PW-CN-N1-120'], ratingKa: 5, maxVolts: null, source: 'Role matrix combination', active: false,
+  });
   return {
     id: String(job.id), userId: String(user!.id), panelId: String(panel.id), loadId: String(load.id), number: '0',
-    itemId: String(item.id), lineId: String(line.id), key: 'termination',
+    itemId: String(item.id), lineId: String(line.id), key: 'termination', combinationId: String(combination.id),
   };
 }

@@ -3,10 +3,11 @@ import fs from 'node:fs';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { CatalogueFileSchema, LabourUnitsFileSchema, LABOUR_KEYS, CATEGORY_IDS } from '../../shared/schemas/catalogue';
+import { isItemFile } from '../../server/db/seeders/catalogue';
 
 const dir = path.resolve(__dirname, '../../catalog');
 const files = fs.readdirSync(dir).filter((f) => f.endsWith('.json')).sort();
-const itemFiles = files.filter((f) => f !== 'labour-units.json');
+const itemFiles = files.filter(isItemFile);
 
 describe('catalog/ sweep', () => {
   it('has seed files', () => {
@@ -44,5 +45,21 @@ describe('catalog/ sweep', () => {
   it('labour-units.json validates and has every labour key', () => {
     const units = LabourUnitsFileSchema.parse(JSON.parse(fs.readFileSync(path.join(dir, 'labour-units.json'), 'utf8')));
     expect(units.map((u) => u.key).sort()).toEqual([...LABOUR_KEYS].sort());
+  });
+});
+
+describe('catalog/combination-ratings.json (invented demo data)', () => {
+  it('validates, names only seed parts, and is never rated above its protective device', async () => {
+    const { readSeedCombinations, readSeedCatalogue } = await import('../../server/db/seeders/catalogue');
+    const combos = readSeedCombinations(dir);
+    const items = new Map(readSeedCatalogue(dir).map((i) => [i.code, i]));
+    expect(combos.length).toBeGreaterThanOrEqual(4);
+    for (const c of combos) {
+      for (const code of c.componentCodes) expect(items.has(code), `${c.ref}: ${code}`).toBe(true);
+      // UL 508A SB4: a branch is rated no higher than its protective device's interrupting rating
+      const devices = c.componentCodes.map((code) => items.get(code)!).filter((i) => i.category === 'inverse-time-breaker' || i.category === 'fuse');
+      expect(devices.length, c.ref).toBeGreaterThan(0);
+      for (const d of devices) expect(c.ratingKa, `${c.ref} vs ${d.code}`).toBeLessThanOrEqual(d.sccrKa ?? 0);
+    }
   });
 });

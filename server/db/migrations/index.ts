@@ -5,6 +5,7 @@ import * as m0003 from './0003-catalogue-fields';
 import * as m0004 from './0004-change-feed';
 import * as m0005 from './0005-catalogue-feed';
 import * as m0006 from './0006-voltage-unbalance';
+import * as m0007 from './0007-combination-ratings';
 
 export const migrations = [
   ['0001-foundation', m0001],
@@ -13,4 +14,5 @@ export const migrations = [
   ['0004-change-feed', m0004],
   ['0005-catalogue-feed', m0005],
   ['0006-voltage-unbalance', m0006],
+  ['0007-combination-ratings', m0007],
 ] as const;

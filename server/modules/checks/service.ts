@@ -22,6 +22,7 @@ import { calculateHeat, type EnclosureMounting, type HeatSourceInput } from '../
 import { sizeControlTransformer } from '../../../shared/calc/control-power';
 import { panelNameplate } from '../../../shared/calc/nameplate';
 import { catalogueFor, labourUnitsFor } from '../catalogue/repository';
+import { activeCombinations } from '../catalogue/combinations';
 import { loadsOf } from '../panels/repository';
 import { loadView, requirePanel } from '../panels/service';
 import { panelEnclosureType } from '../bom/service';
@@ -382,7 +383,12 @@ export interface ChecksContext {
 export async function computeChecks(actor: CurrentUser, panelId: number): Promise<ChecksContext> {
   const panel = await requirePanel(actor, panelId);
   const job = panel.job;
-  const [loads, stored, catalogue] = await Promise.all([loadsOf(panel.id), storedBomLines(actor.organisationId, panel.id), catalogueFor(actor.organisationId)]);
+  const [loads, stored, catalogue, combinations] = await Promise.all([
+    loadsOf(panel.id),
+    storedBomLines(actor.organisationId, panel.id),
+    catalogueFor(actor.organisationId),
+    activeCombinations(actor.organisationId),
+  ]);
   const views = loads.map(loadView);
   const all = views.flatMap((l) => (l.effective ? [l.effective] : []));
   const selections = all.filter((s) => s.errors.length === 0);
@@ -412,7 +418,7 @@ export async function computeChecks(actor: CurrentUser, panelId: number): Promis
   const parts = sccrComponents(lines, byCode);
   const buckets: SccrBucketInput[] = [...parts.buckets.entries()].map(([tag, components]) => ({ tag, hp: bySel.get(tag)?.hp ?? null, volts: bySel.get(tag)?.volts, components }));
   const feederHp = selections.reduce((s, x) => s + (x.hp ?? 0), 0);
-  const input: SccrInput = { feeder: parts.feeder, feederHp: feederHp > 0 ? feederHp : null, buckets, availableFaultKa: job.availableFaultKa ?? null };
+  const input: SccrInput = { feeder: parts.feeder, feederHp: feederHp > 0 ? feederHp : null, buckets, combinations, availableFaultKa: job.availableFaultKa ?? null };
   const base = calculatePanelSccr(input);
   const sccr: SccrCheck = {
     ...base,

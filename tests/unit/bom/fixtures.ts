@@ -11,6 +11,7 @@ import {
   CatalogueItemSchema,
 } from '../../../shared/schemas/catalogue';
 import { loadSelection, type DeepPartial } from '../../fixtures/selection';
+import { isItemFile } from '../../../server/db/seeders/catalogue';
 
 export const CATALOG_DIR = path.resolve(__dirname, '../../../catalog');
 
@@ -20,7 +21,7 @@ export function seedCatalogue(): CatalogueItem[] {
   if (!cached) {
     cached = fs
       .readdirSync(CATALOG_DIR)
-      .filter((f) => f.endsWith('.json') && f !== 'labour-units.json')
+      .filter(isItemFile)
       .sort()
       .flatMap((f) => CatalogueFileSchema.parse(JSON.parse(fs.readFileSync(path.join(CATALOG_DIR, f), 'utf8'))));
   }
