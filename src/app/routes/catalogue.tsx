@@ -8,6 +8,7 @@ import { CatalogueTable } from '../../features/catalogue/components/catalogue-ta
 import { AddItemForm } from '../../features/catalogue/components/add-item-form';
 import { ImportPanel } from '../../features/catalogue/components/import-panel';
 import { ItemHistory } from '../../features/catalogue/components/item-history';
+import { CombinationsSection } from '../../features/catalogue/components/combinations-section';
 import { ErrorNote, Loading, PageHeader } from '../../components/ui/feedback';
 import { Button } from '../../components/ui/button';
 
@@ -65,6 +66,7 @@ export function Component() {
       {items.isPending ? <Loading what="Loading the catalogue" /> : items.isError ? <ErrorNote error={items.error} /> : (
         <CatalogueTable items={items.data} canEdit={canEdit} onChange={onChange} onHistory={onHistory} historyOf={history?.id ?? null} />
       )}
+      <CombinationsSection canEdit={hasRole(me, 'admin', 'estimator', 'engineer')} />
       <p className="text-xs text-ink-soft">Prices are the shop's own. A change here does not alter a bill of materials already priced: its lines keep the unit cost they were priced at until the estimator re-prices them.</p>
     </div>
   );

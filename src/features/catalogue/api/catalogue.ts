@@ -9,6 +9,7 @@ import type {
   ItemChanges,
   LabourUnitEntry,
 } from '../../../../shared/schemas/catalogue';
+import type { CombinationInput, CombinationView } from '../../../../shared/schemas/combination';
 
 export const catalogueQueries = {
   all: () => ['catalogue'] as const,
@@ -62,6 +63,30 @@ export function useUpdateLabourUnit() {
       const { key, ...body } = v;
       return patch<LabourUnitEntry>(`/api/labour-units/${key}`, body);
     },
+    onSettled: invalidate,
+  });
+}
+
+// ---- tested combination ratings (UL 508A SB4) ----------------------------------------------------
+export const combinationQueries = {
+  list: () => queryOptions({ queryKey: [...catalogueQueries.all(), 'combinations'], queryFn: () => get<CombinationView[]>('/api/catalogue/combinations') }),
+};
+
+/** A combination changes the SCCR worksheet of every panel using its parts: the panels' checks are stale too. */
+function useInvalidateCombinations() {
+  const qc = useQueryClient();
+  return () => Promise.all([qc.invalidateQueries({ queryKey: catalogueQueries.all() }), qc.invalidateQueries({ queryKey: ['panels'] })]);
+}
+
+export function useCreateCombination() {
+  const invalidate = useInvalidateCombinations();
+  return useMutation({ mutationFn: (v: CombinationInput) => post<CombinationView>('/api/catalogue/combinations', v), onSuccess: invalidate });
+}
+
+export function useUpdateCombination() {
+  const invalidate = useInvalidateCombinations();
+  return useMutation({
+    mutationFn: (v: { id: number; version: number; active: boolean }) => patch<CombinationView>(`/api/catalogue/combinations/${v.id}`, { active: v.active, version: v.version }),
     onSettled: invalidate,
   });
 }
