@@ -52,7 +52,7 @@ export interface SccrInput {
   /** horsepower used for an unmarked horsepower-rated device in the feeder (e.g. the sum of motors) */
   feederHp?: number | null;
   buckets: SccrBucketInput[];
-  combinations?: CombinationRating[];
+  combinations?: readonly CombinationRating[];
   /** the job's available fault current at the panel's line terminals, kA; null when not known */
   availableFaultKa: number | null;
   alternatives?: SccrAlternatives;

@@ -13,6 +13,7 @@ import { User } from '../../server/db/models/user';
 import { Organisation } from '../../server/db/models/organisation';
 import { DEMO_ORGANISATION } from '../../server/db/seeders/demo';
 import { catalogueFor } from '../../server/modules/catalogue/repository';
+import { activeCombinations } from '../../server/modules/catalogue/combinations';
 
 const uniq = () => `CF-${Date.now().toString(36)}-${Math.floor(Math.random() * 1e5)}`;
 let other: pg.Client; // "another instance": its own connection, not this process's pools
@@ -200,6 +201,21 @@ describe('the catalogue', () => {
     await until('the new item', async () => ((await catalogueFor(org.id)).some((c) => c.code === code) ? true : undefined));
     await other.query('update catalogue_items set unit_cost = unit_cost - 1 where organisation_id = $1 and code = $2', [org.id, first.code]);
     await other.query('delete from catalogue_items where organisation_id = $1 and code = $2', [org.id, code]);
+  });
+
+  it('keeps the tested combinations the same way, and drops them when another instance adds one', async () => {
+    const org = (await Organisation.findOne({ where: { name: DEMO_ORGANISATION } }))!;
+    await activeCombinations(org.id);
+    for (let i = 0; i < 10 && (await queriesDuring(() => activeCombinations(org.id))).length > 0; i++);
+    expect(await queriesDuring(() => activeCombinations(org.id))).toEqual([]);
+    const ref = `CF-${uniq()}`;
+    await other.query(
+      `insert into combination_ratings (organisation_id, ref, component_codes, rating_ka, max_volts, source, active, version, created_at, updated_at)
+       values ($1, $2, '["PW-BR-3P-030", "PW-CN-N1-120"]', 14, 480, 'test data', true, 0, now(), now())`,
+      [org.id, ref],
+    );
+    await until('the new combination', async () => ((await activeCombinations(org.id)).some((c) => c.id === ref) ? true : undefined));
+    await other.query('delete from combination_ratings where organisation_id = $1 and ref = $2', [org.id, ref]);
   });
 });
 

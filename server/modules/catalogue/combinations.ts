@@ -9,6 +9,7 @@ import { ConflictError, NotFoundError, ValidationError } from '../../../shared/e
 import { CombinationRatingRow } from '../../db/models/combination-rating';
 import { CatalogueItem as CatalogueRow } from '../../db/models/catalogue-item';
 import { db } from '../../db/sequelize';
+import { changeFeed } from '../../db/change-feed';
 import { defineRoute } from '../../http/route-table';
 import { recordActivity } from '../activity/service';
 
@@ -29,10 +30,24 @@ function view(r: CombinationRatingRow): CombinationView {
   };
 }
 
-/** The active combinations of an organisation, in the shape the SCCR calculation takes. */
-export async function activeCombinations(organisationId: number): Promise<CombinationRating[]> {
+/**
+ * The active combinations of an organisation, in the shape the SCCR calculation takes. Kept per process
+ * like the catalogue: while the change feed is live and no catalogue or combination statement has run.
+ */
+const KINDS = ['c'] as const;
+const cache = new Map<number, { token: number | null; list: readonly CombinationRating[] }>();
+
+export async function activeCombinations(organisationId: number): Promise<readonly CombinationRating[]> {
+  const feed = changeFeed();
+  const hit = cache.get(organisationId);
+  if (hit && feed.isCurrent(hit.token, KINDS)) return hit.list;
+  const token = feed.token(KINDS);
   const rows = await CombinationRatingRow.findAll({ where: { organisationId, active: true }, order: [['ref', 'ASC']] });
-  return rows.map((r) => ({ id: r.ref, componentCodes: r.componentCodes, ratingKa: r.ratingKa, ...(r.maxVolts !== null ? { maxVolts: r.maxVolts } : {}), source: r.source }));
+  const list = Object.freeze(
+    rows.map((r) => Object.freeze({ id: r.ref, componentCodes: r.componentCodes, ratingKa: r.ratingKa, ...(r.maxVolts !== null ? { maxVolts: r.maxVolts } : {}), source: r.source })),
+  );
+  cache.set(organisationId, { token, list });
+  return list;
 }
 
 /**
