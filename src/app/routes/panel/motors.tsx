@@ -88,7 +88,7 @@ export function Component() {
                 <th className="px-2 py-2">Starter</th>
                 <th className="px-2 py-2">Protective device</th>
                 <th className="px-2 py-2">Conductor</th>
-                <th className="px-2 py-2 text-right">OL max (A)</th>
+                <th className="px-2 py-2 text-right" title="The overload relay's own maximum dial setting (NEC 430.32(A)(1) limit at the current the relay carries)">OL relay max (A)</th>
                 <th className="px-2 py-2">Relays</th>
                 <th className="px-2 py-2">Encl.</th>
                 <th className="px-2 py-2">Flags</th>
