@@ -28,6 +28,7 @@ export class ChangeFeed {
   private readonly counters: Record<ChangeKind, number> = { s: 0, u: 0, j: 0, p: 0, c: 0 };
   private generation = 0;
   private readonly listeners = new Set<Listener>();
+  private readonly resetListeners = new Set<() => void>();
   /** true while the LISTEN connection is up */
   live = false;
   /** notifications received since start (for tests and diagnostics) */
@@ -143,7 +144,7 @@ export class ChangeFeed {
     this.generation++;
     if (this.beatTimer) clearInterval(this.beatTimer);
     this.beatTimer = null;
-    for (const l of this.listeners) l('s', '*');
+    for (const r of this.resetListeners) r();
   }
 
   /** How often the connection proves it still hears, and how long an answer may take (tests shorten both). */
@@ -181,10 +182,45 @@ export class ChangeFeed {
     return token !== null && token === this.token(kinds);
   }
 
-  /** Called for every notification (key '*' after a lost connection: forget everything). */
+  /** Called for every notification of a change. */
   onChange(l: Listener): () => void {
     this.listeners.add(l);
     return () => this.listeners.delete(l);
+  }
+
+  /** Called when the connection is lost: notifications may have been missed, so forget everything. */
+  onReset(r: () => void): () => void {
+    this.resetListeners.add(r);
+    return () => this.resetListeners.delete(r);
+  }
+}
+
+/**
+ * A per-process cache that follows the change feed: an entry read under a token is served without a
+ * query only while that token is current for the given kinds (see the header of this file).
+ */
+export class FeedCache<K, V> {
+  private readonly entries = new Map<K, { token: number | null; value: V }>();
+
+  constructor(
+    private readonly kinds: readonly ChangeKind[],
+    private readonly maxEntries = 10_000,
+  ) {}
+
+  async get(key: K, load: () => Promise<V>): Promise<V> {
+    const feed = changeFeed();
+    const hit = this.entries.get(key);
+    if (hit && feed.isCurrent(hit.token, this.kinds)) return hit.value;
+    const token = feed.token(this.kinds);
+    const value = await load();
+    if (this.entries.size >= this.maxEntries) this.entries.clear();
+    this.entries.set(key, { token, value });
+    return value;
+  }
+
+  /** A change made through this process, known before its notification arrives. */
+  forget(key: K) {
+    this.entries.delete(key);
   }
 }
 

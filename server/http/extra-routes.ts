@@ -5,8 +5,7 @@ import { importRoutes } from '../modules/panels/import-router';
 import { estimatingRoutes } from '../modules/bom/router';
 import { backupRoutes } from '../modules/backup/router';
 import { checkRoutes } from '../modules/checks/router';
-import { combinationRoutes } from '../modules/catalogue/combinations';
 
 export function extraRoutes(): AnyRoute[] {
-  return [...panelRoutes, ...importRoutes, ...estimatingRoutes, ...backupRoutes, ...checkRoutes, ...combinationRoutes];
+  return [...panelRoutes, ...importRoutes, ...estimatingRoutes, ...backupRoutes, ...checkRoutes];
 }

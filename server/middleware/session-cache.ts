@@ -30,10 +30,9 @@ export class CachedSessionStore extends session.Store {
   ) {
     super();
     feed.onChange((kind, key) => {
-      if (kind !== 's') return;
-      if (key === '*') this.entries.clear();
-      else this.entries.delete(key);
+      if (kind === 's') this.entries.delete(key);
     });
+    feed.onReset(() => this.entries.clear());
     inner.on('connect', () => this.emit('connect'));
     inner.on('disconnect', () => this.emit('disconnect'));
   }

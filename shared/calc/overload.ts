@@ -68,14 +68,17 @@ export function overloadRelay(input: { flaAmps: number; maxSettingAmps: number; 
   return { share: 1, count: starterType === 'two-speed' ? 2 : 1, settingAmps: round2(flaAmps), maxAmps: round2(maxSettingAmps), note: null, basis: nec(edition, '430.32(A)(1)') };
 }
 
-/**
- * The relay of a selection: the stored one, or for a selection stored before overload.relay existed,
- * the same rule applied to its starter type (the edition is read from the overload's basis).
- */
-export function relayOf(s: Pick<LoadSelection, 'flaAmps' | 'overload' | 'starter'>): OverloadRelay {
-  if (s.overload.relay) return s.overload.relay;
+type RelayInputs = Pick<LoadSelection, 'flaAmps' | 'overload' | 'starter'>;
+
+/** The relay for a selection's own starter type, FLA and limit (the edition is read from the overload's basis). */
+export function relayFor(s: RelayInputs): OverloadRelay {
   const edition: CodeEdition = /NEC 2020\b/.test(s.overload.basis) ? '2020' : '2023';
   return overloadRelay({ flaAmps: s.flaAmps, maxSettingAmps: s.overload.maxSettingAmps, starterType: s.starter.type }, edition);
+}
+
+/** The relay of a selection: the one it carries, or for a selection stored before overload.relay existed, relayFor. */
+export function relayOf(s: RelayInputs): OverloadRelay {
+  return s.overload.relay ?? relayFor(s);
 }
 
 /**
@@ -83,7 +86,7 @@ export function relayOf(s: Pick<LoadSelection, 'flaAmps' | 'overload' | 'starter
  * ("1 relay in the delta windings: set 17.9 A, max 22.37 A each"); null otherwise or when the drive
  * provides the overload.
  */
-export function relayWiringText(s: Pick<LoadSelection, 'flaAmps' | 'overload' | 'starter'>): string | null {
+export function relayWiringText(s: RelayInputs): string | null {
   if (s.overload.providedByDrive) return null;
   const relay = relayOf(s);
   if (relay.share === 1) return null;

@@ -3,7 +3,7 @@
 import type { LoadSelection } from '../schemas/selection';
 import type { OverrideInput, StoredOverride } from '../schemas/override';
 import { ValidationError } from '../errors';
-import { relayOf } from './overload';
+import { relayFor } from './overload';
 import { NEMA_SIZES } from '../standards/nema-ics-2-starter-sizes';
 import { ampacity310_16 } from '../standards/nec-table-310-16';
 
@@ -81,6 +81,6 @@ export function applyOverrides(sel: LoadSelection, overrides: ReadonlyArray<Pick
   }
   const eff = out as unknown as LoadSelection;
   // the overload relay's position follows the starter actually fitted (sizes stay the engine's)
-  if (eff.starter.type !== sel.starter.type) eff.overload.relay = relayOf({ ...eff, overload: { ...eff.overload, relay: undefined } });
+  if (eff.starter.type !== sel.starter.type) eff.overload.relay = relayFor(eff);
   return eff;
 }

@@ -45,3 +45,9 @@ export function unbalanceDerating(percent: number): UnbalanceDerating {
   }
   return { percent, factor: 0.75, basis: UNBALANCE_BASIS };
 }
+
+/** A motor's unbalance result in words, for the protection card and the submittal. */
+export function unbalanceText(u: { percent: number; deratingFactor: number | null; deratedHp: number | null }): string {
+  if (u.deratingFactor === null) return `${u.percent} %: above 5 %, operation not recommended`;
+  return `${u.percent} %: derate to ${u.deratingFactor} × rating${u.deratedHp !== null ? ` = ${u.deratedHp} hp` : ''}`;
+}

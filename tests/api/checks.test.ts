@@ -65,14 +65,16 @@ describe('panel checks', () => {
   });
 
   it('takes the tested combinations of breaker, contactor and overload relay (UL 508A SB4; invented demo combination data)', () => {
+    // (C-201's combination is left out here: another test swaps its contactor, which rightly breaks it;
+    // tests/api/combinations.test.ts checks that case on its own panel)
     const rows = checks.sccr.rows as Row[];
-    // C-201: PW-BR-3P-030 + PW-CN-N1-120 + PW-OT-13A-C10 tested to 14 kA (no higher than the breaker's 14 kA);
+    // V-501: PW-BR-3P-010 + PW-CN-N0-120 + PW-OT-4A-C10 tested to 14 kA (no higher than the breaker's 14 kA);
     // alone the overload relay would be taken at 5 kA (UL 508A Table SB4.1, 0–50 hp, from memory)
-    const c201 = rows.find((r) => r.location === 'C-201' && r.category === 'overload-relay')!;
-    expect(c201).toMatchObject({ source: 'combination', ratingKa: 14 });
-    expect(c201.basis).toContain('PW-CMB-N1-030');
-    const c201contactor = rows.find((r) => r.location === 'C-201' && r.category === 'contactor')!;
-    expect(c201contactor).toMatchObject({ source: 'combination', ratingKa: 14 });
+    const v501 = rows.find((r) => r.location === 'V-501' && r.category === 'overload-relay')!;
+    expect(v501).toMatchObject({ source: 'combination', ratingKa: 14 });
+    expect(v501.basis).toContain('PW-CMB-N0-010');
+    const v501contactor = rows.find((r) => r.location === 'V-501' && r.category === 'contactor')!;
+    expect(v501contactor).toMatchObject({ source: 'combination', ratingKa: 14 });
     const k301 = rows.find((r) => r.location === 'K-301' && r.category === 'overload-relay')!; // with the 25 kA breaker
     expect(k301).toMatchObject({ source: 'combination', ratingKa: 25 });
   });

@@ -73,6 +73,17 @@ describe('tested combination ratings', () => {
     }
     expect(after.find((r) => r.code === overload.code)!.basis).toContain(ref);
 
+    // a second panel with the same motor gets the same parts; swapping its contactor for another part
+    // breaks the tested combination there, and only there
+    const other = await onePanel();
+    expect((await bucketRows(other)).find((r) => r.code === overload.code)).toMatchObject({ source: 'combination' });
+    const lines = (await estimator.agent.get(`/api/panels/${other}/bom`).expect(200)).body.lines as Array<{ id: number; bucket: string; category: string; code: string }>;
+    const line = lines.find((l) => l.bucket === 'F-1' && l.category === 'contactor')!;
+    const alternatives = (await estimator.agent.get(`/api/panels/${other}/bom/lines/${line.id}/alternatives`).expect(200)).body as Array<{ code: string }>;
+    await send(estimator, 'patch', `/api/panels/${other}/bom/lines/${line.id}`, { swapCode: alternatives[0]!.code, swapReason: 'stock' }).expect(200);
+    expect((await bucketRows(other)).find((r) => r.code === overload.code)).toMatchObject({ source: 'assumed', ratingKa: 5 });
+    expect((await bucketRows(panelId)).find((r) => r.code === overload.code)).toMatchObject({ source: 'combination' });
+
     // a stale version is refused; the current one deactivates it
     await send(engineer, 'patch', `/api/catalogue/combinations/${created.id}`, { active: false, version: created.version + 1 }).expect(409);
     await send(estimator, 'patch', `/api/catalogue/combinations/${created.id}`, { active: false, version: created.version }).expect(200);

@@ -1,8 +1,18 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser } from 'playwright-core';
+import type { Browser, Page } from 'playwright-core';
 import { baseUrl, launch, newPage, screenshot, signInThroughForm } from '../setup/browser';
 
 const DEMO_TAGS = ['P-101', 'P-102', 'P-110', 'C-201', 'K-301', 'M-401', 'V-501', 'H-601'];
+
+/** The engineer on the demo panel MCC-1 of J-2041. */
+async function openDemoPanel(browser: Browser): Promise<Page> {
+  const page = await newPage(browser);
+  await signInThroughForm(page, 'engineer');
+  await page.waitForURL(/\/jobs$/);
+  await page.getByRole('table', { name: 'Jobs' }).getByRole('link', { name: 'J-2041' }).click();
+  await page.getByRole('link', { name: 'MCC-1 Pump hall' }).first().click();
+  return page;
+}
 
 describe('drawings in the browser', () => {
   let browser: Browser;
@@ -14,11 +24,7 @@ describe('drawings in the browser', () => {
   });
 
   it('shows the engineer a one-line and a connection card per motor, and the submittal download', async () => {
-    const page = await newPage(browser);
-    await signInThroughForm(page, 'engineer');
-    await page.waitForURL(/\/jobs$/);
-    await page.getByRole('table', { name: 'Jobs' }).getByRole('link', { name: 'J-2041' }).click();
-    await page.getByRole('link', { name: 'MCC-1 Pump hall' }).first().click();
+    const page = await openDemoPanel(browser);
     await page.getByRole('navigation', { name: 'Panel sections' }).getByRole('link', { name: 'Drawings' }).click();
     await page.waitForURL(/\/drawings$/);
 
@@ -49,11 +55,7 @@ describe('drawings in the browser', () => {
   });
 
   it('lists the wye-delta blower at its relay’s dial limit, never at the line value', async () => {
-    const page = await newPage(browser);
-    await signInThroughForm(page, 'engineer');
-    await page.waitForURL(/\/jobs$/);
-    await page.getByRole('table', { name: 'Jobs' }).getByRole('link', { name: 'J-2041' }).click();
-    await page.getByRole('link', { name: 'MCC-1 Pump hall' }).first().click();
+    const page = await openDemoPanel(browser);
     const row = page.getByRole('table', { name: 'Motors' }).getByRole('row').filter({ hasText: 'K-301' });
     // NEC 2023 430.32(A)(1): 125 % × 70 A = 87.5 A in line terms; in the delta windings 87.5 / √3 = 50.52 A
     await row.getByText('50.52 (in Δ) · C20').waitFor();

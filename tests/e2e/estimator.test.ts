@@ -1,4 +1,5 @@
-// The estimator's path: J-2041 → MCC-1 → Bill of materials → rebuild → totals → .xlsx download opened with exceljs.
+// The estimator's path: J-2041 → MCC-1 → Bill of materials → rebuild → totals → .xlsx download opened with exceljs;
+// the Catalogue page: items, labour units, and the tested combination ratings an engineer keeps there.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser } from 'playwright-core';
 import ExcelJS from 'exceljs';
@@ -123,5 +124,31 @@ describe('estimator in the browser', () => {
     await screenshot(page, 'catalogue-add-item');
     await form.getByRole('button', { name: 'Add item' }).click();
     await page.getByText('✔ Added PW-FU-CC-TEST-E2E.').waitFor();
+  });
+
+  it('lets an engineer keep the tested combination ratings: refuses one above the breaker’s rating, adds and sets one aside (UL 508A SB4; invented data)', async () => {
+    const page = await newPage(browser);
+    await signInThroughForm(page, 'engineer');
+    await page.waitForURL(/\/jobs$/);
+    await page.getByRole('link', { name: 'Catalogue' }).click();
+    const section = page.getByRole('region', { name: 'Tested combination ratings' });
+    // the seeded demo combination for the 7.5 hp reversing conveyor's bucket
+    await section.getByRole('row').filter({ hasText: 'PW-CMB-N1-030' }).waitFor();
+
+    const ref = `E2E-CMB-${Date.now().toString(36).toUpperCase()}`;
+    await section.getByRole('button', { name: '+ Add combination' }).click();
+    await section.getByLabel('Reference').fill(ref);
+    await section.getByLabel('Parts').fill('PW-BR-3P-030, PW-CN-N1-120, PW-OT-13A-C10');
+    await section.getByRole('textbox', { name: /^Rating/ }).fill('65');
+    await section.getByLabel('Source').fill('Maker table, row 12 (test data)');
+    await section.getByRole('button', { name: 'Add combination' }).click();
+    // PW-BR-3P-030 is marked 14 kA: the combination cannot be rated higher (UL 508A SB4)
+    await section.getByText('at most 14 kA (PW-BR-3P-030)').waitFor();
+    await section.getByRole('textbox', { name: /^Rating/ }).fill('14');
+    await section.getByRole('button', { name: 'Add combination' }).click();
+    const row = section.getByRole('row').filter({ hasText: ref });
+    await row.getByText('✔ in use').waitFor();
+    await row.getByRole('button', { name: 'Set aside' }).click();
+    await row.getByText('○ set aside').waitFor();
   });
 });

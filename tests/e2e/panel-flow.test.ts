@@ -1,6 +1,7 @@
 // The whole path of the three users: a designer adds motors through the wizard and by import and
 // submits; an engineer returns the panel with a comment and then signs off the fix; an estimator
-// downloads the bill of materials and sees the difference between two revisions.
+// downloads the bill of materials and sees the difference between two revisions. Then a new job whose
+// voltage unbalance the form works out from three measured voltages.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import fs from 'node:fs';
 import os from 'node:os';
@@ -146,5 +147,25 @@ describe('designer → engineer → estimator', () => {
     const names = wb.worksheets.map((w) => w.name);
     expect(names.some((n) => /summary/i.test(n))).toBe(true);
     expect(JSON.stringify(wb.worksheets.map((w) => w.getSheetValues()))).toContain('SP-4');
+  });
+});
+
+describe('new job', () => {
+  it('takes the voltage unbalance from three measured voltages', async () => {
+    const page = await newPage(browser);
+    await signInThroughForm(page, 'designer');
+    await page.waitForURL(/\/jobs$/);
+    await page.getByRole('link', { name: '+ New job' }).click();
+    await page.getByLabel('Job number').fill(`J-UB-${Date.now().toString(36)}`);
+    await page.getByLabel('Name', { exact: true }).fill('Intake screens (unbalanced supply)');
+    await page.getByText('Work it out from three line voltages').click();
+    await page.getByLabel('Measured voltage L1–L2').fill('460');
+    await page.getByLabel('Measured voltage L2–L3').fill('467');
+    await page.getByLabel('Measured voltage L3–L1').fill('450');
+    // 100 × 9 / 459 = 1.96 % (NEMA MG 1 14.36)
+    await page.getByRole('button', { name: 'Use 1.96 %' }).click();
+    await page.getByRole('button', { name: 'Create job' }).click();
+    await page.waitForURL(/\/jobs\/\d+$/);
+    await page.getByText('1.96 %').waitFor();
   });
 });

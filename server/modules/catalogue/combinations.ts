@@ -1,16 +1,15 @@
 // Tested combination ratings of the shop's catalogue parts (UL 508A SB4): stored per organisation,
-// edited by estimators, engineers and administrators, and read by the panel's SCCR worksheet.
-import { z } from 'zod';
+// edited by estimators, engineers and administrators (routes in router.ts), and read by the panel's SCCR worksheet.
+import type { z } from 'zod';
 import { Op, type Transaction } from 'sequelize';
 import type { CurrentUser } from '../../../shared/schemas/auth';
-import { CombinationInputSchema, CombinationUpdateSchema, type CombinationValues, type CombinationView } from '../../../shared/schemas/combination';
+import type { CombinationUpdateSchema, CombinationValues, CombinationView } from '../../../shared/schemas/combination';
 import type { CombinationRating } from '../../../shared/standards/ul508a-sb4';
 import { ConflictError, NotFoundError, ValidationError } from '../../../shared/errors';
 import { CombinationRatingRow } from '../../db/models/combination-rating';
 import { CatalogueItem as CatalogueRow } from '../../db/models/catalogue-item';
 import { db } from '../../db/sequelize';
-import { changeFeed } from '../../db/change-feed';
-import { defineRoute } from '../../http/route-table';
+import { FeedCache } from '../../db/change-feed';
 import { recordActivity } from '../activity/service';
 
 /** Catalogue categories whose marked rating is an interrupting rating: a combination cannot exceed it. */
@@ -34,20 +33,15 @@ function view(r: CombinationRatingRow): CombinationView {
  * The active combinations of an organisation, in the shape the SCCR calculation takes. Kept per process
  * like the catalogue: while the change feed is live and no catalogue or combination statement has run.
  */
-const KINDS = ['c'] as const;
-const cache = new Map<number, { token: number | null; list: readonly CombinationRating[] }>();
+const active = new FeedCache<number, readonly CombinationRating[]>(['c']);
 
 export async function activeCombinations(organisationId: number): Promise<readonly CombinationRating[]> {
-  const feed = changeFeed();
-  const hit = cache.get(organisationId);
-  if (hit && feed.isCurrent(hit.token, KINDS)) return hit.list;
-  const token = feed.token(KINDS);
-  const rows = await CombinationRatingRow.findAll({ where: { organisationId, active: true }, order: [['ref', 'ASC']] });
-  const list = Object.freeze(
-    rows.map((r) => Object.freeze({ id: r.ref, componentCodes: r.componentCodes, ratingKa: r.ratingKa, ...(r.maxVolts !== null ? { maxVolts: r.maxVolts } : {}), source: r.source })),
-  );
-  cache.set(organisationId, { token, list });
-  return list;
+  return active.get(organisationId, async () => {
+    const rows = await CombinationRatingRow.findAll({ where: { organisationId, active: true }, order: [['ref', 'ASC']] });
+    return Object.freeze(
+      rows.map((r) => Object.freeze({ id: r.ref, componentCodes: r.componentCodes, ratingKa: r.ratingKa, ...(r.maxVolts !== null ? { maxVolts: r.maxVolts } : {}), source: r.source })),
+    );
+  });
 }
 
 /**
@@ -98,28 +92,3 @@ export async function updateCombination(actor: CurrentUser, id: number, input: z
     return view(r);
   });
 }
-
-const ALL = ['admin', 'designer', 'estimator', 'engineer'] as const;
-const EDIT = ['admin', 'estimator', 'engineer'] as const;
-const CombinationId = z.object({ combinationId: z.coerce.number().int().positive() });
-
-export const combinationRoutes = [
-  defineRoute({ method: 'get', path: '/api/catalogue/combinations', access: ALL, summary: 'Tested combination ratings (UL 508A SB4)', handler: ({ user }) => listCombinations(user) }),
-  defineRoute({
-    method: 'post',
-    path: '/api/catalogue/combinations',
-    access: EDIT,
-    summary: 'Add a tested combination rating',
-    body: CombinationInputSchema,
-    handler: ({ user, body }) => createCombination(user, body),
-  }),
-  defineRoute({
-    method: 'patch',
-    path: '/api/catalogue/combinations/:combinationId',
-    access: EDIT,
-    summary: 'Change or deactivate a tested combination rating; 409 when the version is stale',
-    params: CombinationId,
-    body: CombinationUpdateSchema,
-    handler: ({ user, params, body }) => updateCombination(user, params.combinationId, body),
-  }),
-];

@@ -1,5 +1,5 @@
 import type { Transaction } from 'sequelize';
-import { changeFeed } from '../../db/change-feed';
+import { FeedCache } from '../../db/change-feed';
 import { CatalogueItem as CatalogueRow } from '../../db/models/catalogue-item';
 import { LabourUnit as LabourRow } from '../../db/models/labour-unit';
 import type { CatalogueItem, LabourUnit } from '../../../shared/schemas/catalogue';
@@ -45,25 +45,20 @@ export function fromItem(organisationId: number, i: CatalogueItem) {
  * instance's insert, update or delete moves the feed's token); the items are frozen, as every caller
  * shares them. Inside a transaction it is always read, so the transaction sees its own snapshot.
  */
-const CATALOGUE_KINDS = ['c'] as const;
-const catalogueCache = new Map<number, { token: number | null; items: readonly CatalogueItem[] }>();
+const catalogues = new FeedCache<number, readonly CatalogueItem[]>(['c']);
 
-export async function catalogueFor(organisationId: number, transaction?: Transaction): Promise<readonly CatalogueItem[]> {
-  const feed = changeFeed();
-  if (!transaction) {
-    const hit = catalogueCache.get(organisationId);
-    if (hit && feed.isCurrent(hit.token, CATALOGUE_KINDS)) return hit.items;
-  }
-  const token = feed.token(CATALOGUE_KINDS);
+async function readCatalogue(organisationId: number, transaction?: Transaction): Promise<readonly CatalogueItem[]> {
   const rows = await CatalogueRow.findAll({ where: { organisationId }, order: [['category', 'ASC'], ['code', 'ASC']], transaction });
-  const items = Object.freeze(
+  return Object.freeze(
     rows.map((r) => {
       const item = toItem(r);
       return Object.freeze({ ...item, ratings: Object.freeze({ ...item.ratings }) }) as CatalogueItem;
     }),
   );
-  if (!transaction) catalogueCache.set(organisationId, { token, items });
-  return items;
+}
+
+export async function catalogueFor(organisationId: number, transaction?: Transaction): Promise<readonly CatalogueItem[]> {
+  return transaction ? readCatalogue(organisationId, transaction) : catalogues.get(organisationId, () => readCatalogue(organisationId));
 }
 
 export async function labourUnitsFor(organisationId: number, transaction?: Transaction): Promise<LabourUnit[]> {

@@ -5,9 +5,13 @@ import { CatalogueItemBaseSchema, CatalogueItemSchema, CategorySchema, LabourKey
 import { DomainError, ValidationError } from '../../../shared/errors';
 import { IMPORT_LIMITS, catalogueToCsv, writeCatalogueXlsx } from './spreadsheet';
 import * as service from './service';
+import * as combinations from './combinations';
+import { CombinationInputSchema, CombinationUpdateSchema } from '../../../shared/schemas/combination';
 
 const ALL = ['admin', 'designer', 'estimator', 'engineer'] as const;
 const EDIT = ['admin', 'estimator'] as const;
+/** tested combinations are engineering data: the engineer keeps them too */
+const EDIT_COMBINATIONS = ['admin', 'estimator', 'engineer'] as const;
 
 const ItemId = z.object({ itemId: z.coerce.number().int().positive() });
 const Version = z.number().int().min(0);
@@ -167,5 +171,23 @@ export const catalogueRoutes = [
     params: z.object({ key: LabourKeySchema }),
     body: z.object({ hours: z.number().finite().nonnegative().max(100).optional(), description: z.string().trim().min(1).max(200).optional(), version: Version }).strict(),
     handler: ({ user, params, body }) => service.updateLabourUnit(user, params.key, body, body.version),
+  }),
+  defineRoute({ method: 'get', path: '/api/catalogue/combinations', access: ALL, summary: 'Tested combination ratings (UL 508A SB4)', handler: ({ user }) => combinations.listCombinations(user) }),
+  defineRoute({
+    method: 'post',
+    path: '/api/catalogue/combinations',
+    access: EDIT_COMBINATIONS,
+    summary: 'Add a tested combination rating',
+    body: CombinationInputSchema,
+    handler: ({ user, body }) => combinations.createCombination(user, body),
+  }),
+  defineRoute({
+    method: 'patch',
+    path: '/api/catalogue/combinations/:combinationId',
+    access: EDIT_COMBINATIONS,
+    summary: 'Change or deactivate a tested combination rating; 409 when the version is stale',
+    params: z.object({ combinationId: z.coerce.number().int().positive() }),
+    body: CombinationUpdateSchema,
+    handler: ({ user, params, body }) => combinations.updateCombination(user, params.combinationId, body),
   }),
 ];

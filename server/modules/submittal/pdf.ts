@@ -11,6 +11,7 @@ import type { ControlPowerResult } from '../../../shared/calc/control-power';
 import type { NameplateResult } from '../../../shared/calc/nameplate';
 import type { ConnectionCard, LineName } from '../../../shared/calc/connections';
 import { relayOf, relayWiringText } from '../../../shared/calc/overload';
+import { unbalanceText } from '../../../shared/standards/nema-mg1-voltage-unbalance';
 
 export interface SubmittalData {
   job: {
@@ -262,7 +263,7 @@ export function writeSubmittalPdf(
         ],
         ['Conductor', `${s.conductor.size} ${s.conductor.material}, ${s.conductor.ampacity} A (min ${fmt(s.conductor.minAmpacity)} A)`, s.conductor.basis],
         ...(s.unbalance
-          ? [['Voltage unbalance', s.unbalance.deratingFactor === null ? `${s.unbalance.percent} %: above 5 %, not recommended` : `${s.unbalance.percent} %: derate to ${s.unbalance.deratingFactor} x rating${s.unbalance.deratedHp !== null ? ` = ${s.unbalance.deratedHp} hp` : ''}`, s.unbalance.basis]]
+          ? [['Voltage unbalance', unbalanceText(s.unbalance), s.unbalance.basis]]
           : []),
         ['Disconnect', `>= ${fmt(s.disconnect.minAmps)} A${s.disconnect.minHp !== null ? `, >= ${s.disconnect.minHp} hp` : ''}`, s.disconnect.basis],
       ],

@@ -1,6 +1,6 @@
 import { Op, QueryTypes } from 'sequelize';
 import { db } from '../../db/sequelize';
-import { changeFeed } from '../../db/change-feed';
+import { FeedCache } from '../../db/change-feed';
 import { User } from '../../db/models/user';
 import { Organisation } from '../../db/models/organisation';
 
@@ -24,22 +24,14 @@ export async function findUserByEmail(email: string) {
  * served only while the change feed is live and no user row has changed since it was read (any
  * instance's change arrives as a notification); a change through this process forgets it at once.
  */
-const USER_KINDS = ['u'] as const;
-const userCache = new Map<number, { token: number | null; row: UserRow | null }>();
+const signedInUsers = new FeedCache<number, UserRow | null>(['u']);
 
 export function forgetUser(id: number) {
-  userCache.delete(id);
+  signedInUsers.forget(id);
 }
 
 export async function findSignedInUser(id: number): Promise<UserRow | null> {
-  const feed = changeFeed();
-  const hit = userCache.get(id);
-  if (hit && feed.isCurrent(hit.token, USER_KINDS)) return hit.row;
-  const token = feed.token(USER_KINDS);
-  const row = await findUserById(id);
-  if (userCache.size > 10_000) userCache.clear();
-  userCache.set(id, { token, row });
-  return row;
+  return signedInUsers.get(id, () => findUserById(id));
 }
 
 /** One query: the user with the organisation's name. */

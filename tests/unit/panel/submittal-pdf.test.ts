@@ -110,7 +110,7 @@ describe('PDF submittal', () => {
     });
     const { buf } = await render({ compress: false }, { ...data(), selections: [blower] });
     const text = extractPdfText(buf);
-    for (const s of ['1 relay in the delta windings: set 40.41 A, max 50.52 A each', 'Voltage unbalance', '1.96 %: derate to 0.952 x rating = 57.12 hp', 'NEMA MG 1 14.35']) {
+    for (const s of ['1 relay in the delta windings: set 40.41 A, max 50.52 A each', 'Voltage unbalance', '1.96 %: derate to 0.952 × rating = 57.12 hp', 'NEMA MG 1 14.35']) {
       expect(text, s).toContain(s);
     }
     expect(text).not.toContain('?');

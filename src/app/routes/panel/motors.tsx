@@ -3,9 +3,8 @@ import { useQuery } from '@tanstack/react-query';
 import { Link, useParams } from 'react-router-dom';
 import { panelQueries, useBulkEdit, useLoadAction } from '../../../features/panels/api/panels';
 import { hasRole, sessionQueries } from '../../../features/auth/api/session';
-import { relayLabel, scpdLabel, starterLabel } from '../../../features/panels/components/selection-summary';
-import { relayOf, relayWiringText } from '../../../../shared/calc/overload';
-import type { LoadSelection } from '../../../../shared/schemas/selection';
+import { overloadLabel, relayLabel, scpdLabel, starterLabel } from '../../../features/panels/components/selection-summary';
+import { relayWiringText } from '../../../../shared/calc/overload';
 import { Caution, Empty, ErrorNote } from '../../../components/ui/feedback';
 import { Button } from '../../../components/ui/button';
 import { inputClass } from '../../../components/ui/field';
@@ -116,7 +115,7 @@ export function Component() {
                     <td className="px-2 py-1.5">{s ? starterLabel(s) : '—'}</td>
                     <td className="px-2 py-1.5">{s ? `${scpdLabel(s.scpd.type)} ${s.scpd.ratingAmps} A` : '—'}</td>
                     <td className="px-2 py-1.5">{s?.conductor.size ?? '—'}</td>
-                    <td className="px-2 py-1.5 text-right" title={s ? (relayWiringText(s) ?? undefined) : undefined}>{s ? overloadCell(s) : '—'}</td>
+                    <td className="px-2 py-1.5 text-right" title={s ? (relayWiringText(s) ?? undefined) : undefined}>{s ? overloadLabel(s) : '—'}</td>
                     <td className="px-2 py-1.5">{s ? relayLabel(s) : '—'}</td>
                     <td className="px-2 py-1.5">{s ? s.enclosure.nemaType : '—'}</td>
                     <td className="px-2 py-1.5 text-xs">
@@ -148,15 +147,4 @@ export function Component() {
       <Caution />
     </div>
   );
-}
-
-/**
- * The overload column: the relay's own maximum dial setting, so that a wye-delta relay (in the delta
- * windings, FLA/√3) or a part-winding pair (half each) is never read at the line value.
- */
-function overloadCell(s: LoadSelection): string {
-  if (s.overload.providedByDrive) return 'drive';
-  const relay = relayOf(s);
-  const mark = relay.share === 1 ? '' : relay.share === 0.5 ? ' (2×, per half-winding)' : ' (in Δ)';
-  return `${relay.maxAmps}${mark} · C${s.overload.tripClass}`;
 }

@@ -1,5 +1,6 @@
 import type { LoadSelection } from '../../../../shared/schemas/selection';
 import { relayOf, relayWiringText } from '../../../../shared/calc/overload';
+import { unbalanceText } from '../../../../shared/standards/nema-mg1-voltage-unbalance';
 
 const SCPD_SHORT: Record<string, string> = {
   'inverse-time-breaker': 'Inverse-time CB',
@@ -16,6 +17,17 @@ export function starterLabel(s: LoadSelection) {
   return `${s.starter.type}${s.starter.nemaSize ? ` size ${s.starter.nemaSize}` : ''}`;
 }
 
+/**
+ * The overload in a list: the relay's own maximum dial setting, so that a wye-delta relay (in the delta
+ * windings, FLA/√3) or a part-winding pair (half each) is never read at the line value.
+ */
+export function overloadLabel(s: LoadSelection): string {
+  if (s.overload.providedByDrive) return 'drive';
+  const relay = relayOf(s);
+  const mark = relay.share === 1 ? '' : relay.share === 0.5 ? ' (2×, per half-winding)' : ' (in Δ)';
+  return `${relay.maxAmps}${mark} · C${s.overload.tripClass}`;
+}
+
 export function relayLabel(s: LoadSelection) {
   const r: string[] = [];
   if (s.relays.phaseLoss) r.push(s.relays.phaseLossByOverload ? 'Phase loss (in OL)' : 'Phase loss');
@@ -28,7 +40,8 @@ export function SelectionSummary({ selection, overridden = [] }: { selection: Lo
   const s = selection;
   // the relay's dial: the current it carries at full load (nameplate FLA, or its share in a wye-delta or
   // part-winding starter); the trip then falls within the 430.32 limit (common practice; the maker's instructions govern)
-  const wiring = s.overload.providedByDrive ? null : (relayWiringText(s) ?? `dial at ${relayOf(s).settingAmps} A (nameplate FLA)`);
+  const relay = relayOf(s);
+  const wiring = s.overload.providedByDrive ? null : (relayWiringText(s) ?? `dial at ${relay.settingAmps} A (nameplate FLA)`);
   const mark = (field: string) => (overridden.includes(field) ? <span className="ml-1 rounded bg-copper-100 px-1 text-[10px] font-bold text-copper-700" title="Overridden by the designer">OVERRIDE</span> : null);
   const rows: Array<[string, React.ReactNode, string]> = [
     ['Full-load current (table)', `${s.flcAmps} A`, s.flcSource],
@@ -40,7 +53,7 @@ export function SelectionSummary({ selection, overridden = [] }: { selection: Lo
         {mark('overload.tripClass')}
         {wiring ? <span className="block text-ink-soft" data-testid="overload-relay">{wiring}</span> : null}
       </>,
-      wiring ? `${s.overload.basis}; dial: ${relayOf(s).share === 1 ? 'common practice' : relayOf(s).basis}, the relay maker's instructions govern` : s.overload.basis,
+      wiring ? `${s.overload.basis}; dial: ${relay.share === 1 ? 'common practice' : relay.basis}, the relay maker's instructions govern` : s.overload.basis,
     ],
     ['Branch protection', <>{scpdLabel(s.scpd.type)} {s.scpd.ratingAmps} A{mark('scpd.ratingAmps')}{mark('scpd.type')} <span className="text-ink-soft">(max {s.scpd.maxPercent} % = {s.scpd.computedMaxAmps} A)</span></>, s.scpd.basis],
     ['Conductors', <>{s.conductor.size} {s.conductor.material === 'cu' ? 'Cu' : 'Al'} {s.conductor.tempRatingC} °C ({s.conductor.ampacity} A ≥ {s.conductor.minAmpacity} A){mark('conductor.size')}</>, s.conductor.basis],
@@ -48,14 +61,7 @@ export function SelectionSummary({ selection, overridden = [] }: { selection: Lo
     ['Relays', <>{relayLabel(s)}{mark('relays.phaseLoss')}{mark('relays.phaseReversal')}</>, 'common practice'],
     ['Enclosure', <>NEMA Type {s.enclosure.nemaType} <span className="text-ink-soft">(≈ {s.enclosure.ipCode}, one-way comparison)</span>{mark('enclosure.nemaType')}{s.enclosure.flagForEngineer ? ' ⚑ engineer to confirm' : ''}</>, 'NEMA 250'],
   ];
-  if (s.unbalance) {
-    const u = s.unbalance;
-    rows.push([
-      'Voltage unbalance',
-      u.deratingFactor === null ? `${u.percent} % — above 5 %: not recommended` : `${u.percent} % → ${u.deratingFactor} × rating${u.deratedHp !== null ? ` = ${u.deratedHp} hp` : ''}`,
-      u.basis,
-    ]);
-  }
+  if (s.unbalance) rows.push(['Voltage unbalance', unbalanceText(s.unbalance), s.unbalance.basis]);
   if (s.vfd) rows.push(['Drive', `≥ ${s.vfd.minOutputAmps} A ${s.vfd.duty} duty${s.vfd.inverterDutyMotor ? ' · inverter-duty motor' : ''}${s.vfd.outputFilter !== 'none' ? ` · ${s.vfd.outputFilter} filter` : ''}`, s.vfd.basis]);
   if (s.softStarter) rows.push(['Soft starter', `≥ ${s.softStarter.minAmps} A${s.softStarter.insideDelta ? ' inside delta' : ''}${s.softStarter.bypass ? ' · bypass contactor' : ''}`, 'common practice']);
   if (s.dc) rows.push(['DC', `${s.dc.field} field${s.dc.fieldLossProtection ? ' · field-loss protection' : ''}${s.dc.dynamicBraking ? ' · dynamic braking' : ''}`, 'common practice']);
