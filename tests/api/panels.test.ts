@@ -202,6 +202,8 @@ describe('motor-list import', () => {
     const wb = new ExcelJS.Workbook();
     await wb.xlsx.load(t.body as ArrayBuffer);
     expect(wb.getWorksheet('Motors')!.getRow(1).getCell(1).value).toBe('tag');
+    // the template belongs to a panel: none for a panel that is not the shop's
+    await designer.agent.get('/api/panels/2147483000/import/template').expect(404);
   });
 });
 

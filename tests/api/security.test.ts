@@ -186,10 +186,10 @@ describe('another organisation’s data', () => {
     for (const route of routeTable.filter((r) => r.method === 'get' && /:(id|panelId|loadId)\b/.test(r.path))) {
       const query = route.path.endsWith('change-report') ? '?from=0&to=0' : '';
       const url = route.path.replace(/:(\w+)/g, (_m, n: string) => ids[n] ?? '1');
+      // every route under another shop's id answers 404, even one whose answer does not depend on the row
+      // (the motor-list template): a byte comparison with an unknown id's answer is at the mercy of a
+      // timestamp inside the file
       const r = await admin.agent.get(`${url}${query}`);
-      // a route that answers the same for an id that exists nowhere does not read the row (e.g. a blank template)
-      const nowhere = await admin.agent.get(`${route.path.replace(/:(\w+)/g, (_m, n: string) => (n === 'number' ? '0' : '2147483000'))}${query}`);
-      if (r.status < 300 && nowhere.status === r.status && nowhere.text === r.text) continue;
       if (r.status !== 404) leaks.push(`${route.path}: ${r.status} ${JSON.stringify(r.body).slice(0, 120)}`);
       if (JSON.stringify(r.body ?? '').includes('Private note') || JSON.stringify(r.body ?? '').includes('Other MCC')) leaks.push(`${route.path}: shows the other organisation's data`);
     }

@@ -24,8 +24,8 @@ export const importRoutes = [
     access: DESIGN,
     summary: 'Motor-list template (.xlsx)',
     params: PanelId,
-    handler: async ({ res }) => {
-      const buf = await importTemplate();
+    handler: async ({ user, params, res }) => {
+      const buf = await importTemplate(user, params.panelId);
       res.setHeader('content-type', 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet');
       res.setHeader('content-disposition', 'attachment; filename="panelwright-motor-list.xlsx"');
       res.end(buf);

@@ -5,10 +5,9 @@ import { parse } from 'csv-parse/sync';
 import type { CurrentUser } from '../../../shared/schemas/auth';
 import { LoadSchema, type LoadInput } from '../../../shared/schemas/load';
 import { DomainError, ValidationError, zodIssues } from '../../../shared/errors';
-import { changePanel, addLoads } from './service';
+import { changePanel, addLoads, requirePanel } from './service';
 import { recordActivity } from '../activity/service';
 import { loadsOf } from './repository';
-import { requirePanel } from './service';
 import { checkXlsxPackage } from '../catalogue/spreadsheet';
 
 export const MAX_IMPORT_ROWS = 2000;
@@ -53,9 +52,23 @@ export const IMPORT_COLUMNS: Column[] = [
   { header: 'cableLengthFt', key: 'cableLengthFt', kind: 'number', note: 'feet', example: 80 },
 ];
 
-export async function importTemplate(): Promise<Buffer> {
+let templateBytes: Promise<Buffer> | null = null;
+
+/** The motor-list template for one of the actor's panels (404 for anyone else's). The workbook is
+ *  the same for every panel, so it is built once per process, with a fixed date inside. */
+export async function importTemplate(actor: CurrentUser, panelId: number): Promise<Buffer> {
+  await requirePanel(actor, panelId);
+  templateBytes ??= buildTemplate().catch((e: unknown) => {
+    templateBytes = null;
+    throw e;
+  });
+  return templateBytes;
+}
+
+async function buildTemplate(): Promise<Buffer> {
   const wb = new ExcelJS.Workbook();
   wb.creator = 'Panelwright';
+  wb.created = wb.modified = new Date(Date.UTC(2026, 0, 1));
   const ws = wb.addWorksheet('Motors');
   ws.columns = IMPORT_COLUMNS.map((c) => ({ header: c.header, key: c.key, width: Math.max(12, c.header.length + 2) }));
   ws.getRow(1).font = { bold: true };
