@@ -8,6 +8,9 @@ export default defineConfig({
           name: 'unit',
           include: ['tests/unit/**/*.test.ts'],
           environment: 'node',
+          // the unit files share two cores with the API and browser projects: a workbook round trip
+          // that takes 1 s alone has passed 5 s under that load
+          testTimeout: 20_000,
         },
       },
       {

@@ -6,6 +6,7 @@
 // 310.10(G), each set up to 500 kcmil (common practice), in separate raceways.
 
 import { OutsideTableError } from '../errors';
+import type { MotorLeadConductors } from '../schemas/selection';
 import { nec, type CodeEdition } from '../standards/code-edition';
 import { ambientCorrectionFactor, table310_15B1 } from '../standards/nec-table-310-15-b-1';
 import { TABLE_310_16, ampacity310_16, sizesFor, type ConductorMaterial, type TempRating } from '../standards/nec-table-310-16';
@@ -85,4 +86,39 @@ export function branchConductor(
   const choice = selectConductor(minAmpacity, input, edition);
   const clause = byDrive > byMotor ? '430.122(A) (125 % of the drive rated input current)' : '430.22 (125 % of table FLC)';
   return { ...choice, minAmpacity, basis: `${nec(edition, clause)}; ${choice.basis}` };
+}
+
+/**
+ * The conductors between the controller and the motor where each carries a share of the motor
+ * current (text written from memory; check against the published edition):
+ * - wye-start, delta-run, 430.22(C): based on 58 % of the motor full-load current;
+ * - part-winding, 430.22(D): based on 50 % of the motor full-load current.
+ * "Based on" is read as taking that share in place of the FLC in the 125 % rule of 430.22 (a reading;
+ * the engineer confirms). Six leads in both cases (T1–T6, or T1–T3 and T7–T9).
+ */
+export function motorLeadConductors(
+  input: { flcAmps: number; starterType: string; material: ConductorMaterial; tempRatingC: TempRating; ambientC: number },
+  edition: CodeEdition,
+): (MotorLeadConductors & { cautions: string[] }) | null {
+  const share = input.starterType === 'wye-delta' ? 0.58 : input.starterType === 'part-winding' ? 0.5 : null;
+  if (share === null) return null;
+  const minAmpacity = round2(input.flcAmps * share * 1.25);
+  const choice = selectConductor(minAmpacity, input, edition);
+  const clause = share === 0.58 ? '430.22(C) (wye-start, delta-run: 125 % of 58 % of FLC)' : '430.22(D) (part-winding: 125 % of 50 % of FLC)';
+  return {
+    count: 6,
+    share,
+    minAmpacity,
+    size: choice.size,
+    ampacity: choice.ampacity,
+    basis: `${nec(edition, clause)}; ${choice.basis}`,
+    cautions: choice.cautions,
+  };
+}
+
+/** The motor-lead conductors in words, or null where the branch conductors run to the motor. */
+export function motorLeadText(s: { conductor: { motorLeads?: MotorLeadConductors; material: ConductorMaterial } }): string | null {
+  const m = s.conductor.motorLeads;
+  if (!m) return null;
+  return `controller to motor: ${m.count} × ${m.size} ${s.conductor.material === 'cu' ? 'Cu' : 'Al'} (${m.ampacity} A ≥ ${m.minAmpacity} A, ${Math.round(m.share * 100)} % of FLC)`;
 }

@@ -81,6 +81,13 @@ export function applyOverrides(sel: LoadSelection, overrides: ReadonlyArray<Pick
   }
   const eff = out as unknown as LoadSelection;
   // the overload relay's position follows the starter actually fitted (sizes stay the engine's)
-  if (eff.starter.type !== sel.starter.type) eff.overload.relay = relayFor(eff);
+  if (eff.starter.type !== sel.starter.type) {
+    eff.overload.relay = relayFor(eff);
+    // conductors to the motor and per-winding devices were sized for the engine's wye-delta or
+    // part-winding starter: another starter takes them away (the warning says the sizes were the engine's)
+    delete eff.conductor.motorLeads;
+    delete eff.scpd.perWinding;
+  }
+  if (eff.scpd.type !== sel.scpd.type) delete eff.scpd.perWinding;
   return eff;
 }

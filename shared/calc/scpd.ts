@@ -5,7 +5,7 @@
 // Instantaneous-trip breakers: 430.52(C)(3), adjustable setting, listed combination controller.
 
 import { ValidationError } from '../errors';
-import type { ScpdType } from '../schemas/selection';
+import type { PerWindingScpd, ScpdType } from '../schemas/selection';
 import { nec, type CodeEdition } from '../standards/code-edition';
 import { nextHigherStandard, nextLowerStandard } from '../standards/nec-table-240-6a';
 import { exception2LimitPercent, maxPercent430_52, type MotorKind } from '../standards/nec-table-430-52';
@@ -78,4 +78,49 @@ export function branchProtection(
     basis: nec(edition, rating > computed + 1e-9 ? '430.52(C)(1) Exception No. 1, Table 430.52, Table 240.6(A)' : '430.52(C)(1), Table 430.52, Table 240.6(A)'),
     exception: rating > computed + 1e-9 ? 'exception-1' : 'none',
   };
+}
+
+// Part-winding motors, NEC 430.4 (text written from memory; check against the published edition):
+// each motor winding connection shall have branch short-circuit and ground-fault protection rated at
+// not more than one-half that specified by 430.52. Exception: one device for both windings is
+// permitted if it will allow the motor to start; time-delay (dual-element) fuses so used are
+// permitted at not more than 150 % of the motor full-load current.
+
+/** One device per half-winding: half the Table 430.52 value; the next higher standard rating where
+ *  the half is not one (430.52(C)(1) Exception No. 1 read into "that specified by 430.52"). */
+export function perWindingProtection(input: { flcAmps: number; type: ScpdType; motor: MotorKind }, edition: CodeEdition): PerWindingScpd {
+  const maxPercent = maxPercent430_52(input.motor, input.type) / 2;
+  const computed = round2((input.flcAmps * maxPercent) / 100);
+  if (input.type === 'instantaneous-trip-breaker') {
+    return { count: 2, maxPercent, computedMaxAmps: computed, ratingAmps: Math.floor(computed * 10) / 10, basis: nec(edition, '430.4, 430.52(C)(3), Table 430.52') };
+  }
+  const rating = nextHigherStandard(computed, edition, family(input.type));
+  return {
+    count: 2,
+    maxPercent,
+    computedMaxAmps: computed,
+    ratingAmps: rating,
+    basis: nec(edition, rating > computed + 1e-9 ? '430.4 (one-half of 430.52), 430.52(C)(1) Exception No. 1, Table 240.6(A)' : '430.4 (one-half of 430.52), Table 240.6(A)'),
+  };
+}
+
+/** One set of time-delay (dual-element) fuses for both windings of a part-winding motor: at most
+ *  150 % of the table FLC, at or below it (430.4 Exception). */
+export function partWindingSingleFuse(flcAmps: number, edition: CodeEdition): ScpdResult {
+  const computed = round2(flcAmps * 1.5);
+  return {
+    type: 'dual-element-fuse',
+    maxPercent: 150,
+    computedMaxAmps: computed,
+    ratingAmps: nextLowerStandard(computed, edition, 'fuse'),
+    basis: nec(edition, '430.4 Exception (one set of time-delay fuses for both windings, not over 150 % of FLC), Table 240.6(A)'),
+    exception: 'none',
+  };
+}
+
+/** The per-winding alternative in words, or null when the motor is not part-winding. */
+export function perWindingText(s: { scpd: { perWinding?: PerWindingScpd } }): string | null {
+  const p = s.scpd.perWinding;
+  if (!p) return null;
+  return `or one per half-winding: ${p.count} × ${p.ratingAmps} A (max ${p.maxPercent} % = ${p.computedMaxAmps} A each)`;
 }

@@ -8,7 +8,7 @@
 
 import { Engine, type RuleResult, type TopLevelCondition } from 'json-rules-engine';
 import { DomainError, ValidationError, zodIssues } from '../errors';
-import { branchConductor } from '../calc/conductor';
+import { branchConductor, motorLeadConductors } from '../calc/conductor';
 import { motorDisconnect } from '../calc/disconnect';
 import { softStarterMinAmps, vfdMinOutputAmps } from '../calc/drives';
 import { feederRollup, type FeederBranch } from '../calc/feeder';
@@ -17,10 +17,10 @@ import { lockedRotorCurrent } from '../calc/locked-rotor';
 import { nemaStarterSize } from '../calc/nema-starter-size';
 import { overloadMaxSetting, overloadRelay } from '../calc/overload';
 import { unbalanceDerating } from '../standards/nema-mg1-voltage-unbalance';
-import { branchProtection, motorKind } from '../calc/scpd';
+import { branchProtection, motorKind, partWindingSingleFuse, perWindingProtection } from '../calc/scpd';
 import { synchronousRpm } from '../calc/synchronous-speed';
 import { LoadSchema, SelectionInputSchema, SupplySchema, type Load, type LoadInput, type SelectionInput, type Supply, type SupplyInput } from '../schemas/load';
-import type { AssumedInput, LoadSelection, SelectionOutput, StarterType, SupplyKind, TraceEntry, UnbalanceResult } from '../schemas/selection';
+import type { AssumedInput, LoadSelection, PerWindingScpd, SelectionOutput, StarterType, SupplyKind, TraceEntry, UnbalanceResult } from '../schemas/selection';
 import { DEFAULT_CODE_EDITION, nec, type CodeEdition } from '../standards/code-edition';
 import { enclosureType } from '../standards/nema-250-enclosure-types';
 import { DECISION_KEYS, type DecisionKey, type Decisions } from './decisions';
@@ -281,6 +281,23 @@ export function createSelector(ruleFiles: ReadonlyArray<RuleFileInput>, options:
     if (!scpd && haveFlc && load.scpdOverride) {
       scpd = step('branch protection', () => branchProtection({ flcAmps, type: load.scpdType, motor: motorKind(load) }, edition));
     }
+    // Part-winding (NEC 430.4): the selection keeps one device for both windings under the exception
+    // (it must let the motor start; time-delay fuses then at most 150 % of FLC) and states the
+    // alternative of a device on each half-winding at one-half the 430.52 value.
+    let perWinding: PerWindingScpd | null = null;
+    if (scpd && starterType === 'part-winding') {
+      if (scpd.type === 'dual-element-fuse' && scpd.exception !== 'exception-2') scpd = partWindingSingleFuse(flcAmps, edition);
+      else scpd = { ...scpd, basis: `${scpd.basis}; ${nec(edition, '430.4 Exception')} (one device for both windings: it must let the motor start)` };
+      perWinding = step('branch protection per half-winding', () => perWindingProtection({ flcAmps, type: load.scpdType, motor: motorKind(load) }, edition));
+      if (perWinding) {
+        trace.push({
+          ruleId: 'sizing.scpd-per-winding',
+          decision: `scpd.perWinding = 2 × ${perWinding.ratingAmps} A (max ${perWinding.maxPercent} % = ${perWinding.computedMaxAmps} A each)`,
+          reason: 'a part-winding motor may instead have a device on each half-winding connection, each at one-half the 430.52 value',
+          basis: perWinding.basis,
+        });
+      }
+    }
     if (scpd) {
       trace.push({
         ruleId: 'sizing.scpd',
@@ -299,6 +316,20 @@ export function createSelector(ruleFiles: ReadonlyArray<RuleFileInput>, options:
     if (cond) {
       cautions.push(...cond.cautions);
       trace.push({ ruleId: 'sizing.conductor', decision: `conductor.size = ${cond.size} (${cond.ampacity} A >= ${cond.minAmpacity} A)`, reason: 'smallest conductor whose allowable ampacity covers the minimum', basis: cond.basis });
+    }
+    const leads = cond
+      ? step('motor-lead conductors', () =>
+          motorLeadConductors({ flcAmps, starterType, material: load.conductor.material, tempRatingC: load.conductor.tempRatingC, ambientC: supply.ambientC }, edition),
+        )
+      : null;
+    if (leads) {
+      cautions.push(...leads.cautions);
+      trace.push({
+        ruleId: 'sizing.motor-leads',
+        decision: `conductor.motorLeads = ${leads.count} × ${leads.size} (${leads.ampacity} A >= ${leads.minAmpacity} A)`,
+        reason: `between the controller and the motor each lead carries ${leads.share === 0.5 ? 'half' : 'about 58 % (1/√3)'} of the motor current`,
+        basis: leads.basis,
+      });
     }
     if (starterType === 'VFD' && load.driveInputAmps === undefined) {
       cautions.push('Drive input conductors follow 430.122(A): 125 % of the drive rated input current — recheck once the drive is chosen.');
@@ -397,10 +428,18 @@ export function createSelector(ruleFiles: ReadonlyArray<RuleFileInput>, options:
         ...(relay ? { relay } : {}),
       },
       scpd: scpd
-        ? { type: scpd.type, maxPercent: scpd.maxPercent, ratingAmps: scpd.ratingAmps, computedMaxAmps: scpd.computedMaxAmps, basis: scpd.basis }
+        ? { type: scpd.type, maxPercent: scpd.maxPercent, ratingAmps: scpd.ratingAmps, computedMaxAmps: scpd.computedMaxAmps, basis: scpd.basis, ...(perWinding ? { perWinding } : {}) }
         : { type: load.scpdType, maxPercent: 0, ratingAmps: 0, computedMaxAmps: 0, basis: 'not determined' },
       conductor: cond
-        ? { minAmpacity: cond.minAmpacity, size: cond.size, material: cond.material, tempRatingC: cond.tempRatingC, ampacity: cond.ampacity, basis: cond.basis }
+        ? {
+            minAmpacity: cond.minAmpacity,
+            size: cond.size,
+            material: cond.material,
+            tempRatingC: cond.tempRatingC,
+            ampacity: cond.ampacity,
+            basis: cond.basis,
+            ...(leads ? { motorLeads: { count: leads.count, share: leads.share, minAmpacity: leads.minAmpacity, size: leads.size, ampacity: leads.ampacity, basis: leads.basis } } : {}),
+          }
         : { minAmpacity: 0, size: 'not determined', material: load.conductor.material, tempRatingC: load.conductor.tempRatingC, ampacity: 0, basis: 'not determined' },
       disconnect: disc ?? { minAmps: 0, minHp: null, basis: 'not determined' },
       relays: {

@@ -64,6 +64,30 @@ export interface UnbalanceResult {
   basis: string;
 }
 
+/** Part-winding motors (NEC 430.4): a protective device on each half-winding's connection. */
+export interface PerWindingScpd {
+  /** devices, one per half-winding connection */
+  count: 2;
+  /** one-half of the Table 430.52 percentage */
+  maxPercent: number;
+  computedMaxAmps: number;
+  ratingAmps: number;
+  basis: string;
+}
+
+/** The conductors between the controller and the motor where they carry a share of the line current
+ *  (wye-start delta-run 430.22(C), part-winding 430.22(D)). */
+export interface MotorLeadConductors {
+  /** conductors between controller and motor (six leads for both starters) */
+  count: number;
+  /** share of the motor full-load current the sizing is based on: 0.58 or 0.5 */
+  share: number;
+  minAmpacity: number;
+  size: string;
+  ampacity: number;
+  basis: string;
+}
+
 export interface LoadSelection {
   tag: string;
   description?: string;
@@ -110,6 +134,8 @@ export interface LoadSelection {
     /** the arithmetic maximum before rounding */
     computedMaxAmps: number;
     basis: string;
+    /** part-winding motors: the alternative of a device on each half-winding (430.4); absent otherwise */
+    perWinding?: PerWindingScpd;
   };
   conductor: {
     minAmpacity: number;
@@ -118,6 +144,8 @@ export interface LoadSelection {
     tempRatingC: 60 | 75 | 90;
     ampacity: number;
     basis: string;
+    /** wye-delta and part-winding starters: the conductors from controller to motor (absent otherwise) */
+    motorLeads?: MotorLeadConductors;
   };
   disconnect: { minAmps: number; minHp: number | null; basis: string };
   relays: { phaseLoss: boolean; phaseReversal: boolean; phaseLossByOverload: boolean };

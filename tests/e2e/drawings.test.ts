@@ -60,5 +60,13 @@ describe('drawings in the browser', () => {
     // NEC 2023 430.32(A)(1): 125 % × 70 A = 87.5 A in line terms; in the delta windings 87.5 / √3 = 50.52 A
     await row.getByText('50.52 (in Δ) · C20').waitFor();
     expect(await row.getByText('87.5').count()).toBe(0);
+
+    // its six leads from controller to motor: 125 % of 58 % of the 77 A table FLC (Table 430.250, 60 hp
+    // 460 V) = 55.83 A (NEC 2023 430.22(C)) -> 6 AWG Cu, 65 A at 75 °C (Table 310.16) × 0.94 for the
+    // demo job's 35 °C ambient (Table 310.15(B)(1)(1)) = 61.1 A
+    await page.getByRole('navigation', { name: 'Panel sections' }).getByRole('link', { name: 'Protection' }).click();
+    await page.waitForURL(/\/protection$/);
+    await page.getByTestId('motor-leads').filter({ hasText: 'controller to motor: 6 × 6 AWG Cu (61.1 A ≥ 55.83 A, 58 % of FLC)' }).first().waitFor();
+    expect(await page.getByTestId('motor-leads').count()).toBe(1); // only the wye-delta blower has them
   });
 });

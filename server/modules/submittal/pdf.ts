@@ -11,6 +11,8 @@ import type { ControlPowerResult } from '../../../shared/calc/control-power';
 import type { NameplateResult } from '../../../shared/calc/nameplate';
 import type { ConnectionCard, LineName } from '../../../shared/calc/connections';
 import { relayOf, relayWiringText } from '../../../shared/calc/overload';
+import { perWindingText } from '../../../shared/calc/scpd';
+import { motorLeadText } from '../../../shared/calc/conductor';
 import { unbalanceText } from '../../../shared/standards/nema-mg1-voltage-unbalance';
 
 export interface SubmittalData {
@@ -253,7 +255,11 @@ export function writeSubmittalPdf(
       [
         ['Full-load current', `${fmt(s.flcAmps)} A`, s.flcSource],
         ['Starter', starterText(s), s.starter.basis],
-        ['Branch SCPD', `${s.scpd.ratingAmps} A ${SCPD_WORDS[s.scpd.type]} (max ${s.scpd.maxPercent} % = ${fmt(s.scpd.computedMaxAmps)} A)`, s.scpd.basis],
+        [
+          'Branch SCPD',
+          `${s.scpd.ratingAmps} A ${SCPD_WORDS[s.scpd.type]} (max ${s.scpd.maxPercent} % = ${fmt(s.scpd.computedMaxAmps)} A)${perWindingText(s) ? `; ${perWindingText(s)}` : ''}`,
+          s.scpd.perWinding ? `${s.scpd.basis}; per half-winding: ${s.scpd.perWinding.basis}` : s.scpd.basis,
+        ],
         [
           'Overload',
           s.overload.providedByDrive
@@ -261,7 +267,11 @@ export function writeSubmittalPdf(
             : `class ${s.overload.tripClass}, max ${fmt(s.overload.maxSettingAmps, 2)} A (${s.overload.maxPercent} %)${relayWiringText(s) ? `; ${relayWiringText(s)}` : ''}`,
           relayWiringText(s) ? `${s.overload.basis}; relay: ${relayOf(s).basis}` : s.overload.basis,
         ],
-        ['Conductor', `${s.conductor.size} ${s.conductor.material}, ${s.conductor.ampacity} A (min ${fmt(s.conductor.minAmpacity)} A)`, s.conductor.basis],
+        [
+          'Conductor',
+          `${s.conductor.size} ${s.conductor.material}, ${s.conductor.ampacity} A (min ${fmt(s.conductor.minAmpacity)} A)${motorLeadText(s) ? `; ${motorLeadText(s)}` : ''}`,
+          s.conductor.motorLeads ? `line side: ${s.conductor.basis}; ${s.conductor.motorLeads.basis}` : s.conductor.basis,
+        ],
         ...(s.unbalance
           ? [['Voltage unbalance', unbalanceText(s.unbalance), s.unbalance.basis]]
           : []),

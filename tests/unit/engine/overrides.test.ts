@@ -31,4 +31,20 @@ describe('applyOverrides', () => {
     expect(relayOf(stored)).toEqual(sel.overload.relay);
     expect(relayWiringText(stored)).toBe('1 relay in the delta windings: set 68.13 A, max 85.16 A each');
   });
+
+  it('drops the motor-lead conductors and per-winding devices sized for the engine\'s part-winding starter when another starter is fitted', async () => {
+    const sel = await selector.selectLoad(
+      motor({ hp: 25, volts: 230, fla: 60, serviceFactor: 1.0, leads: 9, connection: 'wye', startingLimit: 'reduced-inrush', starterPreference: 'part-winding' }),
+      { ...supply480, volts: 240 },
+    );
+    expect(sel.conductor.motorLeads).toBeDefined();
+    expect(sel.scpd.perWinding).toBeDefined();
+    const eff = applyOverrides(sel, [{ field: 'starter.type', value: 'RVSS' }]);
+    expect(eff.conductor.motorLeads).toBeUndefined();
+    expect(eff.scpd.perWinding).toBeUndefined();
+    // a changed device type leaves the starter's leads but not the per-winding devices of the other type
+    const fuse = applyOverrides(sel, [{ field: 'scpd.type', value: 'dual-element-fuse' }]);
+    expect(fuse.conductor.motorLeads).toEqual(sel.conductor.motorLeads);
+    expect(fuse.scpd.perWinding).toBeUndefined();
+  });
 });

@@ -179,6 +179,48 @@ describe('the overload relay as wired', () => {
   });
 });
 
+describe('wye-delta and part-winding branches: conductors to the motor and per-winding protection', () => {
+  // Clause texts of 430.4 and 430.22(C)/(D) written from memory; "based on 58 % / 50 % of FLC" read as
+  // that share in place of the FLC in the 125 % rule of 430.22 (a reading, marked so in the product).
+  it('wye-delta 100 hp 460 V: line conductors on 125 % of FLC, six motor leads on 125 % of 58 % of FLC (NEC 2023 430.22(C))', async () => {
+    const r = await selector.selectLoad(motor({ tag: 'C-401', hp: 100, volts: 460, fla: 118, serviceFactor: 1.15, leads: 6, connection: 'delta', startingLimit: 'reduced-inrush', starterPreference: 'wye-delta' }), supply480);
+    expect(r.flcAmps).toBe(124); // Table 430.250: 100 hp, 460 V
+    expect(r.conductor).toMatchObject({ minAmpacity: 155, size: '2/0 AWG', ampacity: 175 }); // 1.25 × 124; Table 310.16 Cu 75 °C: 1/0 = 150 A, 2/0 = 175 A
+    // 124 × 0.58 × 1.25 = 89.9 A; Table 310.16 Cu 75 °C: 4 AWG = 85 A, 3 AWG = 100 A
+    expect(r.conductor.motorLeads).toMatchObject({ count: 6, share: 0.58, minAmpacity: 89.9, size: '3 AWG', ampacity: 100 });
+    expect(r.conductor.motorLeads!.basis).toMatch(/^NEC 2023 430\.22\(C\)/);
+    expect(r.scpd.perWinding).toBeUndefined();
+    expect(r.trace.some((t) => t.ruleId === 'sizing.motor-leads')).toBe(true);
+  });
+
+  it('part-winding 25 hp 230 V, inverse-time breaker: one breaker for both windings (430.4 Exception) or one per half-winding at 125 % of FLC (NEC 2023 430.4)', async () => {
+    const r = await selector.selectLoad(motor({ tag: 'F-3', hp: 25, volts: 230, fla: 60, serviceFactor: 1.0, leads: 9, connection: 'wye', startingLimit: 'reduced-inrush', starterPreference: 'part-winding' }), supply240);
+    expect(r.flcAmps).toBe(68); // Table 430.250: 25 hp, 230 V
+    expect(r.scpd).toMatchObject({ type: 'inverse-time-breaker', maxPercent: 250, computedMaxAmps: 170, ratingAmps: 175 }); // Table 430.52 250 %, Table 240.6(A) next higher
+    expect(r.scpd.basis).toMatch(/430\.4 Exception/);
+    // one-half of 250 % = 125 %: 85 A -> 90 A, the next higher standard rating (Table 240.6(A))
+    expect(r.scpd.perWinding).toMatchObject({ count: 2, maxPercent: 125, computedMaxAmps: 85, ratingAmps: 90 });
+    // line side 1.25 × 68 = 85 A -> 4 AWG (85 A); motor leads 68 × 0.5 × 1.25 = 42.5 A -> 8 AWG (50 A), Table 310.16 Cu 75 °C
+    expect(r.conductor).toMatchObject({ minAmpacity: 85, size: '4 AWG' });
+    expect(r.conductor.motorLeads).toMatchObject({ count: 6, share: 0.5, minAmpacity: 42.5, size: '8 AWG', ampacity: 50 });
+    expect(r.conductor.motorLeads!.basis).toMatch(/^NEC 2023 430\.22\(D\)/);
+  });
+
+  it('part-winding with dual-element fuses: one set for both windings at most 150 % of FLC, at or below it (NEC 2023 430.4 Exception)', async () => {
+    const r = await selector.selectLoad(motor({ tag: 'F-4', hp: 25, volts: 230, fla: 60, serviceFactor: 1.0, leads: 9, connection: 'wye', startingLimit: 'reduced-inrush', starterPreference: 'part-winding', scpdType: 'dual-element-fuse' }), supply240);
+    // 150 % × 68 = 102 A -> 100 A (not the 175 % of Table 430.52, which would give 119 A -> 125 A)
+    expect(r.scpd).toMatchObject({ type: 'dual-element-fuse', maxPercent: 150, computedMaxAmps: 102, ratingAmps: 100 });
+    // per half-winding: one-half of 175 % = 87.5 % × 68 = 59.5 A -> 60 A
+    expect(r.scpd.perWinding).toMatchObject({ maxPercent: 87.5, computedMaxAmps: 59.5, ratingAmps: 60 });
+  });
+
+  it('a full-voltage starter has no motor-lead conductors and no per-winding devices', async () => {
+    const r = await selector.selectLoad(motor({ hp: 25, volts: 460, fla: 31, serviceFactor: 1.15 }), supply480);
+    expect(r.conductor.motorLeads).toBeUndefined();
+    expect(r.scpd.perWinding).toBeUndefined();
+  });
+});
+
 describe('a three-phase motor on an unbalanced supply (NEMA MG 1 14.35)', () => {
   it('3 % unbalance: derated to 0.88 × 25 hp = 22 hp, with a phase-loss / unbalance relay (common practice) and a caution', async () => {
     const r = await selector.selectLoad(motor({ hp: 25, volts: 460, fla: 31, serviceFactor: 1.15 }), { ...supply480, voltageUnbalancePercent: 3 });

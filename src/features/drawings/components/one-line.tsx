@@ -98,7 +98,7 @@ export function oneLineElements(s: LoadSelection): OneLineElement[] {
   out.push({
     kind: 'motor',
     label: `${s.tag}${s.hp !== null ? ` — ${s.hp} hp` : ''}`,
-    detail: [`FLC ${s.flcAmps} A`, ...relays].join(' · '),
+    detail: [`FLC ${s.flcAmps} A`, ...(s.conductor.motorLeads ? [`${s.conductor.motorLeads.count} leads ${s.conductor.motorLeads.size}`] : []), ...relays].join(' · '),
   });
   return out;
 }

@@ -1,5 +1,7 @@
 import type { LoadSelection } from '../../../../shared/schemas/selection';
 import { relayOf, relayWiringText } from '../../../../shared/calc/overload';
+import { perWindingText } from '../../../../shared/calc/scpd';
+import { motorLeadText } from '../../../../shared/calc/conductor';
 import { unbalanceText } from '../../../../shared/standards/nema-mg1-voltage-unbalance';
 
 const SCPD_SHORT: Record<string, string> = {
@@ -55,8 +57,22 @@ export function SelectionSummary({ selection, overridden = [] }: { selection: Lo
       </>,
       wiring ? `${s.overload.basis}; dial: ${relay.share === 1 ? 'common practice' : relay.basis}, the relay maker's instructions govern` : s.overload.basis,
     ],
-    ['Branch protection', <>{scpdLabel(s.scpd.type)} {s.scpd.ratingAmps} A{mark('scpd.ratingAmps')}{mark('scpd.type')} <span className="text-ink-soft">(max {s.scpd.maxPercent} % = {s.scpd.computedMaxAmps} A)</span></>, s.scpd.basis],
-    ['Conductors', <>{s.conductor.size} {s.conductor.material === 'cu' ? 'Cu' : 'Al'} {s.conductor.tempRatingC} °C ({s.conductor.ampacity} A ≥ {s.conductor.minAmpacity} A){mark('conductor.size')}</>, s.conductor.basis],
+    [
+      'Branch protection',
+      <>
+        {scpdLabel(s.scpd.type)} {s.scpd.ratingAmps} A{mark('scpd.ratingAmps')}{mark('scpd.type')} <span className="text-ink-soft">(max {s.scpd.maxPercent} % = {s.scpd.computedMaxAmps} A)</span>
+        {perWindingText(s) ? <span className="block text-ink-soft" data-testid="scpd-per-winding">{perWindingText(s)}</span> : null}
+      </>,
+      s.scpd.perWinding ? `${s.scpd.basis}; per half-winding: ${s.scpd.perWinding.basis}` : s.scpd.basis,
+    ],
+    [
+      'Conductors',
+      <>
+        {s.conductor.size} {s.conductor.material === 'cu' ? 'Cu' : 'Al'} {s.conductor.tempRatingC} °C ({s.conductor.ampacity} A ≥ {s.conductor.minAmpacity} A){mark('conductor.size')}
+        {motorLeadText(s) ? <span className="block text-ink-soft" data-testid="motor-leads">{motorLeadText(s)}</span> : null}
+      </>,
+      s.conductor.motorLeads ? `line side: ${s.conductor.basis}; ${s.conductor.motorLeads.basis}` : s.conductor.basis,
+    ],
     ['Disconnect', `≥ ${s.disconnect.minAmps} A${s.disconnect.minHp ? `, ≥ ${s.disconnect.minHp} hp` : ''}`, s.disconnect.basis],
     ['Relays', <>{relayLabel(s)}{mark('relays.phaseLoss')}{mark('relays.phaseReversal')}</>, 'common practice'],
     ['Enclosure', <>NEMA Type {s.enclosure.nemaType} <span className="text-ink-soft">(≈ {s.enclosure.ipCode}, one-way comparison)</span>{mark('enclosure.nemaType')}{s.enclosure.flagForEngineer ? ' ⚑ engineer to confirm' : ''}</>, 'NEMA 250'],
