@@ -104,14 +104,15 @@ export function motorLeadConductors(
   if (share === null) return null;
   const minAmpacity = round2(input.flcAmps * share * 1.25);
   const choice = selectConductor(minAmpacity, input, edition);
-  const clause = share === 0.58 ? '430.22(C) (wye-start, delta-run: 125 % of 58 % of FLC)' : '430.22(D) (part-winding: 125 % of 50 % of FLC)';
+  const clause = share === 0.58 ? '430.22(C) (wye-start, delta-run: 125 % of 58 % of FLC' : '430.22(D) (part-winding: 125 % of 50 % of FLC';
+  const reading = '; the 125 % of 430.22 applied to the share is a reading, the engineer confirms)';
   return {
     count: 6,
     share,
     minAmpacity,
     size: choice.size,
     ampacity: choice.ampacity,
-    basis: `${nec(edition, clause)}; ${choice.basis}`,
+    basis: `${nec(edition, clause)}${reading}; ${choice.basis}`,
     cautions: choice.cautions,
   };
 }

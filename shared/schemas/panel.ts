@@ -80,6 +80,17 @@ export interface PanelDetail extends PanelSummary {
   revisions: Array<{ number: number; approvedAt: string; approvedBy: string | null }>;
 }
 
+/** What the current rules and tables would change in a panel's stored selections. */
+export interface RuleCheckBody {
+  panelId: number;
+  panelVersion: number;
+  motorCount: number;
+  /** motors whose decisions differ, each with its differences */
+  changed: Array<{ loadId: number; tag: string; differences: Array<{ field: string; label: string; from: string; to: string }> }>;
+}
+
+export const ReselectSchema = z.object({ version: z.number().int().min(0) }).strict();
+
 export const CommentInputSchema = z.object({
   body: z.string().trim().min(1, 'Write a comment').max(5000),
   loadId: z.number().int().positive().nullable().default(null),

@@ -285,3 +285,63 @@ describe("the panel page's data", () => {
     expect(afterMotor.body.loads.map((l: { tag: string }) => l.tag)).toEqual(['Z-1']);
   });
 });
+
+describe('stored selections against the current rules', () => {
+  // A selection stored by an earlier rule set is imitated by writing an older-looking selection into
+  // the row: the 25 hp 460 V worked example (NEC 2023 Table 430.250 34 A; Table 430.52 250 % = 85 A
+  // -> 90 A, Table 240.6(A)) stored with a 100 A breaker, no phase-reversal relay and one caution fewer.
+  it('names every decision the current rules would change, selects again on request and then finds nothing', async () => {
+    const { Load } = await import('../../server/db/models/load');
+    const designer = await signInAs('designer');
+    const { job, panel } = await newPanel(designer);
+    const added = (await send(designer, 'post', `/api/panels/${panel.id}/loads`, { answers: { tag: 'P-7', supply: 'ac3', hp: 25, volts: 460, fla: 31, serviceFactor: 1.15, environment: 'indoor-dusty', reverseRotationHazard: true } }).expect(201)).body;
+    await send(designer, 'post', `/api/panels/${panel.id}/loads`, { answers: { tag: 'P-8', supply: 'ac3', hp: 10, volts: 460, environment: 'indoor-dusty' } }).expect(201);
+    const fresh = (await designer.agent.get(`/api/panels/${panel.id}/rule-check`).expect(200)).body;
+    expect(fresh).toMatchObject({ panelId: panel.id, motorCount: 2, changed: [] });
+
+    const row = (await Load.findByPk(added.id))!;
+    const sel = structuredClone(row.selection) as { scpd: { ratingAmps: number }; relays: { phaseReversal: boolean }; cautions: string[] };
+    expect(sel.scpd.ratingAmps).toBe(90);
+    expect(sel.relays.phaseReversal).toBe(true);
+    sel.scpd.ratingAmps = 100;
+    sel.relays.phaseReversal = false;
+    sel.cautions = sel.cautions.slice(1);
+    await Load.update({ selection: sel as unknown as Record<string, unknown> }, { where: { id: added.id } });
+
+    const check = (await designer.agent.get(`/api/panels/${panel.id}/rule-check`).expect(200)).body;
+    expect(check.changed).toHaveLength(1);
+    expect(check.changed[0].tag).toBe('P-7');
+    expect(check.changed[0].differences).toEqual([
+      { field: 'scpd.ratingAmps', label: 'Branch protection (A)', from: '100', to: '90' },
+      { field: 'relays.phaseReversal', label: 'Phase-reversal relay', from: 'no', to: 'yes' },
+      expect.objectContaining({ field: 'cautions', from: String(sel.cautions.length), to: expect.stringMatching(/^\d+ \(1 new or reworded\): “.+”$/) }),
+    ]);
+    // every role may look; only a panel builder (or admin) may select again
+    const engineer = await signInAs('engineer');
+    expect((await engineer.agent.get(`/api/panels/${panel.id}/rule-check`).expect(200)).body.changed).toHaveLength(1);
+    const p = (await designer.agent.get(`/api/panels/${panel.id}`).expect(200)).body;
+    await send(designer, 'post', `/api/panels/${panel.id}/reselect`, { version: p.version - 1 }).expect(409);
+    await send(engineer, 'post', `/api/panels/${panel.id}/reselect`, { version: p.version }).expect(403);
+    const done = (await send(designer, 'post', `/api/panels/${panel.id}/reselect`, { version: p.version }).expect(200)).body;
+    expect(done.motorCount).toBe(2);
+    expect(done.changed.map((c: { tag: string }) => c.tag)).toEqual(['P-7']);
+    expect((await designer.agent.get(`/api/panels/${panel.id}/rule-check`).expect(200)).body.changed).toEqual([]);
+    const after = (await designer.agent.get(`/api/panels/${panel.id}`).expect(200)).body;
+    expect(after.version).toBe(p.version + 1);
+    const p7 = after.loads.find((l: { tag: string }) => l.tag === 'P-7');
+    expect(p7.selection.scpd.ratingAmps).toBe(90);
+    expect(p7.selection.relays.phaseReversal).toBe(true);
+    const activity = (await designer.agent.get(`/api/jobs/${job.id}/activity`).expect(200)).body as Array<{ summary: string }>;
+    expect(activity.map((a) => a.summary)).toContain('Selected 2 motors again under the current rules: P-7 (branch protection, phase-reversal relay, cautions)');
+  });
+
+  it('refuses to select again while the panel is in review', async () => {
+    const designer = await signInAs('designer');
+    const { panel } = await newPanel(designer);
+    await send(designer, 'post', `/api/panels/${panel.id}/loads`, { answers: { tag: 'P-9', supply: 'ac3', hp: 10, volts: 460, environment: 'indoor-dusty' } }).expect(201);
+    let p = (await designer.agent.get(`/api/panels/${panel.id}`).expect(200)).body;
+    p = (await send(designer, 'post', `/api/panels/${panel.id}/submit`, { version: p.version }).expect(200)).body;
+    const r = await send(designer, 'post', `/api/panels/${panel.id}/reselect`, { version: p.version }).expect(409);
+    expect(r.body.error.message).toMatch(/in review/);
+  });
+});

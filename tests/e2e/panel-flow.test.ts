@@ -2,7 +2,7 @@
 // submits; an engineer returns the panel with a comment and then signs off the fix; an estimator
 // downloads the bill of materials and sees the difference between two revisions. Then a new job whose
 // voltage unbalance the form works out from three measured voltages.
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
@@ -147,6 +147,36 @@ describe('designer → engineer → estimator', () => {
     const names = wb.worksheets.map((w) => w.name);
     expect(names.some((n) => /summary/i.test(n))).toBe(true);
     expect(JSON.stringify(wb.worksheets.map((w) => w.getSheetValues()))).toContain('SP-4');
+  });
+
+  it('a selection stored by an earlier release: the panel names what the current rules change, and the designer selects again', async () => {
+    // imitate an earlier release by writing an older-looking breaker rating into SP-1's stored selection
+    const { default: pg } = await import('pg');
+    const client = new pg.Client({ connectionString: inject('e2eDatabaseUrl') });
+    await client.connect();
+    const panelId = Number(/\/panels\/(\d+)$/.exec(panelUrl)![1]);
+    const engine = await client.query(`SELECT selection->'scpd'->>'ratingAmps' AS amps FROM loads WHERE panel_id = $1 AND tag = 'SP-1'`, [panelId]);
+    const updated = await client.query(`UPDATE loads SET selection = jsonb_set(selection, '{scpd,ratingAmps}', '999') WHERE panel_id = $1 AND tag = 'SP-1'`, [panelId]);
+    await client.end();
+    expect(updated.rowCount).toBe(1);
+
+    const page = await newPage(browser);
+    await signInThroughForm(page, 'designer');
+    await page.waitForURL(/\/jobs$/);
+    await page.goto(`${panelUrl}/motors`);
+    const banner = page.getByRole('region', { name: 'Current rules' });
+    await banner.getByText(/^⟳ 1 of \d+ motors would select differently under the current rules and tables\.$/).waitFor();
+    await banner.getByText(/What would change/).click();
+    const row = banner.getByRole('table', { name: 'What the current rules would change' }).getByRole('row').filter({ hasText: 'SP-1' });
+    expect(await row.getByRole('cell').allTextContents()).toEqual(['SP-1', 'Branch protection (A)', '999', engine.rows[0].amps]);
+    await screenshot(page, 'rule-check');
+    // the panel is signed off as R1: selecting again opens a new draft
+    await banner.getByRole('button', { name: 'Select again (opens a draft after R1)' }).click();
+    await page.getByRole('status').filter({ hasText: 'Selected again under the current rules.' }).waitFor();
+    await page.locator('[data-state="draft"]').first().waitFor();
+    expect(await page.getByRole('region', { name: 'Current rules' }).count()).toBe(0);
+    await page.goto(`${panelUrl}/activity`);
+    await page.getByText('Selected 4 motors again under the current rules: SP-1 (branch protection)').first().waitFor();
   });
 });
 

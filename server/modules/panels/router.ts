@@ -1,10 +1,11 @@
 import { z } from 'zod';
 import { defineRoute } from '../../http/route-table';
 import { IdParamSchema } from '../../../shared/schemas/auth';
-import { BulkEditSchema, CommentInputSchema, PanelInputSchema, PanelUpdateSchema, ReviewActionSchema } from '../../../shared/schemas/panel';
+import { BulkEditSchema, CommentInputSchema, PanelInputSchema, PanelUpdateSchema, ReselectSchema, ReviewActionSchema } from '../../../shared/schemas/panel';
 import { OverridesPutSchema } from '../../../shared/schemas/override';
 import * as service from './service';
 import * as review from './review';
+import * as ruleCheck from './rule-check';
 
 const ALL = ['admin', 'designer', 'estimator', 'engineer'] as const;
 const DESIGN = ['admin', 'designer'] as const;
@@ -100,6 +101,24 @@ export const panelRoutes = [
     params: LoadId,
     body: OverridesPutSchema,
     handler: ({ user, params, body }) => service.setOverrides(user, params.loadId, body.overrides, body.version),
+  }),
+  defineRoute({
+    method: 'get',
+    path: '/api/panels/:panelId/rule-check',
+    access: ALL,
+    summary: 'What the current rules and tables would change in the stored selections, motor by motor',
+    params: PanelId,
+    handler: ({ user, params }) => ruleCheck.ruleCheck(user, params.panelId),
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/api/panels/:panelId/reselect',
+    access: DESIGN,
+    summary: 'Select every motor again under the current rules and tables (409 in review or when the version is stale)',
+    params: PanelId,
+    body: ReselectSchema,
+    status: 200,
+    handler: ({ user, params, body }) => ruleCheck.reselectUnderCurrentRules(user, params.panelId, body.version),
   }),
   defineRoute({
     method: 'post',

@@ -6,6 +6,7 @@ import { queryClient } from '../../../lib/query-client';
 import { ErrorNote, Loading } from '../../../components/ui/feedback';
 import { SignOffState } from '../../../components/ui/status';
 import { Button } from '../../../components/ui/button';
+import { RuleCheckBanner } from '../../../features/panels/components/rule-check-banner';
 
 export async function loader({ params }: LoaderFunctionArgs) {
   await queryClient.ensureQueryData(panelQueries.detail(Number(params.panelId)));
@@ -69,6 +70,7 @@ export function Component() {
           </Link>
         </p>
       ) : null}
+      <RuleCheckBanner panel={p} canEdit={hasRole(me, 'designer', 'admin')} />
       <nav aria-label="Panel sections" className="mb-4 flex gap-1 border-b border-line">
         {SECTIONS.map((s) => (
           <NavLink

@@ -1,6 +1,6 @@
 import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
 import { del, get, patch, post, put } from '../../../lib/api-client';
-import type { LoadView, PanelDetail, PanelInput, PanelSummary, CommentView } from '../../../../shared/schemas/panel';
+import type { LoadView, PanelDetail, PanelInput, PanelSummary, CommentView, RuleCheckBody } from '../../../../shared/schemas/panel';
 import type { OverrideInput } from '../../../../shared/schemas/override';
 import type { BomDiff } from '../../../../shared/calc/bom';
 
@@ -16,6 +16,9 @@ export const panelQueries = {
   all: () => ['panels'] as const,
   list: (jobId: number) => queryOptions({ queryKey: [...panelQueries.all(), 'list', jobId], queryFn: () => get<PanelSummary[]>(`/api/jobs/${jobId}/panels`) }),
   detail: (panelId: number) => queryOptions({ queryKey: [...panelQueries.all(), 'detail', panelId], queryFn: () => get<PanelDetail>(`/api/panels/${panelId}`) }),
+  /** keyed by the panel version, so any change to the panel asks again */
+  ruleCheck: (panelId: number, version: number) =>
+    queryOptions({ queryKey: [...panelQueries.all(), 'detail', panelId, 'rule-check', version], queryFn: () => get<RuleCheckBody>(`/api/panels/${panelId}/rule-check`), staleTime: 60_000 }),
   changeReport: (panelId: number, from: number, to: number) =>
     queryOptions({ queryKey: [...panelQueries.all(), 'detail', panelId, 'change-report', from, to], queryFn: () => get<ChangeReport>(`/api/panels/${panelId}/change-report?from=${from}&to=${to}`) }),
 };
@@ -42,6 +45,11 @@ export function usePanelAction(panelId: number) {
     mutationFn: (a: { action: 'submit' | 'return' | 'approve'; version: number; comment: string }) => post<PanelDetail>(`/api/panels/${panelId}/${a.action}`, { version: a.version, comment: a.comment }),
     onSuccess: invalidate,
   });
+}
+
+export function useReselect(panelId: number) {
+  const invalidate = useInvalidatePanel(panelId);
+  return useMutation({ mutationFn: (v: { version: number }) => post<{ motorCount: number; changed: RuleCheckBody['changed'] }>(`/api/panels/${panelId}/reselect`, v), onSuccess: invalidate });
 }
 
 export function useUpdatePanel(panelId: number) {

@@ -1,0 +1,64 @@
+// A panel's stored selections against the current rules and tables. A selection is stored when a
+// motor is saved; rule files and table modules change with releases of the product, so a draft can
+// hold selections the engine would no longer make. The check runs the engine on the stored answers
+// and names every decision that would change; "select again" stores the new selections.
+import type { CurrentUser } from '../../../shared/schemas/auth';
+import type { LoadInput } from '../../../shared/schemas/load';
+import type { LoadSelection } from '../../../shared/schemas/selection';
+import type { RuleCheckBody } from '../../../shared/schemas/panel';
+import { selectionDifferences } from '../../../shared/calc/selection-diff';
+import { recordActivity } from '../activity/service';
+import * as repo from './repository';
+import { selectAll } from './selection';
+import { changePanel, requirePanel, reselectPanel } from './service';
+import type { Load } from '../../db/models/load';
+
+async function differencesOf(job: Parameters<typeof selectAll>[0], loads: Load[]): Promise<RuleCheckBody['changed']> {
+  const out = await selectAll(job, loads.map((l) => l.answers as LoadInput));
+  if (!out) return [];
+  const changed: RuleCheckBody['changed'] = [];
+  loads.forEach((l, i) => {
+    const stored = l.selection as unknown as LoadSelection | null;
+    const now = out.results[i] as LoadSelection;
+    const differences = stored ? selectionDifferences(stored, now) : [{ field: 'selection', label: 'Selection', from: 'none', to: 'made' }];
+    if (differences.length) changed.push({ loadId: l.id, tag: l.tag, differences });
+  });
+  return changed;
+}
+
+/** "Branch protection (A)" -> "branch protection"; "NEMA size" stays. */
+function inSentence(label: string): string {
+  const bare = label.replace(/ \([^)]*\)$/, '');
+  return /^[A-Z][A-Z]/.test(bare) ? bare : bare.charAt(0).toLowerCase() + bare.slice(1);
+}
+
+export async function ruleCheck(actor: CurrentUser, panelId: number): Promise<RuleCheckBody> {
+  const p = await requirePanel(actor, panelId);
+  const loads = await repo.loadsOf(p.id);
+  return { panelId: p.id, panelVersion: p.version, motorCount: loads.length, changed: await differencesOf(p.job, loads) };
+}
+
+/** Runs the rules again for every motor of a draft or returned panel (a signed-off one opens a new draft). */
+export async function reselectUnderCurrentRules(actor: CurrentUser, panelId: number, version: number) {
+  return changePanel(actor, panelId, version, 'selected again under the current rules', async (p, t) => {
+    const loads = await repo.loadsOf(p.id, t);
+    const changed = await differencesOf(p.job, loads);
+    await reselectPanel(p, t);
+    await recordActivity(
+      actor,
+      {
+        entity: 'panel',
+        entityId: p.id,
+        jobId: p.jobId,
+        panelId: p.id,
+        action: 'reselected',
+        summary: changed.length
+          ? `Selected ${loads.length} motors again under the current rules: ${changed.map((c) => `${c.tag} (${c.differences.map((d) => inSentence(d.label)).join(', ')})`).join('; ')}`
+          : `Selected ${loads.length} motors again under the current rules: nothing changed`,
+        diff: Object.fromEntries(changed.map((c) => [c.tag, Object.fromEntries(c.differences.map((d) => [d.field, { from: d.from, to: d.to }]))])),
+      },
+      t,
+    );
+    return { motorCount: loads.length, changed };
+  });
+}
