@@ -345,3 +345,73 @@ describe('stored selections against the current rules', () => {
     expect(r.body.error.message).toMatch(/in review/);
   });
 });
+
+describe('the motor list as a workbook', () => {
+  const MOTORS = [
+    // the 25 hp 460 V worked example: NEC 2023 Table 430.250 34 A; Table 430.52 250 % = 85 A -> 90 A; 8 AWG Cu 75 °C
+    { tag: 'P-1', description: 'Feed pump', supply: 'ac3', hp: 25, volts: 460, fla: 31, serviceFactor: 1.15, codeLetter: 'G', design: 'B', energyEfficient: true, poles: 4, environment: 'indoor-dusty' },
+    { tag: 'K-1', description: '=HYPERLINK("http://example.test","blower")', supply: 'ac3', hp: 60, volts: 460, fla: 70, serviceFactor: 1.15, leads: 6, connection: 'delta', startingLimit: 'reduced-inrush', starterPreference: 'wye-delta', conductor: { material: 'al', tempRatingC: 90 }, inertia: 'high', reverseRotationHazard: true, environment: 'indoor-dusty' },
+    { tag: 'D-1', supply: 'dc', hp: 5, volts: 240, dcField: 'compound', quickStop: true, reversing: true, environment: 'indoor-dry' },
+    { tag: 'S-1', supply: 'ac1', hp: 1, volts: 115, singlePhaseType: 'capacitor-start', reversing: true, environment: 'outdoor' },
+    { tag: 'V-1', supply: 'ac3', hp: 20, volts: 460, speedControl: 'variable', turndown: 10, torque: 'constant', driveInputAmps: 30, cableLengthFt: 150, environment: 'washdown' },
+    { tag: 'O-1', supply: 'ac3', hp: 10, volts: 460, tempRiseC: 40, plugging: true, scpdType: 'dual-element-fuse', scpdOverride: { maxPercent: 225, reason: 'Motor trips on start at 175 %, checked on site' }, critical: true, environment: 'corrosive' },
+  ];
+
+  it('exports every answer in the import format and the selections as a schedule; the file imports back into another panel unchanged', async () => {
+    const designer = await signInAs('designer');
+    const { job, panel } = await newPanel(designer);
+    for (const answers of MOTORS) await send(designer, 'post', `/api/panels/${panel.id}/loads`, { answers }).expect(201);
+
+    const estimator = await signInAs('estimator'); // every role may download it
+    const r = await estimator.agent.get(`/api/panels/${panel.id}/motors.xlsx`).buffer(true).parse((res, cb) => {
+      const chunks: Buffer[] = [];
+      res.on('data', (c: Buffer) => chunks.push(c));
+      res.on('end', () => cb(null, Buffer.concat(chunks)));
+    }).expect(200);
+    expect(r.headers['content-type']).toBe('application/vnd.openxmlformats-officedocument.spreadsheetml.sheet');
+    expect(r.headers['content-disposition']).toContain(`${job.number}-MCC-F-motors.xlsx`);
+    const file = r.body as Buffer;
+    const wb = new ExcelJS.Workbook();
+    await wb.xlsx.load(file as unknown as ArrayBuffer);
+    expect(wb.worksheets.map((w) => w.name)).toEqual(['Motors', 'Selections', 'Columns', 'About']);
+
+    // the formula-looking description is a plain text cell, not a formula
+    const motorsSheet = wb.getWorksheet('Motors')!;
+    const header = (motorsSheet.getRow(1).values as unknown[]).slice(1);
+    const k1 = motorsSheet.getRow(3);
+    expect(k1.getCell(header.indexOf('description') + 1).value).toBe('=HYPERLINK("http://example.test","blower")');
+    expect(k1.getCell(header.indexOf('conductorMaterial') + 1).value).toBe('al');
+    expect(k1.getCell(header.indexOf('starterPreference') + 1).value).toBe('wye-delta');
+
+    const sched = wb.getWorksheet('Selections')!;
+    const sHead = (sched.getRow(1).values as unknown[]).slice(1) as string[];
+    const p1 = sched.getRow(2);
+    const col = (name: string) => p1.getCell(sHead.indexOf(name) + 1).value;
+    expect([col('Tag'), col('FLC (A)'), col('Rating (A)'), col('Conductor'), col('Overload max (A, line)')]).toEqual(['P-1', 34, 90, '8 AWG Cu 75 °C', 38.75]);
+    const k1s = sched.getRow(3);
+    // K-301-like blower: relay in the delta windings, 70 / √3 = 40.41 A (common practice); six leads to the motor
+    expect(k1s.getCell(sHead.indexOf('Relays × dial (A)') + 1).value).toBe('1 × 40.41');
+    expect(String(k1s.getCell(sHead.indexOf('To the motor') + 1).value)).toMatch(/^6 × /);
+    const about = wb.getWorksheet('About')!;
+    expect(JSON.stringify(about.getSheetValues())).toContain('qualified person');
+
+    // into a new panel of the same job: same answers, motor by motor
+    const other = (await send(designer, 'post', `/api/jobs/${job.id}/panels`, { name: 'MCC-G' }).expect(201)).body;
+    const commit = await designer.agent.post(`/api/panels/${other.id}/import/commit`).set('x-csrf-token', designer.token).attach('file', file, 'motors.xlsx');
+    expect(commit.status, JSON.stringify(commit.body)).toBe(201);
+    expect(commit.body.imported).toBe(MOTORS.length);
+    const copy = (await designer.agent.get(`/api/panels/${other.id}`).expect(200)).body as { loads: Array<{ tag: string; answers: unknown; selection: { scpd: unknown; conductor: unknown } }> };
+    const original = (await designer.agent.get(`/api/panels/${panel.id}`).expect(200)).body as typeof copy;
+    expect(copy.loads.map((l) => l.answers)).toEqual(MOTORS);
+    expect(copy.loads.map((l) => [l.selection.scpd, l.selection.conductor])).toEqual(original.loads.map((l) => [l.selection.scpd, l.selection.conductor]));
+  });
+
+  it('names the nested column of a bad nested answer in an import', async () => {
+    const designer = await signInAs('designer');
+    const { panel } = await newPanel(designer);
+    const csv = 'tag,supply,hp,volts,conductorTempC\nB-1,ac3,10,460,80\n';
+    const r = await designer.agent.post(`/api/panels/${panel.id}/import/preview`).set('x-csrf-token', designer.token).attach('file', Buffer.from(csv), 'motors.csv').expect(200);
+    expect(r.body.ok).toBe(false);
+    expect(r.body.rows[0].problems).toEqual([{ column: 'conductorTempC', message: expect.stringContaining('60, 75 or 90') }]);
+  });
+});

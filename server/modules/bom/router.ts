@@ -1,6 +1,7 @@
 import type { Response } from 'express';
 import { z } from 'zod';
 import { defineRoute, type AnyRoute } from '../../http/route-table';
+import { attachment } from '../../http/attachment';
 import { IdParamSchema } from '../../../shared/schemas/auth';
 import { BomCategorySchema, PartCodeSchema, UnitSchema } from '../../../shared/schemas/catalogue';
 import { catalogueRoutes } from '../catalogue/router';
@@ -41,16 +42,6 @@ const LinePatchBody = z
   })
   .strict();
 
-/** An ASCII file name for content-disposition, with the exact name in filename* (RFC 6266). */
-function attachment(res: Response, base: string, ext: 'xlsx' | 'csv') {
-  const name = `${base}.${ext}`;
-  const ascii = name.replace(/[^A-Za-z0-9._-]+/g, '-').replace(/-+/g, '-');
-  res.setHeader('content-disposition', `attachment; filename="${ascii}"; filename*=UTF-8''${encodeURIComponent(name)}`);
-  res.setHeader(
-    'content-type',
-    ext === 'xlsx' ? 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet' : 'text/csv; charset=utf-8',
-  );
-}
 
 async function stream(res: Response, out: { job: BomExportJob; panels: BomExportPanel[]; fileBase: string }, ext: 'xlsx' | 'csv') {
   attachment(res, out.fileBase, ext);

@@ -3,8 +3,11 @@ import { z } from 'zod';
 import { defineRoute } from '../../http/route-table';
 import { ValidationError } from '../../../shared/errors';
 import { MAX_IMPORT_BYTES, commitImport, importTemplate, panelPreview } from './import';
+import { motorListExport } from './motor-list';
+import { attachment } from '../../http/attachment';
 
 const DESIGN = ['admin', 'designer'] as const;
+const ALL = ['admin', 'designer', 'estimator', 'engineer'] as const;
 const PanelId = z.object({ panelId: z.coerce.number().int().positive() });
 
 const upload = multer({
@@ -18,6 +21,19 @@ function requireFile(file: Express.Multer.File | undefined): Express.Multer.File
 }
 
 export const importRoutes = [
+  defineRoute({
+    method: 'get',
+    path: '/api/panels/:panelId/motors.xlsx',
+    access: ALL,
+    summary: "The panel's motor list (.xlsx): every answer in the import format, the selections as a schedule",
+    params: PanelId,
+    handler: async ({ user, params, res }) => {
+      const out = await motorListExport(user, params.panelId);
+      attachment(res, out.base, 'xlsx');
+      res.end(out.buffer);
+      return undefined;
+    },
+  }),
   defineRoute({
     method: 'get',
     path: '/api/panels/:panelId/import/template',

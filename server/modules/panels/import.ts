@@ -19,6 +19,8 @@ interface Column {
   kind: 'string' | 'number' | 'boolean' | 'integer';
   note: string;
   example: string | number | boolean;
+  /** where the value sits in the answers when it is not `key` at the top (e.g. conductor.material) */
+  path?: readonly [string, string];
 }
 
 export const IMPORT_COLUMNS: Column[] = [
@@ -50,7 +52,42 @@ export const IMPORT_COLUMNS: Column[] = [
   { header: 'environment', key: 'environment', kind: 'string', note: 'indoor-dry, indoor-dusty, outdoor, washdown, corrosive, class1-div1 …', example: 'indoor-dusty' },
   { header: 'scpdType', key: 'scpdType', kind: 'string', note: 'inverse-time-breaker, instantaneous-trip-breaker, dual-element-fuse, non-time-delay-fuse', example: 'inverse-time-breaker' },
   { header: 'cableLengthFt', key: 'cableLengthFt', kind: 'number', note: 'feet', example: 80 },
+  { header: 'tempRiseC', key: 'tempRiseC', kind: 'number', note: 'marked temperature rise, °C (40 or less allows 125 % overload, 430.32)', example: '' },
+  { header: 'energyEfficient', key: 'energyEfficient', kind: 'boolean', note: 'yes/no; Design B energy-efficient (Table 430.52 instantaneous-trip 1100 %)', example: 'no' },
+  { header: 'poles', key: 'poles', kind: 'integer', note: 'even number (synchronous speed)', example: 4 },
+  { header: 'rotor', key: 'rotor', kind: 'string', note: 'squirrel-cage or wound-rotor', example: 'squirrel-cage' },
+  { header: 'plugging', key: 'plugging', kind: 'boolean', note: 'yes/no', example: 'no' },
+  { header: 'twoSpeed', key: 'twoSpeed', kind: 'boolean', note: 'yes/no; two-speed motor', example: 'no' },
+  { header: 'starterPreference', key: 'starterPreference', kind: 'string', note: 'rvss, wye-delta or part-winding (when inrush must be limited)', example: '' },
+  { header: 'insideDelta', key: 'insideDelta', kind: 'boolean', note: 'yes/no; soft starter inside the delta', example: 'no' },
+  { header: 'quickStop', key: 'quickStop', kind: 'boolean', note: 'yes/no; DC quick stops (dynamic braking)', example: 'no' },
+  { header: 'driveInputAmps', key: 'driveInputAmps', kind: 'number', note: "the chosen drive's rated input current, A (430.122(A))", example: '' },
+  { header: 'conductorMaterial', key: 'conductorMaterial', kind: 'string', note: 'cu or al (cu by default)', example: 'cu', path: ['conductor', 'material'] },
+  { header: 'conductorTempC', key: 'conductorTempC', kind: 'integer', note: 'insulation rating 60, 75 or 90 (75 by default)', example: 75, path: ['conductor', 'tempRatingC'] },
+  { header: 'scpdOverridePercent', key: 'scpdOverridePercent', kind: 'number', note: '430.52(C)(1) Exception No. 2 limit, % (only with a reason)', example: '', path: ['scpdOverride', 'maxPercent'] },
+  { header: 'scpdOverrideReason', key: 'scpdOverrideReason', kind: 'string', note: 'why the motor will not start at the normal limit', example: '', path: ['scpdOverride', 'reason'] },
 ];
+
+/** A column's value in a motor's answers (nested columns read their path). */
+export function answerValue(answers: Record<string, unknown>, c: Column): unknown {
+  if (!c.path) return answers[c.key];
+  const inner = answers[c.path[0]];
+  return inner && typeof inner === 'object' ? (inner as Record<string, unknown>)[c.path[1]] : undefined;
+}
+
+/** The column header for an answers path ("conductor.tempRatingC" -> "conductorTempC"). */
+function columnOf(path: string): string {
+  return IMPORT_COLUMNS.find((c) => (c.path ? c.path.join('.') : c.key) === path)?.header ?? path;
+}
+
+function setAnswer(answers: Record<string, unknown>, c: Column, value: unknown) {
+  if (!c.path) {
+    answers[c.key] = value;
+    return;
+  }
+  const inner = (answers[c.path[0]] ??= {}) as Record<string, unknown>;
+  inner[c.path[1]] = value;
+}
 
 let templateBytes: Promise<Buffer> | null = null;
 
@@ -180,14 +217,14 @@ export async function previewImport(buffer: Buffer, filename: string, existingTa
       if (!c) return;
       const { value, error } = toValue(c, cells[j] ?? '');
       if (error) problems.push({ column: c.header, message: error });
-      else if (value !== undefined) answers[c.key] = value;
+      else if (value !== undefined) setAnswer(answers, c, value);
     });
     const tag = String(answers.tag ?? '');
     let parsed: LoadInput | null = null;
     if (problems.length === 0) {
       const r = LoadSchema.safeParse(answers);
       if (r.success) parsed = answers as LoadInput;
-      else for (const iss of zodIssues(r.error.issues)) problems.push({ column: iss.path || 'row', message: iss.message });
+      else for (const iss of zodIssues(r.error.issues)) problems.push({ column: columnOf(iss.path) || 'row', message: iss.message });
     }
     if (tag && seen.has(tag.toLowerCase())) problems.push({ column: 'tag', message: `tag ${tag} is already on the panel or earlier in the file` });
     if (tag) seen.add(tag.toLowerCase());

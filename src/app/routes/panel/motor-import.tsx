@@ -39,7 +39,7 @@ export function Component() {
       <h2 className="text-lg font-semibold">Import a motor list</h2>
       <ol className="list-decimal space-y-1 pl-5 text-sm">
         <li>
-          <a className="font-semibold text-copper-700 underline" href={`/api/panels/${panelId}/import/template`}>Download the template (.xlsx)</a> — one row per motor; the second sheet explains every column. CSV with the same header row works too.
+          <a className="font-semibold text-copper-700 underline" href={`/api/panels/${panelId}/import/template`}>Download the template (.xlsx)</a> — one row per motor; the second sheet explains every column. CSV with the same header row works too, and so does a motor list exported from another panel (its first sheet is this format).
         </li>
         <li>Upload it for a preview: each row's problems are shown and nothing is saved.</li>
         <li>Import: all rows go in together, or none.</li>

@@ -41,6 +41,11 @@ export function Component() {
         ) : p.status === 'in_review' ? (
           <p className="text-sm text-state-review">◔ In review: motors are read-only until the engineer signs off or returns the panel.</p>
         ) : null}
+        {p.loads.length ? (
+          <a href={`/api/panels/${panelId}/motors.xlsx`} className="rounded border border-line bg-panel px-3 py-1.5 text-sm font-semibold hover:border-copper-500" download>
+            Export motor list (.xlsx)
+          </a>
+        ) : null}
         {p.rollup ? (
           <span className="ml-auto text-sm">
             Feeder: <strong>{p.rollup.feeder.minAmpacity} A</strong> min ampacity · <strong>{p.rollup.feeder.conductorSize}</strong> · protective device ≤{' '}
