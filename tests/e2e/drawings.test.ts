@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
+import ExcelJS from 'exceljs';
 import { baseUrl, launch, newPage, screenshot, signInThroughForm } from '../setup/browser';
 
 const DEMO_TAGS = ['P-101', 'P-102', 'P-110', 'C-201', 'K-301', 'M-401', 'V-501', 'H-601'];
@@ -60,6 +61,15 @@ describe('drawings in the browser', () => {
     // NEC 2023 430.32(A)(1): 125 % × 70 A = 87.5 A in line terms; in the delta windings 87.5 / √3 = 50.52 A
     await row.getByText('50.52 (in Δ) · C20').waitFor();
     expect(await row.getByText('87.5').count()).toBe(0);
+
+    // the motor list as a workbook: the import format first, then the schedule
+    const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('link', { name: 'Export motor list (.xlsx)' }).click()]);
+    expect(download.suggestedFilename()).toBe('J-2041-MCC-1 Pump hall-motors.xlsx');
+    const wb = new ExcelJS.Workbook();
+    await wb.xlsx.readFile((await download.path())!);
+    expect(wb.worksheets.map((w) => w.name)).toEqual(['Motors', 'Selections', 'Columns', 'About']);
+    const tags = (wb.getWorksheet('Selections')!.getColumn(1).values as unknown[]).slice(2);
+    expect(tags).toEqual(DEMO_TAGS);
 
     // its six leads from controller to motor: 125 % of 58 % of the 77 A table FLC (Table 430.250, 60 hp
     // 460 V) = 55.83 A (NEC 2023 430.22(C)) -> 6 AWG Cu, 65 A at 75 °C (Table 310.16) × 0.94 for the
