@@ -124,6 +124,9 @@ describe('review and sign-off', () => {
     // editing a signed-off panel opens a new draft; R0 stays as it was
     const again = (await designer.agent.get(`/api/panels/${panel.id}`)).body;
     await send(designer, 'post', `/api/panels/${panel.id}/loads`, { answers: { tag: 'P-2', supply: 'ac3', hp: 20, volts: 460 } }).expect(201);
+    // P-1 moves to a washdown area: NEMA 250 Type 4X instead of 12 (the enclosure rules)
+    const p1 = (await designer.agent.get(`/api/panels/${panel.id}`)).body.loads.find((l: { tag: string }) => l.tag === 'P-1');
+    await send(designer, 'put', `/api/loads/${p1.id}`, { answers: { ...p1.answers, environment: 'washdown' }, version: p1.version }).expect(200);
     const draft = (await designer.agent.get(`/api/panels/${panel.id}`)).body;
     expect(draft.status).toBe('draft');
     expect(draft.version).toBeGreaterThan(again.version);
@@ -136,6 +139,8 @@ describe('review and sign-off', () => {
     expect(d.revisionNumber).toBe(1);
     const report = (await estimator.agent.get(`/api/panels/${panel.id}/change-report?from=0&to=1`).expect(200)).body;
     expect(report.motors.added).toEqual(['P-2']);
+    expect(report.motors.changed).toEqual(['P-1']);
+    expect(report.motors.decisions).toEqual([{ tag: 'P-1', differences: [{ field: 'enclosure.nemaType', label: 'Enclosure type', from: '12', to: '4X' }] }]);
     expect(report.bom.added.length).toBeGreaterThan(0);
     expect(report.totals.sellDelta).toBeGreaterThan(0);
     expect(await Revision.count({ where: { panelId: panel.id } })).toBe(2);

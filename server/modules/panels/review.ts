@@ -4,6 +4,8 @@ import type { CurrentUser } from '../../../shared/schemas/auth';
 import type { PanelState } from '../../../shared/schemas/panel';
 import type { BomLine } from '../../../shared/schemas/catalogue';
 import { computeTotals, diffBoms } from '../../../shared/calc/bom';
+import { selectionDifferences } from '../../../shared/calc/selection-diff';
+import type { LoadSelection } from '../../../shared/schemas/selection';
 import { ConflictError, NotFoundError, ValidationError } from '../../../shared/errors';
 import * as repo from './repository';
 import { loadView, panelDetail, requirePanel } from './service';
@@ -103,8 +105,21 @@ export async function compareRevisions(actor: CurrentUser, panelId: number, a: n
   const lb = (rb.snapshot as { bom: BomLine[] }).bom;
   const ta = (ra.snapshot as { totals: { sell: number; materialCost: number; labourHours: number } }).totals;
   const tb = (rb.snapshot as { totals: { sell: number; materialCost: number; labourHours: number } }).totals;
-  const loadsA = new Map(((ra.snapshot as { loads: Array<{ tag: string; answers: unknown }> }).loads ?? []).map((l) => [l.tag, JSON.stringify(l.answers)]));
-  const loadsB = new Map(((rb.snapshot as { loads: Array<{ tag: string; answers: unknown }> }).loads ?? []).map((l) => [l.tag, JSON.stringify(l.answers)]));
+  type FrozenLoad = { tag: string; answers: unknown; selection?: LoadSelection | null; effective?: LoadSelection | null };
+  const frozenA = (ra.snapshot as { loads?: FrozenLoad[] }).loads ?? [];
+  const frozenB = (rb.snapshot as { loads?: FrozenLoad[] }).loads ?? [];
+  const loadsA = new Map(frozenA.map((l) => [l.tag, JSON.stringify(l.answers)]));
+  const loadsB = new Map(frozenB.map((l) => [l.tag, JSON.stringify(l.answers)]));
+  // the decisions that moved for a motor on both revisions (answers changed, an override, the job's
+  // supply, or a release of the rules), from the effective selections frozen with each revision
+  const effA = new Map(frozenA.map((l) => [l.tag, l.effective ?? l.selection ?? null]));
+  const decisions = frozenB.flatMap((l) => {
+    const before = effA.get(l.tag);
+    const after = l.effective ?? l.selection ?? null;
+    if (!before || !after) return [];
+    const differences = selectionDifferences(before, after);
+    return differences.length ? [{ tag: l.tag, differences }] : [];
+  });
   return {
     from: a,
     to: b,
@@ -114,6 +129,7 @@ export async function compareRevisions(actor: CurrentUser, panelId: number, a: n
       added: [...loadsB.keys()].filter((k) => !loadsA.has(k)),
       removed: [...loadsA.keys()].filter((k) => !loadsB.has(k)),
       changed: [...loadsB.keys()].filter((k) => loadsA.has(k) && loadsA.get(k) !== loadsB.get(k)),
+      decisions,
     },
   };
 }

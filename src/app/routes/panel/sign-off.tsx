@@ -26,6 +26,25 @@ function ChangeReport({ panelId, from, to }: { panelId: number; from: number; to
         Motors added: <strong>{d.motors.added.join(', ') || 'none'}</strong> · removed: <strong>{d.motors.removed.join(', ') || 'none'}</strong> · changed:{' '}
         <strong>{d.motors.changed.join(', ') || 'none'}</strong>
       </p>
+      {d.motors.decisions.length ? (
+        <table className="dense w-full text-sm" aria-label="Decisions that changed">
+          <thead className="text-left text-xs uppercase text-ink-soft">
+            <tr><th className="py-1">Motor</th><th>Decision</th><th>R{d.from}</th><th>R{d.to}</th></tr>
+          </thead>
+          <tbody>
+            {d.motors.decisions.flatMap((m) =>
+              m.differences.map((x, i) => (
+                <tr key={`${m.tag}-${x.field}`} className="border-t border-line/60 align-top">
+                  <td className="py-1 font-semibold">{i === 0 ? m.tag : ''}</td>
+                  <td>{x.label}</td>
+                  <td>{x.from}</td>
+                  <td className="font-semibold">{x.to}</td>
+                </tr>
+              )),
+            )}
+          </tbody>
+        </table>
+      ) : null}
       <p className="text-sm">
         Material {money(d.totals.from.materialCost)} → {money(d.totals.to.materialCost)} (<strong>{d.totals.materialDelta >= 0 ? '+' : ''}{money(d.totals.materialDelta)}</strong>) · Sell{' '}
         {money(d.totals.from.sell)} → {money(d.totals.to.sell)} (<strong data-testid="sell-delta">{d.totals.sellDelta >= 0 ? '+' : ''}{money(d.totals.sellDelta)}</strong>)

@@ -3,13 +3,14 @@ import { del, get, patch, post, put } from '../../../lib/api-client';
 import type { LoadView, PanelDetail, PanelInput, PanelSummary, CommentView, RuleCheckBody } from '../../../../shared/schemas/panel';
 import type { OverrideInput } from '../../../../shared/schemas/override';
 import type { BomDiff } from '../../../../shared/calc/bom';
+import type { SelectionDifference } from '../../../../shared/calc/selection-diff';
 
 export interface ChangeReport {
   from: number;
   to: number;
   bom: BomDiff;
   totals: { from: { sell: number; materialCost: number; labourHours: number }; to: { sell: number; materialCost: number; labourHours: number }; sellDelta: number; materialDelta: number };
-  motors: { added: string[]; removed: string[]; changed: string[] };
+  motors: { added: string[]; removed: string[]; changed: string[]; decisions: Array<{ tag: string; differences: SelectionDifference[] }> };
 }
 
 export const panelQueries = {
