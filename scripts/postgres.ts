@@ -4,6 +4,7 @@
 import { execFileSync, spawnSync } from 'node:child_process';
 import { createHash, randomBytes } from 'node:crypto';
 import fs from 'node:fs';
+import net from 'node:net';
 import path from 'node:path';
 import pg from 'pg';
 
@@ -12,7 +13,37 @@ const dataRoot = path.join(root, '.data');
 const clusterLink = path.join(dataRoot, 'pg');
 const passwordFile = path.join(dataRoot, 'pg.password');
 
-export const pgPort = Number(process.env.PW_PG_PORT ?? 54329);
+const portFile = path.join(dataRoot, 'pg.port');
+
+/** The cluster's port: PW_PG_PORT, or the one kept in .data/pg.port, or 54329. */
+let pgPort = Number(process.env.PW_PG_PORT ?? (fs.existsSync(portFile) ? fs.readFileSync(portFile, 'utf8').trim() : 54329));
+
+export function clusterPort(): number {
+  return pgPort;
+}
+
+/** Whether nothing listens on 127.0.0.1:port. */
+export function portFree(port: number): Promise<boolean> {
+  return new Promise((resolve) => {
+    const probe = net.createServer();
+    probe.once('error', () => resolve(false));
+    probe.listen(port, '127.0.0.1', () => probe.close(() => resolve(true)));
+  });
+}
+
+/**
+ * The port to start the cluster on: the preferred one when free; when another program holds it
+ * (another checkout's cluster, say), the next free one above it, unless the port was asked for
+ * explicitly (PW_PG_PORT), which is then an error.
+ */
+export async function choosePort(preferred: number, explicit: boolean): Promise<number> {
+  if (await portFree(preferred)) return preferred;
+  if (explicit) throw new Error(`Port ${preferred} (PW_PG_PORT) is held by another program: stop it or choose another port`);
+  for (let port = preferred + 1; port <= preferred + 200 && port < 65536; port++) {
+    if (await portFree(port)) return port;
+  }
+  throw new Error(`No free port for PostgreSQL between ${preferred} and ${preferred + 200}`);
+}
 
 const isRoot = typeof process.getuid === 'function' && process.getuid() === 0;
 
@@ -119,7 +150,7 @@ export async function ensureCluster(): Promise<string> {
   }
   const dir = clusterDir();
   const pwd = password();
-  const adminUrl = serverUrl('postgres');
+  let adminUrl = serverUrl('postgres');
 
   if (!fs.existsSync(path.join(dir, 'PG_VERSION'))) {
     log(`creating a private cluster in ${dir}`);
@@ -142,6 +173,13 @@ export async function ensureCluster(): Promise<string> {
       log('removing a stale pid file');
       fs.rmSync(pidFile, { force: true });
     }
+  }
+  const port = await choosePort(pgPort, process.env.PW_PG_PORT !== undefined);
+  if (port !== pgPort) {
+    log(`port ${pgPort} is held by another program; this cluster uses ${port} (kept in .data/pg.port)`);
+    pgPort = port;
+    fs.writeFileSync(portFile, String(port));
+    adminUrl = serverUrl('postgres');
   }
   log(`starting PostgreSQL on 127.0.0.1:${pgPort}`);
   const logFile = path.join(dir, 'server.log');

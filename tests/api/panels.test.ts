@@ -411,6 +411,15 @@ describe('the motor list as a workbook', () => {
     expect(copy.loads.map((l) => [l.selection.scpd, l.selection.conductor])).toEqual(original.loads.map((l) => [l.selection.scpd, l.selection.conductor]));
   });
 
+  it('has an import column for every answer of the motor schema, so the export loses none', async () => {
+    const { LoadSchema } = await import('../../shared/schemas/load');
+    const { IMPORT_COLUMNS } = await import('../../server/modules/panels/import');
+    const keys = Object.keys((LoadSchema as unknown as { shape: Record<string, unknown> }).shape);
+    expect(keys.length).toBeGreaterThan(30);
+    const covered = new Set(IMPORT_COLUMNS.map((c) => c.path?.[0] ?? c.key));
+    expect(keys.filter((k) => !covered.has(k))).toEqual([]);
+  });
+
   it('names the nested column of a bad nested answer in an import', async () => {
     const designer = await signInAs('designer');
     const { panel } = await newPanel(designer);
