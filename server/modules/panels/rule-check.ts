@@ -2,7 +2,9 @@
 // motor is saved; rule files and table modules change with releases of the product, so a draft can
 // hold selections the engine would no longer make. The check runs the engine on the stored answers
 // and names every decision that would change; "select again" stores the new selections.
+import { createHash } from 'node:crypto';
 import type { CurrentUser } from '../../../shared/schemas/auth';
+import { jobSupply } from '../../../shared/schemas/job';
 import type { LoadInput } from '../../../shared/schemas/load';
 import type { LoadSelection } from '../../../shared/schemas/selection';
 import type { RuleCheckBody } from '../../../shared/schemas/panel';
@@ -32,10 +34,26 @@ function inSentence(label: string): string {
   return /^[A-Z][A-Z]/.test(bare) ? bare : bare.charAt(0).toLowerCase() + bare.slice(1);
 }
 
+// The engine's answer depends only on the stored answers, the job's supply and the rule set, which is
+// fixed for the life of a process: the result is kept per panel under a digest of what it read
+// (about 0.6 ms of engine time per motor saved on every repeated look).
+const checked = new Map<number, { digest: string; changed: RuleCheckBody['changed'] }>();
+const MAX_CHECKED = 500;
+
 export async function ruleCheck(actor: CurrentUser, panelId: number): Promise<RuleCheckBody> {
   const p = await requirePanel(actor, panelId);
   const loads = await repo.loadsOf(p.id);
-  return { panelId: p.id, panelVersion: p.version, motorCount: loads.length, changed: await differencesOf(p.job, loads) };
+  const digest = createHash('sha1')
+    .update(JSON.stringify([jobSupply(p.job), p.job.codeEdition, loads.map((l) => [l.id, l.tag, l.answers, l.selection])]))
+    .digest('hex');
+  let hit = checked.get(p.id);
+  if (!hit || hit.digest !== digest) {
+    hit = { digest, changed: await differencesOf(p.job, loads) };
+    checked.delete(p.id);
+    checked.set(p.id, hit);
+    if (checked.size > MAX_CHECKED) checked.delete(checked.keys().next().value as number);
+  }
+  return { panelId: p.id, panelVersion: p.version, motorCount: loads.length, changed: hit.changed };
 }
 
 /** Runs the rules again for every motor of a draft or returned panel (a signed-off one opens a new draft). */
