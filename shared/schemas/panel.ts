@@ -80,6 +80,22 @@ export interface PanelDetail extends PanelSummary {
   revisions: Array<{ number: number; approvedAt: string; approvedBy: string | null }>;
 }
 
+/** A panel on the sign-off queue: in review, returned, or signed off lately. */
+export interface QueuePanel {
+  panelId: number;
+  panelName: string;
+  jobId: number;
+  jobNumber: string;
+  jobName: string;
+  status: PanelState;
+  revisionNumber: number | null;
+  /** submitted (in review) or last changed (returned, signed off) */
+  since: string;
+  motorCount: number;
+  /** the latest panel-level comment (a submit note, the reason for returning, the sign-off note) */
+  note: { body: string; author: string | null } | null;
+}
+
 /** What the current rules and tables would change in a panel's stored selections. */
 export interface RuleCheckBody {
   panelId: number;

@@ -429,3 +429,29 @@ describe('the motor list as a workbook', () => {
     expect(r.body.rows[0].problems).toEqual([{ column: 'conductorTempC', message: expect.stringContaining('60, 75 or 90') }]);
   });
 });
+
+describe('the sign-off queue', () => {
+  it('lists a panel in review with its note, then returned with the reason, then signed off as R0; never an archived job’s', async () => {
+    const designer = await signInAs('designer');
+    const engineer = await signInAs('engineer');
+    const { job, panel } = await newPanel(designer);
+    await send(designer, 'post', `/api/panels/${panel.id}/loads`, { answers: { tag: 'Q-1', supply: 'ac3', hp: 10, volts: 460, environment: 'indoor-dusty' } }).expect(201);
+    const entry = async () => ((await engineer.agent.get('/api/sign-off-queue').expect(200)).body as Array<{ panelId: number }>).find((q) => q.panelId === panel.id);
+    expect(await entry()).toBeUndefined(); // a draft waits on nobody
+
+    let p = (await designer.agent.get(`/api/panels/${panel.id}`)).body;
+    p = (await send(designer, 'post', `/api/panels/${panel.id}/submit`, { version: p.version, comment: 'Pump skid, please check the fuses' }).expect(200)).body;
+    expect(await entry()).toMatchObject({ panelName: 'MCC-F', jobId: job.id, jobNumber: job.number, status: 'in_review', motorCount: 1, note: { body: 'Pump skid, please check the fuses', author: expect.any(String) } });
+
+    p = (await send(engineer, 'post', `/api/panels/${panel.id}/return`, { version: p.version, comment: 'Use dual-element fuses on Q-1' }).expect(200)).body;
+    expect(await entry()).toMatchObject({ status: 'returned', note: { body: 'Returned: Use dual-element fuses on Q-1' } });
+
+    p = (await send(designer, 'post', `/api/panels/${panel.id}/submit`, { version: p.version }).expect(200)).body;
+    p = (await send(engineer, 'post', `/api/panels/${panel.id}/approve`, { version: p.version, comment: '' }).expect(200)).body;
+    expect(await entry()).toMatchObject({ status: 'signed_off', revisionNumber: 0 });
+
+    const j = (await designer.agent.get(`/api/jobs/${job.id}`).expect(200)).body;
+    await send(designer, 'post', `/api/jobs/${job.id}/archive`, { archived: true, version: j.version }).expect(200);
+    expect(await entry()).toBeUndefined();
+  });
+});

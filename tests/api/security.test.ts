@@ -198,6 +198,20 @@ describe('another organisation’s data', () => {
     expect(jobs.map((j) => j.id)).not.toContain(other.job.id);
   });
 
+  it('keeps the other organisation’s panel off our sign-off queue while it waits on theirs', async () => {
+    await Panel.update({ status: 'in_review', submittedAt: new Date() }, { where: { id: other.panel.id } });
+    try {
+      const theirs = await signIn(other.user.email, other.password);
+      const theirQueue = (await theirs.agent.get('/api/sign-off-queue').expect(200)).body as Array<{ panelId: number }>;
+      expect(theirQueue.map((q) => q.panelId)).toContain(other.panel.id);
+      const ours = (await admin.agent.get('/api/sign-off-queue').expect(200));
+      expect((ours.body as Array<{ panelId: number }>).map((q) => q.panelId)).not.toContain(other.panel.id);
+      expect(ours.text).not.toContain('Private note');
+    } finally {
+      await Panel.update({ status: 'draft', submittedAt: null }, { where: { id: other.panel.id } });
+    }
+  });
+
   it('answers 404 for the other organisation’s panel even while that shop’s own reads keep it in memory', async () => {
     const theirs = await signIn(other.user.email, other.password);
     for (let i = 0; i < 3; i++) expect((await theirs.agent.get(`/api/panels/${other.panel.id}`).expect(200)).body.name).toBe('Other MCC');

@@ -86,7 +86,11 @@ describe('designer → engineer → estimator', () => {
     const page = await newPage(browser);
     await signInThroughForm(page, 'engineer');
     await page.waitForURL(/\/jobs$/);
-    await page.goto(`${panelUrl}/protection`);
+    // the jobs page puts the engineer's queue first: the submitted panel, opened at its Protection section
+    const waiting = page.getByRole('region', { name: 'Sign-off queue' }).getByLabel('Waiting for sign-off');
+    await waiting.getByText('your next work').waitFor();
+    await waiting.getByRole('link', { name: 'J-2042 · MCC-S Sludge press' }).click();
+    await page.waitForURL(`${panelUrl}/protection`);
     const card = page.getByRole('article', { name: 'Motor SP-1' });
     await card.getByText(/430\.52/).first().waitFor();
     // the overload relay's dial at the nameplate FLA of 31 A; the trip limit 125 % = 38.75 A (NEC 2023 430.32(A)(1))

@@ -6,7 +6,7 @@ import { Job } from '../../db/models/job';
 import { Comment } from '../../db/models/comment';
 import { Revision } from '../../db/models/revision';
 import { User } from '../../db/models/user';
-import type { PanelSummary } from '../../../shared/schemas/panel';
+import type { PanelSummary, QueuePanel } from '../../../shared/schemas/panel';
 
 export async function listPanels(organisationId: number, jobId: number): Promise<PanelSummary[]> {
   return db().query<PanelSummary>(
@@ -17,6 +17,30 @@ export async function listPanels(organisationId: number, jobId: number): Promise
       order by p.archived_at nulls first, p.name, p.id`,
     { replacements: { organisationId, jobId }, type: QueryTypes.SELECT },
   );
+}
+
+/**
+ * The organisation's panels that wait on someone: in review (the engineer), returned (the panel
+ * builder), and signed off since `signedSince` (the estimator prices the revision), in one query.
+ */
+export async function signOffQueue(organisationId: number, signedSince: Date): Promise<QueuePanel[]> {
+  const rows = await db().query<Omit<QueuePanel, 'note'> & { noteBody: string | null; noteAuthor: string | null }>(
+    `select p.id as "panelId", p.name as "panelName", j.id as "jobId", j.number as "jobNumber", j.name as "jobName",
+            p.status, p.revision_number as "revisionNumber",
+            case when p.status = 'in_review' then coalesce(p.submitted_at, p.updated_at) else p.updated_at end as "since",
+            (select count(*)::int from loads l where l.panel_id = p.id) as "motorCount",
+            c.body as "noteBody", u.name as "noteAuthor"
+       from panels p
+       join jobs j on j.id = p.job_id and j.archived_at is null
+       left join lateral (select body, user_id from comments where panel_id = p.id and load_id is null order by id desc limit 1) c on true
+       left join users u on u.id = c.user_id
+      where p.organisation_id = :organisationId and p.archived_at is null
+        and (p.status in ('in_review', 'returned') or (p.status = 'signed_off' and p.updated_at >= :signedSince))
+      order by "since" asc
+      limit 300`,
+    { replacements: { organisationId, signedSince }, type: QueryTypes.SELECT },
+  );
+  return rows.map(({ noteBody, noteAuthor, ...r }) => ({ ...r, since: new Date(r.since).toISOString(), note: noteBody === null ? null : { body: noteBody, author: noteAuthor } }));
 }
 
 /** The panel with its job, in one query (the job supplies the supply data). */

@@ -17,6 +17,13 @@ const LoadId = z.object({ loadId: z.coerce.number().int().positive() });
 const LoadBody = z.object({ answers: z.record(z.string(), z.unknown()), version: z.number().int().min(0).optional() });
 
 export const panelRoutes = [
+  defineRoute({
+    method: 'get',
+    path: '/api/sign-off-queue',
+    access: ALL,
+    summary: `Panels in review, returned, and signed off in the last ${service.SIGNED_OFF_DAYS} days`,
+    handler: ({ user }) => service.signOffQueue(user),
+  }),
   defineRoute({ method: 'get', path: '/api/jobs/:id/panels', access: ALL, summary: 'Panels of a job', params: IdParamSchema, handler: ({ user, params }) => service.listPanels(user, params.id) }),
   defineRoute({
     method: 'post',

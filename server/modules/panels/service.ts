@@ -35,6 +35,14 @@ export function loadView(l: Load): LoadView {
   };
 }
 
+/** Signed-off panels stay on the sign-off queue this long, for the estimator to price the revision. */
+export const SIGNED_OFF_DAYS = 14;
+
+/** The panels that wait on someone: in review, returned, signed off lately (oldest first). */
+export async function signOffQueue(actor: CurrentUser) {
+  return repo.signOffQueue(actor.organisationId, new Date(Date.now() - SIGNED_OFF_DAYS * 86_400_000));
+}
+
 export async function listPanels(actor: CurrentUser, jobId: number) {
   await getJob(actor, jobId);
   return repo.listPanels(actor.organisationId, jobId);

@@ -6,6 +6,7 @@ import { hasRole, sessionQueries } from '../../features/auth/api/session';
 import { queryClient } from '../../lib/query-client';
 import { Empty, ErrorNote, Loading, PageHeader } from '../../components/ui/feedback';
 import { inputClass } from '../../components/ui/field';
+import { SignOffQueue } from '../../features/panels/components/sign-off-queue';
 
 function filtersFrom(params: URLSearchParams): JobListFilters {
   return {
@@ -56,6 +57,7 @@ export function Component() {
           ) : null
         }
       />
+      <SignOffQueue me={me} />
       <form
         className="mb-3 flex flex-wrap items-center gap-3"
         role="search"

@@ -1,6 +1,6 @@
 import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
 import { del, get, patch, post, put } from '../../../lib/api-client';
-import type { LoadView, PanelDetail, PanelInput, PanelSummary, CommentView, RuleCheckBody } from '../../../../shared/schemas/panel';
+import type { LoadView, PanelDetail, PanelInput, PanelSummary, CommentView, QueuePanel, RuleCheckBody } from '../../../../shared/schemas/panel';
 import type { OverrideInput } from '../../../../shared/schemas/override';
 import type { BomDiff } from '../../../../shared/calc/bom';
 import type { SelectionDifference } from '../../../../shared/calc/selection-diff';
@@ -20,6 +20,7 @@ export const panelQueries = {
   /** keyed by the panel version, so any change to the panel asks again */
   ruleCheck: (panelId: number, version: number) =>
     queryOptions({ queryKey: [...panelQueries.all(), 'detail', panelId, 'rule-check', version], queryFn: () => get<RuleCheckBody>(`/api/panels/${panelId}/rule-check`), staleTime: 60_000 }),
+  queue: () => queryOptions({ queryKey: [...panelQueries.all(), 'queue'], queryFn: () => get<QueuePanel[]>('/api/sign-off-queue') }),
   changeReport: (panelId: number, from: number, to: number) =>
     queryOptions({ queryKey: [...panelQueries.all(), 'detail', panelId, 'change-report', from, to], queryFn: () => get<ChangeReport>(`/api/panels/${panelId}/change-report?from=${from}&to=${to}`) }),
 };
@@ -30,6 +31,7 @@ function useInvalidatePanel(panelId?: number) {
     Promise.all([
       panelId ? qc.invalidateQueries({ queryKey: panelQueries.detail(panelId).queryKey.slice(0, 3) }) : qc.invalidateQueries({ queryKey: panelQueries.all() }),
       qc.invalidateQueries({ queryKey: ['panels', 'list'] }),
+      qc.invalidateQueries({ queryKey: ['panels', 'queue'] }),
       qc.invalidateQueries({ queryKey: ['jobs'] }),
       qc.invalidateQueries({ queryKey: ['bom'] }),
     ]);
