@@ -115,6 +115,8 @@ export const CommentInputSchema = z.object({
 export const ReviewActionSchema = z.object({
   version: z.number().int().min(0),
   comment: z.string().trim().max(5000).default(''),
+  /** sign-off only: the engineer accepts a panel SCCR below the available fault current (NEC 409.22), with the reason in the comment */
+  acknowledgeSccr: z.boolean().default(false),
 });
 
 export const BulkEditSchema = z.object({

@@ -84,7 +84,7 @@ describe('job backup', () => {
     let v = (await designer.agent.get(`/api/panels/${pid}`).expect(200)).body.version;
     await send(designer, 'post', `/api/panels/${pid}/submit`, { version: v, comment: 'Ready for sign-off' }).expect(200);
     v = (await designer.agent.get(`/api/panels/${pid}`).expect(200)).body.version;
-    const approved = await send(engineer, 'post', `/api/panels/${pid}/approve`, { version: v, comment: 'Approved as drawn' }).expect(200);
+    const approved = await send(engineer, 'post', `/api/panels/${pid}/approve`, { version: v, comment: 'Approved as drawn, fault study pending', acknowledgeSccr: true }).expect(200);
     expect(approved.body.status).toBe('signed_off');
     const second = await send(designer, 'post', `/api/jobs/${richJobId}/panels`, { name: 'Spare panel' }).expect(201);
     await send(designer, 'post', `/api/panels/${second.body.id}/archive`, { archived: true, version: second.body.version }).expect(200);

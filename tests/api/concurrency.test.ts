@@ -120,7 +120,7 @@ describe('concurrent edits and all-or-nothing writes', () => {
     expect(before.bom.length).toBeGreaterThan(0);
     expect(before.revisions).toBe('');
 
-    await expect(approvePanel(eng, p.id, v, 'looks fine', { failAfterFreeze: true })).rejects.toThrow(/failure injected/);
+    await expect(approvePanel(eng, p.id, v, 'looks fine, fault study pending', { failAfterFreeze: true, acknowledgeSccr: true })).rejects.toThrow(/failure injected/);
     const after = await panelState(p.id);
     expect(after).toEqual(before);
     const detail = (await designer.agent.get(`/api/panels/${p.id}`).expect(200)).body;
@@ -129,7 +129,7 @@ describe('concurrent edits and all-or-nothing writes', () => {
     expect(detail.revisions).toEqual([]);
 
     // the same sign-off without the failure does change all of it: the comparison above can fail
-    await approvePanel(eng, p.id, v, 'looks fine');
+    await approvePanel(eng, p.id, v, 'looks fine, fault study pending', { acknowledgeSccr: true });
     const done = await panelState(p.id);
     expect(done.revisions).not.toBe('');
     expect(done.bom).not.toBe(before.bom);

@@ -112,7 +112,13 @@ describe('review and sign-off', () => {
     expect(fixed.body.selection.scpd).toMatchObject({ type: 'dual-element-fuse', ratingAmps: 25 });
     p = (await designer.agent.get(`/api/panels/${panel.id}`)).body;
     p = (await send(designer, 'post', `/api/panels/${panel.id}/submit`, { version: p.version }).expect(200)).body;
-    p = (await send(engineer, 'post', `/api/panels/${panel.id}/approve`, { version: p.version, comment: 'OK' }).expect(200)).body;
+    // the panel's SCCR is below the 22 kA available (unmarked contactor and overload relay, 5 kA assumed,
+    // UL 508A Table SB4.1 from memory): NEC 409.22 asks for an acknowledgement with a reason
+    const refused = await send(engineer, 'post', `/api/panels/${panel.id}/approve`, { version: p.version, comment: 'OK' }).expect(400);
+    expect(refused.body.error.message).toMatch(/^Panel SCCR [\d.]+ kA is below the 22 kA available at the site \(NEC 409\.22\)/);
+    expect(refused.body.error.details.map((d: { path: string }) => d.path)).toEqual(['body.acknowledgeSccr', 'body.comment']);
+    await send(engineer, 'post', `/api/panels/${panel.id}/approve`, { version: p.version, comment: 'OK', acknowledgeSccr: true }).expect(400); // no reason given
+    p = (await send(engineer, 'post', `/api/panels/${panel.id}/approve`, { version: p.version, comment: 'Feeder fused Class J upstream, let-through checked', acknowledgeSccr: true }).expect(200)).body;
     expect(p.status).toBe('signed_off');
     expect(p.revisionNumber).toBe(0);
     expect(await waitForMail(`Signed off: ${job.number}`)).not.toBeNull();
@@ -120,6 +126,7 @@ describe('review and sign-off', () => {
     const r0 = (await estimator.agent.get(`/api/panels/${panel.id}/revisions/0`).expect(200)).body;
     expect(r0.snapshot.loads[0].selection.scpd.ratingAmps).toBe(25);
     expect(r0.snapshot.bom.length).toBeGreaterThan(3);
+    expect(r0.snapshot.sccr).toMatchObject({ availableFaultKa: 22, verdict: 'below-available', acknowledged: { reason: 'Feeder fused Class J upstream, let-through checked', finding: expect.stringContaining('NEC 409.22') } });
 
     // editing a signed-off panel opens a new draft; R0 stays as it was
     const again = (await designer.agent.get(`/api/panels/${panel.id}`)).body;
@@ -135,7 +142,7 @@ describe('review and sign-off', () => {
 
     // second sign-off and the change report R0 → R1 with the cost delta
     let d = (await send(designer, 'post', `/api/panels/${panel.id}/submit`, { version: draft.version }).expect(200)).body;
-    d = (await send(engineer, 'post', `/api/panels/${panel.id}/approve`, { version: d.version }).expect(200)).body;
+    d = (await send(engineer, 'post', `/api/panels/${panel.id}/approve`, { version: d.version, comment: 'Accepted: fault study pending', acknowledgeSccr: true }).expect(200)).body;
     expect(d.revisionNumber).toBe(1);
     const report = (await estimator.agent.get(`/api/panels/${panel.id}/change-report?from=0&to=1`).expect(200)).body;
     expect(report.motors.added).toEqual(['P-2']);
@@ -225,7 +232,7 @@ describe('job changes that the selections depend on', () => {
     const j = (await designer.agent.get(`/api/jobs/${job.id}`)).body;
     const refused = await send(designer, 'patch', `/api/jobs/${job.id}`, { ambientC: 50, version: j.version }).expect(409);
     expect(refused.body.error.message).toMatch(/in review/);
-    p = (await send(engineer, 'post', `/api/panels/${panel.id}/approve`, { version: p.version }).expect(200)).body;
+    p = (await send(engineer, 'post', `/api/panels/${panel.id}/approve`, { version: p.version, comment: 'Accepted: fault study pending', acknowledgeSccr: true }).expect(200)).body;
     expect(p.status).toBe('signed_off');
 
     const j2 = (await designer.agent.get(`/api/jobs/${job.id}`)).body;
@@ -447,11 +454,29 @@ describe('the sign-off queue', () => {
     expect(await entry()).toMatchObject({ status: 'returned', note: { body: 'Returned: Use dual-element fuses on Q-1' } });
 
     p = (await send(designer, 'post', `/api/panels/${panel.id}/submit`, { version: p.version }).expect(200)).body;
-    p = (await send(engineer, 'post', `/api/panels/${panel.id}/approve`, { version: p.version, comment: '' }).expect(200)).body;
+    p = (await send(engineer, 'post', `/api/panels/${panel.id}/approve`, { version: p.version, comment: 'Accepted: fault study pending', acknowledgeSccr: true }).expect(200)).body;
     expect(await entry()).toMatchObject({ status: 'signed_off', revisionNumber: 0 });
 
     const j = (await designer.agent.get(`/api/jobs/${job.id}`).expect(200)).body;
     await send(designer, 'post', `/api/jobs/${job.id}/archive`, { archived: true, version: j.version }).expect(200);
     expect(await entry()).toBeUndefined();
+  });
+});
+
+describe('signing off against the site fault current (NEC 409.22)', () => {
+  it('signs off without an acknowledgement when the panel SCCR covers the available fault current', async () => {
+    const designer = await signInAs('designer');
+    const engineer = await signInAs('engineer');
+    // 2 kA available: at or below even the 5 kA assumed for an unmarked contactor (UL 508A Table SB4.1, from memory)
+    const job = (await send(designer, 'post', '/api/jobs', { number: uniq(), name: 'Small site', availableFaultKa: 2 }).expect(201)).body;
+    const panel = (await send(designer, 'post', `/api/jobs/${job.id}/panels`, { name: 'LCP-1' }).expect(201)).body;
+    await send(designer, 'post', `/api/panels/${panel.id}/loads`, { answers: { tag: 'F-1', supply: 'ac3', hp: 5, volts: 460, environment: 'indoor-dusty' } }).expect(201);
+    let p = (await designer.agent.get(`/api/panels/${panel.id}`)).body;
+    p = (await send(designer, 'post', `/api/panels/${panel.id}/submit`, { version: p.version }).expect(200)).body;
+    p = (await send(engineer, 'post', `/api/panels/${panel.id}/approve`, { version: p.version }).expect(200)).body;
+    expect(p.status).toBe('signed_off');
+    const r0 = (await engineer.agent.get(`/api/panels/${panel.id}/revisions/0`).expect(200)).body;
+    expect(r0.snapshot.sccr).toMatchObject({ availableFaultKa: 2, verdict: 'adequate', acknowledged: null });
+    expect(r0.snapshot.sccr.panelSccrKa).toBeGreaterThanOrEqual(2);
   });
 });

@@ -32,7 +32,16 @@ async function submitAndSignOff(page: Page, revision: string) {
   await signInThroughForm(eng, 'engineer');
   await eng.waitForURL(/\/jobs$/);
   await eng.goto(`${panelUrl}/sign-off`);
-  await eng.getByRole('button', { name: new RegExp(`Sign off as ${revision}`) }).click();
+  // J-2042 has 22 kA available; unmarked contactors and overload relays are taken at 5 kA (UL 508A
+  // Table SB4.1, from memory), so NEC 409.22 asks the engineer to acknowledge the rating with a reason
+  const sccrLine = eng.getByTestId('sign-off-sccr');
+  await sccrLine.waitFor();
+  expect(await sccrLine.textContent()).toMatch(/^✖ Panel SCCR [\d.]+ kA is below the 22 kA available at the site \(NEC 409\.22\)\.$/);
+  const sign = eng.getByRole('button', { name: new RegExp(`Sign off as ${revision}`) });
+  expect(await sign.isDisabled()).toBe(true);
+  await eng.getByLabel(/I sign off with this rating/).check();
+  await eng.getByLabel('Sign-off comment').fill('Class J fuses upstream per the fault study');
+  await sign.click();
   await eng.locator('[data-state="signed_off"]').first().waitFor();
 }
 

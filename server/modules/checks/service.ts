@@ -380,6 +380,29 @@ export interface ChecksContext {
   panel: Panel & { job: Job };
 }
 
+/** The SCCR worksheet's input from a bill of materials, the catalogue, the selections and the tested combinations. */
+function sccrInputFor(
+  lines: readonly BomLine[],
+  byCode: ReadonlyMap<string, CatalogueItem>,
+  selections: readonly LoadSelection[],
+  combinations: SccrInput['combinations'],
+  availableFaultKa: number | null,
+) {
+  const bySel = new Map(selections.map((s) => [s.tag, s]));
+  const parts = sccrComponents(lines, byCode);
+  const buckets: SccrBucketInput[] = [...parts.buckets.entries()].map(([tag, components]) => ({ tag, hp: bySel.get(tag)?.hp ?? null, volts: bySel.get(tag)?.volts, components }));
+  const feederHp = selections.reduce((s, x) => s + (x.hp ?? 0), 0);
+  const input: SccrInput = { feeder: parts.feeder, feederHp: feederHp > 0 ? feederHp : null, buckets, combinations, availableFaultKa };
+  return { input, parts };
+}
+
+/** The panel's SCCR from a given bill of materials (the one a sign-off has just regenerated). */
+export async function panelSccrFor(organisationId: number, lines: readonly BomLine[], selections: readonly LoadSelection[], availableFaultKa: number | null): Promise<SccrResult> {
+  const [catalogue, combinations] = await Promise.all([catalogueFor(organisationId), activeCombinations(organisationId)]);
+  const byCode = new Map(catalogue.map((c) => [c.code, c]));
+  return calculatePanelSccr(sccrInputFor(lines, byCode, selections, combinations, availableFaultKa).input);
+}
+
 export async function computeChecks(actor: CurrentUser, panelId: number): Promise<ChecksContext> {
   const panel = await requirePanel(actor, panelId);
   const job = panel.job;
@@ -415,10 +438,7 @@ export async function computeChecks(actor: CurrentUser, panelId: number): Promis
   const bySel = new Map(selections.map((s) => [s.tag, s]));
 
   // SCCR worksheet
-  const parts = sccrComponents(lines, byCode);
-  const buckets: SccrBucketInput[] = [...parts.buckets.entries()].map(([tag, components]) => ({ tag, hp: bySel.get(tag)?.hp ?? null, volts: bySel.get(tag)?.volts, components }));
-  const feederHp = selections.reduce((s, x) => s + (x.hp ?? 0), 0);
-  const input: SccrInput = { feeder: parts.feeder, feederHp: feederHp > 0 ? feederHp : null, buckets, combinations, availableFaultKa: job.availableFaultKa ?? null };
+  const { input, parts } = sccrInputFor(lines, byCode, selections, combinations, job.availableFaultKa ?? null);
   const base = calculatePanelSccr(input);
   const sccr: SccrCheck = {
     ...base,

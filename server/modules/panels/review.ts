@@ -11,6 +11,7 @@ import * as repo from './repository';
 import { loadView, panelDetail, requirePanel } from './service';
 import { recordActivity } from '../activity/service';
 import { regenerateBom } from '../bom/service';
+import { panelSccrFor } from '../checks/service';
 import { sendMail } from '../mail/mailer';
 import { env } from '../../config/env';
 
@@ -58,13 +59,40 @@ export async function returnPanel(actor: CurrentUser, panelId: number, version: 
 }
 
 /** Signs off: rebuilds the bill of materials and freezes selections and BOM as the next revision, in one transaction. */
-export async function approvePanel(actor: CurrentUser, panelId: number, version: number, comment: string, opts: { failAfterFreeze?: boolean } = {}) {
+/** The acknowledgement an engineer writes when signing off a panel rated below the site's fault current. */
+const MIN_JUSTIFICATION = 15;
+
+export async function approvePanel(
+  actor: CurrentUser,
+  panelId: number,
+  version: number,
+  comment: string,
+  opts: { failAfterFreeze?: boolean; acknowledgeSccr?: boolean } = {},
+) {
   const p = await db().transaction(async (t) => {
     const p = await requirePanel(actor, panelId, t, true);
     if (p.version !== version) throw new ConflictError(`Someone else changed panel ${p.name} since you opened it: reload and try again`);
     if (p.status !== 'in_review') throw new ConflictError(`Panel ${p.name} is not in review`);
     const lines = await regenerateBom(actor.organisationId, p, t);
     const loads = (await repo.loadsOf(p.id, t)).map(loadView);
+    // NEC 409.22(A): a panel is not installed where the available fault current exceeds its SCCR. A
+    // sign-off below it (or with a rating the worksheet could not finish) needs the engineer's explicit
+    // acknowledgement and a written reason (a current-limiting feeder with let-through data the
+    // catalogue does not hold, a corrected fault study …); both are frozen with the revision.
+    const effective = loads.flatMap((l) => (l.effective && l.effective.errors.length === 0 ? [l.effective] : []));
+    const sccr = await panelSccrFor(actor.organisationId, lines, effective, p.job.availableFaultKa ?? null);
+    const short = sccr.verdict === 'below-available' || sccr.verdict === 'incomplete';
+    const finding = short
+      ? sccr.verdict === 'below-available'
+        ? `Panel SCCR ${sccr.panelSccrKa} kA is below the ${p.job.availableFaultKa} kA available at the site (NEC 409.22)`
+        : 'The panel SCCR could not be determined from the bill of materials (UL 508A SB4)'
+      : null;
+    if (finding && (!opts.acknowledgeSccr || comment.trim().length < MIN_JUSTIFICATION)) {
+      throw new ValidationError(`${finding}: acknowledge it and write why in the sign-off comment (at least ${MIN_JUSTIFICATION} characters) to sign off`, [
+        ...(opts.acknowledgeSccr ? [] : [{ path: 'body.acknowledgeSccr', message: 'acknowledge the short-circuit rating' }]),
+        ...(comment.trim().length < MIN_JUSTIFICATION ? [{ path: 'body.comment', message: `say why (at least ${MIN_JUSTIFICATION} characters)` }] : []),
+      ]);
+    }
     const number = p.revisionNumber === null ? 0 : p.revisionNumber + 1;
     const snapshot = {
       panel: { name: p.name, mounting: p.mounting, markupPercent: p.markupPercent, labourRate: p.labourRate },
@@ -74,11 +102,12 @@ export async function approvePanel(actor: CurrentUser, panelId: number, version:
       bom: lines,
       totals: computeTotals(lines, p.markupPercent, p.labourRate),
       comment,
+      sccr: { panelSccrKa: sccr.panelSccrKa, availableFaultKa: p.job.availableFaultKa ?? null, verdict: sccr.verdict, acknowledged: finding ? { finding, by: actor.name, reason: comment } : null },
     };
     await repo.Revision.create({ organisationId: actor.organisationId, panelId: p.id, number, snapshot, approvedBy: actor.id, approvedAt: new Date() }, { transaction: t });
     if (opts.failAfterFreeze) throw new Error('failure injected after the revision was written');
     await repo.bumpPanel(actor.organisationId, p.id, p.version, { status: 'signed_off', revisionNumber: number, bomGeneratedAt: new Date() }, t);
-    await recordActivity(actor, { entity: 'panel', entityId: p.id, jobId: p.jobId, panelId: p.id, action: 'signed-off', summary: `Signed off ${p.name} as R${number}${comment ? `: ${comment.slice(0, 100)}` : ''}` }, t);
+    await recordActivity(actor, { entity: 'panel', entityId: p.id, jobId: p.jobId, panelId: p.id, action: 'signed-off', summary: `Signed off ${p.name} as R${number}${finding ? ` acknowledging: ${finding}` : ''}${comment ? `: ${comment.slice(0, 100)}` : ''}` }, t);
     return Object.assign(p, { revisionNumber: number });
   });
   const designers = await repo.usersWithRole(actor.organisationId, 'designer');

@@ -164,7 +164,7 @@ export const panelRoutes = [
     params: PanelId,
     body: ReviewActionSchema,
     status: 200,
-    handler: ({ user, params, body }) => review.approvePanel(user, params.panelId, body.version, body.comment),
+    handler: ({ user, params, body }) => review.approvePanel(user, params.panelId, body.version, body.comment, { acknowledgeSccr: body.acknowledgeSccr }),
   }),
   defineRoute({
     method: 'get',

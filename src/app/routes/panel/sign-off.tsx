@@ -7,6 +7,7 @@ import { SignOffState } from '../../../components/ui/status';
 import { Button } from '../../../components/ui/button';
 import { Caution, ErrorNote, Loading } from '../../../components/ui/feedback';
 import { inputClass } from '../../../components/ui/field';
+import { checkQueries } from '../../../features/checks/api/checks';
 
 const money = (n: number) => n.toLocaleString(undefined, { style: 'currency', currency: 'USD' });
 
@@ -81,6 +82,9 @@ export function Component() {
   const { data: me } = useQuery(sessionQueries.me());
   const act = usePanelAction(panelId);
   const [comment, setComment] = useState('');
+  const [acknowledged, setAcknowledged] = useState(false);
+  const reviewing = p?.status === 'in_review' && hasRole(me, 'engineer');
+  const checks = useQuery({ ...checkQueries.panel(panelId), enabled: reviewing });
   const revs = p?.revisions ?? [];
   const [from, setFrom] = useState<number | null>(null);
   const [to, setTo] = useState<number | null>(null);
@@ -89,7 +93,16 @@ export function Component() {
   const isEngineer = hasRole(me, 'engineer');
   const canSubmit = isDesigner && (p.status === 'draft' || p.status === 'returned');
   const canReview = isEngineer && p.status === 'in_review';
-  const run = (action: 'submit' | 'return' | 'approve') => act.mutate({ action, version: p.version, comment }, { onSuccess: () => setComment('') });
+  const run = (action: 'submit' | 'return' | 'approve') =>
+    act.mutate({ action, version: p.version, comment, acknowledgeSccr: acknowledged }, { onSuccess: () => { setComment(''); setAcknowledged(false); } });
+  // NEC 409.22: a panel rated below the site's available fault current is signed off only with an
+  // acknowledgement and a written reason (the server holds the same rule)
+  const sccr = checks.data?.sccr;
+  const sccrShort = sccr ? sccr.verdict === 'below-available' || sccr.verdict === 'incomplete' : false;
+  const needsAck = canReview && (sccrShort || /NEC 409\.22|SCCR/.test(act.error?.message ?? ''));
+  const reasonShort = comment.trim().length < 15;
+  const overrides = p.loads.reduce((n, l) => n + l.overrides.length, 0);
+  const assumed = p.loads.reduce((n, l) => n + (l.selection?.assumed.length ?? 0), 0);
   const a = from ?? (revs.length > 1 ? revs[revs.length - 2].number : null);
   const b = to ?? (revs.length > 1 ? revs[revs.length - 1].number : null);
   return (
@@ -98,14 +111,43 @@ export function Component() {
         <section className="rounded border border-line bg-panel p-4">
           <h2 className="mb-2 flex items-center gap-2 text-lg font-semibold">Sign-off <SignOffState state={p.status} /></h2>
           <p className="mb-3 text-sm text-ink-soft">Draft → In review → Signed off (a frozen revision) or Returned. Changing a signed-off panel opens a new draft.</p>
+          {canReview ? (
+            <div className="rounded border border-line px-3 py-2 text-sm" aria-label="Before you sign">
+              <p className="mb-1 text-xs font-semibold uppercase text-ink-soft">Before you sign</p>
+              {sccr ? (
+                <p className={sccrShort ? 'font-semibold text-state-returned' : 'text-state-signed'} data-testid="sign-off-sccr">
+                  {sccrShort ? '✖' : '✔'}{' '}
+                  {sccr.verdict === 'incomplete'
+                    ? 'Panel SCCR could not be determined from the bill of materials (UL 508A SB4).'
+                    : sccr.verdict === 'no-available-fault-current'
+                      ? `Panel SCCR ${sccr.panelSccrKa} kA; the job gives no available fault current to compare (NEC 409.22).`
+                      : `Panel SCCR ${sccr.panelSccrKa} kA ${sccrShort ? 'is below' : 'covers'} the ${sccr.availableFaultKa} kA available at the site (NEC 409.22).`}
+                </p>
+              ) : checks.isPending ? (
+                <p className="text-ink-soft">Checking the short-circuit rating…</p>
+              ) : null}
+              <p className="text-ink-soft">
+                {overrides} override{overrides === 1 ? '' : 's'} and {assumed} assumed input{assumed === 1 ? '' : 's'} to review on the Protection section.
+              </p>
+              {needsAck ? (
+                <label className="mt-1 flex items-start gap-2">
+                  <input type="checkbox" className="mt-1" checked={acknowledged} onChange={(e) => setAcknowledged(e.target.checked)} />
+                  <span>
+                    I sign off with this rating and give the reason in the comment (a current-limiting feeder with the maker's let-through data, a corrected fault study …).
+                    {acknowledged && reasonShort ? <span className="block text-xs text-state-returned">Write the reason: at least 15 characters.</span> : null}
+                  </span>
+                </label>
+              ) : null}
+            </div>
+          ) : null}
           {canSubmit || canReview ? (
-            <textarea aria-label="Sign-off comment" className={inputClass} rows={3} placeholder={canReview ? 'What must change (required to return)' : 'Note (optional)'} value={comment} onChange={(e) => setComment(e.target.value)} />
+            <textarea aria-label="Sign-off comment" className={`${inputClass} mt-2`} rows={3} placeholder={canReview ? 'What must change (required to return)' : 'Note (optional)'} value={comment} onChange={(e) => setComment(e.target.value)} />
           ) : null}
           <div className="mt-2 flex flex-wrap gap-2">
             {canSubmit ? <Button onClick={() => run('submit')} disabled={act.isPending}>Submit for sign-off</Button> : null}
             {canReview ? (
               <>
-                <Button onClick={() => run('approve')} disabled={act.isPending}>✔ Sign off as R{p.revisionNumber === null ? 0 : p.revisionNumber + 1}</Button>
+                <Button onClick={() => run('approve')} disabled={act.isPending || (needsAck && (!acknowledged || reasonShort))}>✔ Sign off as R{p.revisionNumber === null ? 0 : p.revisionNumber + 1}</Button>
                 <Button variant="danger" onClick={() => run('return')} disabled={act.isPending || !comment.trim()}>↩ Return to designer</Button>
               </>
             ) : null}

@@ -45,7 +45,8 @@ export function useCreatePanel(jobId: number) {
 export function usePanelAction(panelId: number) {
   const invalidate = useInvalidatePanel(panelId);
   return useMutation({
-    mutationFn: (a: { action: 'submit' | 'return' | 'approve'; version: number; comment: string }) => post<PanelDetail>(`/api/panels/${panelId}/${a.action}`, { version: a.version, comment: a.comment }),
+    mutationFn: (a: { action: 'submit' | 'return' | 'approve'; version: number; comment: string; acknowledgeSccr?: boolean }) =>
+      post<PanelDetail>(`/api/panels/${panelId}/${a.action}`, { version: a.version, comment: a.comment, ...(a.action === 'approve' && a.acknowledgeSccr ? { acknowledgeSccr: true } : {}) }),
     onSuccess: invalidate,
   });
 }
