@@ -8,6 +8,7 @@ import { Button } from '../../../components/ui/button';
 import { Caution, ErrorNote, Loading } from '../../../components/ui/feedback';
 import { inputClass } from '../../../components/ui/field';
 import { checkQueries } from '../../../features/checks/api/checks';
+import { DecisionDifferences } from '../../../features/panels/components/decision-differences';
 
 const money = (n: number) => n.toLocaleString(undefined, { style: 'currency', currency: 'USD' });
 
@@ -28,23 +29,7 @@ function ChangeReport({ panelId, from, to }: { panelId: number; from: number; to
         <strong>{d.motors.changed.join(', ') || 'none'}</strong>
       </p>
       {d.motors.decisions.length ? (
-        <table className="dense w-full text-sm" aria-label="Decisions that changed">
-          <thead className="text-left text-xs uppercase text-ink-soft">
-            <tr><th className="py-1">Motor</th><th>Decision</th><th>R{d.from}</th><th>R{d.to}</th></tr>
-          </thead>
-          <tbody>
-            {d.motors.decisions.flatMap((m) =>
-              m.differences.map((x, i) => (
-                <tr key={`${m.tag}-${x.field}`} className="border-t border-line/60 align-top">
-                  <td className="py-1 font-semibold">{i === 0 ? m.tag : ''}</td>
-                  <td>{x.label}</td>
-                  <td>{x.from}</td>
-                  <td className="font-semibold">{x.to}</td>
-                </tr>
-              )),
-            )}
-          </tbody>
-        </table>
+        <DecisionDifferences motors={d.motors.decisions} before={`R${d.from}`} after={`R${d.to}`} label="Decisions that changed" />
       ) : null}
       <p className="text-sm">
         Material {money(d.totals.from.materialCost)} → {money(d.totals.to.materialCost)} (<strong>{d.totals.materialDelta >= 0 ? '+' : ''}{money(d.totals.materialDelta)}</strong>) · Sell{' '}

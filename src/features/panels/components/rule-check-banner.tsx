@@ -3,6 +3,7 @@ import type { PanelDetail } from '../../../../shared/schemas/panel';
 import { panelQueries, useReselect } from '../api/panels';
 import { Button } from '../../../components/ui/button';
 import { ErrorNote } from '../../../components/ui/feedback';
+import { DecisionDifferences } from './decision-differences';
 
 /**
  * Stored selections that the current rules and tables would make differently (a release changed a
@@ -34,28 +35,9 @@ export function RuleCheckBanner({ panel, canEdit }: { panel: PanelDetail; canEdi
       </div>
       <details className="mt-1">
         <summary className="cursor-pointer text-xs font-semibold text-ink-soft">What would change ({changed.reduce((k, c) => k + c.differences.length, 0)} decisions)</summary>
-        <table className="dense mt-1 w-full text-xs" aria-label="What the current rules would change">
-          <thead className="text-left uppercase text-ink-soft">
-            <tr>
-              <th className="py-1">Motor</th>
-              <th>Decision</th>
-              <th>Stored</th>
-              <th>Current rules</th>
-            </tr>
-          </thead>
-          <tbody>
-            {changed.flatMap((c) =>
-              c.differences.map((d, i) => (
-                <tr key={`${c.loadId}-${d.field}`} className="border-t border-line/60">
-                  <td className="py-0.5 font-semibold">{i === 0 ? c.tag : ''}</td>
-                  <td>{d.label}</td>
-                  <td>{d.from}</td>
-                  <td className="font-semibold">{d.to}</td>
-                </tr>
-              )),
-            )}
-          </tbody>
-        </table>
+        <div className="mt-1">
+          <DecisionDifferences motors={changed} before="Stored" after="Current rules" label="What the current rules would change" className="text-xs" />
+        </div>
       </details>
       {reselect.error ? <ErrorNote error={reselect.error} /> : null}
     </section>
