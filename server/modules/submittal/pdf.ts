@@ -30,6 +30,8 @@ export interface SubmittalData {
   rollup: PanelRollup;
   nameplate: NameplateResult;
   sccr: SccrResult;
+  /** the signed-off revision this submittal shows, with the engineer's acknowledgement of a rating below the site's fault current */
+  signOff?: { revision: string; date: string; acknowledged: { finding: string; by: string; reason: string } | null };
   heat: HeatResult;
   controlPower: ControlPowerResult;
   connectionCards: Array<{ tag: string; card: ConnectionCard }>;
@@ -221,6 +223,7 @@ export function writeSubmittalPdf(
     ['Available fault current', data.job.availableFaultKa === null ? 'not given' : `${data.job.availableFaultKa} kA`],
     ['Ambient', `${data.job.ambientC} °C`],
     ['Code edition', data.job.codeEdition],
+    ...(data.signOff ? [['Signed off', `${data.signOff.revision} on ${data.signOff.date}`] as [string, string]] : []),
   ]);
   w.sub('Cautions');
   for (const c of SUBMITTAL_CAUTIONS) w.para(`- ${c}`);
@@ -326,6 +329,10 @@ export function writeSubmittalPdf(
       `Verdict: ${data.sccr.verdict} (NEC 409.22).`,
     10,
   );
+  if (data.signOff?.acknowledged) {
+    const a = data.signOff.acknowledged;
+    w.para(`Signed off ${data.signOff.revision} with this rating. Finding: ${a.finding}. Reason given by ${a.by}: ${a.reason}`, 10);
+  }
   for (const n of data.sccr.notes) w.para(n, 8);
   if (data.sccr.waysOut.length > 0) {
     w.sub('Ways out');

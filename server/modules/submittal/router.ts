@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { defineRoute } from '../../http/route-table';
 import { ConflictError } from '../../../shared/errors';
 import { computeChecks } from '../checks/service';
+import { getRevision } from '../panels/review';
 import { writeSubmittalPdf, type SubmittalData } from './pdf';
 
 const ALL = ['admin', 'designer', 'estimator', 'engineer'] as const;
@@ -26,7 +27,10 @@ export const submittalRoutes = [
     summary: 'The panel submittal as a PDF (download)',
     params: PanelId,
     handler: async ({ user, params, res }) => {
-      const { checks, selections, rollup } = await computeChecks(user, params.panelId);
+      const { checks, selections, rollup, panel } = await computeChecks(user, params.panelId);
+      // a signed-off panel: its revision, and what the engineer acknowledged when signing (NEC 409.22)
+      const revision = panel.status === 'signed_off' && panel.revisionNumber !== null ? await getRevision(user, panel.id, panel.revisionNumber) : null;
+      const frozen = (revision?.snapshot as { sccr?: { acknowledged?: { finding: string; by: string; reason: string } | null } } | undefined)?.sccr;
       const missing = [
         selections.length === 0 ? 'the panel has no motors' : null,
         checks.heat.result ? null : checks.heat.reason,
@@ -51,6 +55,7 @@ export const submittalRoutes = [
         rollup,
         nameplate: checks.nameplate.result,
         sccr: checks.sccr,
+        ...(revision ? { signOff: { revision: `R${revision.number}`, date: new Date(revision.approvedAt).toISOString().slice(0, 10), acknowledged: frozen?.acknowledged ?? null } } : {}),
         heat: checks.heat.result,
         controlPower: checks.controlPower.result,
         connectionCards: checks.connectionCards.flatMap((c) => (c.card ? [{ tag: c.tag, card: c.card }] : [])),

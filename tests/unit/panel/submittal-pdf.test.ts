@@ -116,6 +116,18 @@ describe('PDF submittal', () => {
     expect(text).not.toContain('?');
   });
 
+  it('states a sign-off that acknowledged a rating below the site fault current (NEC 409.22), and says nothing of one for a draft', async () => {
+    const acknowledged = { finding: 'Panel SCCR 5 kA is below the 22 kA available at the site (NEC 409.22)', by: 'Ines Markham', reason: 'Class J fuses upstream per the fault study' };
+    const { buf } = await render({ compress: false }, { ...data(), signOff: { revision: 'R1', date: '2025-03-20', acknowledged } });
+    const text = extractPdfText(buf);
+    for (const s of ['Signed off', 'R1 on 2025-03-20', 'Signed off R1 with this rating. Finding: Panel SCCR 5 kA is below the 22 kA available at the site (NEC 409.22).', 'Reason given by Ines Markham: Class J fuses upstream per the fault study']) {
+      expect(text, s).toContain(s);
+    }
+    const draft = extractPdfText((await render({ compress: false })).buf);
+    expect(draft).not.toContain('with this rating');
+    expect(draft).not.toContain('R1 on');
+  });
+
   it('compresses by default', async () => {
     const { buf } = await render({});
     expect(buf.toString('latin1')).toContain('/FlateDecode');
