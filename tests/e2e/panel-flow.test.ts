@@ -37,6 +37,8 @@ async function submitAndSignOff(page: Page, revision: string) {
   const sccrLine = eng.getByTestId('sign-off-sccr');
   await sccrLine.waitFor();
   expect(await sccrLine.textContent()).toMatch(/^✖ Panel SCCR [\d.]+ kA is below the 22 kA available at the site \(NEC 409\.22\)\.$/);
+  // the heat verdict stands beside it (IEC TR 60890 simplified): a temperature in one decimal against the limit
+  expect(await eng.getByTestId('sign-off-heat').textContent()).toMatch(/Inside the enclosure \d+\.\d °C against a \d+ °C limit/);
   const sign = eng.getByRole('button', { name: new RegExp(`Sign off as ${revision}`) });
   expect(await sign.isDisabled()).toBe(true);
   await eng.getByLabel(/I sign off with this rating/).check();

@@ -111,6 +111,18 @@ export function Component() {
               ) : checks.isPending ? (
                 <p className="text-ink-soft">Checking the short-circuit rating…</p>
               ) : null}
+              {checks.data?.heat.result ? (
+                <p data-testid="sign-off-heat" className={checks.data.heat.result.exceeded ? 'text-state-review' : 'text-state-signed'}>
+                  {checks.data.heat.result.exceeded ? '◔' : '✔'} Inside the enclosure {checks.data.heat.result.internalTempC.toFixed(1)} °C against a {checks.data.heat.result.internalLimitC} °C limit
+                  {checks.data.heat.result.exceeded && checks.data.heat.result.cooling
+                    ? `: ${Math.round(checks.data.heat.result.cooling.excessW)} W to remove (fan or air conditioner in the bill of materials?)`
+                    : ''}{' '}
+                  (IEC TR 60890 simplified).
+                </p>
+              ) : null}
+              {checks.data?.controlPower.fitted?.adequate === false ? (
+                <p className="text-state-review">◔ The control transformer in the bill of materials is smaller than the {checks.data.controlPower.result?.sizeVa} VA needed.</p>
+              ) : null}
               <p className="text-ink-soft">
                 {overrides} override{overrides === 1 ? '' : 's'} and {assumed} assumed input{assumed === 1 ? '' : 's'} to review on the Protection section.
               </p>
