@@ -102,3 +102,51 @@ describe('tested combination ratings', () => {
     expect(single.body.error.details[0].path).toBe('body.componentCodes');
   });
 });
+
+describe('a combination table as a file', () => {
+  const csvOf = (rows: string[]) => Buffer.from(['ref,parts,ratingKa,maxVolts,source,active', ...rows].join('\r\n') + '\r\n');
+  const upload = (s: Session, body: Buffer, name = 'combinations.csv') => s.agent.post('/api/catalogue/combinations/import').set('x-csrf-token', s.token).attach('file', body, name);
+  const list = async () => (await estimator.agent.get('/api/catalogue/combinations').expect(200)).body as Array<{ ref: string; ratingKa: number; source: string; version: number; active: boolean }>;
+
+  it('exports the combinations in the import format, imports a table all or nothing, and changes in place by reference', async () => {
+    const exported = await estimator.agent.get('/api/catalogue/combinations.csv').expect(200);
+    expect(exported.headers['content-type']).toBe('text/csv; charset=utf-8');
+    const original = exported.text.replace(/^\uFEFF/, '');
+    const lines = original.trim().split(/\r\n/);
+    expect(lines[0]).toBe('ref,parts,ratingKa,maxVolts,source,active');
+    expect(lines).toContain(`PW-CMB-N1-030,PW-BR-3P-030 + PW-CN-N1-120 + PW-OT-13A-C10,14,480,maker's published combination table (invented demo data); no higher than the breaker's 14 kA,yes`);
+    const before = await list();
+
+    // field problems: every bad row named, nothing written
+    const bad = await upload(engineer, csvOf([`X-${uniq()},PW-BR-3P-030,abc,480,maker's table,yes`, `Y-${uniq()},PW-BR-3P-030 + PW-CN-N1-120,10,480,maker's table,maybe`])).expect(400);
+    expect(bad.body.error.details.map((d: { path: string }) => d.path)).toEqual(['rows[2].parts', 'rows[2].ratingKa', 'rows[3].active']);
+    // a rating above the combination's own breaker (PW-BR-3P-030, 14 kA marked; invented demo data)
+    const over = await upload(engineer, csvOf([`Z-${uniq()},PW-BR-3P-030 + PW-CN-N1-120,20,480,maker's table,no`])).expect(400);
+    expect(over.body.error.details).toEqual([{ path: 'rows[2].ratingKa', message: 'at most 14 kA (PW-BR-3P-030)' }]);
+    const unknown = await upload(engineer, csvOf([`Z-${uniq()},PW-BR-3P-030 + NOT-A-PART,10,480,maker's table,no`])).expect(400);
+    expect(unknown.body.error.details).toEqual([{ path: 'rows[2].parts.1', message: 'NOT-A-PART is not in the catalogue' }]);
+    expect(await list()).toEqual(before);
+
+    // a good table: the original rows, one source changed (text that looks like a formula), one new (set aside, so no panel changes)
+    const fresh = `NEW-${uniq()}`;
+    const changedRows = lines.slice(1).map((l) => (l.startsWith('PW-CMB-N0-010,') ? l.replace(/,maker's published[^,]*,yes$/, ',"=HYPERLINK(""http://example.test"",""table"")",yes') : l));
+    const good = await upload(engineer, csvOf([...changedRows, `${fresh},PW-BR-3P-010 + PW-CN-N0-120,5,480,maker's table (invented),no`])).expect(200);
+    expect(good.body).toEqual({ created: 1, changed: 1, unchanged: before.length - 1 });
+    const after = await list();
+    const n0 = after.find((c) => c.ref === 'PW-CMB-N0-010')!;
+    expect(n0.source).toBe('=HYPERLINK("http://example.test","table")');
+    expect(n0.version).toBe(before.find((c) => c.ref === 'PW-CMB-N0-010')!.version + 1);
+    expect(after.find((c) => c.ref === fresh)).toMatchObject({ ratingKa: 5, active: false });
+    // the export neutralises the formula-like text; importing the original table puts the source back
+    expect((await estimator.agent.get('/api/catalogue/combinations.csv').expect(200)).text).toContain(`PW-CMB-N0-010,PW-BR-3P-010 + PW-CN-N0-120 + PW-OT-4A-C10,14,480,"'=HYPERLINK(""http://example.test"",""table"")",yes`);
+    const back = await upload(engineer, Buffer.from(original)).expect(200);
+    expect(back.body).toEqual({ created: 0, changed: 1, unchanged: before.length - 1 });
+    expect((await list()).find((c) => c.ref === 'PW-CMB-N0-010')!.source).toBe(before.find((c) => c.ref === 'PW-CMB-N0-010')!.source);
+  });
+
+  it('refuses the panel builder and a wrong header', async () => {
+    await upload(designer, csvOf([])).expect(403);
+    const r = await upload(estimator, Buffer.from('code,rating\r\nA,1\r\n')).expect(400);
+    expect(r.body.error.message).toBe('The header row must be: ref, parts, ratingKa, maxVolts, source, active');
+  });
+});

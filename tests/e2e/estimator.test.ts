@@ -150,5 +150,12 @@ describe('estimator in the browser', () => {
     await row.getByText('✔ in use').waitFor();
     await row.getByRole('button', { name: 'Set aside' }).click();
     await row.getByText('○ set aside').waitFor();
+
+    // a maker's table typed into the file format comes in as a whole (set aside, so no panel changes)
+    const tableRef = `E2E-TBL-${Date.now().toString(36).toUpperCase()}`;
+    const csv = `ref,parts,ratingKa,maxVolts,source,active\r\n${tableRef},PW-BR-3P-010 + PW-CN-N0-120,5,480,maker table (test data),no\r\n`;
+    await section.getByLabel('Import a combination table').setInputFiles({ name: 'table.csv', mimeType: 'text/csv', buffer: Buffer.from(csv) });
+    await section.getByRole('status').filter({ hasText: '✔ Imported: 1 new, 0 changed' }).waitFor();
+    await section.getByRole('row').filter({ hasText: tableRef }).getByText('○ set aside').waitFor();
   });
 });

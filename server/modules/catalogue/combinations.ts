@@ -3,9 +3,12 @@
 import type { z } from 'zod';
 import { Op, type Transaction } from 'sequelize';
 import type { CurrentUser } from '../../../shared/schemas/auth';
-import type { CombinationUpdateSchema, CombinationValues, CombinationView } from '../../../shared/schemas/combination';
+import ExcelJS from 'exceljs';
+import { parse } from 'csv-parse/sync';
+import { CombinationInputSchema, type CombinationUpdateSchema, type CombinationValues, type CombinationView } from '../../../shared/schemas/combination';
 import type { CombinationRating } from '../../../shared/standards/ul508a-sb4';
-import { ConflictError, NotFoundError, ValidationError } from '../../../shared/errors';
+import { ConflictError, NotFoundError, ValidationError, zodIssues } from '../../../shared/errors';
+import { checkXlsxPackage, csvField, unneutraliseCsvText } from './spreadsheet';
 import { CombinationRatingRow } from '../../db/models/combination-rating';
 import { CatalogueItem as CatalogueRow } from '../../db/models/catalogue-item';
 import { db } from '../../db/sequelize';
@@ -90,5 +93,118 @@ export async function updateCombination(actor: CurrentUser, id: number, input: z
     const what = Object.keys(changes).join(', ') || 'nothing';
     await recordActivity(actor, { entity: 'combination_rating', entityId: id, action: 'updated', summary: `Changed tested combination ${r.ref}: ${what}`, diff: changes }, t);
     return view(r);
+  });
+}
+
+// ------------------------------------------------------------------------------------------------
+// A combination table as a file: one row per combination, the parts joined by "+". A maker's published
+// combination table is typed or pasted once into this shape and imported in one go.
+
+export const COMBINATION_COLUMNS = ['ref', 'parts', 'ratingKa', 'maxVolts', 'source', 'active'] as const;
+
+/** The organisation's combinations as CSV (text that looks like a formula is neutralised). */
+export async function combinationsCsv(actor: CurrentUser): Promise<string> {
+  const rows = await listCombinations(actor);
+  const lines = [COMBINATION_COLUMNS.join(',')];
+  for (const c of rows) lines.push([c.ref, c.componentCodes.join(' + '), c.ratingKa, c.maxVolts, c.source, c.active ? 'yes' : 'no'].map(csvField).join(','));
+  return lines.join('\r\n') + '\r\n';
+}
+
+async function fileRows(buffer: Buffer, kind: 'xlsx' | 'csv'): Promise<string[][]> {
+  if (kind === 'csv') {
+    try {
+      return parse(buffer.toString('utf8').replace(/^\uFEFF/, ''), { relax_column_count: true, trim: true, skip_empty_lines: true, to_line: MAX_COMBINATION_ROWS + 2 }) as string[][];
+    } catch (err) {
+      throw new ValidationError(`The CSV could not be read: ${(err as Error).message}`, [{ path: 'file', message: 'not a readable CSV' }]);
+    }
+  }
+  const problem = checkXlsxPackage(buffer);
+  if (problem) throw new ValidationError(`The file was refused: ${problem}`, [{ path: 'file', message: problem }]);
+  const wb = new ExcelJS.Workbook();
+  try {
+    await wb.xlsx.load(buffer as unknown as ArrayBuffer);
+  } catch {
+    throw new ValidationError('The workbook could not be read: save it again as .xlsx', [{ path: 'file', message: 'not a readable workbook' }]);
+  }
+  const ws = wb.worksheets[0];
+  const rows: string[][] = [];
+  ws?.eachRow((row) => {
+    const cells: string[] = [];
+    for (let i = 1; i <= COMBINATION_COLUMNS.length; i++) {
+      const v = row.getCell(i).value as unknown;
+      const o = v as { result?: unknown; text?: unknown; richText?: Array<{ text: string }> } | null;
+      cells.push(v === null || v === undefined ? '' : typeof v === 'object' ? String(o?.richText?.map((r) => r.text).join('') ?? o?.text ?? o?.result ?? '') : String(v).trim());
+    }
+    rows.push(cells);
+  });
+  return rows;
+}
+
+const MAX_COMBINATION_ROWS = 2000;
+
+/**
+ * Imports a combination table: every row valid, every part in the catalogue and no rating above its
+ * own protective device, or nothing is written (the problems come back by row). A reference already
+ * kept is changed in place (its version moves); a new one is added.
+ */
+export async function importCombinations(actor: CurrentUser, buffer: Buffer, kind: 'xlsx' | 'csv') {
+  const raw = (await fileRows(buffer, kind)).filter((r) => r.some((c) => c !== ''));
+  if (raw.length > MAX_COMBINATION_ROWS + 1) throw new ValidationError(`At most ${MAX_COMBINATION_ROWS} combinations per file`, [{ path: 'file', message: 'too many rows' }]);
+  const header = (raw[0] ?? []).map((h) => h.trim());
+  if (COMBINATION_COLUMNS.some((c, i) => header[i] !== c)) {
+    throw new ValidationError(`The header row must be: ${COMBINATION_COLUMNS.join(', ')}`, [{ path: 'columns', message: `found ${header.join(', ') || 'nothing'}` }]);
+  }
+  if (raw.length < 2) throw new ValidationError('The file has no combinations under the header', [{ path: 'file', message: 'no rows' }]);
+  const issues: Array<{ path: string; message: string }> = [];
+  const seen = new Set<string>();
+  const values: CombinationValues[] = [];
+  raw.slice(1).forEach((cells, i) => {
+    const row = i + 2;
+    const [ref = '', parts = '', ratingKa = '', maxVolts = '', source = '', active = ''] = cells.map((c) => unneutraliseCsvText(c));
+    const activeText = active.toLowerCase();
+    if (activeText && !['yes', 'no', 'true', 'false'].includes(activeText)) issues.push({ path: `rows[${row}].active`, message: `"${active}" is not yes or no` });
+    const r = CombinationInputSchema.safeParse({
+      ref,
+      componentCodes: parts.split(/\s*[+,;]\s*|\s+/).filter(Boolean),
+      ratingKa: ratingKa === '' ? undefined : Number(ratingKa),
+      maxVolts: maxVolts === '' ? null : Number(maxVolts),
+      source,
+      active: activeText === '' ? true : activeText === 'yes' || activeText === 'true',
+    });
+    if (!r.success) {
+      for (const iss of zodIssues(r.error.issues)) issues.push({ path: `rows[${row}].${iss.path.replace(/^componentCodes/, 'parts')}`, message: iss.message });
+      return;
+    }
+    if (seen.has(r.data.ref)) issues.push({ path: `rows[${row}].ref`, message: `${r.data.ref} appears twice in the file` });
+    seen.add(r.data.ref);
+    values.push(r.data);
+  });
+  if (issues.length) throw new ValidationError(`${new Set(issues.map((x) => x.path.split('.')[0])).size} row(s) have problems: nothing was imported`, issues);
+
+  return db().transaction(async (t) => {
+    const existing = new Map(
+      (await CombinationRatingRow.findAll({ where: { organisationId: actor.organisationId, ref: { [Op.in]: values.map((v) => v.ref) } }, transaction: t, lock: t.LOCK.UPDATE })).map((r) => [r.ref, r]),
+    );
+    let created = 0;
+    let changed = 0;
+    let unchanged = 0;
+    for (const [i, v] of values.entries()) {
+      try {
+        await checkAgainstCatalogue(actor.organisationId, v, t);
+      } catch (e) {
+        if (!(e instanceof ValidationError)) throw e;
+        throw new ValidationError(`Row ${i + 2} (${v.ref}): ${e.message}: nothing was imported`, (e.details ?? []).map((d) => ({ path: `rows[${i + 2}].${d.path.replace(/^body\.componentCodes/, 'parts').replace(/^body\./, '')}`, message: d.message })));
+      }
+      const r = existing.get(v.ref);
+      if (!r) {
+        await CombinationRatingRow.create({ ...v, organisationId: actor.organisationId }, { transaction: t });
+        created++;
+      } else if (JSON.stringify([r.componentCodes, r.ratingKa, r.maxVolts, r.source, r.active]) !== JSON.stringify([v.componentCodes, v.ratingKa, v.maxVolts, v.source, v.active])) {
+        await r.update({ componentCodes: v.componentCodes, ratingKa: v.ratingKa, maxVolts: v.maxVolts, source: v.source, active: v.active, version: r.version + 1 }, { transaction: t });
+        changed++;
+      } else unchanged++;
+    }
+    await recordActivity(actor, { entity: 'combination_rating', entityId: 0, action: 'imported', summary: `Imported tested combinations: ${created} new, ${changed} changed, ${unchanged} unchanged` }, t);
+    return { created, changed, unchanged };
   });
 }

@@ -182,6 +182,32 @@ export const catalogueRoutes = [
     handler: ({ user, body }) => combinations.createCombination(user, body),
   }),
   defineRoute({
+    method: 'get',
+    path: '/api/catalogue/combinations.csv',
+    access: ALL,
+    summary: 'The tested combination ratings as .csv (the import format)',
+    handler: async ({ user, res }) => {
+      const csv = await combinations.combinationsCsv(user);
+      res.setHeader('content-type', 'text/csv; charset=utf-8');
+      res.setHeader('content-disposition', `attachment; filename="panelwright-combinations-${stamp()}.csv"`);
+      res.end('\uFEFF' + csv);
+      return undefined;
+    },
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/api/catalogue/combinations/import',
+    access: EDIT_COMBINATIONS,
+    summary: 'Import a combination table (.csv/.xlsx): every row good, or nothing written (problems listed by row)',
+    before: [upload],
+    status: 200,
+    handler: ({ user, req }) => {
+      const f = req.file;
+      if (!f) throw new ValidationError('Choose a .csv or .xlsx file to upload', [{ path: 'file', message: 'no file uploaded' }]);
+      return combinations.importCombinations(user, f.buffer, fileKind(f.originalname, f.mimetype));
+    },
+  }),
+  defineRoute({
     method: 'patch',
     path: '/api/catalogue/combinations/:combinationId',
     access: EDIT_COMBINATIONS,

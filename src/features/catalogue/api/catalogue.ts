@@ -90,3 +90,15 @@ export function useUpdateCombination() {
     onSettled: invalidate,
   });
 }
+
+export function useImportCombinations() {
+  const invalidate = useInvalidateCombinations();
+  return useMutation({
+    mutationFn: (file: File) => {
+      const fd = new FormData();
+      fd.append('file', file);
+      return api<{ created: number; changed: number; unchanged: number }>('POST', '/api/catalogue/combinations/import', fd);
+    },
+    onSuccess: invalidate,
+  });
+}

@@ -3,7 +3,7 @@ import { useQuery } from '@tanstack/react-query';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { z } from 'zod';
-import { combinationQueries, useCreateCombination, useUpdateCombination } from '../api/catalogue';
+import { combinationQueries, useCreateCombination, useImportCombinations, useUpdateCombination } from '../api/catalogue';
 import { Field, inputClass } from '../../../components/ui/field';
 import { Button } from '../../../components/ui/button';
 import { ErrorNote, Loading } from '../../../components/ui/feedback';
@@ -62,6 +62,7 @@ function AddCombinationForm({ onDone }: { onDone: () => void }) {
 export function CombinationsSection({ canEdit }: { canEdit: boolean }) {
   const list = useQuery(combinationQueries.list());
   const update = useUpdateCombination();
+  const importing = useImportCombinations();
   const [adding, setAdding] = useState(false);
   return (
     <section className="space-y-3" aria-labelledby="combinations-title">
@@ -72,8 +73,35 @@ export function CombinationsSection({ canEdit }: { canEdit: boolean }) {
             Parts of one bucket tested together to a short-circuit current rating (UL 508A SB4). When every part of a combination is in a bucket, the SCCR worksheet takes its rating for them. A combination is never rated above the interrupting rating of its own protective device.
           </p>
         </div>
-        {canEdit && !adding ? <Button onClick={() => setAdding(true)}>+ Add combination</Button> : null}
+        <div className="flex flex-wrap items-center gap-2">
+          <a href="/api/catalogue/combinations.csv" className="rounded border border-line bg-panel px-3 py-1.5 text-sm font-semibold hover:border-copper-500" download>
+            Download table (.csv)
+          </a>
+          {canEdit ? (
+            <label className="cursor-pointer rounded border border-line bg-panel px-3 py-1.5 text-sm font-semibold hover:border-copper-500">
+              {importing.isPending ? 'Importing…' : 'Import table (.csv, .xlsx)'}
+              <input
+                type="file"
+                accept=".csv,.xlsx"
+                className="sr-only"
+                aria-label="Import a combination table"
+                onChange={(e) => {
+                  const f = e.target.files?.[0];
+                  if (f) importing.mutate(f);
+                  e.target.value = '';
+                }}
+              />
+            </label>
+          ) : null}
+          {canEdit && !adding ? <Button onClick={() => setAdding(true)}>+ Add combination</Button> : null}
+        </div>
       </div>
+      {importing.isSuccess ? (
+        <p className="text-sm" role="status">
+          ✔ Imported: {importing.data.created} new, {importing.data.changed} changed, {importing.data.unchanged} unchanged. Columns: ref, parts (joined by +), ratingKa, maxVolts, source, active.
+        </p>
+      ) : null}
+      {importing.error ? <ErrorNote error={importing.error} /> : null}
       {adding ? <AddCombinationForm onDone={() => setAdding(false)} /> : null}
       {update.error ? <ErrorNote error={update.error} /> : null}
       {list.isPending ? <Loading what="Loading the combinations" /> : list.isError ? <ErrorNote error={list.error} /> : list.data.length === 0 ? (
