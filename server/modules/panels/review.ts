@@ -58,10 +58,13 @@ export async function returnPanel(actor: CurrentUser, panelId: number, version: 
   return panelDetail(actor, panelId);
 }
 
-/** Signs off: rebuilds the bill of materials and freezes selections and BOM as the next revision, in one transaction. */
-/** The acknowledgement an engineer writes when signing off a panel rated below the site's fault current. */
+/** The shortest reason an engineer may give when signing off a panel rated below the site's fault current. */
 const MIN_JUSTIFICATION = 15;
 
+/**
+ * Signs off: rebuilds the bill of materials and freezes selections and BOM as the next revision, in one
+ * transaction; a panel SCCR below the available fault current needs `acknowledgeSccr` and a reason.
+ */
 export async function approvePanel(
   actor: CurrentUser,
   panelId: number,
