@@ -347,6 +347,26 @@ describe('stored selections against the current rules', () => {
     expect(activity.map((a) => a.summary)).toContain('Selected 2 motors again under the current rules: P-7 (branch protection, phase-reversal relay, cautions)');
   });
 
+  it('names a motor whose stored answers the current rules refuse, and still checks the others', async () => {
+    const { Load } = await import('../../server/db/models/load');
+    const designer = await signInAs('designer');
+    const { panel } = await newPanel(designer);
+    const a = (await send(designer, 'post', `/api/panels/${panel.id}/loads`, { answers: { tag: 'R-1', supply: 'ac3', hp: 10, volts: 460, environment: 'indoor-dusty' } }).expect(201)).body;
+    const b = (await send(designer, 'post', `/api/panels/${panel.id}/loads`, { answers: { tag: 'R-2', supply: 'ac3', hp: 15, volts: 460, environment: 'indoor-dusty' } }).expect(201)).body;
+    // R-1's answers as an earlier release might have let them through; R-2's stored breaker differs
+    await Load.update({ answers: { tag: 'R-1', supply: 'ac3', hp: 10, volts: 460, environment: 'indoor-dusty', poles: 3 } }, { where: { id: a.id } });
+    const row = (await Load.findByPk(b.id))!;
+    await Load.update({ selection: { ...(row.selection as Record<string, unknown>), scpd: { ...((row.selection as { scpd: object }).scpd), ratingAmps: 1 } } }, { where: { id: b.id } });
+    const check = (await designer.agent.get(`/api/panels/${panel.id}/rule-check`).expect(200)).body;
+    expect(check.changed.map((c: { tag: string }) => c.tag)).toEqual(['R-1', 'R-2']);
+    expect(check.changed[0].differences).toEqual([{ field: 'answers', label: 'Answers', from: 'accepted', to: expect.stringMatching(/^its answers no longer pass: .*poles/) }]);
+    expect(check.changed[1].differences.map((d: { field: string }) => d.field)).toEqual(['scpd.ratingAmps']);
+    // selecting again waits until the motor is fixed, and says which answer
+    const p = (await designer.agent.get(`/api/panels/${panel.id}`)).body;
+    const r = await send(designer, 'post', `/api/panels/${panel.id}/reselect`, { version: p.version }).expect(400);
+    expect(JSON.stringify(r.body.error)).toContain('poles');
+  });
+
   it('refuses to select again while the panel is in review', async () => {
     const designer = await signInAs('designer');
     const { panel } = await newPanel(designer);

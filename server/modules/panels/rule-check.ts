@@ -11,18 +11,42 @@ import type { RuleCheckBody } from '../../../shared/schemas/panel';
 import { selectionDifferences } from '../../../shared/calc/selection-diff';
 import { recordActivity } from '../activity/service';
 import * as repo from './repository';
-import { selectAll } from './selection';
+import { selectAll, selectOne } from './selection';
+import { ValidationError } from '../../../shared/errors';
 import { changePanel, requirePanel, reselectPanel } from './service';
 import type { Load } from '../../db/models/load';
 
+/** Each motor's selection under the current rules, or the reason its stored answers no longer pass them. */
+async function currentSelections(job: Parameters<typeof selectAll>[0], loads: Load[]): Promise<Array<LoadSelection | string>> {
+  try {
+    return (await selectAll(job, loads.map((l) => l.answers as LoadInput)))?.results ?? [];
+  } catch (e) {
+    if (!(e instanceof ValidationError)) throw e;
+    // one motor's answers fail the current schema: the others are still checked, that one is named
+    return Promise.all(
+      loads.map((l) =>
+        selectOne(job, l.answers as LoadInput).catch((err: unknown) => {
+          if (!(err instanceof ValidationError)) throw err;
+          return `its answers no longer pass: ${(err.details ?? []).map((d) => `${d.path}: ${d.message}`).join('; ') || err.message}`;
+        }),
+      ),
+    );
+  }
+}
+
 async function differencesOf(job: Parameters<typeof selectAll>[0], loads: Load[]): Promise<RuleCheckBody['changed']> {
-  const out = await selectAll(job, loads.map((l) => l.answers as LoadInput));
-  if (!out) return [];
+  const now = await currentSelections(job, loads);
   const changed: RuleCheckBody['changed'] = [];
   loads.forEach((l, i) => {
     const stored = l.selection as unknown as LoadSelection | null;
-    const now = out.results[i] as LoadSelection;
-    const differences = stored ? selectionDifferences(stored, now) : [{ field: 'selection', label: 'Selection', from: 'none', to: 'made' }];
+    const current = now[i];
+    if (current === undefined) return;
+    const differences =
+      typeof current === 'string'
+        ? [{ field: 'answers', label: 'Answers', from: 'accepted', to: current }]
+        : stored
+          ? selectionDifferences(stored, current)
+          : [{ field: 'selection', label: 'Selection', from: 'none', to: 'made' }];
     if (differences.length) changed.push({ loadId: l.id, tag: l.tag, differences });
   });
   return changed;
