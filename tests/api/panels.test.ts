@@ -148,6 +148,27 @@ describe('review and sign-off', () => {
     expect(report.motors.added).toEqual(['P-2']);
     expect(report.motors.changed).toEqual(['P-1']);
     expect(report.motors.decisions).toEqual([{ tag: 'P-1', differences: [{ field: 'enclosure.nemaType', label: 'Enclosure type', from: '12', to: '4X' }] }]);
+
+    // the same report as a workbook for the change-order price: totals with their change, lines with formulas
+    const x = await estimator.agent.get(`/api/panels/${panel.id}/change-report.xlsx?from=0&to=1`).buffer(true).parse((res, cb) => {
+      const chunks: Buffer[] = [];
+      res.on('data', (c: Buffer) => chunks.push(c));
+      res.on('end', () => cb(null, Buffer.concat(chunks)));
+    }).expect(200);
+    expect(x.headers['content-disposition']).toContain(`${job.number}-MCC-F-R0-R1-changes.xlsx`);
+    const cw = new ExcelJS.Workbook();
+    await cw.xlsx.load(x.body as ArrayBuffer);
+    expect(cw.worksheets.map((w) => w.name)).toEqual(['Summary', 'Lines', 'Decisions']);
+    const sellRow = cw.getWorksheet('Summary')!.getRows(1, 12)!.find((r) => r.getCell(1).value === 'Sell price')!;
+    expect(sellRow.getCell(2).value).toBe(report.totals.from.sell);
+    expect(sellRow.getCell(3).value).toBe(report.totals.to.sell);
+    expect(sellRow.getCell(4).value).toMatchObject({ formula: `C${sellRow.number}-B${sellRow.number}`, result: report.totals.sellDelta });
+    const linesSheet = cw.getWorksheet('Lines')!;
+    const lineCount = report.bom.added.length + report.bom.removed.length + report.bom.changed.length;
+    expect(linesSheet.rowCount).toBe(lineCount + 2); // header, lines, total
+    const total = linesSheet.getRow(lineCount + 2);
+    expect(total.getCell(9).value).toMatchObject({ formula: `SUM(I2:I${lineCount + 1})`, result: report.bom.materialDelta });
+    expect(cw.getWorksheet('Decisions')!.getRow(2).values).toEqual([undefined, 'P-1', 'Enclosure type', '12', '4X']);
     expect(report.bom.added.length).toBeGreaterThan(0);
     expect(report.totals.sellDelta).toBeGreaterThan(0);
     expect(await Revision.count({ where: { panelId: panel.id } })).toBe(2);

@@ -153,6 +153,13 @@ describe('designer → engineer → estimator', () => {
     const delta = await report.getByTestId('sell-delta').textContent();
     expect(delta).toMatch(/^\+\$[\d,]+\.\d\d$/);
     await screenshot(est, 'change-report');
+    // the change-order price as a workbook: the sell price change matches the page
+    const [changes] = await Promise.all([est.waitForEvent('download'), report.getByRole('link', { name: 'Download R0 → R1 (.xlsx)' }).click()]);
+    const cw = new ExcelJS.Workbook();
+    await cw.xlsx.readFile((await changes.path())!);
+    const sell = cw.getWorksheet('Summary')!.getRows(1, 12)!.find((r) => r.getCell(1).value === 'Sell price')!;
+    const result = (sell.getCell(4).value as { result: number }).result;
+    expect(`+${result.toLocaleString('en-US', { style: 'currency', currency: 'USD' })}`).toBe(delta);
 
     await est.goto(`${panelUrl}/bill-of-materials`);
     const [download] = await Promise.all([est.waitForEvent('download'), est.getByRole('link', { name: /\.xlsx/ }).first().click()]);

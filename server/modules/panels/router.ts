@@ -6,6 +6,8 @@ import { OverridesPutSchema } from '../../../shared/schemas/override';
 import * as service from './service';
 import * as review from './review';
 import * as ruleCheck from './rule-check';
+import { changeReportWorkbook } from './change-report-export';
+import { attachment } from '../../http/attachment';
 
 const ALL = ['admin', 'designer', 'estimator', 'engineer'] as const;
 const DESIGN = ['admin', 'designer'] as const;
@@ -182,5 +184,19 @@ export const panelRoutes = [
     params: PanelId,
     query: z.object({ from: z.coerce.number().int().min(0), to: z.coerce.number().int().min(0) }),
     handler: ({ user, params, query }) => review.compareRevisions(user, params.panelId, query.from, query.to),
+  }),
+  defineRoute({
+    method: 'get',
+    path: '/api/panels/:panelId/change-report.xlsx',
+    access: ALL,
+    summary: 'Change report between two revisions as .xlsx (totals, lines with formulas, decisions)',
+    params: PanelId,
+    query: z.object({ from: z.coerce.number().int().min(0), to: z.coerce.number().int().min(0) }),
+    handler: async ({ user, params, query, res }) => {
+      const out = await changeReportWorkbook(user, params.panelId, query.from, query.to);
+      attachment(res, out.base, 'xlsx');
+      res.end(out.buffer);
+      return undefined;
+    },
   }),
 ];

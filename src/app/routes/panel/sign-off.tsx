@@ -24,6 +24,9 @@ function ChangeReport({ panelId, from, to }: { panelId: number; from: number; to
   ];
   return (
     <div className="space-y-2" aria-label="Change report">
+      <a className="text-sm font-semibold text-copper-700 underline" href={`/api/panels/${panelId}/change-report.xlsx?from=${from}&to=${to}`} download>
+        Download R{from} → R{to} (.xlsx)
+      </a>
       <p className="text-sm">
         Motors added: <strong>{d.motors.added.join(', ') || 'none'}</strong> · removed: <strong>{d.motors.removed.join(', ') || 'none'}</strong> · changed:{' '}
         <strong>{d.motors.changed.join(', ') || 'none'}</strong>
