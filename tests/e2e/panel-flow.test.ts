@@ -98,6 +98,7 @@ describe('designer → engineer → estimator', () => {
     await signInThroughForm(page, 'engineer');
     await page.waitForURL(/\/jobs$/);
     // the jobs page puts the engineer's queue first: the submitted panel, opened at its Protection section
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: /^Jobs\s*[1-9]\d* waiting for you$/ }).waitFor();
     const waiting = page.getByRole('region', { name: 'Sign-off queue' }).getByLabel('Waiting for sign-off');
     await waiting.getByText('your next work').waitFor();
     await waiting.getByRole('link', { name: 'J-2042 · MCC-S Sludge press' }).click();

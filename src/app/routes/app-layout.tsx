@@ -3,6 +3,7 @@ import { useQuery } from '@tanstack/react-query';
 import { hasRole, sessionQueries, useSignOut } from '../../features/auth/api/session';
 import { ROLE_LABELS, type Role } from '../../../shared/schemas/auth';
 import { ErrorBoundary } from './error-boundary';
+import { panelQueries } from '../../features/panels/api/panels';
 
 function Mark() {
   return (
@@ -18,6 +19,9 @@ export function AppLayout() {
   const signOut = useSignOut();
   const navigate = useNavigate();
   const navigation = useNavigation();
+  // panels waiting on this person: in review for an engineer, returned for a panel builder
+  const queue = useQuery({ ...panelQueries.queue(), enabled: !!me });
+  const waiting = (queue.data ?? []).filter((p) => (p.status === 'in_review' && hasRole(me, 'engineer')) || (p.status === 'returned' && hasRole(me, 'designer', 'admin'))).length;
   const links: Array<{ to: string; label: string; show: boolean }> = [
     { to: '/jobs', label: 'Jobs', show: true },
     { to: '/catalogue', label: 'Catalogue', show: true },
@@ -47,6 +51,12 @@ export function AppLayout() {
                   }
                 >
                   {l.label}
+                  {l.to === '/jobs' && waiting > 0 ? (
+                    <span className="ml-1.5 rounded-full bg-copper-600 px-1.5 py-0.5 text-xs font-bold text-white" title={`${waiting} panel${waiting === 1 ? '' : 's'} waiting for you`}>
+                      {waiting}
+                      <span className="sr-only"> waiting for you</span>
+                    </span>
+                  ) : null}
                 </NavLink>
               ))}
           </nav>
