@@ -21,6 +21,8 @@ export const FACT_SCHEMAS = {
   flaGiven: z.boolean(),
   serviceFactor: z.number(),
   tempRiseC: nullableNumber,
+  /** locked-rotor withstand (hot safe stall) time, s; null when not given */
+  lockedRotorWithstandS: nullableNumber,
   codeLetter: z.string().nullable(),
   design: z.enum(['A', 'B', 'C', 'D']).nullable(),
   energyEfficient: z.boolean(),
@@ -82,6 +84,7 @@ export function buildFacts(load: Load, supply: Supply, derived: { hp: number; fl
     flaGiven: load.fla !== undefined,
     serviceFactor: load.serviceFactor,
     tempRiseC: load.tempRiseC ?? null,
+    lockedRotorWithstandS: load.lockedRotorWithstandS ?? null,
     codeLetter: load.codeLetter ?? null,
     design: load.design ?? null,
     energyEfficient: load.energyEfficient,

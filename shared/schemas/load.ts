@@ -53,6 +53,8 @@ const LoadObject = z
     fla: positive('fla').max(5000).optional(),
     serviceFactor: z.number().min(1, 'serviceFactor is at least 1.0').max(1.5).default(1.0),
     tempRiseC: positive('tempRiseC').max(150).optional(),
+    /** the motor's locked-rotor withstand (hot safe stall) time, s, from the motor maker's data */
+    lockedRotorWithstandS: positive('lockedRotorWithstandS').max(300).optional(),
     codeLetter: z.enum(CODE_LETTERS, { error: 'codeLetter must be a NEC Table 430.7(B) letter (A–V, no I, O, Q)' }).optional(),
     design: z.enum(['A', 'B', 'C', 'D']).optional(),
     energyEfficient: z.boolean().default(false),

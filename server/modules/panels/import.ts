@@ -53,6 +53,7 @@ export const IMPORT_COLUMNS: Column[] = [
   { header: 'scpdType', key: 'scpdType', kind: 'string', note: 'inverse-time-breaker, instantaneous-trip-breaker, dual-element-fuse, non-time-delay-fuse', example: 'inverse-time-breaker' },
   { header: 'cableLengthFt', key: 'cableLengthFt', kind: 'number', note: 'feet', example: 80 },
   { header: 'tempRiseC', key: 'tempRiseC', kind: 'number', note: 'marked temperature rise, °C (40 or less allows 125 % overload, 430.32)', example: '' },
+  { header: 'lockedRotorWithstandS', key: 'lockedRotorWithstandS', kind: 'number', note: "locked-rotor withstand (hot safe stall) time, s, from the motor maker's data: limits the trip class", example: '' },
   { header: 'energyEfficient', key: 'energyEfficient', kind: 'boolean', note: 'yes/no; Design B energy-efficient (Table 430.52 instantaneous-trip 1100 %)', example: 'no' },
   { header: 'poles', key: 'poles', kind: 'integer', note: 'even number (synchronous speed)', example: 4 },
   { header: 'rotor', key: 'rotor', kind: 'string', note: 'squirrel-cage or wound-rotor', example: 'squirrel-cage' },

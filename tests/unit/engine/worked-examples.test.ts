@@ -258,3 +258,38 @@ describe('a three-phase motor on an unbalanced supply (NEMA MG 1 14.35)', () => 
     expect(r.unbalance).toBeNull();
   });
 });
+
+describe('the trip class against the motor\'s locked-rotor withstand time', () => {
+  // A class N relay trips within N s at 600 % of its setting (NEMA ICS 2, IEC 60947-4-1; from memory):
+  // the class must stay within the motor's locked-rotor (hot safe stall) withstand time (DOMAIN.md §3).
+  const fan = (over: Record<string, unknown>) => motor({ tag: 'F-9', hp: 75, volts: 460, fla: 90, serviceFactor: 1.15, inertia: 'very-high', ...over });
+
+  it('keeps class 30 for a very high inertia load when the motor withstands 30 s or more', async () => {
+    expect((await selector.selectLoad(fan({}), supply480)).overload.tripClass).toBe(30);
+    expect((await selector.selectLoad(fan({ lockedRotorWithstandS: 35 }), supply480)).overload.tripClass).toBe(30);
+  });
+
+  it('holds a very high inertia load to class 20 when the motor withstands 20–29 s, with a caution', async () => {
+    const r = await selector.selectLoad(fan({ lockedRotorWithstandS: 22 }), supply480);
+    expect(r.overload.tripClass).toBe(20);
+    expect(r.trace.some((t) => t.ruleId === 'trip-class-withstand-20')).toBe(true);
+    expect(r.cautions.some((c) => c.startsWith('Trip class held to 20'))).toBe(true);
+  });
+
+  it('holds a high or very high inertia load to class 10 below 20 s, and warns below 10 s', async () => {
+    const r = await selector.selectLoad(fan({ lockedRotorWithstandS: 12 }), supply480);
+    expect(r.overload.tripClass).toBe(10);
+    expect(r.cautions.some((c) => c.startsWith('Trip class held to 10'))).toBe(true);
+    const high = await selector.selectLoad(fan({ inertia: 'high', lockedRotorWithstandS: 15 }), supply480);
+    expect(high.overload.tripClass).toBe(10);
+    const short = await selector.selectLoad(fan({ lockedRotorWithstandS: 8 }), supply480);
+    expect(short.overload.tripClass).toBe(10);
+    expect(short.cautions.some((c) => c.includes('class 5 electronic relay'))).toBe(true);
+  });
+
+  it('changes nothing for a normal load', async () => {
+    const r = await selector.selectLoad(motor({ hp: 25, volts: 460, fla: 31, serviceFactor: 1.15, lockedRotorWithstandS: 15 }), supply480);
+    expect(r.overload.tripClass).toBe(10);
+    expect(r.cautions.some((c) => c.startsWith('Trip class held'))).toBe(false);
+  });
+});

@@ -19,7 +19,7 @@ import type { CodeEdition } from '../../../../shared/standards/code-edition';
 
 const STEPS = ['Nameplate', 'Duty', 'Site & hazards', 'Protection'] as const;
 const STEP_FIELDS: Record<(typeof STEPS)[number], string[]> = {
-  Nameplate: ['tag', 'description', 'supply', 'hp', 'kw', 'volts', 'hz', 'fla', 'serviceFactor', 'tempRiseC', 'codeLetter', 'design', 'energyEfficient', 'poles', 'rotor', 'singlePhaseType', 'dcField', 'leads', 'connection'],
+  Nameplate: ['tag', 'description', 'supply', 'hp', 'kw', 'volts', 'hz', 'fla', 'serviceFactor', 'tempRiseC', 'lockedRotorWithstandS', 'codeLetter', 'design', 'energyEfficient', 'poles', 'rotor', 'singlePhaseType', 'dcField', 'leads', 'connection'],
   Duty: ['duty', 'jogging', 'plugging', 'reversing', 'speedControl', 'turndown', 'torque', 'startingLimit', 'starterPreference', 'insideDelta', 'inertia', 'twoSpeed', 'quickStop'],
   'Site & hazards': ['environment', 'reverseRotationHazard', 'critical', 'cableLengthFt'],
   Protection: ['scpdType', 'conductor'],
@@ -173,6 +173,7 @@ export function Component() {
               <Field label="Nameplate FLA" unit="A" error={e.fla?.message} hint="Sizes the overload (430.6(A)(2))">{(a) => <input {...a} {...register('fla', optNum)} inputMode="decimal" className={inputClass} />}</Field>
               <Field label="Service factor" error={e.serviceFactor?.message}>{(a) => <input {...a} {...register('serviceFactor', optNum)} inputMode="decimal" className={inputClass} />}</Field>
               <Field label="Temperature rise" unit="°C" error={e.tempRiseC?.message}>{(a) => <input {...a} {...register('tempRiseC', optNum)} inputMode="decimal" className={inputClass} />}</Field>
+              <Field label="Locked-rotor withstand" unit="s" hint="hot safe stall time, motor maker's data" error={e.lockedRotorWithstandS?.message}>{(a) => <input {...a} {...register('lockedRotorWithstandS', optNum)} inputMode="decimal" className={inputClass} />}</Field>
               {supplyKind !== 'dc' ? (
                 <SelectField label="NEMA code letter" error={e.codeLetter?.message} hint="Locked-rotor kVA/hp, Table 430.7(B)" field={register('codeLetter', opt)} notGiven="Not known" options={CODE_LETTERS} />
               ) : null}
