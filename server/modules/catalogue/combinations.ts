@@ -51,9 +51,9 @@ export async function activeCombinations(organisationId: number): Promise<readon
  * Every part must be in the catalogue, and the rating may not exceed the interrupting rating marked
  * on a protective device of the combination (its own rating limits the branch).
  */
-async function checkAgainstCatalogue(organisationId: number, v: Pick<CombinationValues, 'componentCodes' | 'ratingKa'>, t: Transaction) {
-  const items = await CatalogueRow.findAll({ where: { organisationId, code: { [Op.in]: v.componentCodes } }, transaction: t });
-  const byCode = new Map(items.map((i) => [i.code, i]));
+async function checkAgainstCatalogue(organisationId: number, v: Pick<CombinationValues, 'componentCodes' | 'ratingKa'>, t: Transaction, known?: ReadonlyMap<string, CatalogueRow>) {
+  const byCode = known ?? new Map((await CatalogueRow.findAll({ where: { organisationId, code: { [Op.in]: v.componentCodes } }, transaction: t })).map((i) => [i.code, i]));
+  const items = v.componentCodes.flatMap((code) => byCode.get(code) ?? []);
   const issues = v.componentCodes.flatMap((code, i) => (byCode.has(code) ? [] : [{ path: `body.componentCodes.${i}`, message: `${code} is not in the catalogue` }]));
   if (issues.length) throw new ValidationError('A combination can name only parts of the catalogue', issues);
   const limit = items.filter((i) => PROTECTIVE.has(i.category) && i.sccrKa !== null).sort((a, b) => a.sccrKa! - b.sccrKa!)[0];
@@ -185,12 +185,15 @@ export async function importCombinations(actor: CurrentUser, buffer: Buffer, kin
     const existing = new Map(
       (await CombinationRatingRow.findAll({ where: { organisationId: actor.organisationId, ref: { [Op.in]: values.map((v) => v.ref) } }, transaction: t, lock: t.LOCK.UPDATE })).map((r) => [r.ref, r]),
     );
+    // every part of every row in one query, not one per row
+    const codes = [...new Set(values.flatMap((v) => v.componentCodes))];
+    const known = new Map((await CatalogueRow.findAll({ where: { organisationId: actor.organisationId, code: { [Op.in]: codes } }, transaction: t })).map((i) => [i.code, i]));
     let created = 0;
     let changed = 0;
     let unchanged = 0;
     for (const [i, v] of values.entries()) {
       try {
-        await checkAgainstCatalogue(actor.organisationId, v, t);
+        await checkAgainstCatalogue(actor.organisationId, v, t, known);
       } catch (e) {
         if (!(e instanceof ValidationError)) throw e;
         throw new ValidationError(`Row ${i + 2} (${v.ref}): ${e.message}: nothing was imported`, (e.details ?? []).map((d) => ({ path: `rows[${i + 2}].${d.path.replace(/^body\.componentCodes/, 'parts').replace(/^body\./, '')}`, message: d.message })));
