@@ -123,3 +123,11 @@ export function motorLeadText(s: { conductor: { motorLeads?: MotorLeadConductors
   if (!m) return null;
   return `controller to motor: ${m.count} × ${m.size} ${s.conductor.material === 'cu' ? 'Cu' : 'Al'} (${m.ampacity} A ≥ ${m.minAmpacity} A, ${Math.round(m.share * 100)} % of FLC)`;
 }
+
+/** The running voltage drop in words, or null when no cable length was given. */
+export function voltageDropText(s: { conductor: { voltageDrop?: { volts: number; percent: number; lengthFt: number; limitPercent: number; sizeWithinLimit: string | null } } }): string | null {
+  const d = s.conductor.voltageDrop;
+  if (!d) return null;
+  const over = d.percent > d.limitPercent;
+  return `running voltage drop ${d.volts} V (${d.percent} %) over ${d.lengthFt} ft${over ? ` — above ${d.limitPercent} %${d.sizeWithinLimit ? `, ${d.sizeWithinLimit} keeps it within` : ''}` : ''}`;
+}

@@ -86,8 +86,11 @@ export function applyOverrides(sel: LoadSelection, overrides: ReadonlyArray<Pick
     // conductors to the motor and per-winding devices were sized for the engine's wye-delta or
     // part-winding starter: another starter takes them away (the warning says the sizes were the engine's)
     delete eff.conductor.motorLeads;
+    delete eff.conductor.voltageDrop;
     delete eff.scpd.perWinding;
   }
+  // the drop was worked out on the engine's conductor
+  if (eff.conductor.size !== sel.conductor.size) delete eff.conductor.voltageDrop;
   if (eff.scpd.type !== sel.scpd.type) delete eff.scpd.perWinding;
   return eff;
 }

@@ -9,6 +9,7 @@
 import { Engine, type RuleResult, type TopLevelCondition } from 'json-rules-engine';
 import { DomainError, ValidationError, zodIssues } from '../errors';
 import { branchConductor, motorLeadConductors } from '../calc/conductor';
+import { motorVoltageDrop, type VoltageDropResult } from '../calc/voltage-drop';
 import { motorDisconnect } from '../calc/disconnect';
 import { softStarterMinAmps, vfdMinOutputAmps } from '../calc/drives';
 import { feederRollup, type FeederBranch } from '../calc/feeder';
@@ -331,6 +332,38 @@ export function createSelector(ruleFiles: ReadonlyArray<RuleFileInput>, options:
         basis: leads.basis,
       });
     }
+    // running voltage drop over the cable, on the conductors that make the run to the motor
+    let voltageDrop: VoltageDropResult | null = null;
+    if (cond && load.cableLengthFt !== undefined && load.cableLengthFt > 0) {
+      const onLeads = leads !== null;
+      voltageDrop = step('voltage drop', () =>
+        motorVoltageDrop(
+          {
+            amps: fla,
+            ratedVolts: load.volts,
+            threePhase: load.supply === 'ac3',
+            lengthFt: load.cableLengthFt!,
+            conductor: onLeads ? leads!.size : cond.size,
+            material: load.conductor.material,
+            circuit: onLeads ? (starterType === 'wye-delta' ? 'delta-leads' : 'half-windings') : 'line',
+          },
+          edition,
+        ),
+      );
+      if (voltageDrop) {
+        trace.push({
+          ruleId: 'sizing.voltage-drop',
+          decision: `conductor.voltageDrop = ${voltageDrop.volts} V (${voltageDrop.percent} %) over ${voltageDrop.lengthFt} ft`,
+          reason: `${fla} A at full load on ${onLeads ? `the motor leads (${leads!.size})` : cond.size}`,
+          basis: voltageDrop.basis,
+        });
+        if (voltageDrop.percent > voltageDrop.limitPercent) {
+          cautions.push(
+            `Running voltage drop ${voltageDrop.percent} % over ${voltageDrop.lengthFt} ft is above ${voltageDrop.limitPercent} % (common practice)${voltageDrop.sizeWithinLimit ? `: ${voltageDrop.sizeWithinLimit} keeps it within` : ''}; check the drop at starting too.`,
+          );
+        }
+      }
+    }
     if (starterType === 'VFD' && load.driveInputAmps === undefined) {
       cautions.push('Drive input conductors follow 430.122(A): 125 % of the drive rated input current — recheck once the drive is chosen.');
     }
@@ -439,6 +472,7 @@ export function createSelector(ruleFiles: ReadonlyArray<RuleFileInput>, options:
             ampacity: cond.ampacity,
             basis: cond.basis,
             ...(leads ? { motorLeads: { count: leads.count, share: leads.share, minAmpacity: leads.minAmpacity, size: leads.size, ampacity: leads.ampacity, basis: leads.basis } } : {}),
+            ...(voltageDrop ? { voltageDrop } : {}),
           }
         : { minAmpacity: 0, size: 'not determined', material: load.conductor.material, tempRatingC: load.conductor.tempRatingC, ampacity: 0, basis: 'not determined' },
       disconnect: disc ?? { minAmps: 0, minHp: null, basis: 'not determined' },

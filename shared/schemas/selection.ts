@@ -88,6 +88,8 @@ export interface MotorLeadConductors {
   basis: string;
 }
 
+import type { VoltageDropResult } from '../calc/voltage-drop';
+
 export interface LoadSelection {
   tag: string;
   description?: string;
@@ -146,6 +148,8 @@ export interface LoadSelection {
     basis: string;
     /** wye-delta and part-winding starters: the conductors from controller to motor (absent otherwise) */
     motorLeads?: MotorLeadConductors;
+    /** running voltage drop over the given cable length (absent when no length was given) */
+    voltageDrop?: VoltageDropResult;
   };
   disconnect: { minAmps: number; minHp: number | null; basis: string };
   relays: { phaseLoss: boolean; phaseReversal: boolean; phaseLossByOverload: boolean };

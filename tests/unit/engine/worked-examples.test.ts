@@ -293,3 +293,29 @@ describe('the trip class against the motor\'s locked-rotor withstand time', () =
     expect(r.cautions.some((c) => c.startsWith('Trip class held'))).toBe(false);
   });
 });
+
+describe('running voltage drop over the cable (NEC Chapter 9 Table 8 resistance at 75 °C, from memory; 3 % common practice)', () => {
+  it('25 hp 460 V, 31 A on 8 AWG Cu: 300 ft stays within 3 %, 500 ft does not and 6 AWG would', async () => {
+    const near = await selector.selectLoad(motor({ hp: 25, volts: 460, fla: 31, serviceFactor: 1.15, cableLengthFt: 300 }), supply480);
+    expect(near.conductor.size).toBe('8 AWG');
+    // √3 × 31 A × 0.764 Ω/kft × 0.300 kft = 12.31 V; of the 480 V system: 2.56 %
+    expect(near.conductor.voltageDrop).toMatchObject({ lengthFt: 300, amps: 31, volts: 12.31, percent: 2.56, systemVolts: 480, sizeWithinLimit: null });
+    expect(near.cautions.some((c) => c.startsWith('Running voltage drop'))).toBe(false);
+    const far = await selector.selectLoad(motor({ hp: 25, volts: 460, fla: 31, serviceFactor: 1.15, cableLengthFt: 500 }), supply480);
+    // 20.51 V = 4.27 %; 6 AWG (0.491 Ω/kft) gives 13.18 V = 2.75 %
+    expect(far.conductor.voltageDrop).toMatchObject({ volts: 20.51, percent: 4.27, sizeWithinLimit: '6 AWG' });
+    expect(far.cautions).toContain('Running voltage drop 4.27 % over 500 ft is above 3 % (common practice): 6 AWG keeps it within; check the drop at starting too.');
+  });
+
+  it('part-winding: the two halves run in parallel, I/2 each, on the motor leads', async () => {
+    const r = await selector.selectLoad(motor({ tag: 'F-3', hp: 25, volts: 230, fla: 60, serviceFactor: 1.0, leads: 9, connection: 'wye', startingLimit: 'reduced-inrush', starterPreference: 'part-winding', cableLengthFt: 200 }), supply240);
+    expect(r.conductor.motorLeads!.size).toBe('8 AWG');
+    // √3 × 30 A × 0.764 Ω/kft × 0.200 kft = 7.94 V; of 240 V: 3.31 %; 6 AWG: 5.10 V = 2.13 %
+    expect(r.conductor.voltageDrop).toMatchObject({ volts: 7.94, percent: 3.31, systemVolts: 240, sizeWithinLimit: '6 AWG' });
+  });
+
+  it('no length, no figure', async () => {
+    const r = await selector.selectLoad(motor({ hp: 25, volts: 460, fla: 31 }), supply480);
+    expect(r.conductor.voltageDrop).toBeUndefined();
+  });
+});
