@@ -44,14 +44,17 @@ export function useUpdateItem() {
   });
 }
 
+/** One file as multipart form data, under the field name the server's upload takes. */
+function uploadFile<T>(path: string, file: File): Promise<T> {
+  const fd = new FormData();
+  fd.append('file', file);
+  return api<T>('POST', path, fd);
+}
+
 export function useImportCatalogue() {
   const invalidate = useInvalidateCatalogue();
   return useMutation({
-    mutationFn: (file: File) => {
-      const fd = new FormData();
-      fd.append('file', file);
-      return api<ImportSummary>('POST', '/api/catalogue/import', fd);
-    },
+    mutationFn: (file: File) => uploadFile<ImportSummary>('/api/catalogue/import', file),
     onSuccess: invalidate,
   });
 }
@@ -94,11 +97,7 @@ export function useUpdateCombination() {
 export function useImportCombinations() {
   const invalidate = useInvalidateCombinations();
   return useMutation({
-    mutationFn: (file: File) => {
-      const fd = new FormData();
-      fd.append('file', file);
-      return api<{ created: number; changed: number; unchanged: number }>('POST', '/api/catalogue/combinations/import', fd);
-    },
+    mutationFn: (file: File) => uploadFile<{ created: number; changed: number; unchanged: number }>('/api/catalogue/combinations/import', file),
     onSuccess: invalidate,
   });
 }
