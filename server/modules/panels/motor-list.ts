@@ -47,6 +47,7 @@ const SCHEDULE: ReadonlyArray<readonly [string, number, (s: LoadSelection) => st
   ['Conductor', 16, (s) => `${s.conductor.size} ${s.conductor.material === 'cu' ? 'Cu' : 'Al'} ${s.conductor.tempRatingC} °C`],
   ['Ampacity (A)', 10, (s) => s.conductor.ampacity],
   ['To the motor', 16, (s) => (s.conductor.motorLeads ? `${s.conductor.motorLeads.count} × ${s.conductor.motorLeads.size}` : null)],
+  ['Voltage drop (%)', 11, (s) => s.conductor.voltageDrop?.percent ?? null],
   ['Disconnect ≥ (A)', 11, (s) => s.disconnect.minAmps],
   ['Disconnect ≥ (hp)', 11, (s) => s.disconnect.minHp],
   ['Phase loss', 14, (s) => (s.relays.phaseLoss ? (s.relays.phaseLossByOverload ? 'in the overload' : 'relay') : 'no')],
