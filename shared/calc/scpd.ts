@@ -19,6 +19,14 @@ export interface ScpdResult {
   exception: 'none' | 'exception-1' | 'exception-2';
 }
 
+/** The protective device in words, for a schedule, a one-line or a submittal. */
+export const SCPD_WORDS: Record<ScpdType, string> = {
+  'inverse-time-breaker': 'inverse-time breaker',
+  'instantaneous-trip-breaker': 'instantaneous-trip breaker',
+  'dual-element-fuse': 'dual-element fuses',
+  'non-time-delay-fuse': 'non-time-delay fuses',
+};
+
 export function motorKind(load: { supply: 'ac3' | 'ac1' | 'dc'; rotor?: string; design?: string; energyEfficient?: boolean }): MotorKind {
   if (load.supply === 'dc') return 'dc-constant-voltage';
   if (load.supply === 'ac1') return 'single-phase';
@@ -88,7 +96,7 @@ export function branchProtection(
 
 /** One device per half-winding: half the Table 430.52 value; the next higher standard rating where
  *  the half is not one (430.52(C)(1) Exception No. 1 read into "that specified by 430.52"). */
-export function perWindingProtection(input: { flcAmps: number; type: ScpdType; motor: MotorKind }, edition: CodeEdition): PerWindingScpd {
+function perWindingProtection(input: { flcAmps: number; type: ScpdType; motor: MotorKind }, edition: CodeEdition): PerWindingScpd {
   const maxPercent = maxPercent430_52(input.motor, input.type) / 2;
   const computed = round2((input.flcAmps * maxPercent) / 100);
   if (input.type === 'instantaneous-trip-breaker') {
@@ -106,7 +114,7 @@ export function perWindingProtection(input: { flcAmps: number; type: ScpdType; m
 
 /** One set of time-delay (dual-element) fuses for both windings of a part-winding motor: at most
  *  150 % of the table FLC, at or below it (430.4 Exception). */
-export function partWindingSingleFuse(flcAmps: number, edition: CodeEdition): ScpdResult {
+function partWindingSingleFuse(flcAmps: number, edition: CodeEdition): ScpdResult {
   const computed = round2(flcAmps * 1.5);
   return {
     type: 'dual-element-fuse',
@@ -116,6 +124,19 @@ export function partWindingSingleFuse(flcAmps: number, edition: CodeEdition): Sc
     basis: nec(edition, '430.4 Exception (one set of time-delay fuses for both windings, not over 150 % of FLC), Table 240.6(A)'),
     exception: 'none',
   };
+}
+
+/**
+ * A part-winding motor's branch protection (NEC 430.4): the single device of the exception in place of
+ * the 430.52 one (time-delay fuses then at most 150 % of FLC; an Exception No. 2 override stands), and
+ * the alternative of a device on each half-winding.
+ */
+export function partWindingProtection(single: ScpdResult, input: { flcAmps: number; motor: MotorKind }, edition: CodeEdition): { single: ScpdResult; perWinding: PerWindingScpd } {
+  const both =
+    single.type === 'dual-element-fuse' && single.exception !== 'exception-2'
+      ? partWindingSingleFuse(input.flcAmps, edition)
+      : { ...single, basis: `${single.basis}; ${nec(edition, '430.4 Exception')} (one device for both windings: it must let the motor start)` };
+  return { single: both, perWinding: perWindingProtection({ flcAmps: input.flcAmps, type: single.type, motor: input.motor }, edition) };
 }
 
 /** The per-winding alternative in words, or null when the motor is not part-winding. */

@@ -8,16 +8,12 @@
 import { nec, type CodeEdition } from '../standards/code-edition';
 import { CHAPTER_9_TABLE_8, resistanceOhmsPerKft } from '../standards/nec-chapter-9-table-8';
 import { sizesFor, type ConductorMaterial } from '../standards/nec-table-310-16';
+import { nominalSystemVolts } from '../standards/nominal-system-voltages';
 
 export const DROP_LIMIT_PERCENT = 3;
 
 const round2 = (x: number) => Math.round(x * 100) / 100;
 
-/** The nominal system voltage a motor rating belongs to (460 V motor on a 480 V system …). */
-export function systemVolts(ratedVolts: number): number {
-  const map: Array<[number, number, number]> = [[110, 120, 120], [200, 208, 208], [220, 240, 240], [440, 480, 480], [550, 600, 600]];
-  return map.find(([lo, hi]) => ratedVolts >= lo && ratedVolts <= hi)?.[2] ?? ratedVolts;
-}
 
 /** "2 × 350 kcmil per phase" -> { sets: 2, size: "350 kcmil" } */
 export function parseConductor(size: string): { sets: number; size: string } {
@@ -60,7 +56,8 @@ export function motorVoltageDrop(
 ): VoltageDropResult {
   const { sets, size } = parseConductor(input.conductor);
   const circuit = input.circuit ?? 'line';
-  const sys = systemVolts(input.ratedVolts);
+  // a percentage of the nominal system voltage (460 V motor: of 480 V), or of the rating outside the ranges
+  const sys = nominalSystemVolts(input.ratedVolts) ?? input.ratedVolts;
   const volts = dropVolts(input.amps, resistanceOhmsPerKft(size, input.material), input.lengthFt, sets, input.threePhase, circuit);
   const percent = (volts / sys) * 100;
   let sizeWithinLimit: string | null = null;

@@ -18,13 +18,14 @@ import { lockedRotorCurrent } from '../calc/locked-rotor';
 import { nemaStarterSize } from '../calc/nema-starter-size';
 import { overloadMaxSetting, overloadRelay } from '../calc/overload';
 import { unbalanceDerating } from '../standards/nema-mg1-voltage-unbalance';
-import { branchProtection, motorKind, partWindingSingleFuse, perWindingProtection } from '../calc/scpd';
+import { branchProtection, motorKind, partWindingProtection } from '../calc/scpd';
 import { synchronousRpm } from '../calc/synchronous-speed';
 import { LoadSchema, SelectionInputSchema, SupplySchema, type Load, type LoadInput, type SelectionInput, type Supply, type SupplyInput } from '../schemas/load';
 import type { AssumedInput, LoadSelection, PerWindingScpd, SelectionOutput, StarterType, SupplyKind, TraceEntry, UnbalanceResult } from '../schemas/selection';
 import { DEFAULT_CODE_EDITION, nec, type CodeEdition } from '../standards/code-edition';
 import { enclosureType } from '../standards/nema-250-enclosure-types';
-import { DECISION_KEYS, type DecisionKey, type Decisions } from './decisions';
+import { nominalSystemVolts } from '../standards/nominal-system-voltages';
+import { type DecisionKey, type Decisions } from './decisions';
 import { buildFacts, type Facts } from './facts';
 import { validateRuleFiles, type RuleFile } from './rule-file';
 
@@ -67,15 +68,6 @@ function formatValue(v: unknown): string {
   return typeof v === 'string' ? v : JSON.stringify(v);
 }
 
-/** System voltage family, for deciding which loads a feeder at the supply voltage carries directly. */
-function systemOf(volts: number): string | null {
-  if (volts >= 110 && volts <= 120) return '120';
-  if (volts >= 200 && volts <= 208) return '208';
-  if (volts >= 220 && volts <= 240) return '240';
-  if (volts >= 440 && volts <= 480) return '480';
-  if (volts >= 550 && volts <= 600) return '600';
-  return null;
-}
 
 function parseOrThrow<T>(schema: { safeParse(v: unknown): { success: true; data: T } | { success: false; error: { issues: ReadonlyArray<{ path: ReadonlyArray<PropertyKey>; message: string }> } } }, value: unknown, prefix: string): T {
   const r = schema.safeParse(value);
@@ -287,10 +279,11 @@ export function createSelector(ruleFiles: ReadonlyArray<RuleFileInput>, options:
     // alternative of a device on each half-winding at one-half the 430.52 value.
     let perWinding: PerWindingScpd | null = null;
     if (scpd && starterType === 'part-winding') {
-      if (scpd.type === 'dual-element-fuse' && scpd.exception !== 'exception-2') scpd = partWindingSingleFuse(flcAmps, edition);
-      else scpd = { ...scpd, basis: `${scpd.basis}; ${nec(edition, '430.4 Exception')} (one device for both windings: it must let the motor start)` };
-      perWinding = step('branch protection per half-winding', () => perWindingProtection({ flcAmps, type: load.scpdType, motor: motorKind(load) }, edition));
-      if (perWinding) {
+      const single = scpd;
+      const pw = step('branch protection per half-winding', () => partWindingProtection(single, { flcAmps, motor: motorKind(load) }, edition));
+      if (pw) {
+        scpd = pw.single;
+        perWinding = pw.perWinding;
         trace.push({
           ruleId: 'sizing.scpd-per-winding',
           decision: `scpd.perWinding = 2 × ${perWinding.ratingAmps} A (max ${perWinding.maxPercent} % = ${perWinding.computedMaxAmps} A each)`,
@@ -513,7 +506,7 @@ export function createSelector(ruleFiles: ReadonlyArray<RuleFileInput>, options:
     const notes: string[] = [];
     const errors: string[] = [];
     const branches: FeederBranch[] = [];
-    const supplySystem = systemOf(supply.volts);
+    const supplySystem = nominalSystemVolts(supply.volts);
     const feederFamily = supply.feeder.ocpdType === 'inverse-time-breaker' ? 'breaker' : 'fuse';
     results.forEach((r, i) => {
       const load = loads[i] as Load;
@@ -529,7 +522,7 @@ export function createSelector(ruleFiles: ReadonlyArray<RuleFileInput>, options:
         errors.push(`${r.tag}: a three-phase motor cannot be fed from a single-phase supply`);
         return;
       }
-      if (systemOf(load.volts) === null || systemOf(load.volts) !== supplySystem) {
+      if (nominalSystemVolts(load.volts) === null || nominalSystemVolts(load.volts) !== supplySystem) {
         notes.push(`${r.tag}: rated ${load.volts} V, not on the ${supply.volts} V feeder directly; add its transformer's primary current`);
         return;
       }

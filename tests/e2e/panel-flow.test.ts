@@ -8,7 +8,7 @@ import os from 'node:os';
 import path from 'node:path';
 import ExcelJS from 'exceljs';
 import type { Browser, Page } from 'playwright-core';
-import { baseUrl, launch, newPage, screenshot, signInThroughForm } from '../setup/browser';
+import { launch, newPage, screenshot, signInThroughForm } from '../setup/browser';
 
 let browser: Browser;
 let panelUrl = '';

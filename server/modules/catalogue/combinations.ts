@@ -3,12 +3,11 @@
 import type { z } from 'zod';
 import { Op, type Transaction } from 'sequelize';
 import type { CurrentUser } from '../../../shared/schemas/auth';
-import ExcelJS from 'exceljs';
-import { parse } from 'csv-parse/sync';
 import { CombinationInputSchema, type CombinationUpdateSchema, type CombinationValues, type CombinationView } from '../../../shared/schemas/combination';
 import type { CombinationRating } from '../../../shared/standards/ul508a-sb4';
 import { ConflictError, NotFoundError, ValidationError, zodIssues } from '../../../shared/errors';
-import { checkXlsxPackage, csvField, unneutraliseCsvText } from './spreadsheet';
+import { csvField, unneutraliseCsvText } from './spreadsheet';
+import { readSheetRows } from '../../http/sheet-rows';
 import { CombinationRatingRow } from '../../db/models/combination-rating';
 import { CatalogueItem as CatalogueRow } from '../../db/models/catalogue-item';
 import { db } from '../../db/sequelize';
@@ -110,36 +109,6 @@ export async function combinationsCsv(actor: CurrentUser): Promise<string> {
   return lines.join('\r\n') + '\r\n';
 }
 
-async function fileRows(buffer: Buffer, kind: 'xlsx' | 'csv'): Promise<string[][]> {
-  if (kind === 'csv') {
-    try {
-      return parse(buffer.toString('utf8').replace(/^\uFEFF/, ''), { relax_column_count: true, trim: true, skip_empty_lines: true, to_line: MAX_COMBINATION_ROWS + 2 }) as string[][];
-    } catch (err) {
-      throw new ValidationError(`The CSV could not be read: ${(err as Error).message}`, [{ path: 'file', message: 'not a readable CSV' }]);
-    }
-  }
-  const problem = checkXlsxPackage(buffer);
-  if (problem) throw new ValidationError(`The file was refused: ${problem}`, [{ path: 'file', message: problem }]);
-  const wb = new ExcelJS.Workbook();
-  try {
-    await wb.xlsx.load(buffer as unknown as ArrayBuffer);
-  } catch {
-    throw new ValidationError('The workbook could not be read: save it again as .xlsx', [{ path: 'file', message: 'not a readable workbook' }]);
-  }
-  const ws = wb.worksheets[0];
-  const rows: string[][] = [];
-  ws?.eachRow((row) => {
-    const cells: string[] = [];
-    for (let i = 1; i <= COMBINATION_COLUMNS.length; i++) {
-      const v = row.getCell(i).value as unknown;
-      const o = v as { result?: unknown; text?: unknown; richText?: Array<{ text: string }> } | null;
-      cells.push(v === null || v === undefined ? '' : typeof v === 'object' ? String(o?.richText?.map((r) => r.text).join('') ?? o?.text ?? o?.result ?? '') : String(v).trim());
-    }
-    rows.push(cells);
-  });
-  return rows;
-}
-
 const MAX_COMBINATION_ROWS = 2000;
 
 /**
@@ -148,8 +117,7 @@ const MAX_COMBINATION_ROWS = 2000;
  * kept is changed in place (its version moves); a new one is added.
  */
 export async function importCombinations(actor: CurrentUser, buffer: Buffer, kind: 'xlsx' | 'csv') {
-  const raw = (await fileRows(buffer, kind)).filter((r) => r.some((c) => c !== ''));
-  if (raw.length > MAX_COMBINATION_ROWS + 1) throw new ValidationError(`At most ${MAX_COMBINATION_ROWS} combinations per file`, [{ path: 'file', message: 'too many rows' }]);
+  const raw = (await readSheetRows(buffer, kind, { maxRows: MAX_COMBINATION_ROWS, what: 'combinations' })).filter((r) => r.some((c) => c !== ''));
   const header = (raw[0] ?? []).map((h) => h.trim());
   if (COMBINATION_COLUMNS.some((c, i) => header[i] !== c)) {
     throw new ValidationError(`The header row must be: ${COMBINATION_COLUMNS.join(', ')}`, [{ path: 'columns', message: `found ${header.join(', ') || 'nothing'}` }]);
@@ -188,7 +156,7 @@ export async function importCombinations(actor: CurrentUser, buffer: Buffer, kin
     // every part of every row in one query, not one per row
     const codes = [...new Set(values.flatMap((v) => v.componentCodes))];
     const known = new Map((await CatalogueRow.findAll({ where: { organisationId: actor.organisationId, code: { [Op.in]: codes } }, transaction: t })).map((i) => [i.code, i]));
-    let created = 0;
+    const fresh: Array<CombinationValues & { organisationId: number }> = [];
     let changed = 0;
     let unchanged = 0;
     for (const [i, v] of values.entries()) {
@@ -199,14 +167,15 @@ export async function importCombinations(actor: CurrentUser, buffer: Buffer, kin
         throw new ValidationError(`Row ${i + 2} (${v.ref}): ${e.message}: nothing was imported`, (e.details ?? []).map((d) => ({ path: `rows[${i + 2}].${d.path.replace(/^body\.componentCodes/, 'parts').replace(/^body\./, '')}`, message: d.message })));
       }
       const r = existing.get(v.ref);
-      if (!r) {
-        await CombinationRatingRow.create({ ...v, organisationId: actor.organisationId }, { transaction: t });
-        created++;
-      } else if (JSON.stringify([r.componentCodes, r.ratingKa, r.maxVolts, r.source, r.active]) !== JSON.stringify([v.componentCodes, v.ratingKa, v.maxVolts, v.source, v.active])) {
+      if (!r) fresh.push({ ...v, organisationId: actor.organisationId });
+      else if (JSON.stringify([r.componentCodes, r.ratingKa, r.maxVolts, r.source, r.active]) !== JSON.stringify([v.componentCodes, v.ratingKa, v.maxVolts, v.source, v.active])) {
         await r.update({ componentCodes: v.componentCodes, ratingKa: v.ratingKa, maxVolts: v.maxVolts, source: v.source, active: v.active, version: r.version + 1 }, { transaction: t });
         changed++;
       } else unchanged++;
     }
+    // the new ones in one statement; a changed one is an update of its own row (its version moves)
+    await CombinationRatingRow.bulkCreate(fresh, { transaction: t });
+    const created = fresh.length;
     await recordActivity(actor, { entity: 'combination_rating', entityId: 0, action: 'imported', summary: `Imported tested combinations: ${created} new, ${changed} changed, ${unchanged} unchanged` }, t);
     return { created, changed, unchanged };
   });

@@ -2,8 +2,9 @@ import multer from 'multer';
 import { z } from 'zod';
 import { defineRoute } from '../../http/route-table';
 import { CatalogueItemBaseSchema, CatalogueItemSchema, CategorySchema, LabourKeySchema } from '../../../shared/schemas/catalogue';
-import { DomainError, ValidationError } from '../../../shared/errors';
+import { ValidationError } from '../../../shared/errors';
 import { IMPORT_LIMITS, catalogueToCsv, writeCatalogueXlsx } from './spreadsheet';
+import { UnsupportedFile } from '../../http/sheet-rows';
 import * as service from './service';
 import * as combinations from './combinations';
 import { CombinationInputSchema, CombinationUpdateSchema } from '../../../shared/schemas/combination';
@@ -47,11 +48,6 @@ const ItemPatch = z
 const XLSX_TYPES = new Set(['application/vnd.openxmlformats-officedocument.spreadsheetml.sheet', 'application/octet-stream', 'application/zip']);
 const CSV_TYPES = new Set(['text/csv', 'text/plain', 'application/csv', 'application/vnd.ms-excel', 'application/octet-stream']);
 
-class UnsupportedFile extends DomainError {
-  constructor(message: string) {
-    super('unsupported_file', message, [{ path: 'file', message }]);
-  }
-}
 
 export function fileKind(name: string, mime: string): 'xlsx' | 'csv' {
   const lower = name.toLowerCase();

@@ -1,6 +1,6 @@
 // A motor's lead connection card from its answers (lead count, connection, voltage, single-phase type,
 // DC field) and its selection (starter type). The card itself comes from shared/calc/connections.
-import { connectionCard, type ConnectionCard, type ConnectionRequest } from '../../../shared/calc/connections';
+import { connectionCard, type ConnectionRequest } from '../../../shared/calc/connections';
 import type { LoadSelection } from '../../../shared/schemas/selection';
 import type { MotorConnectionCard } from '../../../shared/schemas/checks';
 

@@ -1,14 +1,13 @@
 // Motor-list import: a template, a preview that marks each row's problems before anything is saved,
 // then an all-or-nothing commit. Columns are the selection engine's input fields.
 import ExcelJS from 'exceljs';
-import { parse } from 'csv-parse/sync';
 import type { CurrentUser } from '../../../shared/schemas/auth';
 import { LoadSchema, type LoadInput } from '../../../shared/schemas/load';
-import { DomainError, ValidationError, zodIssues } from '../../../shared/errors';
+import { ValidationError, zodIssues } from '../../../shared/errors';
 import { changePanel, addLoads, requirePanel } from './service';
 import { recordActivity } from '../activity/service';
 import { loadsOf } from './repository';
-import { checkXlsxPackage } from '../catalogue/spreadsheet';
+import { UnsupportedFile, readSheetRows } from '../../http/sheet-rows';
 
 export const MAX_IMPORT_ROWS = 2000;
 export const MAX_IMPORT_BYTES = 2 * 1024 * 1024;
@@ -125,24 +124,6 @@ export interface PreviewRow {
   problems: Array<{ column: string; message: string }>;
 }
 
-class UnsupportedFile extends DomainError {
-  constructor(message: string) {
-    super('unsupported_file', message);
-  }
-}
-
-function cellText(v: unknown): string {
-  if (v === null || v === undefined) return '';
-  if (typeof v === 'object') {
-    const o = v as { text?: unknown; result?: unknown; richText?: Array<{ text: string }>; formula?: unknown };
-    if (o.richText) return o.richText.map((r) => r.text).join('');
-    if (o.text !== undefined) return String(o.text);
-    if (o.result !== undefined) return String(o.result);
-    if (o.formula !== undefined) return '';
-  }
-  return String(v).trim();
-}
-
 function toValue(c: Column, raw: string): { value?: unknown; error?: string } {
   if (raw === '') return {};
   if (c.kind === 'string') return { value: raw };
@@ -160,41 +141,9 @@ function toValue(c: Column, raw: string): { value?: unknown; error?: string } {
 
 async function readRows(buffer: Buffer, filename: string): Promise<string[][]> {
   const lower = filename.toLowerCase();
-  if (lower.endsWith('.csv')) {
-    const text = buffer.toString('utf8').replace(/^\uFEFF/, '');
-    if (text.includes('\u0000')) throw new UnsupportedFile('The file is not a text CSV');
-    const rows = parseCsv(text);
-    if (rows.length > MAX_IMPORT_ROWS + 1) throw new ValidationError(`At most ${MAX_IMPORT_ROWS} motors per file`, [{ path: 'file', message: 'too many rows' }]);
-    return rows;
-  }
-  if (!lower.endsWith('.xlsx')) throw new UnsupportedFile('Upload an .xlsx or .csv file');
-  const packageProblem = checkXlsxPackage(buffer);
-  if (packageProblem) throw new UnsupportedFile(`The file was refused: ${packageProblem}`);
-  const wb = new ExcelJS.Workbook();
-  try {
-    await wb.xlsx.load(buffer as unknown as ArrayBuffer);
-  } catch {
-    throw new UnsupportedFile('The workbook could not be read: save it again as .xlsx');
-  }
-  const ws = wb.worksheets[0];
-  if (!ws) return [];
-  if (ws.rowCount > MAX_IMPORT_ROWS + 1 || ws.columnCount > 200) throw new ValidationError(`At most ${MAX_IMPORT_ROWS} motors and 200 columns per file`, [{ path: 'file', message: 'too many rows or columns' }]);
-  const rows: string[][] = [];
-  ws.eachRow({ includeEmpty: true }, (row, n) => {
-    const cells: string[] = [];
-    for (let i = 1; i <= ws.columnCount; i++) cells.push(cellText(row.getCell(i).value));
-    rows[n - 1] = cells;
-  });
-  return Array.from(rows, (r) => r ?? []);
-}
-
-/** RFC 4180 CSV (quoted fields, doubled quotes, CRLF or LF) through csv-parse, with the row limit. */
-export function parseCsv(text: string): string[][] {
-  try {
-    return parse(text, { relax_column_count: true, trim: true, skip_empty_lines: true, to_line: MAX_IMPORT_ROWS + 2 }) as string[][];
-  } catch (err) {
-    throw new ValidationError(`The CSV could not be read: ${(err as Error).message}`, [{ path: 'file', message: 'not a readable CSV' }]);
-  }
+  const kind = lower.endsWith('.csv') ? 'csv' : lower.endsWith('.xlsx') ? 'xlsx' : null;
+  if (!kind) throw new UnsupportedFile('Upload an .xlsx or .csv file');
+  return readSheetRows(buffer, kind, { maxRows: MAX_IMPORT_ROWS, what: 'motors' });
 }
 
 export async function previewImport(buffer: Buffer, filename: string, existingTags: string[] = []): Promise<{ rows: PreviewRow[]; ok: boolean; columns: string[] }> {

@@ -11,13 +11,8 @@ import { IMPORT_COLUMNS, answerValue } from './import';
 import { loadsOf } from './repository';
 import { requirePanel } from './service';
 import { CHECK_CAUTIONS } from '../checks/service';
+import { SCPD_WORDS } from '../../../shared/calc/scpd';
 
-const SCPD_WORDS: Record<LoadSelection['scpd']['type'], string> = {
-  'inverse-time-breaker': 'inverse-time breaker',
-  'instantaneous-trip-breaker': 'instantaneous-trip breaker',
-  'dual-element-fuse': 'dual-element fuses',
-  'non-time-delay-fuse': 'non-time-delay fuses',
-};
 
 function cell(v: unknown): string | number | null {
   if (v === undefined || v === null) return null;

@@ -1,7 +1,6 @@
 // Sign-off: Draft → In review → Signed off (a frozen revision R0, R1 …) or Returned.
 import { db } from '../../db/sequelize';
 import type { CurrentUser } from '../../../shared/schemas/auth';
-import type { PanelState } from '../../../shared/schemas/panel';
 import type { BomLine } from '../../../shared/schemas/catalogue';
 import { computeTotals, diffBoms } from '../../../shared/calc/bom';
 import { selectionDifferences } from '../../../shared/calc/selection-diff';

@@ -14,6 +14,7 @@ import { relayOf, relayWiringText } from '../../../shared/calc/overload';
 import { perWindingText } from '../../../shared/calc/scpd';
 import { motorLeadText, voltageDropText } from '../../../shared/calc/conductor';
 import { unbalanceText } from '../../../shared/standards/nema-mg1-voltage-unbalance';
+import { SCPD_WORDS } from '../../../shared/calc/scpd';
 
 export interface SubmittalData {
   job: {
@@ -156,12 +157,6 @@ function starterText(s: LoadSelection): string {
   return `${s.starter.type}${s.starter.nemaSize !== null ? ` size ${s.starter.nemaSize}` : ''}`;
 }
 
-const SCPD_WORDS: Record<LoadSelection['scpd']['type'], string> = {
-  'inverse-time-breaker': 'inverse-time breaker',
-  'instantaneous-trip-breaker': 'instantaneous-trip breaker',
-  'dual-element-fuse': 'dual-element fuses',
-  'non-time-delay-fuse': 'non-time-delay fuses',
-};
 
 /** The one-line of a bucket as a text chain, supply to motor. */
 export function oneLineText(s: LoadSelection): string {

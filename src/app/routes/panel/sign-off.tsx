@@ -7,6 +7,7 @@ import { SignOffState } from '../../../components/ui/status';
 import { Button } from '../../../components/ui/button';
 import { Caution, ErrorNote, Loading } from '../../../components/ui/feedback';
 import { inputClass } from '../../../components/ui/field';
+import { ApiError } from '../../../lib/api-client';
 import { checkQueries } from '../../../features/checks/api/checks';
 import { DecisionDifferences } from '../../../features/panels/components/decision-differences';
 
@@ -87,7 +88,9 @@ export function Component() {
   // acknowledgement and a written reason (the server holds the same rule)
   const sccr = checks.data?.sccr;
   const sccrShort = sccr ? sccr.verdict === 'below-available' || sccr.verdict === 'incomplete' : false;
-  const needsAck = canReview && (sccrShort || /NEC 409\.22|SCCR/.test(act.error?.message ?? ''));
+  // the checks' verdict, or the server's own (it works the rating out from the rebuilt bill of materials)
+  const serverAsks = act.error instanceof ApiError && act.error.fieldIssues.some((i) => i.path === 'body.acknowledgeSccr');
+  const needsAck = canReview && (sccrShort || serverAsks);
   const reasonShort = comment.trim().length < 15;
   const overrides = p.loads.reduce((n, l) => n + l.overrides.length, 0);
   const assumed = p.loads.reduce((n, l) => n + (l.selection?.assumed.length ?? 0), 0);

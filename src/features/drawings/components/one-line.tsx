@@ -1,5 +1,6 @@
 import type { LoadSelection } from '../../../../shared/schemas/selection';
 import { relayWiringText } from '../../../../shared/calc/overload';
+import { SCPD_WORDS } from '../../../../shared/calc/scpd';
 
 const SLATE = '#334155';
 const COPPER = '#b87333';
@@ -25,12 +26,6 @@ export interface OneLineElement {
   interlocked?: boolean;
 }
 
-const SCPD_WORDS: Record<LoadSelection['scpd']['type'], string> = {
-  'inverse-time-breaker': 'inverse-time breaker',
-  'instantaneous-trip-breaker': 'instantaneous-trip breaker',
-  'dual-element-fuse': 'dual-element fuses',
-  'non-time-delay-fuse': 'non-time-delay fuses',
-};
 
 function contactorPoles(s: LoadSelection): { poles: string[]; label: string } {
   switch (s.starter.type) {
