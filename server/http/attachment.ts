@@ -10,3 +10,10 @@ export function attachment(res: Response, base: string, ext: 'xlsx' | 'csv') {
     ext === 'xlsx' ? 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet' : 'text/csv; charset=utf-8',
   );
 }
+
+/** A whole download in one go: the headers of `attachment`, then the body; the handler returns nothing. */
+export function sendAttachment(res: Response, base: string, ext: 'xlsx' | 'csv', body: Buffer | string): undefined {
+  attachment(res, base, ext);
+  res.end(body);
+  return undefined;
+}

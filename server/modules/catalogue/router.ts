@@ -5,6 +5,7 @@ import { CatalogueItemBaseSchema, CatalogueItemSchema, CategorySchema, LabourKey
 import { ValidationError } from '../../../shared/errors';
 import { IMPORT_LIMITS, catalogueToCsv, writeCatalogueXlsx } from './spreadsheet';
 import { UnsupportedFile } from '../../http/sheet-rows';
+import { sendAttachment } from '../../http/attachment';
 import * as service from './service';
 import * as combinations from './combinations';
 import { CombinationInputSchema, CombinationUpdateSchema } from '../../../shared/schemas/combination';
@@ -137,13 +138,7 @@ export const catalogueRoutes = [
     path: '/api/catalogue.csv',
     access: ALL,
     summary: 'The whole catalogue as .csv',
-    handler: async ({ user, res }) => {
-      const items = await service.allItems(user);
-      res.setHeader('content-type', 'text/csv; charset=utf-8');
-      res.setHeader('content-disposition', `attachment; filename="panelwright-catalogue-${stamp()}.csv"`);
-      res.end('\uFEFF' + catalogueToCsv(items));
-      return undefined;
-    },
+    handler: async ({ user, res }) => sendAttachment(res, `panelwright-catalogue-${stamp()}`, 'csv', '\uFEFF' + catalogueToCsv(await service.allItems(user))),
   }),
   defineRoute({
     method: 'post',
@@ -182,13 +177,7 @@ export const catalogueRoutes = [
     path: '/api/catalogue/combinations.csv',
     access: ALL,
     summary: 'The tested combination ratings as .csv (the import format)',
-    handler: async ({ user, res }) => {
-      const csv = await combinations.combinationsCsv(user);
-      res.setHeader('content-type', 'text/csv; charset=utf-8');
-      res.setHeader('content-disposition', `attachment; filename="panelwright-combinations-${stamp()}.csv"`);
-      res.end('\uFEFF' + csv);
-      return undefined;
-    },
+    handler: async ({ user, res }) => sendAttachment(res, `panelwright-combinations-${stamp()}`, 'csv', '\uFEFF' + (await combinations.combinationsCsv(user))),
   }),
   defineRoute({
     method: 'post',

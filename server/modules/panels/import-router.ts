@@ -4,7 +4,7 @@ import { defineRoute } from '../../http/route-table';
 import { ValidationError } from '../../../shared/errors';
 import { MAX_IMPORT_BYTES, commitImport, importTemplate, panelPreview } from './import';
 import { motorListExport } from './motor-list';
-import { attachment } from '../../http/attachment';
+import { sendAttachment } from '../../http/attachment';
 
 const DESIGN = ['admin', 'designer'] as const;
 const ALL = ['admin', 'designer', 'estimator', 'engineer'] as const;
@@ -29,9 +29,7 @@ export const importRoutes = [
     params: PanelId,
     handler: async ({ user, params, res }) => {
       const out = await motorListExport(user, params.panelId);
-      attachment(res, out.base, 'xlsx');
-      res.end(out.buffer);
-      return undefined;
+      return sendAttachment(res, out.base, 'xlsx', out.buffer);
     },
   }),
   defineRoute({
@@ -40,13 +38,7 @@ export const importRoutes = [
     access: DESIGN,
     summary: 'Motor-list template (.xlsx)',
     params: PanelId,
-    handler: async ({ user, params, res }) => {
-      const buf = await importTemplate(user, params.panelId);
-      res.setHeader('content-type', 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet');
-      res.setHeader('content-disposition', 'attachment; filename="panelwright-motor-list.xlsx"');
-      res.end(buf);
-      return undefined;
-    },
+    handler: async ({ user, params, res }) => sendAttachment(res, 'panelwright-motor-list', 'xlsx', await importTemplate(user, params.panelId)),
   }),
   defineRoute({
     method: 'post',

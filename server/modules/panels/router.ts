@@ -7,7 +7,7 @@ import * as service from './service';
 import * as review from './review';
 import * as ruleCheck from './rule-check';
 import { changeReportWorkbook } from './change-report-export';
-import { attachment } from '../../http/attachment';
+import { sendAttachment } from '../../http/attachment';
 
 const ALL = ['admin', 'designer', 'estimator', 'engineer'] as const;
 const DESIGN = ['admin', 'designer'] as const;
@@ -194,9 +194,7 @@ export const panelRoutes = [
     query: z.object({ from: z.coerce.number().int().min(0), to: z.coerce.number().int().min(0) }),
     handler: async ({ user, params, query, res }) => {
       const out = await changeReportWorkbook(user, params.panelId, query.from, query.to);
-      attachment(res, out.base, 'xlsx');
-      res.end(out.buffer);
-      return undefined;
+      return sendAttachment(res, out.base, 'xlsx', out.buffer);
     },
   }),
 ];
