@@ -118,3 +118,31 @@ export function fullLoadCurrent(input: FlcInput, edition: CodeEdition): FlcResul
   });
   return { flcAmps: flc, tableVolts: view.column, hp: round2(hp), source: `${source}, next higher row ${formatHp(upper)} hp for ${formatHp(round2(hp))} hp`, basis, assumed, cautions };
 }
+
+/** Why a motor cannot be sized: the answer to correct (its path) and the reason in words. */
+export interface FlcRefusal {
+  path: 'volts' | 'hp' | 'kw';
+  message: string;
+}
+
+/**
+ * A motor the engine cannot size is refused, not answered with zeros: no FLC table covers its rated
+ * voltage, or its rating lies outside the table, and no nameplate FLA was given (430.6(A)(1)).
+ * With a nameplate FLA the nameplate current is used instead (and cautioned), so nothing is refused.
+ */
+export function flcRefusal(input: FlcInput): FlcRefusal | null {
+  if (input.fla !== undefined || (input.hp === undefined && input.kw === undefined)) return null;
+  try {
+    tableView(input.supply, input.volts);
+  } catch (e) {
+    if (!(e instanceof OutsideTableError)) throw e;
+    return { path: 'volts', message: `rated ${input.volts} V: no full-load current table covers it (${e.message}); give the nameplate FLA to size this motor on its nameplate current` };
+  }
+  try {
+    fullLoadCurrent(input, '2023');
+  } catch (e) {
+    if (!(e instanceof OutsideTableError)) throw e;
+    return { path: input.kw !== undefined ? 'kw' : 'hp', message: `${e.message} (NEC 430.6(A)(1))` };
+  }
+  return null;
+}

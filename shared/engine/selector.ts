@@ -13,7 +13,7 @@ import { motorVoltageDrop, type VoltageDropResult } from '../calc/voltage-drop';
 import { motorDisconnect } from '../calc/disconnect';
 import { softStarterMinAmps, vfdMinOutputAmps } from '../calc/drives';
 import { feederRollup, type FeederBranch } from '../calc/feeder';
-import { fullLoadCurrent, WATTS_PER_HP, type FlcResult } from '../calc/flc';
+import { flcRefusal, fullLoadCurrent, WATTS_PER_HP, type FlcResult } from '../calc/flc';
 import { lockedRotorCurrent } from '../calc/locked-rotor';
 import { nemaStarterSize } from '../calc/nema-starter-size';
 import { overloadMaxSetting, overloadRelay } from '../calc/overload';
@@ -74,6 +74,18 @@ function parseOrThrow<T>(schema: { safeParse(v: unknown): { success: true; data:
   if (r.success) return r.data;
   const issues = zodIssues(r.error.issues).map((i) => ({ ...i, path: prefix ? (i.path ? `${prefix}.${i.path}` : prefix) : i.path }));
   throw new ValidationError('The selection input is not valid', issues);
+}
+
+/** A load the engine cannot size is refused as invalid input, its path naming the answer to correct. */
+function refuseUnsizable(loads: ReadonlyArray<Load>, pathOf: (i: number, field: string) => string): void {
+  const issues = loads.flatMap((l, i) => {
+    const r = flcRefusal(l);
+    return r ? [{ path: pathOf(i, r.path), message: r.message }] : [];
+  });
+  if (issues.length === 0) return;
+  const first = issues[0] as { path: string; message: string };
+  const message = issues.length === 1 ? `This motor cannot be sized: ${first.message}` : `${issues.length} motors cannot be sized: ${issues.map((i) => `${i.path}: ${i.message}`).join('; ')}`;
+  throw new ValidationError(message, issues);
 }
 
 const SUPPLY_KINDS: readonly SupplyKind[] = ['ac3', 'ac1', 'dc'];
@@ -489,12 +501,14 @@ export function createSelector(ruleFiles: ReadonlyArray<RuleFileInput>, options:
   async function selectLoad(load: LoadInput, supply: SupplyInput): Promise<LoadSelection> {
     const s = parseOrThrow(SupplySchema, supply, 'supply');
     const l = parseOrThrow(LoadSchema, load, '');
+    refuseUnsizable([l], (_i, field) => field);
     return selectParsed(l, s, load as Record<string, unknown>);
   }
 
   async function selectPanel(input: SelectionInput): Promise<SelectionOutput> {
     const parsed = parseOrThrow(SelectionInputSchema, input, '');
     const rawLoads = (input as { loads: Array<Record<string, unknown>> }).loads;
+    refuseUnsizable(parsed.loads, (i, field) => `loads[${i}].${field}`);
     const results: LoadSelection[] = [];
     for (let i = 0; i < parsed.loads.length; i++) {
       results.push(await selectParsed(parsed.loads[i] as Load, parsed.supply, rawLoads[i] ?? null));

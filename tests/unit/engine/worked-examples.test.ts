@@ -104,9 +104,17 @@ describe('worked branch circuits (NEC 2023)', () => {
     expect(np.overload.maxSettingAmps).toBe(25.3); // 430.32(A)(1): 115 % x 22 A nameplate
   });
 
-  it('a 400 V motor without nameplate current is an error on that load; with FLA it uses the nameplate and says so', async () => {
-    const bad = await selector.selectLoad(motor({ hp: 10, volts: 400 }), supply480);
-    expect(bad.errors[0]).toMatch(/Table 430\.250: 400 V/);
+  // Deliberate change: a 400 V motor without nameplate current was answered with an error on the
+  // load and zeros; it is now refused as invalid input naming volts.
+  it('a 400 V motor without nameplate current is refused naming volts; with FLA it uses the nameplate and says so', async () => {
+    const bad = await selector.selectLoad(motor({ hp: 10, volts: 400 }), supply480).then(
+      () => null,
+      (e: unknown) => e,
+    );
+    expect(bad).toBeInstanceOf(ValidationError);
+    expect((bad as ValidationError).details).toEqual([{ path: 'volts', message: expect.stringMatching(/Table 430\.250: 400 V/) }]); // NEC 2023 Table 430.250 has no 400 V column
+    const panel = await selector.selectPanel({ supply: supply480, loads: [motor({ hp: 10 }), motor({ tag: 'M-2', hp: 10, volts: 400 }), motor({ tag: 'M-3', hp: 600 })] }).catch((e: unknown) => e);
+    expect((panel as ValidationError).details.map((d) => d.path)).toEqual(['loads[1].volts', 'loads[2].hp']); // 600 hp: above the 500 hp row of Table 430.250
     const ok = await selector.selectLoad(motor({ hp: 10, volts: 400, fla: 15.5 }), supply480);
     expect(ok.errors).toEqual([]);
     expect(ok.flcAmps).toBe(15.5);
