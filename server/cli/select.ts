@@ -1,7 +1,9 @@
 // npm run -s select -- FILE.json
 // Reads { "supply": {...}, "loads": [...] }, prints { "results": [...], "panel": {...} }.
-// Exit 0 on success; 2 with { "errors": [{ "path", "message" }] } on invalid input, an unreadable
-// file or bad JSON; 1 with { "errors": [...] } when the rule files are invalid. Never a stack trace.
+// Exit 0 on success; 2 with { "errors": [{ "path", "message" }] } on invalid input (a motor the
+// engine cannot size among it: a rated voltage no FLC table covers and no nameplate FLA), an
+// unreadable file or bad JSON; 3 with the results and { "errors": [...] } when a result or the panel
+// roll-up carries errors; 1 with { "errors": [...] } when the rule files are invalid. Never a stack trace.
 
 import { readFileSync } from 'node:fs';
 import { DomainError, ValidationError } from '../../shared/errors';
@@ -34,7 +36,11 @@ async function main(argv: string[]): Promise<void> {
   }
   try {
     const out = await getSelector().selectPanel(input as never);
-    finish(0, { results: out.results, panel: out.panel, codeEdition: out.codeEdition });
+    const errors: CliError[] = [
+      ...out.results.flatMap((r, i) => r.errors.map((message) => ({ path: `loads[${i}]`, message: `${r.tag}: ${message}` }))),
+      ...(out.panel.errors ?? []).map((message) => ({ path: 'panel', message })),
+    ];
+    finish(errors.length ? 3 : 0, { results: out.results, panel: out.panel, codeEdition: out.codeEdition, ...(errors.length ? { errors } : {}) });
   } catch (e) {
     if (e instanceof ValidationError) finish(2, { errors: e.details });
     if (e instanceof DomainError) finish(1, { errors: [{ path: '', message: e.message, code: e.code }] });

@@ -1,7 +1,7 @@
 // Full-load current per NEC 430.6(A)(1): the table current (Tables 430.247, 430.248, 430.250)
 // sizes conductors, short-circuit protection, disconnects and feeders. kW ratings are converted
-// to horsepower; ratings between rows are interpolated as 430.6(A)(1) does for motors marked in
-// amperes; outside the tables the nameplate current is used when given, else it is an error.
+// to horsepower; a rating between two rows takes the next higher row (never interpolated); outside
+// the tables the nameplate current is used when given, else it is an error.
 
 import { OutsideTableError } from '../errors';
 import type { AssumedInput } from '../schemas/selection';
@@ -102,20 +102,47 @@ export function fullLoadCurrent(input: FlcInput, edition: CodeEdition): FlcResul
     if (row !== undefined) return { flcAmps: view.value(row), tableVolts: view.column, hp, source, basis, assumed, cautions };
   }
 
-  const lower = [...view.rows].reverse().find((r) => r < hp);
+  // No interpolation for a horsepower between two rows: 430.6(A)(1) gives none, and interpolating
+  // would undersize the conductor, the protective device and the feeder. The next higher row governs.
   const upper = view.rows.find((r) => r > hp);
-  if (lower === undefined || upper === undefined) {
+  if (upper === undefined || hp < (view.rows[0] as number)) {
     const why = `${view.name}: ${formatHp(round2(hp))} hp is outside the table at ${view.column} V`;
     if (input.fla !== undefined) return fromNameplate(why);
     throw new OutsideTableError(view.name, `${formatHp(round2(hp))} hp is outside the table at ${view.column} V; give the nameplate FLA`);
   }
-  const a = view.value(lower);
-  const b = view.value(upper);
-  const flc = round2(a + ((b - a) * (hp - lower)) / (upper - lower));
+  const flc = view.value(upper);
   assumed.push({
     field: input.kw !== undefined ? 'kw' : 'hp',
-    assumed: `${flc} A interpolated between the ${formatHp(lower)} and ${formatHp(upper)} hp rows`,
-    note: `${round2(hp)} hp is not a row of ${view.name}; interpolated as 430.6(A)(1) does for motors marked in amperes`,
+    assumed: `${formatHp(upper)} hp row (${flc} A), the next higher row`,
+    note: `${formatHp(round2(hp))} hp is not a row of ${view.name}: the next higher horsepower row is taken, not interpolated (430.6(A)(1) gives no interpolation for horsepower; interpolating would undersize conductors and protection); a nameplate FLA above it still governs the overload (430.6(A)(2))`,
   });
-  return { flcAmps: flc, tableVolts: view.column, hp: round2(hp), source: `${source}, interpolated`, basis, assumed, cautions };
+  return { flcAmps: flc, tableVolts: view.column, hp: round2(hp), source: `${source}, next higher row ${formatHp(upper)} hp for ${formatHp(round2(hp))} hp`, basis, assumed, cautions };
+}
+
+/** Why a motor cannot be sized: the answer to correct (its path) and the reason in words. */
+export interface FlcRefusal {
+  path: 'volts' | 'hp' | 'kw';
+  message: string;
+}
+
+/**
+ * A motor the engine cannot size is refused, not answered with zeros: no FLC table covers its rated
+ * voltage, or its rating lies outside the table, and no nameplate FLA was given (430.6(A)(1)).
+ * With a nameplate FLA the nameplate current is used instead (and cautioned), so nothing is refused.
+ */
+export function flcRefusal(input: FlcInput): FlcRefusal | null {
+  if (input.fla !== undefined || (input.hp === undefined && input.kw === undefined)) return null;
+  try {
+    tableView(input.supply, input.volts);
+  } catch (e) {
+    if (!(e instanceof OutsideTableError)) throw e;
+    return { path: 'volts', message: `rated ${input.volts} V: no full-load current table covers it (${e.message}); give the nameplate FLA to size this motor on its nameplate current` };
+  }
+  try {
+    fullLoadCurrent(input, '2023');
+  } catch (e) {
+    if (!(e instanceof OutsideTableError)) throw e;
+    return { path: input.kw !== undefined ? 'kw' : 'hp', message: `${e.message} (NEC 430.6(A)(1))` };
+  }
+  return null;
 }

@@ -5,6 +5,9 @@
 // figure (1 % 1.00, 2 % 0.95, 3 % 0.88, 4 % 0.82, 5 % 0.75), joined by straight lines: check them
 // against the published edition.
 
+/** Up to this unbalance, %, the figure asks no derating; above it a drive's input is checked too (common practice). */
+export const UNBALANCE_NO_DERATING_PERCENT = 1;
+
 export const UNBALANCE_BASIS = 'NEMA MG 1 14.35, Figure 14-1 (curve values from memory)';
 
 /** Percent voltage unbalance of three measured line-to-line voltages (NEMA MG 1 14.36), two decimals. */

@@ -53,6 +53,19 @@ describe('motors on a panel', () => {
     expect(detail.rollup.feeder.minAmpacity).toBe(42.5);
   });
 
+  it('refuses a motor it cannot size: 400 V without nameplate FLA is a 400 naming volts; with the FLA it is stored on the nameplate current', async () => {
+    const designer = await signInAs('designer');
+    const { panel } = await newPanel(designer);
+    // NEC 2023 Table 430.250 has no 400 V column (115, 200, 208, 230, 460, 575, 2300 V)
+    const bad = await send(designer, 'post', `/api/panels/${panel.id}/loads`, { answers: { tag: 'M-400', supply: 'ac3', hp: 10, volts: 400 } }).expect(400);
+    expect(bad.body.error.details).toEqual([{ path: 'body.answers.volts', message: expect.stringMatching(/rated 400 V: no full-load current table covers it.*give the nameplate FLA/) }]);
+    expect(bad.body.error.message).toMatch(/^M-400 cannot be sized/);
+    const ok = await send(designer, 'post', `/api/panels/${panel.id}/loads`, { answers: { tag: 'M-400', supply: 'ac3', hp: 10, volts: 400, fla: 15.5 } }).expect(201);
+    expect(ok.body.selection).toMatchObject({ flcAmps: 15.5, tableVolts: null, errors: [] }); // 430.6(A)(1): nameplate current where no table applies
+    expect(ok.body.selection.flcSource).toMatch(/^nameplate FLA/);
+    expect(ok.body.selection.cautions.some((c: string) => c.includes('nameplate current 15.5 A'))).toBe(true);
+  });
+
   it('names the bad answer field and refuses a duplicate tag', async () => {
     const designer = await signInAs('designer');
     const { panel } = await newPanel(designer);

@@ -3,6 +3,7 @@
 import ExcelJS from 'exceljs';
 import type { CurrentUser } from '../../../shared/schemas/auth';
 import { LoadSchema, type LoadInput } from '../../../shared/schemas/load';
+import { flcRefusal } from '../../../shared/calc/flc';
 import { ValidationError, zodIssues } from '../../../shared/errors';
 import { changePanel, addLoads, requirePanel } from './service';
 import { recordActivity } from '../activity/service';
@@ -173,7 +174,9 @@ export async function previewImport(buffer: Buffer, filename: string, existingTa
     let parsed: LoadInput | null = null;
     if (problems.length === 0) {
       const r = LoadSchema.safeParse(answers);
-      if (r.success) parsed = answers as LoadInput;
+      const refusal = r.success ? flcRefusal(r.data) : null;
+      if (refusal) problems.push({ column: columnOf(refusal.path), message: refusal.message });
+      else if (r.success) parsed = answers as LoadInput;
       else for (const iss of zodIssues(r.error.issues)) problems.push({ column: columnOf(iss.path) || 'row', message: iss.message });
     }
     if (tag && seen.has(tag.toLowerCase())) problems.push({ column: 'tag', message: `tag ${tag} is already on the panel or earlier in the file` });

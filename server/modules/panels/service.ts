@@ -6,6 +6,7 @@ import type { CurrentUser } from '../../../shared/schemas/auth';
 import type { CommentView, LoadView, PanelDetail, PanelState } from '../../../shared/schemas/panel';
 import type { LoadInput } from '../../../shared/schemas/load';
 import { LoadSchema } from '../../../shared/schemas/load';
+import { flcRefusal } from '../../../shared/calc/flc';
 import type { LoadSelection, PanelRollup } from '../../../shared/schemas/selection';
 import type { OverrideInput, StoredOverride } from '../../../shared/schemas/override';
 import { applyOverrides, checkOverride } from '../../../shared/calc/overrides';
@@ -192,6 +193,8 @@ function parseAnswers(raw: unknown, prefix = 'body.answers'): LoadInput {
     const issues = zodIssues(r.error.issues).map((i) => ({ ...i, path: i.path ? `${prefix}.${i.path}` : prefix }));
     throw new ValidationError(`The motor's answers have ${issues.length} problem${issues.length === 1 ? '' : 's'}`, issues);
   }
+  const refusal = flcRefusal(r.data); // a motor the engine cannot size is refused, not stored with zeros
+  if (refusal) throw new ValidationError(`${r.data.tag} cannot be sized: ${refusal.message}`, [{ path: `${prefix}.${refusal.path}`, message: refusal.message }]);
   return raw as LoadInput;
 }
 

@@ -66,4 +66,37 @@ describe('npm run -s select -- FILE.json', () => {
     expect(JSON.parse(r.stdout).errors[0].message).toMatch(/not valid JSON/);
     expect(r.stderr).toBe('');
   }, 60_000);
+
+  const supply = { volts: 480, phases: 3, availableFaultKa: 35, ambientC: 30 };
+  function inputFile(body: unknown): string {
+    const dir = mkdtempSync(path.join(tmpdir(), 'pw-cli-'));
+    const f = path.join(dir, 'in.json');
+    writeFileSync(f, JSON.stringify(body));
+    return f;
+  }
+
+  it('a rated voltage no FLC table covers, without nameplate FLA, exits 2 naming loads[i].volts (NEC 2023 Table 430.250: no 400 V column)', async () => {
+    const r = await run(inputFile({ supply, loads: [{ tag: 'M-400', supply: 'ac3', hp: 10, volts: 400 }] }));
+    expect(r.code).toBe(2);
+    const { errors, results } = JSON.parse(r.stdout);
+    expect(results).toBeUndefined();
+    expect(errors).toEqual([{ path: 'loads[0].volts', message: expect.stringMatching(/rated 400 V: no full-load current table covers it/) }]);
+  }, 60_000);
+
+  it('with a nameplate FLA the nameplate governs, said in flcSource and cautioned; exit 0', async () => {
+    const r = await run(inputFile({ supply, loads: [{ tag: 'M-400', supply: 'ac3', hp: 10, volts: 400, fla: 15.5 }] }));
+    expect(r.code).toBe(0);
+    const [m] = JSON.parse(r.stdout).results;
+    expect(m.flcAmps).toBe(15.5); // NEC 2023 430.6(A)(1): nameplate current where the tables do not apply
+    expect(m.flcSource).toMatch(/^nameplate FLA \(Table 430\.250: 400 V/);
+    expect(m.cautions.join(' ')).toMatch(/nameplate current 15\.5 A is used/);
+  }, 60_000);
+
+  it('a result with errors exits 3 with the results and the errors listed (a three-phase motor on a single-phase supply)', async () => {
+    const r = await run(inputFile({ supply: { ...supply, volts: 240, phases: 1 }, loads: [{ tag: 'M-3P', supply: 'ac3', hp: 5, volts: 230 }] }));
+    expect(r.code).toBe(3);
+    const out = JSON.parse(r.stdout);
+    expect(out.results).toHaveLength(1);
+    expect(out.errors).toContainEqual({ path: 'panel', message: 'M-3P: a three-phase motor cannot be fed from a single-phase supply' });
+  }, 60_000);
 });

@@ -30,10 +30,30 @@ describe('full-load current (NEC 2023 430.6(A)(1))', () => {
     expect(r.flcAmps).toBe(14);
     expect(r.assumed[0]?.field).toBe('kw');
   });
-  it('4 kW (5.36 hp) is interpolated between the 5 and 7-1/2 hp rows: 7.6 + (11-7.6)·0.364/2.5 = 8.10 A', () => {
+  // Deliberate change: a rating between two rows took an interpolated current before (8.10 A here);
+  // it now takes the next higher row, as the horsepower case below.
+  it('4 kW (5.36 hp) lies between the 5 and 7-1/2 hp rows: the next higher row, 11 A at 460 V (NEC 2023 Table 430.250)', () => {
     const r = fullLoadCurrent({ supply: 'ac3', kw: 4, volts: 460 }, '2023');
-    expect(r.flcAmps).toBeCloseTo(8.1, 1);
-    expect(r.assumed[0]?.assumed).toMatch(/interpolated between the 5 and 7-1\/2 hp rows/);
+    expect(r.flcAmps).toBe(11);
+    expect(r.assumed[0]?.field).toBe('kw');
+    expect(r.assumed[0]?.assumed).toMatch(/7-1\/2 hp row \(11 A\), the next higher row/);
+  });
+  it.each([
+    [12, 460, 15, 21, 'NEC 2023 Table 430.250: 15 hp, 460 V = 21 A'],
+    [12, 230, 15, 42, 'NEC 2023 Table 430.250: 15 hp, 230 V = 42 A'],
+    [35, 460, 40, 52, 'NEC 2023 Table 430.250: 40 hp, 460 V = 52 A'],
+    [4, 575, 5, 6.1, 'NEC 2023 Table 430.250: 5 hp, 575 V = 6.1 A'],
+  ])('%s hp at %s V is not a row: the next higher row (%s hp) gives %s A, never an interpolation (%s)', (hp, volts, row, amps) => {
+    const r = fullLoadCurrent({ supply: 'ac3', hp, volts }, '2023');
+    expect(r.flcAmps).toBe(amps);
+    expect(r.source).toMatch(new RegExp(`next higher row ${row} hp for ${hp} hp$`));
+    expect(r.assumed).toHaveLength(1);
+    expect(r.assumed[0]).toMatchObject({ field: 'hp', assumed: `${row} hp row (${amps} A), the next higher row` });
+    expect(r.assumed[0]?.note).toMatch(/not interpolated/);
+  });
+  it('single-phase and DC between rows take the next higher row too (NEC 2023 Tables 430.248, 430.247)', () => {
+    expect(fullLoadCurrent({ supply: 'ac1', hp: 4, volts: 230 }, '2023').flcAmps).toBe(28); // Table 430.248: 5 hp, 230 V = 28 A
+    expect(fullLoadCurrent({ supply: 'dc', hp: 4, volts: 240 }, '2023').flcAmps).toBe(20); // Table 430.247: 5 hp, 240 V = 20 A
   });
   it('outside the tables: error without nameplate FLA, nameplate with a caution when given', () => {
     expect(() => fullLoadCurrent({ supply: 'ac3', hp: 10, volts: 400 }, '2023')).toThrow(OutsideTableError);

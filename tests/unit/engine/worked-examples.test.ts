@@ -88,9 +88,33 @@ describe('worked branch circuits (NEC 2023)', () => {
     expect(r.trace.some((t) => t.basis.includes('NEC 2020'))).toBe(true);
   });
 
-  it('a 400 V motor without nameplate current is an error on that load; with FLA it uses the nameplate and says so', async () => {
-    const bad = await selector.selectLoad(motor({ hp: 10, volts: 400 }), supply480);
-    expect(bad.errors[0]).toMatch(/Table 430\.250: 400 V/);
+  it('12 hp at 460 V takes the 15 hp row (21 A, NEC 2023 Table 430.250): 10 AWG, 60 A breaker, flagged; a nameplate FLA above governs the overload', async () => {
+    const r = await selector.selectLoad(motor({ hp: 12, volts: 460 }), supply480);
+    expect(r.errors).toEqual([]);
+    expect(r.flcAmps).toBe(21); // NEC 2023 Table 430.250, 15 hp row
+    expect(r.flcSource).toBe('Table 430.250 (460 V column), next higher row 15 hp for 12 hp');
+    expect(r.assumed.find((a) => a.field === 'hp')?.assumed).toBe('15 hp row (21 A), the next higher row');
+    expect(r.conductor.minAmpacity).toBe(26.25); // 430.22: 125 % x 21 A
+    expect(r.conductor.size).toBe('10 AWG'); // Table 310.16, 75 °C copper: 12 AWG is 25 A, 10 AWG 35 A
+    expect(r.scpd.ratingAmps).toBe(60); // Table 430.52: 250 % x 21 = 52.5 A -> next standard 60 A (430.52(C)(1) Exc. 1)
+    expect(r.overload.maxSettingAmps).toBe(24.15); // 430.32(A)(1): 115 % x 21 A (table current, no nameplate)
+    const np = await selector.selectLoad(motor({ hp: 12, volts: 460, fla: 22 }), supply480);
+    expect(np.flcAmps).toBe(21); // conductors and protection stay on the table row
+    expect(np.flaAmps).toBe(22);
+    expect(np.overload.maxSettingAmps).toBe(25.3); // 430.32(A)(1): 115 % x 22 A nameplate
+  });
+
+  // Deliberate change: a 400 V motor without nameplate current was answered with an error on the
+  // load and zeros; it is now refused as invalid input naming volts.
+  it('a 400 V motor without nameplate current is refused naming volts; with FLA it uses the nameplate and says so', async () => {
+    const bad = await selector.selectLoad(motor({ hp: 10, volts: 400 }), supply480).then(
+      () => null,
+      (e: unknown) => e,
+    );
+    expect(bad).toBeInstanceOf(ValidationError);
+    expect((bad as ValidationError).details).toEqual([{ path: 'volts', message: expect.stringMatching(/Table 430\.250: 400 V/) }]); // NEC 2023 Table 430.250 has no 400 V column
+    const panel = await selector.selectPanel({ supply: supply480, loads: [motor({ hp: 10 }), motor({ tag: 'M-2', hp: 10, volts: 400 }), motor({ tag: 'M-3', hp: 600 })] }).catch((e: unknown) => e);
+    expect((panel as ValidationError).details.map((d) => d.path)).toEqual(['loads[1].volts', 'loads[2].hp']); // 600 hp: above the 500 hp row of Table 430.250
     const ok = await selector.selectLoad(motor({ hp: 10, volts: 400, fla: 15.5 }), supply480);
     expect(ok.errors).toEqual([]);
     expect(ok.flcAmps).toBe(15.5);
