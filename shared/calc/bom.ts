@@ -18,6 +18,7 @@ import {
   type Category,
   type LabourKey,
   type LabourUnit,
+  type Requirement,
 } from '../schemas/catalogue';
 
 type WireSize = (typeof WIRE_SIZES)[number];
@@ -26,55 +27,8 @@ type HpVolts = (typeof HP_VOLTS)[number];
 // ---------------------------------------------------------------------------------------------
 // Requirements and matching
 
-/** What a catalogue item must meet. Every field given is a hard constraint. */
-export interface Requirement {
-  category: Category;
-  /** the item's rated range must hold this voltage: voltsMin ≤ v ≤ volts */
-  volts?: number;
-  /** operating voltage must equal this (pilot lights, fans) */
-  exactVolts?: number;
-  coilVolts?: number;
-  nemaSize?: string;
-  minAmps?: number;
-  exactAmps?: number;
-  maxAmps?: number;
-  minIecAc3Amps?: number;
-  minIecAc4Amps?: number;
-  /** settingMinAmps ≤ x ≤ settingMaxAmps */
-  settingAmps?: number;
-  /** the adjustable instantaneous trip can be set at or below this value (settingMinAmps ≤ x) */
-  maxTripSettingAmps?: number;
-  tripClass?: 10 | 20 | 30;
-  minHp?: { volts: HpVolts; hp: number };
-  poles?: number;
-  minPoles?: number;
-  fuseClass?: 'J' | 'RK5' | 'CC';
-  timeDelay?: boolean;
-  kind?: string;
-  function?: string;
-  contacts?: string;
-  detectsPhaseLoss?: boolean;
-  detectsPhaseReversal?: boolean;
-  detectsImbalance?: boolean;
-  internalBypass?: boolean;
-  builtInOverload?: boolean;
-  minNormalDutyAmps?: number;
-  minHeavyDutyAmps?: number;
-  minVa?: number;
-  minInrushVa?: number;
-  secondaryVolts?: number;
-  /** wire: this size; terminal block: wireMin ≤ size ≤ wireMax */
-  wireSize?: WireSize;
-  /** enclosure: this type; cooling: keeps this type's rating */
-  nemaType?: string;
-  minCfm?: number;
-  minCoolingW?: number;
-  minDepthMm?: number;
-  /** usable back-panel area, mm², see usableAreaMm2() */
-  minUsableAreaMm2?: number;
-  /** pick the largest item that meets the rest (for ratings with an upper limit) */
-  prefer?: 'smallest' | 'largest';
-}
+/** What a catalogue item must meet (RequirementSchema in shared/schemas/catalogue.ts). Every field given is a hard constraint. */
+export type { Requirement };
 
 const wireIndex = (s: string): number => WIRE_SIZES.indexOf(s as WireSize);
 
@@ -87,64 +41,113 @@ export function usableAreaMm2(item: CatalogueItem): number {
 
 const EPS = 1e-9;
 
-export function satisfies(item: CatalogueItem, req: Requirement): boolean {
+/**
+ * What an item lacks against a requirement, each in plain words ("9 A, below the 34 A motor P-101 needs");
+ * empty when it meets every constraint. The one check behind the matcher, the swap list and a swap's
+ * validation. `who` names what the line serves ("motor P-101", "the panel"). With `all` false it stops at
+ * the first shortfall and writes no words (the matcher's fast path).
+ */
+export function shortfalls(item: CatalogueItem, req: Requirement, who = 'the line', all = true): string[] {
+  const out: string[] = [];
+  // true when the caller should stop (first shortfall found on the fast path)
+  const no = (why: () => string): boolean => {
+    out.push(all ? why() : '');
+    return !all;
+  };
   const r = item.ratings;
-  if (item.category !== req.category) return false;
+  const needs = (what: string) => `the ${what} ${who} needs`;
+  if (item.category !== req.category && no(() => `it is in ${CATEGORY_LABELS[item.category]}, not ${CATEGORY_LABELS[req.category]}`)) return out;
   if (req.volts !== undefined) {
-    if (r.volts === undefined || r.volts + EPS < req.volts) return false;
-    if (r.voltsMin !== undefined && r.voltsMin > req.volts + EPS) return false;
+    if (r.volts === undefined || r.volts + EPS < req.volts) {
+      if (no(() => (r.volts === undefined ? `no rated voltage, where ${who} runs at ${fmt(req.volts!)} V` : `rated ${fmt(r.volts)} V, below ${needs(`${fmt(req.volts!)} V`)}`))) return out;
+    } else if (r.voltsMin !== undefined && r.voltsMin > req.volts + EPS && no(() => `rated from ${fmt(r.voltsMin!)} V, above ${needs(`${fmt(req.volts!)} V`)}`)) return out;
   }
-  if (req.exactVolts !== undefined && r.volts !== req.exactVolts) return false;
-  if (req.coilVolts !== undefined && r.coilVolts !== req.coilVolts) return false;
-  if (req.nemaSize !== undefined && r.nemaSize !== req.nemaSize) return false;
-  if (req.minAmps !== undefined && (r.amps === undefined || r.amps + EPS < req.minAmps)) return false;
-  if (req.exactAmps !== undefined && (r.amps === undefined || Math.abs(r.amps - req.exactAmps) > EPS)) return false;
-  if (req.maxAmps !== undefined && (r.amps === undefined || r.amps > req.maxAmps + EPS)) return false;
-  if (req.minIecAc3Amps !== undefined && (r.iecAc3Amps === undefined || r.iecAc3Amps + EPS < req.minIecAc3Amps)) return false;
-  if (req.minIecAc4Amps !== undefined && (r.iecAc4Amps === undefined || r.iecAc4Amps + EPS < req.minIecAc4Amps)) return false;
+  if (req.exactVolts !== undefined && r.volts !== req.exactVolts && no(() => `operates at ${r.volts === undefined ? 'no stated voltage' : `${fmt(r.volts)} V`}, not ${needs(`${fmt(req.exactVolts!)} V`)}`)) return out;
+  if (req.coilVolts !== undefined && r.coilVolts !== req.coilVolts && no(() => `${r.coilVolts === undefined ? 'no stated' : `${fmt(r.coilVolts)} V`} coil, not ${needs(`${fmt(req.coilVolts!)} V control voltage`)}`)) return out;
+  if (req.nemaSize !== undefined && r.nemaSize !== req.nemaSize) {
+    if (no(() => `${r.nemaSize === undefined ? 'no NEMA size' : `NEMA size ${r.nemaSize}`}${r.amps !== undefined ? ` (${fmt(r.amps)} A)` : ''}, not ${needs(`NEMA size ${req.nemaSize}`)}`)) return out;
+  }
+  if (req.minAmps !== undefined && (r.amps === undefined || r.amps + EPS < req.minAmps) && no(() => `${r.amps === undefined ? 'no current rating' : `${fmt(r.amps)} A`}, below ${needs(`${fmt(req.minAmps!)} A`)}`)) return out;
+  if (req.exactAmps !== undefined && (r.amps === undefined || Math.abs(r.amps - req.exactAmps) > EPS) && no(() => `rated ${r.amps === undefined ? 'no current' : `${fmt(r.amps)} A`}, not ${needs(`${fmt(req.exactAmps!)} A rating`)}`)) return out;
+  if (req.maxAmps !== undefined && (r.amps === undefined || r.amps > req.maxAmps + EPS) && no(() => `${r.amps === undefined ? 'no current rating' : `${fmt(r.amps)} A`}, above the ${fmt(req.maxAmps!)} A limit for ${who}`)) return out;
+  if (req.minIecAc3Amps !== undefined && (r.iecAc3Amps === undefined || r.iecAc3Amps + EPS < req.minIecAc3Amps) && no(() => `${r.iecAc3Amps === undefined ? 'no AC-3 rating' : `AC-3 ${fmt(r.iecAc3Amps)} A`}, below ${needs(`AC-3 ${fmt(req.minIecAc3Amps!)} A`)}`)) return out;
+  if (req.minIecAc4Amps !== undefined && (r.iecAc4Amps === undefined || r.iecAc4Amps + EPS < req.minIecAc4Amps) && no(() => `${r.iecAc4Amps === undefined ? 'no AC-4 rating' : `AC-4 ${fmt(r.iecAc4Amps)} A`}, below ${needs(`AC-4 ${fmt(req.minIecAc4Amps!)} A`)}`)) return out;
   if (req.settingAmps !== undefined) {
-    if (r.settingMinAmps === undefined || r.settingMaxAmps === undefined) return false;
-    if (r.settingMinAmps > req.settingAmps + EPS || r.settingMaxAmps + EPS < req.settingAmps) return false;
+    const lo = r.settingMinAmps;
+    const hi = r.settingMaxAmps;
+    if (lo === undefined || hi === undefined || lo > req.settingAmps + EPS || hi + EPS < req.settingAmps) {
+      if (no(() => (lo === undefined || hi === undefined ? `no setting range, where ${who} needs a setting of ${fmt(req.settingAmps!)} A` : `setting range ${fmt(lo)}–${fmt(hi)} A does not hold the ${fmt(req.settingAmps!)} A setting ${who} needs`))) return out;
+    }
   }
-  if (req.maxTripSettingAmps !== undefined && (r.settingMinAmps === undefined || r.settingMinAmps > req.maxTripSettingAmps + EPS)) return false;
-  if (req.tripClass !== undefined && !(r.tripClasses ?? []).includes(req.tripClass)) return false;
+  if (req.maxTripSettingAmps !== undefined && (r.settingMinAmps === undefined || r.settingMinAmps > req.maxTripSettingAmps + EPS)) {
+    if (no(() => (r.settingMinAmps === undefined ? 'no adjustable instantaneous trip' : `instantaneous trip sets no lower than ${fmt(r.settingMinAmps)} A, above the ${fmt(req.maxTripSettingAmps!)} A limit for ${who}`))) return out;
+  }
+  if (req.tripClass !== undefined && !(r.tripClasses ?? []).includes(req.tripClass)) {
+    if (no(() => `${r.tripClasses?.length ? `trip class ${r.tripClasses.join('/')}` : 'no trip class'}, not ${needs(`class ${req.tripClass}`)}`)) return out;
+  }
   if (req.minHp !== undefined) {
     const hp = r.hpByVolts?.[req.minHp.volts];
-    if (hp === undefined || hp + EPS < req.minHp.hp) return false;
+    if ((hp === undefined || hp + EPS < req.minHp.hp) && no(() => `${hp === undefined ? 'no horsepower rating' : `${fmt(hp)} hp`} at ${req.minHp!.volts} V, below ${needs(`${fmt(req.minHp!.hp)} hp`)}`)) return out;
   }
-  if (req.poles !== undefined && r.poles !== req.poles) return false;
-  if (req.minPoles !== undefined && (r.poles === undefined || r.poles < req.minPoles)) return false;
-  if (req.fuseClass !== undefined && r.fuseClass !== req.fuseClass) return false;
-  if (req.timeDelay !== undefined && r.timeDelay !== req.timeDelay) return false;
-  if (req.kind !== undefined && r.kind !== req.kind) return false;
-  if (req.function !== undefined && r.function !== req.function) return false;
-  if (req.contacts !== undefined && r.contacts !== req.contacts) return false;
-  if (req.detectsPhaseLoss && !r.detectsPhaseLoss) return false;
-  if (req.detectsPhaseReversal && !r.detectsPhaseReversal) return false;
-  if (req.detectsImbalance && !r.detectsImbalance) return false;
-  if (req.internalBypass && !r.internalBypass) return false;
-  if (req.builtInOverload && !r.builtInOverload) return false;
-  if (req.minNormalDutyAmps !== undefined && (r.normalDutyAmps === undefined || r.normalDutyAmps + EPS < req.minNormalDutyAmps)) return false;
-  if (req.minHeavyDutyAmps !== undefined && (r.heavyDutyAmps === undefined || r.heavyDutyAmps + EPS < req.minHeavyDutyAmps)) return false;
-  if (req.minVa !== undefined && (r.va === undefined || r.va + EPS < req.minVa)) return false;
-  if (req.minInrushVa !== undefined && (r.inrushVa === undefined || r.inrushVa + EPS < req.minInrushVa)) return false;
-  if (req.secondaryVolts !== undefined && r.secondaryVolts !== req.secondaryVolts) return false;
+  if (req.poles !== undefined && r.poles !== req.poles && no(() => `${r.poles === undefined ? 'no stated poles' : `${r.poles}-pole`}, not ${needs(`${req.poles}-pole device`)}`)) return out;
+  if (req.minPoles !== undefined && (r.poles === undefined || r.poles < req.minPoles) && no(() => `${r.poles === undefined ? 'no stated poles' : `${r.poles}-pole`}, fewer than ${needs(`${req.minPoles} poles`)}`)) return out;
+  if (req.fuseClass !== undefined && r.fuseClass !== req.fuseClass && no(() => `${r.fuseClass === undefined ? 'no fuse class' : `class ${r.fuseClass}`}, not ${needs(`class ${req.fuseClass}`)}`)) return out;
+  if (req.timeDelay !== undefined && r.timeDelay !== req.timeDelay && no(() => `${r.timeDelay ? 'time-delay' : 'non-time-delay'}, where ${who} needs ${req.timeDelay ? 'time-delay' : 'non-time-delay'}`)) return out;
+  if (req.kind !== undefined && r.kind !== req.kind && no(() => `${r.kind ?? 'no stated kind'}, not ${needs(req.kind!)}`)) return out;
+  if (req.function !== undefined && r.function !== req.function && no(() => `function ${r.function ?? 'not stated'}, not ${needs(req.function!)}`)) return out;
+  if (req.contacts !== undefined && r.contacts !== req.contacts && no(() => `contacts ${r.contacts ?? 'not stated'}, not ${needs(req.contacts!)}`)) return out;
+  if (req.detectsPhaseLoss && !r.detectsPhaseLoss && no(() => `does not detect phase loss, which ${who} needs`)) return out;
+  if (req.detectsPhaseReversal && !r.detectsPhaseReversal && no(() => `does not detect phase reversal, which ${who} needs`)) return out;
+  if (req.detectsImbalance && !r.detectsImbalance && no(() => `does not detect imbalance, which ${who} needs`)) return out;
+  if (req.internalBypass && !r.internalBypass && no(() => `no internal bypass, which ${who} needs`)) return out;
+  if (req.builtInOverload && !r.builtInOverload && no(() => `no built-in overload, which ${who} needs`)) return out;
+  if (req.minNormalDutyAmps !== undefined && (r.normalDutyAmps === undefined || r.normalDutyAmps + EPS < req.minNormalDutyAmps)) {
+    if (no(() => `${r.normalDutyAmps === undefined ? 'no normal-duty rating' : `normal-duty output ${fmt(r.normalDutyAmps)} A`}, below ${needs(`${fmt(req.minNormalDutyAmps!)} A`)}`)) return out;
+  }
+  if (req.minHeavyDutyAmps !== undefined && (r.heavyDutyAmps === undefined || r.heavyDutyAmps + EPS < req.minHeavyDutyAmps)) {
+    if (no(() => `${r.heavyDutyAmps === undefined ? 'no heavy-duty rating' : `heavy-duty output ${fmt(r.heavyDutyAmps)} A`}, below ${needs(`${fmt(req.minHeavyDutyAmps!)} A`)}`)) return out;
+  }
+  if (req.minVa !== undefined && (r.va === undefined || r.va + EPS < req.minVa) && no(() => `${r.va === undefined ? 'no VA rating' : `${fmt(r.va)} VA`}, below ${needs(`${fmt(req.minVa!)} VA continuous`)}`)) return out;
+  if (req.minInrushVa !== undefined && (r.inrushVa === undefined || r.inrushVa + EPS < req.minInrushVa) && no(() => `${r.inrushVa === undefined ? 'no inrush rating' : `inrush ${fmt(r.inrushVa)} VA`}, below ${needs(`${fmt(req.minInrushVa!)} VA inrush`)}`)) return out;
+  if (req.secondaryVolts !== undefined && r.secondaryVolts !== req.secondaryVolts && no(() => `secondary ${r.secondaryVolts === undefined ? 'not stated' : `${fmt(r.secondaryVolts)} V`}, not ${needs(`${fmt(req.secondaryVolts!)} V`)}`)) return out;
   if (req.wireSize !== undefined) {
     if (item.category === 'terminal-block') {
       const i = wireIndex(req.wireSize);
-      if (!r.wireMin || !r.wireMax || wireIndex(r.wireMin) > i || wireIndex(r.wireMax) < i) return false;
-    } else if (r.wireSize !== req.wireSize) return false;
+      if ((!r.wireMin || !r.wireMax || wireIndex(r.wireMin) > i || wireIndex(r.wireMax) < i) && no(() => `takes ${r.wireMin && r.wireMax ? `${r.wireMin} to ${r.wireMax}` : 'no stated wire range'}, not ${needs(`size ${req.wireSize}`)}`)) return out;
+    } else if (r.wireSize !== req.wireSize && no(() => `size ${r.wireSize ?? 'not stated'}, not ${needs(`size ${req.wireSize}`)}`)) return out;
   }
   if (req.nemaType !== undefined) {
     if (item.category === 'cooling') {
-      if (!(r.nemaTypes ?? []).includes(req.nemaType as never)) return false;
-    } else if (r.nemaType !== req.nemaType) return false;
+      if (!(r.nemaTypes ?? []).includes(req.nemaType as never) && no(() => `does not keep NEMA Type ${req.nemaType}, which ${who} needs`)) return out;
+    } else if (r.nemaType !== req.nemaType && no(() => `${r.nemaType ? `NEMA Type ${r.nemaType}` : 'no NEMA type'}, not ${needs(`Type ${req.nemaType}`)}`)) return out;
   }
-  if (req.minCfm !== undefined && (r.cfm === undefined || r.cfm + EPS < req.minCfm)) return false;
-  if (req.minCoolingW !== undefined && (r.coolingW === undefined || r.coolingW + EPS < req.minCoolingW)) return false;
-  if (req.minDepthMm !== undefined && (r.depthMm === undefined || r.depthMm + EPS < req.minDepthMm)) return false;
-  if (req.minUsableAreaMm2 !== undefined && usableAreaMm2(item) + EPS < req.minUsableAreaMm2) return false;
-  return true;
+  if (req.minCfm !== undefined && (r.cfm === undefined || r.cfm + EPS < req.minCfm) && no(() => `${r.cfm === undefined ? 'no airflow rating' : `${fmt(r.cfm)} cfm`}, below ${needs(`${fmt(req.minCfm!)} cfm`)}`)) return out;
+  if (req.minCoolingW !== undefined && (r.coolingW === undefined || r.coolingW + EPS < req.minCoolingW) && no(() => `${r.coolingW === undefined ? 'no cooling rating' : `${fmt(r.coolingW)} W cooling`}, below ${needs(`${fmt(req.minCoolingW!)} W`)}`)) return out;
+  if (req.minDepthMm !== undefined && (r.depthMm === undefined || r.depthMm + EPS < req.minDepthMm) && no(() => `${r.depthMm === undefined ? 'no stated depth' : `${fmt(r.depthMm)} mm deep`}, below ${needs(`${fmt(req.minDepthMm!)} mm`)}`)) return out;
+  if (req.minUsableAreaMm2 !== undefined && usableAreaMm2(item) + EPS < req.minUsableAreaMm2) {
+    if (no(() => `usable back panel ${fmt(usableAreaMm2(item) / 1e6)} m², below ${needs(`${fmt(req.minUsableAreaMm2! / 1e6)} m²`)}`)) return out;
+  }
+  return out;
+}
+
+export function satisfies(item: CatalogueItem, req: Requirement): boolean {
+  return shortfalls(item, req, undefined, false).length === 0;
+}
+
+/** What an item lacks against a line's requirement: met when it meets any one of the alternatives (empty list). */
+export function lineShortfalls(item: CatalogueItem, reqs: readonly Requirement[], who: string): string[] {
+  let best: string[] | null = null;
+  for (const req of reqs) {
+    const miss = shortfalls(item, req, who);
+    if (miss.length === 0) return [];
+    if (!best || (req.category === item.category && miss.length < best.length)) best = miss;
+  }
+  return best ?? [];
+}
+
+/** Who a line serves, in words: "motor P-101" or "the panel". */
+export function lineServes(bucket: string): string {
+  return bucket === PANEL_BUCKET ? 'the panel' : `motor ${bucket}`;
 }
 
 /** The size an item is ranked by within its category ("smallest adequate"). */
@@ -278,10 +281,15 @@ const round4 = (n: number): number => Math.round((n + Number.EPSILON) * 10000) /
 
 /** A line swapped by the estimator for an equivalent item: the item's price, labour, heat and rating, with the reason. */
 export function swappedLine(line: BomLine, item: CatalogueItem, labour: LabourTable, reason: string | null): BomLine {
-  return { ...matchedLine(line.bucket, item, line.quantity, labour), source: 'swapped', swapReason: reason };
+  return {
+    ...matchedLine(line.bucket, item, line.quantity, labour, line.requirement ?? null),
+    source: 'swapped',
+    swapReason: reason,
+    swappedFrom: line.source === 'swapped' ? (line.swappedFrom ?? null) : line.code,
+  };
 }
 
-function matchedLine(bucket: string, item: CatalogueItem, quantity: number, labour: LabourTable): BomLine {
+function matchedLine(bucket: string, item: CatalogueItem, quantity: number, labour: LabourTable, requirement: Requirement[] | null): BomLine {
   return {
     bucket,
     category: item.category,
@@ -297,10 +305,11 @@ function matchedLine(bucket: string, item: CatalogueItem, quantity: number, labo
     requiredRatings: null,
     source: 'auto',
     swapReason: null,
+    requirement,
   };
 }
 
-function unmatchedLine(bucket: string, category: Category, quantity: number, needs: string, labour: LabourTable): BomLine {
+function unmatchedLine(bucket: string, category: Category, quantity: number, needs: string, labour: LabourTable, requirement: Requirement[] | null): BomLine {
   return {
     bucket,
     category,
@@ -316,6 +325,7 @@ function unmatchedLine(bucket: string, category: Category, quantity: number, nee
     requiredRatings: needs,
     source: 'auto',
     swapReason: null,
+    requirement,
   };
 }
 
@@ -510,7 +520,7 @@ class Builder {
   add(bucket: string, req: Requirement, quantity: number): CatalogueItem | null {
     if (quantity <= 0) return null;
     const item = this.find(req);
-    this.lines.push(item ? matchedLine(bucket, item, quantity, this.labour) : unmatchedLine(bucket, req.category, quantity, describeRequirement(req), this.labour));
+    this.lines.push(item ? matchedLine(bucket, item, quantity, this.labour, [req]) : unmatchedLine(bucket, req.category, quantity, describeRequirement(req), this.labour, [req]));
     return item;
   }
 
@@ -519,17 +529,17 @@ class Builder {
     for (const req of reqs) {
       const item = this.find(req);
       if (item) {
-        this.lines.push(matchedLine(bucket, item, quantity, this.labour));
+        this.lines.push(matchedLine(bucket, item, quantity, this.labour, reqs));
         return item;
       }
     }
     const needs = reqs.map(describeRequirement).join(' — or — ');
-    this.lines.push(unmatchedLine(bucket, reqs[0]!.category, quantity, needs, this.labour));
+    this.lines.push(unmatchedLine(bucket, reqs[0]!.category, quantity, needs, this.labour, reqs));
     return null;
   }
 
   unmatched(bucket: string, category: Category, quantity: number, needs: string): void {
-    this.lines.push(unmatchedLine(bucket, category, quantity, needs, this.labour));
+    this.lines.push(unmatchedLine(bucket, category, quantity, needs, this.labour, null));
   }
 }
 
@@ -632,7 +642,7 @@ export function buildBom(input: BuildBomInput): BuildBomResult {
       const candidates = fuseClasses.map((fc) => ({ fc, fuse: b.find({ category: 'fuse', exactAmps: rating, fuseClass: fc, timeDelay, volts: v }) }));
       const chosen = candidates.find((c) => c.fuse !== null);
       if (!chosen) {
-        b.unmatched(tag, 'fuse', poles, fuseClasses.map((fc) => describeRequirement({ category: 'fuse', exactAmps: rating, fuseClass: fc, timeDelay, volts: v })).join(' — or — '));
+        b.addFirst(tag, fuseClasses.map((fc): Requirement => ({ category: 'fuse', exactAmps: rating, fuseClass: fc, timeDelay, volts: v })), poles);
       } else {
         b.add(tag, { category: 'fuse', exactAmps: rating, fuseClass: chosen.fc, timeDelay, volts: v }, poles);
         if (perBucketDisconnect) {
@@ -696,11 +706,15 @@ export function buildBom(input: BuildBomInput): BuildBomResult {
   const ocpdMax = input.panel.feeder.ocpdMaxAmps;
   let mainAmps = 0;
   if (input.selections.length > 0 && ocpdMax > 0) {
+    const minAmpacity = input.panel.feeder.minAmpacity;
+    const mainBounds = { maxAmps: ocpdMax, ...(minAmpacity > 0 && minAmpacity <= ocpdMax ? { minAmps: round2(minAmpacity) } : {}) };
     if ((opts.main ?? 'breaker') === 'breaker') {
-      const main = b.add(P, { category: 'main-breaker', maxAmps: ocpdMax, poles: panelPoles, volts: supplyVolts, prefer: 'largest' }, 1);
+      // the largest not above the 430.62(A) limit, and at least the feeder's minimum ampacity (NEC 430.24): a
+      // main below the panel's load would trip in service (common practice)
+      const main = b.add(P, { category: 'main-breaker', ...mainBounds, poles: panelPoles, volts: supplyVolts, prefer: 'largest' }, 1);
       mainAmps = main?.ratings.amps ?? ocpdMax;
     } else {
-      const fuse = b.add(P, { category: 'fuse', maxAmps: ocpdMax, fuseClass: 'J', timeDelay: true, volts: supplyVolts, prefer: 'largest' }, panelPoles);
+      const fuse = b.add(P, { category: 'fuse', ...mainBounds, fuseClass: 'J', timeDelay: true, volts: supplyVolts, prefer: 'largest' }, panelPoles);
       mainAmps = fuse?.ratings.amps ?? ocpdMax;
       b.add(P, { category: 'main-disconnect', minAmps: mainAmps, fuseClass: 'J', poles: panelPoles, volts: supplyVolts }, 1);
     }
@@ -744,7 +758,11 @@ export function buildBom(input: BuildBomInput): BuildBomResult {
     else {
       // a lineup of the largest section of the type that meets the depth
       const largest = b.find({ category: 'enclosure', nemaType: encType, minDepthMm: minDepth, prefer: 'largest' });
-      if (largest && usableAreaMm2(largest) > 0) b.lines.push(matchedLine(P, largest, Math.ceil(requiredArea / usableAreaMm2(largest)), labourMap));
+      if (largest && usableAreaMm2(largest) > 0) {
+        const sections = Math.ceil(requiredArea / usableAreaMm2(largest));
+        // a swap keeps the section count, so each section must hold its share of the area
+        b.lines.push(matchedLine(P, largest, sections, labourMap, [{ category: 'enclosure', nemaType: encType, minDepthMm: minDepth, minUsableAreaMm2: Math.ceil(requiredArea / sections) }]));
+      }
       else b.unmatched(P, 'enclosure', 1, describeRequirement(encReq));
     }
   }
@@ -811,7 +829,7 @@ export function selectCooling(input: CoolingInput): CoolingResult {
     const cfm = round2((3.16 * input.heatLossW) / (dT * 1.8));
     const req: Requirement = { category: 'cooling', kind: 'filter-fan', minCfm: cfm, nemaType: type };
     const fan = selectItem(index, req);
-    if (fan) return { ...base, method: 'filter-fan', requiredCfm: cfm, requiredCoolingW: null, line: matchedLine(bucket, fan, 1, labour) };
+    if (fan) return { ...base, method: 'filter-fan', requiredCfm: cfm, requiredCoolingW: null, line: matchedLine(bucket, fan, 1, labour, [req]) };
   }
   const need = round2(excess);
   const req: Requirement = { category: 'cooling', kind: 'air-conditioner', minCoolingW: need, nemaType: type };
@@ -821,7 +839,7 @@ export function selectCooling(input: CoolingInput): CoolingResult {
     method: 'air-conditioner',
     requiredCfm: null,
     requiredCoolingW: need,
-    line: ac ? matchedLine(bucket, ac, 1, labour) : unmatchedLine(bucket, 'cooling', 1, describeRequirement(req), labour),
+    line: ac ? matchedLine(bucket, ac, 1, labour, [req]) : unmatchedLine(bucket, 'cooling', 1, describeRequirement(req), labour, [req]),
   };
 }
 
