@@ -41,97 +41,110 @@ export function usableAreaMm2(item: CatalogueItem): number {
 
 const EPS = 1e-9;
 
+const needsOf = (who: string, what: string): string => `the ${what} ${who} needs`;
+
 /**
- * What an item lacks against a requirement, each in plain words ("9 A, below the 34 A motor P-101 needs");
- * empty when it meets every constraint. The one check behind the matcher, the swap list and a swap's
- * validation. `who` names what the line serves ("motor P-101", "the panel"). With `all` false it stops at
- * the first shortfall and writes no words (the matcher's fast path).
+ * Checks an item against a requirement: true when it meets every constraint. With a sink, every shortfall
+ * is written into it in plain words ("9 A, below the 34 A motor P-101 needs"); without one it stops at the
+ * first (the matcher's fast path). The one check behind the matcher, the swap list and a swap's validation.
  */
-export function shortfalls(item: CatalogueItem, req: Requirement, who = 'the line', all = true): string[] {
-  const out: string[] = [];
-  // true when the caller should stop (first shortfall found on the fast path)
-  const no = (why: () => string): boolean => {
-    out.push(all ? why() : '');
-    return !all;
-  };
+function check(item: CatalogueItem, req: Requirement, who: string, sink: string[] | null): boolean {
   const r = item.ratings;
-  const needs = (what: string) => `the ${what} ${who} needs`;
-  if (item.category !== req.category && no(() => `it is in ${CATEGORY_LABELS[item.category]}, not ${CATEGORY_LABELS[req.category]}`)) return out;
+  // another category: nothing else is worth comparing
+  if (item.category !== req.category) {
+    sink?.push(`it is in ${CATEGORY_LABELS[item.category]}, not ${CATEGORY_LABELS[req.category]}`);
+    return false;
+  }
   if (req.volts !== undefined) {
     if (r.volts === undefined || r.volts + EPS < req.volts) {
-      if (no(() => (r.volts === undefined ? `no rated voltage, where ${who} runs at ${fmt(req.volts!)} V` : `rated ${fmt(r.volts)} V, below ${needs(`${fmt(req.volts!)} V`)}`))) return out;
-    } else if (r.voltsMin !== undefined && r.voltsMin > req.volts + EPS && no(() => `rated from ${fmt(r.voltsMin!)} V, above ${needs(`${fmt(req.volts!)} V`)}`)) return out;
+      if (!sink) return false;
+      sink.push((r.volts === undefined ? `no rated voltage, where ${who} runs at ${fmt(req.volts!)} V` : `rated ${fmt(r.volts)} V, below ${needsOf(who, `${fmt(req.volts!)} V`)}`));
+    } else if (r.voltsMin !== undefined && r.voltsMin > req.volts + EPS) { if (!sink) return false; sink.push(`rated from ${fmt(r.voltsMin!)} V, above ${needsOf(who, `${fmt(req.volts!)} V`)}`); }
   }
-  if (req.exactVolts !== undefined && r.volts !== req.exactVolts && no(() => `operates at ${r.volts === undefined ? 'no stated voltage' : `${fmt(r.volts)} V`}, not ${needs(`${fmt(req.exactVolts!)} V`)}`)) return out;
-  if (req.coilVolts !== undefined && r.coilVolts !== req.coilVolts && no(() => `${r.coilVolts === undefined ? 'no stated' : `${fmt(r.coilVolts)} V`} coil, not ${needs(`${fmt(req.coilVolts!)} V control voltage`)}`)) return out;
+  if (req.exactVolts !== undefined && r.volts !== req.exactVolts) { if (!sink) return false; sink.push(`operates at ${r.volts === undefined ? 'no stated voltage' : `${fmt(r.volts)} V`}, not ${needsOf(who, `${fmt(req.exactVolts!)} V`)}`); }
+  if (req.coilVolts !== undefined && r.coilVolts !== req.coilVolts) { if (!sink) return false; sink.push(`${r.coilVolts === undefined ? 'no stated' : `${fmt(r.coilVolts)} V`} coil, not ${needsOf(who, `${fmt(req.coilVolts!)} V control voltage`)}`); }
   if (req.nemaSize !== undefined && r.nemaSize !== req.nemaSize) {
-    if (no(() => `${r.nemaSize === undefined ? 'no NEMA size' : `NEMA size ${r.nemaSize}`}${r.amps !== undefined ? ` (${fmt(r.amps)} A)` : ''}, not ${needs(`NEMA size ${req.nemaSize}`)}`)) return out;
+    if (!sink) return false;
+    sink.push(`${r.nemaSize === undefined ? 'no NEMA size' : `NEMA size ${r.nemaSize}`}${r.amps !== undefined ? ` (${fmt(r.amps)} A)` : ''}, not ${needsOf(who, `NEMA size ${req.nemaSize}`)}`);
   }
-  if (req.minAmps !== undefined && (r.amps === undefined || r.amps + EPS < req.minAmps) && no(() => `${r.amps === undefined ? 'no current rating' : `${fmt(r.amps)} A`}, below ${needs(`${fmt(req.minAmps!)} A`)}`)) return out;
-  if (req.exactAmps !== undefined && (r.amps === undefined || Math.abs(r.amps - req.exactAmps) > EPS) && no(() => `rated ${r.amps === undefined ? 'no current' : `${fmt(r.amps)} A`}, not ${needs(`${fmt(req.exactAmps!)} A rating`)}`)) return out;
-  if (req.maxAmps !== undefined && (r.amps === undefined || r.amps > req.maxAmps + EPS) && no(() => `${r.amps === undefined ? 'no current rating' : `${fmt(r.amps)} A`}, above the ${fmt(req.maxAmps!)} A limit for ${who}`)) return out;
-  if (req.minIecAc3Amps !== undefined && (r.iecAc3Amps === undefined || r.iecAc3Amps + EPS < req.minIecAc3Amps) && no(() => `${r.iecAc3Amps === undefined ? 'no AC-3 rating' : `AC-3 ${fmt(r.iecAc3Amps)} A`}, below ${needs(`AC-3 ${fmt(req.minIecAc3Amps!)} A`)}`)) return out;
-  if (req.minIecAc4Amps !== undefined && (r.iecAc4Amps === undefined || r.iecAc4Amps + EPS < req.minIecAc4Amps) && no(() => `${r.iecAc4Amps === undefined ? 'no AC-4 rating' : `AC-4 ${fmt(r.iecAc4Amps)} A`}, below ${needs(`AC-4 ${fmt(req.minIecAc4Amps!)} A`)}`)) return out;
+  if (req.minAmps !== undefined && (r.amps === undefined || r.amps + EPS < req.minAmps)) { if (!sink) return false; sink.push(`${r.amps === undefined ? 'no current rating' : `${fmt(r.amps)} A`}, below ${needsOf(who, `${fmt(req.minAmps!)} A`)}`); }
+  if (req.exactAmps !== undefined && (r.amps === undefined || Math.abs(r.amps - req.exactAmps) > EPS)) { if (!sink) return false; sink.push(`rated ${r.amps === undefined ? 'no current' : `${fmt(r.amps)} A`}, not ${needsOf(who, `${fmt(req.exactAmps!)} A rating`)}`); }
+  if (req.maxAmps !== undefined && (r.amps === undefined || r.amps > req.maxAmps + EPS)) { if (!sink) return false; sink.push(`${r.amps === undefined ? 'no current rating' : `${fmt(r.amps)} A`}, above the ${fmt(req.maxAmps!)} A limit for ${who}`); }
+  if (req.minIecAc3Amps !== undefined && (r.iecAc3Amps === undefined || r.iecAc3Amps + EPS < req.minIecAc3Amps)) { if (!sink) return false; sink.push(`${r.iecAc3Amps === undefined ? 'no AC-3 rating' : `AC-3 ${fmt(r.iecAc3Amps)} A`}, below ${needsOf(who, `AC-3 ${fmt(req.minIecAc3Amps!)} A`)}`); }
+  if (req.minIecAc4Amps !== undefined && (r.iecAc4Amps === undefined || r.iecAc4Amps + EPS < req.minIecAc4Amps)) { if (!sink) return false; sink.push(`${r.iecAc4Amps === undefined ? 'no AC-4 rating' : `AC-4 ${fmt(r.iecAc4Amps)} A`}, below ${needsOf(who, `AC-4 ${fmt(req.minIecAc4Amps!)} A`)}`); }
   if (req.settingAmps !== undefined) {
     const lo = r.settingMinAmps;
     const hi = r.settingMaxAmps;
     if (lo === undefined || hi === undefined || lo > req.settingAmps + EPS || hi + EPS < req.settingAmps) {
-      if (no(() => (lo === undefined || hi === undefined ? `no setting range, where ${who} needs a setting of ${fmt(req.settingAmps!)} A` : `setting range ${fmt(lo)}–${fmt(hi)} A does not hold the ${fmt(req.settingAmps!)} A setting ${who} needs`))) return out;
+      if (!sink) return false;
+      sink.push((lo === undefined || hi === undefined ? `no setting range, where ${who} needs a setting of ${fmt(req.settingAmps!)} A` : `setting range ${fmt(lo)}–${fmt(hi)} A does not hold the ${fmt(req.settingAmps!)} A setting ${who} needs`));
     }
   }
   if (req.maxTripSettingAmps !== undefined && (r.settingMinAmps === undefined || r.settingMinAmps > req.maxTripSettingAmps + EPS)) {
-    if (no(() => (r.settingMinAmps === undefined ? 'no adjustable instantaneous trip' : `instantaneous trip sets no lower than ${fmt(r.settingMinAmps)} A, above the ${fmt(req.maxTripSettingAmps!)} A limit for ${who}`))) return out;
+    if (!sink) return false;
+    sink.push((r.settingMinAmps === undefined ? 'no adjustable instantaneous trip' : `instantaneous trip sets no lower than ${fmt(r.settingMinAmps)} A, above the ${fmt(req.maxTripSettingAmps!)} A limit for ${who}`));
   }
   if (req.tripClass !== undefined && !(r.tripClasses ?? []).includes(req.tripClass)) {
-    if (no(() => `${r.tripClasses?.length ? `trip class ${r.tripClasses.join('/')}` : 'no trip class'}, not ${needs(`class ${req.tripClass}`)}`)) return out;
+    if (!sink) return false;
+    sink.push(`${r.tripClasses?.length ? `trip class ${r.tripClasses.join('/')}` : 'no trip class'}, not ${needsOf(who, `class ${req.tripClass}`)}`);
   }
   if (req.minHp !== undefined) {
     const hp = r.hpByVolts?.[req.minHp.volts];
-    if ((hp === undefined || hp + EPS < req.minHp.hp) && no(() => `${hp === undefined ? 'no horsepower rating' : `${fmt(hp)} hp`} at ${req.minHp!.volts} V, below ${needs(`${fmt(req.minHp!.hp)} hp`)}`)) return out;
+    if ((hp === undefined || hp + EPS < req.minHp.hp)) { if (!sink) return false; sink.push(`${hp === undefined ? 'no horsepower rating' : `${fmt(hp)} hp`} at ${req.minHp!.volts} V, below ${needsOf(who, `${fmt(req.minHp!.hp)} hp`)}`); }
   }
-  if (req.poles !== undefined && r.poles !== req.poles && no(() => `${r.poles === undefined ? 'no stated poles' : `${r.poles}-pole`}, not ${needs(`${req.poles}-pole device`)}`)) return out;
-  if (req.minPoles !== undefined && (r.poles === undefined || r.poles < req.minPoles) && no(() => `${r.poles === undefined ? 'no stated poles' : `${r.poles}-pole`}, fewer than ${needs(`${req.minPoles} poles`)}`)) return out;
-  if (req.fuseClass !== undefined && r.fuseClass !== req.fuseClass && no(() => `${r.fuseClass === undefined ? 'no fuse class' : `class ${r.fuseClass}`}, not ${needs(`class ${req.fuseClass}`)}`)) return out;
-  if (req.timeDelay !== undefined && r.timeDelay !== req.timeDelay && no(() => `${r.timeDelay ? 'time-delay' : 'non-time-delay'}, where ${who} needs ${req.timeDelay ? 'time-delay' : 'non-time-delay'}`)) return out;
-  if (req.kind !== undefined && r.kind !== req.kind && no(() => `${r.kind ?? 'no stated kind'}, not ${needs(req.kind!)}`)) return out;
-  if (req.function !== undefined && r.function !== req.function && no(() => `function ${r.function ?? 'not stated'}, not ${needs(req.function!)}`)) return out;
-  if (req.contacts !== undefined && r.contacts !== req.contacts && no(() => `contacts ${r.contacts ?? 'not stated'}, not ${needs(req.contacts!)}`)) return out;
-  if (req.detectsPhaseLoss && !r.detectsPhaseLoss && no(() => `does not detect phase loss, which ${who} needs`)) return out;
-  if (req.detectsPhaseReversal && !r.detectsPhaseReversal && no(() => `does not detect phase reversal, which ${who} needs`)) return out;
-  if (req.detectsImbalance && !r.detectsImbalance && no(() => `does not detect imbalance, which ${who} needs`)) return out;
-  if (req.internalBypass && !r.internalBypass && no(() => `no internal bypass, which ${who} needs`)) return out;
-  if (req.builtInOverload && !r.builtInOverload && no(() => `no built-in overload, which ${who} needs`)) return out;
+  if (req.poles !== undefined && r.poles !== req.poles) { if (!sink) return false; sink.push(`${r.poles === undefined ? 'no stated poles' : `${r.poles}-pole`}, not ${needsOf(who, `${req.poles}-pole device`)}`); }
+  if (req.minPoles !== undefined && (r.poles === undefined || r.poles < req.minPoles)) { if (!sink) return false; sink.push(`${r.poles === undefined ? 'no stated poles' : `${r.poles}-pole`}, fewer than ${needsOf(who, `${req.minPoles} poles`)}`); }
+  if (req.fuseClass !== undefined && r.fuseClass !== req.fuseClass) { if (!sink) return false; sink.push(`${r.fuseClass === undefined ? 'no fuse class' : `class ${r.fuseClass}`}, not ${needsOf(who, `class ${req.fuseClass}`)}`); }
+  if (req.timeDelay !== undefined && r.timeDelay !== req.timeDelay) { if (!sink) return false; sink.push(`${r.timeDelay ? 'time-delay' : 'non-time-delay'}, where ${who} needs ${req.timeDelay ? 'time-delay' : 'non-time-delay'}`); }
+  if (req.kind !== undefined && r.kind !== req.kind) { if (!sink) return false; sink.push(`${r.kind ?? 'no stated kind'}, not ${needsOf(who, req.kind!)}`); }
+  if (req.function !== undefined && r.function !== req.function) { if (!sink) return false; sink.push(`function ${r.function ?? 'not stated'}, not ${needsOf(who, req.function!)}`); }
+  if (req.contacts !== undefined && r.contacts !== req.contacts) { if (!sink) return false; sink.push(`contacts ${r.contacts ?? 'not stated'}, not ${needsOf(who, req.contacts!)}`); }
+  if (req.detectsPhaseLoss && !r.detectsPhaseLoss) { if (!sink) return false; sink.push(`does not detect phase loss, which ${who} needs`); }
+  if (req.detectsPhaseReversal && !r.detectsPhaseReversal) { if (!sink) return false; sink.push(`does not detect phase reversal, which ${who} needs`); }
+  if (req.detectsImbalance && !r.detectsImbalance) { if (!sink) return false; sink.push(`does not detect imbalance, which ${who} needs`); }
+  if (req.internalBypass && !r.internalBypass) { if (!sink) return false; sink.push(`no internal bypass, which ${who} needs`); }
+  if (req.builtInOverload && !r.builtInOverload) { if (!sink) return false; sink.push(`no built-in overload, which ${who} needs`); }
   if (req.minNormalDutyAmps !== undefined && (r.normalDutyAmps === undefined || r.normalDutyAmps + EPS < req.minNormalDutyAmps)) {
-    if (no(() => `${r.normalDutyAmps === undefined ? 'no normal-duty rating' : `normal-duty output ${fmt(r.normalDutyAmps)} A`}, below ${needs(`${fmt(req.minNormalDutyAmps!)} A`)}`)) return out;
+    if (!sink) return false;
+    sink.push(`${r.normalDutyAmps === undefined ? 'no normal-duty rating' : `normal-duty output ${fmt(r.normalDutyAmps)} A`}, below ${needsOf(who, `${fmt(req.minNormalDutyAmps!)} A`)}`);
   }
   if (req.minHeavyDutyAmps !== undefined && (r.heavyDutyAmps === undefined || r.heavyDutyAmps + EPS < req.minHeavyDutyAmps)) {
-    if (no(() => `${r.heavyDutyAmps === undefined ? 'no heavy-duty rating' : `heavy-duty output ${fmt(r.heavyDutyAmps)} A`}, below ${needs(`${fmt(req.minHeavyDutyAmps!)} A`)}`)) return out;
+    if (!sink) return false;
+    sink.push(`${r.heavyDutyAmps === undefined ? 'no heavy-duty rating' : `heavy-duty output ${fmt(r.heavyDutyAmps)} A`}, below ${needsOf(who, `${fmt(req.minHeavyDutyAmps!)} A`)}`);
   }
-  if (req.minVa !== undefined && (r.va === undefined || r.va + EPS < req.minVa) && no(() => `${r.va === undefined ? 'no VA rating' : `${fmt(r.va)} VA`}, below ${needs(`${fmt(req.minVa!)} VA continuous`)}`)) return out;
-  if (req.minInrushVa !== undefined && (r.inrushVa === undefined || r.inrushVa + EPS < req.minInrushVa) && no(() => `${r.inrushVa === undefined ? 'no inrush rating' : `inrush ${fmt(r.inrushVa)} VA`}, below ${needs(`${fmt(req.minInrushVa!)} VA inrush`)}`)) return out;
-  if (req.secondaryVolts !== undefined && r.secondaryVolts !== req.secondaryVolts && no(() => `secondary ${r.secondaryVolts === undefined ? 'not stated' : `${fmt(r.secondaryVolts)} V`}, not ${needs(`${fmt(req.secondaryVolts!)} V`)}`)) return out;
+  if (req.minVa !== undefined && (r.va === undefined || r.va + EPS < req.minVa)) { if (!sink) return false; sink.push(`${r.va === undefined ? 'no VA rating' : `${fmt(r.va)} VA`}, below ${needsOf(who, `${fmt(req.minVa!)} VA continuous`)}`); }
+  if (req.minInrushVa !== undefined && (r.inrushVa === undefined || r.inrushVa + EPS < req.minInrushVa)) { if (!sink) return false; sink.push(`${r.inrushVa === undefined ? 'no inrush rating' : `inrush ${fmt(r.inrushVa)} VA`}, below ${needsOf(who, `${fmt(req.minInrushVa!)} VA inrush`)}`); }
+  if (req.secondaryVolts !== undefined && r.secondaryVolts !== req.secondaryVolts) { if (!sink) return false; sink.push(`secondary ${r.secondaryVolts === undefined ? 'not stated' : `${fmt(r.secondaryVolts)} V`}, not ${needsOf(who, `${fmt(req.secondaryVolts!)} V`)}`); }
   if (req.wireSize !== undefined) {
     if (item.category === 'terminal-block') {
       const i = wireIndex(req.wireSize);
-      if ((!r.wireMin || !r.wireMax || wireIndex(r.wireMin) > i || wireIndex(r.wireMax) < i) && no(() => `takes ${r.wireMin && r.wireMax ? `${r.wireMin} to ${r.wireMax}` : 'no stated wire range'}, not ${needs(`size ${req.wireSize}`)}`)) return out;
-    } else if (r.wireSize !== req.wireSize && no(() => `size ${r.wireSize ?? 'not stated'}, not ${needs(`size ${req.wireSize}`)}`)) return out;
+      if ((!r.wireMin || !r.wireMax || wireIndex(r.wireMin) > i || wireIndex(r.wireMax) < i)) { if (!sink) return false; sink.push(`takes ${r.wireMin && r.wireMax ? `${r.wireMin} to ${r.wireMax}` : 'no stated wire range'}, not ${needsOf(who, `size ${req.wireSize}`)}`); }
+    } else if (r.wireSize !== req.wireSize) { if (!sink) return false; sink.push(`size ${r.wireSize ?? 'not stated'}, not ${needsOf(who, `size ${req.wireSize}`)}`); }
   }
   if (req.nemaType !== undefined) {
     if (item.category === 'cooling') {
-      if (!(r.nemaTypes ?? []).includes(req.nemaType as never) && no(() => `does not keep NEMA Type ${req.nemaType}, which ${who} needs`)) return out;
-    } else if (r.nemaType !== req.nemaType && no(() => `${r.nemaType ? `NEMA Type ${r.nemaType}` : 'no NEMA type'}, not ${needs(`Type ${req.nemaType}`)}`)) return out;
+      if (!(r.nemaTypes ?? []).includes(req.nemaType as never)) { if (!sink) return false; sink.push(`does not keep NEMA Type ${req.nemaType}, which ${who} needs`); }
+    } else if (r.nemaType !== req.nemaType) { if (!sink) return false; sink.push(`${r.nemaType ? `NEMA Type ${r.nemaType}` : 'no NEMA type'}, not ${needsOf(who, `Type ${req.nemaType}`)}`); }
   }
-  if (req.minCfm !== undefined && (r.cfm === undefined || r.cfm + EPS < req.minCfm) && no(() => `${r.cfm === undefined ? 'no airflow rating' : `${fmt(r.cfm)} cfm`}, below ${needs(`${fmt(req.minCfm!)} cfm`)}`)) return out;
-  if (req.minCoolingW !== undefined && (r.coolingW === undefined || r.coolingW + EPS < req.minCoolingW) && no(() => `${r.coolingW === undefined ? 'no cooling rating' : `${fmt(r.coolingW)} W cooling`}, below ${needs(`${fmt(req.minCoolingW!)} W`)}`)) return out;
-  if (req.minDepthMm !== undefined && (r.depthMm === undefined || r.depthMm + EPS < req.minDepthMm) && no(() => `${r.depthMm === undefined ? 'no stated depth' : `${fmt(r.depthMm)} mm deep`}, below ${needs(`${fmt(req.minDepthMm!)} mm`)}`)) return out;
+  if (req.minCfm !== undefined && (r.cfm === undefined || r.cfm + EPS < req.minCfm)) { if (!sink) return false; sink.push(`${r.cfm === undefined ? 'no airflow rating' : `${fmt(r.cfm)} cfm`}, below ${needsOf(who, `${fmt(req.minCfm!)} cfm`)}`); }
+  if (req.minCoolingW !== undefined && (r.coolingW === undefined || r.coolingW + EPS < req.minCoolingW)) { if (!sink) return false; sink.push(`${r.coolingW === undefined ? 'no cooling rating' : `${fmt(r.coolingW)} W cooling`}, below ${needsOf(who, `${fmt(req.minCoolingW!)} W`)}`); }
+  if (req.minDepthMm !== undefined && (r.depthMm === undefined || r.depthMm + EPS < req.minDepthMm)) { if (!sink) return false; sink.push(`${r.depthMm === undefined ? 'no stated depth' : `${fmt(r.depthMm)} mm deep`}, below ${needsOf(who, `${fmt(req.minDepthMm!)} mm`)}`); }
   if (req.minUsableAreaMm2 !== undefined && usableAreaMm2(item) + EPS < req.minUsableAreaMm2) {
-    if (no(() => `usable back panel ${fmt(usableAreaMm2(item) / 1e6)} m², below ${needs(`${fmt(req.minUsableAreaMm2! / 1e6)} m²`)}`)) return out;
+    if (!sink) return false;
+    sink.push(`usable back panel ${fmt(usableAreaMm2(item) / 1e6)} m², below ${needsOf(who, `${fmt(req.minUsableAreaMm2! / 1e6)} m²`)}`);
   }
-  return out;
+  return !sink || sink.length === 0;
+}
+
+/** What an item lacks against a requirement, each in plain words; empty when it meets it. `who` names what the line serves ("motor P-101", "the panel"). */
+export function shortfalls(item: CatalogueItem, req: Requirement, who = 'the line'): string[] {
+  const sink: string[] = [];
+  check(item, req, who, sink);
+  return sink;
 }
 
 export function satisfies(item: CatalogueItem, req: Requirement): boolean {
-  return shortfalls(item, req, undefined, false).length === 0;
+  return check(item, req, '', null);
 }
 
 /** What an item lacks against a line's requirement: met when it meets any one of the alternatives (empty list). */
