@@ -18,6 +18,7 @@ import {
   type Category,
   type LabourKey,
   type LabourUnit,
+  type Requirement,
 } from '../schemas/catalogue';
 
 type WireSize = (typeof WIRE_SIZES)[number];
@@ -26,55 +27,8 @@ type HpVolts = (typeof HP_VOLTS)[number];
 // ---------------------------------------------------------------------------------------------
 // Requirements and matching
 
-/** What a catalogue item must meet. Every field given is a hard constraint. */
-export interface Requirement {
-  category: Category;
-  /** the item's rated range must hold this voltage: voltsMin ≤ v ≤ volts */
-  volts?: number;
-  /** operating voltage must equal this (pilot lights, fans) */
-  exactVolts?: number;
-  coilVolts?: number;
-  nemaSize?: string;
-  minAmps?: number;
-  exactAmps?: number;
-  maxAmps?: number;
-  minIecAc3Amps?: number;
-  minIecAc4Amps?: number;
-  /** settingMinAmps ≤ x ≤ settingMaxAmps */
-  settingAmps?: number;
-  /** the adjustable instantaneous trip can be set at or below this value (settingMinAmps ≤ x) */
-  maxTripSettingAmps?: number;
-  tripClass?: 10 | 20 | 30;
-  minHp?: { volts: HpVolts; hp: number };
-  poles?: number;
-  minPoles?: number;
-  fuseClass?: 'J' | 'RK5' | 'CC';
-  timeDelay?: boolean;
-  kind?: string;
-  function?: string;
-  contacts?: string;
-  detectsPhaseLoss?: boolean;
-  detectsPhaseReversal?: boolean;
-  detectsImbalance?: boolean;
-  internalBypass?: boolean;
-  builtInOverload?: boolean;
-  minNormalDutyAmps?: number;
-  minHeavyDutyAmps?: number;
-  minVa?: number;
-  minInrushVa?: number;
-  secondaryVolts?: number;
-  /** wire: this size; terminal block: wireMin ≤ size ≤ wireMax */
-  wireSize?: WireSize;
-  /** enclosure: this type; cooling: keeps this type's rating */
-  nemaType?: string;
-  minCfm?: number;
-  minCoolingW?: number;
-  minDepthMm?: number;
-  /** usable back-panel area, mm², see usableAreaMm2() */
-  minUsableAreaMm2?: number;
-  /** pick the largest item that meets the rest (for ratings with an upper limit) */
-  prefer?: 'smallest' | 'largest';
-}
+/** What a catalogue item must meet (RequirementSchema in shared/schemas/catalogue.ts). Every field given is a hard constraint. */
+export type { Requirement };
 
 const wireIndex = (s: string): number => WIRE_SIZES.indexOf(s as WireSize);
 
@@ -87,64 +41,126 @@ export function usableAreaMm2(item: CatalogueItem): number {
 
 const EPS = 1e-9;
 
-export function satisfies(item: CatalogueItem, req: Requirement): boolean {
+const needsOf = (who: string, what: string): string => `the ${what} ${who} needs`;
+
+/**
+ * Checks an item against a requirement: true when it meets every constraint. With a sink, every shortfall
+ * is written into it in plain words ("9 A, below the 34 A motor P-101 needs"); without one it stops at the
+ * first (the matcher's fast path). The one check behind the matcher, the swap list and a swap's validation.
+ */
+function check(item: CatalogueItem, req: Requirement, who: string, sink: string[] | null): boolean {
   const r = item.ratings;
-  if (item.category !== req.category) return false;
+  // another category: nothing else is worth comparing
+  if (item.category !== req.category) {
+    sink?.push(`it is in ${CATEGORY_LABELS[item.category]}, not ${CATEGORY_LABELS[req.category]}`);
+    return false;
+  }
   if (req.volts !== undefined) {
-    if (r.volts === undefined || r.volts + EPS < req.volts) return false;
-    if (r.voltsMin !== undefined && r.voltsMin > req.volts + EPS) return false;
+    if (r.volts === undefined || r.volts + EPS < req.volts) {
+      if (!sink) return false;
+      sink.push((r.volts === undefined ? `no rated voltage, where ${who} runs at ${fmt(req.volts!)} V` : `rated ${fmt(r.volts)} V, below ${needsOf(who, `${fmt(req.volts!)} V`)}`));
+    } else if (r.voltsMin !== undefined && r.voltsMin > req.volts + EPS) { if (!sink) return false; sink.push(`rated from ${fmt(r.voltsMin!)} V, above ${needsOf(who, `${fmt(req.volts!)} V`)}`); }
   }
-  if (req.exactVolts !== undefined && r.volts !== req.exactVolts) return false;
-  if (req.coilVolts !== undefined && r.coilVolts !== req.coilVolts) return false;
-  if (req.nemaSize !== undefined && r.nemaSize !== req.nemaSize) return false;
-  if (req.minAmps !== undefined && (r.amps === undefined || r.amps + EPS < req.minAmps)) return false;
-  if (req.exactAmps !== undefined && (r.amps === undefined || Math.abs(r.amps - req.exactAmps) > EPS)) return false;
-  if (req.maxAmps !== undefined && (r.amps === undefined || r.amps > req.maxAmps + EPS)) return false;
-  if (req.minIecAc3Amps !== undefined && (r.iecAc3Amps === undefined || r.iecAc3Amps + EPS < req.minIecAc3Amps)) return false;
-  if (req.minIecAc4Amps !== undefined && (r.iecAc4Amps === undefined || r.iecAc4Amps + EPS < req.minIecAc4Amps)) return false;
+  if (req.exactVolts !== undefined && r.volts !== req.exactVolts) { if (!sink) return false; sink.push(`operates at ${r.volts === undefined ? 'no stated voltage' : `${fmt(r.volts)} V`}, not ${needsOf(who, `${fmt(req.exactVolts!)} V`)}`); }
+  if (req.coilVolts !== undefined && r.coilVolts !== req.coilVolts) { if (!sink) return false; sink.push(`${r.coilVolts === undefined ? 'no stated' : `${fmt(r.coilVolts)} V`} coil, not ${needsOf(who, `${fmt(req.coilVolts!)} V control voltage`)}`); }
+  if (req.nemaSize !== undefined && r.nemaSize !== req.nemaSize) {
+    if (!sink) return false;
+    sink.push(`${r.nemaSize === undefined ? 'no NEMA size' : `NEMA size ${r.nemaSize}`}${r.amps !== undefined ? ` (${fmt(r.amps)} A)` : ''}, not ${needsOf(who, `NEMA size ${req.nemaSize}`)}`);
+  }
+  if (req.minAmps !== undefined && (r.amps === undefined || r.amps + EPS < req.minAmps)) { if (!sink) return false; sink.push(`${r.amps === undefined ? 'no current rating' : `${fmt(r.amps)} A`}, below ${needsOf(who, `${fmt(req.minAmps!)} A`)}`); }
+  if (req.exactAmps !== undefined && (r.amps === undefined || Math.abs(r.amps - req.exactAmps) > EPS)) { if (!sink) return false; sink.push(`rated ${r.amps === undefined ? 'no current' : `${fmt(r.amps)} A`}, not ${needsOf(who, `${fmt(req.exactAmps!)} A rating`)}`); }
+  if (req.maxAmps !== undefined && (r.amps === undefined || r.amps > req.maxAmps + EPS)) { if (!sink) return false; sink.push(`${r.amps === undefined ? 'no current rating' : `${fmt(r.amps)} A`}, above the ${fmt(req.maxAmps!)} A limit for ${who}`); }
+  if (req.minIecAc3Amps !== undefined && (r.iecAc3Amps === undefined || r.iecAc3Amps + EPS < req.minIecAc3Amps)) { if (!sink) return false; sink.push(`${r.iecAc3Amps === undefined ? 'no AC-3 rating' : `AC-3 ${fmt(r.iecAc3Amps)} A`}, below ${needsOf(who, `AC-3 ${fmt(req.minIecAc3Amps!)} A`)}`); }
+  if (req.minIecAc4Amps !== undefined && (r.iecAc4Amps === undefined || r.iecAc4Amps + EPS < req.minIecAc4Amps)) { if (!sink) return false; sink.push(`${r.iecAc4Amps === undefined ? 'no AC-4 rating' : `AC-4 ${fmt(r.iecAc4Amps)} A`}, below ${needsOf(who, `AC-4 ${fmt(req.minIecAc4Amps!)} A`)}`); }
   if (req.settingAmps !== undefined) {
-    if (r.settingMinAmps === undefined || r.settingMaxAmps === undefined) return false;
-    if (r.settingMinAmps > req.settingAmps + EPS || r.settingMaxAmps + EPS < req.settingAmps) return false;
+    const lo = r.settingMinAmps;
+    const hi = r.settingMaxAmps;
+    if (lo === undefined || hi === undefined || lo > req.settingAmps + EPS || hi + EPS < req.settingAmps) {
+      if (!sink) return false;
+      sink.push((lo === undefined || hi === undefined ? `no setting range, where ${who} needs a setting of ${fmt(req.settingAmps!)} A` : `setting range ${fmt(lo)}–${fmt(hi)} A does not hold the ${fmt(req.settingAmps!)} A setting ${who} needs`));
+    }
   }
-  if (req.maxTripSettingAmps !== undefined && (r.settingMinAmps === undefined || r.settingMinAmps > req.maxTripSettingAmps + EPS)) return false;
-  if (req.tripClass !== undefined && !(r.tripClasses ?? []).includes(req.tripClass)) return false;
+  if (req.maxTripSettingAmps !== undefined && (r.settingMinAmps === undefined || r.settingMinAmps > req.maxTripSettingAmps + EPS)) {
+    if (!sink) return false;
+    sink.push((r.settingMinAmps === undefined ? 'no adjustable instantaneous trip' : `instantaneous trip sets no lower than ${fmt(r.settingMinAmps)} A, above the ${fmt(req.maxTripSettingAmps!)} A limit for ${who}`));
+  }
+  if (req.tripClass !== undefined && !(r.tripClasses ?? []).includes(req.tripClass)) {
+    if (!sink) return false;
+    sink.push(`${r.tripClasses?.length ? `trip class ${r.tripClasses.join('/')}` : 'no trip class'}, not ${needsOf(who, `class ${req.tripClass}`)}`);
+  }
   if (req.minHp !== undefined) {
     const hp = r.hpByVolts?.[req.minHp.volts];
-    if (hp === undefined || hp + EPS < req.minHp.hp) return false;
+    if ((hp === undefined || hp + EPS < req.minHp.hp)) { if (!sink) return false; sink.push(`${hp === undefined ? 'no horsepower rating' : `${fmt(hp)} hp`} at ${req.minHp!.volts} V, below ${needsOf(who, `${fmt(req.minHp!.hp)} hp`)}`); }
   }
-  if (req.poles !== undefined && r.poles !== req.poles) return false;
-  if (req.minPoles !== undefined && (r.poles === undefined || r.poles < req.minPoles)) return false;
-  if (req.fuseClass !== undefined && r.fuseClass !== req.fuseClass) return false;
-  if (req.timeDelay !== undefined && r.timeDelay !== req.timeDelay) return false;
-  if (req.kind !== undefined && r.kind !== req.kind) return false;
-  if (req.function !== undefined && r.function !== req.function) return false;
-  if (req.contacts !== undefined && r.contacts !== req.contacts) return false;
-  if (req.detectsPhaseLoss && !r.detectsPhaseLoss) return false;
-  if (req.detectsPhaseReversal && !r.detectsPhaseReversal) return false;
-  if (req.detectsImbalance && !r.detectsImbalance) return false;
-  if (req.internalBypass && !r.internalBypass) return false;
-  if (req.builtInOverload && !r.builtInOverload) return false;
-  if (req.minNormalDutyAmps !== undefined && (r.normalDutyAmps === undefined || r.normalDutyAmps + EPS < req.minNormalDutyAmps)) return false;
-  if (req.minHeavyDutyAmps !== undefined && (r.heavyDutyAmps === undefined || r.heavyDutyAmps + EPS < req.minHeavyDutyAmps)) return false;
-  if (req.minVa !== undefined && (r.va === undefined || r.va + EPS < req.minVa)) return false;
-  if (req.minInrushVa !== undefined && (r.inrushVa === undefined || r.inrushVa + EPS < req.minInrushVa)) return false;
-  if (req.secondaryVolts !== undefined && r.secondaryVolts !== req.secondaryVolts) return false;
+  if (req.poles !== undefined && r.poles !== req.poles) { if (!sink) return false; sink.push(`${r.poles === undefined ? 'no stated poles' : `${r.poles}-pole`}, not ${needsOf(who, `${req.poles}-pole device`)}`); }
+  if (req.minPoles !== undefined && (r.poles === undefined || r.poles < req.minPoles)) { if (!sink) return false; sink.push(`${r.poles === undefined ? 'no stated poles' : `${r.poles}-pole`}, fewer than ${needsOf(who, `${req.minPoles} poles`)}`); }
+  if (req.fuseClass !== undefined && r.fuseClass !== req.fuseClass) { if (!sink) return false; sink.push(`${r.fuseClass === undefined ? 'no fuse class' : `class ${r.fuseClass}`}, not ${needsOf(who, `class ${req.fuseClass}`)}`); }
+  if (req.timeDelay !== undefined && r.timeDelay !== req.timeDelay) { if (!sink) return false; sink.push(`${r.timeDelay ? 'time-delay' : 'non-time-delay'}, where ${who} needs ${req.timeDelay ? 'time-delay' : 'non-time-delay'}`); }
+  if (req.kind !== undefined && r.kind !== req.kind) { if (!sink) return false; sink.push(`${r.kind ?? 'no stated kind'}, not ${needsOf(who, req.kind!)}`); }
+  if (req.function !== undefined && r.function !== req.function) { if (!sink) return false; sink.push(`function ${r.function ?? 'not stated'}, not ${needsOf(who, req.function!)}`); }
+  if (req.contacts !== undefined && r.contacts !== req.contacts) { if (!sink) return false; sink.push(`contacts ${r.contacts ?? 'not stated'}, not ${needsOf(who, req.contacts!)}`); }
+  if (req.detectsPhaseLoss && !r.detectsPhaseLoss) { if (!sink) return false; sink.push(`does not detect phase loss, which ${who} needs`); }
+  if (req.detectsPhaseReversal && !r.detectsPhaseReversal) { if (!sink) return false; sink.push(`does not detect phase reversal, which ${who} needs`); }
+  if (req.detectsImbalance && !r.detectsImbalance) { if (!sink) return false; sink.push(`does not detect imbalance, which ${who} needs`); }
+  if (req.internalBypass && !r.internalBypass) { if (!sink) return false; sink.push(`no internal bypass, which ${who} needs`); }
+  if (req.builtInOverload && !r.builtInOverload) { if (!sink) return false; sink.push(`no built-in overload, which ${who} needs`); }
+  if (req.minNormalDutyAmps !== undefined && (r.normalDutyAmps === undefined || r.normalDutyAmps + EPS < req.minNormalDutyAmps)) {
+    if (!sink) return false;
+    sink.push(`${r.normalDutyAmps === undefined ? 'no normal-duty rating' : `normal-duty output ${fmt(r.normalDutyAmps)} A`}, below ${needsOf(who, `${fmt(req.minNormalDutyAmps!)} A`)}`);
+  }
+  if (req.minHeavyDutyAmps !== undefined && (r.heavyDutyAmps === undefined || r.heavyDutyAmps + EPS < req.minHeavyDutyAmps)) {
+    if (!sink) return false;
+    sink.push(`${r.heavyDutyAmps === undefined ? 'no heavy-duty rating' : `heavy-duty output ${fmt(r.heavyDutyAmps)} A`}, below ${needsOf(who, `${fmt(req.minHeavyDutyAmps!)} A`)}`);
+  }
+  if (req.minVa !== undefined && (r.va === undefined || r.va + EPS < req.minVa)) { if (!sink) return false; sink.push(`${r.va === undefined ? 'no VA rating' : `${fmt(r.va)} VA`}, below ${needsOf(who, `${fmt(req.minVa!)} VA continuous`)}`); }
+  if (req.minInrushVa !== undefined && (r.inrushVa === undefined || r.inrushVa + EPS < req.minInrushVa)) { if (!sink) return false; sink.push(`${r.inrushVa === undefined ? 'no inrush rating' : `inrush ${fmt(r.inrushVa)} VA`}, below ${needsOf(who, `${fmt(req.minInrushVa!)} VA inrush`)}`); }
+  if (req.secondaryVolts !== undefined && r.secondaryVolts !== req.secondaryVolts) { if (!sink) return false; sink.push(`secondary ${r.secondaryVolts === undefined ? 'not stated' : `${fmt(r.secondaryVolts)} V`}, not ${needsOf(who, `${fmt(req.secondaryVolts!)} V`)}`); }
   if (req.wireSize !== undefined) {
     if (item.category === 'terminal-block') {
       const i = wireIndex(req.wireSize);
-      if (!r.wireMin || !r.wireMax || wireIndex(r.wireMin) > i || wireIndex(r.wireMax) < i) return false;
-    } else if (r.wireSize !== req.wireSize) return false;
+      if ((!r.wireMin || !r.wireMax || wireIndex(r.wireMin) > i || wireIndex(r.wireMax) < i)) { if (!sink) return false; sink.push(`takes ${r.wireMin && r.wireMax ? `${r.wireMin} to ${r.wireMax}` : 'no stated wire range'}, not ${needsOf(who, `size ${req.wireSize}`)}`); }
+    } else if (r.wireSize !== req.wireSize) { if (!sink) return false; sink.push(`size ${r.wireSize ?? 'not stated'}, not ${needsOf(who, `size ${req.wireSize}`)}`); }
   }
   if (req.nemaType !== undefined) {
     if (item.category === 'cooling') {
-      if (!(r.nemaTypes ?? []).includes(req.nemaType as never)) return false;
-    } else if (r.nemaType !== req.nemaType) return false;
+      if (!(r.nemaTypes ?? []).includes(req.nemaType as never)) { if (!sink) return false; sink.push(`does not keep NEMA Type ${req.nemaType}, which ${who} needs`); }
+    } else if (r.nemaType !== req.nemaType) { if (!sink) return false; sink.push(`${r.nemaType ? `NEMA Type ${r.nemaType}` : 'no NEMA type'}, not ${needsOf(who, `Type ${req.nemaType}`)}`); }
   }
-  if (req.minCfm !== undefined && (r.cfm === undefined || r.cfm + EPS < req.minCfm)) return false;
-  if (req.minCoolingW !== undefined && (r.coolingW === undefined || r.coolingW + EPS < req.minCoolingW)) return false;
-  if (req.minDepthMm !== undefined && (r.depthMm === undefined || r.depthMm + EPS < req.minDepthMm)) return false;
-  if (req.minUsableAreaMm2 !== undefined && usableAreaMm2(item) + EPS < req.minUsableAreaMm2) return false;
-  return true;
+  if (req.minCfm !== undefined && (r.cfm === undefined || r.cfm + EPS < req.minCfm)) { if (!sink) return false; sink.push(`${r.cfm === undefined ? 'no airflow rating' : `${fmt(r.cfm)} cfm`}, below ${needsOf(who, `${fmt(req.minCfm!)} cfm`)}`); }
+  if (req.minCoolingW !== undefined && (r.coolingW === undefined || r.coolingW + EPS < req.minCoolingW)) { if (!sink) return false; sink.push(`${r.coolingW === undefined ? 'no cooling rating' : `${fmt(r.coolingW)} W cooling`}, below ${needsOf(who, `${fmt(req.minCoolingW!)} W`)}`); }
+  if (req.minDepthMm !== undefined && (r.depthMm === undefined || r.depthMm + EPS < req.minDepthMm)) { if (!sink) return false; sink.push(`${r.depthMm === undefined ? 'no stated depth' : `${fmt(r.depthMm)} mm deep`}, below ${needsOf(who, `${fmt(req.minDepthMm!)} mm`)}`); }
+  if (req.minUsableAreaMm2 !== undefined && usableAreaMm2(item) + EPS < req.minUsableAreaMm2) {
+    if (!sink) return false;
+    sink.push(`usable back panel ${fmt(usableAreaMm2(item) / 1e6)} m², below ${needsOf(who, `${fmt(req.minUsableAreaMm2! / 1e6)} m²`)}`);
+  }
+  return !sink || sink.length === 0;
+}
+
+/** What an item lacks against a requirement, each in plain words; empty when it meets it. `who` names what the line serves ("motor P-101", "the panel"). */
+export function shortfalls(item: CatalogueItem, req: Requirement, who = 'the line'): string[] {
+  const sink: string[] = [];
+  check(item, req, who, sink);
+  return sink;
+}
+
+export function satisfies(item: CatalogueItem, req: Requirement): boolean {
+  return check(item, req, '', null);
+}
+
+/** What an item lacks against a line's requirement: met when it meets any one of the alternatives (empty list). */
+export function lineShortfalls(item: CatalogueItem, reqs: readonly Requirement[], who: string): string[] {
+  let best: string[] | null = null;
+  for (const req of reqs) {
+    const miss = shortfalls(item, req, who);
+    if (miss.length === 0) return [];
+    if (!best || (req.category === item.category && miss.length < best.length)) best = miss;
+  }
+  return best ?? [];
+}
+
+/** Who a line serves, in words: "motor P-101" or "the panel". */
+export function lineServes(bucket: string): string {
+  return bucket === PANEL_BUCKET ? 'the panel' : `motor ${bucket}`;
 }
 
 /** The size an item is ranked by within its category ("smallest adequate"). */
@@ -278,10 +294,15 @@ const round4 = (n: number): number => Math.round((n + Number.EPSILON) * 10000) /
 
 /** A line swapped by the estimator for an equivalent item: the item's price, labour, heat and rating, with the reason. */
 export function swappedLine(line: BomLine, item: CatalogueItem, labour: LabourTable, reason: string | null): BomLine {
-  return { ...matchedLine(line.bucket, item, line.quantity, labour), source: 'swapped', swapReason: reason };
+  return {
+    ...matchedLine(line.bucket, item, line.quantity, labour, line.requirement ?? null),
+    source: 'swapped',
+    swapReason: reason,
+    swappedFrom: line.source === 'swapped' ? (line.swappedFrom ?? null) : line.code,
+  };
 }
 
-function matchedLine(bucket: string, item: CatalogueItem, quantity: number, labour: LabourTable): BomLine {
+function matchedLine(bucket: string, item: CatalogueItem, quantity: number, labour: LabourTable, requirement: Requirement[] | null): BomLine {
   return {
     bucket,
     category: item.category,
@@ -297,10 +318,11 @@ function matchedLine(bucket: string, item: CatalogueItem, quantity: number, labo
     requiredRatings: null,
     source: 'auto',
     swapReason: null,
+    requirement,
   };
 }
 
-function unmatchedLine(bucket: string, category: Category, quantity: number, needs: string, labour: LabourTable): BomLine {
+function unmatchedLine(bucket: string, category: Category, quantity: number, needs: string, labour: LabourTable, requirement: Requirement[] | null): BomLine {
   return {
     bucket,
     category,
@@ -316,6 +338,7 @@ function unmatchedLine(bucket: string, category: Category, quantity: number, nee
     requiredRatings: needs,
     source: 'auto',
     swapReason: null,
+    requirement,
   };
 }
 
@@ -510,7 +533,7 @@ class Builder {
   add(bucket: string, req: Requirement, quantity: number): CatalogueItem | null {
     if (quantity <= 0) return null;
     const item = this.find(req);
-    this.lines.push(item ? matchedLine(bucket, item, quantity, this.labour) : unmatchedLine(bucket, req.category, quantity, describeRequirement(req), this.labour));
+    this.lines.push(item ? matchedLine(bucket, item, quantity, this.labour, [req]) : unmatchedLine(bucket, req.category, quantity, describeRequirement(req), this.labour, [req]));
     return item;
   }
 
@@ -519,17 +542,17 @@ class Builder {
     for (const req of reqs) {
       const item = this.find(req);
       if (item) {
-        this.lines.push(matchedLine(bucket, item, quantity, this.labour));
+        this.lines.push(matchedLine(bucket, item, quantity, this.labour, reqs));
         return item;
       }
     }
     const needs = reqs.map(describeRequirement).join(' — or — ');
-    this.lines.push(unmatchedLine(bucket, reqs[0]!.category, quantity, needs, this.labour));
+    this.lines.push(unmatchedLine(bucket, reqs[0]!.category, quantity, needs, this.labour, reqs));
     return null;
   }
 
   unmatched(bucket: string, category: Category, quantity: number, needs: string): void {
-    this.lines.push(unmatchedLine(bucket, category, quantity, needs, this.labour));
+    this.lines.push(unmatchedLine(bucket, category, quantity, needs, this.labour, null));
   }
 }
 
@@ -632,7 +655,7 @@ export function buildBom(input: BuildBomInput): BuildBomResult {
       const candidates = fuseClasses.map((fc) => ({ fc, fuse: b.find({ category: 'fuse', exactAmps: rating, fuseClass: fc, timeDelay, volts: v }) }));
       const chosen = candidates.find((c) => c.fuse !== null);
       if (!chosen) {
-        b.unmatched(tag, 'fuse', poles, fuseClasses.map((fc) => describeRequirement({ category: 'fuse', exactAmps: rating, fuseClass: fc, timeDelay, volts: v })).join(' — or — '));
+        b.addFirst(tag, fuseClasses.map((fc): Requirement => ({ category: 'fuse', exactAmps: rating, fuseClass: fc, timeDelay, volts: v })), poles);
       } else {
         b.add(tag, { category: 'fuse', exactAmps: rating, fuseClass: chosen.fc, timeDelay, volts: v }, poles);
         if (perBucketDisconnect) {
@@ -696,11 +719,15 @@ export function buildBom(input: BuildBomInput): BuildBomResult {
   const ocpdMax = input.panel.feeder.ocpdMaxAmps;
   let mainAmps = 0;
   if (input.selections.length > 0 && ocpdMax > 0) {
+    const minAmpacity = input.panel.feeder.minAmpacity;
+    const mainBounds = { maxAmps: ocpdMax, ...(minAmpacity > 0 && minAmpacity <= ocpdMax ? { minAmps: round2(minAmpacity) } : {}) };
     if ((opts.main ?? 'breaker') === 'breaker') {
-      const main = b.add(P, { category: 'main-breaker', maxAmps: ocpdMax, poles: panelPoles, volts: supplyVolts, prefer: 'largest' }, 1);
+      // the largest not above the 430.62(A) limit, and at least the feeder's minimum ampacity (NEC 430.24): a
+      // main below the panel's load would trip in service (common practice)
+      const main = b.add(P, { category: 'main-breaker', ...mainBounds, poles: panelPoles, volts: supplyVolts, prefer: 'largest' }, 1);
       mainAmps = main?.ratings.amps ?? ocpdMax;
     } else {
-      const fuse = b.add(P, { category: 'fuse', maxAmps: ocpdMax, fuseClass: 'J', timeDelay: true, volts: supplyVolts, prefer: 'largest' }, panelPoles);
+      const fuse = b.add(P, { category: 'fuse', ...mainBounds, fuseClass: 'J', timeDelay: true, volts: supplyVolts, prefer: 'largest' }, panelPoles);
       mainAmps = fuse?.ratings.amps ?? ocpdMax;
       b.add(P, { category: 'main-disconnect', minAmps: mainAmps, fuseClass: 'J', poles: panelPoles, volts: supplyVolts }, 1);
     }
@@ -744,7 +771,11 @@ export function buildBom(input: BuildBomInput): BuildBomResult {
     else {
       // a lineup of the largest section of the type that meets the depth
       const largest = b.find({ category: 'enclosure', nemaType: encType, minDepthMm: minDepth, prefer: 'largest' });
-      if (largest && usableAreaMm2(largest) > 0) b.lines.push(matchedLine(P, largest, Math.ceil(requiredArea / usableAreaMm2(largest)), labourMap));
+      if (largest && usableAreaMm2(largest) > 0) {
+        const sections = Math.ceil(requiredArea / usableAreaMm2(largest));
+        // a swap keeps the section count, so each section must hold its share of the area
+        b.lines.push(matchedLine(P, largest, sections, labourMap, [{ category: 'enclosure', nemaType: encType, minDepthMm: minDepth, minUsableAreaMm2: Math.ceil(requiredArea / sections) }]));
+      }
       else b.unmatched(P, 'enclosure', 1, describeRequirement(encReq));
     }
   }
@@ -811,7 +842,7 @@ export function selectCooling(input: CoolingInput): CoolingResult {
     const cfm = round2((3.16 * input.heatLossW) / (dT * 1.8));
     const req: Requirement = { category: 'cooling', kind: 'filter-fan', minCfm: cfm, nemaType: type };
     const fan = selectItem(index, req);
-    if (fan) return { ...base, method: 'filter-fan', requiredCfm: cfm, requiredCoolingW: null, line: matchedLine(bucket, fan, 1, labour) };
+    if (fan) return { ...base, method: 'filter-fan', requiredCfm: cfm, requiredCoolingW: null, line: matchedLine(bucket, fan, 1, labour, [req]) };
   }
   const need = round2(excess);
   const req: Requirement = { category: 'cooling', kind: 'air-conditioner', minCoolingW: need, nemaType: type };
@@ -821,7 +852,7 @@ export function selectCooling(input: CoolingInput): CoolingResult {
     method: 'air-conditioner',
     requiredCfm: null,
     requiredCoolingW: need,
-    line: ac ? matchedLine(bucket, ac, 1, labour) : unmatchedLine(bucket, 'cooling', 1, describeRequirement(req), labour),
+    line: ac ? matchedLine(bucket, ac, 1, labour, [req]) : unmatchedLine(bucket, 'cooling', 1, describeRequirement(req), labour, [req]),
   };
 }
 

@@ -2,7 +2,7 @@
 // lines, swaps with a reason, and the .xlsx/.csv downloads opened back with exceljs.
 import { beforeAll, describe, expect, it } from 'vitest';
 import ExcelJS from 'exceljs';
-import { send, signInAs, type Session } from '../setup/api';
+import { addSecondMake, send, signInAs, type Session } from '../setup/api';
 import { DEMO_MOTORS } from '../../server/db/seeders/demo-panels';
 
 interface Line {
@@ -127,8 +127,12 @@ describe('manual lines and swaps', () => {
     const b = (await send(estimator, 'post', `/api/panels/${panelId}/bom/rebuild`, {}).expect(200)).body as Bom;
     const line = b.lines.find((l) => l.bucket === 'C-201' && l.category === 'contactor' && l.status === 'matched')!;
     expect(line).toBeDefined();
+    // the demo catalogue has one size 1 contactor with a 120 V coil: a second make is what a swap may take
+    // (only parts that meet the line's requirement are offered; tests/api/bom-swaps.test.ts)
+    const second = await addSecondMake(estimator, line.code!);
     const alternatives = (await estimator.agent.get(`/api/panels/${panelId}/bom/lines/${line.id}/alternatives`).expect(200)).body as Array<{ code: string; unitCost: number }>;
     expect(alternatives.length).toBeGreaterThan(0);
+    expect(alternatives.map((a) => a.code)).toContain(second);
     expect(alternatives.map((a) => a.code)).not.toContain(line.code);
     const pick = alternatives.find((a) => a.unitCost !== line.unitCost) ?? alternatives[0]!;
 

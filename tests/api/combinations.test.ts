@@ -1,7 +1,7 @@
 // Tested combination ratings (UL 508A SB4): who may edit them, what is refused, and how they change a
 // panel's SCCR worksheet. Combination data here is invented, as in the demo catalogue.
 import { beforeAll, describe, expect, it } from 'vitest';
-import { send, signInAs, type Session } from '../setup/api';
+import { addSecondMake, send, signInAs, type Session } from '../setup/api';
 
 const uniq = () => `${Date.now().toString(36)}${Math.floor(Math.random() * 1e4)}`.toUpperCase();
 
@@ -79,8 +79,11 @@ describe('tested combination ratings', () => {
     expect((await bucketRows(other)).find((r) => r.code === overload.code)).toMatchObject({ source: 'combination' });
     const lines = (await estimator.agent.get(`/api/panels/${other}/bom`).expect(200)).body.lines as Array<{ id: number; bucket: string; category: string; code: string }>;
     const line = lines.find((l) => l.bucket === 'F-1' && l.category === 'contactor')!;
+    // a second make of the same contactor (the only kind of part a swap may take: one that meets the line's requirement)
+    const second = await addSecondMake(estimator, line.code);
     const alternatives = (await estimator.agent.get(`/api/panels/${other}/bom/lines/${line.id}/alternatives`).expect(200)).body as Array<{ code: string }>;
-    await send(estimator, 'patch', `/api/panels/${other}/bom/lines/${line.id}`, { swapCode: alternatives[0]!.code, swapReason: 'stock' }).expect(200);
+    expect(alternatives.map((a) => a.code)).toContain(second);
+    await send(estimator, 'patch', `/api/panels/${other}/bom/lines/${line.id}`, { swapCode: second, swapReason: 'stock' }).expect(200);
     expect((await bucketRows(other)).find((r) => r.code === overload.code)).toMatchObject({ source: 'assumed', ratingKa: 5 });
     expect((await bucketRows(panelId)).find((r) => r.code === overload.code)).toMatchObject({ source: 'combination' });
 

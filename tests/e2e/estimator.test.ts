@@ -68,6 +68,51 @@ describe('estimator in the browser', () => {
     expect((ws.getRow(6).getCell(8).value as { formula: string }).formula).toBe('ROUND(E6*G6,2)');
   });
 
+  it('offers only the parts that meet a line when swapping, and says why Swap waits when none does', async () => {
+    const page = await newPage(browser);
+    await signInThroughForm(page, 'estimator');
+    await page.waitForURL(/\/jobs$/);
+    await page.getByRole('table', { name: 'Jobs' }).getByRole('link', { name: 'J-2041' }).click();
+    await page.getByRole('link', { name: 'MCC-1 Pump hall' }).click();
+    await page.getByRole('navigation', { name: 'Panel sections' }).getByRole('link', { name: 'Bill of materials' }).click();
+    await page.waitForURL(/\/panels\/(\d+)\/bill-of-materials$/);
+    const panelId = Number(/\/panels\/(\d+)\//.exec(page.url())![1]);
+    const table = page.getByRole('table', { name: 'Bill of materials' });
+    await table.waitFor();
+
+    // the panel's enclosure: larger enclosures of its NEMA type fit, smaller ones and other types do not
+    const bom = (await (await page.request.get(`${baseUrl()}/api/panels/${panelId}/bom`)).json()) as { lines: Array<{ id: number; bucket: string; category: string; code: string | null; requirement: Array<{ nemaType: string; minUsableAreaMm2: number; minDepthMm: number }> }> };
+    const enc = bom.lines.find((l) => l.category === 'enclosure' && l.code)!;
+    const need = enc.requirement[0]!;
+    await table.getByRole('row').filter({ hasText: enc.code! }).getByRole('button', { name: 'Swap' }).click();
+    const form = page.getByRole('form', { name: 'Swap a part' });
+    await form.getByTestId('swap-needs').getByText(`NEMA Type ${need.nemaType}`).waitFor();
+    const select = form.getByLabel(/^Part \(\d+ that meets? it/);
+    await select.waitFor();
+    const offered = (await select.locator('option').allTextContents()).filter((t) => t !== 'Choose…').map((t) => t.split(' — ')[0]!);
+    expect(offered.length).toBeGreaterThan(0);
+    const all = (await (await page.request.get(`${baseUrl()}/api/catalogue/items?category=enclosure`)).json()) as Array<{ code: string; active: boolean; ratings: { nemaType: string; heightMm: number; widthMm: number; depthMm: number } }>;
+    // usable back panel (H − 150 mm) × (W − 100 mm), the matcher's rule (common practice, catalog/README.md)
+    const fits = (i: (typeof all)[number]) => i.active && i.ratings.nemaType === need.nemaType && i.ratings.depthMm >= need.minDepthMm && (i.ratings.heightMm - 150) * (i.ratings.widthMm - 100) >= need.minUsableAreaMm2;
+    expect(offered.sort()).toEqual(all.filter((i) => fits(i) && i.code !== enc.code).map((i) => i.code).sort());
+    // and the catalogue does hold enclosures that would not do (so the list is a choice, not the whole category)
+    expect(all.filter((i) => i.active && !fits(i)).length).toBeGreaterThan(0);
+    await screenshot(page, 'bom-swap-fitting');
+    await form.getByRole('button', { name: 'Cancel' }).click();
+
+    // C-201's size 1 contactor: the demo catalogue has no other size 1 with a 120 V coil, so nothing is offered
+    // (not the size 00 or the 24 V coil) and the Swap button says what it waits for
+    const contactor = bom.lines.find((l) => l.bucket === 'C-201' && l.category === 'contactor')!;
+    await table.getByRole('row').filter({ hasText: contactor.code! }).first().getByRole('button', { name: 'Swap' }).click();
+    await form.getByTestId('swap-none').waitFor();
+    const swap = form.getByRole('button', { name: 'Swap', exact: true });
+    expect(await swap.isDisabled()).toBe(true);
+    const described = await swap.getAttribute('aria-describedby');
+    expect(described).toBeTruthy();
+    expect(await page.locator(`[id="${described}"]`).textContent()).toContain('No part to swap to.');
+    await form.getByTestId('swap-needs').getByText('NEMA size 1').waitFor();
+  });
+
   it('shows the catalogue grouped by category and the labour units, read-only for an engineer', async () => {
     const page = await newPage(browser);
     await signInThroughForm(page, 'engineer');

@@ -6,16 +6,16 @@ import { BomLineRow } from '../../db/models/bom-line';
 import { Panel } from '../../db/models/panel';
 import type { Job } from '../../db/models/job';
 import type { CurrentUser } from '../../../shared/schemas/auth';
-import { BomLineSchema, PANEL_BUCKET, type BomLine, type BomTotals, type CatalogueItem } from '../../../shared/schemas/catalogue';
+import { BomLineSchema, PANEL_BUCKET, type BomLine, type BomTotals, type CatalogueItem, type Requirement } from '../../../shared/schemas/catalogue';
 import { NotFoundError, ValidationError, zodIssues } from '../../../shared/errors';
 import type { BomExportJob, BomExportPanel } from './export';
 import { getJob } from '../jobs/service';
 import type { LoadSelection, PanelRollup } from '../../../shared/schemas/selection';
-import { buildBom, computeTotals, swappedLine, unitLabourHours } from '../../../shared/calc/bom';
+import { buildBom, computeTotals, lineServes, lineShortfalls, swappedLine, unitLabourHours } from '../../../shared/calc/bom';
 import { recordActivity } from '../activity/service';
 import { catalogueFor, labourUnitsFor } from '../catalogue/repository';
 import { loadsOf } from '../panels/repository';
-import { loadView, requirePanel } from '../panels/service';
+import { loadView, openBomChange, requirePanel } from '../panels/service';
 
 /** Most protective enclosure type among the buckets (common practice: one enclosure serves the worst environment). */
 const STRINGENCY = ['1', '12', '3R', '4', '4X', '9', '7'];
@@ -47,6 +47,8 @@ export async function effectiveSelections(panelId: number, t?: Transaction): Pro
 export interface RegenerateOptions {
   /** take today's catalogue prices for every line (otherwise a line that stays keeps the unit cost it was priced at) */
   reprice?: boolean;
+  /** told of each swap a rebuild drops because its part no longer meets the line's requirement (or left the catalogue) */
+  onDroppedSwap?: (swap: BomLine, why: string) => void;
 }
 
 /** Key of a line for "the same line after a rebuild": bucket, category and its order among them. */
@@ -64,7 +66,8 @@ function ordinalKeys(lines: readonly BomLine[]): string[] {
  * The lines a rebuild would store, without writing: automatic lines from the selections, swaps re-applied
  * to the same line (bucket, category and order), manual lines kept; a line whose part stays keeps its frozen unit cost.
  */
-export async function planBom(organisationId: number, panel: Panel & { job: Job }, old: readonly BomLine[], t?: Transaction, opts: RegenerateOptions = {}): Promise<BomLine[]> {
+/** The automatic lines the matcher picks today, with the catalogue and labour units it used (nothing written). */
+async function buildLines(organisationId: number, panel: Panel & { job: Job }, t?: Transaction) {
   // one after the other: the three share the transaction's single connection
   const selections = await effectiveSelections(panel.id, t);
   const catalogue = await catalogueFor(organisationId, t);
@@ -79,6 +82,11 @@ export async function planBom(organisationId: number, panel: Panel & { job: Job 
     catalogue,
     labourUnits,
   });
+  return { built, catalogue, labourUnits };
+}
+
+export async function planBom(organisationId: number, panel: Panel & { job: Job }, old: readonly BomLine[], t?: Transaction, opts: RegenerateOptions = {}): Promise<BomLine[]> {
+  const { built, catalogue, labourUnits } = await buildLines(organisationId, panel, t);
   const byCode = new Map(catalogue.map((c) => [c.code, c]));
   const labour = new Map(labourUnits.map((u) => [u.key, u]));
   const autoOld = old.filter((l) => l.source !== 'manual');
@@ -94,8 +102,11 @@ export async function planBom(organisationId: number, panel: Panel & { job: Job 
     const swap = swaps.get(builtKeys[i]!);
     const item = swap?.code ? byCode.get(swap.code) : undefined;
     let line: BomLine = l;
-    if (swap && item && item.category === l.category) {
-      line = swappedLine(l, item, labour, swap.swapReason);
+    if (swap) {
+      // a swap stays only while its part is active and still meets what the line needs now
+      const why = !item ? `${swap.code} is no longer in the catalogue` : !item.active ? `${item.code} is deactivated` : l.requirement ? lineShortfalls(item, l.requirement, lineServes(l.bucket)).join('; ') : `the line now needs ${l.requiredRatings ?? 'a part the catalogue cannot be searched for'}`;
+      if (item && item.active && l.requirement && !why) line = swappedLine(l, item, labour, swap.swapReason);
+      else opts.onDroppedSwap?.(swap, why);
     }
     const kept = !opts.reprice && line.code ? frozen.get(`${line.bucket}\u0000${line.category}\u0000${line.code}`) : undefined;
     return kept !== undefined ? { ...line, unitCost: kept } : line;
@@ -136,12 +147,34 @@ export async function storedBom(actor: CurrentUser, panel: Panel & { job: Job })
   };
 }
 
-export async function rebuild(actor: CurrentUser, panel: Panel & { job: Job }, opts: RegenerateOptions = {}) {
+/** Whether the stored lines differ from what a rebuild would store now (motors, overrides or the catalogue changed). */
+export async function bomOutOfDate(organisationId: number, panel: Panel & { job: Job }, lines: readonly BomLine[]): Promise<boolean> {
+  if (!panel.bomGeneratedAt) return true;
+  return designSignature(await planBom(organisationId, panel, lines)) !== designSignature(lines);
+}
+
+/**
+ * Rebuilds the automatic lines. One that changes parts or quantities is a change to the design: refused
+ * while the panel is in review, and on a signed-off panel it opens a new draft. A re-price alone changes
+ * neither (prices are the estimator's, not the sign-off's).
+ */
+export async function rebuild(actor: CurrentUser, panelRef: Panel & { job: Job }, opts: RegenerateOptions = {}) {
   await db().transaction(async (t) => {
-    await regenerateBom(actor.organisationId, panel, t, opts);
+    const panel = await lockedPanel(actor, panelRef.id, t);
+    const before = (await BomLineRow.findAll({ where: { panelId: panel.id }, order: [['position', 'ASC'], ['id', 'ASC']], transaction: t })).map((r) => r.line as unknown as BomLine);
+    const dropped: string[] = [];
+    const lines = await regenerateBom(actor.organisationId, panel, t, { ...opts, onDroppedSwap: (s, why) => dropped.push(`${s.code ?? 'a part'} on ${s.bucket} (${why})`) });
+    if (designSignature(before) !== designSignature(lines)) await openBomChange(actor, panel, t, 'the bill of materials was rebuilt with other parts');
     await recordActivity(
       actor,
-      { entity: 'bom', entityId: panel.id, jobId: panel.jobId, panelId: panel.id, action: 'rebuilt', summary: `Rebuilt the bill of materials of ${panel.name}${opts.reprice ? " at today's catalogue prices" : ''}` },
+      {
+        entity: 'bom',
+        entityId: panel.id,
+        jobId: panel.jobId,
+        panelId: panel.id,
+        action: 'rebuilt',
+        summary: `Rebuilt the bill of materials of ${panel.name}${opts.reprice ? " at today's catalogue prices" : ''}${dropped.length ? `; dropped the swap${dropped.length === 1 ? '' : 's'} that no longer fit: ${dropped.join('; ')}` : ''}`,
+      },
       t,
     );
   });
@@ -184,6 +217,7 @@ function checkLine(line: BomLine): BomLine {
 export async function addManualLine(actor: CurrentUser, panelId: number, input: ManualLineInput) {
   return db().transaction(async (t) => {
     const panel = await lockedPanel(actor, panelId, t);
+    await openBomChange(actor, panel, t, 'a manual line was added to the bill of materials');
     let item: CatalogueItem | undefined;
     if (input.code) {
       item = (await catalogueFor(actor.organisationId, t)).find((c) => c.code === input.code);
@@ -207,6 +241,7 @@ export async function addManualLine(actor: CurrentUser, panelId: number, input: 
       requiredRatings: null,
       source: 'manual',
       swapReason: null,
+      requirement: null,
     });
     const last = (await BomLineRow.max('position', { where: { panelId: panel.id }, transaction: t })) as number | null;
     const row = await BomLineRow.create({ organisationId: actor.organisationId, panelId: panel.id, position: (last ?? -1) + 1, line: line as unknown as Record<string, unknown> }, { transaction: t });
@@ -224,21 +259,38 @@ export interface LineChanges {
   description?: string;
   unitCost?: number;
   unitLabourHours?: number;
-  /** swap for this catalogue item (same category), with a reason */
+  /** swap for this catalogue item (one meeting the line's requirement), with a reason */
   swapCode?: string;
   swapReason?: string;
 }
 
 /**
+ * What a line's part must meet: the requirement the matcher kept on the line; for a line stored before
+ * lines kept it, the one today's build gives the same line (bucket, category and order). Null when the
+ * line's need is not one the catalogue can be searched for.
+ */
+async function requirementOf(organisationId: number, panel: Panel & { job: Job }, lineId: number, line: BomLine, t?: Transaction): Promise<Requirement[] | null> {
+  if (line.requirement !== undefined) return line.requirement;
+  const rows = await BomLineRow.findAll({ where: { panelId: panel.id }, order: [['position', 'ASC'], ['id', 'ASC']], transaction: t });
+  const auto = rows.filter((r) => (r.line as unknown as BomLine).source !== 'manual');
+  const key = ordinalKeys(auto.map((r) => r.line as unknown as BomLine))[auto.findIndex((r) => r.id === lineId)];
+  const { built } = await buildLines(organisationId, panel, t);
+  const builtKeys = ordinalKeys(built.lines);
+  return built.lines[builtKeys.indexOf(key ?? '')]?.requirement ?? null;
+}
+
+/**
  * Change one line. A manual line takes any change. An automatic line's quantity follows the design,
- * so it may only be swapped for an equivalent item (same category, active) with a reason; the swapped
- * line takes the new item's price, every other line keeps its frozen unit cost.
+ * so it may only be swapped, with a reason, for an active item that meets the line's requirement (the
+ * one the matcher used); the swapped line takes the new item's price, every other line keeps its frozen
+ * unit cost. On a signed-off panel the change opens a new draft; in review it is refused.
  */
 export async function updateLine(actor: CurrentUser, panelId: number, lineId: number, changes: LineChanges) {
   return db().transaction(async (t) => {
     const panel = await lockedPanel(actor, panelId, t);
     const row = await requireLine(panel.id, lineId, t);
     const before = row.line as unknown as BomLine;
+    await openBomChange(actor, panel, t, changes.swapCode !== undefined ? `${before.code ?? 'a line'} on ${before.bucket} was swapped in the bill of materials` : 'a line of the bill of materials was changed');
     let after: BomLine = { ...before };
     if (changes.swapCode !== undefined) {
       const reason = changes.swapReason?.trim();
@@ -249,6 +301,19 @@ export async function updateLine(actor: CurrentUser, panelId: number, lineId: nu
       if (!item.active) throw new ValidationError(`${item.code} is deactivated`, [{ path: 'body.swapCode', message: 'deactivated item' }]);
       if (item.category !== before.category) {
         throw new ValidationError(`${item.code} is not an equivalent: it is not in the line's category`, [{ path: 'body.swapCode', message: `must be a ${before.category}` }]);
+      }
+      const requirement = await requirementOf(actor.organisationId, panel, row.id, before, t);
+      const who = lineServes(before.bucket);
+      if (!requirement) {
+        throw new ValidationError(`What ${who} needs here (${before.requiredRatings ?? before.description}) cannot be checked against the catalogue: add a manual line for the part instead`, [
+          { path: 'body.swapCode', message: 'no requirement to check a part against' },
+        ]);
+      }
+      const lacks = lineShortfalls(item, requirement, who);
+      if (lacks.length > 0) {
+        throw new ValidationError(`${item.code} does not meet what ${who} needs: ${lacks.join('; ')}`, [
+          { path: 'body.swapCode', message: lacks.join('; ') },
+        ]);
       }
       const labour = new Map((await labourUnitsFor(actor.organisationId, t)).map((u) => [u.key, u]));
       after = swappedLine(after, item, labour, reason);
@@ -280,19 +345,27 @@ export async function deleteLine(actor: CurrentUser, panelId: number, lineId: nu
     const row = await requireLine(panel.id, lineId, t);
     const line = row.line as unknown as BomLine;
     if (line.source !== 'manual') throw new ValidationError('Only manual lines are removed; the rebuild decides the automatic ones', [{ path: 'lineId', message: 'not a manual line' }]);
+    await openBomChange(actor, panel, t, 'a manual line was removed from the bill of materials');
     await row.destroy({ transaction: t });
     await recordActivity(actor, { entity: 'bom', entityId: panel.id, jobId: panel.jobId, panelId: panel.id, action: 'line-removed', summary: `Removed "${line.description}" from ${panel.name}`, diff: { line } }, t);
   });
 }
 
-/** Active catalogue items a line may be swapped for: the same category, cheapest first. */
+/**
+ * Active catalogue items a line may be swapped for: those that meet the line's requirement (the one the
+ * matcher used), cheapest first. None for a manual line, or a line whose need the catalogue cannot be searched for.
+ */
 export async function swapCandidates(actor: CurrentUser, panelId: number, lineId: number) {
   const panel = await requirePanel(actor, panelId);
   const row = await db().transaction((t) => requireLine(panel.id, lineId, t));
   const line = row.line as unknown as BomLine;
+  if (line.source === 'manual') return [];
+  const requirement = await requirementOf(actor.organisationId, panel, row.id, line);
+  if (!requirement) return [];
+  const who = lineServes(line.bucket);
   const items = await catalogueFor(actor.organisationId);
   return items
-    .filter((i) => i.active && i.category === line.category && i.code !== line.code)
+    .filter((i) => i.active && i.code !== line.code && lineShortfalls(i, requirement, who).length === 0)
     .sort((a, b) => a.unitCost - b.unitCost || a.code.localeCompare(b.code))
     .map((i) => ({ code: i.code, description: i.description, unitCost: i.unitCost, leadTimeDays: i.leadTimeDays, ratings: i.ratings }));
 }

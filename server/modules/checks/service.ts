@@ -25,7 +25,7 @@ import { catalogueFor, labourUnitsFor } from '../catalogue/repository';
 import { activeCombinations } from '../catalogue/combinations';
 import { loadsOf } from '../panels/repository';
 import { loadView, requirePanel } from '../panels/service';
-import { panelEnclosureType } from '../bom/service';
+import { bomOutOfDate, panelEnclosureType } from '../bom/service';
 import { storedBomLines } from './repository';
 import { motorConnectionCard } from './connection';
 import type { Panel } from '../../db/models/panel';
@@ -446,7 +446,8 @@ export async function computeChecks(actor: CurrentUser, panelId: number): Promis
     excluded: parts.excluded,
   };
 
-  const stale = source === 'stored' && (!panel.bomGeneratedAt || panel.bomGeneratedAt < panel.updatedAt);
+  // stale when a rebuild now would give other parts or quantities (as the Bill of materials section says)
+  const stale = source === 'stored' && (await bomOutOfDate(actor.organisationId, panel, lines));
   const checks: PanelChecks = {
     panel: { id: panel.id, name: panel.name, mounting: panel.mounting, enclosureType, revision: revisionText(panel) },
     job: {
@@ -470,7 +471,7 @@ export async function computeChecks(actor: CurrentUser, panelId: number): Promis
         source === 'in-memory'
           ? 'No bill of materials is stored yet: the checks use one built from the catalogue for this view (not saved).'
           : stale
-            ? 'The stored bill of materials is older than the last change to the panel: regenerate it for current checks.'
+            ? 'The motors, their overrides or the catalogue changed since the stored bill of materials was built: rebuild it for current checks.'
             : null,
     },
     motorsWithErrors,

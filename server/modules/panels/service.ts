@@ -162,6 +162,23 @@ async function changePanel<T>(
   });
 }
 
+/**
+ * Opens a change to a panel's bill of materials inside the caller's transaction (the panel row locked):
+ * refuses while the panel is in review, as a motor edit does, and turns a signed-off panel into a new
+ * draft, so the changed parts need a new sign-off.
+ */
+export async function openBomChange(actor: CurrentUser, p: Panel & { job: Job }, t: Transaction, what: string) {
+  if (!EDITABLE.includes(p.status as PanelState)) {
+    throw new ConflictError(`Panel ${p.name} is in review: the engineer must return it before its bill of materials can change`);
+  }
+  if (p.status !== 'signed_off') return;
+  await recordActivity(actor, { entity: 'panel', entityId: p.id, jobId: p.jobId, panelId: p.id, action: 'reopened', summary: `Opened a new draft after R${p.revisionNumber} (${what})` }, t);
+  const count = await repo.bumpPanel(actor.organisationId, p.id, p.version, { status: 'draft' }, t);
+  if (count === 0) throw new ConflictError(`Someone else changed panel ${p.name}: reload and try again`);
+  p.status = 'draft';
+  p.version += 1;
+}
+
 /** Recomputes the panel roll-up from the motors' stored selections (the rules do not run again). */
 async function refreshRollup(p: Panel & { job: Job }, t: Transaction) {
   const loads = (await repo.loadsOf(p.id, t)).filter((l) => l.selection);

@@ -1,6 +1,6 @@
 import { useMemo, useState } from 'react';
-import { useQuery } from '@tanstack/react-query';
-import { useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { useQuery, useQueryClient } from '@tanstack/react-query';
+import { useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { queryClient } from '../../../lib/query-client';
 import { hasRole, sessionQueries } from '../../../features/auth/api/session';
 import { panelQueries, useUpdatePanel } from '../../../features/panels/api/panels';
@@ -33,20 +33,28 @@ export function Component() {
   const [adding, setAdding] = useState(false);
   const [swapping, setSwapping] = useState<StoredLine | null>(null);
   const [groupBy, setGroupBy] = useState<'bucket' | 'category'>('bucket');
+  // ?line=<bucket>|<code>: the line another section points at (the part that limits the SCCR …)
+  const [search] = useSearchParams();
+  const highlight = search.get('line');
+  const qc = useQueryClient();
+  // a change to a signed-off panel's bill of materials opens a new draft: the panel's state moves too
+  const panelMoved = () => qc.invalidateQueries({ queryKey: panelQueries.detail(panelId).queryKey });
   const canRebuild = hasRole(me, 'admin', 'estimator', 'designer');
+  const inReview = panel?.status === 'in_review';
   const canPrice = hasRole(me, 'admin', 'estimator');
+  const canEdit = canPrice && !inReview;
   const actions = useMemo<LineActions>(
     () =>
-      canPrice
+      canEdit
         ? {
             onSwap: (l) => setSwapping(l),
             onRemove: (l) => {
-              if (confirm(`Remove "${l.description}"?`)) deleteLine.mutate(l.id);
+              if (confirm(`Remove "${l.description}"?`)) deleteLine.mutate(l.id, { onSuccess: panelMoved });
             },
-            onQuantity: (l, quantity) => updateLine.mutate({ lineId: l.id, quantity }),
+            onQuantity: (l, quantity) => updateLine.mutate({ lineId: l.id, quantity }, { onSuccess: panelMoved }),
           }
         : {},
-    [canPrice], // eslint-disable-line react-hooks/exhaustive-deps
+    [canEdit], // eslint-disable-line react-hooks/exhaustive-deps
   );
   if (bom.isPending || !panel) return <Loading what="Loading the bill of materials" />;
   if (bom.isError) return <ErrorNote error={bom.error} />;
@@ -65,7 +73,7 @@ export function Component() {
             key={`${panel.markupPercent}-${panel.labourRate}`}
             markupPercent={panel.markupPercent}
             labourRate={panel.labourRate}
-            disabled={!canPrice || panel.status === 'in_review'}
+            lockedBecause={!canPrice ? 'An estimator or an administrator sets the pricing.' : panel.status === 'in_review' ? 'Pricing waits while the engineer reviews the panel.' : null}
             pending={updatePanel.isPending}
             onSave={(v) => updatePanel.mutate({ ...v, version: panel.version })}
           />
@@ -74,17 +82,32 @@ export function Component() {
         </div>
       </div>
       {updatePanel.error ? <ErrorNote error={updatePanel.error} /> : null}
+      {inReview ? (
+        <p role="status" className="rounded border border-state-review/50 bg-warn-bg px-3 py-2 text-sm">
+          <span className="font-semibold text-state-review">◔ In review.</span> Swaps, manual lines and rebuilds with other parts wait until the engineer signs the panel off or returns it.
+        </p>
+      ) : panel.status === 'signed_off' && canRebuild ? (
+        <p role="status" className="rounded border border-line bg-surface px-3 py-2 text-sm">
+          ✔ Signed off as R{panel.revisionNumber}. A swap, a manual line or a rebuild with other parts opens a new draft, which needs a new sign-off.
+        </p>
+      ) : null}
 
       {b.stale ? (
         <div role="status" className="flex flex-wrap items-center gap-3 rounded border border-state-review/50 bg-warn-bg px-3 py-2 text-sm">
           <span className="font-semibold text-state-review">◔ Out of date.</span>
           {b.generatedAt ? 'The motors, their overrides or the catalogue changed since this bill of materials was built.' : 'This panel has no bill of materials yet.'}
-          {canRebuild ? <Button disabled={rebuild.isPending} onClick={() => rebuild.mutate({})}>{rebuild.isPending ? 'Rebuilding…' : 'Rebuild'}</Button> : <span>An estimator or designer can rebuild it.</span>}
+          {canRebuild ? (
+            <Button disabled={rebuild.isPending || inReview} waitsFor={inReview ? 'A rebuild with other parts waits for the engineer to finish the review.' : null} onClick={() => rebuild.mutate({}, { onSuccess: panelMoved })}>
+              {rebuild.isPending ? 'Rebuilding…' : 'Rebuild'}
+            </Button>
+          ) : (
+            <span>An estimator or designer can rebuild it.</span>
+          )}
         </div>
       ) : (
         <div className="flex flex-wrap items-center gap-2 text-sm">
           <span className="text-state-signed">✔ Up to date with the motors and the catalogue.</span>
-          {canRebuild ? <Button variant="secondary" disabled={rebuild.isPending} onClick={() => rebuild.mutate({})}>{rebuild.isPending ? 'Rebuilding…' : 'Rebuild'}</Button> : null}
+          {canRebuild ? <Button variant="secondary" disabled={rebuild.isPending} onClick={() => rebuild.mutate({}, { onSuccess: panelMoved })}>{rebuild.isPending ? 'Rebuilding…' : 'Rebuild'}</Button> : null}
           {canPrice ? (
             <Button variant="ghost" disabled={rebuild.isPending} title="Rebuild and take today's catalogue prices for every line" onClick={() => { if (confirm("Re-price every line at today's catalogue prices?")) rebuild.mutate({ reprice: true }); }}>
               Re-price at today's catalogue
@@ -108,13 +131,17 @@ export function Component() {
             </button>
           ))}
         </div>
-        {canPrice && !adding ? <Button variant="secondary" onClick={() => setAdding(true)}>+ Manual line</Button> : null}
+        {canPrice && !adding ? (
+          <Button variant="secondary" disabled={inReview} waitsFor="Manual lines wait for the engineer to finish the review." onClick={() => setAdding(true)}>
+            + Manual line
+          </Button>
+        ) : null}
         <span className="ml-auto text-sm">
           Material <strong>${money(b.totals.materialCost)}</strong> · Labour <strong>{money(b.totals.labourHours)} h</strong> · Sell <strong>${money(b.totals.sell)}</strong>
         </span>
       </div>
       {adding ? (
-        <ManualLineForm buckets={buckets} pending={addLine.isPending} error={addLine.error} onCancel={() => setAdding(false)} onSubmit={(v) => addLine.mutate(v, { onSuccess: () => setAdding(false) })} />
+        <ManualLineForm buckets={buckets} pending={addLine.isPending} error={addLine.error} onCancel={() => setAdding(false)} onSubmit={(v) => addLine.mutate(v, { onSuccess: () => { setAdding(false); void panelMoved(); } })} />
       ) : null}
       {swapping ? (
         <SwapForm
@@ -124,7 +151,7 @@ export function Component() {
           pending={updateLine.isPending}
           error={updateLine.error}
           onCancel={() => setSwapping(null)}
-          onSubmit={(v) => updateLine.mutate({ lineId: swapping.id, ...v }, { onSuccess: () => setSwapping(null) })}
+          onSubmit={(v) => updateLine.mutate({ lineId: swapping.id, ...v }, { onSuccess: () => { setSwapping(null); void panelMoved(); } })}
         />
       ) : null}
       {!swapping && updateLine.error ? <ErrorNote error={updateLine.error} /> : null}
@@ -133,7 +160,7 @@ export function Component() {
       {b.lines.length === 0 ? (
         <Empty title="No lines yet">{canRebuild ? 'Rebuild to pick catalogue items for every motor and for the panel.' : 'An estimator or designer builds it from the motors.'}</Empty>
       ) : (
-        <BomTable lines={b.lines} totals={b.totals} actions={actions} groupBy={groupBy} />
+        <BomTable lines={b.lines} totals={b.totals} actions={actions} groupBy={groupBy} highlight={highlight} />
       )}
       <Caution compact />
     </div>

@@ -53,7 +53,7 @@ export function Component() {
         {errors > 0 ? <span className="rounded bg-bad-bg px-2 py-0.5 text-xs font-semibold text-state-returned">✖ {errors} motor{errors > 1 ? 's' : ''} need fixing</span> : null}
         {hasRole(me, 'designer', 'admin') ? (
           <span className="ml-auto flex gap-2">
-            <Button variant="secondary" disabled={duplicate.isPending} onClick={() => duplicate.mutate()}>
+            <Button variant="secondary" disabled={duplicate.isPending} waitsFor="Duplicating…" onClick={() => duplicate.mutate()}>
               Duplicate panel
             </Button>
             <Button variant="ghost" onClick={() => archive.mutate({ archived: !p.archivedAt, version: p.version })}>

@@ -57,7 +57,11 @@ export function Component() {
             if (f) preview.mutate(f);
           }}
         />
-        <Button disabled={!file || !preview.data?.ok || commit.isPending} onClick={() => file && commit.mutate(file)}>
+        <Button
+          disabled={!file || !preview.data?.ok || commit.isPending}
+          waitsFor={!file ? 'Choose a motor list (.xlsx or .csv) first.' : preview.isPending ? 'Checking the rows…' : commit.isPending ? null : !preview.data?.ok ? 'Fix the rows with problems in the file first: nothing is imported until every row is good.' : null}
+          onClick={() => file && commit.mutate(file)}
+        >
           {commit.isPending ? 'Importing…' : `Import ${rows.length || ''} motors`}
         </Button>
       </div>

@@ -70,7 +70,7 @@ export function Component() {
                 ? ['inverse-time-breaker', 'instantaneous-trip-breaker', 'dual-element-fuse', 'non-time-delay-fuse'].map((k) => <option key={k} value={k}>{scpdLabel(k)}</option>)
                 : [<option key="t" value="true">Yes</option>, <option key="f" value="false">No</option>]}
           </select>
-          <Button onClick={applyBulk} disabled={bulk.isPending}>Apply</Button>
+          <Button onClick={applyBulk} disabled={bulk.isPending} waitsFor="Applying…">Apply</Button>
           <Button variant="ghost" onClick={() => setSelected([])}>Clear</Button>
         </div>
       ) : null}

@@ -77,7 +77,7 @@ export function Component() {
                 }}
               >
                 <input aria-label={`Comment on ${l.tag}`} className={inputClass} placeholder={`Comment on ${l.tag}`} value={drafts[l.id] ?? ''} onChange={(e) => setDrafts((d) => ({ ...d, [l.id]: e.target.value }))} />
-                <Button type="submit" variant="secondary" disabled={comment.isPending}>Comment</Button>
+                <Button type="submit" variant="secondary" disabled={comment.isPending} waitsFor="Saving…">Comment</Button>
               </form>
             </div>
           </article>

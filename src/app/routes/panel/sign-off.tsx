@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { useQuery } from '@tanstack/react-query';
-import { useParams } from 'react-router-dom';
+import { Link, useParams } from 'react-router-dom';
 import { panelQueries, usePanelAction } from '../../../features/panels/api/panels';
 import { hasRole, sessionQueries } from '../../../features/auth/api/session';
 import { SignOffState } from '../../../components/ui/status';
@@ -10,6 +10,49 @@ import { inputClass } from '../../../components/ui/field';
 import { ApiError } from '../../../lib/api-client';
 import { checkQueries } from '../../../features/checks/api/checks';
 import { DecisionDifferences } from '../../../features/panels/components/decision-differences';
+import { bomQueries } from '../../../features/bom/api/bom';
+import { lineKey } from '../../../features/bom/components/bom-table';
+import { bucketLabel, categoryLabel } from '../../../features/bom/components/format';
+import { OVERRIDE_FIELDS } from '../../../../shared/schemas/override';
+import { PANEL_BUCKET } from '../../../../shared/schemas/catalogue';
+import type { SccrRow } from '../../../../shared/calc/sccr';
+
+/** The shortest reason an engineer gives when signing off below the available fault current (the server holds the same). */
+const MIN_REASON = 15;
+
+/** Where a line of the bill of materials is, for a link from this section. */
+const lineLink = (bucket: string, code: string | null) => `../bill-of-materials?line=${encodeURIComponent(lineKey(bucket, code))}`;
+
+/** The parts that set the panel's SCCR (weakest link, UL 508A SB4), each linked to its line in the bill of materials. */
+function LimitingParts({ rows }: { rows: SccrRow[] }) {
+  if (rows.length === 0) return null;
+  const seen = new Set<string>();
+  const unique = rows.filter((r) => {
+    const k = `${r.location}|${r.code}`;
+    if (seen.has(k)) return false;
+    seen.add(k);
+    return true;
+  });
+  const shown = unique.slice(0, 4);
+  return (
+    <p className="text-sm" data-testid="sign-off-sccr-limiting">
+      Limited by{' '}
+      {shown.map((r, i) => {
+        const bucket = r.location === 'feeder' ? PANEL_BUCKET : r.location;
+        return (
+          <span key={`${r.location}|${r.code}`}>
+            {i > 0 ? (i === shown.length - 1 && unique.length === shown.length ? ' and ' : ', ') : null}
+            <Link relative="path" to={lineLink(bucket, r.code.startsWith('(') ? null : r.code)} className="font-semibold text-copper-700 underline">
+              {r.code}
+            </Link>{' '}
+            ({r.location === 'feeder' ? 'feeder' : r.location}, {r.ratingKa ?? '—'} kA)
+          </span>
+        );
+      })}
+      {unique.length > shown.length ? ` and ${unique.length - shown.length} more at the same rating` : ''}.
+    </p>
+  );
+}
 
 const money = (n: number) => n.toLocaleString(undefined, { style: 'currency', currency: 'USD' });
 
@@ -74,6 +117,7 @@ export function Component() {
   const [acknowledged, setAcknowledged] = useState(false);
   const reviewing = p?.status === 'in_review' && hasRole(me, 'engineer');
   const checks = useQuery({ ...checkQueries.panel(panelId), enabled: reviewing });
+  const bom = useQuery({ ...bomQueries.panel(panelId), enabled: reviewing });
   const revs = p?.revisions ?? [];
   const [from, setFrom] = useState<number | null>(null);
   const [to, setTo] = useState<number | null>(null);
@@ -91,8 +135,19 @@ export function Component() {
   // the checks' verdict, or the server's own (it works the rating out from the rebuilt bill of materials)
   const serverAsks = act.error instanceof ApiError && act.error.fieldIssues.some((i) => i.path === 'body.acknowledgeSccr');
   const needsAck = canReview && (sccrShort || serverAsks);
-  const reasonShort = comment.trim().length < 15;
-  const overrides = p.loads.reduce((n, l) => n + l.overrides.length, 0);
+  const reasonShort = comment.trim().length < MIN_REASON;
+  const overrideList = p.loads.flatMap((l) => l.overrides.map((o) => ({ tag: l.tag, ...o })));
+  const overrides = overrideList.length;
+  const swaps = (bom.data?.lines ?? []).filter((l) => l.source === 'swapped');
+  const manual = (bom.data?.lines ?? []).filter((l) => l.source === 'manual');
+  // what the sign button waits for, in words (the button says it beside itself)
+  const signWaitsFor = act.isPending
+    ? 'Signing off…'
+    : needsAck && !acknowledged
+      ? 'Tick the acknowledgement of the short-circuit rating first.'
+      : needsAck && reasonShort
+        ? `Write why in the comment: ${comment.trim().length} of at least ${MIN_REASON} characters.`
+        : null;
   const assumed = p.loads.reduce((n, l) => n + (l.selection?.assumed.length ?? 0), 0);
   const a = from ?? (revs.length > 1 ? revs[revs.length - 2].number : null);
   const b = to ?? (revs.length > 1 ? revs[revs.length - 1].number : null);
@@ -114,7 +169,8 @@ export function Component() {
                       ? `Panel SCCR ${sccr.panelSccrKa} kA; the job gives no available fault current to compare (NEC 409.22).`
                       : `Panel SCCR ${sccr.panelSccrKa} kA ${sccrShort ? 'is below' : 'covers'} the ${sccr.availableFaultKa} kA available at the site (NEC 409.22).`}
                 </p>
-              ) : checks.isPending ? (
+              ) : null}
+              {sccr ? <LimitingParts rows={sccr.limiting} /> : checks.isPending ? (
                 <p className="text-ink-soft">Checking the short-circuit rating…</p>
               ) : null}
               {checks.data?.heat.result ? (
@@ -130,14 +186,45 @@ export function Component() {
                 <p className="text-state-review">◔ The control transformer in the bill of materials is smaller than the {checks.data.controlPower.result?.sizeVa} VA needed.</p>
               ) : null}
               <p className="text-ink-soft">
-                {overrides} override{overrides === 1 ? '' : 's'} and {assumed} assumed input{assumed === 1 ? '' : 's'} to review on the Protection section.
+                {overrides} override{overrides === 1 ? '' : 's'}, {swaps.length} swapped part{swaps.length === 1 ? '' : 's'} and {assumed} assumed input{assumed === 1 ? '' : 's'} to review
+                {checks.data?.bom.stale ? ' (the bill of materials is out of date: the sign-off rebuilds it, keeping the swaps that still fit)' : ''}.
               </p>
+              <div className="mt-1 grid gap-3 md:grid-cols-2">
+                <div aria-label="Overrides" role="group">
+                  <p className="text-xs font-semibold uppercase text-ink-soft">Overrides</p>
+                  {overrideList.length === 0 ? <p className="text-ink-soft">None: every decision is the engine's.</p> : (
+                    <ul className="space-y-1">
+                      {overrideList.map((o) => (
+                        <li key={`${o.tag}-${o.field}`}>
+                          <strong>{o.tag}</strong> · {OVERRIDE_FIELDS[o.field]}: {String(o.was ?? '—')} → <strong>{String(o.value)}</strong>
+                          <span className="block text-xs text-ink-soft">“{o.justification}” ({o.by}){o.warnings.length ? <span className="text-state-review"> ◔ {o.warnings.join('; ')}</span> : null}</span>
+                        </li>
+                      ))}
+                    </ul>
+                  )}
+                </div>
+                <div aria-label="Swapped parts" role="group">
+                  <p className="text-xs font-semibold uppercase text-ink-soft">Swapped parts</p>
+                  {bom.isPending ? <p className="text-ink-soft">Reading the bill of materials…</p> : swaps.length === 0 ? <p className="text-ink-soft">None: every part is the one the catalogue match picked.</p> : (
+                    <ul className="space-y-1">
+                      {swaps.map((l) => (
+                        <li key={l.id}>
+                          <strong>{bucketLabel(l.bucket)}</strong> · {categoryLabel(l.category)}: {l.swappedFrom ?? '—'} →{' '}
+                          <Link relative="path" to={lineLink(l.bucket, l.code)} className="font-semibold text-copper-700 underline">{l.code}</Link>
+                          <span className="block text-xs text-ink-soft">“{l.swapReason}” — meets the line's requirement (checked when it was swapped and at every rebuild)</span>
+                        </li>
+                      ))}
+                    </ul>
+                  )}
+                  {manual.length ? <p className="mt-1 text-xs text-ink-soft">{manual.length} manual line{manual.length === 1 ? '' : 's'} (freight, engineering, spares …) added by the estimator.</p> : null}
+                </div>
+              </div>
               {needsAck ? (
                 <label className="mt-1 flex items-start gap-2">
                   <input type="checkbox" className="mt-1" checked={acknowledged} onChange={(e) => setAcknowledged(e.target.checked)} />
                   <span>
                     I sign off with this rating and give the reason in the comment (a current-limiting feeder with the maker's let-through data, a corrected fault study …).
-                    {acknowledged && reasonShort ? <span className="block text-xs text-state-returned">Write the reason: at least 15 characters.</span> : null}
+                    {acknowledged && reasonShort ? <span className="block text-xs text-state-returned">Write the reason: at least {MIN_REASON} characters.</span> : null}
                   </span>
                 </label>
               ) : null}
@@ -147,11 +234,13 @@ export function Component() {
             <textarea aria-label="Sign-off comment" className={`${inputClass} mt-2`} rows={3} placeholder={canReview ? 'What must change (required to return)' : 'Note (optional)'} value={comment} onChange={(e) => setComment(e.target.value)} />
           ) : null}
           <div className="mt-2 flex flex-wrap gap-2">
-            {canSubmit ? <Button onClick={() => run('submit')} disabled={act.isPending}>Submit for sign-off</Button> : null}
+            {canSubmit ? <Button onClick={() => run('submit')} disabled={act.isPending} waitsFor="Submitting…">Submit for sign-off</Button> : null}
             {canReview ? (
               <>
-                <Button onClick={() => run('approve')} disabled={act.isPending || (needsAck && (!acknowledged || reasonShort))}>✔ Sign off as R{p.revisionNumber === null ? 0 : p.revisionNumber + 1}</Button>
-                <Button variant="danger" onClick={() => run('return')} disabled={act.isPending || !comment.trim()}>↩ Return to designer</Button>
+                <Button onClick={() => run('approve')} disabled={signWaitsFor !== null} waitsFor={signWaitsFor}>✔ Sign off as R{p.revisionNumber === null ? 0 : p.revisionNumber + 1}</Button>
+                <Button variant="danger" onClick={() => run('return')} disabled={act.isPending || !comment.trim()} waitsFor={act.isPending ? 'Saving…' : 'Say in the comment what must change to return it.'}>
+                  ↩ Return to designer
+                </Button>
               </>
             ) : null}
             {p.status === 'in_review' && !isEngineer ? <p className="text-sm text-state-review">◔ Waiting for an engineer.</p> : null}

@@ -1,4 +1,4 @@
-import { useMemo, useState } from 'react';
+import { useEffect, useMemo, useRef, useState } from 'react';
 import {
   createColumnHelper,
   flexRender,
@@ -57,9 +57,20 @@ function QuantityInput({ line, onSave }: { line: StoredLine; onSave: (q: number)
   );
 }
 
-/** The bill of materials grouped by bucket (or category), with group subtotals and the panel's totals in the footer. */
-export function BomTable({ lines, totals, actions, groupBy }: { lines: StoredLine[]; totals: BomTotals; actions: LineActions; groupBy: 'bucket' | 'category' }) {
+/** The key another section uses to point at a line: its bucket and part code. */
+export const lineKey = (bucket: string, code: string | null) => `${bucket}|${code ?? ''}`;
+
+/**
+ * The bill of materials grouped by bucket (or category), with group subtotals and the panel's totals in the footer.
+ * `highlight` (bucket|code, see lineKey) marks the lines another section points at and scrolls to the first.
+ */
+export function BomTable({ lines, totals, actions, groupBy, highlight = null }: { lines: StoredLine[]; totals: BomTotals; actions: LineActions; groupBy: 'bucket' | 'category'; highlight?: string | null }) {
   const [sorting, setSorting] = useState<SortingState>([]);
+  const firstMarked = useRef<HTMLTableRowElement | null>(null);
+  useEffect(() => {
+    firstMarked.current?.scrollIntoView({ block: 'center' });
+  }, [highlight]);
+  let marked = 0;
   const data = useMemo<Row[]>(() => lines.map((l) => ({ ...l, extended: extendedCost(l), labour: extendedLabourHours(l) })), [lines]);
   const editable = !!(actions.onSwap || actions.onRemove || actions.onQuantity);
   const columns = useMemo(
@@ -75,7 +86,11 @@ export function BomTable({ lines, totals, actions, groupBy }: { lines: StoredLin
             <div>
               <div>{l.status === 'unmatched' ? <span className="font-semibold">{l.description}</span> : l.description}</div>
               {l.status === 'unmatched' ? <div className="text-xs text-state-returned">Needs: {l.requiredRatings}</div> : null}
-              {l.source === 'swapped' ? <div className="text-xs text-copper-700">Reason: {l.swapReason}</div> : null}
+              {l.source === 'swapped' ? (
+                <div className="text-xs text-copper-700">
+                  {l.swappedFrom ? <>In place of {l.swappedFrom}. </> : null}Reason: {l.swapReason}
+                </div>
+              ) : null}
             </div>
           );
         },
@@ -183,8 +198,16 @@ export function BomTable({ lines, totals, actions, groupBy }: { lines: StoredLin
             );
           }
           const l = row.original;
+          const isMarked = highlight !== null && lineKey(l.bucket, l.code) === highlight;
+          const first = isMarked && marked++ === 0;
           return (
-            <tr key={row.id} className={`border-b border-line/60 ${l.status === 'unmatched' ? 'bg-bad-bg' : 'hover:bg-copper-50'}`}>
+            <tr
+              key={row.id}
+              id={`bom-line-${l.id}`}
+              ref={first ? firstMarked : undefined}
+              aria-current={isMarked ? 'true' : undefined}
+              className={`border-b border-line/60 ${isMarked ? 'bg-warn-bg outline outline-2 -outline-offset-2 outline-state-review' : l.status === 'unmatched' ? 'bg-bad-bg' : 'hover:bg-copper-50'}`}
+            >
               {row.getVisibleCells().map((cell) => (
                 <DataCell key={cell.id} cell={cell} className="px-2 py-1 align-top" />
               ))}

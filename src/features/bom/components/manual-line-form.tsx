@@ -44,7 +44,7 @@ export function ManualLineForm({ buckets, onSubmit, pending, error, onCancel }: 
       <Field label="Unit cost" unit="$">{(p) => <input {...p} value={v.unitCost} onChange={set('unitCost')} inputMode="decimal" className={inputClass} />}</Field>
       <Field label="Labour per unit" unit="h">{(p) => <input {...p} value={v.unitLabourHours} onChange={set('unitLabourHours')} inputMode="decimal" className={inputClass} />}</Field>
       <div className="col-span-5 flex gap-2">
-        <Button type="submit" disabled={pending}>Add line</Button>
+        <Button type="submit" disabled={pending} waitsFor="Saving…">Add line</Button>
         <Button variant="ghost" onClick={onCancel}>Cancel</Button>
         {error ? <ErrorNote error={error} /> : null}
       </div>

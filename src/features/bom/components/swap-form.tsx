@@ -5,8 +5,12 @@ import { Button } from '../../../components/ui/button';
 import { ErrorNote, Loading } from '../../../components/ui/feedback';
 import { bomQueries, type StoredLine } from '../api/bom';
 import { bucketLabel, categoryLabel, money } from './format';
+import { describeRequirement } from '../../../../shared/calc/bom';
 
-/** Swap a line's part for another active item of the same category; the reason is required and kept on the line. */
+/**
+ * Swap a line's part for another active item that meets the line's requirement (the one the matcher used: the
+ * server lists only those and refuses any other); the reason is required and kept on the line.
+ */
 export function SwapForm({ panelId, line, onSubmit, pending, error, onCancel }: { panelId: number; line: StoredLine; onSubmit: (v: { swapCode: string; swapReason: string }) => void; pending: boolean; error: unknown; onCancel: () => void }) {
   const options = useQuery(bomQueries.alternatives(panelId, line.id));
   const [code, setCode] = useState('');
@@ -23,12 +27,20 @@ export function SwapForm({ panelId, line, onSubmit, pending, error, onCancel }: 
       <h2 className="font-semibold">
         {line.status === 'unmatched' ? 'Choose a part for' : 'Swap'} {line.code ?? 'the unmatched line'} · {categoryLabel(line.category)} · {bucketLabel(line.bucket)}
       </h2>
-      {line.status === 'unmatched' ? <p className="text-sm text-state-returned">✖ It needs: {line.requiredRatings}. Check that the part you choose meets every one.</p> : (
+      {line.status === 'unmatched' ? <p className="text-sm text-state-returned">✖ Nothing active in the catalogue meets it yet.</p> : (
         <p className="text-sm">Now: {line.description} at {money(line.unitCost)} each. The swapped line takes the new part's price.</p>
       )}
-      {options.isPending ? <Loading what="Loading parts" /> : options.isError ? <ErrorNote error={options.error} /> : (
+      <p className="text-sm" data-testid="swap-needs">
+        <span className="font-semibold">It must meet:</span>{' '}
+        {line.requirement?.length ? line.requirement.map((r) => describeRequirement(r)).join(' — or — ') : (line.requiredRatings ?? 'a need the catalogue cannot be searched for: add a manual line for the part instead')}
+      </p>
+      {options.isPending ? <Loading what="Loading parts" /> : options.isError ? <ErrorNote error={options.error} /> : options.data.length === 0 ? (
+        <p role="status" className="rounded border border-line bg-panel px-3 py-2 text-sm" data-testid="swap-none">
+          ◔ No other active part in the catalogue meets it. Add one on the Catalogue page (an estimator or administrator), then swap; or add a manual line.
+        </p>
+      ) : (
         <div className="grid grid-cols-2 gap-3">
-          <Field label="Part" error={problem.code}>
+          <Field label={`Part (${options.data.length} that meet${options.data.length === 1 ? 's' : ''} it, cheapest first)`} error={problem.code}>
             {(p) => (
               <select {...p} value={code} onChange={(e) => setCode(e.target.value)} className={inputClass}>
                 <option value="">Choose…</option>
@@ -44,7 +56,9 @@ export function SwapForm({ panelId, line, onSubmit, pending, error, onCancel }: 
         </div>
       )}
       <div className="flex gap-2">
-        <Button type="submit" disabled={pending}>Swap</Button>
+        <Button type="submit" disabled={pending || !options.data?.length} waitsFor={pending ? 'Saving…' : options.isPending ? 'Loading the parts that fit…' : 'No part to swap to.'}>
+          Swap
+        </Button>
         <Button variant="ghost" onClick={onCancel}>Cancel</Button>
       </div>
       {error ? <ErrorNote error={error} /> : null}

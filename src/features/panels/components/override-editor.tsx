@@ -48,7 +48,7 @@ export function OverrideEditor({ panelId, load }: { panelId: number; load: LoadV
         <input aria-label="New value" className={inputClass} placeholder="New value" value={value} onChange={(e) => setValue(e.target.value)} />
         <textarea aria-label="Justification" className={`${inputClass} col-span-2`} rows={2} placeholder="Why (at least 15 characters)" value={why} onChange={(e) => setWhy(e.target.value)} />
       </div>
-      <Button className="mt-2" variant="secondary" disabled={!value || set.isPending} onClick={() => save([...current.filter((c) => c.field !== field), { field, value: parseValue(field, value), justification: why }])}>
+      <Button className="mt-2" variant="secondary" disabled={!value || set.isPending} waitsFor={set.isPending ? 'Saving…' : 'Give the new value first.'} onClick={() => save([...current.filter((c) => c.field !== field), { field, value: parseValue(field, value), justification: why }])}>
         Add override
       </Button>
       {set.error ? <div className="mt-2"><ErrorNote error={set.error} /></div> : null}
