@@ -9,6 +9,8 @@ import { sourceNeed } from '../../../shared/calc/other-sources';
 import { panelNameplate } from '../../../shared/calc/nameplate';
 import { OutsideTableError } from '../../../shared/errors';
 import { motor, selector, supply480 } from '../engine/selector-setup';
+import { bomHeatLossW, buildBom } from '../../../shared/calc/bom';
+import { seedCatalogue, seedLabourUnits } from '../bom/fixtures';
 
 describe('NEC 2023 Table 450.3(B) (transformers 1000 V and less)', () => {
   it.each([
@@ -151,5 +153,28 @@ describe('the roll-up counts the sources (selectPanel, NEC 2023)', () => {
     expect(dc?.primaryAmps).toBe(8.49);
     expect(out.panel.otherLoadsAmps).toBe(8.49);
     expect(out.panel.feeder.minAmpacity).toBe(8.49);
+  });
+});
+
+describe('the bill of materials carries the sources (seed catalogue)', () => {
+  it('T1: the 7.5 kVA 480-240/120 V transformer, its 35 A primary and 40 A secondary breakers; its losses in the heat load', async () => {
+    const out = await selector.selectPanel({
+      supply: supply480,
+      loads: [motor({ tag: 'P-1', hp: 10, volts: 460 }), motor({ tag: 'F-1', supply: 'ac1', hp: 1.5, volts: 230 }), motor({ tag: 'F-2', supply: 'ac1', hp: 1.5, volts: 230 }), motor({ tag: 'H-1', supply: 'dc', hp: 5, volts: 240, dcField: 'shunt' })],
+    });
+    const bom = buildBom({ panelName: 'T', selections: out.results, panel: out.panel, supply: { volts: 480, phases: 3, hz: 60 }, enclosureType: '12', catalogue: seedCatalogue(), labourUnits: seedLabourUnits() });
+    const t1 = bom.lines.filter((l) => l.bucket === 'T1');
+    expect(t1.map((l) => [l.category, l.code])).toEqual([
+      ['power-transformer', 'PW-XF-1-7A5K-240'], // smallest single-phase 240/120 V unit ≥ 7.5 kVA
+      ['inverse-time-breaker', 'PW-BR-2P-035'], // Table 450.3(B) primary, 250 %
+      ['inverse-time-breaker', 'PW-BR-2P-040'], // Table 450.3(B) secondary, 125 %, Note 1
+    ]);
+    const dc1 = bom.lines.filter((l) => l.bucket === 'DC1');
+    expect(dc1.map((l) => l.category)).toEqual(['dc-power-supply', 'inverse-time-breaker']);
+    expect(dc1[0]?.code).toBe('PW-DS-240-025'); // ≥ 25 A at 240 V DC
+    const without = bomHeatLossW(bom.lines.filter((l) => l.bucket !== 'T1' && l.bucket !== 'DC1'));
+    const transformerLoss = t1[0]?.heatLossW ?? 0;
+    expect(transformerLoss).toBeGreaterThan(0);
+    expect(bomHeatLossW(bom.lines)).toBeGreaterThanOrEqual(without + transformerLoss);
   });
 });
