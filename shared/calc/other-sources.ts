@@ -224,3 +224,46 @@ export function otherSources(supply: Supply, loads: readonly Load[], results: re
   }
   return out;
 }
+
+export interface SourcesSummary {
+  sources: OtherSource[];
+  externalMotors: ExternalMotor[];
+  /** one sentence per source and per motor fed from outside the panel, for the Motors page, the checks and the submittal */
+  lines: string[];
+}
+
+const kindWords = (m: { supply: SupplyKind; volts: number }) => `${m.volts} V ${m.supply === 'dc' ? 'DC' : m.supply === 'ac1' ? 'single-phase' : 'three-phase'}`;
+
+/** The panel's other sources and its motors fed from outside it, in words. */
+export function sourcesSummary(rollup: { otherSources?: OtherSource[]; externalMotors?: ExternalMotor[] } | null | undefined): SourcesSummary {
+  const sources = rollup?.otherSources ?? [];
+  const externalMotors = rollup?.externalMotors ?? [];
+  const lines: string[] = [];
+  for (const s of sources) {
+    const motors = s.motors.map((m) => `${m.tag} (${kindWords(m)})`).join(', ');
+    const prot = `${s.primaryProtection.ratingAmps} A primary${s.secondaryProtection ? `, ${s.secondaryProtection.ratingAmps} A secondary` : ''} protection`;
+    lines.push(`${s.tag}: ${motors} fed from ${s.kind === 'transformer' ? `a ${s.kva} kVA ${s.primaryVolts}-${s.secondaryLabel} transformer` : `a ${s.secondaryLabel} supply (${s.secondaryAmps} A)`} in the panel; ${prot}; ${s.primaryAmps} A at ${s.primaryVolts} V counted in the feeder and the full-load current.`);
+  }
+  for (const m of externalMotors) {
+    lines.push(`${m.tag} (${kindWords(m)}) needs ${m.needs}: fed from a source outside the panel, left out of the feeder and the panel's full-load current — the source and its protection are someone else's to provide.`);
+  }
+  return { sources, externalMotors, lines };
+}
+
+/** Whether a motor of this kind and rated voltage needs a source other than the panel's own bus (DC motors always do; a DC drive at the supply voltage is its own rectifier, see sourceNeed). */
+export function needsOtherSource(load: { supply?: string; volts?: number }, supplyVolts: number): boolean {
+  if (load.supply === 'dc') return true;
+  if (typeof load.volts !== 'number' || !Number.isFinite(load.volts)) return false;
+  return nominalSystemVolts(load.volts) !== nominalSystemVolts(supplyVolts);
+}
+
+/** What a motor's bucket is fed from, for its one-line: the panel's feeder bus (null), one of its other sources, or a source outside it. */
+export function motorFeed(
+  rollup: { otherSources?: OtherSource[]; externalMotors?: ExternalMotor[] } | null | undefined,
+  tag: string,
+): { source: OtherSource; external: null } | { source: null; external: ExternalMotor } | null {
+  const source = (rollup?.otherSources ?? []).find((s) => s.motors.some((m) => m.tag === tag));
+  if (source) return { source, external: null };
+  const external = (rollup?.externalMotors ?? []).find((m) => m.tag === tag);
+  return external ? { source: null, external } : null;
+}

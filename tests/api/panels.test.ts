@@ -404,7 +404,7 @@ describe('the motor list as a workbook', () => {
     // the 25 hp 460 V worked example: NEC 2023 Table 430.250 34 A; Table 430.52 250 % = 85 A -> 90 A; 8 AWG Cu 75 °C
     { tag: 'P-1', description: 'Feed pump', supply: 'ac3', hp: 25, volts: 460, fla: 31, serviceFactor: 1.15, codeLetter: 'G', design: 'B', energyEfficient: true, poles: 4, environment: 'indoor-dusty' },
     { tag: 'K-1', description: '=HYPERLINK("http://example.test","blower")', supply: 'ac3', hp: 60, volts: 460, fla: 70, serviceFactor: 1.15, leads: 6, connection: 'delta', startingLimit: 'reduced-inrush', starterPreference: 'wye-delta', conductor: { material: 'al', tempRatingC: 90 }, inertia: 'high', lockedRotorWithstandS: 22, reverseRotationHazard: true, environment: 'indoor-dusty' },
-    { tag: 'D-1', supply: 'dc', hp: 5, volts: 240, dcField: 'compound', quickStop: true, reversing: true, environment: 'indoor-dry' },
+    { tag: 'D-1', supply: 'dc', hp: 5, volts: 240, dcField: 'compound', quickStop: true, reversing: true, environment: 'indoor-dry', fedFrom: 'external' },
     { tag: 'S-1', supply: 'ac1', hp: 1, volts: 115, singlePhaseType: 'capacitor-start', reversing: true, environment: 'outdoor' },
     { tag: 'V-1', supply: 'ac3', hp: 20, volts: 460, speedControl: 'variable', turndown: 10, torque: 'constant', driveInputAmps: 30, cableLengthFt: 150, environment: 'washdown' },
     { tag: 'O-1', supply: 'ac3', hp: 10, volts: 460, tempRiseC: 40, plugging: true, scpdType: 'dual-element-fuse', scpdOverride: { maxPercent: 225, reason: 'Motor trips on start at 175 %, checked on site' }, critical: true, environment: 'corrosive' },

@@ -5,12 +5,14 @@ import { describe, expect, it } from 'vitest';
 import { primaryLimit, secondaryLimit } from '../../../shared/standards/nec-table-450-3b';
 import { nextStandardKva } from '../../../shared/standards/transformer-kva-ratings';
 import { ratedAmps, transformerKva, transformerProtection } from '../../../shared/calc/transformer';
-import { sourceNeed } from '../../../shared/calc/other-sources';
+import { motorFeed, sourceNeed } from '../../../shared/calc/other-sources';
 import { panelNameplate } from '../../../shared/calc/nameplate';
 import { OutsideTableError } from '../../../shared/errors';
 import { motor, selector, supply480 } from '../engine/selector-setup';
 import { bomHeatLossW, buildBom } from '../../../shared/calc/bom';
 import { seedCatalogue, seedLabourUnits } from '../bom/fixtures';
+import { oneLineElements } from '../../../src/features/drawings/components/one-line';
+import { oneLineText } from '../../../server/modules/submittal/pdf';
 
 describe('NEC 2023 Table 450.3(B) (transformers 1000 V and less)', () => {
   it.each([
@@ -176,5 +178,25 @@ describe('the bill of materials carries the sources (seed catalogue)', () => {
     const transformerLoss = t1[0]?.heatLossW ?? 0;
     expect(transformerLoss).toBeGreaterThan(0);
     expect(bomHeatLossW(bom.lines)).toBeGreaterThanOrEqual(without + transformerLoss);
+  });
+});
+
+describe('the one-line of a motor at another voltage', () => {
+  it('starts at the feeder bus, through T1 and its breakers, to the T1 secondary bus — not a "feeder bus 230 V"', async () => {
+    const out = await selector.selectPanel({ supply: supply480, loads: [motor({ tag: 'F-1', supply: 'ac1', hp: 1.5, volts: 230 }), motor({ tag: 'F-2', supply: 'ac1', hp: 1.5, volts: 230, fedFrom: 'external' })] });
+    const f1 = out.results[0]!;
+    const els = oneLineElements(f1, motorFeed(out.panel, 'F-1'));
+    expect(els.slice(0, 5).map((e) => [e.kind, e.label])).toEqual([
+      ['bus', 'Feeder bus'],
+      // one 1.5 hp 230 V motor (10 A, NEC 2023 Table 430.248): 125 % × 10 A × 240 V = 3 kVA, a standard rating
+      ['breaker', '15 A T1 primary breaker'], // 6.25 A × 250 % = 15.63 A → 15 A, NEC 2023 Table 450.3(B), Table 240.6(A)
+      ['transformer', 'T1 — 3 kVA transformer'],
+      ['breaker', '20 A T1 secondary breaker'], // 12.5 A × 125 % = 15.63 A → next higher 20 A (Note 1)
+      ['bus', 'T1 secondary bus'],
+    ]);
+    expect(els.some((e) => e.kind === 'bus' && e.detail === '230 V')).toBe(false);
+    const ext = oneLineElements(out.results[1]!, motorFeed(out.panel, 'F-2'));
+    expect(ext[0]).toMatchObject({ kind: 'bus', label: 'Outside source (not from this panel)' });
+    expect(oneLineText(f1, motorFeed(out.panel, 'F-1'))).toMatch(/^feeder bus 480 V -> 15 A primary breaker -> T1 3 kVA transformer 480-240\/120 V single-phase/);
   });
 });
