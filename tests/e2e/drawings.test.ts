@@ -73,6 +73,27 @@ describe('drawings in the browser', () => {
     expect(title).toMatch(/^One-line of M-401: Feeder bus, \d+ A T1 primary breaker, T1 — 3 kVA transformer, \d+ A T1 secondary breaker, T1 secondary bus, /);
   });
 
+  it('asks the designer where a motor at another voltage is fed from, and only then', async () => {
+    const page = await newPage(browser);
+    await signInThroughForm(page, 'designer');
+    await page.waitForURL(/\/jobs$/);
+    await page.getByRole('table', { name: 'Jobs' }).getByRole('link', { name: 'J-2041' }).click();
+    await page.getByRole('link', { name: 'MCC-1 Pump hall' }).first().click();
+    const motors = page.getByRole('table', { name: 'Motors' });
+    await motors.getByRole('link', { name: 'M-401' }).click();
+    await page.getByRole('button', { name: /3\. Site & hazards/ }).click();
+    const fedFrom = page.getByLabel('Fed from');
+    await fedFrom.waitFor();
+    expect(await fedFrom.inputValue()).toBe('panel');
+    await screenshot(page, 'wizard-fed-from');
+    // a 460 V motor on the 480 V supply is on the panel's own bus: no question
+    await page.goBack();
+    await motors.getByRole('link', { name: 'P-101' }).click();
+    await page.getByRole('button', { name: /3\. Site & hazards/ }).click();
+    await page.getByLabel('Environment at the panel').waitFor();
+    expect(await page.getByLabel('Fed from').count()).toBe(0);
+  });
+
   it('lists the wye-delta blower at its relay’s dial limit, never at the line value', async () => {
     const page = await openDemoPanel(browser);
     const row = page.getByRole('table', { name: 'Motors' }).getByRole('row').filter({ hasText: 'K-301' });
