@@ -547,6 +547,30 @@ describe('motors at another voltage than the supply (fedFrom)', () => {
     expect(after.heat.result.byBucket.find((b: { bucketTag: string }) => b.bucketTag === 'T1')?.watts).toBeGreaterThan(0);
   });
 
+  it('a roll-up stored before the panel carried other sources: the rule check names the motor’s new source, and selecting again stores it', async () => {
+    const { Panel } = await import('../../server/db/models/panel');
+    const designer = await signInAs('designer');
+    const { panel } = await newPanel(designer);
+    await send(designer, 'post', `/api/panels/${panel.id}/loads`, { answers: P1 }).expect(201);
+    await send(designer, 'post', `/api/panels/${panel.id}/loads`, { answers: fan('F-1') }).expect(201);
+    expect((await designer.agent.get(`/api/panels/${panel.id}/rule-check`).expect(200)).body.changed).toEqual([]);
+    // the earlier release left the 230 V motor out of the feeder: its roll-up had no other sources
+    const row = (await Panel.findByPk(panel.id))!;
+    const old = { ...(row.rollup as Record<string, unknown>) };
+    delete old.otherSources;
+    delete old.externalMotors;
+    delete old.otherLoadsAmps;
+    await Panel.update({ rollup: old }, { where: { id: panel.id } });
+    const check = (await designer.agent.get(`/api/panels/${panel.id}/rule-check`).expect(200)).body;
+    expect(check.changed).toEqual([
+      { loadId: expect.any(Number), tag: 'F-1', differences: [{ field: 'fedFrom', label: 'Fed from', from: 'left out of the feeder', to: 'T1, 3 kVA transformer 480-240/120 V single-phase' }] },
+    ]); // one 1.5 hp 230 V motor: 125 % × 10 A × 240 V = 3 kVA (NEC 2023 Table 430.248)
+    const p = (await designer.agent.get(`/api/panels/${panel.id}`).expect(200)).body;
+    await send(designer, 'post', `/api/panels/${panel.id}/reselect`, { version: p.version }).expect(200);
+    expect((await designer.agent.get(`/api/panels/${panel.id}/rule-check`).expect(200)).body.changed).toEqual([]);
+    expect((await designer.agent.get(`/api/panels/${panel.id}`).expect(200)).body.rollup.otherSources[0].tag).toBe('T1');
+  });
+
   it('fedFrom external: left out of the feeder and the nameplate FLC, with the note in the checks; the submittal is written', async () => {
     const designer = await signInAs('designer');
     const { panel } = await newPanel(designer);
