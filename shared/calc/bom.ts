@@ -4,6 +4,7 @@
 // Pure TypeScript: no Node or DOM imports.
 import type { LoadSelection, PanelRollup, StarterType } from '../schemas/selection';
 import { relayOf } from './overload';
+import { sourceBucket } from './other-sources';
 import {
   CATEGORIES,
   CATEGORY_LABELS,
@@ -696,16 +697,17 @@ export function buildBom(input: BuildBomInput): BuildBomResult {
   const sources = input.panel.otherSources ?? [];
   for (const src of sources) {
     const poles = src.phases === 3 ? 3 : 2;
+    const bucket = sourceBucket(src);
     if (src.kind === 'transformer') {
-      b.add(src.tag, { category: 'power-transformer', kind: src.phases === 3 ? 'three-phase' : 'single-phase', minVa: (src.kva ?? src.loadKva) * 1000, secondaryVolts: src.secondaryVolts, volts: input.supply.volts }, 1);
-      b.add(src.tag, { category: 'inverse-time-breaker', exactAmps: src.primaryProtection.ratingAmps, poles, volts: input.supply.volts }, 1);
-      if (src.secondaryProtection) b.add(src.tag, { category: 'inverse-time-breaker', exactAmps: src.secondaryProtection.ratingAmps, poles, volts: src.secondaryVolts }, 1);
+      b.add(bucket, { category: 'power-transformer', kind: src.phases === 3 ? 'three-phase' : 'single-phase', minVa: (src.kva ?? src.loadKva) * 1000, secondaryVolts: src.secondaryVolts, volts: input.supply.volts }, 1);
+      b.add(bucket, { category: 'inverse-time-breaker', exactAmps: src.primaryProtection.ratingAmps, poles, volts: input.supply.volts }, 1);
+      if (src.secondaryProtection) b.add(bucket, { category: 'inverse-time-breaker', exactAmps: src.secondaryProtection.ratingAmps, poles, volts: src.secondaryVolts }, 1);
       // floor space of a small dry-type transformer: 0.04 m² + 0.008 m² per kVA (common practice estimate)
       footprint += 40_000 + 8_000 * (src.kva ?? 0);
       minDepth = Math.max(minDepth, 300);
     } else {
-      b.add(src.tag, { category: 'dc-power-supply', minAmps: src.secondaryAmps, secondaryVolts: src.secondaryVolts, volts: input.supply.volts }, 1);
-      b.add(src.tag, { category: 'inverse-time-breaker', exactAmps: src.primaryProtection.ratingAmps, poles, volts: input.supply.volts }, 1);
+      b.add(bucket, { category: 'dc-power-supply', minAmps: src.secondaryAmps, secondaryVolts: src.secondaryVolts, volts: input.supply.volts }, 1);
+      b.add(bucket, { category: 'inverse-time-breaker', exactAmps: src.primaryProtection.ratingAmps, poles, volts: input.supply.volts }, 1);
       footprint += 60_000;
     }
     terminalCount += poles * 2 + 1;

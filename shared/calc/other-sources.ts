@@ -138,15 +138,23 @@ export function otherSources(supply: Supply, loads: readonly Load[], results: re
     if (need.on === 'transformer' && need.note) g.notes.push(`${r.tag}: ${need.note}`);
   });
 
+  // source tags T1, T2 … and DC1 … that no motor of the panel carries
+  const motorTags = new Set(results.map((r) => r.tag.toUpperCase()));
   let t = 0;
   let d = 0;
+  const nextTag = (prefix: string, n: number): [string, number] => {
+    let k = n + 1;
+    while (motorTags.has(`${prefix}${k}`)) k++;
+    return [`${prefix}${k}`, k];
+  };
   const family = supply.feeder.ocpdType === 'inverse-time-breaker' ? 'breaker' : 'fuse';
   for (const g of groups.values()) {
     const tags = g.motors.map((m) => m.tag).join(', ');
     try {
       if (g.need.on === 'transformer') {
         const n = g.need;
-        const tag = `T${++t}`;
+        const [tag, tn] = nextTag('T', t);
+        t = tn;
         const size = transformerKva({ phases: n.phases, secondaryVolts: n.secondaryVolts, splitPhase: n.splitPhase, loads: g.motors });
         const primaryAmps = ratedAmps(size.kva, supply.volts, n.phases);
         const secondaryAmps = ratedAmps(size.kva, n.secondaryVolts, n.phases);
@@ -178,7 +186,8 @@ export function otherSources(supply: Supply, loads: readonly Load[], results: re
         out.notes.push(`${tag}: ${tags} fed from a ${size.kva} kVA ${supply.volts}-${n.secondaryLabel} transformer in the panel; its rated primary current ${primaryAmps} A is counted in the feeder and the full-load current`);
       } else {
         const n = g.need;
-        const tag = `DC${++d}`;
+        const [tag, dn] = nextTag('DC', d);
+        d = dn;
         const largest = Math.max(...g.motors.map((m) => m.amps));
         const sum = g.motors.reduce((s, m) => s + m.amps, 0);
         const outputAmps = round2(sum + 0.25 * largest);
@@ -266,4 +275,14 @@ export function motorFeed(
   if (source) return { source, external: null };
   const external = (rollup?.externalMotors ?? []).find((m) => m.tag === tag);
   return external ? { source: null, external } : null;
+}
+
+/** The bill-of-materials bucket of a source: "T1 transformer", "DC1 DC supply". */
+export function sourceBucket(source: Pick<OtherSource, 'tag' | 'kind'>): string {
+  return `${source.tag} ${source.kind === 'transformer' ? 'transformer' : 'DC supply'}`;
+}
+
+/** Whether a bill-of-materials bucket is a source's (see sourceBucket). */
+export function isSourceBucket(bucket: string): boolean {
+  return /^(T|DC)\d+ (transformer|DC supply)$/.test(bucket);
 }

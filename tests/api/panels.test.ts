@@ -541,10 +541,10 @@ describe('motors at another voltage than the supply (fedFrom)', () => {
     expect(checks.nameplate.result.fullLoadAmps).toBe(29.6); // 409.110(2): 14 A + 15.63 A
     expect(checks.otherSources.lines.join(' ')).toMatch(/T1: F-1 \(230 V single-phase\), F-2 \(230 V single-phase\) fed from a 7\.5 kVA 480-240\/120 V single-phase transformer/);
     const bom = (await send(designer, 'post', `/api/panels/${panel.id}/bom/rebuild`, {}).expect(200)).body as { lines: Array<{ bucket: string; category: string; code: string | null; heatLossW: number }> };
-    const t1 = bom.lines.filter((l) => l.bucket === 'T1');
+    const t1 = bom.lines.filter((l) => l.bucket === 'T1 transformer');
     expect(t1.map((l) => l.code)).toEqual(['PW-XF-1-7A5K-240', 'PW-BR-2P-035', 'PW-BR-2P-040']); // Table 450.3(B): 250 % primary, 125 % secondary
     const after = (await designer.agent.get(`/api/panels/${panel.id}/checks`).expect(200)).body;
-    expect(after.heat.result.byBucket.find((b: { bucketTag: string }) => b.bucketTag === 'T1')?.watts).toBeGreaterThan(0);
+    expect(after.heat.result.byBucket.find((b: { bucketTag: string }) => b.bucketTag === 'T1 transformer')?.watts).toBeGreaterThan(0);
   });
 
   it('a roll-up stored before the panel carried other sources: the rule check names the motor’s new source, and selecting again stores it', async () => {

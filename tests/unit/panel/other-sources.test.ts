@@ -146,6 +146,10 @@ describe('the roll-up counts the sources (selectPanel, NEC 2023)', () => {
     const np = panelNameplate({ rollup: out.panel, supply: { volts: 480, phases: 3, hz: 60 }, sccrKa: 10, enclosureType: '12' });
     expect(np.fullLoadAmps).toBe(14);
   });
+  it('a source never takes a motor’s tag', async () => {
+    const out = await selector.selectPanel({ supply: supply480, loads: [motor({ tag: 'T1', hp: 10, volts: 460 }), motor({ tag: 'F-1', supply: 'ac1', hp: 1.5, volts: 230 })] });
+    expect(out.panel.otherSources?.map((s) => s.tag)).toEqual(['T2']);
+  });
   it('a 5 hp 240 V DC motor gets a DC supply: 125 % × 20 A = 25 A at 240 V', async () => {
     // 20 A: NEC 2023 Table 430.247, 5 hp 240 V
     const out = await selector.selectPanel({ supply: supply480, loads: [motor({ tag: 'H-1', supply: 'dc', hp: 5, volts: 240, dcField: 'shunt' })] });
@@ -165,16 +169,16 @@ describe('the bill of materials carries the sources (seed catalogue)', () => {
       loads: [motor({ tag: 'P-1', hp: 10, volts: 460 }), motor({ tag: 'F-1', supply: 'ac1', hp: 1.5, volts: 230 }), motor({ tag: 'F-2', supply: 'ac1', hp: 1.5, volts: 230 }), motor({ tag: 'H-1', supply: 'dc', hp: 5, volts: 240, dcField: 'shunt' })],
     });
     const bom = buildBom({ panelName: 'T', selections: out.results, panel: out.panel, supply: { volts: 480, phases: 3, hz: 60 }, enclosureType: '12', catalogue: seedCatalogue(), labourUnits: seedLabourUnits() });
-    const t1 = bom.lines.filter((l) => l.bucket === 'T1');
+    const t1 = bom.lines.filter((l) => l.bucket === 'T1 transformer');
     expect(t1.map((l) => [l.category, l.code])).toEqual([
       ['power-transformer', 'PW-XF-1-7A5K-240'], // smallest single-phase 240/120 V unit ≥ 7.5 kVA
       ['inverse-time-breaker', 'PW-BR-2P-035'], // Table 450.3(B) primary, 250 %
       ['inverse-time-breaker', 'PW-BR-2P-040'], // Table 450.3(B) secondary, 125 %, Note 1
     ]);
-    const dc1 = bom.lines.filter((l) => l.bucket === 'DC1');
+    const dc1 = bom.lines.filter((l) => l.bucket === 'DC1 DC supply');
     expect(dc1.map((l) => l.category)).toEqual(['dc-power-supply', 'inverse-time-breaker']);
     expect(dc1[0]?.code).toBe('PW-DS-240-025'); // ≥ 25 A at 240 V DC
-    const without = bomHeatLossW(bom.lines.filter((l) => l.bucket !== 'T1' && l.bucket !== 'DC1'));
+    const without = bomHeatLossW(bom.lines.filter((l) => l.bucket !== 'T1 transformer' && l.bucket !== 'DC1 DC supply'));
     const transformerLoss = t1[0]?.heatLossW ?? 0;
     expect(transformerLoss).toBeGreaterThan(0);
     expect(bomHeatLossW(bom.lines)).toBeGreaterThanOrEqual(without + transformerLoss);
