@@ -4,6 +4,7 @@
 // Pure TypeScript: no Node or DOM imports.
 import type { LoadSelection, PanelRollup, StarterType } from '../schemas/selection';
 import { relayOf } from './overload';
+import { sourceBucket } from './other-sources';
 import {
   CATEGORIES,
   CATEGORY_LABELS,
@@ -176,6 +177,7 @@ function sizeOf(item: CatalogueItem): number {
     case 'vfd':
       return r.normalDutyAmps ?? 0;
     case 'control-transformer':
+    case 'power-transformer':
       return r.va ?? 0;
     case 'wire':
       return wireIndex(r.wireSize ?? '');
@@ -712,6 +714,28 @@ export function buildBom(input: BuildBomInput): BuildBomResult {
     terminalCount += leads + 1 + points;
   }
 
+  // ------------------------------------------------------------------ other sources
+  // A transformer or DC supply for motors at another voltage (shared/calc/other-sources), in a bucket of
+  // its own: the unit, its primary device and (transformers) its secondary device per Table 450.3(B).
+  const sources = input.panel.otherSources ?? [];
+  for (const src of sources) {
+    const poles = src.phases === 3 ? 3 : 2;
+    const bucket = sourceBucket(src);
+    if (src.kind === 'transformer') {
+      b.add(bucket, { category: 'power-transformer', kind: src.phases === 3 ? 'three-phase' : 'single-phase', minVa: (src.kva ?? src.loadKva) * 1000, secondaryVolts: src.secondaryVolts, volts: input.supply.volts }, 1);
+      b.add(bucket, { category: 'inverse-time-breaker', exactAmps: src.primaryProtection.ratingAmps, poles, volts: input.supply.volts }, 1);
+      if (src.secondaryProtection) b.add(bucket, { category: 'inverse-time-breaker', exactAmps: src.secondaryProtection.ratingAmps, poles, volts: src.secondaryVolts }, 1);
+      // floor space of a small dry-type transformer: 0.04 m² + 0.008 m² per kVA (common practice estimate)
+      footprint += 40_000 + 8_000 * (src.kva ?? 0);
+      minDepth = Math.max(minDepth, 300);
+    } else {
+      b.add(bucket, { category: 'dc-power-supply', minAmps: src.secondaryAmps, secondaryVolts: src.secondaryVolts, volts: input.supply.volts }, 1);
+      b.add(bucket, { category: 'inverse-time-breaker', exactAmps: src.primaryProtection.ratingAmps, poles, volts: input.supply.volts }, 1);
+      footprint += 60_000;
+    }
+    terminalCount += poles * 2 + 1;
+  }
+
   // ------------------------------------------------------------------ panel items
   const P = PANEL_BUCKET;
   const supplyVolts = input.supply.volts;
@@ -734,7 +758,7 @@ export function buildBom(input: BuildBomInput): BuildBomResult {
     // distribution block: one branch connection per bucket
     const pdbReq: Requirement = { category: 'power-distribution-block', minAmps: input.panel.feeder.minAmpacity, poles: panelPoles, volts: supplyVolts };
     const pdb = b.find(pdbReq);
-    const pdbQty = pdb ? Math.ceil(input.selections.length / (pdb.ratings.outputs ?? 1)) : 1;
+    const pdbQty = pdb ? Math.ceil((input.selections.length + sources.length) / (pdb.ratings.outputs ?? 1)) : 1;
     b.add(P, pdbReq, pdbQty);
     const feeder = parseConductor(input.panel.feeder.conductorSize);
     // main to distribution block: one conductor per pole and parallel set, 4 ft each (common practice estimate)

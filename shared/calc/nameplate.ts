@@ -45,8 +45,13 @@ export const SHOP_NAME_PLACEHOLDER = '[Shop name]';
 
 const fmt = (x: number) => (Math.round(x * 10) / 10).toString();
 
+/** The transformers' and DC supplies' primary currents the roll-up counts for motors at another voltage, A. */
+export function otherSourcesAmps(rollup: PanelRollup): number {
+  return rollup.otherLoadsAmps ?? 0;
+}
+
 export function panelFeeder(rollup: PanelRollup, otherLoadsAmps = 0): PanelFeeder {
-  const total = rollup.totalFlcAmps + otherLoadsAmps;
+  const total = rollup.totalFlcAmps + otherSourcesAmps(rollup) + otherLoadsAmps;
   const minAmps = total * 1.15;
   const needed = Math.max(minAmps, rollup.feeder.ocpdMaxAmps);
   const sizeAmps = DISCONNECT_SWITCH_SIZES.find((s) => s >= needed);
@@ -72,7 +77,8 @@ export function panelFeeder(rollup: PanelRollup, otherLoadsAmps = 0): PanelFeede
 
 export function panelNameplate(input: NameplateInput): NameplateResult {
   const other = input.otherLoadsAmps ?? 0;
-  const fullLoadAmps = Math.round((input.rollup.totalFlcAmps + other) * 10) / 10;
+  const sources = otherSourcesAmps(input.rollup);
+  const fullLoadAmps = Math.round((input.rollup.totalFlcAmps + sources + other) * 10) / 10;
   const phases = input.supply.phases === 'dc' ? 'DC' : `${input.supply.phases} phase`;
   const warnings: string[] = [];
   const shop = input.shopName?.trim() ? input.shopName.trim() : SHOP_NAME_PLACEHOLDER;
@@ -90,7 +96,7 @@ export function panelNameplate(input: NameplateInput): NameplateResult {
     {
       label: 'Full-load current',
       value: `${fmt(fullLoadAmps)} A`,
-      basis: 'NEC 2023 409.110(2): sum of the motors’ full-load currents and the other loads that may run at once',
+      basis: `NEC 2023 409.110(2): sum of the motors’ full-load currents and the other loads that may run at once${sources > 0 ? ` (including ${fmt(sources)} A of primary current of the panel’s transformers and DC supplies for motors at another voltage: ${(input.rollup.otherSources ?? []).map((s) => s.tag).join(', ')})` : ''}${input.rollup.externalMotors?.length ? `; left out, fed from outside the panel: ${input.rollup.externalMotors.map((m) => m.tag).join(', ')}` : ''}`,
     },
     {
       label: 'Short-circuit current rating',

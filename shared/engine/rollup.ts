@@ -2,6 +2,7 @@
 // the reason, an instantaneous-trip branch counted at the feeder device type's Table 430.52 percent.
 
 import { feederRollup, type FeederBranch } from '../calc/feeder';
+import { otherSources } from '../calc/other-sources';
 import { branchProtection, motorKind } from '../calc/scpd';
 import type { Load, Supply } from '../schemas/load';
 import type { LoadSelection, SelectionOutput } from '../schemas/selection';
@@ -20,18 +21,12 @@ export function panelRollupOf(supply: Supply, loads: ReadonlyArray<Load>, result
       errors.push(`${r.tag}: left out of the feeder roll-up (its selection has errors)`);
       return;
     }
-    if (load.supply === 'dc') {
-      notes.push(`${r.tag}: DC motor left out; add its drive or rectifier rated input current to the feeder`);
-      return;
-    }
+    if (load.supply === 'dc') return; // fed from a DC supply or its drive: shared/calc/other-sources
     if (load.supply === 'ac3' && supply.phases === 1) {
       errors.push(`${r.tag}: a three-phase motor cannot be fed from a single-phase supply`);
       return;
     }
-    if (nominalSystemVolts(load.volts) === null || nominalSystemVolts(load.volts) !== supplySystem) {
-      notes.push(`${r.tag}: rated ${load.volts} V, not on the ${supply.volts} V feeder directly; add its transformer's primary current`);
-      return;
-    }
+    if (nominalSystemVolts(load.volts) === null || nominalSystemVolts(load.volts) !== supplySystem) return; // shared/calc/other-sources
     let deviceAmps = r.scpd.ratingAmps;
     if (r.scpd.type === 'instantaneous-trip-breaker') {
       // 430.62(A): an instantaneous-trip branch counts at the Table 430.52 % of the feeder device type
@@ -41,6 +36,19 @@ export function panelRollupOf(supply: Supply, loads: ReadonlyArray<Load>, result
     }
     branches.push({ tag: r.tag, flcAmps: r.flcAmps, branchDeviceAmps: deviceAmps });
   });
-  const f = feederRollup({ branches, material: supply.feeder.material, tempRatingC: supply.feeder.tempRatingC, ambientC: supply.ambientC, ocpdFamily: feederFamily }, edition);
-  return { feeder: f.feeder, totalFlcAmps: f.totalFlcAmps, largestMotorTag: f.largestMotorTag, notes: [...notes, ...f.notes], errors: [...errors, ...f.errors] };
+  const os = otherSources(supply, loads, results, edition);
+  const f = feederRollup(
+    { branches: [...branches, ...os.branches], otherLoads: os.otherLoads, material: supply.feeder.material, tempRatingC: supply.feeder.tempRatingC, ambientC: supply.ambientC, ocpdFamily: feederFamily },
+    edition,
+  );
+  return {
+    feeder: f.feeder,
+    totalFlcAmps: f.totalFlcAmps,
+    largestMotorTag: f.largestMotorTag,
+    notes: [...notes, ...os.notes, ...f.notes],
+    errors: [...errors, ...os.errors, ...f.errors],
+    otherSources: os.sources,
+    externalMotors: os.externalMotors,
+    otherLoadsAmps: f.otherLoadsAmps,
+  };
 }

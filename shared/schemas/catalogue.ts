@@ -31,6 +31,8 @@ export const CATEGORIES = [
   { id: 'dc-drive', label: 'DC drives', labourKey: 'drive' },
   { id: 'dc-starter', label: 'DC armature starters', labourKey: 'device-mount' },
   { id: 'field-loss-relay', label: 'Field-loss relays', labourKey: 'din-device' },
+  { id: 'power-transformer', label: 'Power transformers (motors at another voltage)', labourKey: 'device-mount' },
+  { id: 'dc-power-supply', label: 'DC power supplies (rectifiers)', labourKey: 'drive' },
 ] as const;
 
 export type Category = (typeof CATEGORIES)[number]['id'];
@@ -163,6 +165,8 @@ export const REQUIRED_RATINGS: Record<Category, (keyof Ratings)[]> = {
   'dc-drive': ['volts', 'amps', 'hpByVolts'],
   'dc-starter': ['volts', 'amps', 'hpByVolts'],
   'field-loss-relay': ['volts', 'settingMinAmps', 'settingMaxAmps'],
+  'power-transformer': ['kind', 'volts', 'voltsMin', 'va', 'secondaryVolts'],
+  'dc-power-supply': ['kind', 'volts', 'voltsMin', 'amps', 'secondaryVolts'],
 };
 
 export const UNITS = ['ea', 'ft'] as const;

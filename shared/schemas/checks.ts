@@ -5,6 +5,7 @@ import type { EnclosureMounting, HeatResult } from '../calc/heat';
 import type { ControlPowerResult } from '../calc/control-power';
 import type { NameplateResult } from '../calc/nameplate';
 import type { ConnectionCard } from '../calc/connections';
+import type { SourcesSummary } from '../calc/other-sources';
 
 export interface ExcludedComponent {
   location: string;
@@ -57,6 +58,8 @@ export interface PanelChecks {
   heat: HeatCheck;
   controlPower: ControlPowerCheck;
   nameplate: NameplateCheck;
+  /** motors at another voltage than the supply: the transformers and DC supplies in the panel, and the motors fed from outside it */
+  otherSources: SourcesSummary;
   connectionCards: MotorConnectionCard[];
   cautions: string[];
 }

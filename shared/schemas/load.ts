@@ -86,6 +86,8 @@ const LoadObject = z
       .strict()
       .prefault({}),
     cableLengthFt: z.number().min(0).max(10000).optional(),
+    /** a motor at another voltage than the supply: fed from a transformer or DC supply in the panel, or from a source outside it */
+    fedFrom: z.enum(['panel', 'external'], { error: 'fedFrom must be "panel" or "external"' }).default('panel'),
     // Beyond the CLI's minimum field set (documented in the README):
     /** two-speed motor (consequent-pole or separate windings) */
     twoSpeed: z.boolean().default(false),

@@ -186,6 +186,69 @@ export interface PanelRollup {
   notes?: string[];
   /** optional (added by the engine): roll-up problems, e.g. a feeder beyond the tables */
   errors?: string[];
+  /** the transformers and DC supplies the panel carries for motors at another voltage (shared/calc/other-sources) */
+  otherSources?: OtherSource[];
+  /** motors at another voltage fed from a source outside the panel: left out of the feeder and the full-load current */
+  externalMotors?: ExternalMotor[];
+  /** the other sources' primary (input) currents counted in the feeder and the 409.110 full-load current, A */
+  otherLoadsAmps?: number;
+}
+
+/** A motor fed from one of the panel's other sources. */
+export interface OtherSourceMotor {
+  tag: string;
+  supply: SupplyKind;
+  volts: number;
+  /** the current it draws from the source: its FLC, or a DC drive's AC line current */
+  amps: number;
+  /** the voltage of the circuit it is on (120 or 240 on a 240/120 V secondary, the DC voltage …) */
+  circuitVolts: number;
+}
+
+export interface SourceProtection {
+  /** NEC Table 450.3(B) method (transformers) or the maker's instructions (DC supplies) */
+  method: 'primary-only' | 'primary-and-secondary' | 'input';
+  percent: number;
+  maxAmps: number;
+  ratingAmps: number;
+  basis: string;
+}
+
+/** A transformer or DC supply inside the panel, sized from the motors it feeds. */
+export interface OtherSource {
+  kind: 'transformer' | 'dc-supply';
+  /** T1, T2 … / DC1 … */
+  tag: string;
+  /** what it delivers, e.g. "480-240/120 V single-phase", "240 V DC" */
+  description: string;
+  /** transformer phases, or the DC supply's input phases */
+  phases: 1 | 3;
+  primaryVolts: number;
+  /** secondary line voltage (transformer) or DC output voltage */
+  secondaryVolts: number;
+  /** single-phase 240/120 V, three-phase 208Y/120 V, 240 V … (transformer); "DC" for a DC supply */
+  secondaryLabel: string;
+  /** the motors' load on it: kVA (transformer) or kW output (DC supply) */
+  loadKva: number;
+  /** standard kVA rating chosen (transformer); null for a DC supply */
+  kva: number | null;
+  /** transformer rated secondary current, or the DC output current needed, A */
+  secondaryAmps: number;
+  /** transformer rated primary current, or the DC supply's estimated input current, A */
+  primaryAmps: number;
+  primaryProtection: SourceProtection;
+  secondaryProtection: SourceProtection | null;
+  motors: OtherSourceMotor[];
+  basis: string;
+  notes: string[];
+}
+
+export interface ExternalMotor {
+  tag: string;
+  supply: SupplyKind;
+  volts: number;
+  /** the source it needs, in words, e.g. "240/120 V single-phase" */
+  needs: string;
 }
 
 export interface SelectionOutput {

@@ -417,7 +417,7 @@ describe('the motor list as a workbook', () => {
     // the 25 hp 460 V worked example: NEC 2023 Table 430.250 34 A; Table 430.52 250 % = 85 A -> 90 A; 8 AWG Cu 75 °C
     { tag: 'P-1', description: 'Feed pump', supply: 'ac3', hp: 25, volts: 460, fla: 31, serviceFactor: 1.15, codeLetter: 'G', design: 'B', energyEfficient: true, poles: 4, environment: 'indoor-dusty' },
     { tag: 'K-1', description: '=HYPERLINK("http://example.test","blower")', supply: 'ac3', hp: 60, volts: 460, fla: 70, serviceFactor: 1.15, leads: 6, connection: 'delta', startingLimit: 'reduced-inrush', starterPreference: 'wye-delta', conductor: { material: 'al', tempRatingC: 90 }, inertia: 'high', lockedRotorWithstandS: 22, reverseRotationHazard: true, environment: 'indoor-dusty' },
-    { tag: 'D-1', supply: 'dc', hp: 5, volts: 240, dcField: 'compound', quickStop: true, reversing: true, environment: 'indoor-dry' },
+    { tag: 'D-1', supply: 'dc', hp: 5, volts: 240, dcField: 'compound', quickStop: true, reversing: true, environment: 'indoor-dry', fedFrom: 'external' },
     { tag: 'S-1', supply: 'ac1', hp: 1, volts: 115, singlePhaseType: 'capacitor-start', reversing: true, environment: 'outdoor' },
     { tag: 'V-1', supply: 'ac3', hp: 20, volts: 460, speedControl: 'variable', turndown: 10, torque: 'constant', driveInputAmps: 30, cableLengthFt: 150, environment: 'washdown' },
     { tag: 'O-1', supply: 'ac3', hp: 10, volts: 460, tempRiseC: 40, plugging: true, scpdType: 'dual-element-fuse', scpdOverride: { maxPercent: 225, reason: 'Motor trips on start at 175 %, checked on site' }, critical: true, environment: 'corrosive' },
@@ -532,5 +532,76 @@ describe('signing off against the site fault current (NEC 409.22)', () => {
     const r0 = (await engineer.agent.get(`/api/panels/${panel.id}/revisions/0`).expect(200)).body;
     expect(r0.snapshot.sccr).toMatchObject({ availableFaultKa: 2, verdict: 'adequate', acknowledged: null });
     expect(r0.snapshot.sccr.panelSccrKa).toBeGreaterThanOrEqual(2);
+  });
+});
+
+describe('motors at another voltage than the supply (fedFrom)', () => {
+  // a 480 V three-phase job (the default supply): a 10 hp 460 V motor and two 1.5 hp 230 V single-phase motors
+  const P1 = { tag: 'P-1', supply: 'ac3', hp: 10, volts: 460, environment: 'indoor-dusty' }; // 14 A, NEC 2023 Table 430.250
+  const fan = (tag: string, fedFrom?: 'panel' | 'external') => ({ tag, supply: 'ac1', hp: 1.5, volts: 230, environment: 'indoor-dusty', ...(fedFrom ? { fedFrom } : {}) }); // 10 A, Table 430.248
+
+  it('fedFrom panel (the default): the transformer is in the roll-up, the feeder, the nameplate FLC, the checks and the bill of materials', async () => {
+    const designer = await signInAs('designer');
+    const { job, panel } = await newPanel(designer);
+    expect(job.supplyVolts).toBe(480);
+    for (const answers of [P1, fan('F-1'), fan('F-2')]) await send(designer, 'post', `/api/panels/${panel.id}/loads`, { answers }).expect(201);
+    const detail = (await designer.agent.get(`/api/panels/${panel.id}`).expect(200)).body;
+    // (125 % × 10 A + 10 A) × 240 V = 5.4 kVA → 7.5 kVA; 7500 VA / 480 V = 15.63 A primary
+    expect(detail.rollup.otherSources).toHaveLength(1);
+    expect(detail.rollup.otherSources[0]).toMatchObject({ tag: 'T1', kva: 7.5, primaryAmps: 15.63 });
+    expect(detail.rollup.feeder.minAmpacity).toBe(33.13); // 430.24: 125 % × 14 A + 15.63 A
+    const checks = (await designer.agent.get(`/api/panels/${panel.id}/checks`).expect(200)).body;
+    expect(checks.nameplate.result.fullLoadAmps).toBe(29.6); // 409.110(2): 14 A + 15.63 A
+    expect(checks.otherSources.lines.join(' ')).toMatch(/T1: F-1 \(230 V single-phase\), F-2 \(230 V single-phase\) fed from a 7\.5 kVA 480-240\/120 V single-phase transformer/);
+    const bom = (await send(designer, 'post', `/api/panels/${panel.id}/bom/rebuild`, {}).expect(200)).body as { lines: Array<{ bucket: string; category: string; code: string | null; heatLossW: number }> };
+    const t1 = bom.lines.filter((l) => l.bucket === 'T1 transformer');
+    expect(t1.map((l) => l.code)).toEqual(['PW-XF-1-7A5K-240', 'PW-BR-2P-035', 'PW-BR-2P-040']); // Table 450.3(B): 250 % primary, 125 % secondary
+    const after = (await designer.agent.get(`/api/panels/${panel.id}/checks`).expect(200)).body;
+    expect(after.heat.result.byBucket.find((b: { bucketTag: string }) => b.bucketTag === 'T1 transformer')?.watts).toBeGreaterThan(0);
+  });
+
+  it('a roll-up stored before the panel carried other sources: the rule check names the motor’s new source, and selecting again stores it', async () => {
+    const { Panel } = await import('../../server/db/models/panel');
+    const designer = await signInAs('designer');
+    const { panel } = await newPanel(designer);
+    await send(designer, 'post', `/api/panels/${panel.id}/loads`, { answers: P1 }).expect(201);
+    await send(designer, 'post', `/api/panels/${panel.id}/loads`, { answers: fan('F-1') }).expect(201);
+    expect((await designer.agent.get(`/api/panels/${panel.id}/rule-check`).expect(200)).body.changed).toEqual([]);
+    // the earlier release left the 230 V motor out of the feeder: its roll-up had no other sources
+    const row = (await Panel.findByPk(panel.id))!;
+    const old = { ...(row.rollup as Record<string, unknown>) };
+    delete old.otherSources;
+    delete old.externalMotors;
+    delete old.otherLoadsAmps;
+    await Panel.update({ rollup: old }, { where: { id: panel.id } });
+    const check = (await designer.agent.get(`/api/panels/${panel.id}/rule-check`).expect(200)).body;
+    expect(check.changed).toEqual([
+      { loadId: expect.any(Number), tag: 'F-1', differences: [{ field: 'fedFrom', label: 'Fed from', from: 'left out of the feeder', to: 'T1, 3 kVA transformer 480-240/120 V single-phase' }] },
+    ]); // one 1.5 hp 230 V motor: 125 % × 10 A × 240 V = 3 kVA (NEC 2023 Table 430.248)
+    const p = (await designer.agent.get(`/api/panels/${panel.id}`).expect(200)).body;
+    await send(designer, 'post', `/api/panels/${panel.id}/reselect`, { version: p.version }).expect(200);
+    expect((await designer.agent.get(`/api/panels/${panel.id}/rule-check`).expect(200)).body.changed).toEqual([]);
+    expect((await designer.agent.get(`/api/panels/${panel.id}`).expect(200)).body.rollup.otherSources[0].tag).toBe('T1');
+  });
+
+  it('fedFrom external: left out of the feeder and the nameplate FLC, with the note in the checks; the submittal is written', async () => {
+    const designer = await signInAs('designer');
+    const { panel } = await newPanel(designer);
+    await send(designer, 'post', `/api/panels/${panel.id}/loads`, { answers: P1 }).expect(201);
+    const f1 = (await send(designer, 'post', `/api/panels/${panel.id}/loads`, { answers: fan('F-1') }).expect(201)).body;
+    await send(designer, 'put', `/api/loads/${f1.id}`, { answers: fan('F-1', 'external'), version: f1.version }).expect(200);
+    const detail = (await designer.agent.get(`/api/panels/${panel.id}`).expect(200)).body;
+    expect(detail.rollup.otherSources).toEqual([]);
+    expect(detail.rollup.externalMotors).toEqual([{ tag: 'F-1', supply: 'ac1', volts: 230, needs: '240/120 V single-phase (a transformer)' }]);
+    expect(detail.rollup.feeder.minAmpacity).toBe(17.5); // 125 % × 14 A
+    const checks = (await designer.agent.get(`/api/panels/${panel.id}/checks`).expect(200)).body;
+    expect(checks.nameplate.result.fullLoadAmps).toBe(14);
+    expect(checks.otherSources.lines).toEqual([expect.stringMatching(/^F-1 \(230 V single-phase\) needs 240\/120 V single-phase \(a transformer\): fed from a source outside the panel, left out of the feeder/)]);
+    const pdf = await designer.agent.get(`/api/panels/${panel.id}/submittal.pdf`).buffer(true).parse((res, cb) => {
+      const chunks: Buffer[] = [];
+      res.on('data', (c: Buffer) => chunks.push(c));
+      res.on('end', () => cb(null, Buffer.concat(chunks)));
+    });
+    expect(pdf.status).toBe(200);
   });
 });

@@ -55,6 +55,45 @@ describe('drawings in the browser', () => {
     await screenshot(page, 'drawings');
   });
 
+  it('names the motors at another voltage on the Motors page, and draws the 115 V pump from its transformer', async () => {
+    const page = await openDemoPanel(browser);
+    const note = page.getByRole('note', { name: 'Motors at another voltage' });
+    // the demo's 0.5 hp 115 V sampling pump (9.8 A, NEC 2023 Table 430.248): (125 % × 9.8 A) × 240 V = 2.94 kVA → 3 kVA
+    await note.getByText(/T1: M-401 \(115 V single-phase\) fed from a 3 kVA 480-240\/120 V single-phase transformer in the panel/).waitFor();
+    // the 5 hp 240 V DC hoist (20 A, Table 430.247): a 240 V DC supply ≥ 25 A (125 %)
+    await note.getByText(/DC1: H-601 \(240 V DC\) fed from a 240 V DC supply \(25 A\) in the panel/).waitFor();
+    const row = page.getByRole('table', { name: 'Motors' }).getByRole('row').filter({ hasText: 'M-401' });
+    await row.getByText('⚡ from T1').waitFor();
+    await screenshot(page, 'motors-other-voltage');
+
+    await page.getByRole('navigation', { name: 'Panel sections' }).getByRole('link', { name: 'Drawings' }).click();
+    const m401 = page.getByRole('img', { name: /^One-line of M-401:/ });
+    await m401.waitFor();
+    const title = await m401.locator('title').textContent();
+    expect(title).toMatch(/^One-line of M-401: Feeder bus, \d+ A T1 primary breaker, T1 — 3 kVA transformer, \d+ A T1 secondary breaker, T1 secondary bus, /);
+  });
+
+  it('asks the designer where a motor at another voltage is fed from, and only then', async () => {
+    const page = await newPage(browser);
+    await signInThroughForm(page, 'designer');
+    await page.waitForURL(/\/jobs$/);
+    await page.getByRole('table', { name: 'Jobs' }).getByRole('link', { name: 'J-2041' }).click();
+    await page.getByRole('link', { name: 'MCC-1 Pump hall' }).first().click();
+    const motors = page.getByRole('table', { name: 'Motors' });
+    await motors.getByRole('link', { name: 'M-401' }).click();
+    await page.getByRole('button', { name: /3\. Site & hazards/ }).click();
+    const fedFrom = page.getByLabel('Fed from');
+    await fedFrom.waitFor();
+    expect(await fedFrom.inputValue()).toBe('panel');
+    await screenshot(page, 'wizard-fed-from');
+    // a 460 V motor on the 480 V supply is on the panel's own bus: no question
+    await page.goBack();
+    await motors.getByRole('link', { name: 'P-101' }).click();
+    await page.getByRole('button', { name: /3\. Site & hazards/ }).click();
+    await page.getByLabel('Environment at the panel').waitFor();
+    expect(await page.getByLabel('Fed from').count()).toBe(0);
+  });
+
   it('lists the wye-delta blower at its relay’s dial limit, never at the line value', async () => {
     const page = await openDemoPanel(browser);
     const row = page.getByRole('table', { name: 'Motors' }).getByRole('row').filter({ hasText: 'K-301' });

@@ -21,6 +21,7 @@ import {
 import { calculateHeat, type EnclosureMounting, type HeatSourceInput } from '../../../shared/calc/heat';
 import { sizeControlTransformer } from '../../../shared/calc/control-power';
 import { panelNameplate } from '../../../shared/calc/nameplate';
+import { sourcesSummary } from '../../../shared/calc/other-sources';
 import { catalogueFor, labourUnitsFor } from '../catalogue/repository';
 import { activeCombinations } from '../catalogue/combinations';
 import { loadsOf } from '../panels/repository';
@@ -479,6 +480,7 @@ export async function computeChecks(actor: CurrentUser, panelId: number): Promis
     heat: heatCheck(lines, byCode, bySel, panel.mounting, job.ambientC),
     controlPower: controlPowerCheck(lines, byCode, job.supplyVolts),
     nameplate: nameplateCheck(rollup, job, sccr.panelSccrKa, enclosureType),
+    otherSources: sourcesSummary(rollup),
     connectionCards: views.map((l) => motorConnectionCard(l.id, l.answers, l.effective)),
     cautions: CHECK_CAUTIONS,
   };

@@ -63,6 +63,7 @@ export const IMPORT_COLUMNS: Column[] = [
   { header: 'insideDelta', key: 'insideDelta', kind: 'boolean', note: 'yes/no; soft starter inside the delta', example: 'no' },
   { header: 'quickStop', key: 'quickStop', kind: 'boolean', note: 'yes/no; DC quick stops (dynamic braking)', example: 'no' },
   { header: 'driveInputAmps', key: 'driveInputAmps', kind: 'number', note: "the chosen drive's rated input current, A (430.122(A))", example: '' },
+  { header: 'fedFrom', key: 'fedFrom', kind: 'string', note: 'a motor at another voltage than the supply: panel (a transformer or DC supply in the panel, the default) or external (a source outside the panel)', example: 'panel' },
   { header: 'conductorMaterial', key: 'conductorMaterial', kind: 'string', note: 'cu or al (cu by default)', example: 'cu', path: ['conductor', 'material'] },
   { header: 'conductorTempC', key: 'conductorTempC', kind: 'integer', note: 'insulation rating 60, 75 or 90 (75 by default)', example: 75, path: ['conductor', 'tempRatingC'] },
   { header: 'scpdOverridePercent', key: 'scpdOverridePercent', kind: 'number', note: '430.52(C)(1) Exception No. 2 limit, % (only with a reason)', example: '', path: ['scpdOverride', 'maxPercent'] },

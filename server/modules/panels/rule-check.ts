@@ -6,7 +6,8 @@ import { createHash } from 'node:crypto';
 import type { CurrentUser } from '../../../shared/schemas/auth';
 import { jobSupply } from '../../../shared/schemas/job';
 import type { LoadInput } from '../../../shared/schemas/load';
-import type { LoadSelection } from '../../../shared/schemas/selection';
+import type { LoadSelection, PanelRollup } from '../../../shared/schemas/selection';
+import { motorFeed } from '../../../shared/calc/other-sources';
 import type { RuleCheckBody } from '../../../shared/schemas/panel';
 import { selectionDifferences } from '../../../shared/calc/selection-diff';
 import { recordActivity } from '../activity/service';
@@ -16,14 +17,15 @@ import { ValidationError } from '../../../shared/errors';
 import { changePanel, requirePanel, reselectPanel } from './service';
 import type { Load } from '../../db/models/load';
 
-/** Each motor's selection under the current rules, or the reason its stored answers no longer pass them. */
-async function currentSelections(job: Parameters<typeof selectAll>[0], loads: Load[]): Promise<Array<LoadSelection | string>> {
+/** Each motor's selection under the current rules (or the reason its stored answers no longer pass them), and the panel roll-up when all pass. */
+async function currentSelections(job: Parameters<typeof selectAll>[0], loads: Load[]): Promise<{ results: Array<LoadSelection | string>; rollup: PanelRollup | null }> {
   try {
-    return (await selectAll(job, loads.map((l) => l.answers as LoadInput)))?.results ?? [];
+    const out = await selectAll(job, loads.map((l) => l.answers as LoadInput));
+    return { results: out?.results ?? [], rollup: out?.panel ?? null };
   } catch (e) {
     if (!(e instanceof ValidationError)) throw e;
     // one motor's answers fail the current schema: the others are still checked, that one is named
-    return Promise.all(
+    const results = await Promise.all(
       loads.map((l) =>
         selectOne(job, l.answers as LoadInput).catch((err: unknown) => {
           if (!(err instanceof ValidationError)) throw err;
@@ -31,11 +33,19 @@ async function currentSelections(job: Parameters<typeof selectAll>[0], loads: Lo
         }),
       ),
     );
+    return { results, rollup: null };
   }
 }
 
-async function differencesOf(job: Parameters<typeof selectAll>[0], loads: Load[]): Promise<RuleCheckBody['changed']> {
-  const now = await currentSelections(job, loads);
+/** Where a motor at another voltage takes its power in a roll-up, in words (a roll-up stored before the panel carried other sources has neither). */
+function feedWords(rollup: PanelRollup | null, tag: string): string {
+  const f = motorFeed(rollup, tag);
+  if (!f) return 'left out of the feeder';
+  return f.source ? `${f.source.tag}, ${f.source.description}` : 'a source outside the panel';
+}
+
+async function differencesOf(job: Parameters<typeof selectAll>[0], loads: Load[], storedRollup: PanelRollup | null): Promise<RuleCheckBody['changed']> {
+  const { results: now, rollup } = await currentSelections(job, loads);
   const changed: RuleCheckBody['changed'] = [];
   loads.forEach((l, i) => {
     const stored = l.selection as unknown as LoadSelection | null;
@@ -47,6 +57,12 @@ async function differencesOf(job: Parameters<typeof selectAll>[0], loads: Load[]
         : stored
           ? selectionDifferences(stored, current)
           : [{ field: 'selection', label: 'Selection', from: 'none', to: 'made' }];
+    // a motor at another voltage: the source the panel roll-up gives it (transformer, DC supply, outside) is a panel decision
+    if (rollup && motorFeed(rollup, l.tag)) {
+      const from = feedWords(storedRollup, l.tag);
+      const to = feedWords(rollup, l.tag);
+      if (from !== to) differences.push({ field: 'fedFrom', label: 'Fed from', from, to });
+    }
     if (differences.length) changed.push({ loadId: l.id, tag: l.tag, differences });
   });
   return changed;
@@ -68,11 +84,11 @@ export async function ruleCheck(actor: CurrentUser, panelId: number): Promise<Ru
   const p = await requirePanel(actor, panelId);
   const loads = await repo.loadsOf(p.id);
   const digest = createHash('sha1')
-    .update(JSON.stringify([jobSupply(p.job), p.job.codeEdition, loads.map((l) => [l.id, l.tag, l.answers, l.selection])]))
+    .update(JSON.stringify([jobSupply(p.job), p.job.codeEdition, p.rollup, loads.map((l) => [l.id, l.tag, l.answers, l.selection])]))
     .digest('hex');
   let hit = checked.get(p.id);
   if (!hit || hit.digest !== digest) {
-    hit = { digest, changed: await differencesOf(p.job, loads) };
+    hit = { digest, changed: await differencesOf(p.job, loads, (p.rollup ?? null) as PanelRollup | null) };
     checked.delete(p.id);
     checked.set(p.id, hit);
     if (checked.size > MAX_CHECKED) checked.delete(checked.keys().next().value as number);
@@ -84,7 +100,7 @@ export async function ruleCheck(actor: CurrentUser, panelId: number): Promise<Ru
 export async function reselectUnderCurrentRules(actor: CurrentUser, panelId: number, version: number) {
   return changePanel(actor, panelId, version, 'selected again under the current rules', async (p, t) => {
     const loads = await repo.loadsOf(p.id, t);
-    const changed = await differencesOf(p.job, loads);
+    const changed = await differencesOf(p.job, loads, (p.rollup ?? null) as PanelRollup | null);
     await reselectPanel(p, t);
     await recordActivity(
       actor,

@@ -9,6 +9,7 @@ import type { SccrResult } from '../../../shared/calc/sccr';
 import type { HeatResult } from '../../../shared/calc/heat';
 import type { ControlPowerResult } from '../../../shared/calc/control-power';
 import type { NameplateResult } from '../../../shared/calc/nameplate';
+import { motorFeed, sourcesSummary } from '../../../shared/calc/other-sources';
 import type { ConnectionCard, LineName } from '../../../shared/calc/connections';
 import { relayOf, relayWiringText } from '../../../shared/calc/overload';
 import { perWindingText } from '../../../shared/calc/scpd';
@@ -158,9 +159,16 @@ function starterText(s: LoadSelection): string {
 }
 
 
-/** The one-line of a bucket as a text chain, supply to motor. */
-export function oneLineText(s: LoadSelection): string {
-  const parts: string[] = [`Disconnect >= ${s.disconnect.minAmps} A`, `${s.scpd.ratingAmps} A ${SCPD_WORDS[s.scpd.type]}`];
+/** The one-line of a bucket as a text chain, supply to motor (from the panel's other source or an outside source when the motor is at another voltage). */
+export function oneLineText(s: LoadSelection, feed: ReturnType<typeof motorFeed> = null): string {
+  const parts: string[] = [];
+  if (feed?.source) {
+    const src = feed.source;
+    parts.push(`feeder bus ${src.primaryVolts} V`, `${src.primaryProtection.ratingAmps} A primary breaker`, src.kind === 'transformer' ? `${src.tag} ${src.kva} kVA transformer ${src.primaryVolts}-${src.secondaryLabel}` : `${src.tag} DC supply ${src.secondaryLabel}`);
+    if (src.secondaryProtection) parts.push(`${src.secondaryProtection.ratingAmps} A secondary breaker`);
+    parts.push(`${src.tag} secondary bus`);
+  } else if (feed?.external) parts.push(`outside source (${feed.external.needs}), not from this panel`);
+  parts.push(`Disconnect >= ${s.disconnect.minAmps} A`, `${s.scpd.ratingAmps} A ${SCPD_WORDS[s.scpd.type]}`);
   if (s.starter.type === 'VFD' || s.starter.type === 'dc-drive') parts.push(s.vfd ? `drive >= ${s.vfd.minOutputAmps} A` : 'drive');
   else if (s.starter.type === 'RVSS') parts.push(`soft starter${s.softStarter ? ` >= ${s.softStarter.minAmps} A${s.softStarter.bypass ? ' with bypass' : ''}` : ''}`);
   else parts.push(`${s.starter.reversingContactors ? 'reversing contactors' : 'contactor'} (${starterText(s)})`);
@@ -284,7 +292,7 @@ export function writeSubmittalPdf(
   w.heading('One-line diagrams');
   for (const s of data.selections) {
     w.sub(s.tag);
-    w.para(oneLineText(s));
+    w.para(oneLineText(s, motorFeed(data.rollup, s.tag)));
   }
 
   // Nameplate and feeder
@@ -301,6 +309,24 @@ export function writeSubmittalPdf(
     ],
   );
   for (const warn of data.nameplate.warnings) w.para(`Note: ${warn}`, 8);
+
+  // Motors at another voltage than the supply
+  const other = sourcesSummary(data.rollup);
+  if (other.lines.length > 0) {
+    w.heading('Motors at another voltage');
+    for (const line of other.lines) w.para(line);
+    for (const src of other.sources) {
+      w.table(
+        ['Item', 'Value', 'Basis'],
+        [0.25, 0.35, 0.4],
+        [
+          [src.tag, src.kind === 'transformer' ? `${src.kva} kVA ${src.primaryVolts}-${src.secondaryLabel} (load ${fmt(src.loadKva, 2)} kVA)` : `${src.secondaryLabel}, >= ${fmt(src.secondaryAmps, 2)} A`, src.basis],
+          ['Primary protection', `${src.primaryProtection.ratingAmps} A (limit ${fmt(src.primaryProtection.maxAmps, 2)} A)`, src.primaryProtection.basis],
+          ...(src.secondaryProtection ? [['Secondary protection', `${src.secondaryProtection.ratingAmps} A (limit ${fmt(src.secondaryProtection.maxAmps, 2)} A)`, src.secondaryProtection.basis]] : []),
+        ],
+      );
+    }
+  }
 
   // SCCR worksheet
   w.heading('Short-circuit current rating worksheet');

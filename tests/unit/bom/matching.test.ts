@@ -89,6 +89,13 @@ const cases: Array<[string, Requirement, string | null]> = [
   ['CPT exactly 5000 VA', { category: 'control-transformer', minVa: 5000, secondaryVolts: 120, volts: 480 }, 'PW-CT-5000-120'],
   ['CPT over 5000 VA', { category: 'control-transformer', minVa: 5001, secondaryVolts: 120, volts: 480 }, null],
   ['CPT 24 V above 500 VA', { category: 'control-transformer', minVa: 501, secondaryVolts: 24, volts: 480 }, null],
+  // Power transformers for motors at another voltage (standard kVA ratings) and DC supplies
+  ['transformer 7.5 kVA 480-240/120 V single-phase', { category: 'power-transformer', kind: 'single-phase', minVa: 7500, secondaryVolts: 240, volts: 480 }, 'PW-XF-1-7A5K-240'],
+  ['transformer just over 7.5 kVA', { category: 'power-transformer', kind: 'single-phase', minVa: 7501, secondaryVolts: 240, volts: 480 }, 'PW-XF-1-10K-240'],
+  ['transformer 15 kVA 480-208Y/120 V three-phase', { category: 'power-transformer', kind: 'three-phase', minVa: 13871, secondaryVolts: 208, volts: 480 }, 'PW-XF-3-15K-208Y'],
+  ['transformer with a 600 V primary', { category: 'power-transformer', kind: 'three-phase', minVa: 9000, secondaryVolts: 208, volts: 600 }, null],
+  ['DC supply 25 A at 240 V', { category: 'dc-power-supply', minAmps: 25, secondaryVolts: 240, volts: 480 }, 'PW-DS-240-025'],
+  ['DC supply above 100 A', { category: 'dc-power-supply', minAmps: 101, secondaryVolts: 240, volts: 480 }, null],
   // Terminal blocks
   ['10 AWG at exactly 30 A', { category: 'terminal-block', kind: 'feed-through', wireSize: '10', minAmps: 30 }, 'PW-TB-10-FT'],
   ['10 AWG needing just over 30 A', { category: 'terminal-block', kind: 'feed-through', wireSize: '10', minAmps: 30.5 }, 'PW-TB-8-FT'],

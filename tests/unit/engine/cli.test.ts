@@ -38,7 +38,10 @@ describe('npm run -s select -- FILE.json', () => {
     expect(sp601.flcAmps).toBe(16); // NEC 2023 Table 430.248
     expect(hs701.cautions.join(' ')).toMatch(/DC series motor unloaded/);
     expect(w801.starter.type).toBe('dc-drive');
-    expect(out.panel.feeder).toMatchObject({ minAmpacity: 317, conductorSize: '400 kcmil', ocpdMaxAmps: 500 }); // 430.24, 430.62(A)
+    // 430.24, 430.62(A): 317 A of motors on the 480 V bus, plus the primary currents of the panel's sources for
+    // SP-601 (T1, 5 kVA 480-240/120 V: 10.42 A), HS-701 (DC1: 16.13 A estimated) and W-801 (T2, 9 kVA 480-240 V: 10.83 A)
+    expect(out.panel.feeder).toMatchObject({ minAmpacity: 354.38, conductorSize: '500 kcmil', ocpdMaxAmps: 500 }); // 500 kcmil Cu 75 °C = 380 A, NEC 2023 Table 310.16
+    expect(out.panel.otherSources.map((s: { tag: string; kva: number | null }) => [s.tag, s.kva])).toEqual([['T1', 5], ['DC1', null], ['T2', 9]]);
     for (const r of out.results) expect(r.errors).toEqual([]);
   }, 60_000);
 

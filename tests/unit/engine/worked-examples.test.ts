@@ -164,10 +164,13 @@ describe('panel roll-up through selectPanel (NEC 2023 430.24, 430.62(A))', () =>
       loads: [
         motor({ tag: 'A', hp: 25, scpdType: 'instantaneous-trip-breaker' }),
         motor({ tag: 'B', hp: 10 }),
-        motor({ tag: 'DC', supply: 'dc', hp: 5, volts: 240, dcField: 'shunt' }),
-        motor({ tag: 'SP', supply: 'ac1', hp: 1, volts: 115 }),
+        // fed from outside the panel: left out with a note (fedFrom "panel" gives them a source, below)
+        motor({ tag: 'DC', supply: 'dc', hp: 5, volts: 240, dcField: 'shunt', fedFrom: 'external' }),
+        motor({ tag: 'SP', supply: 'ac1', hp: 1, volts: 115, fedFrom: 'external' }),
       ],
     });
+    expect(out.panel.externalMotors?.map((m) => m.tag)).toEqual(['DC', 'SP']);
+    expect(out.panel.otherLoadsAmps).toBe(0);
     // A: 34 A x 250 % (inverse-time feeder device) = 85 -> 90 A; 90 + 14 = 104 -> 100 A
     expect(out.panel.feeder.ocpdMaxAmps).toBe(100);
     expect(out.panel.feeder.minAmpacity).toBe(56.5);

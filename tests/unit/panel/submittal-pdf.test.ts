@@ -133,3 +133,30 @@ describe('PDF submittal', () => {
     expect(buf.toString('latin1')).toContain('/FlateDecode');
   });
 });
+
+describe('PDF submittal: motors at another voltage', () => {
+  it('names the transformer and its protection, and the motor fed from outside the panel', async () => {
+    const d = data();
+    d.rollup = {
+      ...rollup,
+      otherSources: [
+        {
+          kind: 'transformer', tag: 'T1', description: '7.5 kVA transformer 480-240/120 V single-phase', phases: 1, primaryVolts: 480, secondaryVolts: 240, secondaryLabel: '240/120 V single-phase',
+          loadKva: 5.4, kva: 7.5, secondaryAmps: 31.25, primaryAmps: 15.63,
+          // NEC 2023 Table 450.3(B): 250 % × 15.63 A → 35 A; 125 % × 31.25 A → 40 A (Note 1)
+          primaryProtection: { method: 'primary-and-secondary', percent: 250, maxAmps: 39.08, ratingAmps: 35, basis: 'NEC 2023 Table 450.3(B) primary' },
+          secondaryProtection: { method: 'primary-and-secondary', percent: 125, maxAmps: 39.06, ratingAmps: 40, basis: 'NEC 2023 Table 450.3(B) secondary' },
+          motors: [{ tag: 'F-1', supply: 'ac1', volts: 230, amps: 10, circuitVolts: 240 }, { tag: 'F-2', supply: 'ac1', volts: 230, amps: 10, circuitVolts: 240 }],
+          basis: 'NEC 2023 430.24', notes: [],
+        },
+      ],
+      externalMotors: [{ tag: 'S-9', supply: 'ac1', volts: 115, needs: '240/120 V single-phase (a transformer)' }],
+      otherLoadsAmps: 15.63,
+    };
+    const { buf } = await render({ compress: false, font: 'helvetica' }, d);
+    const text = extractPdfText(buf).replace(/\s+/g, ' ');
+    expect(text).toContain('Motors at another voltage');
+    expect(text).toContain('T1: F-1 (230 V single-phase), F-2 (230 V single-phase) fed from a 7.5 kVA 480-240/120 V single-phase transformer in the panel');
+    expect(text).toMatch(/S-9 \(115 V single-phase\) needs 240\/120 V single-phase \(a transformer\): fed from a source outside the panel/);
+  });
+});

@@ -3,7 +3,8 @@ import { useParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { panelQueries } from '../../../features/panels/api/panels';
 import { checkQueries, submittalPdfUrl } from '../../../features/checks/api/checks';
 import type { PanelChecks } from '../../../../shared/schemas/checks';
-import { OneLine } from '../../../features/drawings/components/one-line';
+import { OneLine, type MotorFeed } from '../../../features/drawings/components/one-line';
+import { motorFeed } from '../../../../shared/calc/other-sources';
 import { ConnectionCardDrawing } from '../../../features/drawings/components/connection-card';
 import { queryClient } from '../../../lib/query-client';
 import { Caution, Empty, ErrorNote, Loading } from '../../../components/ui/feedback';
@@ -17,7 +18,7 @@ export async function loader({ params }: LoaderFunctionArgs) {
 
 const ROTATION = 'Check rotation before coupling the load.';
 
-function Bucket({ load, card }: { load: LoadView; card: PanelChecks['connectionCards'][number] | undefined }) {
+function Bucket({ load, card, feed }: { load: LoadView; card: PanelChecks['connectionCards'][number] | undefined; feed: MotorFeed }) {
   const s = load.effective ?? load.selection;
   const answers = load.answers as { description?: string; hp?: number; kw?: number; volts?: number; supply?: string };
   const rating = [answers.hp !== undefined ? `${answers.hp} hp` : answers.kw !== undefined ? `${answers.kw} kW` : null, answers.volts !== undefined ? `${answers.volts} V` : null, answers.supply === 'dc' ? 'DC' : answers.supply === 'ac1' ? '1φ' : '3φ']
@@ -36,7 +37,7 @@ function Bucket({ load, card }: { load: LoadView; card: PanelChecks['connectionC
         <div>
           <h3 className="mb-1 text-xs font-semibold tracking-wide text-ink-soft uppercase">One-line</h3>
           {s && s.errors.length === 0 ? (
-            <OneLine selection={s} />
+            <OneLine selection={s} feed={feed} />
           ) : (
             <p className="text-sm text-state-returned">✖ No one-line until the motor’s selection is fixed{s ? `: ${s.errors.join('; ')}` : ''}.</p>
           )}
@@ -103,7 +104,7 @@ export function Component() {
       {p.loads.length === 0 ? (
         <Empty title="No motors on this panel yet">Add motors to see their one-lines and connection cards.</Empty>
       ) : (
-        p.loads.map((l) => <Bucket key={l.id} load={l} card={cards.get(l.id)} />)
+        p.loads.map((l) => <Bucket key={l.id} load={l} card={cards.get(l.id)} feed={motorFeed(p.rollup, l.tag)} />)
       )}
       <Caution />
     </div>

@@ -11,6 +11,7 @@ import { OverrideEditor } from '../../../features/panels/components/override-edi
 import { jobSupply } from '../../../../shared/schemas/job';
 import { ENVIRONMENT_LABELS } from '../../../features/panels/components/answer-labels';
 import { browserSelector } from '../../../lib/selector';
+import { needsOtherSource } from '../../../../shared/calc/other-sources';
 import { Field, SelectField, inputClass, type SelectOption } from '../../../components/ui/field';
 import { Button } from '../../../components/ui/button';
 import { Caution, ErrorNote } from '../../../components/ui/feedback';
@@ -21,7 +22,7 @@ const STEPS = ['Nameplate', 'Duty', 'Site & hazards', 'Protection'] as const;
 const STEP_FIELDS: Record<(typeof STEPS)[number], string[]> = {
   Nameplate: ['tag', 'description', 'supply', 'hp', 'kw', 'volts', 'hz', 'fla', 'serviceFactor', 'tempRiseC', 'lockedRotorWithstandS', 'codeLetter', 'design', 'energyEfficient', 'poles', 'rotor', 'singlePhaseType', 'dcField', 'leads', 'connection'],
   Duty: ['duty', 'jogging', 'plugging', 'reversing', 'speedControl', 'turndown', 'torque', 'startingLimit', 'starterPreference', 'insideDelta', 'inertia', 'twoSpeed', 'quickStop'],
-  'Site & hazards': ['environment', 'reverseRotationHazard', 'critical', 'cableLengthFt'],
+  'Site & hazards': ['environment', 'reverseRotationHazard', 'critical', 'cableLengthFt', 'fedFrom'],
   Protection: ['scpdType', 'conductor'],
 };
 
@@ -263,6 +264,17 @@ export function Component() {
                 />
               </div>
               <Field label="Cable length to the motor" unit="ft" error={e.cableLengthFt?.message} hint="Long drive leads need an output filter">{(a) => <input {...a} {...register('cableLengthFt', optNum)} inputMode="decimal" className={inputClass} />}</Field>
+              {needsOtherSource(values, p.job.supplyVolts) ? (
+                <div className="col-span-2">
+                  <SelectField
+                    label="Fed from"
+                    error={e.fedFrom?.message}
+                    hint={`Rated ${String(values.volts ?? '')} V${supplyKind === 'dc' ? ' DC' : ''} on a ${p.job.supplyVolts} V supply: the panel carries a transformer or DC supply for it (sized, protected per NEC 450.3(B), in the bill of materials and the feeder), or it is fed from outside the panel and left out of the feeder`}
+                    field={register('fedFrom', opt)}
+                    options={[['panel', 'A transformer or DC supply in this panel'], ['external', 'A source outside the panel']]}
+                  />
+                </div>
+              ) : null}
               <fieldset className="col-span-full space-y-2 text-sm">
                 <legend className="mb-1 text-xs font-semibold uppercase text-ink-soft">Hazards</legend>
                 <label className="flex items-center gap-2"><input type="checkbox" {...register('reverseRotationHazard')} /> Running backwards would damage the machine or hurt someone (screw compressor, hoist, one-way coupling)</label>

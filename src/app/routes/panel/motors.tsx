@@ -9,6 +9,7 @@ import { Caution, Empty, ErrorNote } from '../../../components/ui/feedback';
 import { Button } from '../../../components/ui/button';
 import { inputClass } from '../../../components/ui/field';
 import { ENVIRONMENT_LABELS } from '../../../features/panels/components/answer-labels';
+import { sourcesSummary } from '../../../../shared/calc/other-sources';
 
 export function Component() {
   const panelId = Number(useParams().panelId);
@@ -21,6 +22,9 @@ export function Component() {
   const [bulkValue, setBulkValue] = useState('indoor-dusty');
   if (!p) return null;
   const canEdit = hasRole(me, 'designer', 'admin') && p.status !== 'in_review';
+  const sources = sourcesSummary(p.rollup);
+  const sourceOf = new Map(sources.sources.flatMap((s) => s.motors.map((m) => [m.tag, s] as const)));
+  const external = new Set(sources.externalMotors.map((m) => m.tag));
   const toggle = (id: number) => setSelected((s) => (s.includes(id) ? s.filter((x) => x !== id) : [...s, id]));
   const applyBulk = () => {
     const value = bulkField === 'critical' || bulkField === 'reverseRotationHazard' ? bulkValue === 'true' : bulkValue;
@@ -53,6 +57,26 @@ export function Component() {
           </span>
         ) : null}
       </div>
+      {sources.lines.length > 0 ? (
+        <div className="rounded border border-state-review/40 bg-warn-bg px-3 py-2 text-sm" role="note" aria-label="Motors at another voltage">
+          <p className="font-semibold">
+            ◔ {sources.sources.reduce((n, s) => n + s.motors.length, 0) + sources.externalMotors.length} motor{sources.sources.reduce((n, s) => n + s.motors.length, 0) + sources.externalMotors.length === 1 ? '' : 's'} at another voltage than the {p.job.supplyVolts} V {p.job.supplyPhases === 1 ? 'single' : 'three'}-phase supply need another source:
+          </p>
+          <ul className="mt-1 list-disc space-y-0.5 pl-5">
+            {sources.lines.map((l) => (
+              <li key={l}>{l}</li>
+            ))}
+          </ul>
+          <p className="mt-1 text-xs text-ink-soft">Change a motor’s “Fed from” answer in the wizard to move it between a source in the panel and one outside it.</p>
+        </div>
+      ) : null}
+      {p.rollup?.errors?.length ? (
+        <div className="rounded border border-state-returned/40 bg-bad-bg px-3 py-2 text-sm" role="alert">
+          {p.rollup.errors.map((e) => (
+            <p key={e}>✖ {e}</p>
+          ))}
+        </div>
+      ) : null}
       {canEdit && selected.length > 0 ? (
         <div className="flex flex-wrap items-center gap-2 rounded border border-copper-500/40 bg-copper-50 px-3 py-2 text-sm" role="group" aria-label="Bulk edit">
           <strong>{selected.length} selected:</strong> set
@@ -127,6 +151,16 @@ export function Component() {
                       {bad ? <span className="font-semibold text-state-returned" title={s?.errors.join('; ')}>✖ error</span> : null}
                       {l.overrides.length ? <span className="ml-1 rounded bg-copper-100 px-1 font-semibold text-copper-700">{l.overrides.length} override</span> : null}
                       {s && s.assumed.length ? <span className="ml-1 text-state-review" title={s.assumed.map((a) => a.field).join(', ')}>◔ {s.assumed.length} assumed</span> : null}
+                      {sourceOf.has(l.tag) ? (
+                        <span className="ml-1 whitespace-nowrap rounded bg-surface px-1 font-semibold" title={sourceOf.get(l.tag)!.description}>
+                          ⚡ from {sourceOf.get(l.tag)!.tag}
+                        </span>
+                      ) : null}
+                      {external.has(l.tag) ? (
+                        <span className="ml-1 whitespace-nowrap rounded bg-warn-bg px-1 font-semibold text-state-review" title="Fed from a source outside the panel: not in the feeder or the panel's full-load current">
+                          ⚡ outside source
+                        </span>
+                      ) : null}
                     </td>
                     {canEdit ? (
                       <td className="whitespace-nowrap px-2 py-1.5 text-right">

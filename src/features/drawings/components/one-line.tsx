@@ -1,6 +1,7 @@
 import type { LoadSelection } from '../../../../shared/schemas/selection';
 import { relayWiringText } from '../../../../shared/calc/overload';
 import { SCPD_WORDS } from '../../../../shared/calc/scpd';
+import type { motorFeed } from '../../../../shared/calc/other-sources';
 
 const SLATE = '#334155';
 const COPPER = '#b87333';
@@ -15,6 +16,8 @@ export type OneLineKind =
   | 'overload'
   | 'vfd'
   | 'soft-starter'
+  | 'transformer'
+  | 'dc-supply'
   | 'motor';
 
 export interface OneLineElement {
@@ -42,9 +45,29 @@ function contactorPoles(s: LoadSelection): { poles: string[]; label: string } {
   }
 }
 
-/** The one-line of a bucket, top (supply) to bottom (motor). Pure: same selection, same list. */
-export function oneLineElements(s: LoadSelection): OneLineElement[] {
-  const out: OneLineElement[] = [{ kind: 'bus', label: 'Feeder bus', detail: `${s.volts} V` }];
+export type MotorFeed = ReturnType<typeof motorFeed>;
+
+/** Where the bucket takes its power: the feeder bus, or — for a motor at another voltage — the panel's
+ *  transformer or DC supply (feeder bus, primary device, the source, its secondary bus), or a source outside the panel. */
+function feedElements(s: LoadSelection, feed: MotorFeed): OneLineElement[] {
+  if (!feed) return [{ kind: 'bus', label: 'Feeder bus', detail: `${s.volts} V` }];
+  if (feed.external) return [{ kind: 'bus', label: 'Outside source (not from this panel)', detail: `${feed.external.needs}` }];
+  const src = feed.source;
+  const out: OneLineElement[] = [
+    { kind: 'bus', label: 'Feeder bus', detail: `${src.primaryVolts} V` },
+    { kind: 'breaker', label: `${src.primaryProtection.ratingAmps} A ${src.tag} primary breaker`, detail: src.primaryProtection.basis },
+    src.kind === 'transformer'
+      ? { kind: 'transformer', label: `${src.tag} — ${src.kva} kVA transformer`, detail: `${src.primaryVolts}-${src.secondaryLabel}` }
+      : { kind: 'dc-supply', label: `${src.tag} — DC supply`, detail: `${src.primaryVolts} V in, ${src.secondaryLabel} ≥ ${src.secondaryAmps} A out` },
+  ];
+  if (src.secondaryProtection) out.push({ kind: 'breaker', label: `${src.secondaryProtection.ratingAmps} A ${src.tag} secondary breaker`, detail: src.secondaryProtection.basis });
+  out.push({ kind: 'bus', label: `${src.tag} secondary bus`, detail: src.kind === 'transformer' ? `${src.secondaryLabel}` : src.secondaryLabel });
+  return out;
+}
+
+/** The one-line of a bucket, top (supply) to bottom (motor). Pure: same selection and feed, same list. */
+export function oneLineElements(s: LoadSelection, feed: MotorFeed = null): OneLineElement[] {
+  const out: OneLineElement[] = feedElements(s, feed);
   out.push({
     kind: 'disconnect',
     label: 'Disconnect',
@@ -167,6 +190,26 @@ function Symbol({ e, y }: { e: OneLineElement; y: number }) {
           <line x1={X} y1={mid + 6} x2={X} y2={y + STEP} />
         </g>
       );
+    case 'transformer':
+      return (
+        <g stroke={SLATE} strokeWidth={2} fill="none">
+          <line x1={X} y1={y} x2={X} y2={mid - 22} />
+          <circle cx={X} cy={mid - 9} r={13} fill="#fff" />
+          <circle cx={X} cy={mid + 9} r={13} fill="none" stroke={COPPER} />
+          <line x1={X} y1={mid + 22} x2={X} y2={y + STEP} />
+        </g>
+      );
+    case 'dc-supply':
+      return (
+        <g stroke={SLATE} strokeWidth={2} fill="none">
+          <line x1={X} y1={y} x2={X} y2={mid - 16} />
+          <rect x={X - 24} y={mid - 16} width={48} height={32} fill="#fff" />
+          <line x1={X - 24} y1={mid + 16} x2={X + 24} y2={mid - 16} strokeWidth={1} />
+          <text x={X - 12} y={mid - 3} fontSize={9} textAnchor="middle" fill={COPPER} stroke="none" fontFamily={FONT}>AC</text>
+          <text x={X + 12} y={mid + 11} fontSize={9} textAnchor="middle" fill={COPPER} stroke="none" fontFamily={FONT}>DC</text>
+          <line x1={X} y1={mid + 16} x2={X} y2={y + STEP} />
+        </g>
+      );
     case 'vfd':
     case 'soft-starter':
       return (
@@ -194,12 +237,14 @@ function Symbol({ e, y }: { e: OneLineElement; y: number }) {
 
 export interface OneLineProps {
   selection: LoadSelection;
+  /** what the bucket is fed from (motorFeed of the panel roll-up); null: the feeder bus */
+  feed?: MotorFeed;
   width?: number;
 }
 
 /** One-line diagram of a bucket as SVG. */
-export function OneLine({ selection, width = 420 }: OneLineProps) {
-  const elements = oneLineElements(selection);
+export function OneLine({ selection, feed = null, width = 420 }: OneLineProps) {
+  const elements = oneLineElements(selection, feed);
   const height = elements.length * STEP + 10;
   const titleId = `one-line-${selection.tag}`;
   return (
