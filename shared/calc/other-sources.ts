@@ -66,7 +66,8 @@ export function sourceNeed(load: Pick<Load, 'supply' | 'volts'>, selection: Pick
     return { ...acNeed(line.phases, line.volts, supply, amps), note };
   }
   const circuit = nominalSystemVolts(load.volts);
-  if (circuit !== null && circuit === system) return { on: 'bus' };
+  // a motor rated at the supply's own voltage (say 400 V on a 400 V supply, outside the nominal systems) is on the bus too
+  if (load.volts === supply.volts || (circuit !== null && circuit === system)) return { on: 'bus' };
   if (circuit === null) return { on: 'none', reason: `rated ${load.volts} V is outside the nominal system voltages (120, 208, 240, 480, 600 V): no standard transformer secondary` };
   return acNeed(load.supply === 'ac1' ? 1 : 3, circuit, supply, selection.flcAmps);
 }
@@ -122,11 +123,11 @@ export function otherSources(supply: Supply, loads: readonly Load[], results: re
       out.notes.push(`${r.tag}: ${need.note}; counted on the feeder`);
       return;
     }
-    if (need.on === 'none') {
+    if (need.on === 'none' && load.fedFrom !== 'external') {
       out.errors.push(`${r.tag}: ${need.reason}; left out of the feeder`);
       return;
     }
-    if (load.fedFrom === 'external') {
+    if (load.fedFrom === 'external' || need.on === 'none') {
       const needs = sourceNeedWords(need) ?? '';
       out.externalMotors.push({ tag: r.tag, supply: load.supply as SupplyKind, volts: load.volts, needs });
       out.notes.push(`${r.tag}: rated ${load.volts} V ${load.supply === 'dc' ? 'DC' : load.supply === 'ac1' ? 'single-phase' : 'three-phase'}, fed from a source outside the panel (${needs}): left out of the feeder and the panel's full-load current`);

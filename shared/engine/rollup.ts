@@ -26,7 +26,7 @@ export function panelRollupOf(supply: Supply, loads: ReadonlyArray<Load>, result
       errors.push(`${r.tag}: a three-phase motor cannot be fed from a single-phase supply`);
       return;
     }
-    if (nominalSystemVolts(load.volts) === null || nominalSystemVolts(load.volts) !== supplySystem) return; // shared/calc/other-sources
+    if (load.volts !== supply.volts && (nominalSystemVolts(load.volts) === null || nominalSystemVolts(load.volts) !== supplySystem)) return; // shared/calc/other-sources
     let deviceAmps = r.scpd.ratingAmps;
     if (r.scpd.type === 'instantaneous-trip-breaker') {
       // 430.62(A): an instantaneous-trip branch counts at the Table 430.52 % of the feeder device type

@@ -108,6 +108,10 @@ describe('which motors need another source', () => {
   ] as const)('%o on 480 V three-phase: %s', (load, on) => {
     expect(sourceNeed(load, fvnr, { volts: 480, phases: 3 }).on).toBe(on);
   });
+  it('a motor rated at the supply voltage is on the bus even outside the nominal systems (400 V on a 400 V supply)', () => {
+    expect(sourceNeed({ supply: 'ac3', volts: 400 }, fvnr, { volts: 400, phases: 3 }).on).toBe('bus');
+    expect(sourceNeed({ supply: 'ac3', volts: 400 }, fvnr, { volts: 480, phases: 3 }).on).toBe('none');
+  });
 });
 
 describe('the roll-up counts the sources (selectPanel, NEC 2023)', () => {
