@@ -29,8 +29,9 @@ export const PanelInputSchema = z.object({
   ...panelFields,
   description: panelFields.description.default(''),
   mounting: panelFields.mounting.default('wall-mounted'),
-  markupPercent: panelFields.markupPercent.default(15),
-  labourRate: panelFields.labourRate.default(85),
+  /** absent: the shop's default markup and labour rate (shop settings) */
+  markupPercent: panelFields.markupPercent.optional(),
+  labourRate: panelFields.labourRate.optional(),
 });
 export type PanelInput = z.input<typeof PanelInputSchema>;
 
