@@ -1,4 +1,5 @@
 import type { Transaction } from 'sequelize';
+import { Op } from 'sequelize';
 import type { CurrentUser } from '../../../shared/schemas/auth';
 import { Activity } from '../../db/models/activity';
 import { User } from '../../db/models/user';
@@ -48,4 +49,15 @@ export async function listActivity(actor: CurrentUser, where: { jobId?: number; 
     user: (r as unknown as { user?: { name: string } }).user?.name ?? null,
     at: r.createdAt,
   }));
+}
+
+/** What a person did to a panel since a moment (the last sign-off), oldest first: action, summary and diff. */
+export async function panelActionsBy(organisationId: number, panelId: number, userId: number, since: Date | null, transaction?: Transaction) {
+  const rows = await Activity.findAll({
+    where: { organisationId, panelId, userId, ...(since ? { createdAt: { [Op.gt]: since } } : {}) },
+    attributes: ['action', 'summary', 'diff'],
+    order: [['id', 'ASC']],
+    transaction,
+  });
+  return rows.map((r) => ({ action: r.action, summary: r.summary, diff: r.diff }));
 }
