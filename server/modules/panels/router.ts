@@ -171,8 +171,8 @@ export const panelRoutes = [
   defineRoute({
     method: 'get',
     path: '/api/panels/:panelId/sign-off-eligibility',
-    access: ENGINEER,
-    summary: 'Whether this engineer may sign the panel off (separation of duties), and why not',
+    access: ALL,
+    summary: 'Whether the signed-in person may sign the panel off as its reviewer (separation of duties), and why not',
     params: PanelId,
     handler: ({ user, params }) => review.signOffEligibility(user, params.panelId),
   }),
