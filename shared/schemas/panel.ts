@@ -138,3 +138,15 @@ export const BulkEditSchema = z.object({
     .refine((c) => Object.keys(c).length > 0, 'Choose at least one answer to change'),
   panelVersion: z.number().int().min(0),
 });
+
+/** Whether the signed-in person may sign a panel off as its reviewer (separation of duties). */
+export interface SignOffEligibility {
+  /** they submitted or changed the panel since its last revision */
+  selfReview: boolean;
+  /** the shop's settings allow them to sign it off anyway */
+  allowed: boolean;
+  /** what they did, in the activity's words (at most 5) */
+  actions: string[];
+  /** why the sign-off is refused, in plain words, or null */
+  reason: string | null;
+}

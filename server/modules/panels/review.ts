@@ -2,6 +2,7 @@
 import { db } from '../../db/sequelize';
 import type { CurrentUser } from '../../../shared/schemas/auth';
 import type { BomLine } from '../../../shared/schemas/catalogue';
+import type { SignOffEligibility } from '../../../shared/schemas/panel';
 import { computeTotals, diffBoms } from '../../../shared/calc/bom';
 import { selectionDifferences } from '../../../shared/calc/selection-diff';
 import type { LoadSelection } from '../../../shared/schemas/selection';
@@ -79,17 +80,6 @@ async function authoredBy(actor: CurrentUser, p: Panel, t?: Transaction): Promis
 
 function sinceText(p: Panel) {
   return p.revisionNumber === null ? 'since it was started' : `since R${p.revisionNumber}`;
-}
-
-export interface SignOffEligibility {
-  /** the person submitted or changed the panel since its last revision */
-  selfReview: boolean;
-  /** the shop's settings allow them to sign it off anyway */
-  allowed: boolean;
-  /** what they did, in the activity's words (at most 5) */
-  actions: string[];
-  /** why the sign-off is refused, in plain words, or null */
-  reason: string | null;
 }
 
 function eligibility(p: Panel, actions: string[], allowSelfSignOff: boolean): SignOffEligibility {

@@ -7,7 +7,8 @@ import { SignOffState } from '../../../components/ui/status';
 import { Button } from '../../../components/ui/button';
 import { Caution, ErrorNote, Loading } from '../../../components/ui/feedback';
 import { inputClass } from '../../../components/ui/field';
-import { ApiError } from '../../../lib/api-client';
+import { ApiError, get } from '../../../lib/api-client';
+import type { SignOffEligibility } from '../../../../shared/schemas/panel';
 import { checkQueries } from '../../../features/checks/api/checks';
 import { DecisionDifferences } from '../../../features/panels/components/decision-differences';
 
@@ -74,6 +75,13 @@ export function Component() {
   const [acknowledged, setAcknowledged] = useState(false);
   const reviewing = p?.status === 'in_review' && hasRole(me, 'engineer');
   const checks = useQuery({ ...checkQueries.panel(panelId), enabled: reviewing });
+  // separation of duties: the server refuses a sign-off by someone who submitted or changed the panel
+  const own = useQuery({
+    queryKey: [...panelQueries.detail(panelId).queryKey, 'sign-off-eligibility', p?.version],
+    queryFn: () => get<SignOffEligibility>(`/api/panels/${panelId}/sign-off-eligibility`),
+    enabled: reviewing,
+  });
+  const selfRefused = own.data?.reason ?? null;
   const revs = p?.revisions ?? [];
   const [from, setFrom] = useState<number | null>(null);
   const [to, setTo] = useState<number | null>(null);
@@ -150,9 +158,14 @@ export function Component() {
             {canSubmit ? <Button onClick={() => run('submit')} disabled={act.isPending}>Submit for sign-off</Button> : null}
             {canReview ? (
               <>
-                <Button onClick={() => run('approve')} disabled={act.isPending || (needsAck && (!acknowledged || reasonShort))}>✔ Sign off as R{p.revisionNumber === null ? 0 : p.revisionNumber + 1}</Button>
+                <Button onClick={() => run('approve')} disabled={act.isPending || !!selfRefused || (needsAck && (!acknowledged || reasonShort))}>✔ Sign off as R{p.revisionNumber === null ? 0 : p.revisionNumber + 1}</Button>
                 <Button variant="danger" onClick={() => run('return')} disabled={act.isPending || !comment.trim()}>↩ Return to designer</Button>
               </>
+            ) : null}
+            {canReview && selfRefused ? (
+              <p className="basis-full text-sm text-state-returned" data-testid="sign-off-self">✖ {selfRefused}</p>
+            ) : canReview && own.data?.selfReview ? (
+              <p className="basis-full text-sm text-state-review" data-testid="sign-off-self">◔ You submitted or changed this panel; the shop settings allow you to sign it off, and the activity will record it as a self sign-off.</p>
             ) : null}
             {p.status === 'in_review' && !isEngineer ? <p className="text-sm text-state-review">◔ Waiting for an engineer.</p> : null}
             {(p.status === 'draft' || p.status === 'returned') && !isDesigner ? (
