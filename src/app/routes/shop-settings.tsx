@@ -35,7 +35,8 @@ function SchemePreview({ scheme }: { scheme: string }) {
   );
 }
 
-function LogoSection({ settings }: { settings: ShopSettings }) {
+/** `moved(from, to)`: our own upload or removal moved the settings' version */
+function LogoSection({ settings, moved }: { settings: ShopSettings; moved: (from: number, to: number) => void }) {
   const { upload, remove } = useLogo();
   const input = useRef<HTMLInputElement>(null);
   const stamp = settings.logo?.updatedAt ?? '';
@@ -57,11 +58,16 @@ function LogoSection({ settings }: { settings: ShopSettings }) {
           className="text-sm"
           onChange={(e) => {
             const file = e.target.files?.[0];
-            if (file) upload.mutate({ file, version: settings.version }, { onSettled: () => { if (input.current) input.current.value = ''; } });
+            if (file) {
+              upload.mutate(
+                { file, version: settings.version },
+                { onSuccess: (s) => moved(settings.version, s.version), onSettled: () => { if (input.current) input.current.value = ''; } },
+              );
+            }
           }}
         />
         {settings.logo ? (
-          <Button variant="ghost" disabled={remove.isPending} onClick={() => remove.mutate(settings.version)}>
+          <Button variant="ghost" disabled={remove.isPending} onClick={() => remove.mutate(settings.version, { onSuccess: (s) => moved(settings.version, s.version) })}>
             Remove the logo
           </Button>
         ) : null}
@@ -73,17 +79,16 @@ function LogoSection({ settings }: { settings: ShopSettings }) {
   );
 }
 
-function SettingsForm({ settings }: { settings: ShopSettings }) {
+function SettingsForm({ settings, base, setBase }: { settings: ShopSettings; base: number; setBase: (v: number) => void }) {
   const save = useSaveSettings();
   const { register, handleSubmit, formState, reset, control } = useForm<ShopSettingsInput>({ resolver: zodResolver(ShopSettingsFields), defaultValues: fieldsOf(settings) });
-  // the version these fields were read at: a save over someone else's newer change answers 409
-  const [base, setBase] = useState(settings.version);
+  // `base`: the version these fields were read at; a save over someone else's newer change answers 409
   const dirty = formState.isDirty;
   useEffect(() => {
     if (dirty) return; // keep the person's edits (and their version) until they save or reload
     reset(fieldsOf(settings));
     setBase(settings.version);
-  }, [settings, reset, dirty]);
+  }, [settings, reset, dirty, setBase]);
   const scheme = useWatch({ control, name: 'drawingNumberScheme' }) ?? '';
   const e = formState.errors;
   return (
@@ -144,6 +149,7 @@ function SettingsForm({ settings }: { settings: ShopSettings }) {
 export function Component() {
   const { data: me } = useQuery(sessionQueries.me());
   const settings = useQuery(settingsQueries.shop());
+  const [base, setBase] = useState<number | null>(null);
   if (!hasRole(me, 'admin')) {
     return (
       <div>
@@ -157,8 +163,8 @@ export function Component() {
       <PageHeader title="Shop settings" subtitle="The shop's name, address and logo on every submittal, the pricing a new panel starts with, drawing numbers and the sign-off rule" />
       {settings.isPending ? <Loading /> : settings.isError ? <ErrorNote error={settings.error} /> : (
         <div className="space-y-5">
-          <SettingsForm settings={settings.data} />
-          <LogoSection settings={settings.data} />
+          <SettingsForm settings={settings.data} base={base ?? settings.data.version} setBase={setBase} />
+          <LogoSection settings={settings.data} moved={(from, to) => setBase((b) => ((b ?? from) === from ? to : b))} />
         </div>
       )}
     </div>
