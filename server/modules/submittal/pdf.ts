@@ -169,6 +169,15 @@ function starterText(s: LoadSelection): string {
 
 const STEP = 36;
 
+/** The text cut to fit `width` on one line at the current font and size, with an ellipsis when cut. */
+function fitLine(doc: Doc, text: string, width: number): string {
+  const t = pdfSafe(text);
+  if (doc.widthOfString(t) <= width) return t;
+  let n = t.length;
+  while (n > 0 && doc.widthOfString(`${t.slice(0, n).trimEnd()}…`) > width) n--;
+  return `${t.slice(0, n).trimEnd()}…`;
+}
+
 /** One symbol of a one-line, on the vertical at x from y to y + STEP (our own plain style). */
 function drawSymbol(doc: Doc, e: OneLineElement, x: number, y: number, bold: string): void {
   const mid = y + STEP / 2;
@@ -252,8 +261,12 @@ function drawOneLine(w: Writer, s: LoadSelection): void {
   elements.forEach((e, i) => {
     const y = top + i * STEP;
     drawSymbol(doc, e, x, y, w.bold);
-    doc.font(w.bold).fontSize(8.5).fillColor(SLATE).text(pdfSafe(e.label), x + 44, y + STEP / 2 - 9, { width: w.width - 90, lineBreak: false, ellipsis: true });
-    if (e.detail) doc.font(w.regular).fontSize(7).fillColor(SLATE).text(pdfSafe(e.detail.replace(/ · /g, '; ')), x + 44, y + STEP / 2 + 1, { width: w.width - 90, lineBreak: false, ellipsis: true });
+    doc.font(w.bold).fontSize(8.5).fillColor(SLATE);
+    doc.text(fitLine(doc, e.label, w.width - 90), x + 44, y + STEP / 2 - 9, { lineBreak: false });
+    if (e.detail) {
+      doc.font(w.regular).fontSize(7);
+      doc.text(fitLine(doc, e.detail.replace(/ · /g, '; '), w.width - 90), x + 44, y + STEP / 2 + 1, { lineBreak: false });
+    }
   });
   doc.x = MARGIN;
   doc.y = top + height;
@@ -277,17 +290,21 @@ function titleBlock(doc: Doc, t: TitleBlockData, fonts: { regular: string; bold:
   const x0 = MARGIN;
   const w = doc.page.width - 2 * MARGIN;
   const y0 = doc.page.height - MARGIN - TITLE_BLOCK_H;
-  const cols = [0.3, 0.27, 0.11, 0.18, 0.14].map((f) => f * w);
+  const cols = [0.27, 0.26, 0.1, 0.16, 0.21].map((f) => f * w);
   doc.save();
   doc.rect(x0, y0, w, TITLE_BLOCK_H).lineWidth(0.8).strokeColor(SLATE).stroke();
   let x = x0;
-  const cell = (i: number, label: string, lines: Array<{ text: string; bold?: boolean }>) => {
+  /** `shrink`: smaller type (down to 6.5 pt) before the text is cut */
+  const cell = (i: number, label: string, lines: Array<{ text: string; bold?: boolean; shrink?: boolean }>) => {
     if (i > 0) doc.moveTo(x, y0).lineTo(x, y0 + TITLE_BLOCK_H).lineWidth(0.5).strokeColor(SLATE).stroke();
     const cw = cols[i];
-    doc.font(fonts.regular).fontSize(6).fillColor('#64748b').text(label.toUpperCase(), x + 5, y0 + 5, { width: cw - 10, lineBreak: false });
+    doc.font(fonts.regular).fontSize(6).fillColor('#64748b').text(label.toUpperCase(), x + 5, y0 + 5, { lineBreak: false });
     let y = y0 + 15;
     for (const l of lines) {
-      doc.font(l.bold ? fonts.bold : fonts.regular).fontSize(l.bold ? 8.5 : 7.5).fillColor(SLATE).text(pdfSafe(l.text), x + 5, y, { width: cw - 10, lineBreak: false, ellipsis: true });
+      let size = l.bold ? 8.5 : 7.5;
+      doc.font(l.bold ? fonts.bold : fonts.regular).fontSize(size).fillColor(SLATE);
+      while (l.shrink && size > 6.5 && doc.widthOfString(pdfSafe(l.text)) > cw - 10) doc.fontSize((size -= 0.5));
+      doc.text(fitLine(doc, l.text, cw - 10), x + 5, y, { lineBreak: false });
       y += l.bold ? 11 : 10;
     }
     x += cw;
@@ -304,9 +321,9 @@ function titleBlock(doc: Doc, t: TitleBlockData, fonts: { regular: string; bold:
   }
   x += shopX;
   cols[0] -= shopX;
-  cell(0, 'Shop', [{ text: t.shop.name, bold: true }, ...(address.length ? [{ text: address.slice(0, 2).join(', ') }] : []), ...(address.length > 2 ? [{ text: address.slice(2).join(', ') }] : [])]);
-  cell(1, 'Job / panel', [{ text: `${t.job.number} - ${t.job.name}`, bold: true }, { text: `Panel ${t.panel.name}` }]);
-  cell(2, 'Revision', [{ text: t.panel.revisionCode, bold: true }, { text: t.panel.revision === t.panel.revisionCode ? '' : t.panel.revision }]);
+  cell(0, 'Shop', [{ text: t.shop.name, bold: true, shrink: true }, ...address.slice(0, 1).map((text) => ({ text })), ...(address.length > 1 ? [{ text: address.slice(1).join(', ') }] : [])]);
+  cell(1, 'Job / panel', [{ text: `Job ${t.job.number}`, bold: true }, { text: t.job.name }, { text: `Panel ${t.panel.name}` }]);
+  cell(2, 'Revision', [{ text: t.panel.revisionCode, bold: true }, { text: t.signOff ? '' : 'draft' }]);
   cell(3, 'Signed off', t.signOff ? [{ text: t.signOff.by ?? 'engineer', bold: true }, { text: `on ${t.signOff.date}` }] : [{ text: 'Not signed off', bold: true }]);
   cell(4, 'Drawing', [{ text: '' }, { text: `Page ${page} of ${pages}` }]);
   // the drawing number whole on one line: smaller type for a long one, never wrapped or cut
