@@ -222,6 +222,25 @@ describe('separation of duties at sign-off', () => {
     expect((await approve('both', panelId, p.version).expect(200)).body.status).toBe('signed_off');
   });
 
+  it("counts a change to the job's supply data, not to its name, nor a change of markup", async () => {
+    const job = (await send(s.designer, 'post', '/api/jobs', { number: uniq(), name: 'Job data' }).expect(201)).body;
+    const panel = (await send(s.designer, 'post', `/api/jobs/${job.id}/panels`, { name: 'Job data' }).expect(201)).body;
+    await send(s.designer, 'post', `/api/panels/${panel.id}/loads`, { answers: DEMO_MOTORS[3] }).expect(201);
+    const j1 = (await s.both.agent.get(`/api/jobs/${job.id}`).expect(200)).body;
+    await send(s.both, 'patch', `/api/jobs/${job.id}`, { name: 'Job data (renamed)', version: j1.version }).expect(200);
+    const p1 = (await s.both.agent.get(`/api/panels/${panel.id}`).expect(200)).body;
+    await send(s.both, 'patch', `/api/panels/${panel.id}`, { markupPercent: 18, version: p1.version }).expect(200);
+    expect((await s.both.agent.get(`/api/panels/${panel.id}/sign-off-eligibility`).expect(200)).body.selfReview).toBe(false);
+    const j2 = (await s.both.agent.get(`/api/jobs/${job.id}`).expect(200)).body;
+    await send(s.both, 'patch', `/api/jobs/${job.id}`, { ambientC: 45, version: j2.version }).expect(200);
+    const e = (await s.both.agent.get(`/api/panels/${panel.id}/sign-off-eligibility`).expect(200)).body;
+    expect(e.selfReview).toBe(true);
+    expect(e.actions.join(' ')).toMatch(/Changed job/);
+    const p2 = (await s.designer.agent.get(`/api/panels/${panel.id}`).expect(200)).body;
+    const sub = (await send(s.designer, 'post', `/api/panels/${panel.id}/submit`, { version: p2.version, comment: '' }).expect(200)).body;
+    await approve('both', panel.id, sub.version).expect(403);
+  });
+
   it('counts only what was done since the last revision', async () => {
     const { panelId, version } = await reviewPanel('both', 'Since R0');
     await approve('engineer', panelId, version).expect(200); // R0 by another engineer

@@ -51,13 +51,21 @@ export async function listActivity(actor: CurrentUser, where: { jobId?: number; 
   }));
 }
 
-/** What a person did to a panel since a moment (the last sign-off), oldest first: action, summary and diff. */
-export async function panelActionsBy(organisationId: number, panelId: number, userId: number, since: Date | null, transaction?: Transaction) {
+/**
+ * What a person did to a panel, or to its job's own data (supply, fault current, code edition), since a
+ * moment (the last sign-off), oldest first: entity, action, summary and diff.
+ */
+export async function panelActionsBy(organisationId: number, panel: { id: number; jobId: number }, userId: number, since: Date | null, transaction?: Transaction) {
   const rows = await Activity.findAll({
-    where: { organisationId, panelId, userId, ...(since ? { createdAt: { [Op.gt]: since } } : {}) },
-    attributes: ['action', 'summary', 'diff'],
+    where: {
+      organisationId,
+      userId,
+      [Op.or]: [{ panelId: panel.id }, { jobId: panel.jobId, entity: 'job' }],
+      ...(since ? { createdAt: { [Op.gt]: since } } : {}),
+    },
+    attributes: ['entity', 'action', 'summary', 'diff'],
     order: [['id', 'ASC']],
     transaction,
   });
-  return rows.map((r) => ({ action: r.action, summary: r.summary, diff: r.diff }));
+  return rows.map((r) => ({ entity: r.entity, action: r.action, summary: r.summary, diff: r.diff }));
 }

@@ -61,21 +61,30 @@ export async function returnPanel(actor: CurrentUser, panelId: number, version: 
   return panelDetail(actor, panelId);
 }
 
-/** What someone may do to a panel without becoming one of its authors: comment, review, archive. */
-const NOT_AUTHORING = new Set(['commented', 'returned', 'signed-off', 'self-sign-off', 'sign-off-refused', 'archived', 'restored']);
+/** What someone may do to a panel without becoming one of its authors: comment, review, archive, rebuild the bill of materials from the selections (the sign-off rebuilds it too). */
+const NOT_AUTHORING = new Set(['commented', 'returned', 'signed-off', 'self-sign-off', 'sign-off-refused', 'archived', 'restored', 'rebuilt']);
 /** Panel settings that price the work and do not change the design. */
 const PRICING_ONLY = new Set(['markupPercent', 'labourRate']);
+/** The job's answers the selections rest on; its name, customer or notes do not make a designer. */
+const JOB_DESIGN = new Set(['supplyVolts', 'supplyPhases', 'supplyHz', 'availableFaultKa', 'ambientC', 'codeEdition']);
+
+function authoring(a: { entity: string; action: string; diff: Record<string, unknown> | null }): boolean {
+  if (NOT_AUTHORING.has(a.action)) return false;
+  const keys = Object.keys(a.diff ?? {});
+  if (a.entity === 'job') return a.action === 'created' || keys.some((k) => JOB_DESIGN.has(k));
+  return !(a.action === 'updated' && keys.length > 0 && keys.every((k) => PRICING_ONLY.has(k)));
+}
 
 /**
  * Separation of duties: what the person did to the panel since its last signed-off revision that makes
- * them one of its authors (submitted it, changed its motors, overrides, bill of materials or settings).
+ * them one of its authors (submitted it, changed its motors, overrides, bill of materials or settings, or
+ * the job's supply, fault current or code edition).
  * Empty when they may sign it off as its reviewer.
  */
 async function authoredBy(actor: CurrentUser, p: Panel, t?: Transaction): Promise<string[]> {
   const last = p.revisionNumber === null ? null : await repo.Revision.findOne({ where: { organisationId: actor.organisationId, panelId: p.id, number: p.revisionNumber }, transaction: t });
-  const actions = await panelActionsBy(actor.organisationId, p.id, actor.id, last?.approvedAt ?? null, t);
-  const authoring = actions.filter((a) => !NOT_AUTHORING.has(a.action) && !(a.action === 'updated' && a.diff && Object.keys(a.diff).every((k) => PRICING_ONLY.has(k))));
-  return [...new Set(authoring.map((a) => a.summary))];
+  const actions = await panelActionsBy(actor.organisationId, p, actor.id, last?.approvedAt ?? null, t);
+  return [...new Set(actions.filter(authoring).map((a) => a.summary))];
 }
 
 function sinceText(p: Panel) {
