@@ -29,8 +29,9 @@ export const PanelInputSchema = z.object({
   ...panelFields,
   description: panelFields.description.default(''),
   mounting: panelFields.mounting.default('wall-mounted'),
-  markupPercent: panelFields.markupPercent.default(15),
-  labourRate: panelFields.labourRate.default(85),
+  /** absent: the shop's default markup and labour rate (shop settings) */
+  markupPercent: panelFields.markupPercent.optional(),
+  labourRate: panelFields.labourRate.optional(),
 });
 export type PanelInput = z.input<typeof PanelInputSchema>;
 
@@ -137,3 +138,15 @@ export const BulkEditSchema = z.object({
     .refine((c) => Object.keys(c).length > 0, 'Choose at least one answer to change'),
   panelVersion: z.number().int().min(0),
 });
+
+/** Whether the signed-in person may sign a panel off as its reviewer (separation of duties). */
+export interface SignOffEligibility {
+  /** they submitted or changed the panel since its last revision */
+  selfReview: boolean;
+  /** the shop's settings allow them to sign it off anyway */
+  allowed: boolean;
+  /** what they did, in the activity's words (at most 5) */
+  actions: string[];
+  /** why the sign-off is refused, in plain words, or null */
+  reason: string | null;
+}

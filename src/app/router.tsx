@@ -42,6 +42,7 @@ export const router = createBrowserRouter([
       { path: 'catalogue', lazy: () => import('./routes/catalogue') },
       { path: 'labour-units', lazy: () => import('./routes/labour-units') },
       { path: 'people', lazy: () => import('./routes/people') },
+      { path: 'settings', lazy: () => import('./routes/shop-settings') },
       { path: 'outbox', lazy: () => import('./routes/outbox') },
       { path: '*', lazy: () => import('./routes/not-found') },
     ],

@@ -1,4 +1,5 @@
 import type { Transaction } from 'sequelize';
+import { Op } from 'sequelize';
 import type { CurrentUser } from '../../../shared/schemas/auth';
 import { Activity } from '../../db/models/activity';
 import { User } from '../../db/models/user';
@@ -48,4 +49,23 @@ export async function listActivity(actor: CurrentUser, where: { jobId?: number; 
     user: (r as unknown as { user?: { name: string } }).user?.name ?? null,
     at: r.createdAt,
   }));
+}
+
+/**
+ * What a person did to a panel, or to its job's own data (supply, fault current, code edition), since a
+ * moment (the last sign-off), oldest first: entity, action, summary and diff.
+ */
+export async function panelActionsBy(organisationId: number, panel: { id: number; jobId: number }, userId: number, since: Date | null, transaction?: Transaction) {
+  const rows = await Activity.findAll({
+    where: {
+      organisationId,
+      userId,
+      [Op.or]: [{ panelId: panel.id }, { jobId: panel.jobId, entity: 'job' }],
+      ...(since ? { createdAt: { [Op.gt]: since } } : {}),
+    },
+    attributes: ['entity', 'action', 'summary', 'diff'],
+    order: [['id', 'ASC']],
+    transaction,
+  });
+  return rows.map((r) => ({ entity: r.entity, action: r.action, summary: r.summary, diff: r.diff }));
 }

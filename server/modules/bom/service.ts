@@ -16,6 +16,7 @@ import { recordActivity } from '../activity/service';
 import { catalogueFor, labourUnitsFor } from '../catalogue/repository';
 import { loadsOf } from '../panels/repository';
 import { loadView, openBomChange, requirePanel } from '../panels/service';
+import { shopSettingsOf } from '../settings/service';
 
 /** Most protective enclosure type among the buckets (common practice: one enclosure serves the worst environment). */
 const STRINGENCY = ['1', '12', '3R', '4', '4X', '9', '7'];
@@ -383,13 +384,14 @@ export async function panelExport(actor: CurrentUser, panelId: number): Promise<
   };
 }
 
-/** Every panel of the job that is not archived. The summary's rate and markup are the first panel's (each panel's own are on the page). */
+/** Every panel of the job that is not archived. The summary's rate and markup are the first panel's (each panel's own are on the page), the shop's defaults for a job with no panel. */
 export async function jobExport(actor: CurrentUser, jobId: number): Promise<{ job: BomExportJob; panels: BomExportPanel[]; fileBase: string }> {
   const job = await getJob(actor, jobId);
   const panels = await Panel.findAll({ where: { organisationId: actor.organisationId, jobId: job.id, archivedAt: null }, order: [['name', 'ASC'], ['id', 'ASC']] });
   const rows = await BomLineRow.findAll({ where: { organisationId: actor.organisationId, panelId: panels.map((p) => p.id) }, order: [['position', 'ASC'], ['id', 'ASC']] });
+  const shop = panels.length ? null : await shopSettingsOf(actor.organisationId);
   return {
-    job: { number: job.number, name: job.name, customer: job.customer || undefined, markupPercent: panels[0]?.markupPercent ?? 15, labourRatePerHour: panels[0]?.labourRate ?? 85 },
+    job: { number: job.number, name: job.name, customer: job.customer || undefined, markupPercent: panels[0]?.markupPercent ?? shop!.defaultMarkupPercent, labourRatePerHour: panels[0]?.labourRate ?? shop!.defaultLabourRate },
     panels: panels.map((p) => ({ name: p.name, lines: rows.filter((r) => r.panelId === p.id).map((r) => r.line as unknown as BomLine) })),
     fileBase: `${job.number}-bom`,
   };

@@ -31,6 +31,8 @@ import { storedBomLines } from './repository';
 import { motorConnectionCard } from './connection';
 import type { Panel } from '../../db/models/panel';
 import type { Job } from '../../db/models/job';
+import { shopSettingsOf } from '../settings/service';
+import type { ShopSettings } from '../../../shared/schemas/settings';
 
 /** Control circuit voltage of the panel (the bill of materials' default). */
 export const CONTROL_VOLTS = 120;
@@ -356,7 +358,7 @@ function controlPowerCheck(lines: readonly BomLine[], byCode: ReadonlyMap<string
   }
 }
 
-function nameplateCheck(rollup: PanelRollup | null, job: Job, sccrKa: number | null, enclosureType: string): NameplateCheck {
+function nameplateCheck(rollup: PanelRollup | null, job: Job, sccrKa: number | null, enclosureType: string, shopName: string): NameplateCheck {
   if (!rollup) return { result: null, reason: 'The panel has no roll-up yet: add a motor so the selection engine can total the full-load current and size the feeder.' };
   try {
     return {
@@ -365,6 +367,7 @@ function nameplateCheck(rollup: PanelRollup | null, job: Job, sccrKa: number | n
         supply: { volts: job.supplyVolts, phases: job.supplyPhases === 1 ? 1 : 3, hz: job.supplyHz === 50 ? 50 : 60 },
         sccrKa,
         enclosureType,
+        shopName,
       }),
       reason: null,
     };
@@ -379,6 +382,7 @@ export interface ChecksContext {
   selections: LoadSelection[];
   rollup: PanelRollup | null;
   panel: Panel & { job: Job };
+  shop: ShopSettings;
 }
 
 /** The SCCR worksheet's input from a bill of materials, the catalogue, the selections and the tested combinations. */
@@ -407,11 +411,12 @@ export async function panelSccrFor(organisationId: number, lines: readonly BomLi
 export async function computeChecks(actor: CurrentUser, panelId: number): Promise<ChecksContext> {
   const panel = await requirePanel(actor, panelId);
   const job = panel.job;
-  const [loads, stored, catalogue, combinations] = await Promise.all([
+  const [loads, stored, catalogue, combinations, shop] = await Promise.all([
     loadsOf(panel.id),
     storedBomLines(actor.organisationId, panel.id),
     catalogueFor(actor.organisationId),
     activeCombinations(actor.organisationId),
+    shopSettingsOf(actor.organisationId),
   ]);
   const views = loads.map(loadView);
   const all = views.flatMap((l) => (l.effective ? [l.effective] : []));
@@ -479,12 +484,12 @@ export async function computeChecks(actor: CurrentUser, panelId: number): Promis
     sccr,
     heat: heatCheck(lines, byCode, bySel, panel.mounting, job.ambientC),
     controlPower: controlPowerCheck(lines, byCode, job.supplyVolts),
-    nameplate: nameplateCheck(rollup, job, sccr.panelSccrKa, enclosureType),
+    nameplate: nameplateCheck(rollup, job, sccr.panelSccrKa, enclosureType, shop.name),
     otherSources: sourcesSummary(rollup),
     connectionCards: views.map((l) => motorConnectionCard(l.id, l.answers, l.effective)),
     cautions: CHECK_CAUTIONS,
   };
-  return { checks, selections, rollup, panel };
+  return { checks, selections, rollup, panel, shop };
 }
 
 function revisionText(p: Panel): string {

@@ -2,13 +2,17 @@
 import { db } from '../../db/sequelize';
 import type { CurrentUser } from '../../../shared/schemas/auth';
 import type { BomLine } from '../../../shared/schemas/catalogue';
+import type { SignOffEligibility } from '../../../shared/schemas/panel';
 import { computeTotals, diffBoms } from '../../../shared/calc/bom';
 import { selectionDifferences } from '../../../shared/calc/selection-diff';
 import type { LoadSelection } from '../../../shared/schemas/selection';
-import { ConflictError, NotFoundError, ValidationError } from '../../../shared/errors';
+import { ConflictError, ForbiddenError, NotFoundError, ValidationError } from '../../../shared/errors';
 import * as repo from './repository';
 import { loadView, panelDetail, requirePanel } from './service';
-import { recordActivity } from '../activity/service';
+import { panelActionsBy, recordActivity } from '../activity/service';
+import { shopSettingsOf } from '../settings/service';
+import type { Transaction } from 'sequelize';
+import type { Panel } from '../../db/models/panel';
 import { regenerateBom } from '../bom/service';
 import { panelSccrFor } from '../checks/service';
 import { sendMail } from '../mail/mailer';
@@ -57,6 +61,65 @@ export async function returnPanel(actor: CurrentUser, panelId: number, version: 
   return panelDetail(actor, panelId);
 }
 
+/** What someone may do to a panel without becoming one of its authors: comment, review, archive, rebuild the bill of materials from the selections (the sign-off rebuilds it too). */
+const NOT_AUTHORING = new Set(['commented', 'returned', 'signed-off', 'self-sign-off', 'sign-off-refused', 'archived', 'restored', 'rebuilt']);
+/** Panel settings that price the work and do not change the design. */
+const PRICING_ONLY = new Set(['markupPercent', 'labourRate']);
+/** The job's answers the selections rest on; its name, customer or notes do not make a designer. */
+const JOB_DESIGN = new Set(['supplyVolts', 'supplyPhases', 'supplyHz', 'availableFaultKa', 'ambientC', 'codeEdition']);
+
+function authoring(a: { entity: string; action: string; diff: Record<string, unknown> | null }): boolean {
+  if (NOT_AUTHORING.has(a.action)) return false;
+  const keys = Object.keys(a.diff ?? {});
+  if (a.entity === 'job') return a.action === 'created' || keys.some((k) => JOB_DESIGN.has(k));
+  return !(a.action === 'updated' && keys.length > 0 && keys.every((k) => PRICING_ONLY.has(k)));
+}
+
+/**
+ * Separation of duties: what the person did to the panel since its last signed-off revision that makes
+ * them one of its authors (submitted it, changed its motors, overrides, bill of materials or settings, or
+ * the job's supply, fault current or code edition).
+ * Empty when they may sign it off as its reviewer.
+ */
+async function authoredBy(actor: CurrentUser, p: Panel, t?: Transaction): Promise<string[]> {
+  const last = p.revisionNumber === null ? null : await repo.Revision.findOne({ where: { organisationId: actor.organisationId, panelId: p.id, number: p.revisionNumber }, transaction: t });
+  const actions = await panelActionsBy(actor.organisationId, p, actor.id, last?.approvedAt ?? null, t);
+  return [...new Set(actions.filter(authoring).map((a) => a.summary))];
+}
+
+function sinceText(p: Panel) {
+  return p.revisionNumber === null ? 'since it was started' : `since R${p.revisionNumber}`;
+}
+
+function eligibility(p: Panel, actions: string[], allowSelfSignOff: boolean): SignOffEligibility {
+  const selfReview = actions.length > 0;
+  return {
+    selfReview,
+    allowed: allowSelfSignOff,
+    actions: actions.slice(0, 5),
+    reason:
+      selfReview && !allowSelfSignOff
+        ? `You submitted or changed panel ${p.name} ${sinceText(p)}, so another engineer must sign it off (a shop administrator can allow self sign-off in Shop settings).`
+        : null,
+  };
+}
+
+/** Whether this engineer may sign the panel off, and if not, why (the sign-off section says it beside the button). */
+export async function signOffEligibility(actor: CurrentUser, panelId: number): Promise<SignOffEligibility> {
+  const p = await requirePanel(actor, panelId);
+  const [actions, shop] = await Promise.all([authoredBy(actor, p), shopSettingsOf(actor.organisationId)]);
+  return eligibility(p, actions, shop.allowSelfSignOff);
+}
+
+class SelfSignOffRefused extends ForbiddenError {
+  constructor(
+    message: string,
+    readonly panel: Panel,
+  ) {
+    super(message);
+  }
+}
+
 /** The shortest reason an engineer may give when signing off a panel rated below the site's fault current. */
 const MIN_JUSTIFICATION = 15;
 
@@ -71,10 +134,13 @@ export async function approvePanel(
   comment: string,
   opts: { failAfterFreeze?: boolean; acknowledgeSccr?: boolean } = {},
 ) {
+  const shop = await shopSettingsOf(actor.organisationId);
   const p = await db().transaction(async (t) => {
     const p = await requirePanel(actor, panelId, t, true);
     if (p.version !== version) throw new ConflictError(`Someone else changed panel ${p.name} since you opened it: reload and try again`);
     if (p.status !== 'in_review') throw new ConflictError(`Panel ${p.name} is not in review`);
+    const own = eligibility(p, await authoredBy(actor, p, t), shop.allowSelfSignOff);
+    if (own.reason) throw new SelfSignOffRefused(own.reason, p);
     const lines = await regenerateBom(actor.organisationId, p, t);
     const loads = (await repo.loadsOf(p.id, t)).map(loadView);
     // NEC 409.22(A): a panel is not installed where the available fault current exceeds its SCCR. A
@@ -110,7 +176,19 @@ export async function approvePanel(
     if (opts.failAfterFreeze) throw new Error('failure injected after the revision was written');
     await repo.bumpPanel(actor.organisationId, p.id, p.version, { status: 'signed_off', revisionNumber: number, bomGeneratedAt: new Date() }, t);
     await recordActivity(actor, { entity: 'panel', entityId: p.id, jobId: p.jobId, panelId: p.id, action: 'signed-off', summary: `Signed off ${p.name} as R${number}${finding ? ` acknowledging: ${finding}` : ''}${comment ? `: ${comment.slice(0, 100)}` : ''}` }, t);
+    if (own.selfReview) {
+      await recordActivity(
+        actor,
+        { entity: 'panel', entityId: p.id, jobId: p.jobId, panelId: p.id, action: 'self-sign-off', summary: `Signed off R${number} of ${p.name} after submitting or changing it (self sign-off allowed by the shop settings)`, diff: { own: own.actions } },
+        t,
+      );
+    }
     return Object.assign(p, { revisionNumber: number });
+  }).catch(async (e: unknown) => {
+    if (e instanceof SelfSignOffRefused) {
+      await recordActivity(actor, { entity: 'panel', entityId: e.panel.id, jobId: e.panel.jobId, panelId: e.panel.id, action: 'sign-off-refused', summary: `Sign-off of ${e.panel.name} refused: ${actor.name} submitted or changed it ${sinceText(e.panel)}` });
+    }
+    throw e;
   });
   const designers = await repo.usersWithRole(actor.organisationId, 'designer');
   const estimators = await repo.usersWithRole(actor.organisationId, 'estimator');

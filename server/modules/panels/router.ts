@@ -170,6 +170,14 @@ export const panelRoutes = [
   }),
   defineRoute({
     method: 'get',
+    path: '/api/panels/:panelId/sign-off-eligibility',
+    access: ALL,
+    summary: 'Whether the signed-in person may sign the panel off as its reviewer (separation of duties), and why not',
+    params: PanelId,
+    handler: ({ user, params }) => review.signOffEligibility(user, params.panelId),
+  }),
+  defineRoute({
+    method: 'get',
     path: '/api/panels/:panelId/revisions/:number',
     access: ALL,
     summary: 'One frozen revision',

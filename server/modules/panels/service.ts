@@ -15,6 +15,7 @@ import * as repo from './repository';
 import { rollupOf, selectAll, selectOne } from './selection';
 import { recordActivity } from '../activity/service';
 import { getJob, jobView } from '../jobs/service';
+import { shopSettingsOf } from '../settings/service';
 import type { Panel } from '../../db/models/panel';
 import type { Load } from '../../db/models/load';
 import type { Job } from '../../db/models/job';
@@ -126,9 +127,12 @@ async function panelDetailOf(p: Panel & { job: Job }): Promise<PanelDetail> {
   };
 }
 
-export async function createPanel(actor: CurrentUser, jobId: number, values: { name: string; description: string; mounting: string; markupPercent: number; labourRate: number }) {
+/** A new panel; without its own markup and labour rate it takes the shop's defaults (a panel keeps its own after that). */
+export async function createPanel(actor: CurrentUser, jobId: number, values: { name: string; description: string; mounting: string; markupPercent?: number; labourRate?: number }) {
   const job = await getJob(actor, jobId);
-  const p = await repo.Panel.create({ ...values, organisationId: actor.organisationId, jobId: job.id, revisionNumber: null, archivedAt: null, rollup: null, submittedAt: null });
+  const shop = await shopSettingsOf(actor.organisationId);
+  const pricing = { markupPercent: values.markupPercent ?? shop.defaultMarkupPercent, labourRate: values.labourRate ?? shop.defaultLabourRate };
+  const p = await repo.Panel.create({ ...values, ...pricing, organisationId: actor.organisationId, jobId: job.id, revisionNumber: null, archivedAt: null, rollup: null, submittedAt: null });
   await recordActivity(actor, { entity: 'panel', entityId: p.id, jobId, panelId: p.id, action: 'created', summary: `Created panel ${p.name}` });
   return panelDetail(actor, p.id);
 }

@@ -3,6 +3,8 @@ import { defineRoute } from '../../http/route-table';
 import { ConflictError } from '../../../shared/errors';
 import { computeChecks } from '../checks/service';
 import { getRevision } from '../panels/review';
+import { revisionsOf } from '../panels/repository';
+import { logoOf } from '../settings/service';
 import { writeSubmittalPdf, type SubmittalData } from './pdf';
 
 const ALL = ['admin', 'designer', 'estimator', 'engineer'] as const;
@@ -27,9 +29,11 @@ export const submittalRoutes = [
     summary: 'The panel submittal as a PDF (download)',
     params: PanelId,
     handler: async ({ user, params, res }) => {
-      const { checks, selections, rollup, panel } = await computeChecks(user, params.panelId);
+      const { checks, selections, rollup, panel, shop } = await computeChecks(user, params.panelId);
       // a signed-off panel: its revision, and what the engineer acknowledged when signing (NEC 409.22)
       const revision = panel.status === 'signed_off' && panel.revisionNumber !== null ? await getRevision(user, panel.id, panel.revisionNumber) : null;
+      const signer = revision ? (await revisionsOf(panel.id)).find((r) => r.number === revision.number)?.approvedBy ?? null : null;
+      const logo = shop.logo ? await logoOf(user.organisationId) : null;
       const frozen = (revision?.snapshot as { sccr?: { acknowledged?: { finding: string; by: string; reason: string } | null } } | undefined)?.sccr;
       const missing = [
         selections.length === 0 ? 'the panel has no motors' : null,
@@ -50,12 +54,19 @@ export const submittalRoutes = [
           ambientC: checks.job.ambientC,
           codeEdition: `NEC ${checks.job.codeEdition}`,
         },
-        panel: { name: checks.panel.name, revision: checks.panel.revision, date: new Date().toISOString().slice(0, 10), enclosureType: checks.panel.enclosureType },
+        panel: {
+          name: checks.panel.name,
+          revision: checks.panel.revision,
+          revisionCode: revision ? `R${revision.number}` : 'D',
+          date: new Date().toISOString().slice(0, 10),
+          enclosureType: checks.panel.enclosureType,
+        },
+        shop: { name: shop.name, address: shop.address, logo: logo?.data ?? null, drawingNumberScheme: shop.drawingNumberScheme },
         selections,
         rollup,
         nameplate: checks.nameplate.result,
         sccr: checks.sccr,
-        ...(revision ? { signOff: { revision: `R${revision.number}`, date: new Date(revision.approvedAt).toISOString().slice(0, 10), acknowledged: frozen?.acknowledged ?? null } } : {}),
+        ...(revision ? { signOff: { revision: `R${revision.number}`, date: new Date(revision.approvedAt).toISOString().slice(0, 10), by: signer, acknowledged: frozen?.acknowledged ?? null } } : {}),
         heat: checks.heat.result,
         controlPower: checks.controlPower.result,
         connectionCards: checks.connectionCards.flatMap((c) => (c.card ? [{ tag: c.tag, card: c.card }] : [])),

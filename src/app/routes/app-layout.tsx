@@ -27,6 +27,7 @@ export function AppLayout() {
     { to: '/catalogue', label: 'Catalogue', show: true },
     { to: '/labour-units', label: 'Labour units', show: true },
     { to: '/people', label: 'People', show: hasRole(me, 'admin') },
+    { to: '/settings', label: 'Shop settings', show: hasRole(me, 'admin') },
     { to: '/outbox', label: 'Outbox', show: hasRole(me, 'admin') },
   ];
   return (

@@ -1,3 +1,4 @@
+import { inflateSync } from 'node:zlib';
 // A small text extractor for the uncompressed PDFs pdfkit writes (compress: false): follows each font's
 // ToUnicode map for embedded fonts and reads standard-font strings as Latin-1. Test use only.
 
@@ -49,4 +50,26 @@ export function extractPdfText(pdf: Buffer): string {
     }
   }
   return out.join(' ').replace(/\s+/g, ' ');
+}
+
+/** The same PDF with its Flate streams inflated, for extractPdfText on a compressed document (test use only). */
+export function inflatePdf(pdf: Buffer): Buffer {
+  const parts: Buffer[] = [];
+  let at = 0;
+  const src = pdf.toString('latin1');
+  const re = /\/FlateDecode[\s\S]*?>>\s*stream\r?\n/g;
+  for (let m = re.exec(src); m; m = re.exec(src)) {
+    const start = m.index + m[0].length;
+    const end = src.indexOf('endstream', start);
+    parts.push(pdf.subarray(at, start));
+    try {
+      parts.push(inflateSync(pdf.subarray(start, end)), Buffer.from('\n'));
+    } catch {
+      parts.push(pdf.subarray(start, end));
+    }
+    at = end;
+    re.lastIndex = end;
+  }
+  parts.push(pdf.subarray(at));
+  return Buffer.concat(parts);
 }

@@ -20,7 +20,8 @@ function data(): SubmittalData {
   });
   return {
     job: { number: 'J-2041', name: 'Clarifier upgrade', customer: 'Cedar Flats water works', site: 'Plant 2', availableFaultKa: 22, ambientC: 30, codeEdition: 'NEC 2023' },
-    panel: { name: 'MCP-1', revision: 'R1', date: '2025-03-14', enclosureType: '12', shopName: 'Cedar Flats Panel Works' },
+    panel: { name: 'MCP-1', revision: 'R1', date: '2025-03-14', enclosureType: '12' },
+    shop: { name: 'Cedar Flats Panel Works', address: '12 Foundry Lane, Cedar Flats', drawingNumberScheme: '{job}-{panel}-{sheet:2}' },
     selections: [pumpFvnr, conveyorFvr, blowerVfd],
     rollup,
     sccr,
@@ -52,6 +53,8 @@ async function render(opts: SubmittalPdfOptions, d: SubmittalData = data()): Pro
   const { font } = await writeSubmittalPdf(d, stream, opts);
   return { buf: Buffer.concat(chunks), font };
 }
+
+const pageCount = (pdf: Buffer) => (pdf.toString('latin1').match(/\/Type \/Page\b(?!s)/g) ?? []).length;
 
 describe('PDF submittal', () => {
   for (const fontChoice of ['barlow', 'helvetica'] as const) {
@@ -126,6 +129,59 @@ describe('PDF submittal', () => {
     const draft = extractPdfText((await render({ compress: false })).buf);
     expect(draft).not.toContain('with this rating');
     expect(draft).not.toContain('R1 on');
+  });
+
+  it('puts the title block on every page: shop, job, panel, revision, drawing number, page n of N, sign-off', async () => {
+    const { buf } = await render({ compress: false, font: 'helvetica' });
+    const text = extractPdfText(buf);
+    const pages = pageCount(buf);
+    expect(pages).toBeGreaterThan(4);
+    // on the cover, on the nameplate (Manufacturer, NEC 2023 409.110(1)) and in each page's title block
+    expect(text.split('Cedar Flats Panel Works').length - 1).toBe(pages + 2);
+    for (let n = 1; n <= pages; n++) {
+      expect(text, `page ${n}`).toContain(`Page ${n} of ${pages}`);
+      // scheme {job}-{panel}-{sheet:2}: the sheet is the page, two digits
+      expect(text, `drawing ${n}`).toContain(`J-2041-MCP-1-${String(n).padStart(2, '0')}`);
+    }
+    expect(text).not.toContain(`Page ${pages + 1} of`);
+    expect(text.split('Not signed off').length - 1).toBe(pages);
+    expect(text).not.toContain('[Shop name]');
+    const signed = extractPdfText((await render({ compress: false, font: 'helvetica' }, { ...data(), signOff: { revision: 'R1', date: '2025-03-20', by: 'Ines Markham', acknowledged: null } })).buf);
+    expect(signed).toContain('R1 on 2025-03-20 by Ines Markham');
+    expect(signed.split('Ines Markham').length - 1).toBeGreaterThanOrEqual(pages);
+    expect(signed).not.toContain('Not signed off');
+  });
+
+  it('numbers the drawings by the shop scheme with the revision', async () => {
+    const d = { ...data(), panel: { ...data().panel, revisionCode: 'R3' }, shop: { ...data().shop, drawingNumberScheme: 'CF/{job}/{rev}/{sheet:3}' } };
+    const text = extractPdfText((await render({ compress: false, font: 'helvetica' }, d)).buf);
+    expect(text).toContain('CF/J-2041/R3/001');
+    expect(text).toContain('CF/J-2041/R3/002');
+  });
+
+  it('draws the one-lines with lines and symbols, not text arrows', async () => {
+    const { buf } = await render({ compress: false, font: 'helvetica' });
+    const text = extractPdfText(buf);
+    expect(text).not.toContain('->');
+    // the labels of the on-screen one-line, beside the symbols (P-101: 25 A dual-element fuses, FVNR size 1)
+    for (const s of ['Feeder bus', 'Disconnect', '25 A dual-element fuses', 'Contactor, NEMA size 1', 'Reversing contactors', 'Variable-frequency drive', 'Overload, class']) expect(text, s).toContain(s);
+    // each motor is a circle: four Bézier curves in the content (tables and the title block draw none)
+    const curves = (buf.toString('latin1').match(/ c\n/g) ?? []).length;
+    expect(curves).toBeGreaterThanOrEqual(4 * data().selections.length);
+  });
+
+  it('embeds the shop logo once however many pages show it', async () => {
+    // a 1 x 1 px PNG
+    const png = Buffer.from('iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mNk+M9QDwADhgGAWjR9awAAAABJRU5ErkJggg==', 'base64');
+    const { buf } = await render({ compress: false, font: 'helvetica' }, { ...data(), shop: { ...data().shop, logo: png } });
+    // one image object (with its transparency mask), drawn on every page
+    expect((buf.toString('latin1').match(/\/Subtype \/Image/g) ?? []).length).toBe(2);
+    expect((buf.toString('latin1').match(/\/SMask \d+ 0 R/g) ?? []).length).toBe(1);
+    expect((buf.toString('latin1').match(/\/I1 Do/g) ?? []).length).toBe(pageCount(buf));
+    expect(buf.toString('latin1')).not.toContain('/I2 Do');
+    // an unreadable logo leaves the name alone instead of failing the submittal
+    const broken = await render({ compress: false, font: 'helvetica' }, { ...data(), shop: { ...data().shop, logo: Buffer.from('not an image') } });
+    expect(extractPdfText(broken.buf)).toContain('Cedar Flats Panel Works');
   });
 
   it('compresses by default', async () => {

@@ -7,7 +7,8 @@ import { SignOffState } from '../../../components/ui/status';
 import { Button } from '../../../components/ui/button';
 import { Caution, ErrorNote, Loading } from '../../../components/ui/feedback';
 import { inputClass } from '../../../components/ui/field';
-import { ApiError } from '../../../lib/api-client';
+import { ApiError, get } from '../../../lib/api-client';
+import type { SignOffEligibility } from '../../../../shared/schemas/panel';
 import { checkQueries } from '../../../features/checks/api/checks';
 import { DecisionDifferences } from '../../../features/panels/components/decision-differences';
 import { bomQueries } from '../../../features/bom/api/bom';
@@ -118,6 +119,13 @@ export function Component() {
   const reviewing = p?.status === 'in_review' && hasRole(me, 'engineer');
   const checks = useQuery({ ...checkQueries.panel(panelId), enabled: reviewing });
   const bom = useQuery({ ...bomQueries.panel(panelId), enabled: reviewing });
+  // separation of duties: the server refuses a sign-off by someone who submitted or changed the panel
+  const own = useQuery({
+    queryKey: [...panelQueries.detail(panelId).queryKey, 'sign-off-eligibility', p?.version],
+    queryFn: () => get<SignOffEligibility>(`/api/panels/${panelId}/sign-off-eligibility`),
+    enabled: reviewing,
+  });
+  const selfRefused = own.data?.reason ?? null;
   const revs = p?.revisions ?? [];
   const [from, setFrom] = useState<number | null>(null);
   const [to, setTo] = useState<number | null>(null);
@@ -143,7 +151,9 @@ export function Component() {
   // what the sign button waits for, in words (the button says it beside itself)
   const signWaitsFor = act.isPending
     ? 'Signing off…'
-    : needsAck && !acknowledged
+    : selfRefused
+      ? 'Another engineer signs this panel off (see below).'
+      : needsAck && !acknowledged
       ? 'Tick the acknowledgement of the short-circuit rating first.'
       : needsAck && reasonShort
         ? `Write why in the comment: ${comment.trim().length} of at least ${MIN_REASON} characters.`
@@ -242,6 +252,11 @@ export function Component() {
                   ↩ Return to designer
                 </Button>
               </>
+            ) : null}
+            {canReview && selfRefused ? (
+              <p className="basis-full text-sm text-state-returned" data-testid="sign-off-self">✖ {selfRefused}</p>
+            ) : canReview && own.data?.selfReview ? (
+              <p className="basis-full text-sm text-state-review" data-testid="sign-off-self">◔ You submitted or changed this panel; the shop settings allow you to sign it off, and the activity will record it as a self sign-off.</p>
             ) : null}
             {p.status === 'in_review' && !isEngineer ? <p className="text-sm text-state-review">◔ Waiting for an engineer.</p> : null}
             {(p.status === 'draft' || p.status === 'returned') && !isDesigner ? (
