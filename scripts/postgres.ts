@@ -4,9 +4,9 @@
 import { execFileSync, spawnSync } from 'node:child_process';
 import { createHash, randomBytes } from 'node:crypto';
 import fs from 'node:fs';
-import net from 'node:net';
 import path from 'node:path';
 import pg from 'pg';
+import { choosePort as chooseFreePort } from '../server/config/ports';
 
 const root = path.resolve(import.meta.dirname, '..');
 const dataRoot = path.join(root, '.data');
@@ -22,27 +22,15 @@ export function clusterPort(): number {
   return pgPort;
 }
 
-/** Whether nothing listens on 127.0.0.1:port. */
-export function portFree(port: number): Promise<boolean> {
-  return new Promise((resolve) => {
-    const probe = net.createServer();
-    probe.once('error', () => resolve(false));
-    probe.listen(port, '127.0.0.1', () => probe.close(() => resolve(true)));
-  });
-}
+export { portFree } from '../server/config/ports';
 
 /**
  * The port to start the cluster on: the preferred one when free; when another program holds it
  * (another checkout's cluster, say), the next free one above it, unless the port was asked for
  * explicitly (PW_PG_PORT), which is then an error.
  */
-export async function choosePort(preferred: number, explicit: boolean): Promise<number> {
-  if (await portFree(preferred)) return preferred;
-  if (explicit) throw new Error(`Port ${preferred} (PW_PG_PORT) is held by another program: stop it or choose another port`);
-  for (let port = preferred + 1; port <= preferred + 200 && port < 65536; port++) {
-    if (await portFree(port)) return port;
-  }
-  throw new Error(`No free port for PostgreSQL between ${preferred} and ${preferred + 200}`);
+export function choosePort(preferred: number, explicit: boolean): Promise<number> {
+  return chooseFreePort(preferred, explicit ? 'PW_PG_PORT' : null, 'PostgreSQL');
 }
 
 const isRoot = typeof process.getuid === 'function' && process.getuid() === 0;
