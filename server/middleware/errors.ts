@@ -15,7 +15,6 @@ const STATUS: Record<string, number> = {
   unsupported_file: 415,
   outside_table: 422,
   too_many_requests: 429,
-  database_unavailable: 503,
 };
 
 /** The answer while PostgreSQL cannot be reached: the request did nothing, and may be repeated. */
