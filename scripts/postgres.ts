@@ -1,15 +1,18 @@
 // Sets up and starts the project's own PostgreSQL cluster on loopback (used by `npm start` and `npm test`).
 // Idempotent: a running cluster is reused, a stale pid file is cleared, a missing server package is installed.
+// A cluster this process had to start is stopped again when the process is done with it (npm start
+// stopped, the test run over), unless PW_KEEP_DB=1; one that was already running is left alone.
 // With DATABASE_URL set, nothing here runs and that server is used.
 import { execFileSync, spawnSync } from 'node:child_process';
 import { createHash, randomBytes } from 'node:crypto';
 import fs from 'node:fs';
-import net from 'node:net';
 import path from 'node:path';
 import pg from 'pg';
+import { choosePort as chooseFreePort } from '../server/config/ports';
 
 const root = path.resolve(import.meta.dirname, '..');
-const dataRoot = path.join(root, '.data');
+/** .data/ of the checkout; PW_DATA_DIR moves it (tests of the start-up use a folder of their own). */
+const dataRoot = process.env.PW_DATA_DIR ? path.resolve(process.env.PW_DATA_DIR) : path.join(root, '.data');
 const clusterLink = path.join(dataRoot, 'pg');
 const passwordFile = path.join(dataRoot, 'pg.password');
 
@@ -22,27 +25,15 @@ export function clusterPort(): number {
   return pgPort;
 }
 
-/** Whether nothing listens on 127.0.0.1:port. */
-export function portFree(port: number): Promise<boolean> {
-  return new Promise((resolve) => {
-    const probe = net.createServer();
-    probe.once('error', () => resolve(false));
-    probe.listen(port, '127.0.0.1', () => probe.close(() => resolve(true)));
-  });
-}
+export { portFree } from '../server/config/ports';
 
 /**
  * The port to start the cluster on: the preferred one when free; when another program holds it
  * (another checkout's cluster, say), the next free one above it, unless the port was asked for
  * explicitly (PW_PG_PORT), which is then an error.
  */
-export async function choosePort(preferred: number, explicit: boolean): Promise<number> {
-  if (await portFree(preferred)) return preferred;
-  if (explicit) throw new Error(`Port ${preferred} (PW_PG_PORT) is held by another program: stop it or choose another port`);
-  for (let port = preferred + 1; port <= preferred + 200 && port < 65536; port++) {
-    if (await portFree(port)) return port;
-  }
-  throw new Error(`No free port for PostgreSQL between ${preferred} and ${preferred + 200}`);
+export function choosePort(preferred: number, explicit: boolean): Promise<number> {
+  return chooseFreePort(preferred, explicit ? 'PW_PG_PORT' : null, 'PostgreSQL');
 }
 
 const isRoot = typeof process.getuid === 'function' && process.getuid() === 0;
@@ -99,7 +90,7 @@ function clusterDir(): string {
     fs.mkdirSync(clusterLink, { recursive: true });
     return clusterLink;
   }
-  const hash = createHash('sha1').update(root).digest('hex').slice(0, 10);
+  const hash = createHash('sha1').update(dataRoot).digest('hex').slice(0, 10);
   const target = path.join('/var/tmp', `panelwright-pg-${hash}`);
   fs.mkdirSync(target, { recursive: true });
   fs.symlinkSync(target, clusterLink);
@@ -188,11 +179,70 @@ export async function ensureCluster(): Promise<string> {
     '-o', `-c listen_addresses=127.0.0.1 -p ${pgPort} -c unix_socket_directories='' -c max_connections=200 -c fsync=off`,
     'start',
   ]);
+  lifecycle().started = { dir, bin };
   for (let i = 0; i < 60; i++) {
     if (await canConnect(adminUrl)) return adminUrl;
     await new Promise((r) => setTimeout(r, 500));
   }
   throw new Error(`PostgreSQL did not answer on port ${pgPort}; see ${logFile}`);
+}
+
+// ---- who stops the cluster ---------------------------------------------------------------------
+// The state lives on globalThis: the test run's two global set-ups (API and browser) share one
+// process but may load this module twice.
+interface Lifecycle {
+  /** the cluster this process started, if it did */
+  started: { dir: string; bin: string } | null;
+  /** holders still using it (acquireCluster without releaseCluster) */
+  holders: number;
+  exitHook: boolean;
+}
+function lifecycle(): Lifecycle {
+  const g = globalThis as { __panelwrightCluster?: Lifecycle };
+  g.__panelwrightCluster ??= { started: null, holders: 0, exitHook: false };
+  return g.__panelwrightCluster;
+}
+
+/** Whether a cluster this process started is stopped when it is done: yes, unless PW_KEEP_DB=1. */
+export function stopsClusterWhenDone(envVars: NodeJS.ProcessEnv = process.env): boolean {
+  return envVars.PW_KEEP_DB !== '1';
+}
+
+/** Whether this process started the cluster (rather than finding it running). */
+export function clusterStartedHere(): boolean {
+  return lifecycle().started !== null;
+}
+
+/** Stops the cluster if this process started it and PW_KEEP_DB is not 1; synchronous, so it also runs on exit. */
+export function stopClusterIfStartedHere(): boolean {
+  const l = lifecycle();
+  if (!l.started || !stopsClusterWhenDone()) return false;
+  const { dir, bin } = l.started;
+  l.started = null;
+  log(`stopping the PostgreSQL this process started (set PW_KEEP_DB=1 to keep it running)`);
+  runPg(path.join(bin, 'pg_ctl'), ['-D', dir, '-m', 'fast', '-w', '-t', '30', 'stop'], { allowFail: true });
+  return true;
+}
+
+/**
+ * ensureCluster for a holder that says when it is done (releaseCluster): the cluster is stopped once
+ * the last holder is done, and only if this process started it. If the process ends first, it is
+ * stopped on exit.
+ */
+export async function acquireCluster(): Promise<string> {
+  const l = lifecycle();
+  l.holders++;
+  if (!l.exitHook) {
+    l.exitHook = true;
+    process.once('exit', () => stopClusterIfStartedHere());
+  }
+  return ensureCluster();
+}
+
+export function releaseCluster(): void {
+  const l = lifecycle();
+  l.holders = Math.max(0, l.holders - 1);
+  if (l.holders === 0) stopClusterIfStartedHere();
 }
 
 export async function createDatabase(adminUrl: string, name: string, opts: { dropFirst?: boolean } = {}) {
@@ -218,19 +268,36 @@ export async function dropDatabase(adminUrl: string, name: string) {
   }
 }
 
-/** The application's database URL: DATABASE_URL when set, else the private cluster's "panelwright" database. */
-export async function ensureDatabase(name = process.env.PW_DB_NAME ?? 'panelwright'): Promise<string> {
+/**
+ * The application's database URL: DATABASE_URL when set, else the private cluster's "panelwright"
+ * database. `hold`: the cluster is stopped when this process ends if it started it (npm start).
+ */
+export async function ensureDatabase(name = process.env.PW_DB_NAME ?? 'panelwright', opts: { hold?: boolean } = {}): Promise<string> {
   if (process.env.DATABASE_URL) return process.env.DATABASE_URL;
-  const adminUrl = await ensureCluster();
+  const adminUrl = opts.hold ? await acquireCluster() : await ensureCluster();
   await createDatabase(adminUrl, name);
   return serverUrl(name);
 }
 
+/** Stops the project's cluster whoever started it (`npm run db:stop`); false when it was not running. */
+export function stopCluster(): boolean {
+  const bin = findBinDir();
+  const dir = fs.existsSync(clusterLink) ? fs.realpathSync(clusterLink) : null;
+  if (!bin || !dir || !fs.existsSync(path.join(dir, 'postmaster.pid'))) return false;
+  const r = runPg(path.join(bin, 'pg_ctl'), ['-D', dir, '-m', 'fast', '-w', '-t', '30', 'stop'], { allowFail: true });
+  return r.status === 0;
+}
+
+// `npm run db`: start the cluster and leave it running (print its URL); `npm run db:stop`: stop it.
 if (import.meta.url === `file://${process.argv[1]}`) {
-  ensureDatabase()
-    .then((url) => console.log(url.replace(/:[^:@/]+@/, ':***@')))
-    .catch((err) => {
-      console.error(err instanceof Error ? err.message : err);
-      process.exit(1);
-    });
+  if (process.argv[2] === 'stop') {
+    console.log(stopCluster() ? '[postgres] stopped' : '[postgres] not running');
+  } else {
+    ensureDatabase()
+      .then((url) => console.log(url.replace(/:[^:@/]+@/, ':***@')))
+      .catch((err) => {
+        console.error(err instanceof Error ? err.message : err);
+        process.exit(1);
+      });
+  }
 }

@@ -61,7 +61,7 @@ export function createApp(opts: AppOptions): Express {
   app.use('/api', express.json({ limit: '1mb' }));
 
   const PgStore = connectPgSimple(session);
-  const sessionPool = new pg.Pool({ connectionString: opts.databaseUrl, max: 10 });
+  const sessionPool = new pg.Pool({ connectionString: opts.databaseUrl, max: 10, connectionTimeoutMillis: 10_000, keepAlive: true });
   sessionPool.on('error', () => undefined); // an idle client dropped by the server; the pool reconnects
   app.locals.sessionPool = sessionPool;
   // Per-process caches (sessions, signed-in users, panel pages) stay correct through the change feed.

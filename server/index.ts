@@ -4,14 +4,14 @@ import { createApp } from './app';
 import { prepareDatabase } from './boot';
 import { closeDatabase } from './db/sequelize';
 import type { ChangeFeed } from './db/change-feed';
-import { env } from './config/env';
-import { startFakeSmtp } from './modules/mail/fake-smtp';
+import { env, listenUrl } from './config/env';
+import { fakeSmtpPortOf, startFakeSmtp } from './modules/mail/fake-smtp';
 import { DEMO_USERS } from './db/seeders/demo';
 
 export async function startServer(databaseUrl: string): Promise<Server> {
   const e = env();
   await prepareDatabase(databaseUrl, { seed: true });
-  const smtp = e.SMTP_URL ? null : await startFakeSmtp(e.PW_SMTP_FAKE_PORT).catch((err: Error) => {
+  const smtp = e.SMTP_URL ? null : await startFakeSmtp(e.PW_SMTP_FAKE_PORT, { explicit: process.env.PW_SMTP_FAKE_PORT !== undefined ? 'PW_SMTP_FAKE_PORT' : null }).catch((err: Error) => {
     console.warn(`[mail] development mail server not started: ${err.message}`);
     return null;
   });
@@ -21,11 +21,15 @@ export async function startServer(databaseUrl: string): Promise<Server> {
     server.once('listening', resolve);
     server.once('error', reject);
   });
-  console.log(`\nPanelwright is running at http://${e.HOST}:${e.PORT}`);
+  console.log(`\nPanelwright is running at ${listenUrl(e.HOST, e.PORT)}`);
   if (e.NODE_ENV !== 'production') {
     console.log('Demo sign-ins (demo data only, change them before real use):');
     for (const u of DEMO_USERS) console.log(`  ${u.roles.join(',').padEnd(10)} ${u.email.padEnd(28)} ${u.password}`);
-    if (smtp) console.log(`Development mail is captured on smtp://127.0.0.1:${e.PW_SMTP_FAKE_PORT} and shown under Outbox (admin).`);
+    if (smtp) {
+      const port = fakeSmtpPortOf(smtp);
+      const moved = port !== e.PW_SMTP_FAKE_PORT ? ` (port ${e.PW_SMTP_FAKE_PORT} is held by another program)` : '';
+      console.log(`Development mail is captured on smtp://127.0.0.1:${port}${moved} and shown under Outbox (admin).`);
+    }
   }
   const shutdown = (signal: string) => {
     console.log(`\n${signal}: closing`);

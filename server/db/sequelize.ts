@@ -9,7 +9,9 @@ export function connectDatabase(url: string, opts: { logSql?: boolean; poolMax?:
   instance = new Sequelize(url, {
     dialect: 'postgres',
     logging: opts.logSql ? (sql) => console.log(sql) : false,
-    pool: { max: opts.poolMax ?? 20, min: 0, idle: 10_000 },
+    pool: { max: opts.poolMax ?? 20, min: 0, idle: 10_000, acquire: 20_000 },
+    // a database that does not answer (host down, network cut) fails the request within 10 s, as 503
+    dialectOptions: { connectionTimeoutMillis: 10_000, keepAlive: true },
     define: { underscored: true },
   });
   initModels(instance);

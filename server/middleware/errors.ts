@@ -1,6 +1,7 @@
 // The one error contract: { error: { code, message, details } }. No stack trace leaves the server.
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { DomainError } from '../../shared/errors';
+import { DATABASE_RETRY_AFTER_S, isDatabaseUnavailable } from '../db/unavailable';
 
 const STATUS: Record<string, number> = {
   validation_failed: 400,
@@ -15,6 +16,9 @@ const STATUS: Record<string, number> = {
   outside_table: 422,
   too_many_requests: 429,
 };
+
+/** The answer while PostgreSQL cannot be reached: the request did nothing, and may be repeated. */
+export const DATABASE_UNAVAILABLE_MESSAGE = 'The database is unreachable, so nothing was read or saved. The server reconnects by itself; try again in a few seconds.';
 
 export const notFoundApi: RequestHandler = (req, res) => {
   res.status(404).json({ error: { code: 'not_found', message: `No API route ${req.method} ${req.originalUrl.split("?")[0]}`, details: null } });
@@ -44,6 +48,12 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   }
   if (typeof e?.status === 'number' && e.status >= 400 && e.status < 500) {
     res.status(e.status).json({ error: { code: 'bad_request', message: e.message ?? 'Bad request', details: null } });
+    return;
+  }
+  if (isDatabaseUnavailable(err)) {
+    console.warn(`[database] ${req.method} ${req.path}: unreachable (${err instanceof Error ? err.message : String(err)})`);
+    res.setHeader('Retry-After', String(DATABASE_RETRY_AFTER_S));
+    res.status(503).json({ error: { code: 'database_unavailable', message: DATABASE_UNAVAILABLE_MESSAGE, details: { retryAfterSeconds: DATABASE_RETRY_AFTER_S } } });
     return;
   }
   console.error(`[error] ${req.method} ${req.path}:`, err instanceof Error ? err.message : err);

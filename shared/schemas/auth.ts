@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { idParamSchema, versionSchema } from './bounds';
 
 export const ROLES = ['admin', 'designer', 'estimator', 'engineer'] as const;
 export const RoleSchema = z.enum(ROLES);
@@ -36,7 +37,7 @@ export const UserUpdateSchema = z
     name: z.string().trim().min(1).max(200).optional(),
     roles: z.array(RoleSchema).min(1, 'Give at least one role').optional(),
     active: z.boolean().optional(),
-    version: z.number().int().min(0),
+    version: versionSchema,
   })
   .strict();
 export type UserUpdate = z.infer<typeof UserUpdateSchema>;
@@ -55,4 +56,4 @@ export interface CurrentUser {
   roles: Role[];
 }
 
-export const IdParamSchema = z.object({ id: z.coerce.number().int().positive() });
+export const IdParamSchema = z.object({ id: idParamSchema });

@@ -1,6 +1,7 @@
 // The shop's component catalogue, its labour units, and the bill-of-materials line.
 // Pure zod; the same schemas validate the seed files, the REST bodies and the spreadsheet import.
 import { z } from 'zod';
+import { countSchema } from './bounds';
 
 export const CATEGORIES = [
   { id: 'contactor', label: 'Contactors', labourKey: 'device-mount' },
@@ -120,7 +121,7 @@ export const RatingsSchema = z
     cfm: positive.optional(),
     coolingW: positive.optional(),
     /** branch connections per pole (distribution blocks) */
-    outputs: z.number().int().positive().optional(),
+    outputs: countSchema.min(1).optional(),
     /** sub-type within the category (thermal/electronic, filter-fan/air-conditioner, dv-dt/sine-wave …) */
     kind: z.string().min(1).max(40).optional(),
     /** what a pilot device does (start, stop, forward, reverse, fast, slow, hand-off-auto, run-light) */
@@ -193,8 +194,8 @@ export const CatalogueItemBaseSchema = z
     /** item-specific labour beyond the shop's labour units (e.g. drive parameter set-up), h per unit */
     labourHours: nonNegative.default(0),
     /** wire terminations made on one unit; priced with the 'termination' labour unit */
-    terminations: z.number().int().nonnegative().default(0),
-    leadTimeDays: z.number().int().nonnegative(),
+    terminations: countSchema.default(0),
+    leadTimeDays: countSchema,
     active: z.boolean().default(true),
   })
   .strict();

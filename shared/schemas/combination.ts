@@ -1,6 +1,7 @@
 // Tested combination ratings (UL 508A SB4): catalogue parts of one bucket tested together to a
 // short-circuit current rating, from a listing or a maker's published combination table.
 import { z } from 'zod';
+import { versionSchema } from './bounds';
 import { PartCodeSchema } from './catalogue';
 
 const fields = {
@@ -30,7 +31,7 @@ export type CombinationValues = z.output<typeof CombinationInputSchema>;
 export const CombinationUpdateSchema = z
   .object({ componentCodes: fields.componentCodes, ratingKa: fields.ratingKa, maxVolts: fields.maxVolts, source: fields.source, active: fields.active })
   .partial()
-  .extend({ version: z.number().int().min(0) })
+  .extend({ version: versionSchema })
   .strict();
 
 export const CombinationFileSchema = z.array(CombinationInputSchema);

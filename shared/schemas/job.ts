@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { versionSchema } from './bounds';
 import type { SupplyInput } from './load';
 
 export const CODE_EDITIONS = ['2023', '2020'] as const;
@@ -35,7 +36,7 @@ export const JobInputSchema = z.object({
 export type JobInput = z.input<typeof JobInputSchema>;
 export type JobValues = z.output<typeof JobInputSchema>;
 
-export const JobUpdateSchema = z.object(jobFields).partial().extend({ version: z.number().int().min(0) }).strict();
+export const JobUpdateSchema = z.object(jobFields).partial().extend({ version: versionSchema }).strict();
 
 export const JobListQuerySchema = z.object({
   q: z.string().trim().max(100).optional(),

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { versionSchema } from './bounds';
 
 /** The decisions a designer may override, each always with a written justification. */
 export const OVERRIDE_FIELDS = {
@@ -24,7 +25,7 @@ export type OverrideInput = z.infer<typeof OverrideInputSchema>;
 
 export const OverridesPutSchema = z.object({
   overrides: z.array(OverrideInputSchema).max(20),
-  version: z.number().int().min(0),
+  version: versionSchema,
 });
 
 export interface StoredOverride extends OverrideInput {

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { idSchema, versionSchema } from './bounds';
 import type { LoadSelection, PanelRollup } from './selection';
 import type { StoredOverride } from './override';
 import type { JobSummary } from './job';
@@ -35,7 +36,7 @@ export const PanelInputSchema = z.object({
 });
 export type PanelInput = z.input<typeof PanelInputSchema>;
 
-export const PanelUpdateSchema = z.object(panelFields).partial().extend({ version: z.number().int().min(0) }).strict();
+export const PanelUpdateSchema = z.object(panelFields).partial().extend({ version: versionSchema }).strict();
 
 export interface PanelSummary {
   id: number;
@@ -106,22 +107,22 @@ export interface RuleCheckBody {
   changed: Array<{ loadId: number; tag: string; differences: Array<{ field: string; label: string; from: string; to: string }> }>;
 }
 
-export const ReselectSchema = z.object({ version: z.number().int().min(0) }).strict();
+export const ReselectSchema = z.object({ version: versionSchema }).strict();
 
 export const CommentInputSchema = z.object({
   body: z.string().trim().min(1, 'Write a comment').max(5000),
-  loadId: z.number().int().positive().nullable().default(null),
+  loadId: idSchema.nullable().default(null),
 });
 
 export const ReviewActionSchema = z.object({
-  version: z.number().int().min(0),
+  version: versionSchema,
   comment: z.string().trim().max(5000).default(''),
   /** sign-off only: the engineer accepts a panel SCCR below the available fault current (NEC 409.22), with the reason in the comment */
   acknowledgeSccr: z.boolean().default(false),
 });
 
 export const BulkEditSchema = z.object({
-  loadIds: z.array(z.number().int().positive()).min(1).max(2000),
+  loadIds: z.array(idSchema).min(1).max(2000),
   changes: z
     .object({
       environment: z.string().optional(),
@@ -136,7 +137,7 @@ export const BulkEditSchema = z.object({
     })
     .strict()
     .refine((c) => Object.keys(c).length > 0, 'Choose at least one answer to change'),
-  panelVersion: z.number().int().min(0),
+  panelVersion: versionSchema,
 });
 
 /** Whether the signed-in person may sign a panel off as its reviewer (separation of duties). */

@@ -3,6 +3,7 @@ import { queryClient } from '../lib/query-client';
 import { sessionQueries } from '../features/auth/api/session';
 import { AppLayout } from './routes/app-layout';
 import { RouteError } from './routes/route-error';
+import { Loading } from '../components/ui/feedback';
 
 async function requireUser() {
   const me = await queryClient.ensureQueryData(sessionQueries.me());
@@ -17,6 +18,8 @@ export const router = createBrowserRouter([
     path: '/',
     element: <AppLayout />,
     loader: requireUser,
+    // shown while the first page waits for the signed-in person (asked again while the database is away)
+    hydrateFallbackElement: <Loading what="Opening Panelwright" />,
     errorElement: <RouteError />,
     children: [
       { index: true, loader: () => redirect('/jobs') },

@@ -5,18 +5,37 @@ export interface FieldIssue {
   message: string;
 }
 
+/** What the app says while the server cannot reach its database (503 database_unavailable). */
+export const DATABASE_UNREACHABLE = 'The database is unreachable; retrying…';
+
 export class ApiError extends Error {
   constructor(
     readonly status: number,
     readonly code: string,
     message: string,
     readonly details: unknown,
+    /** seconds the server asked to wait before trying again (Retry-After), when it said */
+    readonly retryAfterSeconds: number | null = null,
   ) {
     super(message);
   }
   get fieldIssues(): FieldIssue[] {
     return Array.isArray(this.details) ? (this.details as FieldIssue[]) : [];
   }
+  /** the server is up but its database is not: nothing was read or saved, and the same request may be sent again */
+  get databaseUnavailable(): boolean {
+    return this.status === 503 && this.code === 'database_unavailable';
+  }
+}
+
+/** Whether an error (of a query or a mutation) is the database being unreachable. */
+export function isDatabaseUnavailable(err: unknown): err is ApiError {
+  return err instanceof ApiError && err.databaseUnavailable;
+}
+
+function retryAfter(res: Response): number | null {
+  const v = Number(res.headers.get('retry-after'));
+  return Number.isFinite(v) && v > 0 ? v : null;
 }
 
 let csrf: string | null = null;
@@ -36,11 +55,11 @@ async function ensureCsrf(): Promise<string> {
 async function toError(res: Response): Promise<ApiError> {
   try {
     const body = (await res.json()) as { error?: { code: string; message: string; details: unknown } };
-    if (body.error) return new ApiError(res.status, body.error.code, body.error.message, body.error.details);
+    if (body.error) return new ApiError(res.status, body.error.code, body.error.message, body.error.details, retryAfter(res));
   } catch {
     /* not JSON */
   }
-  return new ApiError(res.status, 'http_error', `The server answered ${res.status}`, null);
+  return new ApiError(res.status, 'http_error', `The server answered ${res.status}`, null, retryAfter(res));
 }
 
 export async function api<T>(method: string, url: string, body?: unknown, init: { raw?: boolean } = {}): Promise<T> {

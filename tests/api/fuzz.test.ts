@@ -1,8 +1,10 @@
 // Property tests: random and malformed bodies posted to every write route of the route table (the one
 // the app mounts, so a new route is covered without editing this file). Whatever arrives, the answer
 // is a 4xx JSON error { error: { code, message, details } }, never a 500; a validation error names
-// exactly the fields the route's own schema names; and nothing is written.
-import { beforeAll, describe, expect, it } from 'vitest';
+// exactly the fields the route's own schema names; and nothing is written. Integers the database's
+// 32-bit columns cannot hold are refused by the schema in every integer field; no request anywhere in
+// this file is answered with a 500.
+import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import fc from 'fast-check';
 import { QueryTypes } from 'sequelize';
 import type { z } from 'zod';
@@ -12,6 +14,7 @@ import { routeTable, type AnyRoute } from '../../server/http/route-table';
 import { db } from '../../server/db/sequelize';
 import { LoadSchema } from '../../shared/schemas/load';
 import { zodIssues } from '../../shared/errors';
+import { INT4_MAX } from '../../shared/schemas/bounds';
 
 const RUNS = 20;
 const BODY_LIMIT = 1024 * 1024; // express.json({ limit: '1mb' }) in server/app.ts
@@ -103,6 +106,60 @@ function bodies(route: AnyRoute): fc.Arbitrary<string> {
   return fc.oneof({ weight: 5, arbitrary: objectBody }, { weight: 2, arbitrary: junk.map(toJson) }, { weight: 2, arbitrary: raw });
 }
 
+/** Integers beyond PostgreSQL's INTEGER (2,147,483,647): the one found by fuzzing, the first out of range, 2^53 − 1. */
+const BIG_INTEGERS = [481_025_102_958_626, INT4_MAX + 1, 2 ** 53 - 1, 10_000_000_000];
+
+type Segment = string | number;
+interface ZodDef {
+  type: string;
+  shape?: Record<string, z.ZodType>;
+  innerType?: z.ZodType;
+  element?: z.ZodType;
+  in?: z.ZodType;
+  options?: z.ZodType[];
+  left?: z.ZodType;
+  right?: z.ZodType;
+}
+const defOf = (schema: z.ZodType) => (schema as unknown as { _zod: { def: ZodDef } })._zod.def;
+
+/** Paths to every integer field of a schema (a number field that refuses 1.5 and takes 0 or 1), through objects, arrays, optionals and unions. */
+function integerFields(schema: z.ZodType, path: Segment[] = []): Segment[][] {
+  const d = defOf(schema);
+  switch (d.type) {
+    case 'object':
+      return Object.entries(d.shape ?? {}).flatMap(([k, v]) => integerFields(v, [...path, k]));
+    case 'optional':
+    case 'nullable':
+    case 'default':
+    case 'prefault':
+    case 'readonly':
+    case 'catch':
+    case 'nonoptional':
+      return integerFields(d.innerType!, path);
+    case 'array':
+      return integerFields(d.element!, [...path, 0]);
+    case 'pipe':
+      return integerFields(d.in!, path);
+    case 'union':
+      return (d.options ?? []).flatMap((o) => integerFields(o, path)).slice(0, 1);
+    case 'intersection':
+      return [...integerFields(d.left!, path), ...integerFields(d.right!, path)];
+    case 'number':
+      return !schema.safeParse(1.5).success && (schema.safeParse(0).success || schema.safeParse(1).success) ? [path] : [];
+    default:
+      return [];
+  }
+}
+
+/** A JSON object holding `value` at `path` (an index makes a one-element array). */
+function bodyWith(path: Segment[], value: number): unknown {
+  if (path.length === 0) return value;
+  const [head, ...rest] = path;
+  return typeof head === 'number' ? [bodyWith(rest, value)] : { [head!]: bodyWith(rest, value) };
+}
+
+const issuePath = (path: Segment[]) => zodIssues([{ path, message: '' }])[0]!.path;
+
 interface Expected {
   status: number;
   code: string;
@@ -176,6 +233,12 @@ describe('malformed input on every write route', () => {
   const sessions = new Map<DemoRole | null, Session>();
   let params: Record<string, string>;
   let before: Record<string, string>;
+  // the error middleware logs every answer it turns into a 500: none may appear in this file
+  const serverErrors: string[] = [];
+  const consoleError = vi.spyOn(console, 'error').mockImplementation((...args: unknown[]) => {
+    if (typeof args[0] === 'string' && args[0].startsWith('[error]')) serverErrors.push(args.map(String).join(' '));
+  });
+  afterAll(() => consoleError.mockRestore());
 
   beforeAll(async () => {
     params = await paramValues();
@@ -247,6 +310,62 @@ describe('malformed input on every write route', () => {
     expect(failures).toEqual([]);
     expect(checked).toBeGreaterThan(200);
   }, 120_000);
+
+  it('refuses an integer the database cannot hold in every integer field of every write route, naming the field', async () => {
+    const failures: string[] = [];
+    let checked = 0;
+    for (const route of writeRoutes()) {
+      if (!route.body) continue;
+      const s = sessions.get(roleFor(route))!;
+      const url = fill(route.path, params);
+      const fields = integerFields(route.body);
+      for (const path of fields) {
+        for (const big of BIG_INTEGERS) {
+          const r = await s.agent[route.method as 'post'](url).set('x-csrf-token', s.token).send(bodyWith(path, big) as object);
+          checked++;
+          const where = `${route.method.toUpperCase()} ${route.path} ${issuePath(path)}=${big}: ${r.status} ${JSON.stringify(r.body).slice(0, 300)}`;
+          const named = ((r.body?.error?.details ?? []) as Array<{ path: string }>).map((d) => d.path);
+          if (r.status !== 400 || r.body?.error?.code !== 'validation_failed' || !named.includes(`body.${issuePath(path)}`)) failures.push(where);
+        }
+      }
+    }
+    expect(failures).toEqual([]);
+    // versions, ids, positions and counts on at least a dozen write routes (found by walking their schemas)
+    expect(checked).toBeGreaterThan(12 * BIG_INTEGERS.length);
+  }, 120_000);
+
+  it('refuses the archive with version 481025102958626 (the value that reached PostgreSQL as "out of range for type integer") and its kin, with every other field valid', async () => {
+    const cases: Array<{ role: DemoRole; method: 'post' | 'patch'; path: string; body: Record<string, unknown>; field: string }> = [
+      { role: 'designer', method: 'post', path: '/api/panels/:panelId/archive', body: { archived: true, version: 481025102958626 }, field: 'body.version' },
+      { role: 'designer', method: 'post', path: '/api/panels/:panelId/archive', body: { archived: false, version: INT4_MAX + 1 }, field: 'body.version' },
+      { role: 'designer', method: 'post', path: '/api/jobs/:id/archive', body: { archived: true, version: 2 ** 53 - 1 }, field: 'body.version' },
+      { role: 'designer', method: 'patch', path: '/api/jobs/:id', body: { name: 'Renamed by a big version', version: 481025102958626 }, field: 'body.version' },
+      { role: 'designer', method: 'post', path: '/api/panels/:panelId/reselect', body: { version: 481025102958626 }, field: 'body.version' },
+      { role: 'designer', method: 'post', path: '/api/panels/:panelId/comments', body: { body: 'A comment on a motor', loadId: 481025102958626 }, field: 'body.loadId' },
+      { role: 'admin', method: 'patch', path: '/api/users/:id', body: { name: 'Big version', version: INT4_MAX + 1 }, field: 'body.version' },
+    ];
+    for (const c of cases) {
+      const s = sessions.get(c.role)!;
+      const r = await s.agent[c.method](fill(c.path, { ...params, id: c.path.startsWith('/api/users') ? params.userId! : params.id! })).set('x-csrf-token', s.token).send(c.body);
+      const where = `${c.method.toUpperCase()} ${c.path} ${JSON.stringify(c.body)}: ${r.status} ${JSON.stringify(r.body).slice(0, 300)}`;
+      expect(r.status, where).toBe(400);
+      expect(r.body.error.code, where).toBe('validation_failed');
+      expect((r.body.error.details as Array<{ path: string }>).map((d) => d.path), where).toEqual([c.field]);
+    }
+    // the same numbers as path parameters
+    const s = sessions.get('designer')!;
+    for (const value of ['2147483648', '481025102958626']) {
+      const r = await s.agent.get(`/api/panels/${value}`);
+      expect(r.status, `GET /api/panels/${value}: ${r.status}`).toBe(400);
+      expect(r.body.error.details.map((d: { path: string }) => d.path)).toEqual(['params.panelId']);
+    }
+    const ok = await s.agent.get(`/api/panels/${params.panelId}`);
+    expect(ok.status).toBe(200); // the bound leaves ordinary ids alone
+  });
+
+  it('answered no request in this file with a 500', () => {
+    expect(serverErrors).toEqual([]);
+  });
 
   it('wrote nothing for any rejected request and polluted no prototype in the server process', async () => {
     expect(await tableDigest()).toEqual(before);

@@ -1,7 +1,8 @@
 // API test set-up: a fresh database per run on the project's PostgreSQL (or DATABASE_URL's server),
-// migrated and seeded with the demo data; dropped afterwards.
+// migrated and seeded with the demo data; dropped afterwards. A cluster the run had to start is
+// stopped at its end (PW_KEEP_DB=1 keeps it).
 import type { TestProject } from 'vitest/node';
-import { ensureCluster, createDatabase, dropDatabase, serverUrl } from '../../scripts/postgres';
+import { acquireCluster, createDatabase, dropDatabase, releaseCluster, serverUrl } from '../../scripts/postgres';
 
 declare module 'vitest' {
   export interface ProvidedContext {
@@ -22,7 +23,7 @@ export default async function setup(project: TestProject) {
     base.pathname = `/${name}`;
     url = base.toString();
   } else {
-    admin = await ensureCluster();
+    admin = await acquireCluster();
     await createDatabase(admin, name);
     url = serverUrl(name);
   }
@@ -33,5 +34,7 @@ export default async function setup(project: TestProject) {
   project.provide('databaseUrl', url);
   return async () => {
     if (admin) await dropDatabase(admin, name).catch(() => undefined);
+    // the cluster stops once the browser tests are done with it too, and only if this run started it
+    if (!process.env.DATABASE_URL) releaseCluster();
   };
 }

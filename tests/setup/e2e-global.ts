@@ -5,7 +5,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 import type { AddressInfo } from 'node:net';
 import type { TestProject } from 'vitest/node';
-import { ensureCluster, createDatabase, dropDatabase, serverUrl } from '../../scripts/postgres';
+import { acquireCluster, createDatabase, dropDatabase, releaseCluster, serverUrl } from '../../scripts/postgres';
 
 declare module 'vitest' {
   export interface ProvidedContext {
@@ -29,7 +29,7 @@ export default async function setup(project: TestProject) {
   execFileSync(process.execPath, [path.join(root, 'node_modules', 'vite', 'bin', 'vite.js'), 'build', '--logLevel', 'error'], { cwd: root, stdio: 'inherit' });
 
   const name = `pw_e2e_${process.pid}_${Date.now().toString(36)}`;
-  const admin = await ensureCluster();
+  const admin = await acquireCluster();
   await createDatabase(admin, name);
   const url = serverUrl(name);
 
@@ -59,5 +59,6 @@ export default async function setup(project: TestProject) {
     await (app.locals.sessionPool as { end(): Promise<void> }).end();
     await closeDatabase();
     await dropDatabase(admin, name).catch(() => undefined);
+    releaseCluster();
   };
 }

@@ -2,6 +2,7 @@
 // ("P1", "P1.L3") so the file can be imported into any organisation. Stored selections, revision
 // snapshots and bill-of-materials lines are carried as they were frozen.
 import { z } from 'zod';
+import { countSchema, positionSchema } from '../../../shared/schemas/bounds';
 import { CODE_EDITIONS } from '../../../shared/schemas/job';
 import { MOUNTINGS, PANEL_STATES } from '../../../shared/schemas/panel';
 import { OVERRIDE_FIELDS, type OverrideField } from '../../../shared/schemas/override';
@@ -32,7 +33,7 @@ const BackupLoadSchema = z
   .object({
     ref: z.string().min(1).max(40),
     tag: z.string().trim().min(1).max(40),
-    position: z.number().int().min(0),
+    position: positionSchema,
     answers: json,
     selection: json.nullable(),
     overrides: z.array(BackupOverrideSchema).max(20),
@@ -50,7 +51,7 @@ const BackupCommentSchema = z
 
 const BackupRevisionSchema = z
   .object({
-    number: z.number().int().min(0),
+    number: countSchema,
     approvedBy: person,
     approvedAt: isoDate,
     snapshot: json,
@@ -64,7 +65,7 @@ const BackupPanelSchema = z
     description: z.string().max(2000),
     mounting: z.enum(MOUNTINGS),
     status: z.enum(PANEL_STATES),
-    revisionNumber: z.number().int().min(0).nullable(),
+    revisionNumber: countSchema.nullable(),
     markupPercent: z.number().min(0).max(300),
     labourRate: z.number().min(0).max(1000),
     archivedAt: isoDate.nullable(),

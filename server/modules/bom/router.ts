@@ -1,5 +1,6 @@
 import type { Response } from 'express';
 import { z } from 'zod';
+import { idParamSchema } from '../../../shared/schemas/bounds';
 import { defineRoute, type AnyRoute } from '../../http/route-table';
 import { attachment } from '../../http/attachment';
 import { IdParamSchema } from '../../../shared/schemas/auth';
@@ -13,8 +14,8 @@ const ALL = ['admin', 'designer', 'estimator', 'engineer'] as const;
 const REBUILD = ['admin', 'estimator', 'designer'] as const;
 const ESTIMATE = ['admin', 'estimator'] as const;
 
-const PanelId = z.object({ panelId: z.coerce.number().int().positive() });
-const LineId = PanelId.extend({ lineId: z.coerce.number().int().positive() });
+const PanelId = z.object({ panelId: idParamSchema });
+const LineId = PanelId.extend({ lineId: idParamSchema });
 const money = z.number().finite().nonnegative().max(10_000_000);
 const hours = z.number().finite().nonnegative().max(10_000);
 

@@ -1,5 +1,6 @@
 import multer from 'multer';
 import { z } from 'zod';
+import { idParamSchema, versionSchema } from '../../../shared/schemas/bounds';
 import { defineRoute } from '../../http/route-table';
 import { CatalogueItemBaseSchema, CatalogueItemSchema, CategorySchema, LabourKeySchema } from '../../../shared/schemas/catalogue';
 import { ValidationError } from '../../../shared/errors';
@@ -15,8 +16,8 @@ const EDIT = ['admin', 'estimator'] as const;
 /** tested combinations are engineering data: the engineer keeps them too */
 const EDIT_COMBINATIONS = ['admin', 'estimator', 'engineer'] as const;
 
-const ItemId = z.object({ itemId: z.coerce.number().int().positive() });
-const Version = z.number().int().min(0);
+const ItemId = z.object({ itemId: idParamSchema });
+const Version = versionSchema;
 
 const ListQuery = z.object({
   category: CategorySchema.optional(),
@@ -197,7 +198,7 @@ export const catalogueRoutes = [
     path: '/api/catalogue/combinations/:combinationId',
     access: EDIT_COMBINATIONS,
     summary: 'Change or deactivate a tested combination rating; 409 when the version is stale',
-    params: z.object({ combinationId: z.coerce.number().int().positive() }),
+    params: z.object({ combinationId: idParamSchema }),
     body: CombinationUpdateSchema,
     handler: ({ user, params, body }) => combinations.updateCombination(user, params.combinationId, body),
   }),

@@ -1,10 +1,11 @@
 import { z } from 'zod';
+import { idParamSchema } from '../../../shared/schemas/bounds';
 import { defineRoute } from '../../http/route-table';
 import { panelChecks } from './service';
 import { submittalRoutes } from '../submittal/router';
 
 const ALL = ['admin', 'designer', 'estimator', 'engineer'] as const;
-const PanelId = z.object({ panelId: z.coerce.number().int().positive() });
+const PanelId = z.object({ panelId: idParamSchema });
 
 export const checkRoutes = [
   defineRoute({

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { versionSchema } from '../../../shared/schemas/bounds';
 import { defineRoute } from '../../http/route-table';
 import { IdParamSchema } from '../../../shared/schemas/auth';
 import { JobInputSchema, JobListQuerySchema, JobUpdateSchema } from '../../../shared/schemas/job';
@@ -19,7 +20,7 @@ export const jobRoutes = [
     access: EDIT,
     summary: 'Archive or restore a job',
     params: IdParamSchema,
-    body: z.object({ archived: z.boolean(), version: z.number().int().min(0) }),
+    body: z.object({ archived: z.boolean(), version: versionSchema }),
     status: 200,
     handler: ({ user, params, body }) => service.setArchived(user, params.id, body.archived, body.version),
   }),

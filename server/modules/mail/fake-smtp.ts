@@ -2,9 +2,18 @@
 // message it receives in the Outbox table, where admins read them in the app.
 import { SMTPServer } from 'smtp-server';
 import { simpleParser } from 'mailparser';
+import type { AddressInfo } from 'node:net';
 import { MailMessage } from '../../db/models/mail-message';
+import { choosePort } from '../../config/ports';
+import { useFakeSmtpPort } from './mailer';
 
-export function startFakeSmtp(port: number): Promise<SMTPServer> {
+/**
+ * Starts the fake on `port`, or, when another program holds it, on the next free port above it
+ * (unless `explicit` names the variable that asked for that very port: then it refuses). The mailer
+ * of this process sends to the port it really got; `server.address()` tells it too.
+ */
+export async function startFakeSmtp(port: number, opts: { explicit?: string | null } = {}): Promise<SMTPServer> {
+  const chosen = await choosePort(port, opts.explicit ?? null, 'the development mail server');
   const server = new SMTPServer({
     authOptional: true,
     disabledCommands: ['STARTTLS'],
@@ -25,8 +34,15 @@ export function startFakeSmtp(port: number): Promise<SMTPServer> {
         .catch((err: Error) => callback(err));
     },
   });
-  return new Promise((resolve, reject) => {
+  await new Promise<void>((resolve, reject) => {
     server.once('error', reject);
-    server.listen(port, '127.0.0.1', () => resolve(server));
+    server.listen(chosen, '127.0.0.1', () => resolve());
   });
+  useFakeSmtpPort(fakeSmtpPortOf(server));
+  return server;
+}
+
+/** The port a started fake listens on. */
+export function fakeSmtpPortOf(server: SMTPServer): number {
+  return (server.server.address() as AddressInfo).port;
 }

@@ -2,12 +2,20 @@ import nodemailer, { type Transporter } from 'nodemailer';
 import { env } from '../../config/env';
 
 let transporter: Transporter | null = null;
+/** the port the local fake really listens on, once started in this process (PW_SMTP_FAKE_PORT may have been held) */
+let fakePort: number | null = null;
 
-/** SMTP_URL in production; the local fake (smtp://127.0.0.1:PW_SMTP_FAKE_PORT) otherwise. */
+/** Sends to the fake on this port from now on. */
+export function useFakeSmtpPort(port: number) {
+  fakePort = port;
+  transporter = null;
+}
+
+/** SMTP_URL in production; the local fake (smtp://127.0.0.1:<its port>) otherwise. */
 function transport(): Transporter {
   if (!transporter) {
     const e = env();
-    const url = e.SMTP_URL ?? `smtp://127.0.0.1:${e.PW_SMTP_FAKE_PORT}`;
+    const url = e.SMTP_URL ?? `smtp://127.0.0.1:${fakePort ?? e.PW_SMTP_FAKE_PORT}`;
     transporter = nodemailer.createTransport(url);
   }
   return transporter;

@@ -1,5 +1,6 @@
 import multer from 'multer';
 import { z } from 'zod';
+import { idParamSchema } from '../../../shared/schemas/bounds';
 import { defineRoute } from '../../http/route-table';
 import { ValidationError } from '../../../shared/errors';
 import { MAX_IMPORT_BYTES, commitImport, importTemplate, panelPreview } from './import';
@@ -8,7 +9,7 @@ import { sendAttachment } from '../../http/attachment';
 
 const DESIGN = ['admin', 'designer'] as const;
 const ALL = ['admin', 'designer', 'estimator', 'engineer'] as const;
-const PanelId = z.object({ panelId: z.coerce.number().int().positive() });
+const PanelId = z.object({ panelId: idParamSchema });
 
 const upload = multer({
   storage: multer.memoryStorage(),

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { countParamSchema, idParamSchema, versionSchema } from '../../../shared/schemas/bounds';
 import { defineRoute } from '../../http/route-table';
 import { IdParamSchema } from '../../../shared/schemas/auth';
 import { BulkEditSchema, CommentInputSchema, PanelInputSchema, PanelUpdateSchema, ReselectSchema, ReviewActionSchema } from '../../../shared/schemas/panel';
@@ -14,9 +15,9 @@ const DESIGN = ['admin', 'designer'] as const;
 const ENGINEER = ['engineer'] as const;
 const COMMENT = ['admin', 'designer', 'engineer', 'estimator'] as const;
 
-const PanelId = z.object({ panelId: z.coerce.number().int().positive() });
-const LoadId = z.object({ loadId: z.coerce.number().int().positive() });
-const LoadBody = z.object({ answers: z.record(z.string(), z.unknown()), version: z.number().int().min(0).optional() });
+const PanelId = z.object({ panelId: idParamSchema });
+const LoadId = z.object({ loadId: idParamSchema });
+const LoadBody = z.object({ answers: z.record(z.string(), z.unknown()), version: versionSchema.optional() });
 
 export const panelRoutes = [
   defineRoute({
@@ -68,7 +69,7 @@ export const panelRoutes = [
     access: DESIGN,
     summary: 'Archive or restore a panel',
     params: PanelId,
-    body: z.object({ archived: z.boolean(), version: z.number().int().min(0) }),
+    body: z.object({ archived: z.boolean(), version: versionSchema }),
     status: 200,
     handler: ({ user, params, body }) => service.archivePanel(user, params.panelId, body.archived, body.version),
   }),
@@ -78,7 +79,7 @@ export const panelRoutes = [
     access: DESIGN,
     summary: 'Add a motor',
     params: PanelId,
-    body: z.object({ answers: z.record(z.string(), z.unknown()), panelVersion: z.number().int().min(0).optional() }),
+    body: z.object({ answers: z.record(z.string(), z.unknown()), panelVersion: versionSchema.optional() }),
     handler: ({ user, params, body }) => service.addLoad(user, params.panelId, body.answers, body.panelVersion ?? null),
   }),
   defineRoute({
@@ -97,7 +98,7 @@ export const panelRoutes = [
     access: DESIGN,
     summary: "Change a motor's answers",
     params: LoadId,
-    body: LoadBody.extend({ version: z.number().int().min(0) }),
+    body: LoadBody.extend({ version: versionSchema }),
     handler: ({ user, params, body }) => service.updateLoad(user, params.loadId, body.answers, body.version),
   }),
   defineRoute({ method: 'post', path: '/api/loads/:loadId/copy', access: DESIGN, summary: 'Copy a motor', params: LoadId, handler: ({ user, params }) => service.copyLoad(user, params.loadId) }),
@@ -181,7 +182,7 @@ export const panelRoutes = [
     path: '/api/panels/:panelId/revisions/:number',
     access: ALL,
     summary: 'One frozen revision',
-    params: PanelId.extend({ number: z.coerce.number().int().min(0) }),
+    params: PanelId.extend({ number: countParamSchema }),
     handler: ({ user, params }) => review.getRevision(user, params.panelId, params.number),
   }),
   defineRoute({
@@ -190,7 +191,7 @@ export const panelRoutes = [
     access: ALL,
     summary: 'Change report between two revisions',
     params: PanelId,
-    query: z.object({ from: z.coerce.number().int().min(0), to: z.coerce.number().int().min(0) }),
+    query: z.object({ from: countParamSchema, to: countParamSchema }),
     handler: ({ user, params, query }) => review.compareRevisions(user, params.panelId, query.from, query.to),
   }),
   defineRoute({
@@ -199,7 +200,7 @@ export const panelRoutes = [
     access: ALL,
     summary: 'Change report between two revisions as .xlsx (totals, lines with formulas, decisions)',
     params: PanelId,
-    query: z.object({ from: z.coerce.number().int().min(0), to: z.coerce.number().int().min(0) }),
+    query: z.object({ from: countParamSchema, to: countParamSchema }),
     handler: async ({ user, params, query, res }) => {
       const out = await changeReportWorkbook(user, params.panelId, query.from, query.to);
       return sendAttachment(res, out.base, 'xlsx', out.buffer);

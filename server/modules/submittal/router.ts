@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { idParamSchema } from '../../../shared/schemas/bounds';
 import { defineRoute } from '../../http/route-table';
 import { ConflictError } from '../../../shared/errors';
 import { computeChecks } from '../checks/service';
@@ -8,7 +9,7 @@ import { logoOf } from '../settings/service';
 import { writeSubmittalPdf, type SubmittalData } from './pdf';
 
 const ALL = ['admin', 'designer', 'estimator', 'engineer'] as const;
-const PanelId = z.object({ panelId: z.coerce.number().int().positive() });
+const PanelId = z.object({ panelId: idParamSchema });
 
 /** A file name from the job number and panel name: letters, digits, dot, dash and underscore only. */
 export function submittalFileName(jobNumber: string, panelName: string): string {
