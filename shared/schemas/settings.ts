@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { versionSchema } from './bounds';
 
 /** The tokens a drawing-number scheme may hold; `{sheet}` numbers each page, `{sheet:3}` pads it to 3 digits. */
 export const DRAWING_TOKENS = ['job', 'panel', 'rev', 'sheet'] as const;
@@ -76,11 +77,11 @@ export const ShopSettingsFields = z.object({
 });
 export type ShopSettingsInput = z.infer<typeof ShopSettingsFields>;
 
-export const ShopSettingsUpdateSchema = ShopSettingsFields.extend({ version: z.number().int().min(0).max(2147483647) }).strict();
+export const ShopSettingsUpdateSchema = ShopSettingsFields.extend({ version: versionSchema }).strict();
 export type ShopSettingsUpdate = z.infer<typeof ShopSettingsUpdateSchema>;
 
 /** The logo upload's form field besides the file. */
-export const LogoUploadSchema = z.object({ version: z.coerce.number().int().min(0).max(2147483647) });
+export const LogoUploadSchema = z.object({ version: z.coerce.number().pipe(versionSchema) });
 
 export interface ShopSettings extends ShopSettingsInput {
   logo: { contentType: string; bytes: number; updatedAt: string } | null;
