@@ -51,7 +51,7 @@ export function selectConductor(
   for (const size of sizes) {
     const a = allowableAmpacity(size, material, tempRatingC, ambientC, edition);
     if (a + 1e-9 >= minAmpacity) {
-      return { size, sets: 1, ampacity: a, material, tempRatingC, basis: nec(edition, parts.join(', ')) + ` (${label})`, cautions };
+      return { size, sets: 1, ampacity: a, material, tempRatingC, basis: `${nec(edition, parts.join(', '))} (${label})`, cautions };
     }
   }
   const parallelSizes = sizes.filter((s) => sizes.indexOf(s) >= sizes.indexOf('1/0 AWG') && sizes.indexOf(s) <= sizes.indexOf('500 kcmil'));
@@ -66,7 +66,7 @@ export function selectConductor(
           ampacity: round2(a),
           material,
           tempRatingC,
-          basis: nec(edition, [...parts, '310.10(G)'].join(', ')) + ` (${label}; parallel sets up to 500 kcmil, common practice)`,
+          basis: `${nec(edition, [...parts, '310.10(G)'].join(', '))} (${label}; parallel sets up to 500 kcmil, common practice)`,
           cautions,
         };
       }

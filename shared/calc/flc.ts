@@ -74,7 +74,7 @@ export function fullLoadCurrent(input: FlcInput, edition: CodeEdition): FlcResul
       tableVolts: null,
       hp: round2(hp),
       source: `nameplate FLA (${why})`,
-      basis: nec(edition, '430.6(A)(1)') + ', nameplate current',
+      basis: `${nec(edition, '430.6(A)(1)')}, nameplate current`,
       assumed,
       cautions,
     };

@@ -25,7 +25,7 @@ import type { AssumedInput, LoadSelection, PerWindingScpd, SelectionOutput, Star
 import { DEFAULT_CODE_EDITION, nec, type CodeEdition } from '../standards/code-edition';
 import { enclosureType } from '../standards/nema-250-enclosure-types';
 import { nominalSystemVolts } from '../standards/nominal-system-voltages';
-import { type DecisionKey, type Decisions } from './decisions';
+import type { DecisionKey, Decisions } from './decisions';
 import { buildFacts, type Facts } from './facts';
 import { validateRuleFiles, type RuleFile } from './rule-file';
 
@@ -255,7 +255,7 @@ export function createSelector(ruleFiles: ReadonlyArray<RuleFileInput>, options:
         ruleId: 'sizing.iec-contactor',
         decision: `starter.iecAmps = ${iecAmps} (${iecCategory})`,
         reason: share === 1 ? 'rated operational current in the category at least the motor current' : `each contactor carries ${share === 0.5 ? 'half' : '1/√3'} of the motor current`,
-        basis: 'IEC 60947-4-1 utilisation categories' + (share === 1 ? '' : ' (common practice)'),
+        basis: `IEC 60947-4-1 utilisation categories${share === 1 ? '' : ' (common practice)'}`,
       });
     }
 

@@ -46,7 +46,7 @@ export function Component() {
             onQuantity: (l, quantity) => updateLine.mutate({ lineId: l.id, quantity }),
           }
         : {},
-    [canPrice], // eslint-disable-line react-hooks/exhaustive-deps
+    [canPrice, deleteLine.mutate, updateLine.mutate],
   );
   if (bom.isPending || !panel) return <Loading what="Loading the bill of materials" />;
   if (bom.isError) return <ErrorNote error={bom.error} />;
