@@ -19,6 +19,7 @@ import {
   type LabourKey,
   type LabourUnit,
 } from '../schemas/catalogue';
+import { round2 } from './round';
 
 type WireSize = (typeof WIRE_SIZES)[number];
 type HpVolts = (typeof HP_VOLTS)[number];
@@ -273,7 +274,6 @@ export function unitLabourHours(category: Category, item: CatalogueItem | null, 
   return round4(mount + item.terminations * term + item.labourHours);
 }
 
-const round2 = (n: number): number => Math.round((n + Number.EPSILON) * 100) / 100;
 const round4 = (n: number): number => Math.round((n + Number.EPSILON) * 10000) / 10000;
 
 /** A line swapped by the estimator for an equivalent item: the item's price, labour, heat and rating, with the reason. */

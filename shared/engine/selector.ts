@@ -28,6 +28,7 @@ import { nominalSystemVolts } from '../standards/nominal-system-voltages';
 import type { DecisionKey, Decisions } from './decisions';
 import { buildFacts, type Facts } from './facts';
 import { validateRuleFiles, type RuleFile } from './rule-file';
+import { round2 } from '../calc/round';
 
 export interface RuleFileInput {
   file: string;
@@ -62,12 +63,9 @@ const FALLBACK: Decisions = {
 const CONTACTOR_STARTERS: readonly StarterType[] = ['FVNR', 'FVR', 'two-speed'];
 const AC_STARTERS: readonly StarterType[] = ['FVNR', 'FVR', 'RVSS', 'VFD', 'wye-delta', 'part-winding', 'two-speed'];
 
-const round2 = (x: number) => Math.round(x * 100) / 100;
-
 function formatValue(v: unknown): string {
   return typeof v === 'string' ? v : JSON.stringify(v);
 }
-
 
 function parseOrThrow<T>(schema: { safeParse(v: unknown): { success: true; data: T } | { success: false; error: { issues: ReadonlyArray<{ path: ReadonlyArray<PropertyKey>; message: string }> } } }, value: unknown, prefix: string): T {
   const r = schema.safeParse(value);

@@ -30,6 +30,7 @@ import { storedBomLines } from './repository';
 import { motorConnectionCard } from './connection';
 import type { Panel } from '../../db/models/panel';
 import type { Job } from '../../db/models/job';
+import { round2 } from '../../../shared/calc/round';
 
 /** Control circuit voltage of the panel (the bill of materials' default). */
 export const CONTROL_VOLTS = 120;
@@ -52,8 +53,6 @@ export function heatMounting(mounting: string): EnclosureMounting {
   };
   return map[mounting] ?? 'wall-mounted';
 }
-
-const round2 = (x: number) => Math.round(x * 100) / 100;
 
 function component(line: BomLine, type: NonNullable<ReturnType<typeof sccrTypeForCatalogueCategory>>): SccrComponentInput {
   return {

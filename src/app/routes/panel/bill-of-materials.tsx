@@ -9,7 +9,7 @@ import { BomTable, type LineActions } from '../../../features/bom/components/bom
 import { ManualLineForm } from '../../../features/bom/components/manual-line-form';
 import { SwapForm } from '../../../features/bom/components/swap-form';
 import { PricingForm } from '../../../features/bom/components/pricing-form';
-import { money } from '../../../features/bom/components/format';
+import { formatAmount as money } from '../../../../shared/format/money';
 import { Caution, Empty, ErrorNote, Loading } from '../../../components/ui/feedback';
 import { Button } from '../../../components/ui/button';
 

@@ -10,8 +10,8 @@ import { inputClass } from '../../../components/ui/field';
 import { ApiError } from '../../../lib/api-client';
 import { checkQueries } from '../../../features/checks/api/checks';
 import { DecisionDifferences } from '../../../features/panels/components/decision-differences';
+import { formatMoney as money } from '../../../../shared/format/money';
 
-const money = (n: number) => n.toLocaleString(undefined, { style: 'currency', currency: 'USD' });
 
 function ChangeReport({ panelId, from, to }: { panelId: number; from: number; to: number }) {
   const r = useQuery(panelQueries.changeReport(panelId, from, to));

@@ -4,7 +4,8 @@ import { Field, inputClass } from '../../../components/ui/field';
 import { Button } from '../../../components/ui/button';
 import { ErrorNote, Loading } from '../../../components/ui/feedback';
 import { bomQueries, type StoredLine } from '../api/bom';
-import { bucketLabel, categoryLabel, money } from './format';
+import { bucketLabel, categoryLabel } from './format';
+import { formatAmount as money } from '../../../../shared/format/money';
 
 /** Swap a line's part for another active item of the same category; the reason is required and kept on the line. */
 export function SwapForm({ panelId, line, onSubmit, pending, error, onCancel }: { panelId: number; line: StoredLine; onSubmit: (v: { swapCode: string; swapReason: string }) => void; pending: boolean; error: unknown; onCancel: () => void }) {

@@ -7,11 +7,11 @@ import { Verdict } from '../../../components/ui/status';
 import { Button } from '../../../components/ui/button';
 import type { SccrRow, SccrWayOut } from '../../../../shared/calc/sccr';
 import type { ProtectionChoice } from '../../../../shared/calc/control-power';
+import { formatMoney } from '../../../../shared/format/money';
 
 const fmt = (x: number | null | undefined, d = 1): string =>
   x === null || x === undefined || !Number.isFinite(x) ? '—' : (Math.round(x * 10 ** d) / 10 ** d).toLocaleString('en-US', { maximumFractionDigits: d });
 
-const money = (x: number): string => `${x > 0 ? '+' : x < 0 ? '−' : ''}$${Math.abs(x).toLocaleString('en-US', { minimumFractionDigits: 2, maximumFractionDigits: 2 })}`;
 
 const SOURCE_WORDS: Record<SccrRow['source'], string> = {
   marked: 'Marked',
@@ -78,7 +78,7 @@ function WayOut({ w }: { w: SccrWayOut }) {
         </span>
       ) : null}
       <span className="w-28 text-right font-dense text-sm tabular-nums whitespace-nowrap" title="Cost difference at catalogue prices">
-        {w.costDifference === null ? '' : money(w.costDifference)}
+        {w.costDifference === null ? '' : formatMoney(w.costDifference, { signed: true })}
       </span>
     </li>
   );
