@@ -25,6 +25,16 @@ export default defineConfig({
         },
       },
       {
+        // React screens in a simulated browser, the network answered by msw (tests/client/setup.ts)
+        test: {
+          name: 'client',
+          include: ['tests/client/**/*.test.tsx'],
+          environment: 'happy-dom',
+          setupFiles: ['tests/client/setup.ts'],
+          testTimeout: 20_000,
+        },
+      },
+      {
         test: {
           name: 'e2e',
           include: ['tests/e2e/**/*.test.ts'],

@@ -51,7 +51,10 @@ export class CachedSessionStore extends session.Store {
     const key = digest(sid);
     const hit = this.entries.get(key);
     if (hit && this.feed.live) {
-      if (hit.expires > Date.now()) return cb(null, JSON.parse(hit.json) as SessionData);
+      if (hit.expires > Date.now()) {
+        cb(null, JSON.parse(hit.json) as SessionData);
+        return;
+      }
       this.entries.delete(key);
     }
     // A notification that arrives while the database answers may concern this very session: then

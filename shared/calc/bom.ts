@@ -21,6 +21,7 @@ import {
   type LabourUnit,
   type Requirement,
 } from '../schemas/catalogue';
+import { round2 } from './round';
 
 type WireSize = (typeof WIRE_SIZES)[number];
 type HpVolts = (typeof HP_VOLTS)[number];
@@ -291,7 +292,6 @@ export function unitLabourHours(category: Category, item: CatalogueItem | null, 
   return round4(mount + item.terminations * term + item.labourHours);
 }
 
-const round2 = (n: number): number => Math.round((n + Number.EPSILON) * 100) / 100;
 const round4 = (n: number): number => Math.round((n + Number.EPSILON) * 10000) / 10000;
 
 /** A line swapped by the estimator for an equivalent item: the item's price, labour, heat and rating, with the reason. */

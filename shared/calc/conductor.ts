@@ -10,6 +10,7 @@ import type { MotorLeadConductors } from '../schemas/selection';
 import { nec, type CodeEdition } from '../standards/code-edition';
 import { ambientCorrectionFactor, table310_15B1 } from '../standards/nec-table-310-15-b-1';
 import { TABLE_310_16, ampacity310_16, sizesFor, type ConductorMaterial, type TempRating } from '../standards/nec-table-310-16';
+import { round2 } from './round';
 
 export const TERMINATION_TEMP_C: TempRating = 75;
 
@@ -23,8 +24,6 @@ export interface ConductorChoice {
   basis: string;
   cautions: string[];
 }
-
-const round2 = (x: number) => Math.round(x * 100) / 100;
 
 export function allowableAmpacity(size: string, material: ConductorMaterial, insulation: TempRating, ambientC: number, edition: CodeEdition): number {
   const termination = Math.min(insulation, TERMINATION_TEMP_C) as TempRating;
@@ -51,7 +50,7 @@ export function selectConductor(
   for (const size of sizes) {
     const a = allowableAmpacity(size, material, tempRatingC, ambientC, edition);
     if (a + 1e-9 >= minAmpacity) {
-      return { size, sets: 1, ampacity: a, material, tempRatingC, basis: nec(edition, parts.join(', ')) + ` (${label})`, cautions };
+      return { size, sets: 1, ampacity: a, material, tempRatingC, basis: `${nec(edition, parts.join(', '))} (${label})`, cautions };
     }
   }
   const parallelSizes = sizes.filter((s) => sizes.indexOf(s) >= sizes.indexOf('1/0 AWG') && sizes.indexOf(s) <= sizes.indexOf('500 kcmil'));
@@ -66,7 +65,7 @@ export function selectConductor(
           ampacity: round2(a),
           material,
           tempRatingC,
-          basis: nec(edition, [...parts, '310.10(G)'].join(', ')) + ` (${label}; parallel sets up to 500 kcmil, common practice)`,
+          basis: `${nec(edition, [...parts, '310.10(G)'].join(', '))} (${label}; parallel sets up to 500 kcmil, common practice)`,
           cautions,
         };
       }

@@ -7,8 +7,7 @@
 // the phase current, FLA / √3 (common practice, per the device's instructions).
 
 import { nec, type CodeEdition } from '../standards/code-edition';
-
-const round2 = (x: number) => Math.round(x * 100) / 100;
+import { round2 } from './round';
 
 export function vfdMinOutputAmps(flaAmps: number, duty: 'normal' | 'heavy', edition: CodeEdition): { minOutputAmps: number; basis: string } {
   return {

@@ -12,6 +12,7 @@ import { nec, type CodeEdition } from '../standards/code-edition';
 import { nextLowerStandard } from '../standards/nec-table-240-6a';
 import type { ConductorMaterial, TempRating } from '../standards/nec-table-310-16';
 import { selectConductor } from './conductor';
+import { round2 } from './round';
 
 export interface FeederBranch {
   tag: string;
@@ -35,8 +36,6 @@ export interface FeederInput {
   ambientC: number;
   ocpdFamily: 'fuse' | 'breaker';
 }
-
-const round2 = (x: number) => Math.round(x * 100) / 100;
 
 export function feederRollup(input: FeederInput, edition: CodeEdition): PanelRollup & { notes: string[]; errors: string[]; otherLoadsAmps: number } {
   const notes: string[] = [];

@@ -10,6 +10,7 @@ import { formatHp, sameHp } from '../standards/hp-rows';
 import { TABLE_430_247, column430247, dcFlc, hpRows430247 } from '../standards/nec-table-430-247';
 import { TABLE_430_248, column430248, hpRows430248, singlePhaseFlc } from '../standards/nec-table-430-248';
 import { TABLE_430_250, column430250, hpRows430250, threePhaseFlc } from '../standards/nec-table-430-250';
+import { round2 } from './round';
 
 export const WATTS_PER_HP = 745.7;
 /** common practice: a kW rating within 2 % of a horsepower row is treated as that row */
@@ -55,10 +56,6 @@ function tableView(supply: FlcInput['supply'], volts: number): TableView {
   return { name: TABLE_430_247, column: c, rows: hpRows430247(c), value: (hp) => dcFlc(hp, c) };
 }
 
-function round2(x: number): number {
-  return Math.round(x * 100) / 100;
-}
-
 export function fullLoadCurrent(input: FlcInput, edition: CodeEdition): FlcResult {
   const assumed: AssumedInput[] = [];
   const cautions: string[] = [];
@@ -74,7 +71,7 @@ export function fullLoadCurrent(input: FlcInput, edition: CodeEdition): FlcResul
       tableVolts: null,
       hp: round2(hp),
       source: `nameplate FLA (${why})`,
-      basis: nec(edition, '430.6(A)(1)') + ', nameplate current',
+      basis: `${nec(edition, '430.6(A)(1)')}, nameplate current`,
       assumed,
       cautions,
     };

@@ -15,6 +15,6 @@ export function lockedRotorCurrent(
   return {
     min: amps(min),
     max: amps(max ?? min),
-    basis: nec(edition, '430.7(B), Table 430.7(B)') + ` (code letter ${input.codeLetter}${open ? ', open-ended: max shown equals min' : ''})`,
+    basis: `${nec(edition, '430.7(B), Table 430.7(B)')} (code letter ${input.codeLetter}${open ? ', open-ended: max shown equals min' : ''})`,
   };
 }

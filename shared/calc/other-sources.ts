@@ -12,8 +12,8 @@ import { nextHigherStandard } from '../standards/nec-table-240-6a';
 import { nominalSystemVolts } from '../standards/nominal-system-voltages';
 import type { FeederBranch, FeederOtherLoad } from './feeder';
 import { ratedAmps, transformerKva, transformerProtection } from './transformer';
+import { round2 } from './round';
 
-const round2 = (x: number) => Math.round(x * 100) / 100;
 const SQRT3 = Math.sqrt(3);
 
 /**

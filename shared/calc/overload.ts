@@ -5,6 +5,7 @@
 
 import { nec, type CodeEdition } from '../standards/code-edition';
 import type { LoadSelection, OverloadRelay } from '../schemas/selection';
+import { round2 } from './round';
 
 export interface OverloadResult {
   maxSettingAmps: number;
@@ -30,8 +31,6 @@ export function overloadMaxSetting(input: { flaAmps: number; serviceFactor: numb
     why,
   };
 }
-
-const round2 = (x: number) => Math.round(x * 100) / 100;
 
 /**
  * Where the relay sits changes the current it sees:

@@ -191,7 +191,7 @@ function evaluate(input: Omit<SccrInput, 'alternatives'>): Evaluated {
     );
     for (const c of b.components) {
       let r = baseRating(c, b.hp);
-      if (combo && combo.componentCodes.includes(c.code)) {
+      if (combo?.componentCodes.includes(c.code)) {
         r = {
           ratingKa: combo.ratingKa,
           source: 'combination',
@@ -199,7 +199,7 @@ function evaluate(input: Omit<SccrInput, 'alternatives'>): Evaluated {
         };
       }
       const row = rowOf(b.tag, c, r);
-      if (clFeeder && clFeeder.currentLimiting && available !== null && r.ratingKa !== null && r.source !== 'combination') {
+      if (clFeeder?.currentLimiting && available !== null && r.ratingKa !== null && r.source !== 'combination') {
         const raise = raiseByCurrentLimitingFeeder(
           {
             type: c.category,

@@ -9,6 +9,7 @@ import type { PerWindingScpd, ScpdType } from '../schemas/selection';
 import { nec, type CodeEdition } from '../standards/code-edition';
 import { nextHigherStandard, nextLowerStandard } from '../standards/nec-table-240-6a';
 import { exception2LimitPercent, maxPercent430_52, type MotorKind } from '../standards/nec-table-430-52';
+import { round2 } from './round';
 
 export interface ScpdResult {
   type: ScpdType;
@@ -38,8 +39,6 @@ export function motorKind(load: { supply: 'ac3' | 'ac1' | 'dc'; rotor?: string; 
 function family(type: ScpdType): 'fuse' | 'breaker' {
   return type === 'dual-element-fuse' || type === 'non-time-delay-fuse' ? 'fuse' : 'breaker';
 }
-
-const round2 = (x: number) => Math.round(x * 100) / 100;
 
 export function branchProtection(
   input: { flcAmps: number; type: ScpdType; motor: MotorKind; override?: { maxPercent: number; reason: string } },

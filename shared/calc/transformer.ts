@@ -9,8 +9,8 @@ import { nextHigherStandard, nextLowerStandard, standardRatings, type DeviceFami
 import { primaryLimit, secondaryLimit, TABLE_450_3B, type Limit450, type TransformerProtectionMethod } from '../standards/nec-table-450-3b';
 import { nextStandardKva, TRANSFORMER_KVA_SOURCE } from '../standards/transformer-kva-ratings';
 import { OutsideTableError } from '../errors';
+import { round2 } from './round';
 
-const round2 = (x: number) => Math.round(x * 100) / 100;
 const SQRT3 = Math.sqrt(3);
 
 export interface TransformerLoad {

@@ -9,11 +9,9 @@ import { nec, type CodeEdition } from '../standards/code-edition';
 import { CHAPTER_9_TABLE_8, resistanceOhmsPerKft } from '../standards/nec-chapter-9-table-8';
 import { sizesFor, type ConductorMaterial } from '../standards/nec-table-310-16';
 import { nominalSystemVolts } from '../standards/nominal-system-voltages';
+import { round2 } from './round';
 
 export const DROP_LIMIT_PERCENT = 3;
-
-const round2 = (x: number) => Math.round(x * 100) / 100;
-
 
 /** "2 × 350 kcmil per phase" -> { sets: 2, size: "350 kcmil" } */
 export function parseConductor(size: string): { sets: number; size: string } {

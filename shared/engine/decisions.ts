@@ -37,7 +37,7 @@ export type Decisions = { [K in DecisionKey]?: z.output<(typeof DECISION_SCHEMAS
 export const DECISION_KEYS = Object.keys(DECISION_SCHEMAS) as DecisionKey[];
 
 export function isDecisionKey(key: string): key is DecisionKey {
-  return Object.prototype.hasOwnProperty.call(DECISION_SCHEMAS, key);
+  return Object.hasOwn(DECISION_SCHEMAS, key);
 }
 
 /**

@@ -69,7 +69,7 @@ export type Facts = { [K in FactName]: z.output<(typeof FACT_SCHEMAS)[K]> };
 export const FACT_NAMES = Object.keys(FACT_SCHEMAS) as FactName[];
 
 export function isFactName(name: string): name is FactName {
-  return Object.prototype.hasOwnProperty.call(FACT_SCHEMAS, name);
+  return Object.hasOwn(FACT_SCHEMAS, name);
 }
 
 export function buildFacts(load: Load, supply: Supply, derived: { hp: number; flcAmps: number | null; flaAmps: number | null }): Facts {

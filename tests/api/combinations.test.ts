@@ -107,7 +107,7 @@ describe('tested combination ratings', () => {
 });
 
 describe('a combination table as a file', () => {
-  const csvOf = (rows: string[]) => Buffer.from(['ref,parts,ratingKa,maxVolts,source,active', ...rows].join('\r\n') + '\r\n');
+  const csvOf = (rows: string[]) => Buffer.from(`${['ref,parts,ratingKa,maxVolts,source,active', ...rows].join('\r\n')}\r\n`);
   const upload = (s: Session, body: Buffer, name = 'combinations.csv') => s.agent.post('/api/catalogue/combinations/import').set('x-csrf-token', s.token).attach('file', body, name);
   const list = async () => (await estimator.agent.get('/api/catalogue/combinations').expect(200)).body as Array<{ ref: string; ratingKa: number; source: string; version: number; active: boolean }>;
 

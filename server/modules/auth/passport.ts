@@ -12,7 +12,7 @@ export function configurePassport() {
     new LocalStrategy({ usernameField: 'email', passwordField: 'password' }, async (email, password, done) => {
       try {
         const user = await findUserByEmail(email.trim().toLowerCase());
-        if (!user || !user.passwordHash || !user.active) {
+        if (!user?.passwordHash || !user.active) {
           dummyHash ??= argon2.hash('not-a-real-password-0');
           await argon2.verify(await dummyHash, password).catch(() => false);
           return done(null, false);
@@ -30,7 +30,7 @@ export function configurePassport() {
   passport.deserializeUser(async (id: number, done) => {
     try {
       const u = await findSignedInUser(id);
-      if (!u || !u.active) return done(null, false);
+      if (!u?.active) return done(null, false);
       const current: CurrentUser = {
         id: u.id,
         organisationId: u.organisationId,

@@ -310,12 +310,12 @@ export function bomCsv(panels: readonly BomExportPanel[]): string {
       );
     }
   }
-  return out.join('\r\n') + '\r\n';
+  return `${out.join('\r\n')}\r\n`;
 }
 
 /** Stream the CSV; resolves once it is written. */
 export async function writeBomCsv(_job: BomExportJob, panels: readonly BomExportPanel[], stream: Writable): Promise<void> {
-  const body = '\uFEFF' + bomCsv(panels);
+  const body = `\uFEFF${bomCsv(panels)}`;
   await new Promise<void>((resolve, reject) => {
     stream.once('error', reject);
     stream.end(body, () => resolve());

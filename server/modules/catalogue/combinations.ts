@@ -106,7 +106,7 @@ export async function combinationsCsv(actor: CurrentUser): Promise<string> {
   const rows = await listCombinations(actor);
   const lines = [COMBINATION_COLUMNS.join(',')];
   for (const c of rows) lines.push([c.ref, c.componentCodes.join(' + '), c.ratingKa, c.maxVolts, c.source, c.active ? 'yes' : 'no'].map(csvField).join(','));
-  return lines.join('\r\n') + '\r\n';
+  return `${lines.join('\r\n')}\r\n`;
 }
 
 const MAX_COMBINATION_ROWS = 2000;

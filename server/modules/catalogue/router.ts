@@ -139,7 +139,7 @@ export const catalogueRoutes = [
     path: '/api/catalogue.csv',
     access: ALL,
     summary: 'The whole catalogue as .csv',
-    handler: async ({ user, res }) => sendAttachment(res, `panelwright-catalogue-${stamp()}`, 'csv', '\uFEFF' + catalogueToCsv(await service.allItems(user))),
+    handler: async ({ user, res }) => sendAttachment(res, `panelwright-catalogue-${stamp()}`, 'csv', `\uFEFF${catalogueToCsv(await service.allItems(user))}`),
   }),
   defineRoute({
     method: 'post',
@@ -178,7 +178,7 @@ export const catalogueRoutes = [
     path: '/api/catalogue/combinations.csv',
     access: ALL,
     summary: 'The tested combination ratings as .csv (the import format)',
-    handler: async ({ user, res }) => sendAttachment(res, `panelwright-combinations-${stamp()}`, 'csv', '\uFEFF' + (await combinations.combinationsCsv(user))),
+    handler: async ({ user, res }) => sendAttachment(res, `panelwright-combinations-${stamp()}`, 'csv', `\uFEFF${await combinations.combinationsCsv(user)}`),
   }),
   defineRoute({
     method: 'post',

@@ -65,7 +65,7 @@ export function unneutraliseCsvText(text: string): string {
 
 /** Remove characters XML 1.0 cannot carry (they would corrupt the .xlsx). */
 export function xmlSafe(text: string): string {
-  // eslint-disable-next-line no-control-regex
+  // biome-ignore lint/suspicious/noControlCharactersInRegex: these are exactly the control characters XML 1.0 forbids
   return text.replace(/[\u0000-\u0008\u000B\u000C\u000E-\u001F\uFFFE\uFFFF]/g, '');
 }
 
@@ -128,7 +128,7 @@ export function catalogueToCsv(items: readonly CatalogueItem[]): string {
     const row = catalogueItemToRow(item);
     lines.push(CATALOGUE_COLUMNS.map((c) => csvField(row[c.header])).join(','));
   }
-  return lines.join('\r\n') + '\r\n';
+  return `${lines.join('\r\n')}\r\n`;
 }
 
 // ------------------------------------------------------------------------------------------------

@@ -33,6 +33,7 @@ import type { Panel } from '../../db/models/panel';
 import type { Job } from '../../db/models/job';
 import { shopSettingsOf } from '../settings/service';
 import type { ShopSettings } from '../../../shared/schemas/settings';
+import { round2 } from '../../../shared/calc/round';
 
 /** Control circuit voltage of the panel (the bill of materials' default). */
 export const CONTROL_VOLTS = 120;
@@ -55,8 +56,6 @@ export function heatMounting(mounting: string): EnclosureMounting {
   };
   return map[mounting] ?? 'wall-mounted';
 }
-
-const round2 = (x: number) => Math.round(x * 100) / 100;
 
 function component(line: BomLine, type: NonNullable<ReturnType<typeof sccrTypeForCatalogueCategory>>): SccrComponentInput {
   return {

@@ -98,7 +98,7 @@ export async function motorListExport(actor: CurrentUser, panelId: number) {
     ['Panel', p.name],
     ['Supply', `${p.job.supplyVolts} V, ${p.job.supplyPhases}-phase, ${p.job.supplyHz} Hz; ${p.job.availableFaultKa} kA available; ambient ${p.job.ambientC} °C`],
     ['Code edition', `NEC ${p.job.codeEdition}`],
-    ['Exported', new Date().toISOString().slice(0, 16).replace('T', ' ') + ' UTC'],
+    ['Exported', `${new Date().toISOString().slice(0, 16).replace('T', ' ')} UTC`],
     ['Motors sheet', 'The import format: upload this workbook on another panel to add the same motors (tags must be new there).'],
     ['Selections sheet', "The engine's selections with the designer's overrides written over them (a note on the tag names each override)."],
     [],

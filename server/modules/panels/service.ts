@@ -52,7 +52,7 @@ export async function listPanels(actor: CurrentUser, jobId: number) {
 
 export async function requirePanel(actor: CurrentUser, id: number, transaction?: Transaction, lock = false): Promise<Panel & { job: Job }> {
   const p = await repo.findPanelWithJob(actor.organisationId, id, transaction, lock);
-  if (!p || !p.job) throw new NotFoundError('Panel');
+  if (!p?.job) throw new NotFoundError('Panel');
   return p as Panel & { job: Job };
 }
 
@@ -252,7 +252,7 @@ export async function reselectJobPanels(actor: CurrentUser, jobId: number, what:
   }
 }
 
-export async function addLoads(actor: CurrentUser, panelId: number, answersList: LoadInput[], t: Transaction, p: Panel & { job: Job }) {
+export async function addLoads(actor: CurrentUser, _panelId: number, answersList: LoadInput[], t: Transaction, p: Panel & { job: Job }) {
   const existing = await repo.loadsOf(p.id, t);
   const tags = new Set(existing.map((l) => l.tag.toLowerCase()));
   let position = existing.reduce((m, l) => Math.max(m, l.position), 0);

@@ -158,7 +158,9 @@ class Writer {
       this.doc.y = y + h;
     };
     drawRow(head, this.bold, '#e2e8f0');
-    rows.forEach((r, i) => drawRow(r, highlight?.(i) ? this.bold : this.regular, highlight?.(i) ? '#f3e3d3' : undefined));
+    rows.forEach((r, i) => {
+      drawRow(r, highlight?.(i) ? this.bold : this.regular, highlight?.(i) ? '#f3e3d3' : undefined);
+    });
     this.doc.moveDown(0.3);
   }
 }

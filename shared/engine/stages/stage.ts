@@ -26,7 +26,7 @@ export function emptyReport(): StageReport {
   return { trace: [], cautions: [], errors: [] };
 }
 
-export const round2 = (x: number) => Math.round(x * 100) / 100;
+export { round2 } from '../../calc/round';
 
 /** Runs a sizing step; a value outside a table becomes an error on this load, not a crash. */
 export function step<T>(report: StageReport, what: string, fn: () => T): T | null {

@@ -2,7 +2,7 @@ import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useMutation } from '@tanstack/react-query';
 import { Link, useParams } from 'react-router-dom';
-import { z } from 'zod';
+import type { z } from 'zod';
 import { AcceptInviteSchema } from '../../../shared/schemas/auth';
 import { post } from '../../lib/api-client';
 import { Field, inputClass } from '../../components/ui/field';

@@ -27,7 +27,7 @@ export function Component() {
   const create = useCreateItem();
   const [panel, setPanel] = useState<'none' | 'add' | 'import'>('none');
   const [history, setHistory] = useState<CatalogueEntry | null>(null);
-  const onChange = useCallback((item: CatalogueEntry, changes: ItemChanges) => update.mutate({ id: item.id, version: item.version, changes }), [update.mutate]); // eslint-disable-line react-hooks/exhaustive-deps
+  const onChange = useCallback((item: CatalogueEntry, changes: ItemChanges) => update.mutate({ id: item.id, version: item.version, changes }), [update.mutate]);
   const onHistory = useCallback((item: CatalogueEntry) => setHistory((h) => (h?.id === item.id ? null : item)), []);
   return (
     <div className="space-y-4">

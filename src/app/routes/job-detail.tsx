@@ -7,7 +7,7 @@ import { queryClient } from '../../lib/query-client';
 import { ErrorNote, Loading, PageHeader } from '../../components/ui/feedback';
 import { Button } from '../../components/ui/button';
 import { JobForm } from '../../features/jobs/components/job-form';
-import { JobPanels } from '../../features/jobs/components/job-panels';
+import { JobPanels } from '../../features/panels/components/job-panels';
 import { ActivityList } from '../../features/jobs/components/activity-list';
 
 export async function loader({ params }: LoaderFunctionArgs) {

@@ -17,7 +17,7 @@ export function Component() {
   const { data: me } = useQuery(sessionQueries.me());
   const canEdit = hasRole(me, 'admin', 'estimator');
   const update = useUpdateLabourUnit();
-  const onChange = useCallback((u: LabourUnitEntry, hours: number) => update.mutate({ key: u.key, version: u.version, hours }), [update.mutate]); // eslint-disable-line react-hooks/exhaustive-deps
+  const onChange = useCallback((u: LabourUnitEntry, hours: number) => update.mutate({ key: u.key, version: u.version, hours }), [update.mutate]);
   return (
     <div className="max-w-5xl space-y-4">
       <PageHeader

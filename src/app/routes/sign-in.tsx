@@ -16,7 +16,7 @@ export function Component() {
     signIn.mutate(values, {
       onSuccess: () => {
         const next = params.get('next');
-        navigate(next && next.startsWith('/') && !next.startsWith('//') ? next : '/jobs', { replace: true });
+        navigate(next?.startsWith('/') && !next.startsWith('//') ? next : '/jobs', { replace: true });
       },
     }),
   );

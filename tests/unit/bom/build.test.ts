@@ -18,7 +18,7 @@ function bom(selections: LoadSelection[], over: Partial<BuildBomInput> = {}) {
   });
 }
 const codes = (lines: BomLine[], bucket: string) =>
-  lines.filter((l) => l.bucket === bucket).map((l) => `${l.code ?? 'UNMATCHED:' + l.category} x${l.quantity}`);
+  lines.filter((l) => l.bucket === bucket).map((l) => `${l.code ?? `UNMATCHED:${l.category}`} x${l.quantity}`);
 
 describe('FVNR bucket (10 hp, 460 V; FLC 14 A per NEC 2023 Table 430.250)', () => {
   const { lines } = bom([makeSelection()]);

@@ -197,7 +197,7 @@ describe('zip bomb and size limits', () => {
   });
 
   it('a CSV with too many rows or columns', async () => {
-    const rows = Buffer.from('code\n' + 'x\n'.repeat(IMPORT_LIMITS.maxRows + 1));
+    const rows = Buffer.from(`code\n${'x\n'.repeat(IMPORT_LIMITS.maxRows + 1)}`);
     expect((await parseCatalogueFile(rows, 'csv')).errors[0]!.message).toBe(`the file has more than ${IMPORT_LIMITS.maxRows} rows`);
     const cols = Buffer.from(Array.from({ length: IMPORT_LIMITS.maxColumns + 1 }, (_, i) => `c${i}`).join(','));
     expect((await parseCatalogueFile(cols, 'csv')).errors[0]!.message).toBe(`the file has more than ${IMPORT_LIMITS.maxColumns} columns`);

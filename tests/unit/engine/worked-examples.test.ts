@@ -288,7 +288,7 @@ describe('a three-phase motor on an unbalanced supply (NEMA MG 1 14.35)', () => 
 
 describe('the trip class against the motor\'s locked-rotor withstand time', () => {
   // A class N relay trips within N s at 600 % of its setting (NEMA ICS 2, IEC 60947-4-1; from memory):
-  // the class must stay within the motor's locked-rotor (hot safe stall) withstand time (DOMAIN.md §3).
+  // the class must stay within the motor's locked-rotor (hot safe stall) withstand time (docs/domain/motor-branch.md, overload protection).
   const fan = (over: Record<string, unknown>) => motor({ tag: 'F-9', hp: 75, volts: 460, fla: 90, serviceFactor: 1.15, inertia: 'very-high', ...over });
 
   it('keeps class 30 for a very high inertia load when the motor withstands 30 s or more', async () => {

@@ -18,8 +18,8 @@ describe('panel nameplate (NEC 2023 409.110) and feeder (409.20, 409.21)', () =>
     expect(v['Full-load current']).toBe('79 A');
     expect(v['Short-circuit current rating']).toBe('22 kA rms symmetrical, 480 V');
     expect(v['Enclosure type']).toBe('Type 12');
-    expect(v['Phases']).toBe('3 phase');
-    expect(v['Frequency']).toBe('60 Hz');
+    expect(v.Phases).toBe('3 phase');
+    expect(v.Frequency).toBe('60 Hz');
     expect(n.label[0]).toBe('INDUSTRIAL CONTROL PANEL');
     expect(n.warnings).toEqual([]);
     // main disconnect 430.110(C)(1): 115 % × 79 A = 90.85 A; supply fuses up to 125 A (430.62(A)) -> 200 A switch

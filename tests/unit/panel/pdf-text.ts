@@ -10,7 +10,9 @@ function parseToUnicode(cmap: string): Map<number, string> {
     const entries = [...m[3].matchAll(/<([0-9a-fA-F ]*)>/g)].map((e) =>
       String.fromCharCode(...e[1].trim().split(/\s+/).filter(Boolean).map((h) => parseInt(h, 16))),
     );
-    entries.forEach((s, i) => map.set(start + i, s));
+    entries.forEach((s, i) => {
+      map.set(start + i, s);
+    });
   }
   return map;
 }

@@ -1,4 +1,4 @@
-import { useMemo, useState } from 'react';
+import { useCallback, useMemo, useState } from 'react';
 import { useQuery, useQueryClient } from '@tanstack/react-query';
 import { useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { queryClient } from '../../../lib/query-client';
@@ -9,7 +9,7 @@ import { BomTable, type LineActions } from '../../../features/bom/components/bom
 import { ManualLineForm } from '../../../features/bom/components/manual-line-form';
 import { SwapForm } from '../../../features/bom/components/swap-form';
 import { PricingForm } from '../../../features/bom/components/pricing-form';
-import { money } from '../../../features/bom/components/format';
+import { formatAmount as money } from '../../../../shared/format/money';
 import { Caution, Empty, ErrorNote, Loading } from '../../../components/ui/feedback';
 import { Button } from '../../../components/ui/button';
 
@@ -38,7 +38,7 @@ export function Component() {
   const highlight = search.get('line');
   const qc = useQueryClient();
   // a change to a signed-off panel's bill of materials opens a new draft: the panel's state moves too
-  const panelMoved = () => qc.invalidateQueries({ queryKey: panelQueries.detail(panelId).queryKey });
+  const panelMoved = useCallback(() => qc.invalidateQueries({ queryKey: panelQueries.detail(panelId).queryKey }), [qc, panelId]);
   const canRebuild = hasRole(me, 'admin', 'estimator', 'designer');
   const inReview = panel?.status === 'in_review';
   const canPrice = hasRole(me, 'admin', 'estimator');
@@ -54,7 +54,7 @@ export function Component() {
             onQuantity: (l, quantity) => updateLine.mutate({ lineId: l.id, quantity }, { onSuccess: panelMoved }),
           }
         : {},
-    [canEdit], // eslint-disable-line react-hooks/exhaustive-deps
+    [canEdit, deleteLine.mutate, updateLine.mutate, panelMoved],
   );
   if (bom.isPending || !panel) return <Loading what="Loading the bill of materials" />;
   if (bom.isError) return <ErrorNote error={bom.error} />;

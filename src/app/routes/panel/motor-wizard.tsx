@@ -67,7 +67,7 @@ function clean(v: Record<string, unknown>): Record<string, unknown> {
 function firstStepWithError(errors: FieldErrors): number {
   const keys = Object.keys(errors);
   const i = STEPS.findIndex((s) => STEP_FIELDS[s].some((f) => keys.includes(f)));
-  return i < 0 ? 0 : i;
+  return Math.max(i, 0);
 }
 
 /** Field names as the wizard labels them, for the preview's "what is missing" line. */
@@ -104,6 +104,7 @@ export function Component() {
   const valuesKey = JSON.stringify(values);
 
   // Live preview: the same engine as the server, in the browser, as the answers change.
+  // biome-ignore lint/correctness/useExhaustiveDependencies: keyed on the answers' JSON (valuesKey), as the form hands over a new values object on every render
   useEffect(() => {
     if (!p) return;
     const t = setTimeout(() => {
@@ -118,7 +119,6 @@ export function Component() {
         .catch((e: Error) => setPreview({ sel: null, error: e.message }));
     }, 150);
     return () => clearTimeout(t);
-    // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [valuesKey, p?.job.codeEdition]);
 
   const serverErrors = useMemo(() => (save.error instanceof ApiError ? save.error.fieldIssues : []), [save.error]);

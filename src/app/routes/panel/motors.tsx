@@ -150,7 +150,7 @@ export function Component() {
                     <td className="px-2 py-1.5 text-xs">
                       {bad ? <span className="font-semibold text-state-returned" title={s?.errors.join('; ')}>✖ error</span> : null}
                       {l.overrides.length ? <span className="ml-1 rounded bg-copper-100 px-1 font-semibold text-copper-700">{l.overrides.length} override</span> : null}
-                      {s && s.assumed.length ? <span className="ml-1 text-state-review" title={s.assumed.map((a) => a.field).join(', ')}>◔ {s.assumed.length} assumed</span> : null}
+                      {s?.assumed.length ? <span className="ml-1 text-state-review" title={s.assumed.map((a) => a.field).join(', ')}>◔ {s.assumed.length} assumed</span> : null}
                       {sourceOf.has(l.tag) ? (
                         <span className="ml-1 whitespace-nowrap rounded bg-surface px-1 font-semibold" title={sourceOf.get(l.tag)!.description}>
                           ⚡ from {sourceOf.get(l.tag)!.tag}

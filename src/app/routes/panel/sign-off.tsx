@@ -54,8 +54,8 @@ function LimitingParts({ rows }: { rows: SccrRow[] }) {
     </p>
   );
 }
+import { formatMoney as money } from '../../../../shared/format/money';
 
-const money = (n: number) => n.toLocaleString(undefined, { style: 'currency', currency: 'USD' });
 
 function ChangeReport({ panelId, from, to }: { panelId: number; from: number; to: number }) {
   const r = useQuery(panelQueries.changeReport(panelId, from, to));
@@ -68,7 +68,7 @@ function ChangeReport({ panelId, from, to }: { panelId: number; from: number; to
     ...d.bom.changed.map((e) => ({ kind: 'Changed', e })),
   ];
   return (
-    <div className="space-y-2" aria-label="Change report">
+    <div className="space-y-2" role="group" aria-label="Change report">
       <a className="text-sm font-semibold text-copper-700 underline" href={`/api/panels/${panelId}/change-report.xlsx?from=${from}&to=${to}`} download>
         Download R{from} → R{to} (.xlsx)
       </a>
@@ -168,7 +168,7 @@ export function Component() {
           <h2 className="mb-2 flex items-center gap-2 text-lg font-semibold">Sign-off <SignOffState state={p.status} /></h2>
           <p className="mb-3 text-sm text-ink-soft">Draft → In review → Signed off (a frozen revision) or Returned. Changing a signed-off panel opens a new draft.</p>
           {canReview ? (
-            <div className="rounded border border-line px-3 py-2 text-sm" aria-label="Before you sign">
+            <div className="rounded border border-line px-3 py-2 text-sm" role="group" aria-label="Before you sign">
               <p className="mb-1 text-xs font-semibold uppercase text-ink-soft">Before you sign</p>
               {sccr ? (
                 <p className={sccrShort ? 'font-semibold text-state-returned' : 'text-state-signed'} data-testid="sign-off-sccr">

@@ -12,7 +12,8 @@ import {
 import { extendedCost, extendedLabourHours } from '../../../../shared/calc/bom';
 import type { BomTotals } from '../../../../shared/schemas/catalogue';
 import type { StoredLine } from '../api/bom';
-import { bucketLabel, categoryLabel, hours, money, qty } from './format';
+import { bucketLabel, categoryLabel, hours, qty } from './format';
+import { formatAmount as money } from '../../../../shared/format/money';
 import { DataCell, DataTableHead, DenseTable } from '../../../components/ui/data-table-parts';
 
 type Row = StoredLine & { extended: number; labour: number };

@@ -1,7 +1,6 @@
 import { CATEGORY_LABELS, PANEL_BUCKET, type BomCategory } from '../../../../shared/schemas/catalogue';
 import { isSourceBucket } from '../../../../shared/calc/other-sources';
 
-export const money = (n: number) => n.toLocaleString('en-US', { minimumFractionDigits: 2, maximumFractionDigits: 2 });
 export const hours = (n: number) => n.toLocaleString('en-US', { minimumFractionDigits: 2, maximumFractionDigits: 2 });
 export const qty = (n: number) => n.toLocaleString('en-US', { maximumFractionDigits: 2 });
 

@@ -4,8 +4,9 @@ import { Field, inputClass } from '../../../components/ui/field';
 import { Button } from '../../../components/ui/button';
 import { ErrorNote, Loading } from '../../../components/ui/feedback';
 import { bomQueries, type StoredLine } from '../api/bom';
-import { bucketLabel, categoryLabel, money } from './format';
+import { bucketLabel, categoryLabel } from './format';
 import { describeRequirement } from '../../../../shared/calc/bom';
+import { formatAmount as money } from '../../../../shared/format/money';
 
 /**
  * Swap a line's part for another active item that meets the line's requirement (the one the matcher used: the

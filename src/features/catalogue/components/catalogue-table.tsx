@@ -12,7 +12,8 @@ import {
   type SortingState,
 } from '@tanstack/react-table';
 import { CATEGORY_IDS, CATEGORY_LABELS, type CatalogueEntry, type Category, type ItemChanges, type Ratings } from '../../../../shared/schemas/catalogue';
-import { EditableNumber, money } from './editable-cell';
+import { EditableNumber } from './editable-cell';
+import { formatAmount as money } from '../../../../shared/format/money';
 import { DataCell, DataTableHead, DenseTable } from '../../../components/ui/data-table-parts';
 
 /** The ratings that identify an item, in a short line (volts, amps, hp, size, range …). */

@@ -7,11 +7,11 @@ import { Verdict } from '../../../components/ui/status';
 import { Button } from '../../../components/ui/button';
 import type { SccrRow, SccrWayOut } from '../../../../shared/calc/sccr';
 import type { ProtectionChoice } from '../../../../shared/calc/control-power';
+import { formatMoney } from '../../../../shared/format/money';
 
 const fmt = (x: number | null | undefined, d = 1): string =>
   x === null || x === undefined || !Number.isFinite(x) ? '—' : (Math.round(x * 10 ** d) / 10 ** d).toLocaleString('en-US', { maximumFractionDigits: d });
 
-const money = (x: number): string => `${x > 0 ? '+' : x < 0 ? '−' : ''}$${Math.abs(x).toLocaleString('en-US', { minimumFractionDigits: 2, maximumFractionDigits: 2 })}`;
 
 const SOURCE_WORDS: Record<SccrRow['source'], string> = {
   marked: 'Marked',
@@ -78,7 +78,7 @@ function WayOut({ w }: { w: SccrWayOut }) {
         </span>
       ) : null}
       <span className="w-28 text-right font-dense text-sm tabular-nums whitespace-nowrap" title="Cost difference at catalogue prices">
-        {w.costDifference === null ? '' : money(w.costDifference)}
+        {w.costDifference === null ? '' : formatMoney(w.costDifference, { signed: true })}
       </span>
     </li>
   );
@@ -379,7 +379,7 @@ function NameplateSection({ np }: { np: Checks['nameplate'] }) {
     >
       <style>{PRINT_CSS}</style>
       <div className="grid gap-6 md:grid-cols-[auto_1fr]">
-        <div className="pw-nameplate w-[22rem] self-start rounded border-2 border-ink bg-white p-3 font-dense text-ink" aria-label="Nameplate label preview">
+        <div className="pw-nameplate w-[22rem] self-start rounded border-2 border-ink bg-white p-3 font-dense text-ink" role="group" aria-label="Nameplate label preview">
           <p className="border-b border-ink pb-1 text-center text-sm font-bold tracking-widest">{r.label[0]}</p>
           <dl className="mt-2 grid grid-cols-[auto_1fr] gap-x-3 gap-y-0.5 text-sm">
             {r.lines.map((l) => (

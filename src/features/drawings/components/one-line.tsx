@@ -11,7 +11,7 @@ const FONT = "'Barlow', sans-serif";
 const STEP = 62;
 const X = 70;
 
-function Symbol({ e, y }: { e: OneLineElement; y: number }) {
+function ElementSymbol({ e, y }: { e: OneLineElement; y: number }) {
   const mid = y + STEP / 2;
   switch (e.kind) {
     case 'bus':
@@ -148,7 +148,7 @@ export function OneLine({ selection, feed = null, width = 420 }: OneLineProps) {
         const y = i * STEP + 4;
         return (
           <g key={`${e.kind}-${i}`}>
-            <Symbol e={e} y={y} />
+            <ElementSymbol e={e} y={y} />
             <text x={X + 56} y={y + STEP / 2 - 2} fontSize={12} fontWeight={600} fill={SLATE} fontFamily={FONT}>
               {e.label}
             </text>

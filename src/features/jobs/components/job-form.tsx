@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { z } from 'zod';
+import type { z } from 'zod';
 import { CODE_EDITIONS, JobInputSchema, type JobInput } from '../../../../shared/schemas/job';
 import { Field, inputClass } from '../../../components/ui/field';
 import { percentUnbalance } from '../../../../shared/standards/nema-mg1-voltage-unbalance';

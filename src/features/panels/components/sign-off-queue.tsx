@@ -40,7 +40,7 @@ export function SignOffQueue({ me }: { me: CurrentUser | null | undefined }) {
         // oldest wait first, except signed off: newest first
         const shown = (list.state === 'signed_off' ? [...items].reverse() : items).slice(0, SHOWN);
         return (
-          <div key={list.state} aria-label={list.title} className={`rounded border bg-panel p-3 ${list.mine && items.length ? 'border-copper-500/60' : 'border-line'}`}>
+          <div key={list.state} role="group" aria-label={list.title} className={`rounded border bg-panel p-3 ${list.mine && items.length ? 'border-copper-500/60' : 'border-line'}`}>
             <h2 className="mb-1 flex items-baseline gap-2 text-xs font-semibold uppercase tracking-wide text-ink-soft">
               {list.title} <span className="text-ink">({items.length})</span>
               {list.mine ? <span className="ml-auto normal-case tracking-normal text-copper-700">your next work</span> : null}

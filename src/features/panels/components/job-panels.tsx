@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import { Link } from 'react-router-dom';
-import { panelQueries, useCreatePanel } from '../../panels/api/panels';
+import { panelQueries, useCreatePanel } from '../api/panels';
 import { SignOffState } from '../../../components/ui/status';
 import { Empty, ErrorNote, Loading } from '../../../components/ui/feedback';
 import { Button } from '../../../components/ui/button';
