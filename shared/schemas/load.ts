@@ -140,6 +140,30 @@ export const loadCrossCheck = crossCheck;
 
 export const LoadSchema = LoadObject.superRefine(crossCheck);
 
+/**
+ * Answers the engine assumes when they are not given, and flags in the selection's `assumed` list
+ * (service factor 1.0, so a 115 % overload limit per 430.32(A)(1); NEMA Type 12; no code letter;
+ * a shunt field; constant torque; table FLC for the FLA; short drive leads). A form leaves them
+ * empty until the user answers, so the wizard, the motor-list import and the CLI reach the same
+ * selection, with the same flags, for the same unknowns.
+ */
+export const ASSUMED_WHEN_NOT_GIVEN = ['serviceFactor', 'environment', 'codeLetter', 'dcField', 'torque', 'fla', 'cableLengthFt'] as const;
+
+/**
+ * The answers a motor takes when they are not given: the schema's own defaults, read from it (each
+ * field parsed from "not given"), less the assumptions above. The wizard starts from these; the
+ * import and the CLI get the same values from the same schema when they parse.
+ */
+export function loadDefaults(): Partial<Load> {
+  const out: Record<string, unknown> = {};
+  for (const [key, field] of Object.entries(LoadObject.shape)) {
+    if ((ASSUMED_WHEN_NOT_GIVEN as readonly string[]).includes(key)) continue;
+    const r = (field as z.ZodType).safeParse(undefined);
+    if (r.success && r.data !== undefined) out[key] = r.data;
+  }
+  return out as Partial<Load>;
+}
+
 export const SelectionInputSchema = z
   .object({
     supply: SupplySchema,
