@@ -4,6 +4,8 @@ import ExcelJS from 'exceljs';
 import type { CurrentUser } from '../../../shared/schemas/auth';
 import { LoadSchema, type LoadInput } from '../../../shared/schemas/load';
 import { ValidationError, zodIssues } from '../../../shared/errors';
+// each row's problems in plain sentences (the same error map as the forms)
+import '../../../shared/plain-messages';
 import { changePanel, addLoads, requirePanel } from './service';
 import { recordActivity } from '../activity/service';
 import { loadsOf } from './repository';
