@@ -238,6 +238,21 @@ export const ANSWER_VALUE_LABELS: Record<string, Record<string, string>> = {
   codeLetter: { none: 'none' },
 };
 
+/** Text ratings' values (kind, function) of the catalogue seed, in words. */
+export const RATING_VALUE_LABELS: Record<string, string> = {
+  'wall-mount': 'wall-mount', 'free-standing': 'free-standing', thermal: 'thermal', electronic: 'electronic', iec: 'IEC', nema: 'NEMA',
+  power: 'power', control: 'control', ground: 'ground', 'feed-through': 'feed-through', front: 'front-mounted',
+  'sine-wave': 'sine-wave filter', 'dv-dt': 'dV/dt filter', 'air-conditioner': 'air conditioner', 'filter-fan': 'filter fan',
+  'push-button': 'push-button', 'pilot-light': 'pilot light', 'selector-switch': 'selector switch',
+  'run-light': 'run light', 'fault-light': 'fault light', start: 'start', stop: 'stop', slow: 'slow', fast: 'fast',
+  forward: 'forward', reverse: 'reverse', 'hand-off-auto': 'hand-off-auto', 'forward-off-reverse': 'forward-off-reverse',
+};
+
+/** A text rating's value in words; a value of the shop's own (not in the table) is shown as typed, hyphens as spaces. */
+export function ratingValueLabel(value: string): string {
+  return RATING_VALUE_LABELS[value] ?? value.replace(/-/g, ' ');
+}
+
 export function starterTypeLabel(type: string): string {
   return (STARTER_TYPE_LABELS as Record<string, string>)[type] ?? type;
 }

@@ -1,6 +1,7 @@
 // The shop's component catalogue, its labour units, and the bill-of-materials line.
 // Pure zod; the same schemas validate the seed files, the REST bodies and the spreadsheet import.
 import { z } from 'zod';
+import { RATING_LABELS } from '../labels';
 
 export const CATEGORIES = [
   { id: 'contactor', label: 'Contactors', labourKey: 'device-mount' },
@@ -201,7 +202,7 @@ export const CatalogueItemSchema = CatalogueItemBaseSchema.superRefine((item, ct
         ctx.addIssue({
           code: 'custom',
           path: ['ratings', key],
-          message: `${CATEGORY_LABELS[item.category]} need the rating "${key}"`,
+          message: `${CATEGORY_LABELS[item.category]} need a rating: ${RATING_LABELS[key].toLowerCase()}`,
         });
       }
     }

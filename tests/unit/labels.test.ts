@@ -5,7 +5,7 @@ import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
 import { z } from 'zod';
-import { DECISION_LABELS, RATING_LABELS, decisionValueLabel, fieldLabel, starterTypeLabel, ANSWER_LABELS } from '../../shared/labels';
+import { DECISION_LABELS, RATING_LABELS, RATING_VALUE_LABELS, decisionValueLabel, fieldLabel, starterTypeLabel, ANSWER_LABELS } from '../../shared/labels';
 import { issueSentence } from '../../shared/plain-messages';
 import { isDecisionKey, STARTER_TYPES } from '../../shared/engine/decisions';
 import { RatingsSchema, REQUIRED_RATINGS, CatalogueItemSchema } from '../../shared/schemas/catalogue';
@@ -51,6 +51,15 @@ describe('a label for every key the product shows', () => {
     const label = decisionValueLabel(key, value);
     expect(label, `${key} = ${String(value)}`).toBeTruthy();
     expect(looksLikeKey(label!), label).toBe(false);
+  });
+
+  it('every text rating value in the catalogue seed (kind, function) has words', () => {
+    const values = readdirSync(path.join(root, 'catalog'))
+      .filter((f) => f.endsWith('.json') && f !== 'combination-ratings.json' && f !== 'labour-units.json')
+      .flatMap((f) => (JSON.parse(readFileSync(path.join(root, 'catalog', f), 'utf8')) as Array<{ ratings: { kind?: string; function?: string } }>).flatMap((i) => [i.ratings.kind, i.ratings.function]))
+      .filter((v): v is string => typeof v === 'string');
+    expect(values.length).toBeGreaterThan(100);
+    for (const v of new Set(values)) expect(RATING_VALUE_LABELS[v], v).toBeTruthy();
   });
 
   it('every starter type reads as words: "dc-armature-resistance" is never shown', () => {

@@ -1,6 +1,7 @@
 // The panel submittal as PDF (pdfkit): cover, load schedule, protection summary with citations,
 // one-lines (as text chains), nameplate and feeder, SCCR worksheet, heat calculation, control power,
 // motor connection cards and the cautions.
+import { answerValueLabel, fieldLabel, starterTypeLabel } from '../../../shared/labels';
 import { createRequire } from 'node:module';
 import fs from 'node:fs';
 import PDFDocument from 'pdfkit';
@@ -154,7 +155,7 @@ class Writer {
 }
 
 function starterText(s: LoadSelection): string {
-  return `${s.starter.type}${s.starter.nemaSize !== null ? ` size ${s.starter.nemaSize}` : ''}`;
+  return `${starterTypeLabel(s.starter.type)}${s.starter.nemaSize !== null ? ` size ${s.starter.nemaSize}` : ''}`;
 }
 
 
@@ -276,7 +277,7 @@ export function writeSubmittalPdf(
         ['Disconnect', `>= ${fmt(s.disconnect.minAmps)} A${s.disconnect.minHp !== null ? `, >= ${s.disconnect.minHp} hp` : ''}`, s.disconnect.basis],
       ],
     );
-    for (const a of s.assumed) w.para(`Assumed input: ${a.field} = ${a.assumed} (${a.note})`, 8);
+    for (const a of s.assumed) w.para(`Assumed input: ${fieldLabel(a.field) ?? a.field} = ${answerValueLabel(a.field, a.assumed)} (${a.note})`, 8);
     for (const c of s.cautions) w.para(`Caution: ${c}`, 8);
   }
 

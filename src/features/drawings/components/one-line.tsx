@@ -1,6 +1,7 @@
 import type { LoadSelection } from '../../../../shared/schemas/selection';
 import { relayWiringText } from '../../../../shared/calc/overload';
 import { SCPD_WORDS } from '../../../../shared/calc/scpd';
+import { decisionValueLabel } from '../../../../shared/labels';
 
 const SLATE = '#334155';
 const COPPER = '#b87333';
@@ -59,7 +60,7 @@ export function oneLineElements(s: LoadSelection): OneLineElement[] {
     out.push({
       kind: 'vfd',
       label: s.starter.type === 'VFD' ? 'Variable-frequency drive' : 'DC drive',
-      detail: s.vfd ? `≥ ${s.vfd.minOutputAmps} A, ${s.vfd.duty} duty${s.vfd.outputFilter !== 'none' ? `, ${s.vfd.outputFilter} filter` : ''}` : undefined,
+      detail: s.vfd ? `≥ ${s.vfd.minOutputAmps} A, ${decisionValueLabel('vfd.duty', s.vfd.duty)?.toLowerCase()}${s.vfd.outputFilter !== 'none' ? `, ${decisionValueLabel('vfd.outputFilter', s.vfd.outputFilter)}` : ''}` : undefined,
     });
   } else if (s.starter.type === 'RVSS') {
     out.push({
