@@ -18,7 +18,8 @@ import { lockedRotorCurrent } from '../calc/locked-rotor';
 import { nemaStarterSize } from '../calc/nema-starter-size';
 import { overloadMaxSetting, overloadRelay } from '../calc/overload';
 import { unbalanceDerating } from '../standards/nema-mg1-voltage-unbalance';
-import { branchProtection, motorKind, partWindingProtection } from '../calc/scpd';
+import { branchProtection, motorKind, partWindingProtection, SCPD_WORDS } from '../calc/scpd';
+import { DECISION_LABELS, decisionValueLabel } from '../labels';
 import { synchronousRpm } from '../calc/synchronous-speed';
 import { LoadSchema, SelectionInputSchema, SupplySchema, type Load, type LoadInput, type SelectionInput, type Supply, type SupplyInput } from '../schemas/load';
 import type { AssumedInput, LoadSelection, PerWindingScpd, SelectionOutput, StarterType, SupplyKind, TraceEntry, UnbalanceResult } from '../schemas/selection';
@@ -148,7 +149,7 @@ export function createSelector(ruleFiles: ReadonlyArray<RuleFileInput>, options:
     if (flc) {
       assumed.push(...flc.assumed);
       cautions.push(...flc.cautions);
-      trace.push({ ruleId: 'sizing.flc', decision: `flcAmps = ${flc.flcAmps}`, reason: `table full-load current (${flc.source}) sizes conductors, protection and disconnect`, basis: flc.basis });
+      trace.push({ ruleId: 'sizing.flc', decision: `flcAmps = ${flc.flcAmps}`, words: `Full-load current ${flc.flcAmps} A`, reason: `table full-load current (${flc.source}) sizes conductors, protection and disconnect`, basis: flc.basis });
     }
     const flaAmps = load.fla ?? flc?.flcAmps ?? null;
     if (load.fla === undefined && flc) {
@@ -203,7 +204,10 @@ export function createSelector(ruleFiles: ReadonlyArray<RuleFileInput>, options:
       let decision = p.decision;
       if (setText.length) decision += `: ${setText.join(', ')}`;
       if (overridden.length) decision += ` (overridden: ${overridden.join('; ')})`;
-      trace.push({ ruleId: rule.id, decision, reason: sub(p.reason), basis: sub(p.basis) });
+      // the same in words for people (shared/labels.ts): no decision key or value key
+      const setWords = Object.entries(p.set ?? {}).map(([k, v]) => `${DECISION_LABELS[k as DecisionKey]}: ${decisionValueLabel(k as DecisionKey, v) ?? String(v)}`);
+      const words = `${p.decision}${setWords.length ? ` (${setWords.join('; ')})` : ''}${overridden.length ? `; ${overridden.length === 1 ? 'one decision was' : `${overridden.length} decisions were`} kept from a rule of higher priority` : ''}`;
+      trace.push({ ruleId: rule.id, decision, words, reason: sub(p.reason), basis: sub(p.basis) });
       if (p.caution) cautions.push(sub(p.caution));
       if (p.error) errors.push(sub(p.error));
     }
@@ -242,7 +246,7 @@ export function createSelector(ruleFiles: ReadonlyArray<RuleFileInput>, options:
       if (n) {
         nemaSize = n.size;
         starterBasis += `; ${n.basis}`;
-        trace.push({ ruleId: 'sizing.nema-size', decision: `starter.nemaSize = ${n.size}`, reason: `${n.ratedHp} hp rated at this voltage and duty, ${n.continuousAmps} A continuous`, basis: n.basis });
+        trace.push({ ruleId: 'sizing.nema-size', decision: `starter.nemaSize = ${n.size}`, words: `NEMA size ${n.size}`, reason: `${n.ratedHp} hp rated at this voltage and duty, ${n.continuousAmps} A continuous`, basis: n.basis });
       }
     }
     let iecCategory: 'AC-3' | 'AC-4' | null = null;
@@ -254,6 +258,7 @@ export function createSelector(ruleFiles: ReadonlyArray<RuleFileInput>, options:
       trace.push({
         ruleId: 'sizing.iec-contactor',
         decision: `starter.iecAmps = ${iecAmps} (${iecCategory})`,
+        words: `Contactor ${iecAmps} A (${iecCategory})`,
         reason: share === 1 ? 'rated operational current in the category at least the motor current' : `each contactor carries ${share === 0.5 ? 'half' : '1/√3'} of the motor current`,
         basis: 'IEC 60947-4-1 utilisation categories' + (share === 1 ? '' : ' (common practice)'),
       });
@@ -261,11 +266,11 @@ export function createSelector(ruleFiles: ReadonlyArray<RuleFileInput>, options:
 
     const ol = step('overload', () => overloadMaxSetting({ flaAmps: fla, serviceFactor: load.serviceFactor, tempRiseC: load.tempRiseC }, edition));
     if (ol && haveFlc) {
-      trace.push({ ruleId: 'sizing.overload', decision: `overload.maxSettingAmps = ${ol.maxSettingAmps} (${ol.maxPercent} % of ${fla} A)`, reason: ol.why, basis: ol.basis });
+      trace.push({ ruleId: 'sizing.overload', decision: `overload.maxSettingAmps = ${ol.maxSettingAmps} (${ol.maxPercent} % of ${fla} A)`, words: `Overload at most ${ol.maxSettingAmps} A (${ol.maxPercent} % of ${fla} A)`, reason: ol.why, basis: ol.basis });
     }
     const relay = ol && haveFlc ? overloadRelay({ flaAmps: fla, maxSettingAmps: ol.maxSettingAmps, starterType }, edition) : null;
     if (relay && relay.share !== 1) {
-      trace.push({ ruleId: 'sizing.overload-relay', decision: `overload.relay: ${relay.count} × set ${relay.settingAmps} A, ≤ ${relay.maxAmps} A`, reason: relay.note ?? '', basis: relay.basis });
+      trace.push({ ruleId: 'sizing.overload-relay', decision: `overload.relay: ${relay.count} × set ${relay.settingAmps} A, ≤ ${relay.maxAmps} A`, words: `Overload relay${relay.count > 1 ? 's' : ''}: ${relay.count} × set ${relay.settingAmps} A, ≤ ${relay.maxAmps} A`, reason: relay.note ?? '', basis: relay.basis });
     }
 
     let scpd = haveFlc
@@ -287,6 +292,7 @@ export function createSelector(ruleFiles: ReadonlyArray<RuleFileInput>, options:
         trace.push({
           ruleId: 'sizing.scpd-per-winding',
           decision: `scpd.perWinding = 2 × ${perWinding.ratingAmps} A (max ${perWinding.maxPercent} % = ${perWinding.computedMaxAmps} A each)`,
+          words: `Per half-winding: 2 × ${perWinding.ratingAmps} A (max ${perWinding.maxPercent} % = ${perWinding.computedMaxAmps} A each)`,
           reason: 'a part-winding motor may instead have a device on each half-winding connection, each at one-half the 430.52 value',
           basis: perWinding.basis,
         });
@@ -296,6 +302,7 @@ export function createSelector(ruleFiles: ReadonlyArray<RuleFileInput>, options:
       trace.push({
         ruleId: 'sizing.scpd',
         decision: `scpd.ratingAmps = ${scpd.ratingAmps} (${scpd.type}, max ${scpd.maxPercent} % = ${scpd.computedMaxAmps} A)`,
+        words: `Branch protection ${scpd.ratingAmps} A ${SCPD_WORDS[scpd.type]} (max ${scpd.maxPercent} % = ${scpd.computedMaxAmps} A)`,
         reason: scpd.exception === 'exception-1' ? 'the computed maximum is not a standard rating: next higher standard rating' : scpd.exception === 'exception-2' ? `explicit override: ${load.scpdOverride?.reason}` : 'at the Table 430.52 maximum',
         basis: scpd.basis,
       });
@@ -309,7 +316,7 @@ export function createSelector(ruleFiles: ReadonlyArray<RuleFileInput>, options:
       : null;
     if (cond) {
       cautions.push(...cond.cautions);
-      trace.push({ ruleId: 'sizing.conductor', decision: `conductor.size = ${cond.size} (${cond.ampacity} A >= ${cond.minAmpacity} A)`, reason: 'smallest conductor whose allowable ampacity covers the minimum', basis: cond.basis });
+      trace.push({ ruleId: 'sizing.conductor', decision: `conductor.size = ${cond.size} (${cond.ampacity} A >= ${cond.minAmpacity} A)`, words: `Conductors ${cond.size} (${cond.ampacity} A ≥ ${cond.minAmpacity} A)`, reason: 'smallest conductor whose allowable ampacity covers the minimum', basis: cond.basis });
     }
     const leads = cond
       ? step('motor-lead conductors', () =>
@@ -321,6 +328,7 @@ export function createSelector(ruleFiles: ReadonlyArray<RuleFileInput>, options:
       trace.push({
         ruleId: 'sizing.motor-leads',
         decision: `conductor.motorLeads = ${leads.count} × ${leads.size} (${leads.ampacity} A >= ${leads.minAmpacity} A)`,
+        words: `Motor leads ${leads.count} × ${leads.size} (${leads.ampacity} A ≥ ${leads.minAmpacity} A)`,
         reason: `between the controller and the motor each lead carries ${leads.share === 0.5 ? 'half' : 'about 58 % (1/√3)'} of the motor current`,
         basis: leads.basis,
       });
@@ -347,6 +355,7 @@ export function createSelector(ruleFiles: ReadonlyArray<RuleFileInput>, options:
         trace.push({
           ruleId: 'sizing.voltage-drop',
           decision: `conductor.voltageDrop = ${voltageDrop.volts} V (${voltageDrop.percent} %) over ${voltageDrop.lengthFt} ft`,
+          words: `Running voltage drop ${voltageDrop.volts} V (${voltageDrop.percent} %) over ${voltageDrop.lengthFt} ft`,
           reason: `${fla} A at full load on ${onLeads ? `the motor leads (${leads!.size})` : cond.size}`,
           basis: voltageDrop.basis,
         });
@@ -362,7 +371,7 @@ export function createSelector(ruleFiles: ReadonlyArray<RuleFileInput>, options:
     }
 
     const disc = haveFlc ? step('disconnect', () => motorDisconnect({ flcAmps, hp: round2(hp), driveInputAmps: starterType === 'VFD' ? load.driveInputAmps : undefined }, edition)) : null;
-    if (disc) trace.push({ ruleId: 'sizing.disconnect', decision: `disconnect.minAmps = ${disc.minAmps}, minHp = ${disc.minHp}`, reason: '115 % of the table FLC, horsepower rated', basis: disc.basis });
+    if (disc) trace.push({ ruleId: 'sizing.disconnect', decision: `disconnect.minAmps = ${disc.minAmps}, minHp = ${disc.minHp}`, words: `Disconnect at least ${disc.minAmps} A${disc.minHp ? ` and ${disc.minHp} hp` : ''}`, reason: '115 % of the table FLC, horsepower rated', basis: disc.basis });
 
     // The site's voltage unbalance: a motor on the line is derated (NEMA MG 1 14.35); behind a drive the
     // rectifier takes it and the motor sees balanced output (common practice).
@@ -377,6 +386,7 @@ export function createSelector(ruleFiles: ReadonlyArray<RuleFileInput>, options:
         trace.push({
           ruleId: 'sizing.voltage-unbalance',
           decision: u.factor === null ? 'unbalance.deratingFactor = none (above 5 %)' : `unbalance.deratingFactor = ${u.factor}`,
+          words: u.factor === null ? 'No unbalance derating factor (above 5 %)' : `Unbalance derating factor ${u.factor}`,
           reason: `${u.percent} % voltage unbalance at the site`,
           basis: u.basis,
         });
@@ -391,7 +401,7 @@ export function createSelector(ruleFiles: ReadonlyArray<RuleFileInput>, options:
     let lockedRotorAmps: LoadSelection['lockedRotorAmps'] = null;
     if (ac && load.codeLetter !== undefined) {
       lockedRotorAmps = step('locked-rotor current', () => lockedRotorCurrent({ codeLetter: load.codeLetter as string, hp, volts: load.volts, phases }, edition));
-      if (lockedRotorAmps) trace.push({ ruleId: 'sizing.locked-rotor', decision: `lockedRotorAmps = ${lockedRotorAmps.min}–${lockedRotorAmps.max} A`, reason: 'code letter kVA/hp at rated voltage', basis: lockedRotorAmps.basis });
+      if (lockedRotorAmps) trace.push({ ruleId: 'sizing.locked-rotor', decision: `lockedRotorAmps = ${lockedRotorAmps.min}–${lockedRotorAmps.max} A`, words: `Locked-rotor current ${lockedRotorAmps.min}–${lockedRotorAmps.max} A`, reason: 'code letter kVA/hp at rated voltage', basis: lockedRotorAmps.basis });
     }
     const syncRpm = ac && load.poles !== undefined ? synchronousRpm(load.hz, load.poles) : null;
 
@@ -407,14 +417,14 @@ export function createSelector(ruleFiles: ReadonlyArray<RuleFileInput>, options:
         outputFilter: decisions['vfd.outputFilter'] ?? 'none',
         basis: v.basis,
       };
-      trace.push({ ruleId: 'sizing.vfd', decision: `vfd.minOutputAmps = ${v.minOutputAmps} (${vfd.duty} duty)`, reason: 'drive output current at its duty rating covers the motor nameplate current', basis: v.basis });
+      trace.push({ ruleId: 'sizing.vfd', decision: `vfd.minOutputAmps = ${v.minOutputAmps} (${vfd.duty} duty)`, words: `Drive output at least ${v.minOutputAmps} A (${vfd.duty} duty)`, reason: 'drive output current at its duty rating covers the motor nameplate current', basis: v.basis });
     }
     let softStarter: LoadSelection['softStarter'] = null;
     if (starterType === 'RVSS') {
       const insideDelta = decisions['softStarter.insideDelta'] ?? false;
       const s = softStarterMinAmps(fla, insideDelta);
       softStarter = { minAmps: s.minAmps, insideDelta, bypass: decisions['softStarter.bypass'] ?? true };
-      trace.push({ ruleId: 'sizing.soft-starter', decision: `softStarter.minAmps = ${s.minAmps}`, reason: insideDelta ? 'inside-delta connection' : 'in-line connection', basis: s.basis });
+      trace.push({ ruleId: 'sizing.soft-starter', decision: `softStarter.minAmps = ${s.minAmps}`, words: `Soft starter at least ${s.minAmps} A`, reason: insideDelta ? 'inside-delta connection' : 'in-line connection', basis: s.basis });
     }
     const dc: LoadSelection['dc'] =
       load.supply === 'dc'

@@ -129,7 +129,7 @@ export function SelectionSummary({ selection, overridden = [] }: { selection: Lo
         <ol className="mt-1 space-y-1">
           {s.trace.map((t, i) => (
             <li key={`${t.ruleId}-${i}`} className="border-l-2 border-copper-100 pl-2">
-              <span className="font-semibold">{t.decision}</span> — {t.reason} <span className="text-ink-soft">[{t.basis}] ({t.ruleId})</span>
+              <span className="font-semibold">{t.words ?? t.decision}</span> — {t.reason} <span className="text-ink-soft" title={`rule ${t.ruleId}`}>[{t.basis}]</span>
             </li>
           ))}
         </ol>
