@@ -264,6 +264,17 @@ export function decisionValueLabel(key: DecisionKey, value: unknown): string | u
   return DECISION_VALUE_LABELS[key]?.[String(value)];
 }
 
+/** A value of a selection's field (an override's "was" and "value", a change report's cell) in words. */
+export function selectionValueLabel(field: string, value: unknown): string {
+  if (value === null || value === undefined) return '—';
+  if (typeof value === 'boolean') return value ? 'yes' : 'no';
+  if (field === 'starter.type') return starterTypeLabel(String(value));
+  if (field === 'scpd.type') return answerValueLabel('scpdType', value);
+  if (field === 'enclosure.nemaType') return `NEMA Type ${String(value)}`;
+  if (field === 'overload.tripClass') return `class ${String(value)}`;
+  return String(value);
+}
+
 /** An answer's value in words (the value itself when it is a number or has no entry). */
 export function answerValueLabel(key: string, value: unknown): string {
   if (typeof value === 'boolean') return value ? 'yes' : 'no';
