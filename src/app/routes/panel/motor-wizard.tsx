@@ -10,6 +10,7 @@ import { SelectionSummary } from '../../../features/panels/components/selection-
 import { OverrideEditor } from '../../../features/panels/components/override-editor';
 import { jobSupply } from '../../../../shared/schemas/job';
 import { ENVIRONMENT_LABELS } from '../../../features/panels/components/answer-labels';
+import { fieldLabel } from '../../../../shared/labels';
 import { browserSelector } from '../../../lib/selector';
 import { Field, SelectField, inputClass, type SelectOption } from '../../../components/ui/field';
 import { Button } from '../../../components/ui/button';
@@ -39,18 +40,14 @@ function firstStepWithError(errors: FieldErrors): number {
   return i < 0 ? 0 : i;
 }
 
-/** Field names as the wizard labels them, for the preview's "what is missing" line. */
-const PREVIEW_LABELS: Record<string, string> = {
-  tag: 'tag', hp: 'horsepower or kW', kw: 'horsepower or kW', volts: 'rated voltage', fla: 'nameplate FLA', serviceFactor: 'service factor', supply: 'supply',
-};
-
-function missingAnswers(issues: ReadonlyArray<{ path: PropertyKey[]; message: string; code?: string }>): string {
+/** The preview's "what is missing" line: each answer by its label, with the plain sentence. */
+function missingAnswers(issues: ReadonlyArray<{ path: PropertyKey[]; message: string }>): string {
   const parts = issues.slice(0, 3).map((i) => {
-    const key = String(i.path[0] ?? '');
-    const name = PREVIEW_LABELS[key] ?? key.replace(/([A-Z])/g, ' $1').toLowerCase();
-    return /received undefined/.test(i.message) ? `${name} needed` : `${name}: ${i.message.charAt(0).toLowerCase()}${i.message.slice(1)}`;
+    const key = i.path.map(String).join('.');
+    const name = key === 'hp' || key === 'kw' ? 'Horsepower or kW' : (fieldLabel(key) ?? key);
+    return `${name}: ${i.message}`;
   });
-  return [...new Set(parts)].join('; ') + (issues.length > 3 ? ' …' : '');
+  return [...new Set(parts)].join(' ') + (issues.length > 3 ? ' …' : '');
 }
 
 export function Component() {
