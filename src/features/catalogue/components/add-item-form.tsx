@@ -1,5 +1,5 @@
 import { useForm, useWatch, type Resolver } from 'react-hook-form';
-import { zodResolver } from '@hookform/resolvers/zod';
+import { formResolver as zodResolver } from '../../../lib/form-resolver';
 import type { z } from 'zod';
 import {
   CATALOGUE_COLUMNS,

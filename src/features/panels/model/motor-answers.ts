@@ -1,7 +1,7 @@
 // The motor wizard's answers: where a new motor starts, and what the wizard sends on save. Kept out
 // of the page so a unit test can check the wizard gives the same selection as the import and the CLI.
 import type { Resolver } from 'react-hook-form';
-import { zodResolver } from '@hookform/resolvers/zod';
+import { formResolver as zodResolver } from '../../../lib/form-resolver';
 import { LoadSchema, loadDefaults, type LoadInput } from '../../../../shared/schemas/load';
 
 /**
