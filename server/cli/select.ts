@@ -8,6 +8,7 @@
 import { readFileSync } from 'node:fs';
 import { DomainError, ValidationError } from '../../shared/errors';
 import { getSelector } from '../engine/rule-files';
+import '../../shared/plain-messages';
 
 type CliError = { path: string; message: string };
 

@@ -5,6 +5,7 @@ import type { NextFunction, Request, RequestHandler, Response } from 'express';
 import type { z } from 'zod';
 import type { CurrentUser, Role } from '../../shared/schemas/auth';
 import { ForbiddenError, UnauthenticatedError, ValidationError, zodIssues } from '../../shared/errors';
+import { issueSentence } from '../../shared/plain-messages';
 
 export type Access = 'public' | 'signed-in' | readonly Role[];
 export type Method = 'get' | 'post' | 'patch' | 'put' | 'delete';
@@ -51,7 +52,8 @@ function parsePart(schema: Schema | undefined, value: unknown, where: string) {
   const r = schema.safeParse(value ?? {});
   if (!r.success) {
     const issues = zodIssues(r.error.issues).map((i) => ({ ...i, path: i.path ? `${where}.${i.path}` : where }));
-    throw new ValidationError(`The ${where} has ${issues.length} problem${issues.length === 1 ? '' : 's'}: ${issues.map((i) => `${i.path} ${i.message}`).join('; ')}`, issues);
+    // the summary names each field by its label, never its key; the details keep the path for the form
+    throw new ValidationError(`Check ${issues.length === 1 ? 'this answer' : `these ${issues.length} answers`}: ${issues.map((i) => issueSentence(i.path, i.message)).join('; ')}`, issues);
   }
   return r.data;
 }

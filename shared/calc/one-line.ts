@@ -3,6 +3,7 @@
 import type { LoadSelection } from '../schemas/selection';
 import { relayWiringText } from './overload';
 import { SCPD_WORDS } from './scpd';
+import { decisionValueLabel } from '../labels';
 import type { motorFeed } from './other-sources';
 
 export type OneLineKind =
@@ -80,7 +81,7 @@ export function oneLineElements(s: LoadSelection, feed: MotorFeed = null): OneLi
     out.push({
       kind: 'vfd',
       label: s.starter.type === 'VFD' ? 'Variable-frequency drive' : 'DC drive',
-      detail: s.vfd ? `≥ ${s.vfd.minOutputAmps} A, ${s.vfd.duty} duty${s.vfd.outputFilter !== 'none' ? `, ${s.vfd.outputFilter} filter` : ''}` : undefined,
+      detail: s.vfd ? `≥ ${s.vfd.minOutputAmps} A, ${decisionValueLabel('vfd.duty', s.vfd.duty)?.toLowerCase()}${s.vfd.outputFilter !== 'none' ? `, ${decisionValueLabel('vfd.outputFilter', s.vfd.outputFilter)}` : ''}` : undefined,
     });
   } else if (s.starter.type === 'RVSS') {
     out.push({

@@ -3,6 +3,7 @@
 // the decisions); cautions count as one field.
 import type { LoadSelection } from '../schemas/selection';
 import { relayOf } from './overload';
+import { answerValueLabel, decisionValueLabel, starterTypeLabel } from '../labels';
 
 export interface SelectionDifference {
   field: string;
@@ -15,7 +16,7 @@ type Pick = (s: LoadSelection) => unknown;
 
 const FIELDS: ReadonlyArray<readonly [string, string, Pick]> = [
   ['flcAmps', 'Full-load current (A)', (s) => s.flcAmps],
-  ['starter.type', 'Starter', (s) => s.starter.type],
+  ['starter.type', 'Starter', (s) => starterTypeLabel(s.starter.type)],
   ['starter.nemaSize', 'NEMA size', (s) => s.starter.nemaSize],
   ['starter.iecAmps', 'Contactor current (A)', (s) => s.starter.iecAmps],
   ['starter.reversingContactors', 'Reversing contactors', (s) => s.starter.reversingContactors],
@@ -23,7 +24,7 @@ const FIELDS: ReadonlyArray<readonly [string, string, Pick]> = [
   ['overload.tripClass', 'Trip class', (s) => s.overload.tripClass],
   ['overload.providedByDrive', 'Overload by the drive', (s) => s.overload.providedByDrive],
   ['overload.relay', 'Overload relay as wired', (s) => (s.overload.providedByDrive || s.flcAmps <= 0 ? null : relayText(s))],
-  ['scpd.type', 'Branch protection type', (s) => s.scpd.type],
+  ['scpd.type', 'Branch protection type', (s) => answerValueLabel('scpdType', s.scpd.type)],
   ['scpd.ratingAmps', 'Branch protection (A)', (s) => s.scpd.ratingAmps],
   ['scpd.perWinding', 'Per half-winding devices (A)', (s) => s.scpd.perWinding?.ratingAmps ?? null],
   ['conductor.size', 'Conductors', (s) => s.conductor.size],
@@ -36,8 +37,8 @@ const FIELDS: ReadonlyArray<readonly [string, string, Pick]> = [
   ['enclosure.nemaType', 'Enclosure type', (s) => s.enclosure.nemaType],
   ['enclosure.flagForEngineer', 'Enclosure for the engineer', (s) => s.enclosure.flagForEngineer],
   ['vfd.minOutputAmps', 'Drive output (A)', (s) => s.vfd?.minOutputAmps ?? null],
-  ['vfd.duty', 'Drive duty', (s) => s.vfd?.duty ?? null],
-  ['vfd.outputFilter', 'Drive output filter', (s) => s.vfd?.outputFilter ?? null],
+  ['vfd.duty', 'Drive duty', (s) => (s.vfd ? decisionValueLabel('vfd.duty', s.vfd.duty) : null)],
+  ['vfd.outputFilter', 'Drive output filter', (s) => (s.vfd ? decisionValueLabel('vfd.outputFilter', s.vfd.outputFilter) : null)],
   ['vfd.inverterDutyMotor', 'Inverter-duty motor', (s) => s.vfd?.inverterDutyMotor ?? null],
   ['softStarter.minAmps', 'Soft starter (A)', (s) => s.softStarter?.minAmps ?? null],
   ['softStarter.bypass', 'Soft starter bypass', (s) => s.softStarter?.bypass ?? null],

@@ -2,6 +2,7 @@
 // Pure zod; the same schemas validate the seed files, the REST bodies and the spreadsheet import.
 import { z } from 'zod';
 import { countSchema } from './bounds';
+import { RATING_LABELS } from '../labels';
 
 export const CATEGORIES = [
   { id: 'contactor', label: 'Contactors', labourKey: 'device-mount' },
@@ -206,7 +207,7 @@ export const CatalogueItemSchema = CatalogueItemBaseSchema.superRefine((item, ct
         ctx.addIssue({
           code: 'custom',
           path: ['ratings', key],
-          message: `${CATEGORY_LABELS[item.category]} need the rating "${key}"`,
+          message: `${CATEGORY_LABELS[item.category]} need a rating: ${RATING_LABELS[key].toLowerCase()}`,
         });
       }
     }

@@ -25,6 +25,8 @@ export interface TraceEntry {
   ruleId: string;
   /** what was decided, e.g. "starter.type = FVR" */
   decision: string;
+  /** the same in words for people, without decision keys (selections stored before it have none) */
+  words?: string;
   /** plain-language reason */
   reason: string;
   /** code section / standard clause with edition, or "common practice" */

@@ -13,10 +13,14 @@ import { launch, newPage, screenshot, signInThroughForm } from '../setup/browser
 let browser: Browser;
 let panelUrl = '';
 
-async function fillWizard(page: Page, v: { tag: string; hp: string; fla?: string; reversing?: boolean; reverseHazard?: boolean }) {
+async function fillWizard(page: Page, v: { tag: string; hp: string; fla?: string; serviceFactor?: string; reversing?: boolean; reverseHazard?: boolean }) {
   await page.getByLabel('Tag', { exact: true }).fill(v.tag);
+  // a new motor starts with no supply, voltage or service factor: the nameplate's answers are typed
+  await page.getByLabel('Supply').selectOption('ac3');
+  await page.getByLabel('Rated voltage').fill('460');
   await page.getByLabel('Horsepower').fill(v.hp);
   if (v.fla) await page.getByLabel('Nameplate FLA').fill(v.fla);
+  if (v.serviceFactor) await page.getByLabel('Service factor').fill(v.serviceFactor);
   await page.getByRole('button', { name: /2\. Duty/ }).click();
   if (v.reversing) await page.getByLabel('Runs in both directions').check();
   await page.getByRole('button', { name: /3\. Site & hazards/ }).click();
@@ -67,9 +71,26 @@ describe('designer → engineer → estimator', () => {
     panelUrl = page.url().replace(/\/motors$/, '');
 
     await page.getByRole('link', { name: '+ Add motor' }).click();
-    await fillWizard(page, { tag: 'SP-1', hp: '25', fla: '31', reversing: true, reverseHazard: true });
-    // the live preview runs the engine in the browser: FVR with phase reversal for this motor
+    // Enter on the first step moves to the next step; it never saves answers the user has not seen
+    await page.getByLabel('Tag', { exact: true }).fill('SP-1');
+    await page.getByLabel('Tag', { exact: true }).press('Enter');
+    await page.getByLabel('Load inertia').waitFor();
+    expect(await page.getByRole('button', { name: /2\. Duty/ }).getAttribute('aria-current')).toBe('step');
+    expect(page.url()).toMatch(/\/motors\/new$/);
+    await page.getByRole('button', { name: /1\. Nameplate/ }).click();
+    // with no service factor given, the live preview shows the engine's assumption (430.32(A)(1), 115 %)
+    await page.getByLabel('Supply').selectOption('ac3');
+    await page.getByLabel('Rated voltage').fill('460');
+    await page.getByLabel('Horsepower').fill('25');
+    await page.getByLabel('Nameplate FLA').fill('31');
     const preview = page.getByRole('complementary', { name: 'Selection preview' });
+    await preview.getByText(/≤ 35\.65 A \(115 %\)/).waitFor(); // 31 A × 115 %, NEC 2023 430.32(A)(1)
+    await preview.getByText(/Service factor = 1\.0/).waitFor();
+    await page.getByLabel('Horsepower').press('Enter');
+    await page.getByLabel('Load inertia').waitFor();
+    await page.getByRole('button', { name: /1\. Nameplate/ }).click();
+    await fillWizard(page, { tag: 'SP-1', hp: '25', fla: '31', serviceFactor: '1.15', reversing: true, reverseHazard: true });
+    // the live preview runs the engine in the browser: FVR with phase reversal for this motor
     await preview.getByText(/FVR size 2/).waitFor();
     await preview.getByText(/Phase reversal/).waitFor();
     await screenshot(page, 'wizard-preview');

@@ -5,6 +5,8 @@ import type { CurrentUser } from '../../../shared/schemas/auth';
 import { LoadSchema, type LoadInput } from '../../../shared/schemas/load';
 import { flcRefusal } from '../../../shared/calc/flc';
 import { ValidationError, zodIssues } from '../../../shared/errors';
+// each row's problems in plain sentences (the same error map as the forms)
+import '../../../shared/plain-messages';
 import { changePanel, addLoads, requirePanel } from './service';
 import { recordActivity } from '../activity/service';
 import { loadsOf } from './repository';

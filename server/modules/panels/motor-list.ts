@@ -1,6 +1,7 @@
 // A panel's motor list as a workbook: the first sheet in the import format (every answer, so it
 // imports back into another panel unchanged), then the selections as a schedule, the column
 // meanings and a sheet naming the panel, the date and the cautions.
+import { starterTypeLabel } from '../../../shared/labels';
 import ExcelJS from 'exceljs';
 import type { CurrentUser } from '../../../shared/schemas/auth';
 import type { LoadSelection } from '../../../shared/schemas/selection';
@@ -29,7 +30,7 @@ const SCHEDULE: ReadonlyArray<readonly [string, number, (s: LoadSelection) => st
   ['V', 6, (s) => s.volts],
   ['FLC (A)', 9, (s) => s.flcAmps],
   ['FLA (A)', 9, (s) => s.flaAmps],
-  ['Starter', 16, (s) => s.starter.type],
+  ['Starter', 16, (s) => starterTypeLabel(s.starter.type)],
   ['NEMA size', 9, (s) => s.starter.nemaSize],
   ['Reversing', 10, (s) => (s.starter.reversingContactors ? 'yes' : 'no')],
   ['Overload max (A, line)', 12, (s) => (s.overload.providedByDrive ? null : s.overload.maxSettingAmps)],

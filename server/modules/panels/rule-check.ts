@@ -2,6 +2,7 @@
 // motor is saved; rule files and table modules change with releases of the product, so a draft can
 // hold selections the engine would no longer make. The check runs the engine on the stored answers
 // and names every decision that would change; "select again" stores the new selections.
+import { issueSentence } from '../../../shared/plain-messages';
 import { createHash } from 'node:crypto';
 import type { CurrentUser } from '../../../shared/schemas/auth';
 import { jobSupply } from '../../../shared/schemas/job';
@@ -29,7 +30,7 @@ async function currentSelections(job: Parameters<typeof selectAll>[0], loads: Lo
       loads.map((l) =>
         selectOne(job, l.answers as LoadInput).catch((err: unknown) => {
           if (!(err instanceof ValidationError)) throw err;
-          return `its answers no longer pass: ${(err.details ?? []).map((d) => `${d.path}: ${d.message}`).join('; ') || err.message}`;
+          return `its answers no longer pass: ${(err.details ?? []).map((d) => issueSentence(d.path, d.message)).join('; ') || err.message}`;
         }),
       ),
     );

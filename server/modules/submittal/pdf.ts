@@ -2,6 +2,7 @@
 // one-lines (drawn), nameplate and feeder, SCCR worksheet, heat calculation, control power, motor
 // connection cards and the cautions; every page carries the title block (titleBlock) with its
 // drawing number and "Page n of N".
+import { answerValueLabel, fieldLabel, starterTypeLabel } from '../../../shared/labels';
 import { createRequire } from 'node:module';
 import fs from 'node:fs';
 import PDFDocument from 'pdfkit';
@@ -166,7 +167,7 @@ class Writer {
 }
 
 function starterText(s: LoadSelection): string {
-  return `${s.starter.type}${s.starter.nemaSize !== null ? ` size ${s.starter.nemaSize}` : ''}`;
+  return `${starterTypeLabel(s.starter.type)}${s.starter.nemaSize !== null ? ` size ${s.starter.nemaSize}` : ''}`;
 }
 
 
@@ -469,7 +470,7 @@ export function writeSubmittalPdf(
         ['Disconnect', `>= ${fmt(s.disconnect.minAmps)} A${s.disconnect.minHp !== null ? `, >= ${s.disconnect.minHp} hp` : ''}`, s.disconnect.basis],
       ],
     );
-    for (const a of s.assumed) w.para(`Assumed input: ${a.field} = ${a.assumed} (${a.note})`, 8);
+    for (const a of s.assumed) w.para(`Assumed input: ${fieldLabel(a.field) ?? a.field} = ${answerValueLabel(a.field, a.assumed)} (${a.note})`, 8);
     for (const c of s.cautions) w.para(`Caution: ${c}`, 8);
   }
 

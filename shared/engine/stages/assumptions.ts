@@ -24,7 +24,7 @@ export function assumptions(ctx: StageContext, raw: Record<string, unknown> | nu
   if (flc) {
     assumed.push(...flc.assumed);
     report.cautions.push(...flc.cautions);
-    report.trace.push({ ruleId: 'sizing.flc', decision: `flcAmps = ${flc.flcAmps}`, reason: `table full-load current (${flc.source}) sizes conductors, protection and disconnect`, basis: flc.basis });
+    report.trace.push({ ruleId: 'sizing.flc', decision: `flcAmps = ${flc.flcAmps}`, words: `Full-load current ${flc.flcAmps} A`, reason: `table full-load current (${flc.source}) sizes conductors, protection and disconnect`, basis: flc.basis });
   }
   const flaAmps = load.fla ?? flc?.flcAmps ?? null;
   const assume = (when: boolean, field: string, value: string, note: string) => {

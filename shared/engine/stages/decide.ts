@@ -7,6 +7,7 @@ import type { StarterType } from '../../schemas/selection';
 import { REQUIRED_DECISIONS, STARTER_NEEDS, type DecisionKey, type Decisions } from '../decisions';
 import type { RuleFile } from '../rule-file';
 import { emptyReport, type StageContext, type StageReport } from './stage';
+import { DECISION_LABELS, decisionValueLabel } from '../../labels';
 
 export interface DecisionsStage extends StageReport {
   decisions: Decisions;
@@ -43,7 +44,10 @@ export function decide(ctx: StageContext, results: ReadonlyArray<RuleResult>, by
     let decision = p.decision;
     if (setText.length) decision += `: ${setText.join(', ')}`;
     if (overridden.length) decision += ` (overridden: ${overridden.join('; ')})`;
-    report.trace.push({ ruleId: rule.id, decision, reason: sub(p.reason), basis: sub(p.basis) });
+    // the same in words for people (shared/labels.ts): no decision key or value key
+    const setWords = Object.entries(p.set ?? {}).map(([k, v]) => `${DECISION_LABELS[k as DecisionKey]}: ${decisionValueLabel(k as DecisionKey, v) ?? String(v)}`);
+    const words = `${p.decision}${setWords.length ? ` (${setWords.join('; ')})` : ''}${overridden.length ? `; ${overridden.length === 1 ? 'one decision was' : `${overridden.length} decisions were`} kept from a rule of higher priority` : ''}`;
+    report.trace.push({ ruleId: rule.id, decision, words, reason: sub(p.reason), basis: sub(p.basis) });
     if (p.caution) report.cautions.push(sub(p.caution));
     if (p.error) report.errors.push(sub(p.error));
   }

@@ -29,7 +29,7 @@ export function sizeCircuit(ctx: StageContext, a: Assumptions, starterType: Star
   const cond = step(report, 'branch conductors', () => branchConductor({ flcAmps, material, tempRatingC, ambientC: supply.ambientC, driveInputAmps }, edition));
   if (cond) {
     report.cautions.push(...cond.cautions);
-    report.trace.push({ ruleId: 'sizing.conductor', decision: `conductor.size = ${cond.size} (${cond.ampacity} A >= ${cond.minAmpacity} A)`, reason: 'smallest conductor whose allowable ampacity covers the minimum', basis: cond.basis });
+    report.trace.push({ ruleId: 'sizing.conductor', decision: `conductor.size = ${cond.size} (${cond.ampacity} A >= ${cond.minAmpacity} A)`, words: `Conductors ${cond.size} (${cond.ampacity} A ≥ ${cond.minAmpacity} A)`, reason: 'smallest conductor whose allowable ampacity covers the minimum', basis: cond.basis });
   }
   const leads = cond ? step(report, 'motor-lead conductors', () => motorLeadConductors({ flcAmps, starterType, material, tempRatingC, ambientC: supply.ambientC }, edition)) : null;
   if (leads) {
@@ -37,6 +37,7 @@ export function sizeCircuit(ctx: StageContext, a: Assumptions, starterType: Star
     report.trace.push({
       ruleId: 'sizing.motor-leads',
       decision: `conductor.motorLeads = ${leads.count} × ${leads.size} (${leads.ampacity} A >= ${leads.minAmpacity} A)`,
+      words: `Motor leads ${leads.count} × ${leads.size} (${leads.ampacity} A ≥ ${leads.minAmpacity} A)`,
       reason: `between the controller and the motor each lead carries ${leads.share === 0.5 ? 'half' : 'about 58 % (1/√3)'} of the motor current`,
       basis: leads.basis,
     });
@@ -52,12 +53,13 @@ export function sizeCircuit(ctx: StageContext, a: Assumptions, starterType: Star
       report.trace.push({
         ruleId: 'sizing.voltage-drop',
         decision: `conductor.voltageDrop = ${voltageDrop.volts} V (${voltageDrop.percent} %) over ${voltageDrop.lengthFt} ft`,
+        words: `Running voltage drop ${voltageDrop.volts} V (${voltageDrop.percent} %) over ${voltageDrop.lengthFt} ft`,
         reason: `${fla} A at full load on ${leads ? `the motor leads (${leads.size})` : cond.size}`,
         basis: voltageDrop.basis,
       });
     }
   }
   const disc = step(report, 'disconnect', () => motorDisconnect({ flcAmps, hp: round2(a.hp), driveInputAmps }, edition));
-  if (disc) report.trace.push({ ruleId: 'sizing.disconnect', decision: `disconnect.minAmps = ${disc.minAmps}, minHp = ${disc.minHp}`, reason: '115 % of the table FLC, horsepower rated', basis: disc.basis });
+  if (disc) report.trace.push({ ruleId: 'sizing.disconnect', decision: `disconnect.minAmps = ${disc.minAmps}, minHp = ${disc.minHp}`, words: `Disconnect at least ${disc.minAmps} A${disc.minHp ? ` and ${disc.minHp} hp` : ''}`, reason: '115 % of the table FLC, horsepower rated', basis: disc.basis });
   return { ...report, conductor: cond, leads, voltageDrop, disconnect: disc };
 }

@@ -37,6 +37,7 @@ export function sizeMotor(ctx: StageContext, a: Assumptions, decisions: Decision
     report.trace.push({
       ruleId: 'sizing.voltage-unbalance',
       decision: u.factor === null ? 'unbalance.deratingFactor = none (above 5 %)' : `unbalance.deratingFactor = ${u.factor}`,
+      words: u.factor === null ? 'No unbalance derating factor (above 5 %)' : `Unbalance derating factor ${u.factor}`,
       reason: `${u.percent} % voltage unbalance at the site`,
       basis: u.basis,
     });
@@ -46,7 +47,7 @@ export function sizeMotor(ctx: StageContext, a: Assumptions, decisions: Decision
   const codeLetter = load.codeLetter;
   if (ac && codeLetter !== undefined) {
     lockedRotorAmps = step(report, 'locked-rotor current', () => lockedRotorCurrent({ codeLetter, hp, volts: load.volts, phases: ctx.phases }, edition));
-    if (lockedRotorAmps) report.trace.push({ ruleId: 'sizing.locked-rotor', decision: `lockedRotorAmps = ${lockedRotorAmps.min}–${lockedRotorAmps.max} A`, reason: 'code letter kVA/hp at rated voltage', basis: lockedRotorAmps.basis });
+    if (lockedRotorAmps) report.trace.push({ ruleId: 'sizing.locked-rotor', decision: `lockedRotorAmps = ${lockedRotorAmps.min}–${lockedRotorAmps.max} A`, words: `Locked-rotor current ${lockedRotorAmps.min}–${lockedRotorAmps.max} A`, reason: 'code letter kVA/hp at rated voltage', basis: lockedRotorAmps.basis });
   }
   const syncRpm = ac && load.poles !== undefined ? synchronousRpm(load.hz, load.poles) : null;
 
@@ -63,14 +64,14 @@ export function sizeMotor(ctx: StageContext, a: Assumptions, decisions: Decision
       outputFilter: decisions['vfd.outputFilter'] ?? UNDECIDED['vfd.outputFilter'],
       basis: v.basis,
     };
-    report.trace.push({ ruleId: 'sizing.vfd', decision: `vfd.minOutputAmps = ${v.minOutputAmps} (${vfd.duty} duty)`, reason: 'drive output current at its duty rating covers the motor nameplate current', basis: v.basis });
+    report.trace.push({ ruleId: 'sizing.vfd', decision: `vfd.minOutputAmps = ${v.minOutputAmps} (${vfd.duty} duty)`, words: `Drive output at least ${v.minOutputAmps} A (${vfd.duty} duty)`, reason: 'drive output current at its duty rating covers the motor nameplate current', basis: v.basis });
   }
   let softStarter: LoadSelection['softStarter'] = null;
   if (starterType === 'RVSS') {
     const insideDelta = decisions['softStarter.insideDelta'] ?? UNDECIDED['softStarter.insideDelta'];
     const s = softStarterMinAmps(fla, insideDelta);
     softStarter = { minAmps: s.minAmps, insideDelta, bypass: decisions['softStarter.bypass'] ?? UNDECIDED['softStarter.bypass'] };
-    report.trace.push({ ruleId: 'sizing.soft-starter', decision: `softStarter.minAmps = ${s.minAmps}`, reason: insideDelta ? 'inside-delta connection' : 'in-line connection', basis: s.basis });
+    report.trace.push({ ruleId: 'sizing.soft-starter', decision: `softStarter.minAmps = ${s.minAmps}`, words: `Soft starter at least ${s.minAmps} A`, reason: insideDelta ? 'inside-delta connection' : 'in-line connection', basis: s.basis });
   }
   const dc: LoadSelection['dc'] =
     load.supply === 'dc'

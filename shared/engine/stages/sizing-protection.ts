@@ -2,7 +2,7 @@
 // short-circuit and ground-fault device (430.52) and, for part-winding, the device per half-winding.
 
 import { overloadMaxSetting, overloadRelay } from '../../calc/overload';
-import { branchProtection, motorKind, partWindingProtection } from '../../calc/scpd';
+import { branchProtection, motorKind, partWindingProtection, SCPD_WORDS } from '../../calc/scpd';
 import type { PerWindingScpd, StarterType } from '../../schemas/selection';
 import type { Assumptions } from './assumptions';
 import { emptyReport, step, type StageContext, type StageReport } from './stage';
@@ -20,10 +20,10 @@ export function sizeProtection(ctx: StageContext, a: Assumptions, starterType: S
   const fla = a.flaAmps ?? 0;
   const flc = a.flc;
   const ol = step(report, 'overload', () => overloadMaxSetting({ flaAmps: fla, serviceFactor: load.serviceFactor, tempRiseC: load.tempRiseC }, edition));
-  if (ol && flc) report.trace.push({ ruleId: 'sizing.overload', decision: `overload.maxSettingAmps = ${ol.maxSettingAmps} (${ol.maxPercent} % of ${fla} A)`, reason: ol.why, basis: ol.basis });
+  if (ol && flc) report.trace.push({ ruleId: 'sizing.overload', decision: `overload.maxSettingAmps = ${ol.maxSettingAmps} (${ol.maxPercent} % of ${fla} A)`, words: `Overload at most ${ol.maxSettingAmps} A (${ol.maxPercent} % of ${fla} A)`, reason: ol.why, basis: ol.basis });
   const relay = ol && flc ? overloadRelay({ flaAmps: fla, maxSettingAmps: ol.maxSettingAmps, starterType }, edition) : null;
   if (relay && relay.share !== 1) {
-    report.trace.push({ ruleId: 'sizing.overload-relay', decision: `overload.relay: ${relay.count} × set ${relay.settingAmps} A, ≤ ${relay.maxAmps} A`, reason: relay.note ?? '', basis: relay.basis });
+    report.trace.push({ ruleId: 'sizing.overload-relay', decision: `overload.relay: ${relay.count} × set ${relay.settingAmps} A, ≤ ${relay.maxAmps} A`, words: `Overload relay${relay.count > 1 ? 's' : ''}: ${relay.count} × set ${relay.settingAmps} A, ≤ ${relay.maxAmps} A`, reason: relay.note ?? '', basis: relay.basis });
   }
   if (!flc) return { ...report, overload: ol, relay, scpd: null, perWinding: null };
 
@@ -43,6 +43,7 @@ export function sizeProtection(ctx: StageContext, a: Assumptions, starterType: S
       report.trace.push({
         ruleId: 'sizing.scpd-per-winding',
         decision: `scpd.perWinding = 2 × ${perWinding.ratingAmps} A (max ${perWinding.maxPercent} % = ${perWinding.computedMaxAmps} A each)`,
+        words: `Per half-winding: 2 × ${perWinding.ratingAmps} A (max ${perWinding.maxPercent} % = ${perWinding.computedMaxAmps} A each)`,
         reason: 'a part-winding motor may instead have a device on each half-winding connection, each at one-half the 430.52 value',
         basis: perWinding.basis,
       });
@@ -53,6 +54,7 @@ export function sizeProtection(ctx: StageContext, a: Assumptions, starterType: S
     report.trace.push({
       ruleId: 'sizing.scpd',
       decision: `scpd.ratingAmps = ${scpd.ratingAmps} (${scpd.type}, max ${scpd.maxPercent} % = ${scpd.computedMaxAmps} A)`,
+      words: `Branch protection ${scpd.ratingAmps} A ${SCPD_WORDS[scpd.type]} (max ${scpd.maxPercent} % = ${scpd.computedMaxAmps} A)`,
       reason: why[scpd.exception] ?? 'at the Table 430.52 maximum',
       basis: scpd.basis,
     });

@@ -27,7 +27,7 @@ export function sizeStarter(ctx: StageContext, a: Assumptions, decisions: Decisi
       const n = nemaStarterSize({ hp: a.hp, phases: ctx.phases, volts: ctx.load.volts, duty: decisions['starter.nemaDuty'] ?? 'normal', amps: contactorAmps }, ctx.edition);
       out.nemaSize = n.size;
       out.nemaBasis = n.basis;
-      report.trace.push({ ruleId: 'sizing.nema-size', decision: `starter.nemaSize = ${n.size}`, reason: `${n.ratedHp} hp rated at this voltage and duty, ${n.continuousAmps} A continuous`, basis: n.basis });
+      report.trace.push({ ruleId: 'sizing.nema-size', decision: `starter.nemaSize = ${n.size}`, words: `NEMA size ${n.size}`, reason: `${n.ratedHp} hp rated at this voltage and duty, ${n.continuousAmps} A continuous`, basis: n.basis });
     } catch (e) {
       if (!(e instanceof DomainError)) throw e;
       report.cautions.push(`No NEMA size: ${e.message}; select the contactor by its IEC rated operational current.`);
@@ -39,6 +39,7 @@ export function sizeStarter(ctx: StageContext, a: Assumptions, decisions: Decisi
   report.trace.push({
     ruleId: 'sizing.iec-contactor',
     decision: `starter.iecAmps = ${out.iecAmps} (${out.iecCategory})`,
+    words: `Contactor ${out.iecAmps} A (${out.iecCategory})`,
     reason: share === 1 ? 'rated operational current in the category at least the motor current' : `each contactor carries ${share === 0.5 ? 'half' : '1/√3'} of the motor current`,
     basis: 'IEC 60947-4-1 utilisation categories' + (share === 1 ? '' : ' (common practice)'),
   });

@@ -1,5 +1,5 @@
 import { useForm } from 'react-hook-form';
-import { zodResolver } from '@hookform/resolvers/zod';
+import { formResolver as zodResolver } from '../../lib/form-resolver';
 import { useMutation } from '@tanstack/react-query';
 import { Link, useParams } from 'react-router-dom';
 import type { z } from 'zod';

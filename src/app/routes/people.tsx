@@ -1,5 +1,5 @@
 import { useForm } from 'react-hook-form';
-import { zodResolver } from '@hookform/resolvers/zod';
+import { formResolver as zodResolver } from '../../lib/form-resolver';
 import { useQuery } from '@tanstack/react-query';
 import { peopleQueries, useInvite, useUpdatePerson } from '../../features/people/api/people';
 import { ROLES, ROLE_LABELS, UserCreateSchema, type UserCreate } from '../../../shared/schemas/auth';

@@ -1,5 +1,5 @@
 import { useForm } from 'react-hook-form';
-import { zodResolver } from '@hookform/resolvers/zod';
+import { formResolver as zodResolver } from '../../lib/form-resolver';
 import { useNavigate, useSearchParams } from 'react-router-dom';
 import { SignInSchema, type SignIn } from '../../../shared/schemas/auth';
 import { useSignIn } from '../../features/auth/api/session';

@@ -139,7 +139,7 @@ describe('worked branch circuits (NEC 2023)', () => {
       await selector.selectPanel({ supply: supply480, loads: [motor({}), { tag: 'Y', supply: 'ac1', hp: 1, volts: 115, dcField: 'shunt' } as never] });
       expect.unreachable();
     } catch (e) {
-      expect((e as ValidationError).details).toContainEqual({ path: 'loads[1].dcField', message: 'dcField applies to dc motors only' });
+      expect((e as ValidationError).details).toContainEqual({ path: 'loads[1].dcField', message: 'A DC field applies to DC motors only' });
     }
   });
 });

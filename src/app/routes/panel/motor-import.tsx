@@ -1,4 +1,5 @@
 import { useState } from 'react';
+import { fieldLabel } from '../../../../shared/labels';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useNavigate, useParams } from 'react-router-dom';
 import { api } from '../../../lib/api-client';
@@ -83,7 +84,7 @@ export function Component() {
                   <td className="font-semibold">{r.tag || '—'}</td>
                   <td>{String(r.answers?.hp ?? r.answers?.kw ?? '')}</td>
                   <td>{String(r.answers?.volts ?? '')}</td>
-                  <td className="text-state-returned">{r.problems.map((p) => `${p.column}: ${p.message}`).join('; ') || <span className="text-state-signed">✔ ok</span>}</td>
+                  <td className="text-state-returned">{r.problems.map((p) => `${fieldLabel(p.column) ?? p.column} (column ${p.column}): ${p.message}`).join('; ') || <span className="text-state-signed">✔ ok</span>}</td>
                 </tr>
               ))}
             </tbody>

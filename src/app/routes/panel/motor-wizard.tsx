@@ -1,15 +1,16 @@
 import { useEffect, useMemo, useState } from 'react';
 import { useForm, useWatch, type FieldErrors } from 'react-hook-form';
-import { zodResolver } from '@hookform/resolvers/zod';
 import { useQuery } from '@tanstack/react-query';
 import { useNavigate, useParams } from 'react-router-dom';
 import { LoadSchema, type LoadInput } from '../../../../shared/schemas/load';
+import { cleanAnswers as clean, motorResolver, newMotorAnswers } from '../../../features/panels/model/motor-answers';
 import type { LoadSelection } from '../../../../shared/schemas/selection';
 import { panelQueries, useSaveLoad } from '../../../features/panels/api/panels';
 import { SelectionSummary } from '../../../features/panels/components/selection-summary';
 import { OverrideEditor } from '../../../features/panels/components/override-editor';
 import { jobSupply } from '../../../../shared/schemas/job';
 import { ENVIRONMENT_LABELS } from '../../../features/panels/components/answer-labels';
+import { fieldLabel } from '../../../../shared/labels';
 import { browserSelector } from '../../../lib/selector';
 import { needsOtherSource } from '../../../../shared/calc/other-sources';
 import { Field, SelectField, inputClass, type SelectOption } from '../../../components/ui/field';
@@ -34,54 +35,20 @@ const CODE_LETTERS: SelectOption[] = 'ABCDEFGHJKLMNPRSTUV'.split('').map((c) => 
 const DESIGNS: SelectOption[] = ['A', 'B', 'C', 'D'].map((c) => [c, `Design ${c}`]);
 const LEADS: SelectOption[] = [3, 6, 9, 12].map((n) => [n, `${n} leads`]);
 
-const DEFAULTS: LoadInput = {
-  tag: '',
-  supply: 'ac3',
-  volts: 460,
-  hz: 60,
-  serviceFactor: 1.15,
-  duty: 'continuous',
-  speedControl: 'fixed',
-  startingLimit: 'none',
-  inertia: 'normal',
-  scpdType: 'inverse-time-breaker',
-  conductor: { material: 'cu', tempRatingC: 75 },
-  environment: 'indoor-dusty',
-  reversing: false,
-  jogging: false,
-  plugging: false,
-  critical: false,
-  reverseRotationHazard: false,
-};
-
-/** Drops empty strings and NaN that form inputs leave behind, so the schema sees "not given". */
-function clean(v: Record<string, unknown>): Record<string, unknown> {
-  const out: Record<string, unknown> = {};
-  for (const [k, x] of Object.entries(v)) {
-    if (x === '' || x === undefined || (typeof x === 'number' && Number.isNaN(x))) continue;
-    out[k] = x;
-  }
-  return out;
-}
-
 function firstStepWithError(errors: FieldErrors): number {
   const keys = Object.keys(errors);
   const i = STEPS.findIndex((s) => STEP_FIELDS[s].some((f) => keys.includes(f)));
   return Math.max(i, 0);
 }
 
-/** Field names as the wizard labels them, for the preview's "what is missing" line. */
-const PREVIEW_LABELS: Record<string, string> = {
-  tag: 'tag', hp: 'horsepower or kW', kw: 'horsepower or kW', volts: 'rated voltage', fla: 'nameplate FLA', serviceFactor: 'service factor', supply: 'supply',
-};
-
-function missingAnswers(issues: ReadonlyArray<{ path: PropertyKey[]; message: string; code?: string }>): string {
+/** The preview's "what is missing" line: each answer by its label, with the plain sentence. */
+function missingAnswers(issues: ReadonlyArray<{ path: PropertyKey[]; message: string }>): string {
   const parts = issues.slice(0, 3).map((i) => {
-    const key = String(i.path[0] ?? '');
-    const name = PREVIEW_LABELS[key] ?? key.replace(/([A-Z])/g, ' $1').toLowerCase();
-    return /received undefined/.test(i.message) ? `${name} needed` : `${name}: ${i.message.charAt(0).toLowerCase()}${i.message.slice(1)}`;
+    const key = i.path.map(String).join('.');
+    const name = key === 'hp' || key === 'kw' ? 'Horsepower or kW' : (fieldLabel(key) ?? key);
+    return `${name}: ${i.message}`;
   });
-  return [...new Set(parts)].join('; ') + (issues.length > 3 ? ' …' : '');
+  return [...new Set(parts)].join(' ') + (issues.length > 3 ? ' …' : '');
 }
 
 export function Component() {
@@ -92,8 +59,8 @@ export function Component() {
   const save = useSaveLoad(Number(panelId));
   const [step, setStep] = useState(0);
   const form = useForm<LoadInput>({
-    resolver: zodResolver(LoadSchema) as never,
-    defaultValues: existing ? (existing.answers as LoadInput) : DEFAULTS,
+    resolver: motorResolver,
+    defaultValues: existing ? (existing.answers as LoadInput) : newMotorAnswers(),
     mode: 'onChange',
   });
   const { register, handleSubmit, formState, control, setError } = form;
@@ -139,10 +106,21 @@ export function Component() {
       ),
     (errs) => setStep(firstStepWithError(errs)),
   );
+  // Enter in a field submits the form through its first submit button, "Next": it moves to the next
+  // step. Only the last step's Enter, or a click on the save button, saves the motor.
+  const onFormSubmit = (ev: React.FormEvent<HTMLFormElement>) => {
+    const submitter = (ev.nativeEvent as SubmitEvent).submitter as HTMLElement | null;
+    if (step < STEPS.length - 1 && submitter?.dataset.action !== 'save') {
+      ev.preventDefault();
+      setStep((s) => s + 1);
+      return;
+    }
+    void onSubmit(ev);
+  };
   const stepName = STEPS[step];
   return (
     <div className="grid grid-cols-1 gap-5 lg:grid-cols-[minmax(0,1fr)_430px]">
-      <form onSubmit={onSubmit} noValidate className="rounded border border-line bg-panel" aria-label="Motor wizard">
+      <form onSubmit={onFormSubmit} noValidate className="rounded border border-line bg-panel" aria-label="Motor wizard">
         <div className="flex items-center justify-between border-b border-line px-4 py-2">
           <h2 className="text-lg font-semibold">{existing ? `Motor ${existing.tag}` : 'New motor'}</h2>
           <ol className="flex gap-1 text-sm" aria-label="Steps">
@@ -166,13 +144,13 @@ export function Component() {
             <>
               <Field label="Tag" error={e.tag?.message} hint="Unique on this panel, e.g. P-101">{(a) => <input {...a} {...register('tag')} className={inputClass} autoFocus />}</Field>
               <div className="col-span-2"><Field label="Description" error={e.description?.message}>{(a) => <input {...a} {...register('description', opt)} className={inputClass} />}</Field></div>
-              <SelectField label="Supply" error={e.supply?.message} field={register('supply')} options={[['ac3', 'Three-phase AC'], ['ac1', 'Single-phase AC'], ['dc', 'DC']]} />
+              <SelectField label="Supply" error={e.supply?.message} field={register('supply', opt)} notGiven="Choose the supply" options={[['ac3', 'Three-phase AC'], ['ac1', 'Single-phase AC'], ['dc', 'DC']]} />
               <Field label="Horsepower" unit="hp" error={e.hp?.message} hint="Or give kW instead">{(a) => <input {...a} {...register('hp', optNum)} inputMode="decimal" className={inputClass} />}</Field>
               <Field label="Kilowatts" unit="kW" error={e.kw?.message}>{(a) => <input {...a} {...register('kw', optNum)} inputMode="decimal" className={inputClass} />}</Field>
-              <Field label="Rated voltage" unit="V" error={e.volts?.message}>{(a) => <input {...a} {...register('volts', num)} inputMode="numeric" className={inputClass} />}</Field>
+              <Field label="Rated voltage" unit="V" error={e.volts?.message} hint="From the nameplate, e.g. 460">{(a) => <input {...a} {...register('volts', num)} inputMode="numeric" className={inputClass} />}</Field>
               <SelectField label="Frequency" unit="Hz" error={e.hz?.message} field={register('hz', num)} options={[[60, '60'], [50, '50']]} />
               <Field label="Nameplate FLA" unit="A" error={e.fla?.message} hint="Sizes the overload (430.6(A)(2))">{(a) => <input {...a} {...register('fla', optNum)} inputMode="decimal" className={inputClass} />}</Field>
-              <Field label="Service factor" error={e.serviceFactor?.message}>{(a) => <input {...a} {...register('serviceFactor', optNum)} inputMode="decimal" className={inputClass} />}</Field>
+              <Field label="Service factor" error={e.serviceFactor?.message} hint="From the nameplate; empty: 1.0 assumed (115 % overload)">{(a) => <input {...a} {...register('serviceFactor', optNum)} inputMode="decimal" className={inputClass} />}</Field>
               <Field label="Temperature rise" unit="°C" error={e.tempRiseC?.message}>{(a) => <input {...a} {...register('tempRiseC', optNum)} inputMode="decimal" className={inputClass} />}</Field>
               <Field label="Locked-rotor withstand" unit="s" hint="hot safe stall time, motor maker's data" error={e.lockedRotorWithstandS?.message}>{(a) => <input {...a} {...register('lockedRotorWithstandS', optNum)} inputMode="decimal" className={inputClass} />}</Field>
               {supplyKind !== 'dc' ? (
@@ -308,8 +286,8 @@ export function Component() {
         </div>
         <div className="flex items-center gap-2 border-t border-line px-4 py-3">
           <Button variant="secondary" disabled={step === 0} onClick={() => setStep((s) => s - 1)}>‹ Back</Button>
-          {step < STEPS.length - 1 ? <Button variant="secondary" onClick={() => setStep((s) => s + 1)}>Next ›</Button> : null}
-          <Button type="submit" className="ml-auto" disabled={save.isPending}>
+          {step < STEPS.length - 1 ? <Button type="submit" variant="secondary" data-action="next">Next ›</Button> : null}
+          <Button type="submit" data-action="save" className="ml-auto" disabled={save.isPending}>
             {save.isPending ? 'Saving…' : existing ? 'Save motor' : 'Add motor'}
           </Button>
           <Button variant="ghost" onClick={() => navigate(`/jobs/${jobId}/panels/${panelId}/motors`)}>Cancel</Button>

@@ -1,4 +1,5 @@
 import { useState } from 'react';
+import { selectionValueLabel } from '../../../../shared/labels';
 import { useQuery } from '@tanstack/react-query';
 import { useParams } from 'react-router-dom';
 import { panelQueries, useAddComment } from '../../../features/panels/api/panels';
@@ -47,8 +48,8 @@ export function Component() {
                 <tr key={`${o.tag}-${o.field}`} className="border-t border-line/60 align-top">
                   <td className="py-1 font-semibold">{o.tag}</td>
                   <td>{OVERRIDE_FIELDS[o.field]}</td>
-                  <td>{String(o.was)}</td>
-                  <td className="font-semibold">{String(o.value)}</td>
+                  <td>{selectionValueLabel(o.field, o.was)}</td>
+                  <td className="font-semibold">{selectionValueLabel(o.field, o.value)}</td>
                   <td>“{o.justification}” — {o.by}</td>
                   <td className="text-xs text-state-review">{o.warnings.join(' ') || '—'}</td>
                 </tr>

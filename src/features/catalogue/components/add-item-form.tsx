@@ -1,5 +1,5 @@
 import { useForm, useWatch, type Resolver } from 'react-hook-form';
-import { zodResolver } from '@hookform/resolvers/zod';
+import { formResolver as zodResolver } from '../../../lib/form-resolver';
 import type { z } from 'zod';
 import {
   CATALOGUE_COLUMNS,
@@ -11,6 +11,7 @@ import {
   type Ratings,
 } from '../../../../shared/schemas/catalogue';
 import { Field, inputClass } from '../../../components/ui/field';
+import { RATING_LABELS, RATING_UNITS } from '../../../../shared/labels';
 import { Button } from '../../../components/ui/button';
 import { ErrorNote } from '../../../components/ui/feedback';
 import { ApiError } from '../../../lib/api-client';
@@ -105,12 +106,12 @@ export function AddItemForm({ onSubmit, pending, error, onCancel }: { onSubmit: 
             if (kind === 'boolean') {
               return (
                 <label key={key} className="flex items-center gap-2 pt-5 text-sm">
-                  <input type="checkbox" {...register(name as 'ratings.timeDelay')} /> {key}
+                  <input type="checkbox" {...register(name as 'ratings.timeDelay')} /> {RATING_LABELS[key]}
                 </label>
               );
             }
             return (
-              <Field key={key} label={key} error={re[key]?.message} hint={kind.endsWith('List') ? 'values separated by /' : undefined}>
+              <Field key={key} label={RATING_LABELS[key]} unit={RATING_UNITS[key]} error={re[key]?.message} hint={kind.endsWith('List') ? 'values separated by /' : undefined}>
                 {(p) => (
                   <input
                     {...p}

@@ -14,6 +14,7 @@ import {
 import { CATEGORY_IDS, CATEGORY_LABELS, type CatalogueEntry, type Category, type ItemChanges, type Ratings } from '../../../../shared/schemas/catalogue';
 import { EditableNumber } from './editable-cell';
 import { formatAmount as money } from '../../../../shared/format/money';
+import { ratingValueLabel } from '../../../../shared/labels';
 import { DataCell, DataTableHead, DenseTable } from '../../../components/ui/data-table-parts';
 
 /** The ratings that identify an item, in a short line (volts, amps, hp, size, range …). */
@@ -33,8 +34,8 @@ export function ratingsSummary(r: Ratings): string {
   if (r.wireSize) p.push(`${r.wireSize} AWG/kcmil`);
   if (r.nemaType) p.push(`Type ${r.nemaType}`);
   if (r.heightMm) p.push(`${r.heightMm}×${r.widthMm}×${r.depthMm} mm`);
-  if (r.kind) p.push(r.kind);
-  if (r.function) p.push(r.function);
+  if (r.kind) p.push(ratingValueLabel(r.kind));
+  if (r.function) p.push(ratingValueLabel(r.function));
   return p.join(' · ');
 }
 

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import { useForm } from 'react-hook-form';
-import { zodResolver } from '@hookform/resolvers/zod';
+import { formResolver as zodResolver } from '../../../lib/form-resolver';
 import { z } from 'zod';
 import { combinationQueries, useCreateCombination, useImportCombinations, useUpdateCombination } from '../api/catalogue';
 import { Field, inputClass } from '../../../components/ui/field';

@@ -1,4 +1,5 @@
 import { useQuery } from '@tanstack/react-query';
+import { fieldLabel } from '../../../../shared/labels';
 import { ErrorNote, Loading } from '../../../components/ui/feedback';
 import { catalogueQueries } from '../api/catalogue';
 import type { CatalogueEntry } from '../../../../shared/schemas/catalogue';
@@ -29,7 +30,7 @@ export function ItemHistory({ item, onClose }: { item: CatalogueEntry; onClose: 
                     const [a, b] = Array.isArray(change) ? change : [null, change];
                     return (
                       <li key={field}>
-                        {field}: {show(a)} → {show(b)}
+                        {fieldLabel(field) ?? field}: {show(a)} → {show(b)}
                       </li>
                     );
                   })}

@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
-import { zodResolver } from '@hookform/resolvers/zod';
+import { formResolver as zodResolver } from '../../../lib/form-resolver';
 import type { z } from 'zod';
 import { CODE_EDITIONS, JobInputSchema, type JobInput } from '../../../../shared/schemas/job';
 import { Field, inputClass } from '../../../components/ui/field';

@@ -1,4 +1,5 @@
 import { useState } from 'react';
+import { selectionValueLabel } from '../../../../shared/labels';
 import type { LoadView } from '../../../../shared/schemas/panel';
 import { OVERRIDE_FIELDS, type OverrideField, type OverrideInput } from '../../../../shared/schemas/override';
 import { useSetOverrides } from '../api/panels';
@@ -29,7 +30,7 @@ export function OverrideEditor({ panelId, load }: { panelId: number; load: LoadV
             <li key={o.field} className="rounded bg-copper-50 p-2">
               <div className="flex justify-between gap-2">
                 <span>
-                  <strong>{OVERRIDE_FIELDS[o.field]}</strong>: {String(o.was)} → <strong>{String(o.value)}</strong>
+                  <strong>{OVERRIDE_FIELDS[o.field]}</strong>: {selectionValueLabel(o.field, o.was)} → <strong>{selectionValueLabel(o.field, o.value)}</strong>
                 </span>
                 <button type="button" className="text-xs text-state-returned" onClick={() => save(current.filter((c) => c.field !== o.field))}>Remove</button>
               </div>

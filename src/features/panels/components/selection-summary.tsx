@@ -3,6 +3,7 @@ import { relayOf, relayWiringText } from '../../../../shared/calc/overload';
 import { perWindingText } from '../../../../shared/calc/scpd';
 import { motorLeadText, voltageDropText } from '../../../../shared/calc/conductor';
 import { unbalanceText } from '../../../../shared/standards/nema-mg1-voltage-unbalance';
+import { answerValueLabel, decisionValueLabel, fieldLabel, starterTypeLabel } from '../../../../shared/labels';
 
 const SCPD_SHORT: Record<string, string> = {
   'inverse-time-breaker': 'Inverse-time CB',
@@ -16,7 +17,7 @@ export function scpdLabel(type: string) {
 }
 
 export function starterLabel(s: LoadSelection) {
-  return `${s.starter.type}${s.starter.nemaSize ? ` size ${s.starter.nemaSize}` : ''}`;
+  return `${starterTypeLabel(s.starter.type)}${s.starter.nemaSize ? ` size ${s.starter.nemaSize}` : ''}`;
 }
 
 /**
@@ -79,9 +80,9 @@ export function SelectionSummary({ selection, overridden = [] }: { selection: Lo
     ['Enclosure', <>NEMA Type {s.enclosure.nemaType} <span className="text-ink-soft">(≈ {s.enclosure.ipCode}, one-way comparison)</span>{mark('enclosure.nemaType')}{s.enclosure.flagForEngineer ? ' ⚑ engineer to confirm' : ''}</>, 'NEMA 250'],
   ];
   if (s.unbalance) rows.push(['Voltage unbalance', unbalanceText(s.unbalance), s.unbalance.basis]);
-  if (s.vfd) rows.push(['Drive', `≥ ${s.vfd.minOutputAmps} A ${s.vfd.duty} duty${s.vfd.inverterDutyMotor ? ' · inverter-duty motor' : ''}${s.vfd.outputFilter !== 'none' ? ` · ${s.vfd.outputFilter} filter` : ''}`, s.vfd.basis]);
+  if (s.vfd) rows.push(['Drive', `≥ ${s.vfd.minOutputAmps} A ${decisionValueLabel('vfd.duty', s.vfd.duty)?.toLowerCase()}${s.vfd.inverterDutyMotor ? ' · inverter-duty motor' : ''}${s.vfd.outputFilter !== 'none' ? ` · ${decisionValueLabel('vfd.outputFilter', s.vfd.outputFilter)}` : ''}`, s.vfd.basis]);
   if (s.softStarter) rows.push(['Soft starter', `≥ ${s.softStarter.minAmps} A${s.softStarter.insideDelta ? ' inside delta' : ''}${s.softStarter.bypass ? ' · bypass contactor' : ''}`, 'common practice']);
-  if (s.dc) rows.push(['DC', `${s.dc.field} field${s.dc.fieldLossProtection ? ' · field-loss protection' : ''}${s.dc.dynamicBraking ? ' · dynamic braking' : ''}`, 'common practice']);
+  if (s.dc) rows.push(['DC', `${answerValueLabel('dcField', s.dc.field)} field${s.dc.fieldLossProtection ? ' · field-loss protection' : ''}${s.dc.dynamicBraking ? ' · dynamic braking' : ''}`, 'common practice']);
   return (
     <div className="space-y-3">
       {s.errors.length ? (
@@ -110,7 +111,7 @@ export function SelectionSummary({ selection, overridden = [] }: { selection: Lo
           <ul className="mt-1 list-disc pl-4">
             {s.assumed.map((a) => (
               <li key={a.field}>
-                <strong>{a.field}</strong> = {a.assumed}: {a.note}
+                <strong>{fieldLabel(a.field) ?? a.field}</strong> = {answerValueLabel(a.field, a.assumed)}: {a.note}
               </li>
             ))}
           </ul>
@@ -128,7 +129,7 @@ export function SelectionSummary({ selection, overridden = [] }: { selection: Lo
         <ol className="mt-1 space-y-1">
           {s.trace.map((t, i) => (
             <li key={`${t.ruleId}-${i}`} className="border-l-2 border-copper-100 pl-2">
-              <span className="font-semibold">{t.decision}</span> — {t.reason} <span className="text-ink-soft">[{t.basis}] ({t.ruleId})</span>
+              <span className="font-semibold">{t.words ?? t.decision}</span> — {t.reason} <span className="text-ink-soft" title={`rule ${t.ruleId}`}>[{t.basis}]</span>
             </li>
           ))}
         </ol>
