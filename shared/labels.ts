@@ -248,6 +248,7 @@ export const RATING_VALUE_LABELS: Record<string, string> = {
   'push-button': 'push-button', 'pilot-light': 'pilot light', 'selector-switch': 'selector switch',
   'run-light': 'run light', 'fault-light': 'fault light', start: 'start', stop: 'stop', slow: 'slow', fast: 'fast',
   forward: 'forward', reverse: 'reverse', 'hand-off-auto': 'hand-off-auto', 'forward-off-reverse': 'forward-off-reverse',
+  'single-phase': 'single-phase', 'three-phase': 'three-phase',
 };
 
 /** A text rating's value in words; a value of the shop's own (not in the table) is shown as typed, hyphens as spaces. */
