@@ -23,6 +23,8 @@ export interface FeederInput {
   tempRatingC: TempRating;
   ambientC: number;
   ocpdFamily: 'fuse' | 'breaker';
+  /** the panel's terminations listed for 75 °C conductors (110.14(C)(1)); true when absent */
+  terminationsListed75C?: boolean;
 }
 
 const round2 = (x: number) => Math.round(x * 100) / 100;

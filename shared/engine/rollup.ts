@@ -41,6 +41,6 @@ export function panelRollupOf(supply: Supply, loads: ReadonlyArray<Load>, result
     }
     branches.push({ tag: r.tag, flcAmps: r.flcAmps, branchDeviceAmps: deviceAmps });
   });
-  const f = feederRollup({ branches, material: supply.feeder.material, tempRatingC: supply.feeder.tempRatingC, ambientC: supply.ambientC, ocpdFamily: feederFamily }, edition);
+  const f = feederRollup({ branches, material: supply.feeder.material, tempRatingC: supply.feeder.tempRatingC, ambientC: supply.ambientC, ocpdFamily: feederFamily, terminationsListed75C: supply.terminationsListed75C !== false }, edition);
   return { feeder: f.feeder, totalFlcAmps: f.totalFlcAmps, largestMotorTag: f.largestMotorTag, notes: [...notes, ...f.notes], errors: [...errors, ...f.errors] };
 }

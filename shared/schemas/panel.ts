@@ -23,6 +23,8 @@ const panelFields = {
   mounting: z.enum(MOUNTINGS),
   markupPercent: z.coerce.number().min(0).max(300),
   labourRate: z.coerce.number().min(0).max(1000),
+  /** the panel's starters, protective devices and terminal blocks listed for 75 °C conductors (110.14(C)(1)(a)(3)); null: not answered (taken as yes, flagged) */
+  terminationsListed75C: z.boolean().nullable(),
 };
 
 export const PanelInputSchema = z.object({
@@ -31,6 +33,7 @@ export const PanelInputSchema = z.object({
   mounting: panelFields.mounting.default('wall-mounted'),
   markupPercent: panelFields.markupPercent.default(15),
   labourRate: panelFields.labourRate.default(85),
+  terminationsListed75C: panelFields.terminationsListed75C.default(null),
 });
 export type PanelInput = z.input<typeof PanelInputSchema>;
 
@@ -72,6 +75,8 @@ export interface CommentView {
 
 export interface PanelDetail extends PanelSummary {
   markupPercent: number;
+  /** equipment listed for 75 °C conductors (110.14(C)(1)(a)(3)); null: not answered, taken as yes and flagged on the motors it changes */
+  terminationsListed75C: boolean | null;
   labourRate: number;
   rollup: PanelRollup | null;
   job: Omit<JobSummary, 'panelCount' | 'motorCount'>;

@@ -6,6 +6,7 @@ import * as m0004 from './0004-change-feed';
 import * as m0005 from './0005-catalogue-feed';
 import * as m0006 from './0006-voltage-unbalance';
 import * as m0007 from './0007-combination-ratings';
+import * as m0008 from './0008-panel-terminations-75c';
 
 export const migrations = [
   ['0001-foundation', m0001],
@@ -15,4 +16,5 @@ export const migrations = [
   ['0005-catalogue-feed', m0005],
   ['0006-voltage-unbalance', m0006],
   ['0007-combination-ratings', m0007],
+  ['0008-panel-terminations-75c', m0008],
 ] as const;

@@ -12,7 +12,7 @@ import type { NameplateResult } from '../../../shared/calc/nameplate';
 import type { ConnectionCard, LineName } from '../../../shared/calc/connections';
 import { relayOf, relayWiringText } from '../../../shared/calc/overload';
 import { perWindingText } from '../../../shared/calc/scpd';
-import { motorLeadText, voltageDropText } from '../../../shared/calc/conductor';
+import { motorLeadText, termination60Text, voltageDropText } from '../../../shared/calc/conductor';
 import { unbalanceText } from '../../../shared/standards/nema-mg1-voltage-unbalance';
 import { SCPD_WORDS } from '../../../shared/calc/scpd';
 
@@ -267,7 +267,7 @@ export function writeSubmittalPdf(
         ],
         [
           'Conductor',
-          `${s.conductor.size} ${s.conductor.material}, ${s.conductor.ampacity} A (min ${fmt(s.conductor.minAmpacity)} A)${motorLeadText(s) ? `; ${motorLeadText(s)}` : ''}${voltageDropText(s) ? `; ${voltageDropText(s)}` : ''}`,
+          `${s.conductor.size} ${s.conductor.material}, ${s.conductor.ampacity} A (min ${fmt(s.conductor.minAmpacity)} A)${termination60Text(s) ? `; ${termination60Text(s)}` : ''}${motorLeadText(s) ? `; ${motorLeadText(s)}` : ''}${voltageDropText(s) ? `; ${voltageDropText(s)}` : ''}`,
           s.conductor.motorLeads ? `line side: ${s.conductor.basis}; ${s.conductor.motorLeads.basis}` : s.conductor.basis,
         ],
         ...(s.unbalance
