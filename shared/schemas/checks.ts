@@ -5,6 +5,7 @@ import type { EnclosureMounting, HeatResult } from '../calc/heat';
 import type { ControlPowerResult } from '../calc/control-power';
 import type { NameplateResult } from '../calc/nameplate';
 import type { ConnectionCard } from '../calc/connections';
+import type { ControlConductorCheck } from '../calc/control-conductors';
 
 export interface ExcludedComponent {
   location: string;
@@ -57,6 +58,8 @@ export interface PanelChecks {
   heat: HeatCheck;
   controlPower: ControlPowerCheck;
   nameplate: NameplateCheck;
+  /** every control conductor against its protecting device (430.72(A), (B), Table 430.72(B)) */
+  controlConductors: ControlConductorCheck;
   connectionCards: MotorConnectionCard[];
   cautions: string[];
 }
