@@ -35,6 +35,8 @@ export interface FeederInput {
   tempRatingC: TempRating;
   ambientC: number;
   ocpdFamily: 'fuse' | 'breaker';
+  /** the panel's terminations listed for 75 °C conductors (110.14(C)(1)); true when absent */
+  terminationsListed75C?: boolean;
 }
 
 export function feederRollup(input: FeederInput, edition: CodeEdition): PanelRollup & { notes: string[]; errors: string[]; otherLoadsAmps: number } {

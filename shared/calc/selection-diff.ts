@@ -29,6 +29,7 @@ const FIELDS: ReadonlyArray<readonly [string, string, Pick]> = [
   ['scpd.perWinding', 'Per half-winding devices (A)', (s) => s.scpd.perWinding?.ratingAmps ?? null],
   ['conductor.size', 'Conductors', (s) => s.conductor.size],
   ['conductor.motorLeads', 'Conductors to the motor', (s) => s.conductor.motorLeads?.size ?? null],
+  ['conductor.termination60C', 'Conductors at 60 °C terminations', (s) => s.conductor.termination60C?.size ?? null],
   ['conductor.voltageDrop', 'Running voltage drop (%)', (s) => s.conductor.voltageDrop?.percent ?? null],
   ['disconnect.minAmps', 'Disconnect at least (A)', (s) => s.disconnect.minAmps],
   ['relays.phaseLoss', 'Phase-loss relay', (s) => s.relays.phaseLoss],

@@ -38,7 +38,7 @@ export function panelRollupOf(supply: Supply, loads: ReadonlyArray<Load>, result
   });
   const os = otherSources(supply, loads, results, edition);
   const f = feederRollup(
-    { branches: [...branches, ...os.branches], otherLoads: os.otherLoads, material: supply.feeder.material, tempRatingC: supply.feeder.tempRatingC, ambientC: supply.ambientC, ocpdFamily: feederFamily },
+    { branches: [...branches, ...os.branches], otherLoads: os.otherLoads, material: supply.feeder.material, tempRatingC: supply.feeder.tempRatingC, ambientC: supply.ambientC, ocpdFamily: feederFamily, terminationsListed75C: supply.terminationsListed75C !== false },
     edition,
   );
   return {

@@ -98,12 +98,16 @@ export function createSelector(ruleFiles: ReadonlyArray<RuleFileInput>, options:
     const results = await sets.run(facts);
     profile?.add('rules', profile.now() - t0);
     const d = timed('decisions', () => decide(ctx, results, byId, sub));
-    const sized = timed('sizing', () => ({
-      starter: sizeStarter(ctx, a, d.decisions, d.starterType),
-      protection: sizeProtection(ctx, a, d.starterType),
-      circuit: sizeCircuit(ctx, a, d.starterType),
-      motor: sizeMotor(ctx, a, d.decisions, d.starterType),
-    }));
+    const sized = timed('sizing', () => {
+      const protection = sizeProtection(ctx, a, d.starterType);
+      return {
+        starter: sizeStarter(ctx, a, d.decisions, d.starterType),
+        protection,
+        // the branch device's rating is the circuit's rating for the termination rule (110.14(C)(1))
+        circuit: sizeCircuit(ctx, a, d.starterType, protection.scpd?.ratingAmps ?? null),
+        motor: sizeMotor(ctx, a, d.decisions, d.starterType),
+      };
+    });
     const c = timed('cautions', () => cautions(load, supply, d.starterType, sized.protection, sized.circuit, sized.motor.unbalance));
     return timed('result', () => selectionOf(ctx, { assumptions: a, decisions: d, ...sized, cautions: c }));
   }

@@ -6,6 +6,7 @@ import type { ControlPowerResult } from '../calc/control-power';
 import type { NameplateResult } from '../calc/nameplate';
 import type { ConnectionCard } from '../calc/connections';
 import type { SourcesSummary } from '../calc/other-sources';
+import type { ControlConductorCheck } from '../calc/control-conductors';
 
 export interface ExcludedComponent {
   location: string;
@@ -60,6 +61,8 @@ export interface PanelChecks {
   nameplate: NameplateCheck;
   /** motors at another voltage than the supply: the transformers and DC supplies in the panel, and the motors fed from outside it */
   otherSources: SourcesSummary;
+  /** every control conductor against its protecting device (430.72(A), (B), Table 430.72(B)) */
+  controlConductors: ControlConductorCheck;
   connectionCards: MotorConnectionCard[];
   cautions: string[];
 }

@@ -67,7 +67,10 @@ export interface JobSummary {
 }
 
 /** The job fields the selection engine's supply is made of. */
-export type JobSupplyFields = Pick<JobSummary, 'supplyVolts' | 'supplyPhases' | 'supplyHz' | 'availableFaultKa' | 'ambientC' | 'voltageUnbalancePercent'>;
+export type JobSupplyFields = Pick<JobSummary, 'supplyVolts' | 'supplyPhases' | 'supplyHz' | 'availableFaultKa' | 'ambientC' | 'voltageUnbalancePercent'> & {
+  /** the panel's answer (110.14(C)(1)(a)(3)); null or absent: not answered */
+  terminationsListed75C?: boolean | null;
+};
 
 /** The selection engine's supply for a job (the server's stored selections and the browser preview alike). */
 export function jobSupply(job: JobSupplyFields): SupplyInput {
@@ -78,5 +81,6 @@ export function jobSupply(job: JobSupplyFields): SupplyInput {
     availableFaultKa: job.availableFaultKa,
     ambientC: job.ambientC,
     voltageUnbalancePercent: job.voltageUnbalancePercent ?? 0,
+    ...(typeof job.terminationsListed75C === 'boolean' ? { terminationsListed75C: job.terminationsListed75C } : {}),
   };
 }

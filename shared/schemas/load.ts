@@ -15,6 +15,9 @@ export const SupplySchema = z
     ambientC: z.number().min(-40).max(85),
     /** Measured voltage unbalance at the site, % (NEMA MG 1 14.36); 0 when none is known. */
     voltageUnbalancePercent: z.number().min(0).max(20, 'a voltage unbalance above 20 % is outside this product').default(0),
+    /** The panel's equipment (starters, protective devices, terminal blocks) listed and identified for 75 °C
+     *  conductors (110.14(C)(1)(a)(3)); absent: taken as true and flagged on each motor whose conductor it changes. */
+    terminationsListed75C: z.boolean({ error: 'Answer yes or no: are the terminations listed for 75 °C?' }).optional(),
     /** Feeder conductors and protective device (optional; copper, 75 °C, inverse-time breaker by default). */
     feeder: z
       .object({

@@ -24,6 +24,8 @@ const panelFields = {
   mounting: z.enum(MOUNTINGS),
   markupPercent: z.coerce.number().min(0).max(300),
   labourRate: z.coerce.number().min(0).max(1000),
+  /** the panel's starters, protective devices and terminal blocks listed for 75 °C conductors (110.14(C)(1)(a)(3)); null: not answered (taken as yes, flagged) */
+  terminationsListed75C: z.boolean().nullable(),
 };
 
 export const PanelInputSchema = z.object({
@@ -33,6 +35,7 @@ export const PanelInputSchema = z.object({
   /** absent: the shop's default markup and labour rate (shop settings) */
   markupPercent: panelFields.markupPercent.optional(),
   labourRate: panelFields.labourRate.optional(),
+  terminationsListed75C: panelFields.terminationsListed75C.default(null),
 });
 export type PanelInput = z.input<typeof PanelInputSchema>;
 
@@ -74,6 +77,8 @@ export interface CommentView {
 
 export interface PanelDetail extends PanelSummary {
   markupPercent: number;
+  /** equipment listed for 75 °C conductors (110.14(C)(1)(a)(3)); null: not answered, taken as yes and flagged on the motors it changes */
+  terminationsListed75C: boolean | null;
   labourRate: number;
   rollup: PanelRollup | null;
   job: Omit<JobSummary, 'panelCount' | 'motorCount'>;

@@ -152,6 +152,9 @@ export interface LoadSelection {
     motorLeads?: MotorLeadConductors;
     /** running voltage drop over the given cable length (absent when no length was given) */
     voltageDrop?: VoltageDropResult;
+    /** the branch conductors if the terminations are held to 60 °C (110.14(C)(1)(a)): present only when
+     *  the panel's terminations are taken as listed for 75 °C and the 60 °C size differs */
+    termination60C?: { size: string; ampacity: number; minAmpacity: number; basis: string };
   };
   disconnect: { minAmps: number; minHp: number | null; basis: string };
   relays: { phaseLoss: boolean; phaseReversal: boolean; phaseLossByOverload: boolean };

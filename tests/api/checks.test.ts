@@ -139,6 +139,20 @@ describe('panel checks', () => {
     expect(cp.secondary.basis).toContain('450.3(B)');
   });
 
+  it('checks every bucket\'s control wire against its control fuse, Table 430.72(B) column A (values from memory)', () => {
+    const cc = checks.controlConductors;
+    expect(cc.basis).toContain('Table 430.72(B)');
+    expect(cc.rows.length).toBeGreaterThan(0);
+    for (const r of cc.rows as Array<{ conductor: string; column: string; device: { kind: string; amps: number | null }; maxAmps: number; ok: boolean }>) {
+      expect(r.column).toBe('A');
+      expect(r.device.kind).toBe('control fuse');
+      // 14 AWG Cu: Note 1, its ampacity (Table 310.16 60 °C, 15 A); 16 AWG Cu: 10 A
+      expect(r.maxAmps).toBe(r.conductor === '14 AWG' ? 15 : 10);
+      expect(r.ok).toBe((r.device.amps ?? Infinity) <= r.maxAmps);
+    }
+    expect(cc.findings.length).toBe(cc.rows.filter((r: { ok: boolean }) => !r.ok).length);
+  });
+
   it('gives the nameplate data of NEC 2023 409.110 with the panel SCCR', () => {
     const np = checks.nameplate.result;
     const byLabel = Object.fromEntries((np.lines as Array<{ label: string; value: string }>).map((l) => [l.label, l.value]));

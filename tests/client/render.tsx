@@ -53,6 +53,7 @@ export function panelDetail(over: Partial<PanelDetail> = {}): PanelDetail {
     updatedAt: '2026-11-02T09:30:00.000Z',
     markupPercent: 15,
     labourRate: 85,
+    terminationsListed75C: null,
     rollup: null,
     job: JOB,
     loads: [],

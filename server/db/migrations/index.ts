@@ -7,6 +7,7 @@ import * as m0005 from './0005-catalogue-feed';
 import * as m0006 from './0006-voltage-unbalance';
 import * as m0007 from './0007-combination-ratings';
 import * as m0008 from './0008-shop-settings';
+import * as m0009 from './0009-panel-terminations-75c';
 
 export const migrations = [
   ['0001-foundation', m0001],
@@ -17,4 +18,5 @@ export const migrations = [
   ['0006-voltage-unbalance', m0006],
   ['0007-combination-ratings', m0007],
   ['0008-shop-settings', m0008],
+  ['0009-panel-terminations-75c', m0009],
 ] as const;

@@ -14,6 +14,8 @@ export class Panel extends Model<InferAttributes<Panel>, InferCreationAttributes
   declare revisionNumber: number | null;
   declare markupPercent: CreationOptional<number>;
   declare labourRate: CreationOptional<number>;
+  /** equipment listed for 75 °C conductors (110.14(C)(1)(a)(3)); null: not answered, taken as yes and flagged */
+  declare terminationsListed75C: CreationOptional<boolean | null>;
   declare archivedAt: Date | null;
   declare rollup: Record<string, unknown> | null;
   declare submittedAt: Date | null;
@@ -35,6 +37,7 @@ export class Panel extends Model<InferAttributes<Panel>, InferCreationAttributes
         revisionNumber: { type: DataTypes.INTEGER, allowNull: true },
         markupPercent: { type: DataTypes.DOUBLE, allowNull: false, defaultValue: 15 },
         labourRate: { type: DataTypes.DOUBLE, allowNull: false, defaultValue: 85 },
+        terminationsListed75C: { type: DataTypes.BOOLEAN, allowNull: true, defaultValue: null, field: 'terminations_listed_75c' },
         archivedAt: { type: DataTypes.DATE, allowNull: true },
         rollup: { type: DataTypes.JSONB, allowNull: true },
         submittedAt: { type: DataTypes.DATE, allowNull: true },

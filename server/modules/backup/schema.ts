@@ -68,6 +68,8 @@ const BackupPanelSchema = z
     revisionNumber: countSchema.nullable(),
     markupPercent: z.number().min(0).max(300),
     labourRate: z.number().min(0).max(1000),
+    /** equipment listed for 75 °C conductors (110.14(C)(1)(a)(3)); null: not answered. Absent in older backups. */
+    terminationsListed75C: z.boolean().nullable().default(null),
     archivedAt: isoDate.nullable(),
     submittedAt: isoDate.nullable(),
     bomGeneratedAt: isoDate.nullable(),

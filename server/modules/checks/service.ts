@@ -3,6 +3,7 @@
 // organisation's catalogue and the job: SCCR worksheet (UL 508A SB4, NEC 409.22), heat load (IEC TR 60890
 // simplified), control power transformer (NEC 430.72(C), 450.3(B)), nameplate and feeder (NEC 409.110, 409.21),
 // and each motor's lead connection card. Four or five queries whatever the motor count.
+import { controlConductorChecks } from '../../../shared/calc/control-conductors';
 import type { CurrentUser } from '../../../shared/schemas/auth';
 import type { BomLine, CatalogueItem } from '../../../shared/schemas/catalogue';
 import { PANEL_BUCKET } from '../../../shared/schemas/catalogue';
@@ -483,6 +484,7 @@ export async function computeChecks(actor: CurrentUser, panelId: number): Promis
     sccr,
     heat: heatCheck(lines, byCode, bySel, panel.mounting, job.ambientC),
     controlPower: controlPowerCheck(lines, byCode, job.supplyVolts),
+    controlConductors: controlConductorChecks(lines, byCode, selections),
     nameplate: nameplateCheck(rollup, job, sccr.panelSccrKa, enclosureType, shop.name),
     otherSources: sourcesSummary(rollup),
     connectionCards: views.map((l) => motorConnectionCard(l.id, l.answers, l.effective)),

@@ -99,6 +99,7 @@ export async function motorListExport(actor: CurrentUser, panelId: number) {
     ['Panel', p.name],
     ['Supply', `${p.job.supplyVolts} V, ${p.job.supplyPhases}-phase, ${p.job.supplyHz} Hz; ${p.job.availableFaultKa} kA available; ambient ${p.job.ambientC} °C`],
     ['Code edition', `NEC ${p.job.codeEdition}`],
+    ['Terminations', p.terminationsListed75C === false ? 'not listed for 75 °C: 14–1 AWG and circuits of 100 A or less at 60 °C (NEC 110.14(C)(1)(a))' : p.terminationsListed75C ? 'listed for 75 °C (NEC 110.14(C)(1)(a)(3))' : 'not answered: taken as listed for 75 °C, flagged (NEC 110.14(C)(1))'],
     ['Exported', `${new Date().toISOString().slice(0, 16).replace('T', ' ')} UTC`],
     ['Motors sheet', 'The import format: upload this workbook on another panel to add the same motors (tags must be new there).'],
     ['Selections sheet', "The engine's selections with the designer's overrides written over them (a note on the tag names each override)."],

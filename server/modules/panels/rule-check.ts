@@ -13,7 +13,7 @@ import type { RuleCheckBody } from '../../../shared/schemas/panel';
 import { selectionDifferences } from '../../../shared/calc/selection-diff';
 import { recordActivity } from '../activity/service';
 import * as repo from './repository';
-import { selectAll, selectOne } from './selection';
+import { panelSupply, selectAll, selectOne } from './selection';
 import { ValidationError } from '../../../shared/errors';
 import { changePanel, requirePanel, reselectPanel } from './service';
 import type { Load } from '../../db/models/load';
@@ -85,11 +85,11 @@ export async function ruleCheck(actor: CurrentUser, panelId: number): Promise<Ru
   const p = await requirePanel(actor, panelId);
   const loads = await repo.loadsOf(p.id);
   const digest = createHash('sha1')
-    .update(JSON.stringify([jobSupply(p.job), p.job.codeEdition, p.rollup, loads.map((l) => [l.id, l.tag, l.answers, l.selection])]))
+    .update(JSON.stringify([jobSupply(panelSupply(p)), p.job.codeEdition, p.rollup, loads.map((l) => [l.id, l.tag, l.answers, l.selection])]))
     .digest('hex');
   let hit = checked.get(p.id);
   if (!hit || hit.digest !== digest) {
-    hit = { digest, changed: await differencesOf(p.job, loads, (p.rollup ?? null) as PanelRollup | null) };
+    hit = { digest, changed: await differencesOf(panelSupply(p), loads, (p.rollup ?? null) as PanelRollup | null) };
     checked.delete(p.id);
     checked.set(p.id, hit);
     if (checked.size > MAX_CHECKED) checked.delete(checked.keys().next().value as number);
@@ -101,7 +101,7 @@ export async function ruleCheck(actor: CurrentUser, panelId: number): Promise<Ru
 export async function reselectUnderCurrentRules(actor: CurrentUser, panelId: number, version: number) {
   return changePanel(actor, panelId, version, 'selected again under the current rules', async (p, t) => {
     const loads = await repo.loadsOf(p.id, t);
-    const changed = await differencesOf(p.job, loads, (p.rollup ?? null) as PanelRollup | null);
+    const changed = await differencesOf(panelSupply(p), loads, (p.rollup ?? null) as PanelRollup | null);
     await reselectPanel(p, t);
     await recordActivity(
       actor,

@@ -9,6 +9,21 @@ import type { PanelRollup } from '../../../shared/schemas/selection';
 
 export type JobSupply = JobSupplyFields & Pick<JobSummary, 'codeEdition'>;
 
+/** The supply a panel's motors are selected on: its job's supply and the panel's own answers (terminations, 110.14(C)(1)). */
+export function panelSupply(p: { job: JobSupply; terminationsListed75C?: boolean | null }): JobSupply {
+  const j = p.job;
+  return {
+    supplyVolts: j.supplyVolts,
+    supplyPhases: j.supplyPhases,
+    supplyHz: j.supplyHz,
+    availableFaultKa: j.availableFaultKa,
+    ambientC: j.ambientC,
+    voltageUnbalancePercent: j.voltageUnbalancePercent,
+    codeEdition: j.codeEdition,
+    terminationsListed75C: p.terminationsListed75C ?? null,
+  };
+}
+
 function edition(job: JobSupply): CodeEdition {
   return (job.codeEdition === '2020' ? '2020' : '2023') as CodeEdition;
 }

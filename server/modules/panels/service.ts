@@ -12,7 +12,7 @@ import type { OverrideInput, StoredOverride } from '../../../shared/schemas/over
 import { applyOverrides, checkOverride } from '../../../shared/calc/overrides';
 import { ConflictError, ForbiddenError, NotFoundError, ValidationError, zodIssues } from '../../../shared/errors';
 import * as repo from './repository';
-import { rollupOf, selectAll, selectOne } from './selection';
+import { panelSupply, rollupOf, selectAll, selectOne } from './selection';
 import { recordActivity } from '../activity/service';
 import { getJob, jobView } from '../jobs/service';
 import { shopSettingsOf } from '../settings/service';
@@ -117,6 +117,7 @@ async function panelDetailOf(p: Panel & { job: Job }): Promise<PanelDetail> {
     updatedAt: p.updatedAt.toISOString(),
     markupPercent: p.markupPercent,
     labourRate: p.labourRate,
+    terminationsListed75C: p.terminationsListed75C ?? null,
     rollup: (p.rollup ?? null) as PanelRollup | null,
     job: jobView(p.job) as unknown as PanelDetail['job'], // dates travel as ISO strings
     loads: loads.map(loadView).map((l) => (l.overrides.length ? l : { ...l, effective: null })),
@@ -128,7 +129,7 @@ async function panelDetailOf(p: Panel & { job: Job }): Promise<PanelDetail> {
 }
 
 /** A new panel; without its own markup and labour rate it takes the shop's defaults (a panel keeps its own after that). */
-export async function createPanel(actor: CurrentUser, jobId: number, values: { name: string; description: string; mounting: string; markupPercent?: number; labourRate?: number }) {
+export async function createPanel(actor: CurrentUser, jobId: number, values: { name: string; description: string; mounting: string; markupPercent?: number; labourRate?: number; terminationsListed75C: boolean | null }) {
   const job = await getJob(actor, jobId);
   const shop = await shopSettingsOf(actor.organisationId);
   const pricing = { markupPercent: values.markupPercent ?? shop.defaultMarkupPercent, labourRate: values.labourRate ?? shop.defaultLabourRate };
@@ -186,7 +187,7 @@ export async function openBomChange(actor: CurrentUser, p: Panel & { job: Job },
 /** Recomputes the panel roll-up from the motors' stored selections (the rules do not run again). */
 async function refreshRollup(p: Panel & { job: Job }, t: Transaction) {
   const loads = (await repo.loadsOf(p.id, t)).filter((l) => l.selection);
-  const rollup = rollupOf(p.job, loads.map((l) => l.answers as LoadInput), loads.map((l) => l.selection as unknown as LoadSelection));
+  const rollup = rollupOf(panelSupply(p), loads.map((l) => l.answers as LoadInput), loads.map((l) => l.selection as unknown as LoadSelection));
   p.rollup = rollup as unknown as Record<string, unknown> | null;
   p.changed('rollup', true);
 }
@@ -197,7 +198,7 @@ async function refreshRollup(p: Panel & { job: Job }, t: Transaction) {
  */
 export async function reselectPanel(p: Panel & { job: Job }, t: Transaction) {
   const loads = await repo.loadsOf(p.id, t);
-  const out = await selectAll(p.job, loads.map((l) => l.answers as LoadInput));
+  const out = await selectAll(panelSupply(p), loads.map((l) => l.answers as LoadInput));
   if (out) {
     await repo.Load.bulkCreate(
       loads.map((l, i) => ({ ...l.get({ plain: true }), selection: out.results[i] as unknown as Record<string, unknown>, version: l.version + 1 })),
@@ -228,7 +229,7 @@ export async function addLoad(actor: CurrentUser, panelId: number, answers: unkn
   const input = parseAnswers(answers);
   return changePanel(actor, panelId, panelVersion, `added ${input.tag}`, async (p, t) => {
     if (await tagTaken(p.id, input.tag, t)) throw new ValidationError(`Tag ${input.tag} is already on this panel`, [{ path: 'body.answers.tag', message: 'already on this panel' }]);
-    const selection = await selectOne(p.job, input);
+    const selection = await selectOne(panelSupply(p), input);
     const position = (await repo.Load.max<number, Load>('position', { where: { panelId: p.id }, transaction: t })) ?? 0;
     const l = await repo.Load.create(
       { organisationId: actor.organisationId, panelId: p.id, tag: input.tag, position: position + 1, answers: input as Record<string, unknown>, selection: selection as unknown as Record<string, unknown>, overrides: [] },
@@ -256,7 +257,7 @@ export async function addLoads(actor: CurrentUser, _panelId: number, answersList
   const existing = await repo.loadsOf(p.id, t);
   const tags = new Set(existing.map((l) => l.tag.toLowerCase()));
   let position = existing.reduce((m, l) => Math.max(m, l.position), 0);
-  const out = await selectAll(p.job, answersList);
+  const out = await selectAll(panelSupply(p), answersList);
   const rows = answersList.map((a, i) => {
     if (tags.has(a.tag.toLowerCase())) throw new ValidationError(`Tag ${a.tag} is already on this panel`, [{ path: `rows[${i}].tag`, message: 'already on this panel' }]);
     tags.add(a.tag.toLowerCase());
@@ -282,7 +283,7 @@ export async function updateLoad(actor: CurrentUser, loadId: number, answers: un
     const l = (await repo.findLoad(actor.organisationId, loadId, t))!;
     if (l.version !== version) throw new ConflictError(`Someone else changed motor ${l.tag} since you opened it: reload to see their change, then apply yours again`);
     if (input.tag !== l.tag && (await tagTaken(p.id, input.tag, t, l.id))) throw new ValidationError(`Tag ${input.tag} is already on this panel`, [{ path: 'body.answers.tag', message: 'already on this panel' }]);
-    const selection = await selectOne(p.job, input);
+    const selection = await selectOne(panelSupply(p), input);
     const diff: Record<string, unknown> = {};
     for (const k of new Set([...Object.keys(l.answers), ...Object.keys(input)])) {
       const a = JSON.stringify((l.answers as Record<string, unknown>)[k]);
@@ -324,7 +325,7 @@ export async function bulkEdit(actor: CurrentUser, panelId: number, loadIds: num
     const loads = (await repo.loadsOf(p.id, t)).filter((l) => loadIds.includes(l.id));
     if (loads.length !== loadIds.length) throw new NotFoundError('One of the motors');
     const inputs = loads.map((l, i) => parseAnswers({ ...l.answers, ...changes }, `loads[${i}]`));
-    const out = await selectAll(p.job, inputs);
+    const out = await selectAll(panelSupply(p), inputs);
     // one statement for all the motors
     await repo.Load.bulkCreate(
       loads.map((l, i) => ({ ...l.get({ plain: true }), answers: inputs[i] as Record<string, unknown>, selection: out!.results[i] as unknown as Record<string, unknown>, version: l.version + 1 })),
@@ -368,6 +369,11 @@ export async function setOverrides(actor: CurrentUser, loadId: number, overrides
 export async function updatePanel(actor: CurrentUser, panelId: number, changes: Record<string, unknown>, version: number) {
   await changePanel(actor, panelId, version, 'panel settings', async (p, t) => {
     await repo.Panel.update(changes, { where: { id: p.id }, transaction: t });
+    if ('terminationsListed75C' in changes && (changes.terminationsListed75C ?? null) !== (p.terminationsListed75C ?? null)) {
+      // the conductors follow the termination rating (110.14(C)(1)): every motor is selected again
+      p.terminationsListed75C = (changes.terminationsListed75C ?? null) as boolean | null;
+      await reselectPanel(p, t);
+    }
     await recordActivity(actor, { entity: 'panel', entityId: p.id, jobId: p.jobId, panelId: p.id, action: 'updated', summary: `Changed panel ${p.name}: ${Object.keys(changes).join(', ')}`, diff: changes }, t);
   });
   return panelDetail(actor, panelId);
@@ -386,6 +392,7 @@ export async function duplicatePanel(actor: CurrentUser, panelId: number) {
         mounting: src.mounting,
         markupPercent: src.markupPercent,
         labourRate: src.labourRate,
+        terminationsListed75C: src.terminationsListed75C ?? null,
         revisionNumber: null,
         archivedAt: null,
         rollup: src.rollup,

@@ -15,7 +15,8 @@ import { motorFeed, sourcesSummary } from '../../../shared/calc/other-sources';
 import type { ConnectionCard, LineName } from '../../../shared/calc/connections';
 import { relayOf, relayWiringText } from '../../../shared/calc/overload';
 import { perWindingText } from '../../../shared/calc/scpd';
-import { motorLeadText, voltageDropText } from '../../../shared/calc/conductor';
+import { motorLeadText, termination60Text, voltageDropText } from '../../../shared/calc/conductor';
+import type { ControlConductorCheck } from '../../../shared/calc/control-conductors';
 import { unbalanceText } from '../../../shared/standards/nema-mg1-voltage-unbalance';
 import { SCPD_WORDS } from '../../../shared/calc/scpd';
 import { oneLineElements, type MotorFeed, type OneLineElement } from '../../../shared/calc/one-line';
@@ -43,6 +44,8 @@ export interface SubmittalData {
   signOff?: { revision: string; date: string; /** the engineer who signed */ by?: string | null; acknowledged: { finding: string; by: string; reason: string } | null };
   heat: HeatResult;
   controlPower: ControlPowerResult;
+  /** each control conductor against its protecting device (430.72(B)) */
+  controlConductors?: ControlConductorCheck;
   connectionCards: Array<{ tag: string; card: ConnectionCard }>;
 }
 
@@ -461,7 +464,7 @@ export function writeSubmittalPdf(
         ],
         [
           'Conductor',
-          `${s.conductor.size} ${s.conductor.material}, ${s.conductor.ampacity} A (min ${fmt(s.conductor.minAmpacity)} A)${motorLeadText(s) ? `; ${motorLeadText(s)}` : ''}${voltageDropText(s) ? `; ${voltageDropText(s)}` : ''}`,
+          `${s.conductor.size} ${s.conductor.material}, ${s.conductor.ampacity} A (min ${fmt(s.conductor.minAmpacity)} A)${termination60Text(s) ? `; ${termination60Text(s)}` : ''}${motorLeadText(s) ? `; ${motorLeadText(s)}` : ''}${voltageDropText(s) ? `; ${voltageDropText(s)}` : ''}`,
           s.conductor.motorLeads ? `line side: ${s.conductor.basis}; ${s.conductor.motorLeads.basis}` : s.conductor.basis,
         ],
         ...(s.unbalance
@@ -601,6 +604,19 @@ export function writeSubmittalPdf(
     ['Secondary protection', `${cp.secondary.ratingAmps} A (${fmt(cp.secondary.currentA, 3)} A x ${cp.secondary.maxPercent} % = ${fmt(cp.secondary.maxAmps, 3)} A) - ${cp.secondary.basis}`],
   ]);
   for (const n of [...cp.basis, ...cp.notes]) w.para(n, 8);
+
+  // Control-circuit conductors (430.72(A), (B), Table 430.72(B))
+  const cc = data.controlConductors;
+  if (cc) {
+    w.heading('Control-circuit conductors');
+    w.table(
+      ['Bucket', 'Conductor', 'Protected by', 'Table 430.72(B)', 'Max (A)', 'Verdict'],
+      [0.14, 0.14, 0.3, 0.16, 0.1, 0.16],
+      cc.rows.map((r) => [r.bucket, `${r.conductor} ${r.material === 'cu' ? 'Cu' : 'Al'}`, `${r.device.kind}${r.device.amps !== null ? ` ${r.device.amps} A` : ''}`, `column ${r.column}`, r.maxAmps === null ? '-' : String(r.maxAmps), r.ok === null ? 'not checked' : r.ok ? 'OK' : 'TOO SMALL']),
+    );
+    for (const f of cc.findings) w.para(`- ${f}`, 9);
+    w.para(cc.basis, 8);
+  }
 
   // Connection cards
   w.heading('Motor connection cards');

@@ -70,6 +70,7 @@ export const submittalRoutes = [
         ...(revision ? { signOff: { revision: `R${revision.number}`, date: new Date(revision.approvedAt).toISOString().slice(0, 10), by: signer, acknowledged: frozen?.acknowledged ?? null } } : {}),
         heat: checks.heat.result,
         controlPower: checks.controlPower.result,
+        controlConductors: checks.controlConductors,
         connectionCards: checks.connectionCards.flatMap((c) => (c.card ? [{ tag: c.tag, card: c.card }] : [])),
       };
       res.status(200);

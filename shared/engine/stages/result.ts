@@ -32,7 +32,7 @@ export function selectionOf(ctx: StageContext, s: Stages): LoadSelection {
   const cond = c.conductor;
   const leads = c.leads;
   const scpd = p.scpd;
-  const assumed: AssumedInput[] = a.assumed;
+  const assumed: AssumedInput[] = [...a.assumed, ...c.assumed];
   return {
     tag: load.tag,
     ...(load.description !== undefined ? { description: load.description } : {}),
@@ -75,6 +75,7 @@ export function selectionOf(ctx: StageContext, s: Stages): LoadSelection {
           basis: cond.basis,
           ...(leads ? { motorLeads: { count: leads.count, share: leads.share, minAmpacity: leads.minAmpacity, size: leads.size, ampacity: leads.ampacity, basis: leads.basis } } : {}),
           ...(c.voltageDrop ? { voltageDrop: c.voltageDrop } : {}),
+          ...(c.termination60C ? { termination60C: { size: c.termination60C.size, ampacity: c.termination60C.ampacity, minAmpacity: c.termination60C.minAmpacity, basis: c.termination60C.basis } } : {}),
         }
       : { minAmpacity: 0, size: 'not determined', material: load.conductor.material, tempRatingC: load.conductor.tempRatingC, ampacity: 0, basis: 'not determined' },
     disconnect: c.disconnect ?? { minAmps: 0, minHp: null, basis: 'not determined' },

@@ -23,7 +23,9 @@ describe('worked branch circuits (NEC 2023)', () => {
     expect(r.lockedRotorAmps).toMatchObject({ min: 175.7, max: 197.4 }); // Table 430.7(B), letter G
     expect(r.synchronousRpm).toBe(1800); // 120 x 60 / 4
     expect(r.errors).toEqual([]);
-    expect(r.assumed).toEqual([]);
+    // the panel's terminations not answered: 75 °C taken and flagged, 8 AWG at 60 °C is 40 A < 42.5 A (deliberate change, 110.14(C)(1))
+    expect(r.assumed.map((a) => a.field)).toEqual(['terminationsListed75C']);
+    expect(r.conductor.termination60C?.size).toBe('6 AWG'); // Table 310.16 Cu 60 °C: 6 AWG = 55 A
   });
 
   it('10 hp, 230 V, three-phase, SF 1.0, nameplate 27 A, dual-element fuses', async () => {
@@ -127,7 +129,8 @@ describe('worked branch circuits (NEC 2023)', () => {
 
   it('assumed inputs are flagged: no FLA, no code letter, no environment, no service factor', async () => {
     const r = await selector.selectLoad({ tag: 'X', supply: 'ac3', hp: 10, volts: 460 }, supply480);
-    expect(r.assumed.map((a) => a.field).sort()).toEqual(['codeLetter', 'environment', 'fla', 'serviceFactor']);
+    // terminationsListed75C joins the list: the 60 °C column gives 12 AWG instead of 14 AWG (deliberate change, 110.14(C)(1))
+    expect(r.assumed.map((a) => a.field).sort()).toEqual(['codeLetter', 'environment', 'fla', 'serviceFactor', 'terminationsListed75C']);
     expect(r.flaAmps).toBe(14); // table FLC stands in for the nameplate
     expect(r.overload.maxSettingAmps).toBe(16.1); // 115 % x 14
     expect(r.enclosure).toEqual({ nemaType: '12', ipCode: 'IP52', flagForEngineer: true });

@@ -81,7 +81,7 @@ export function Component() {
         return;
       }
       browserSelector((p.job.codeEdition === '2020' ? '2020' : '2023') as CodeEdition)
-        .selectLoad(clean(values) as LoadInput, jobSupply(p.job))
+        .selectLoad(clean(values) as LoadInput, jobSupply({ ...p.job, terminationsListed75C: p.terminationsListed75C }))
         .then((sel) => setPreview({ sel, error: null }))
         .catch((e: Error) => setPreview({ sel: null, error: e.message }));
     }, 150);

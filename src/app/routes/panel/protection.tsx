@@ -6,6 +6,8 @@ import { panelQueries, useAddComment } from '../../../features/panels/api/panels
 import { SelectionSummary } from '../../../features/panels/components/selection-summary';
 import { OVERRIDE_FIELDS } from '../../../../shared/schemas/override';
 import { PanelChecks } from '../../../features/checks/components/panel-checks';
+import { TerminationsAnswer } from '../../../features/panels/components/terminations-answer';
+import { hasRole, sessionQueries } from '../../../features/auth/api/session';
 import { Caution } from '../../../components/ui/feedback';
 import { Button } from '../../../components/ui/button';
 import { inputClass } from '../../../components/ui/field';
@@ -15,6 +17,7 @@ export function Component() {
   const panelId = Number(useParams().panelId);
   const { data: p } = useQuery(panelQueries.detail(panelId));
   const comment = useAddComment(panelId);
+  const { data: me } = useQuery(sessionQueries.me());
   const [drafts, setDrafts] = useState<Record<number, string>>({});
   if (!p) return null;
   const overrides = p.loads.flatMap((l) => l.overrides.map((o) => ({ tag: l.tag, ...o })));
@@ -36,6 +39,7 @@ export function Component() {
           <p className="text-2xl font-semibold">◔ {assumedCount}</p>
         </div>
       </section>
+      <TerminationsAnswer panel={p} canEdit={hasRole(me, 'designer', 'admin')} />
       {overrides.length ? (
         <section aria-label="Overrides list" className="rounded border border-copper-500/40 bg-panel p-4">
           <h2 className="mb-2 text-lg font-semibold">Overrides</h2>

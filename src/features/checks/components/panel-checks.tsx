@@ -5,6 +5,7 @@ import type { PanelChecks as Checks } from '../../../../shared/schemas/checks';
 import { Caution, ErrorNote, Loading } from '../../../components/ui/feedback';
 import { Verdict } from '../../../components/ui/status';
 import { Button } from '../../../components/ui/button';
+import { ControlConductorsSection } from './control-conductors';
 import type { SccrRow, SccrWayOut } from '../../../../shared/calc/sccr';
 import type { ProtectionChoice } from '../../../../shared/calc/control-power';
 import { formatMoney } from '../../../../shared/format/money';
@@ -504,6 +505,7 @@ export function PanelChecks({ panelId }: { panelId: number }) {
       <HeatSection heat={c.heat} />
       <ControlPowerSection cp={c.controlPower} />
       <OtherSourcesSection os={c.otherSources} />
+      {c.controlConductors ? <ControlConductorsSection cc={c.controlConductors} /> : null}
       <NameplateSection np={c.nameplate} />
       <Caution />
     </div>

@@ -1,7 +1,7 @@
 import type { LoadSelection } from '../../../../shared/schemas/selection';
 import { relayOf, relayWiringText } from '../../../../shared/calc/overload';
 import { perWindingText } from '../../../../shared/calc/scpd';
-import { motorLeadText, voltageDropText } from '../../../../shared/calc/conductor';
+import { motorLeadText, termination60Text, voltageDropText } from '../../../../shared/calc/conductor';
 import { unbalanceText } from '../../../../shared/standards/nema-mg1-voltage-unbalance';
 import { answerValueLabel, decisionValueLabel, fieldLabel, starterTypeLabel } from '../../../../shared/labels';
 
@@ -70,10 +70,11 @@ export function SelectionSummary({ selection, overridden = [] }: { selection: Lo
       'Conductors',
       <>
         {s.conductor.size} {s.conductor.material === 'cu' ? 'Cu' : 'Al'} {s.conductor.tempRatingC} °C ({s.conductor.ampacity} A ≥ {s.conductor.minAmpacity} A){mark('conductor.size')}
+        {termination60Text(s) ? <span className="block text-state-review" data-testid="termination-60c">◔ {termination60Text(s)}: the engineer decides which holds</span> : null}
         {motorLeadText(s) ? <span className="block text-ink-soft" data-testid="motor-leads">{motorLeadText(s)}</span> : null}
         {voltageDropText(s) ? <span className="block text-ink-soft" data-testid="voltage-drop">{voltageDropText(s)}</span> : null}
       </>,
-      [s.conductor.motorLeads ? `line side: ${s.conductor.basis}; ${s.conductor.motorLeads.basis}` : s.conductor.basis, s.conductor.voltageDrop ? `voltage drop: ${s.conductor.voltageDrop.basis}` : null].filter(Boolean).join('; '),
+      [s.conductor.motorLeads ? `line side: ${s.conductor.basis}; ${s.conductor.motorLeads.basis}` : s.conductor.basis, s.conductor.termination60C ? `at 60 °C terminations: ${s.conductor.termination60C.basis}` : null, s.conductor.voltageDrop ? `voltage drop: ${s.conductor.voltageDrop.basis}` : null].filter(Boolean).join('; '),
     ],
     ['Disconnect', `≥ ${s.disconnect.minAmps} A${s.disconnect.minHp ? `, ≥ ${s.disconnect.minHp} hp` : ''}`, s.disconnect.basis],
     ['Relays', <>{relayLabel(s)}{mark('relays.phaseLoss')}{mark('relays.phaseReversal')}</>, 'common practice'],
