@@ -5,7 +5,7 @@ import { simpleParser } from 'mailparser';
 import type { AddressInfo } from 'node:net';
 import { MailMessage } from '../../db/models/mail-message';
 import { choosePort } from '../../config/ports';
-import { useFakeSmtpPort } from './mailer';
+import { sendThroughFakeSmtpPort } from './mailer';
 
 /**
  * Starts the fake on `port`, or, when another program holds it, on the next free port above it
@@ -38,7 +38,7 @@ export async function startFakeSmtp(port: number, opts: { explicit?: string | nu
     server.once('error', reject);
     server.listen(chosen, '127.0.0.1', () => resolve());
   });
-  useFakeSmtpPort(fakeSmtpPortOf(server));
+  sendThroughFakeSmtpPort(fakeSmtpPortOf(server));
   return server;
 }
 

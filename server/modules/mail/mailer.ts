@@ -6,7 +6,7 @@ let transporter: Transporter | null = null;
 let fakePort: number | null = null;
 
 /** Sends to the fake on this port from now on. */
-export function useFakeSmtpPort(port: number) {
+export function sendThroughFakeSmtpPort(port: number) {
   fakePort = port;
   transporter = null;
 }

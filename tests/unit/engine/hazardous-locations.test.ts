@@ -11,7 +11,7 @@ const HAZARDOUS = /^class[12]-div[12]$/;
 
 /** every environment value a condition tree compares with */
 function environments(node: unknown, out: string[] = []): string[] {
-  if (Array.isArray(node)) node.forEach((n) => environments(n, out));
+  if (Array.isArray(node)) for (const n of node) environments(n, out);
   else if (node && typeof node === 'object') {
     const o = node as Record<string, unknown>;
     if (o.fact === 'environment') out.push(...([] as unknown[]).concat(o.value).filter((v): v is string => typeof v === 'string'));

@@ -68,6 +68,8 @@ export const lineKey = (bucket: string, code: string | null) => `${bucket}|${cod
 export function BomTable({ lines, totals, actions, groupBy, highlight = null }: { lines: StoredLine[]; totals: BomTotals; actions: LineActions; groupBy: 'bucket' | 'category'; highlight?: string | null }) {
   const [sorting, setSorting] = useState<SortingState>([]);
   const firstMarked = useRef<HTMLTableRowElement | null>(null);
+  // scroll again whenever another section points at another line
+  // biome-ignore lint/correctness/useExhaustiveDependencies: highlight is the trigger, read through the marked row's ref
   useEffect(() => {
     firstMarked.current?.scrollIntoView({ block: 'center' });
   }, [highlight]);

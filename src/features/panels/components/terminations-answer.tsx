@@ -10,7 +10,7 @@ const CHOICES = [
   ['no', 'No — hold 14–1 AWG and circuits of 100 A or less to 60 °C'],
 ] as const;
 
-function valueOf(v: boolean | null): (typeof CHOICES)[number][0] {
+function choiceOf(v: boolean | null): (typeof CHOICES)[number][0] {
   return v === null ? 'unanswered' : v ? 'yes' : 'no';
 }
 
@@ -21,7 +21,7 @@ function valueOf(v: boolean | null): (typeof CHOICES)[number][0] {
 export function TerminationsAnswer({ panel, canEdit }: { panel: PanelDetail; canEdit: boolean }) {
   const update = useUpdatePanel(panel.id);
   const [error, setError] = useState<unknown>(null);
-  const current = valueOf(panel.terminationsListed75C);
+  const current = choiceOf(panel.terminationsListed75C);
   const differing = panel.loads.filter((l) => l.selection?.conductor.termination60C).length;
   return (
     <section aria-label="Termination temperature" className="rounded border border-line bg-panel p-4">
