@@ -24,6 +24,9 @@ function openWizard() {
 /** A 10 hp, 460 V three-phase motor: NEC 2023 Table 430.250 gives 14 A. */
 async function answerTenHorsepower() {
   fireEvent.change(await screen.findByRole('textbox', { name: /^Tag/ }), { target: { value: 'P-101' } });
+  // the wizard pre-fills neither the supply nor the voltage: the panel builder answers them from the nameplate
+  fireEvent.change(screen.getByRole('combobox', { name: /^Supply/ }), { target: { value: 'ac3' } });
+  fireEvent.change(screen.getByRole('textbox', { name: /^Rated voltage/ }), { target: { value: '460' } });
   fireEvent.change(screen.getByRole('textbox', { name: /^Horsepower/ }), { target: { value: '10' } });
   fireEvent.change(screen.getByRole('textbox', { name: /^Nameplate FLA/ }), { target: { value: '13.2' } });
 }

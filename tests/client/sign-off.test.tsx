@@ -35,8 +35,19 @@ function panelServer(start: PanelDetail, me: CurrentUser) {
 /** The part of the checks answer the sign-off section reads (the full answer: shared/schemas/checks.ts). */
 const checksWithSccr = (panelSccrKa: number, verdict: 'adequate' | 'below-available') =>
   http.get(`/api/panels/12/checks`, () =>
-    HttpResponse.json({ sccr: { verdict, panelSccrKa, availableFaultKa: JOB.availableFaultKa }, heat: { result: null }, controlPower: { fitted: null, result: null } }),
+    HttpResponse.json({
+      sccr: { verdict, panelSccrKa, availableFaultKa: JOB.availableFaultKa, limiting: [] },
+      heat: { result: null },
+      controlPower: { fitted: null, result: null },
+      bom: { source: 'stored', stale: false, unmatchedLines: 0, note: null },
+    }),
   );
+
+/** The section's other reads while a panel is in review: its bill of materials (for the swaps) and whether this engineer may sign (separation of duties). */
+const reviewReads = (reason: string | null = null) => [
+  http.get('/api/panels/12/bom', () => HttpResponse.json({ lines: [], totals: null, generatedAt: null, stale: false })),
+  http.get('/api/panels/12/sign-off-eligibility', () => HttpResponse.json({ selfReview: reason !== null, allowed: false, actions: [], reason })),
+];
 
 const openSignOff = (panel: PanelDetail) => renderRoute([{ path: '/jobs/:jobId/panels/:panelId/sign-off', element: <SignOff /> }], `/jobs/${JOB.id}/panels/${panel.id}/sign-off`);
 
@@ -71,7 +82,7 @@ describe('sign-off section, panel builder', () => {
 describe('sign-off section, engineer', () => {
   it('shows the short-circuit rating before signing and the new revision after', async () => {
     const { posted } = panelServer(panelDetail({ status: 'in_review' }), ENGINEER);
-    server.use(checksWithSccr(65, 'adequate'));
+    server.use(checksWithSccr(65, 'adequate'), ...reviewReads());
     openSignOff(panelDetail());
     const section = await signOffSection();
     const before = await within(section).findByRole('group', { name: 'Before you sign' });
@@ -85,7 +96,7 @@ describe('sign-off section, engineer', () => {
 
   it('marks a rating below the available fault current and asks for the acknowledgement', async () => {
     panelServer(panelDetail({ status: 'in_review' }), ENGINEER);
-    server.use(checksWithSccr(5, 'below-available'));
+    server.use(checksWithSccr(5, 'below-available'), ...reviewReads());
     openSignOff(panelDetail());
     const section = await signOffSection();
     expect(await within(section).findByText(/Panel SCCR 5 kA is below the 65 kA available/)).toBeTruthy();
@@ -94,7 +105,7 @@ describe('sign-off section, engineer', () => {
 
   it('shows the server error when signing off fails', async () => {
     panelServer(panelDetail({ status: 'in_review' }), ENGINEER);
-    server.use(checksWithSccr(65, 'adequate'), http.post('/api/panels/12/approve', () => apiError(500, 'internal', 'The revision could not be frozen; the panel is unchanged.')));
+    server.use(checksWithSccr(65, 'adequate'), ...reviewReads(), http.post('/api/panels/12/approve', () => apiError(500, 'internal', 'The revision could not be frozen; the panel is unchanged.')));
     openSignOff(panelDetail());
     const section = await signOffSection();
     fireEvent.click(await within(section).findByRole('button', { name: /Sign off as R0/ }));
