@@ -478,8 +478,16 @@ export function createSelector(ruleFiles: ReadonlyArray<RuleFileInput>, options:
       vfd,
       softStarter,
       dc,
+      controlScheme: load.controlScheme,
       unbalance,
-      cautions: [...new Set(cautions)],
+      cautions: [
+        ...new Set([
+          ...cautions,
+          ...(load.controlScheme === 'two-wire'
+            ? ['Two-wire control restarts the motor by itself when power returns: the engineer confirms an automatic restart is safe for this machine (NFPA 79 7.5, from memory).']
+            : []),
+        ]),
+      ],
       assumed,
       trace,
       errors,
