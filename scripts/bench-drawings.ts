@@ -55,7 +55,7 @@ const DEMO: LoadInput[] = [
   { tag: 'M-401', description: 'Sampling pump', supply: 'ac1', hp: 0.5, volts: 115, singlePhaseType: 'capacitor-start', environment: 'indoor-dry' },
   { tag: 'V-501', description: 'Sluice gate actuator', supply: 'ac3', hp: 2, volts: 460, reversing: true, duty: 'intermittent', jogging: true, environment: 'outdoor' },
   { tag: 'H-601', description: 'Chemical room hoist (DC)', supply: 'dc', hp: 5, volts: 240, dcField: 'compound', reversing: true, quickStop: true, environment: 'corrosive' },
-  { tag: 'F-701', description: 'Supply fan', supply: 'ac3', hp: 25, volts: 460, leads: 9, connection: 'wye', startingLimit: 'reduced-inrush', starterPreference: 'part-winding', controlScheme: 'two-wire' },
+  { tag: 'F-701', description: 'Supply fan', supply: 'ac3', hp: 25, volts: 230, leads: 9, connection: 'wye', startingLimit: 'reduced-inrush', starterPreference: 'part-winding', controlScheme: 'two-wire' },
   { tag: 'P-801', description: 'Sump pump', supply: 'ac3', hp: 10, volts: 460, controlScheme: 'hand-off-auto' },
 ];
 

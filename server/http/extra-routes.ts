@@ -5,7 +5,8 @@ import { importRoutes } from '../modules/panels/import-router';
 import { estimatingRoutes } from '../modules/bom/router';
 import { backupRoutes } from '../modules/backup/router';
 import { checkRoutes } from '../modules/checks/router';
+import { drawingRoutes } from '../modules/drawings/router';
 
 export function extraRoutes(): AnyRoute[] {
-  return [...panelRoutes, ...importRoutes, ...estimatingRoutes, ...backupRoutes, ...checkRoutes];
+  return [...panelRoutes, ...importRoutes, ...estimatingRoutes, ...backupRoutes, ...checkRoutes, ...drawingRoutes];
 }

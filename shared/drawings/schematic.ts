@@ -113,10 +113,12 @@ export function buildBucketSchematic(input: BucketInput, firstRung: number): Buc
   const s = input.selection;
   const b = input.index;
   const t = s.starter.type;
-  const scheme: ControlScheme = s.controlScheme ?? 'three-wire';
+  const drive = t === 'VFD' || t === 'dc-drive';
+  // a selection stored before the answer existed: the devices its bill of materials was priced with
+  // (hand-off-auto on a drive, three-wire otherwise)
+  const scheme: ControlScheme = s.controlScheme ?? (drive ? 'hand-off-auto' : 'three-wire');
   const d = (name: string) => `${b}${name}`;
   const notes: string[] = [];
-  const drive = t === 'VFD' || t === 'dc-drive';
   const overload: BucketSchematic['overload'] = hasLine(input.bom, 'overload-relay') ? 'relay' : drive ? 'drive' : 'starter';
   const pmr = hasLine(input.bom, 'phase-monitor-relay');
   const fieldLoss = hasLine(input.bom, 'field-loss-relay');
@@ -129,7 +131,7 @@ export function buildBucketSchematic(input: BucketInput, firstRung: number): Buc
   // ---------------------------------------------------------------- control circuit
   const OL: Net | null = overload === 'relay' ? el({ kind: 'overload', device: dev(d('OL'), `Overload relay, trip class ${s.overload.tripClass}`) }) : null;
   if (overload === 'drive') notes.push('Motor overload by the drive’s electronic overload (NEC 2023 430.124 where the drive is listed for it): no separate overload contact.');
-  if (overload === 'starter') notes.push('Overload protection inside the starter: its trip contact is drawn in series with the coil.');
+  if (overload === 'starter') notes.push(t === 'RVSS' ? 'Overload protection inside the soft starter: its fault contact opens the run relay circuit.' : 'Overload protection inside the starter: its trip contact is drawn in series with the coil.');
   const prefix: Net[] = [];
   if (pmr) {
     const what = [s.relays.phaseLoss && !s.relays.phaseLossByOverload ? 'phase loss' : null, s.relays.phaseReversal ? 'phase reversal' : null].filter(Boolean).join(' / ');

@@ -378,6 +378,10 @@ export interface ChecksContext {
   selections: LoadSelection[];
   rollup: PanelRollup | null;
   panel: Panel & { job: Job };
+  /** the bill of materials the checks read (stored, or built in memory) */
+  lines: BomLine[];
+  /** each motor's answers, in the panel's order */
+  answers: Array<Record<string, unknown>>;
 }
 
 /** The SCCR worksheet's input from a bill of materials, the catalogue, the selections and the tested combinations. */
@@ -481,7 +485,7 @@ export async function computeChecks(actor: CurrentUser, panelId: number): Promis
     connectionCards: views.map((l) => motorConnectionCard(l.id, l.answers, l.effective)),
     cautions: CHECK_CAUTIONS,
   };
-  return { checks, selections, rollup, panel };
+  return { checks, selections, rollup, panel, lines, answers: views.map((l) => l.answers as Record<string, unknown>) };
 }
 
 function revisionText(p: Panel): string {
