@@ -291,3 +291,16 @@ export function wireRowsFor(d: PanelDrawings): unknown[][] {
 export function toCsv(header: readonly string[], rows: unknown[][]): string {
   return [header, ...rows].map((r) => r.map(csvCell).join(',')).join('\r\n') + '\r\n';
 }
+
+/** The answer of GET /api/panels/:panelId/drawings. */
+export interface DrawingsView {
+  drawingNumber: string;
+  sheets: SheetRef[];
+  standard: string;
+  colourPractice: string;
+  warnings: string[];
+  bomTerminalBlocks: number;
+  terminals: TerminalRow[];
+  wires: WireRow[];
+  buckets: Array<{ tag: string; starter: string; scheme: string; firstRung: number; rungs: number; overload: string; interlocked: Array<[string, string]> }>;
+}

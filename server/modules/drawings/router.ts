@@ -1,13 +1,13 @@
 import { z } from 'zod';
 import { defineRoute } from '../../http/route-table';
 import { sendAttachment } from '../../http/attachment';
-import { toCsv, TERMINAL_COLUMNS, terminalRowsFor, WIRE_COLUMNS, wireRowsFor } from '../../../shared/drawings/panel-drawings';
-import { panelDrawings, panelNameplateSvg, schematicSvg, wiringWorkbook } from './service';
+import { toCsv, TERMINAL_COLUMNS, terminalRowsFor, WIRE_COLUMNS, wireRowsFor, type DrawingsView } from '../../../shared/drawings/panel-drawings';
+import { panelDrawings, panelNameplateSvg, schematicSvg, supplySvg, wiringWorkbook } from './service';
 import type { Response } from 'express';
 
 const ALL = ['admin', 'designer', 'estimator', 'engineer'] as const;
 const PanelId = z.object({ panelId: z.coerce.number().int().positive() });
-const TagQuery = z.object({ tag: z.string().trim().min(1).max(40).optional() }).strict();
+const TagQuery = z.object({ tag: z.string().trim().min(1).max(40).optional(), sheet: z.literal('supply').optional() }).strict();
 const base = (jobNumber: string, panelName: string) => `${jobNumber} ${panelName}`.trim();
 
 function sendSvg(res: Response, svg: string, name: string): undefined {
@@ -27,7 +27,7 @@ export const drawingRoutes = [
     access: ALL,
     summary: 'The panel drawings: sheet list, terminal plan, wire list, warnings',
     params: PanelId,
-    handler: async ({ user, params }) => {
+    handler: async ({ user, params }): Promise<DrawingsView> => {
       const { drawings } = await panelDrawings(user, params.panelId);
       return {
         drawingNumber: drawings.drawingNumber,
@@ -46,12 +46,13 @@ export const drawingRoutes = [
     method: 'get',
     path: '/api/panels/:panelId/drawings/schematic.svg',
     access: ALL,
-    summary: 'Control schematics as SVG: every sheet, or one bucket with ?tag=',
+    summary: 'Control schematics as SVG: every sheet, one bucket with ?tag=, or the supply sheet with ?sheet=supply',
     params: PanelId,
     query: TagQuery,
     handler: async ({ user, params, query, res }) => {
       const c = await panelDrawings(user, params.panelId);
-      return sendSvg(res, schematicSvg(c, query.tag), `${c.drawings.drawingNumber}${query.tag ? `-${query.tag}` : ''}-schematic.svg`);
+      const svg = query.sheet === 'supply' ? supplySvg(c) : schematicSvg(c, query.tag);
+      return sendSvg(res, svg, `${c.drawings.drawingNumber}${query.tag ? `-${query.tag}` : query.sheet ? '-supply' : ''}-schematic.svg`);
     },
   }),
   defineRoute({

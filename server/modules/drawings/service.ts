@@ -7,7 +7,8 @@ import { NotFoundError } from '../../../shared/errors';
 import { buildPanelDrawings, TERMINAL_COLUMNS, terminalRowsFor, WIRE_COLUMNS, wireRowsFor, type PanelDrawings } from '../../../shared/drawings/panel-drawings';
 import { bucketSheetSvg, nameplateSvg, schematicSheets, stackSheets, supplySheetSvg, terminalRefMap } from '../../../shared/drawings/svg';
 import type { PanelChecks } from '../../../shared/schemas/checks';
-import { computeChecks, CONTROL_VOLTS } from '../checks/service';
+import type { SubmittalDrawings } from '../submittal/drawing-pages';
+import { computeChecks, CONTROL_VOLTS, type ChecksContext } from '../checks/service';
 
 export interface DrawingContext {
   drawings: PanelDrawings;
@@ -17,7 +18,11 @@ export interface DrawingContext {
 }
 
 export async function panelDrawings(actor: CurrentUser, panelId: number, opts: { shopName?: string } = {}): Promise<DrawingContext> {
-  const ctx = await computeChecks(actor, panelId);
+  return drawingsFrom(await computeChecks(actor, panelId), opts);
+}
+
+/** The drawings from a panel-checks context already computed (the submittal reuses its own). */
+export function drawingsFrom(ctx: ChecksContext, opts: { shopName?: string } = {}): DrawingContext {
   const { checks, selections, lines } = ctx;
   const byTag = new Map(selections.map((s) => [s.tag, s]));
   const answersByTag = new Map(ctx.answers.map((a) => [String(a.tag ?? ''), a]));
@@ -53,6 +58,10 @@ export function schematicSvg(c: DrawingContext, tag?: string): string {
   return stackSheets([supplySheetSvg(c.drawings, c.mainText, c.cptText), ...schematicSheets(c.drawings)]);
 }
 
+export function supplySvg(c: DrawingContext): string {
+  return `<?xml version="1.0" encoding="UTF-8"?>\n${supplySheetSvg(c.drawings, c.mainText, c.cptText)}`;
+}
+
 export function panelNameplateSvg(c: DrawingContext, shopName?: string): string {
   const np = c.checks.nameplate.result;
   if (!np) throw new NotFoundError(c.checks.nameplate.reason ?? 'No nameplate for this panel yet');
@@ -85,4 +94,16 @@ export async function wiringWorkbook(c: DrawingContext): Promise<Buffer> {
   about.addRow([`Terminal blocks in the bill of materials: ${c.drawings.bomTerminalBlocks}; terminals in the plan: ${c.drawings.terminals.length}.`]);
   about.addRow(['Generated from the stored selections and the bill of materials; a qualified person verifies them before the panel is built.']);
   return Buffer.from(await wb.xlsx.writeBuffer());
+}
+
+/** The submittal's drawing pages: supply and schematic sheets, terminal plan, panel marking. */
+export function submittalDrawings(c: DrawingContext): SubmittalDrawings {
+  return {
+    drawingNumber: c.drawings.drawingNumber,
+    sheets: [supplySheetSvg(c.drawings, c.mainText, c.cptText), ...schematicSheets(c.drawings)],
+    terminals: c.drawings.terminals,
+    bomTerminalBlocks: c.drawings.bomTerminalBlocks,
+    colourPractice: c.drawings.colourPractice,
+    nameplateSvg: c.checks.nameplate.result ? panelNameplateSvg(c) : null,
+  };
 }

@@ -15,6 +15,7 @@ import { perWindingText } from '../../../shared/calc/scpd';
 import { motorLeadText, voltageDropText } from '../../../shared/calc/conductor';
 import { unbalanceText } from '../../../shared/standards/nema-mg1-voltage-unbalance';
 import { SCPD_WORDS } from '../../../shared/calc/scpd';
+import { writeDrawingPages, type SubmittalDrawings } from './drawing-pages';
 
 export interface SubmittalData {
   job: {
@@ -36,6 +37,8 @@ export interface SubmittalData {
   heat: HeatResult;
   controlPower: ControlPowerResult;
   connectionCards: Array<{ tag: string; card: ConnectionCard }>;
+  /** schematics, terminal plan and panel marking (drawing-pages.ts) */
+  drawings?: SubmittalDrawings;
 }
 
 export interface SubmittalPdfOptions {
@@ -411,6 +414,11 @@ export function writeSubmittalPdf(
     w.para(`To reverse: ${card.reverse}`);
     for (const c of card.cautions) w.para(`- ${c}`, 8);
     w.para(`${card.basis}. ${card.notes.join(' ')}`, 8);
+  }
+
+  if (data.drawings) {
+    writeDrawingPages(doc, data.drawings, { regular, bold });
+    doc.y = MARGIN;
   }
 
   // Cautions

@@ -4,6 +4,7 @@ import { ConflictError } from '../../../shared/errors';
 import { computeChecks } from '../checks/service';
 import { getRevision } from '../panels/review';
 import { writeSubmittalPdf, type SubmittalData } from './pdf';
+import { drawingsFrom, submittalDrawings } from '../drawings/service';
 
 const ALL = ['admin', 'designer', 'estimator', 'engineer'] as const;
 const PanelId = z.object({ panelId: z.coerce.number().int().positive() });
@@ -27,7 +28,8 @@ export const submittalRoutes = [
     summary: 'The panel submittal as a PDF (download)',
     params: PanelId,
     handler: async ({ user, params, res }) => {
-      const { checks, selections, rollup, panel } = await computeChecks(user, params.panelId);
+      const ctx = await computeChecks(user, params.panelId);
+      const { checks, selections, rollup, panel } = ctx;
       // a signed-off panel: its revision, and what the engineer acknowledged when signing (NEC 409.22)
       const revision = panel.status === 'signed_off' && panel.revisionNumber !== null ? await getRevision(user, panel.id, panel.revisionNumber) : null;
       const frozen = (revision?.snapshot as { sccr?: { acknowledged?: { finding: string; by: string; reason: string } | null } } | undefined)?.sccr;
@@ -59,6 +61,7 @@ export const submittalRoutes = [
         heat: checks.heat.result,
         controlPower: checks.controlPower.result,
         connectionCards: checks.connectionCards.flatMap((c) => (c.card ? [{ tag: c.tag, card: c.card }] : [])),
+        drawings: submittalDrawings(drawingsFrom(ctx)),
       };
       res.status(200);
       res.setHeader('content-type', 'application/pdf');
