@@ -16,7 +16,7 @@ export interface SubmittalDrawings {
 }
 
 const MARGIN = 24;
-const safe = (s: string) => pdfSafe(s.replace(/→/g, '->').replace(/↔/g, '<->').replace(/φ/g, 'ph').replace(/[✖⚠]/g, '!'));
+const safe = (s: string) => pdfSafe(s.replace(/ · /g, ', ').replace(/→/g, '->').replace(/↔/g, '<->').replace(/φ/g, 'ph').replace(/[✖⚠]/g, '!'));
 
 /** Adds the drawing pages to an open document; the caller's page style continues after them. */
 export function writeDrawingPages(doc: InstanceType<typeof PDFDocument>, d: SubmittalDrawings, fonts: { regular: string; bold: string }): void {
