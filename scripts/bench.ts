@@ -151,6 +151,8 @@ async function main() {
   console.log('(b) bill of materials …');
   const bomScript = fs.existsSync(path.join(root, 'scripts', 'bench-bom.ts'));
   const bom = bomScript ? tsx('bench-bom.ts') : { out: 'scripts/bench-bom.ts is missing', ok: false };
+  console.log('(b2) drawings …');
+  const drawings = tsx('bench-drawings.ts');
 
   console.log('(c, d) database, server and load …');
   const { ensureCluster, createDatabase, dropDatabase, serverUrl } = await import('./postgres');
@@ -235,6 +237,7 @@ async function main() {
     // ---- the table ----
     const e = { engine: num(engine.out, /selectPanel, 500 motors.*?median ([\d.]+) ms/), sizing: num(engine.out, /sizing functions alone.*?median ([\d.]+) ms/), ratio: num(engine.out, /ratio engine \/ sizing alone: ([\d.]+)x/) };
     const b = { build: num(bom.out, /build:\s+median ([\d.]+) ms/), xlsx: num(bom.out, /\.xlsx:\s+median ([\d.]+) ms/), kb: num(bom.out, /\.xlsx:.*?, (\d+) kB/), lines: num(bom.out, /lines: (\d+)/) };
+    const dr = { job: num(drawings.out, /drawings, 200-motor job.*?median ([\d.]+) ms/), bucket: num(drawings.out, /one bucket's schematic SVG.*?median ([\d.]+) ms/) };
     const maxQueries = Math.max(...Object.values(queries));
     const rows: Array<[string, string, string]> = [
       ['Selection engine, 500 motors (rules + sizing + roll-up)', e.engine === null ? 'n/a' : `${e.engine.toFixed(1)} ms`, ''],
@@ -242,6 +245,8 @@ async function main() {
       ['Ratio engine / sizing alone', e.ratio === null ? 'n/a' : `${e.ratio.toFixed(1)}×`, ''],
       [`Bill of materials build, 200 motors (${b.lines ?? '?'} lines)`, b.build === null ? 'n/a' : `${b.build.toFixed(1)} ms`, b.build === null ? '' : b.build < 1000 ? '< 1000 ms: met' : '< 1000 ms: NOT met'],
       ['Bill of materials .xlsx export, 200 motors', b.xlsx === null ? 'n/a' : `${b.xlsx.toFixed(1)} ms (${b.kb} kB)`, b.xlsx === null ? '' : b.xlsx < 2000 ? '< 2000 ms: met' : '< 2000 ms: NOT met'],
+      ['Drawings, 200-motor job (all panels, all sheets, terminal plan, wire list)', dr.job === null ? 'n/a' : `${dr.job.toFixed(0)} ms`, dr.job === null ? '' : dr.job < 1000 ? '< 1000 ms: met' : '< 1000 ms: NOT met'],
+      ['One bucket’s schematic SVG', dr.bucket === null ? 'n/a' : `${dr.bucket.toFixed(2)} ms`, dr.bucket === null ? '' : dr.bucket < 20 ? '< 20 ms: met' : '< 20 ms: NOT met'],
       [`GET /api/panels/:panelId (10 motors), ${CLIENTS} clients, ${DURATION_S} s: p50`, `${api.p50.toFixed(1)} ms`, ''],
       ['  p95', `${api.p95.toFixed(1)} ms`, api.p95 < BUDGET.p95Ms ? `< ${BUDGET.p95Ms} ms: met` : `< ${BUDGET.p95Ms} ms: NOT met`],
       ['  p99', `${api.p99.toFixed(1)} ms`, ''],
@@ -266,7 +271,8 @@ async function main() {
     console.log(`Load: autocannon in this process, the server in a child process (NODE_ENV=production), PostgreSQL on 127.0.0.1; one signed-in session per connection; ${WARMUP_S} s warm-up not counted.`);
     if (!engine.ok) console.log(`\nbench-engine failed:\n${engine.out}`);
     if (!bom.ok) console.log(`\nbench-bom failed:\n${bom.out}`);
-    const failed = api.p95 >= BUDGET.p95Ms || maxQueries > BUDGET.queries || api.non2xx > 0 || !engine.ok || !bom.ok;
+    if (!drawings.ok) console.log(`\nbench-drawings failed:\n${drawings.out}`);
+    const failed = api.p95 >= BUDGET.p95Ms || maxQueries > BUDGET.queries || api.non2xx > 0 || !engine.ok || !bom.ok || !drawings.ok;
     if (failed) process.exitCode = 1;
   } finally {
     if (child && child.exitCode === null) {

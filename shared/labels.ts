@@ -8,7 +8,7 @@
 import type { LoadInput } from './schemas/load';
 import type { Ratings } from './schemas/catalogue';
 import type { DecisionKey } from './engine/decisions';
-import { STARTER_TYPES } from './engine/decisions';
+import type { STARTER_TYPES } from './engine/decisions';
 
 type StarterType = (typeof STARTER_TYPES)[number];
 
@@ -32,6 +32,7 @@ export const ANSWER_LABELS: Record<keyof LoadInput, string> = {
   rotor: 'Rotor',
   singlePhaseType: 'Single-phase type',
   fedFrom: 'Fed from',
+  controlScheme: 'Control scheme',
   dcField: 'DC field',
   leads: 'Leads',
   connection: 'Winding connection',
@@ -237,6 +238,7 @@ export const ANSWER_VALUE_LABELS: Record<string, Record<string, string>> = {
   dcField: { shunt: 'Shunt', series: 'Series', compound: 'Compound' },
   torque: { variable: 'Variable torque', constant: 'Constant torque' },
   codeLetter: { none: 'none' },
+  controlScheme: { 'three-wire': 'Three-wire: stop/start with seal-in', 'two-wire': 'Two-wire: a maintained contact (restarts by itself)', 'hand-off-auto': 'Hand-off-auto selector' },
   fedFrom: { panel: "The panel's own transformer or DC supply", external: 'A source outside the panel' },
 };
 

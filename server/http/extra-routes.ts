@@ -6,7 +6,8 @@ import { estimatingRoutes } from '../modules/bom/router';
 import { backupRoutes } from '../modules/backup/router';
 import { checkRoutes } from '../modules/checks/router';
 import { settingsRoutes } from '../modules/settings/router';
+import { drawingRoutes } from '../modules/drawings/router';
 
 export function extraRoutes(): AnyRoute[] {
-  return [...panelRoutes, ...importRoutes, ...estimatingRoutes, ...backupRoutes, ...checkRoutes, ...settingsRoutes];
+  return [...panelRoutes, ...importRoutes, ...estimatingRoutes, ...backupRoutes, ...checkRoutes, ...settingsRoutes, ...drawingRoutes];
 }

@@ -348,7 +348,17 @@ function unmatchedLine(bucket: string, category: Category, quantity: number, nee
 // Control schemes (common practice)
 
 /** Door devices of each starter type's control scheme: [function, quantity]. Common practice. */
-export function pilotScheme(type: StarterType): Array<[string, number]> {
+export function pilotScheme(type: StarterType, scheme?: LoadSelection['controlScheme']): Array<[string, number]> {
+  // no scheme: a selection stored before the answer existed keeps the devices it was priced with
+  const drive = type === 'VFD' || type === 'dc-drive';
+  if (scheme === 'two-wire') return drive ? [['run-light', 1], ['fault-light', 1]] : [['run-light', type === 'FVR' || type === 'two-speed' ? 2 : 1]];
+  if (scheme === 'three-wire' && drive) return [['start', 1], ['stop', 1], ['run-light', 1], ['fault-light', 1]];
+  // hand-off-auto: Hand runs the coil on the selector's maintained contact; a two-direction starter keeps its
+  // stop and direction push-buttons for Hand (common practice)
+  if (scheme === 'hand-off-auto' && !drive) {
+    if (type === 'FVR' || type === 'two-speed') return [['hand-off-auto', 1], ...pilotScheme(type, 'three-wire')];
+    return [['hand-off-auto', 1], ['run-light', 1]];
+  }
   switch (type) {
     case 'FVR':
       return [['forward', 1], ['reverse', 1], ['stop', 1], ['run-light', 2]];
@@ -682,7 +692,7 @@ export function buildBom(input: BuildBomInput): BuildBomResult {
 
     // Control: fusing, door devices
     let bucketVa = nContactors * (contactor?.ratings.sealedVa ?? 0);
-    for (const [fn, qty] of pilotScheme(t)) {
+    for (const [fn, qty] of pilotScheme(t, s.controlScheme)) {
       const kind = PILOT_KIND[fn]!;
       const dev = b.add(tag, { category: 'pilot-device', kind, function: fn, ...(kind === 'pilot-light' ? { exactVolts: controlVolts } : {}) }, qty);
       if (dev?.ratings.va) {
@@ -696,7 +706,7 @@ export function buildBom(input: BuildBomInput): BuildBomResult {
     b.add(tag, { category: 'fuse-holder', fuseClass: 'CC', poles: 1, minAmps: controlFuseAmps, volts: controlVolts }, 1);
 
     // Terminals and wire
-    const leads = (s.supply === 'ac3' ? 3 : 2) * (t === 'wye-delta' || t === 'part-winding' ? 2 : 1) + (s.dc && s.dc.field !== 'series' ? 2 : 0);
+    const leads = (s.supply === 'ac3' ? 3 : 2) * (t === 'wye-delta' || t === 'part-winding' || t === 'two-speed' ? 2 : 1) + (s.dc && s.dc.field !== 'series' ? 2 : 0);
     const cond = parseConductor(s.conductor.size);
     if (cond) {
       // one terminal and one run per conductor of each parallel set; each terminal carries its share

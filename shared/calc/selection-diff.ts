@@ -45,6 +45,7 @@ const FIELDS: ReadonlyArray<readonly [string, string, Pick]> = [
   ['softStarter.bypass', 'Soft starter bypass', (s) => s.softStarter?.bypass ?? null],
   ['dc.fieldLossProtection', 'Field-loss protection', (s) => s.dc?.fieldLossProtection ?? null],
   ['dc.dynamicBraking', 'Dynamic braking', (s) => s.dc?.dynamicBraking ?? null],
+  ['controlScheme', 'Control scheme', (s) => s.controlScheme ?? 'three-wire'],
   ['unbalance.deratingFactor', 'Unbalance derating', (s) => s.unbalance?.deratingFactor ?? null],
   ['errors', 'Problems', (s) => (s.errors.length ? s.errors.join('; ') : null)],
 ];

@@ -43,6 +43,9 @@ export const ENVIRONMENTS = [
 
 export const SCPD_TYPES = ['inverse-time-breaker', 'instantaneous-trip-breaker', 'dual-element-fuse', 'non-time-delay-fuse'] as const;
 
+export const CONTROL_SCHEMES = ['three-wire', 'two-wire', 'hand-off-auto'] as const;
+export type ControlScheme = (typeof CONTROL_SCHEMES)[number];
+
 const CODE_LETTERS = ['A', 'B', 'C', 'D', 'E', 'F', 'G', 'H', 'J', 'K', 'L', 'M', 'N', 'P', 'R', 'S', 'T', 'U', 'V'] as const;
 
 const LoadObject = z
@@ -101,6 +104,9 @@ const LoadObject = z
     insideDelta: z.boolean().default(false),
     /** DC: quick stops wanted (dynamic braking) */
     quickStop: z.boolean().default(false),
+    /** control of the starter's coil: three-wire (stop/start with seal-in, no restart after a power loss),
+     *  two-wire (a maintained contact from a remote controller, restarts by itself) or hand-off-auto */
+    controlScheme: z.enum(CONTROL_SCHEMES, { error: 'controlScheme must be "three-wire", "two-wire" or "hand-off-auto"' }).default('three-wire'),
     /** rated input current of the chosen drive, for its input conductors (430.122(A)) */
     driveInputAmps: positive('driveInputAmps').max(5000).optional(),
     /** 430.52(C)(1) Exception 2: a higher protective-device limit, only with a reason */

@@ -168,6 +168,8 @@ export interface LoadSelection {
   };
   softStarter: null | { minAmps: number; insideDelta: boolean; bypass: boolean };
   dc: null | { fieldLossProtection: boolean; dynamicBraking: boolean; field: 'shunt' | 'series' | 'compound' };
+  /** how the coil is commanded (the motor answer; absent in selections stored before it existed: three-wire) */
+  controlScheme?: 'three-wire' | 'two-wire' | 'hand-off-auto';
   /** the site's voltage unbalance and the derating it calls for (absent: none given, or not a three-phase motor on the line) */
   unbalance?: UnbalanceResult | null;
   cautions: string[];

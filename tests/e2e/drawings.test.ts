@@ -118,4 +118,27 @@ describe('drawings in the browser', () => {
     await page.getByTestId('motor-leads').filter({ hasText: 'controller to motor: 6 × 6 AWG Cu (61.1 A ≥ 55.83 A, 58 % of FLC)' }).first().waitFor();
     expect(await page.getByTestId('motor-leads').count()).toBe(1); // only the wye-delta blower has them
   });
+  it('opens the control schematics of the reversing conveyor and the wye-delta blower with their interlocks', async () => {
+    const page = await openDemoPanel(browser);
+    await page.getByRole('navigation', { name: 'Panel sections' }).getByRole('link', { name: 'Drawings' }).click();
+    await page.waitForURL(/\/drawings$/);
+    const list = page.getByRole('navigation', { name: 'Sheet list' });
+    for (const [tag, coils] of [['C-201', ['F', 'R']], ['K-301', ['S', 'D']]] as const) {
+      await list.getByRole('button', { name: new RegExp(`${tag} control schematic`) }).click();
+      const sheet = page.getByRole('img', { name: new RegExp(`${tag} control schematic`) });
+      await sheet.waitFor();
+      // the mechanical interlock drawn, and each coil's NC interlock contact of the other contactor
+      expect(await sheet.locator('text.mech-interlock').count()).toBeGreaterThanOrEqual(1);
+      const xrefs = await sheet.locator('text.xref').allTextContents();
+      for (const c of coils) expect(xrefs.some((x) => new RegExp(`^\\d+${c}: .*NC \\d+`).test(x)), `${tag} ${c}: ${xrefs.join(' | ')}`).toBe(true);
+      expect(await sheet.getByText('IL', { exact: false }).count()).toBeGreaterThanOrEqual(2);
+      expect(await sheet.getByText('IEEE 315 / NEMA ICS 19', { exact: false }).count()).toBeGreaterThan(0);
+      await screenshot(page, `drawings-${tag}`);
+    }
+    await list.getByRole('button', { name: /Terminal plan/ }).click();
+    await page.getByText(/terminals, the \d+ terminal blocks of the bill of materials/).waitFor();
+    await list.getByRole('button', { name: /Panel marking/ }).click();
+    await page.getByRole('img', { name: /Panel marking/ }).locator('text').filter({ hasText: 'INDUSTRIAL CONTROL PANEL' }).waitFor();
+    await screenshot(page, 'drawings-nameplate');
+  });
 });

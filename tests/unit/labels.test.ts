@@ -4,7 +4,7 @@ import { readdirSync, readFileSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
-import { z } from 'zod';
+import type { z } from 'zod';
 import { DECISION_LABELS, RATING_LABELS, RATING_VALUE_LABELS, decisionValueLabel, fieldLabel, starterTypeLabel, ANSWER_LABELS } from '../../shared/labels';
 import { issueSentence } from '../../shared/plain-messages';
 import { isDecisionKey, STARTER_TYPES } from '../../shared/engine/decisions';

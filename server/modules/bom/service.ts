@@ -106,7 +106,7 @@ export async function planBom(organisationId: number, panel: Panel & { job: Job 
     if (swap) {
       // a swap stays only while its part is active and still meets what the line needs now
       const why = !item ? `${swap.code} is no longer in the catalogue` : !item.active ? `${item.code} is deactivated` : l.requirement ? lineShortfalls(item, l.requirement, lineServes(l.bucket)).join('; ') : `the line now needs ${l.requiredRatings ?? 'a part the catalogue cannot be searched for'}`;
-      if (item && item.active && l.requirement && !why) line = swappedLine(l, item, labour, swap.swapReason);
+      if (item?.active && l.requirement && !why) line = swappedLine(l, item, labour, swap.swapReason);
       else opts.onDroppedSwap?.(swap, why);
     }
     const kept = !opts.reprice && line.code ? frozen.get(`${line.bucket}\u0000${line.category}\u0000${line.code}`) : undefined;

@@ -383,6 +383,10 @@ export interface ChecksContext {
   rollup: PanelRollup | null;
   panel: Panel & { job: Job };
   shop: ShopSettings;
+  /** the bill of materials the checks read (stored, or built in memory) */
+  lines: BomLine[];
+  /** each motor's answers, in the panel's order */
+  answers: Array<Record<string, unknown>>;
 }
 
 /** The SCCR worksheet's input from a bill of materials, the catalogue, the selections and the tested combinations. */
@@ -490,7 +494,7 @@ export async function computeChecks(actor: CurrentUser, panelId: number): Promis
     connectionCards: views.map((l) => motorConnectionCard(l.id, l.answers, l.effective)),
     cautions: CHECK_CAUTIONS,
   };
-  return { checks, selections, rollup, panel, shop };
+  return { checks, selections, rollup, panel, shop, lines, answers: views.map((l) => l.answers as Record<string, unknown>) };
 }
 
 function revisionText(p: Panel): string {

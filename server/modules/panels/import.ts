@@ -64,6 +64,7 @@ export const IMPORT_COLUMNS: Column[] = [
   { header: 'starterPreference', key: 'starterPreference', kind: 'string', note: 'rvss, wye-delta or part-winding (when inrush must be limited)', example: '' },
   { header: 'insideDelta', key: 'insideDelta', kind: 'boolean', note: 'yes/no; soft starter inside the delta', example: 'no' },
   { header: 'quickStop', key: 'quickStop', kind: 'boolean', note: 'yes/no; DC quick stops (dynamic braking)', example: 'no' },
+  { header: 'controlScheme', key: 'controlScheme', kind: 'string', note: 'three-wire (default), two-wire or hand-off-auto', example: 'three-wire' },
   { header: 'driveInputAmps', key: 'driveInputAmps', kind: 'number', note: "the chosen drive's rated input current, A (430.122(A))", example: '' },
   { header: 'fedFrom', key: 'fedFrom', kind: 'string', note: 'a motor at another voltage than the supply: panel (a transformer or DC supply in the panel, the default) or external (a source outside the panel)', example: 'panel' },
   { header: 'conductorMaterial', key: 'conductorMaterial', kind: 'string', note: 'cu or al (cu by default)', example: 'cu', path: ['conductor', 'material'] },

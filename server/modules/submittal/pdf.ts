@@ -21,6 +21,7 @@ import { unbalanceText } from '../../../shared/standards/nema-mg1-voltage-unbala
 import { SCPD_WORDS } from '../../../shared/calc/scpd';
 import { oneLineElements, type MotorFeed, type OneLineElement } from '../../../shared/calc/one-line';
 import { drawingNumber } from '../../../shared/schemas/settings';
+import { writeDrawingPages, type SubmittalDrawings } from './drawing-pages';
 
 export interface SubmittalData {
   job: {
@@ -47,6 +48,8 @@ export interface SubmittalData {
   /** each control conductor against its protecting device (430.72(B)) */
   controlConductors?: ControlConductorCheck;
   connectionCards: Array<{ tag: string; card: ConnectionCard }>;
+  /** schematics, terminal plan and panel marking (drawing-pages.ts) */
+  drawings?: SubmittalDrawings;
 }
 
 export interface SubmittalPdfOptions {
@@ -637,6 +640,11 @@ export function writeSubmittalPdf(
     w.para(`To reverse: ${card.reverse}`);
     for (const c of card.cautions) w.para(`- ${c}`, 8);
     w.para(`${card.basis}. ${card.notes.join(' ')}`, 8);
+  }
+
+  if (data.drawings) {
+    writeDrawingPages(doc, data.drawings, { regular, bold });
+    doc.y = MARGIN;
   }
 
   // Cautions

@@ -7,6 +7,7 @@ import { getRevision } from '../panels/review';
 import { revisionsOf } from '../panels/repository';
 import { logoOf } from '../settings/service';
 import { writeSubmittalPdf, type SubmittalData } from './pdf';
+import { drawingsFrom, submittalDrawings } from '../drawings/service';
 
 const ALL = ['admin', 'designer', 'estimator', 'engineer'] as const;
 const PanelId = z.object({ panelId: idParamSchema });
@@ -30,7 +31,8 @@ export const submittalRoutes = [
     summary: 'The panel submittal as a PDF (download)',
     params: PanelId,
     handler: async ({ user, params, res }) => {
-      const { checks, selections, rollup, panel, shop } = await computeChecks(user, params.panelId);
+      const ctx = await computeChecks(user, params.panelId);
+      const { checks, selections, rollup, panel, shop } = ctx;
       // a signed-off panel: its revision, and what the engineer acknowledged when signing (NEC 409.22)
       const revision = panel.status === 'signed_off' && panel.revisionNumber !== null ? await getRevision(user, panel.id, panel.revisionNumber) : null;
       const signer = revision ? (await revisionsOf(panel.id)).find((r) => r.number === revision.number)?.approvedBy ?? null : null;
@@ -72,6 +74,7 @@ export const submittalRoutes = [
         controlPower: checks.controlPower.result,
         controlConductors: checks.controlConductors,
         connectionCards: checks.connectionCards.flatMap((c) => (c.card ? [{ tag: c.tag, card: c.card }] : [])),
+        drawings: submittalDrawings(drawingsFrom(ctx)),
       };
       res.status(200);
       res.setHeader('content-type', 'application/pdf');

@@ -14,10 +14,12 @@ export interface Cautions {
   protection: string[];
   /** after the circuit's own cautions: voltage drop, drive input, unbalance */
   circuit: string[];
+  /** last of all: how the motor is controlled (two-wire restarts by itself) */
+  control: string[];
 }
 
 export function cautions(load: Load, supply: Supply, starterType: StarterType, protection: ProtectionSizing, circuit: CircuitSizing, unbalance: UnbalanceResult | null): Cautions {
-  const out: Cautions = { protection: [], circuit: [] };
+  const out: Cautions = { protection: [], circuit: [], control: [] };
   const scpd = protection.scpd;
   if (scpd?.exception === 'exception-2') out.protection.push(`Branch protection raised under ${scpd.basis}: only where the motor will not start at the normal limit; the engineer must confirm.`);
 
@@ -42,6 +44,9 @@ export function cautions(load: Load, supply: Supply, starterType: StarterType, p
         `Voltage unbalance ${unbalance.percent} % at the site: the motor can deliver about ${unbalance.deratingFactor} × its rating${unbalance.deratedHp !== null ? ` = ${unbalance.deratedHp} hp` : ''} (NEMA MG 1 14.35); check the driven load against that.`,
       );
     }
+  }
+  if (load.controlScheme === 'two-wire') {
+    out.control.push('Two-wire control restarts the motor by itself when power returns: the engineer confirms an automatic restart is safe for this machine (NFPA 79 7.5, from memory).');
   }
   return out;
 }

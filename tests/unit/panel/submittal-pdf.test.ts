@@ -216,3 +216,32 @@ describe('PDF submittal: motors at another voltage', () => {
     expect(text).toMatch(/S-9 \(115 V single-phase\) needs 240\/120 V single-phase \(a transformer\): fed from a source outside the panel/);
   });
 });
+
+describe('PDF submittal drawing pages', () => {
+  it('adds a page per schematic sheet, the terminal plan and the panel marking', async () => {
+    const { buildBom } = await import('../../../shared/calc/bom');
+    const { buildPanelDrawings } = await import('../../../shared/drawings/panel-drawings');
+    const { nameplateSvg, schematicSheets, supplySheetSvg } = await import('../../../shared/drawings/svg');
+    const { seedCatalogue, seedLabourUnits } = await import('../bom/fixtures');
+    const d0 = data();
+    const supply = { volts: 480, phases: 3, hz: 60 };
+    const bom = buildBom({ panelName: 'MCP-1', selections: d0.selections, panel: d0.rollup, supply, enclosureType: '12', catalogue: seedCatalogue(), labourUnits: seedLabourUnits() });
+    const dr = buildPanelDrawings({ jobNumber: 'J-2041', jobName: 'Clarifier upgrade', panelName: 'MCP-1', revision: 'R1', date: '2025-03-14', supply, controlVolts: 120, bom: bom.lines, buckets: d0.selections.map((s) => ({ selection: s, card: null, jogging: false })) });
+    const drawings = {
+      drawingNumber: dr.drawingNumber,
+      sheets: [supplySheetSvg(dr, 'main', 'cpt'), ...schematicSheets(dr)],
+      terminals: dr.terminals,
+      bomTerminalBlocks: dr.bomTerminalBlocks,
+      colourPractice: dr.colourPractice,
+      nameplateSvg: nameplateSvg(d0.nameplate, { drawingNumber: dr.drawingNumber, fullLoadWorking: '' }),
+    };
+    const pages = (b: Buffer) => (b.toString('latin1').match(/\/Type \/Page\b/g) ?? []).length;
+    const without = await render({ compress: false });
+    const withDrawings = await render({ compress: false }, { ...d0, drawings });
+    // supply sheet + one per motor, at least one terminal-plan page, the marking page
+    expect(pages(withDrawings.buf) - pages(without.buf)).toBeGreaterThanOrEqual(drawings.sheets.length + 2);
+    const text = extractPdfText(withDrawings.buf);
+    for (const s of [`Terminal plan - ${dr.drawingNumber}`, `Panel marking - ${dr.drawingNumber}`, `${dr.terminals[0]!.ref}`, 'Cautions']) expect(text, s).toContain(s);
+    expect(dr.terminals.length).toBe(dr.bomTerminalBlocks);
+  });
+});

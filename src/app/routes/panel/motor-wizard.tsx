@@ -22,7 +22,7 @@ import type { CodeEdition } from '../../../../shared/standards/code-edition';
 const STEPS = ['Nameplate', 'Duty', 'Site & hazards', 'Protection'] as const;
 const STEP_FIELDS: Record<(typeof STEPS)[number], string[]> = {
   Nameplate: ['tag', 'description', 'supply', 'hp', 'kw', 'volts', 'hz', 'fla', 'serviceFactor', 'tempRiseC', 'lockedRotorWithstandS', 'codeLetter', 'design', 'energyEfficient', 'poles', 'rotor', 'singlePhaseType', 'dcField', 'leads', 'connection'],
-  Duty: ['duty', 'jogging', 'plugging', 'reversing', 'speedControl', 'turndown', 'torque', 'startingLimit', 'starterPreference', 'insideDelta', 'inertia', 'twoSpeed', 'quickStop'],
+  Duty: ['duty', 'jogging', 'plugging', 'reversing', 'speedControl', 'turndown', 'torque', 'startingLimit', 'starterPreference', 'insideDelta', 'inertia', 'twoSpeed', 'quickStop', 'controlScheme'],
   'Site & hazards': ['environment', 'reverseRotationHazard', 'critical', 'cableLengthFt', 'fedFrom'],
   Protection: ['scpdType', 'conductor'],
 };
@@ -217,6 +217,13 @@ export function Component() {
                 hint="Decides the overload trip class"
                 field={register('inertia')}
                 options={[['normal', 'Normal'], ['high', 'High'], ['very-high', 'Very high (large fans, centrifuges)']]}
+              />
+              <SelectField
+                label="Control scheme"
+                error={e.controlScheme?.message}
+                hint="Drawn on the control schematic; two-wire restarts by itself after a power loss"
+                field={register('controlScheme')}
+                options={[['three-wire', 'Three-wire: stop/start with seal-in'], ['two-wire', 'Two-wire: maintained contact from a remote controller'], ['hand-off-auto', 'Hand-off-auto selector']]}
               />
               <fieldset className="col-span-full flex flex-wrap gap-5 text-sm">
                 <legend className="mb-1 text-xs font-semibold uppercase text-ink-soft">Operation</legend>

@@ -1,0 +1,111 @@
+// The panel's shop drawings from the same context as the panel checks (effective selections, the bill of
+// materials the checks read, the nameplate values they computed): schematic sheets, terminal plan, wire list,
+// panel marking. Nothing is stored: a change to a motor changes every drawing with it.
+import ExcelJS from 'exceljs';
+import type { CurrentUser } from '../../../shared/schemas/auth';
+import { NotFoundError } from '../../../shared/errors';
+import { buildPanelDrawings, TERMINAL_COLUMNS, terminalRowsFor, WIRE_COLUMNS, wireRowsFor, type PanelDrawings } from '../../../shared/drawings/panel-drawings';
+import { bucketSheetSvg, nameplateSvg, schematicSheets, stackSheets, supplySheetSvg, terminalRefMap } from '../../../shared/drawings/svg';
+import type { PanelChecks } from '../../../shared/schemas/checks';
+import type { SubmittalDrawings } from '../submittal/drawing-pages';
+import { computeChecks, CONTROL_VOLTS, type ChecksContext } from '../checks/service';
+
+export interface DrawingContext {
+  drawings: PanelDrawings;
+  checks: PanelChecks;
+  mainText: string;
+  cptText: string;
+}
+
+export async function panelDrawings(actor: CurrentUser, panelId: number, opts: { shopName?: string } = {}): Promise<DrawingContext> {
+  return drawingsFrom(await computeChecks(actor, panelId), opts);
+}
+
+/** The drawings from a panel-checks context already computed (the submittal reuses its own). */
+export function drawingsFrom(ctx: ChecksContext, opts: { shopName?: string } = {}): DrawingContext {
+  const { checks, selections, lines } = ctx;
+  const byTag = new Map(selections.map((s) => [s.tag, s]));
+  const answersByTag = new Map(ctx.answers.map((a) => [String(a.tag ?? ''), a]));
+  const buckets = checks.connectionCards
+    .filter((c) => byTag.has(c.tag))
+    .map((c) => ({ selection: byTag.get(c.tag)!, card: c.card, jogging: answersByTag.get(c.tag)?.jogging === true }));
+  const drawings = buildPanelDrawings({
+    jobNumber: checks.job.number,
+    jobName: checks.job.name,
+    panelName: checks.panel.name,
+    revision: checks.panel.revision,
+    date: new Date().toISOString().slice(0, 10),
+    supply: { volts: checks.job.supplyVolts, phases: checks.job.supplyPhases, hz: checks.job.supplyHz },
+    controlVolts: CONTROL_VOLTS,
+    buckets,
+    bom: lines,
+    // the shop's name: a parameter until the shop's settings carry it (the drawings print a placeholder)
+    ...(opts.shopName?.trim() ? { shopName: opts.shopName.trim() } : {}),
+  });
+  const main = lines.find((l) => l.bucket === '(panel)' && (l.category === 'main-breaker' || l.category === 'main-disconnect'));
+  const cpt = lines.find((l) => l.category === 'control-transformer');
+  if (checks.motorsWithErrors.length > 0) drawings.warnings.push(`Not drawn until their selection is fixed: ${checks.motorsWithErrors.join(', ')}.`);
+  if (checks.bom.note) drawings.warnings.push(checks.bom.note);
+  return { drawings, checks, mainText: main ? `${main.code ?? ''} ${main.description}`.trim().slice(0, 60) : 'main device (see the bill of materials)', cptText: cpt ? cpt.description.slice(0, 50) : 'control power transformer' };
+}
+
+/** All sheets of the schematic, or one bucket's (404 for a tag not on the panel). */
+export function schematicSvg(c: DrawingContext, tag?: string): string {
+  if (tag !== undefined) {
+    if (!c.drawings.buckets.some((b) => b.tag === tag)) throw new NotFoundError(`No drawn motor ${tag} on this panel`);
+    return `<?xml version="1.0" encoding="UTF-8"?>\n${bucketSheetSvg(c.drawings, tag, terminalRefMap(c.drawings))}`;
+  }
+  return stackSheets([supplySheetSvg(c.drawings, c.mainText, c.cptText), ...schematicSheets(c.drawings)]);
+}
+
+export function supplySvg(c: DrawingContext): string {
+  return `<?xml version="1.0" encoding="UTF-8"?>\n${supplySheetSvg(c.drawings, c.mainText, c.cptText)}`;
+}
+
+export function panelNameplateSvg(c: DrawingContext, shopName?: string): string {
+  const np = c.checks.nameplate.result;
+  if (!np) throw new NotFoundError(c.checks.nameplate.reason ?? 'No nameplate for this panel yet');
+  return `<?xml version="1.0" encoding="UTF-8"?>\n${nameplateSvg(np, { ...(shopName ? { shopName } : {}), drawingNumber: c.drawings.drawingNumber, fullLoadWorking: fullLoadWorking(c.checks) })}`;
+}
+
+/** The 409.110(2) full-load current with its working. */
+export function fullLoadWorking(checks: PanelChecks): string {
+  const np = checks.nameplate.result;
+  if (!np) return '';
+  return `Full-load current ${np.fullLoadAmps} A: the sum of the motors’ table full-load currents (NEC 2023 430.6(A)(1)) and the other loads, NEC 2023 409.110(2).`;
+}
+
+export async function wiringWorkbook(c: DrawingContext): Promise<Buffer> {
+  const wb = new ExcelJS.Workbook();
+  wb.creator = 'Panelwright';
+  wb.created = new Date(0);
+  const add = (name: string, header: readonly string[], rows: unknown[][], widths: number[]) => {
+    const ws = wb.addWorksheet(name, { views: [{ state: 'frozen', ySplit: 1 }] });
+    ws.addRow([...header]).font = { bold: true };
+    for (const r of rows) ws.addRow(r.map((v) => (typeof v === 'string' && /^[=+\-@]/.test(v) ? `'${v}` : v)));
+    ws.columns.forEach((col, i) => {
+      col.width = widths[i] ?? 14;
+    });
+    ws.autoFilter = { from: { row: 1, column: 1 }, to: { row: 1, column: header.length } };
+  };
+  add('Terminals', TERMINAL_COLUMNS, terminalRowsFor(c.drawings), [10, 7, 7, 12, 8, 40, 8, 16, 34, 22, 12, 10, 10]);
+  add('Wires', WIRE_COLUMNS, wireRowsFor(c.drawings), [8, 20, 28, 22, 12, 10, 22]);
+  const about = wb.addWorksheet('About');
+  about.addRow([`Drawing ${c.drawings.drawingNumber}`]);
+  about.addRow([c.drawings.colourPractice]);
+  about.addRow([`Terminal blocks in the bill of materials: ${c.drawings.bomTerminalBlocks}; terminals in the plan: ${c.drawings.terminals.length}.`]);
+  about.addRow(['Generated from the stored selections and the bill of materials; a qualified person verifies them before the panel is built.']);
+  return Buffer.from(await wb.xlsx.writeBuffer());
+}
+
+/** The submittal's drawing pages: supply and schematic sheets, terminal plan, panel marking. */
+export function submittalDrawings(c: DrawingContext): SubmittalDrawings {
+  return {
+    drawingNumber: c.drawings.drawingNumber,
+    sheets: [supplySheetSvg(c.drawings, c.mainText, c.cptText), ...schematicSheets(c.drawings)],
+    terminals: c.drawings.terminals,
+    bomTerminalBlocks: c.drawings.bomTerminalBlocks,
+    colourPractice: c.drawings.colourPractice,
+    nameplateSvg: c.checks.nameplate.result ? panelNameplateSvg(c) : null,
+  };
+}

@@ -1,0 +1,85 @@
+// Shop drawings through the API on the demo panel "MCC-1 Pump hall" of job J-2041 (eight motors: a reversing
+// conveyor C-201, the wye-delta blower K-301, a drive, a soft starter, single-phase and DC motors).
+import { beforeAll, describe, expect, it } from 'vitest';
+import ExcelJS from 'exceljs';
+import { signInAs, testApp, type DemoRole, type Session } from '../setup/api';
+
+async function demoPanelId(s: Session): Promise<number> {
+  const jobs = (await s.agent.get('/api/jobs?q=J-2041').expect(200)).body as Array<{ id: number; number: string }>;
+  const job = jobs.find((j) => j.number === 'J-2041')!;
+  const panels = (await s.agent.get(`/api/jobs/${job.id}/panels`).expect(200)).body as Array<{ id: number; name: string }>;
+  return panels.find((p) => p.name === 'MCC-1 Pump hall')!.id;
+}
+
+function binary(res: unknown, cb: (err: Error | null, body: Buffer) => void) {
+  const stream = res as NodeJS.ReadableStream;
+  const chunks: Buffer[] = [];
+  stream.on('data', (c: Buffer) => chunks.push(c));
+  stream.on('end', () => cb(null, Buffer.concat(chunks)));
+}
+
+const csvRows = (text: string) => text.trim().split('\r\n').map((l) => l.split(','));
+
+describe('panel drawings', () => {
+  let engineer: Session;
+  let panelId: number;
+
+  beforeAll(async () => {
+    testApp();
+    engineer = await signInAs('engineer');
+    panelId = await demoPanelId(engineer);
+  });
+
+  it('serves every download at its path to every role of the shop', async () => {
+    for (const role of ['admin', 'designer', 'estimator', 'engineer'] as DemoRole[]) {
+      const s = role === 'engineer' ? engineer : await signInAs(role);
+      const base = `/api/panels/${panelId}/drawings`;
+      const svg = await s.agent.get(`${base}/schematic.svg`).expect(200);
+      expect(svg.headers['content-type']).toMatch(/^image\/svg\+xml/);
+      await s.agent.get(`${base}/nameplate.svg`).expect(200).expect('content-type', /svg/);
+      await s.agent.get(`${base}/wires.csv`).expect(200).expect('content-type', /text\/csv/);
+      await s.agent.get(`${base}/terminals.csv`).expect(200).expect('content-type', /text\/csv/);
+      await s.agent.get(`${base}/wiring.xlsx`).buffer(true).parse(binary).expect(200).expect('content-type', /spreadsheetml/);
+    }
+  });
+
+  it('draws one bucket with ?tag= and answers 404 for a tag not on the panel', async () => {
+    const one = await engineer.agent.get(`/api/panels/${panelId}/drawings/schematic.svg?tag=K-301`).buffer(true).parse(binary).expect(200);
+    const text = one.body.toString('utf8');
+    expect(text).toContain('K-301 Blower, screw compressor');
+    expect(text).toContain('Wye-delta, open transition');
+    expect(text).not.toContain('C-201 Screenings conveyor');
+    await engineer.agent.get(`/api/panels/${panelId}/drawings/schematic.svg?tag=NOPE-1`).expect(404);
+    const all = (await engineer.agent.get(`/api/panels/${panelId}/drawings/schematic.svg`).buffer(true).parse(binary).expect(200)).body.toString('utf8');
+    for (const tag of ['P-101', 'C-201', 'K-301', 'H-601']) expect(all).toContain(`${tag} `);
+    expect(all).toContain('IEEE 315 / NEMA ICS 19');
+  });
+
+  it('lists as many terminals as the bill of materials holds terminal blocks (one source)', async () => {
+    const bom = (await engineer.agent.get(`/api/panels/${panelId}/bom`).expect(200)).body as { lines: Array<{ category: string; quantity: number }> };
+    const blocks = bom.lines.filter((l) => l.category === 'terminal-block').reduce((n, l) => n + l.quantity, 0);
+    const d = (await engineer.agent.get(`/api/panels/${panelId}/drawings`).expect(200)).body as { terminals: Array<{ inBom: boolean }>; bomTerminalBlocks: number; sheets: Array<{ number: string }> };
+    expect(blocks).toBeGreaterThan(0);
+    expect(d.bomTerminalBlocks).toBe(blocks);
+    expect(d.terminals.length).toBe(blocks);
+    const csv = (await engineer.agent.get(`/api/panels/${panelId}/drawings/terminals.csv`).expect(200)).text;
+    expect(csvRows(csv).length - 1).toBe(blocks);
+    const wb = new ExcelJS.Workbook();
+    await wb.xlsx.load((await engineer.agent.get(`/api/panels/${panelId}/drawings/wiring.xlsx`).buffer(true).parse(binary).expect(200)).body);
+    expect(wb.getWorksheet('Terminals')!.rowCount - 1).toBe(blocks);
+    const wires = (await engineer.agent.get(`/api/panels/${panelId}/drawings/wires.csv`).expect(200)).text;
+    expect(wb.getWorksheet('Wires')!.rowCount).toBe(csvRows(wires).length);
+    expect(d.sheets.length).toBe(8 + 4);
+  });
+
+  it('prints the nameplate with the checks’ full-load current and SCCR (NEC 2023 409.110)', async () => {
+    const checks = (await engineer.agent.get(`/api/panels/${panelId}/checks`).expect(200)).body as { nameplate: { result: { fullLoadAmps: number; lines: Array<{ label: string; value: string }> } }; sccr: { panelSccrKa: number | null } };
+    const svg = (await engineer.agent.get(`/api/panels/${panelId}/drawings/nameplate.svg`).buffer(true).parse(binary).expect(200)).body.toString('utf8');
+    const flc = /class="np-full-load-current">([^<]+)</.exec(svg)?.[1];
+    const sccr = /class="np-short-circuit-current-rating">([^<]+)</.exec(svg)?.[1];
+    expect(flc).toBe(`${checks.nameplate.result.fullLoadAmps} A`);
+    expect(checks.sccr.panelSccrKa).not.toBeNull();
+    expect(sccr).toBe(`${checks.sccr.panelSccrKa} kA rms symmetrical, 480 V`);
+    expect(svg).toContain('[Shop name]');
+  });
+});
