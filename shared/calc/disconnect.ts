@@ -4,6 +4,7 @@
 
 import { nec, type CodeEdition } from '../standards/code-edition';
 import { disconnectMinAmps } from '../standards/nec-430-110-disconnect';
+import { round2 } from './round';
 
 export interface DisconnectResult {
   minAmps: number;
@@ -14,7 +15,7 @@ export interface DisconnectResult {
 export function motorDisconnect(input: { flcAmps: number; hp: number | null; driveInputAmps?: number }, edition: CodeEdition): DisconnectResult {
   const byMotor = disconnectMinAmps(input.flcAmps);
   const byDrive = input.driveInputAmps !== undefined ? disconnectMinAmps(input.driveInputAmps) : 0;
-  const minAmps = Math.round(Math.max(byMotor, byDrive) * 100) / 100;
+  const minAmps = round2(Math.max(byMotor, byDrive));
   const clauses = byDrive > byMotor ? '430.128, 430.109(A)' : '430.110(A), 430.109(A)';
   return { minAmps, minHp: input.hp, basis: nec(edition, clauses) };
 }

@@ -4,6 +4,8 @@
 //   top exposed 1.4 · top covered 0.7 · front, back and sides exposed 0.9 ·
 //   a side or back covered (against a wall or a neighbouring section) 0.5 · floor not counted.
 
+import { roundHalfUp } from './round';
+
 export type EnclosureMounting =
   | 'free-standing'
   | 'wall-mounted'
@@ -163,7 +165,7 @@ export interface HeatResult {
   notes: string[];
 }
 
-const round = (x: number, d = 2) => Math.round(x * 10 ** d) / 10 ** d;
+const round = roundHalfUp;
 
 export function calculateHeat(input: HeatInput): HeatResult {
   const k = input.kWPerM2K ?? K_PAINTED_STEEL;

@@ -2,6 +2,7 @@
 // (NEC 2023 409.20 conductors, 409.21 overcurrent protection, 430.110(C) disconnect for combined loads),
 // from the selection engine's PanelRollup.
 import type { PanelRollup } from '../schemas/selection';
+import { round2 } from './round';
 
 /** Common ampere sizes of enclosed / panel-mount disconnect switches (common practice). */
 export const DISCONNECT_SWITCH_SIZES = [30, 60, 100, 200, 400, 600, 800, 1200] as const;
@@ -67,7 +68,7 @@ export function panelFeeder(rollup: PanelRollup, otherLoadsAmps = 0): PanelFeede
       basis: 'NEC 2023 409.21 (rating per 430.62(A); ahead of the panel or a main device in it)',
     },
     mainDisconnect: {
-      minAmps: Math.round(minAmps * 100) / 100,
+      minAmps: round2(minAmps),
       sizeAmps,
       basis:
         'NEC 2023 430.110(C)(1): ≥ 115 % of the sum of the full-load currents; a fused switch also holds the supply fuses (common practice: next switch size)',

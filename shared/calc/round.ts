@@ -19,3 +19,6 @@ export function roundHalfUp(x: number, places = 2): number {
 
 /** Two decimals, half up: amps, volts, percentages and money. */
 export const round2 = (x: number): number => roundHalfUp(x, 2);
+
+/** Four decimals, half up: labour hours and quantities. */
+export const round4 = (x: number): number => roundHalfUp(x, 4);

@@ -9,6 +9,7 @@ import {
   type LetThrough,
   type SccrComponentType,
 } from '../standards/ul508a-sb4';
+import { round2 } from './round';
 
 /** What the SCCR check needs of a catalogue part (the lead wires the catalogue in). */
 export interface SccrComponentInput {
@@ -247,7 +248,7 @@ function costOf(c: SccrComponentInput | undefined): number | null {
 
 function diff(newCost: number | null, oldCost: number | null): number | null {
   if (newCost === null || oldCost === null) return null;
-  return Math.round((newCost - oldCost) * 100) / 100;
+  return round2(newCost - oldCost);
 }
 
 function replaceInInput(input: SccrInput, location: string, code: string, by: SccrComponentInput): SccrInput {
@@ -326,7 +327,7 @@ export function calculatePanelSccr(input: SccrInput): SccrResult {
         partCodes: [best.code],
       });
       working = replaceInInput(working, row.location, row.code, best);
-      allCost = allCost === null || d === null ? null : Math.round((allCost + d) * 100) / 100;
+      allCost = allCost === null || d === null ? null : round2(allCost + d);
       allCodes.push(best.code);
     }
     const weakCount = ev.rows.filter((r) => r.belowAvailable).length;

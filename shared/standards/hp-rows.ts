@@ -1,5 +1,7 @@
 // Shared helpers for tables keyed by motor horsepower.
 
+import { round2 } from '../calc/round';
+
 /** Horsepower rows are matched within this tolerance so that 1/3 hp typed as 0.333 finds its row. */
 const HP_TOLERANCE = 0.002;
 
@@ -20,6 +22,6 @@ export function formatHp(hp: number): string {
   ];
   if (frac < 0.002) return String(whole);
   const f = fractions.find(([v]) => Math.abs(v - frac) < 0.002);
-  if (!f) return String(Math.round(hp * 100) / 100);
+  if (!f) return String(round2(hp));
   return whole === 0 ? f[1] : `${whole}-${f[1]}`;
 }

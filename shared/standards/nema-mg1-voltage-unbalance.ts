@@ -5,6 +5,8 @@
 // figure (1 % 1.00, 2 % 0.95, 3 % 0.88, 4 % 0.82, 5 % 0.75), joined by straight lines: check them
 // against the published edition.
 
+import { round2, roundHalfUp } from '../calc/round';
+
 /** Up to this unbalance, %, the figure asks no derating; above it a drive's input is checked too (common practice). */
 export const UNBALANCE_NO_DERATING_PERCENT = 1;
 
@@ -15,7 +17,7 @@ export function percentUnbalance(v: readonly [number, number, number]): number {
   if (v.some((x) => !(x > 0))) throw new RangeError('three positive line voltages are needed');
   const avg = (v[0] + v[1] + v[2]) / 3;
   const maxDev = Math.max(...v.map((x) => Math.abs(x - avg)));
-  return Math.round(((100 * maxDev) / avg) * 100) / 100;
+  return round2((100 * maxDev) / avg);
 }
 
 const CURVE: ReadonlyArray<readonly [number, number]> = [
@@ -43,7 +45,7 @@ export function unbalanceDerating(percent: number): UnbalanceDerating {
     const [x0, y0] = CURVE[i - 1]!;
     if (percent <= x1) {
       const f = y0 + ((y1 - y0) * (percent - x0)) / (x1 - x0);
-      return { percent, factor: Math.round(f * 1000) / 1000, basis: UNBALANCE_BASIS };
+      return { percent, factor: roundHalfUp(f, 3), basis: UNBALANCE_BASIS };
     }
   }
   return { percent, factor: 0.75, basis: UNBALANCE_BASIS };

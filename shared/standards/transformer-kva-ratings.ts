@@ -2,6 +2,7 @@
 // list these; written from memory). Single-phase and three-phase units have their own series.
 
 import { OutsideTableError } from '../errors';
+import { round2 } from '../calc/round';
 
 export const TRANSFORMER_KVA_SOURCE = 'standard dry-type transformer kVA ratings (IEEE C57.12.01 / NEMA ST 20, from memory)';
 
@@ -13,6 +14,6 @@ export function nextStandardKva(kva: number, phases: 1 | 3): number {
   const list: readonly number[] = phases === 1 ? SINGLE_PHASE_KVA : THREE_PHASE_KVA;
   if (!(kva > 0) || !Number.isFinite(kva)) throw new OutsideTableError(TRANSFORMER_KVA_SOURCE, `${kva} kVA is not a load`);
   const r = list.find((v) => v >= kva - 1e-9);
-  if (r === undefined) throw new OutsideTableError(TRANSFORMER_KVA_SOURCE, `${Math.round(kva * 100) / 100} kVA is above the largest ${phases === 1 ? 'single' : 'three'}-phase rating listed (${list.at(-1)} kVA)`);
+  if (r === undefined) throw new OutsideTableError(TRANSFORMER_KVA_SOURCE, `${round2(kva)} kVA is above the largest ${phases === 1 ? 'single' : 'three'}-phase rating listed (${list.at(-1)} kVA)`);
   return r;
 }

@@ -7,12 +7,13 @@ import { CONTACTOR_SHARE, type Decisions } from '../decisions';
 import type { Assumptions } from './assumptions';
 import { emptyReport, round2, type StageContext, type StageReport } from './stage';
 import type { StarterType } from '../../schemas/selection';
+import { IEC_60947_4_1, iecMinOperationalCurrent, type IecCategory } from '../../standards/iec-60947-4-1-categories';
 
 export interface StarterSizing extends StageReport {
   nemaSize: string | null;
   /** the NEMA size table's basis, added to the starter's basis */
   nemaBasis: string | null;
-  iecCategory: 'AC-3' | 'AC-4' | null;
+  iecCategory: IecCategory | null;
   iecAmps: number | null;
 }
 
@@ -21,7 +22,7 @@ export function sizeStarter(ctx: StageContext, a: Assumptions, decisions: Decisi
   const out: StarterSizing = { ...report, nemaSize: null, nemaBasis: null, iecCategory: null, iecAmps: null };
   const contactor = CONTACTOR_SHARE[starterType];
   if (!a.flc || !ctx.ac || !contactor) return out;
-  const contactorAmps = Math.max(a.flc.flcAmps, a.flaAmps ?? 0);
+  const contactorAmps = iecMinOperationalCurrent(a.flc.flcAmps, a.flaAmps ?? 0);
   if (contactor.nemaSized) {
     try {
       const n = nemaStarterSize({ hp: a.hp, phases: ctx.phases, volts: ctx.load.volts, duty: decisions['starter.nemaDuty'] ?? 'normal', amps: contactorAmps }, ctx.edition);
@@ -41,7 +42,7 @@ export function sizeStarter(ctx: StageContext, a: Assumptions, decisions: Decisi
     decision: `starter.iecAmps = ${out.iecAmps} (${out.iecCategory})`,
     words: `Contactor ${out.iecAmps} A (${out.iecCategory})`,
     reason: share === 1 ? 'rated operational current in the category at least the motor current' : `each contactor carries ${share === 0.5 ? 'half' : '1/√3'} of the motor current`,
-    basis: 'IEC 60947-4-1 utilisation categories' + (share === 1 ? '' : ' (common practice)'),
+    basis: `${IEC_60947_4_1} utilisation categories${share === 1 ? '' : ' (common practice)'}`,
   });
   return out;
 }

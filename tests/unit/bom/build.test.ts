@@ -1,6 +1,8 @@
 // buildBom from hand-built selections: per-bucket devices, accessories, panel items, labour, unmatched lines.
 import { describe, expect, it } from 'vitest';
-import { buildBom, selectCooling, bomHeatLossW, type BuildBomInput } from '../../../shared/calc/bom';
+import { buildBom, indexCatalogue, selectItem, type BuildBomInput } from '../../../shared/calc/bom';
+import { calculateHeat } from '../../../shared/calc/heat';
+import { linesHeatLossW } from './heat-of-lines';
 import { BomLineSchema, PANEL_BUCKET, type BomLine } from '../../../shared/schemas/catalogue';
 import type { LoadSelection } from '../../../shared/schemas/selection';
 import { makePanel, makeSelection, seedCatalogue, seedLabourUnits, SUPPLY_480 } from './fixtures';
@@ -237,37 +239,47 @@ describe('panel items', () => {
   });
 });
 
-describe('cooling (panel-check step)', () => {
-  const enclosure = { heightMm: 1200, widthMm: 800, depthMm: 300, nemaType: '12' };
-  const base = { enclosure, mounting: 'wall' as const, catalogue: seedCatalogue(), labourUnits: seedLabourUnits() };
+describe('cooling (panel-check step): the one heat model of shared/calc/heat.ts, the catalogue match of the bill of materials', () => {
+  // IEC TR 60890 simplified method; wall-mounted: top 1.4, front and sides 0.9, back 0.5 (from memory)
+  const enclosure = { heightM: 1.2, widthM: 0.8, depthM: 0.3, mounting: 'wall-mounted' as const };
+  const index = indexCatalogue(seedCatalogue());
+  const heat = (heatLossW: number, ambientC: number) =>
+    calculateHeat({ enclosure, sources: [{ bucketTag: null, code: 'LOAD', description: 'panel losses', category: 'contactor', heatLossW }], ambientC, internalLimitC: 40 });
   it('no cooling while the surface sheds the heat', () => {
-    // A = 1.4·0.8·(1.2+0.3) + 1.8·0.3·1.2 = 2.328 m² (IEC TR 60890, from memory); 5.5 × 2.328 × 10 K = 128.04 W
-    const r = selectCooling({ ...base, heatLossW: 100, ambientC: 30, maxInternalC: 40 });
-    expect(r.surfaceM2).toBeCloseTo(2.328, 6);
-    expect(r.surfaceW).toBeCloseTo(128.04, 2);
-    expect(r.method).toBe('none');
-    expect(r.line).toBeNull();
+    // A = 1.4·0.8·0.3 + 0.9·1.2·0.8 + 0.5·1.2·0.8 + 2 × 0.9·1.2·0.3 = 2.328 m² (IEC TR 60890, from memory); 5.5 × 2.328 × 10 K = 128.04 W
+    const r = heat(100, 30);
+    expect(r.aeM2).toBeCloseTo(2.328, 6);
+    expect(r.surfaceDissipationW).toBeCloseTo(128.04, 2);
+    expect(r.exceeded).toBe(false);
+    expect(r.cooling).toBeNull();
   });
-  it('filter fan: cfm = 3.16 × W / ΔT°F (common practice), rated for the type', () => {
-    const r = selectCooling({ ...base, heatLossW: 500, ambientC: 30, maxInternalC: 40 });
-    expect(r.requiredCfm).toBeCloseTo((3.16 * 500) / 18, 2); // 87.78 cfm
-    expect(r.line!.code).toBe('PW-FF-100-12');
+  it('filter fan: cfm = 3.16 × excess W / ΔT°F (common practice), rated for the type', () => {
+    const r = heat(500, 30);
+    // excess 500 − 128.04 = 371.96 W over a 10 K (18 °F) rise: 3.16 × 371.96 / 18 = 65.30 cfm
+    expect(r.cooling!.fan!.cfm).toBeCloseTo((3.16 * (500 - 128.04)) / 18, 1);
+    const fan = selectItem(index, { category: 'cooling', kind: 'filter-fan', minCfm: r.cooling!.fan!.cfm, nemaType: '12' });
+    expect(fan!.code).toBe('PW-FF-100-12');
   });
   it('air conditioner when the ambient is above the allowed internal temperature', () => {
-    const r = selectCooling({ ...base, heatLossW: 500, ambientC: 45, maxInternalC: 40 });
-    expect(r.requiredCoolingW).toBeCloseTo(500 + 5.5 * 2.328 * 5, 2); // 564.02 W
-    expect(r.line!.code).toBe('PW-AC-0800-12');
+    const r = heat(500, 45);
+    expect(r.cooling!.fan).toBeNull(); // a fan cannot cool below the ambient
+    expect(r.cooling!.airConditionerW).toBeCloseTo(500 + 5.5 * 2.328 * 5, 1); // 564.02 W
+    const ac = selectItem(index, { category: 'cooling', kind: 'air-conditioner', minCoolingW: r.cooling!.airConditionerW, nemaType: '12' });
+    expect(ac!.code).toBe('PW-AC-0800-12');
   });
   it('Type 4X: no filter fan keeps the rating, so an air conditioner', () => {
-    const r = selectCooling({ ...base, enclosure: { ...enclosure, nemaType: '4X' }, heatLossW: 500, ambientC: 30, maxInternalC: 40 });
-    expect(r.method).toBe('air-conditioner');
-    expect(r.line!.code).toBe('PW-AC-0500-4X');
+    const r = heat(500, 30);
+    expect(selectItem(index, { category: 'cooling', kind: 'filter-fan', minCfm: r.cooling!.fan!.cfm, nemaType: '4X' })).toBeNull();
+    const ac = selectItem(index, { category: 'cooling', kind: 'air-conditioner', minCoolingW: r.cooling!.airConditionerW, nemaType: '4X' });
+    expect(ac!.code).toBe('PW-AC-0500-4X'); // 371.96 W
   });
   it('heat loss of lines counts each-units only', () => {
     const lines = bom([makeSelection()]).lines;
     const expected = lines.filter((l) => l.unit === 'ea').reduce((s, l) => s + l.quantity * l.heatLossW, 0);
-    expect(bomHeatLossW(lines)).toBeCloseTo(expected, 2);
-    expect(bomHeatLossW(lines)).toBeGreaterThan(0);
+    // wire by the foot carries no heat loss in the catalogue, so the heat model's total is the each-units'
+    expect(lines.filter((l) => l.unit === 'ft').every((l) => l.heatLossW === 0)).toBe(true);
+    expect(linesHeatLossW(lines)).toBeCloseTo(expected, 2);
+    expect(linesHeatLossW(lines)).toBeGreaterThan(0);
   });
 });
 

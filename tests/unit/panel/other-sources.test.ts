@@ -9,7 +9,8 @@ import { motorFeed, sourceNeed } from '../../../shared/calc/other-sources';
 import { panelNameplate } from '../../../shared/calc/nameplate';
 import { OutsideTableError } from '../../../shared/errors';
 import { motor, selector, supply480 } from '../engine/selector-setup';
-import { bomHeatLossW, buildBom } from '../../../shared/calc/bom';
+import { buildBom } from '../../../shared/calc/bom';
+import { linesHeatLossW } from '../bom/heat-of-lines';
 import { seedCatalogue, seedLabourUnits } from '../bom/fixtures';
 import { oneLineElements } from '../../../src/features/drawings/components/one-line';
 
@@ -181,10 +182,10 @@ describe('the bill of materials carries the sources (seed catalogue)', () => {
     const dc1 = bom.lines.filter((l) => l.bucket === 'DC1 DC supply');
     expect(dc1.map((l) => l.category)).toEqual(['dc-power-supply', 'inverse-time-breaker']);
     expect(dc1[0]?.code).toBe('PW-DS-240-025'); // ≥ 25 A at 240 V DC
-    const without = bomHeatLossW(bom.lines.filter((l) => l.bucket !== 'T1 transformer' && l.bucket !== 'DC1 DC supply'));
+    const without = linesHeatLossW(bom.lines.filter((l) => l.bucket !== 'T1 transformer' && l.bucket !== 'DC1 DC supply'));
     const transformerLoss = t1[0]?.heatLossW ?? 0;
     expect(transformerLoss).toBeGreaterThan(0);
-    expect(bomHeatLossW(bom.lines)).toBeGreaterThanOrEqual(without + transformerLoss);
+    expect(linesHeatLossW(bom.lines)).toBeGreaterThanOrEqual(without + transformerLoss);
   });
 });
 
