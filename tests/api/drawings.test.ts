@@ -80,6 +80,9 @@ describe('panel drawings', () => {
     expect(flc).toBe(`${checks.nameplate.result.fullLoadAmps} A`);
     expect(checks.sccr.panelSccrKa).not.toBeNull();
     expect(sccr).toBe(`${checks.sccr.panelSccrKa} kA rms symmetrical, 480 V`);
-    expect(svg).toContain('[Shop name]');
+    // the shop's own name from its settings (NEC 2023 409.110(1): the manufacturer's name), never a placeholder
+    const shop = (await engineer.agent.get('/api/settings').expect(200)).body as { name: string };
+    expect(svg).toContain(`class="np-manufacturer">${shop.name}<`);
+    expect(svg).not.toContain('[Shop name]');
   });
 });
