@@ -29,7 +29,7 @@ import { loadsOf } from '../panels/repository';
 import { loadView, requirePanel } from '../panels/service';
 import { bomOutOfDate, panelEnclosureType } from '../bom/service';
 import { storedBomLines } from './repository';
-import { motorConnectionCard } from './connection';
+import { motorConnectionCard } from '../../../shared/calc/checks/connection-card';
 import type { Panel } from '../../db/models/panel';
 import type { Job } from '../../db/models/job';
 import { shopSettingsOf } from '../settings/service';
