@@ -6,55 +6,21 @@ import { answerValueLabel, fieldLabel, starterTypeLabel } from '../../../shared/
 import { createRequire } from 'node:module';
 import fs from 'node:fs';
 import PDFDocument from 'pdfkit';
-import type { LoadSelection, PanelRollup } from '../../../shared/schemas/selection';
-import type { SccrResult } from '../../../shared/calc/sccr';
-import type { HeatResult } from '../../../shared/calc/heat';
-import type { ControlPowerResult } from '../../../shared/calc/control-power';
-import type { NameplateResult } from '../../../shared/calc/nameplate';
+import type { LoadSelection } from '../../../shared/schemas/selection';
 import { motorFeed, sourcesSummary } from '../../../shared/calc/other-sources';
-import type { ConnectionCard, LineName } from '../../../shared/calc/connections';
+import type { LineName } from '../../../shared/calc/connections';
 import { relayOf, relayWiringText } from '../../../shared/calc/overload';
 import { perWindingText } from '../../../shared/calc/scpd';
 import { motorLeadText, termination60Text, voltageDropText } from '../../../shared/calc/conductor';
-import type { ControlConductorCheck } from '../../../shared/calc/control-conductors';
 import { unbalanceText } from '../../../shared/standards/nema-mg1-voltage-unbalance';
 import { SCPD_WORDS } from '../../../shared/calc/scpd';
-import { oneLineElements, type MotorFeed, type OneLineElement } from '../../../shared/calc/one-line';
-import { drawingNumber } from '../../../shared/schemas/settings';
+import type { SubmittalData, SubmittalPdfOptions } from './pdf-data';
+import { BOTTOM, COPPER, MARGIN, SLATE, Writer, fmt, pdfSafe } from './pdf-writer';
+import { drawOneLine, oneLineHeight } from './pdf-one-line';
+import { openLogo, titleBlock, type TitleBlockData } from './pdf-title-block';
 
-export interface SubmittalData {
-  job: {
-    number: string;
-    name: string;
-    customer: string;
-    site: string;
-    availableFaultKa: number | null;
-    ambientC: number;
-    codeEdition: string;
-  };
-  /** `revision` as the reader sees it ("R1", "Draft after R0"); `revisionCode` for the drawing number ("R1", or "D" for a draft) */
-  panel: { name: string; revision: string; revisionCode?: string; /** ISO date */ date: string; enclosureType: string };
-  /** the shop that issues the submittal (shop settings) */
-  shop: { name: string; address?: string; /** PNG or JPEG */ logo?: Buffer | null; drawingNumberScheme: string };
-  selections: LoadSelection[];
-  rollup: PanelRollup;
-  nameplate: NameplateResult;
-  sccr: SccrResult;
-  /** the signed-off revision this submittal shows, with the engineer's acknowledgement of a rating below the site's fault current */
-  signOff?: { revision: string; date: string; /** the engineer who signed */ by?: string | null; acknowledged: { finding: string; by: string; reason: string } | null };
-  heat: HeatResult;
-  controlPower: ControlPowerResult;
-  /** each control conductor against its protecting device (430.72(B)) */
-  controlConductors?: ControlConductorCheck;
-  connectionCards: Array<{ tag: string; card: ConnectionCard }>;
-}
-
-export interface SubmittalPdfOptions {
-  /** false writes uncompressed content streams (tests read the text) */
-  compress?: boolean;
-  /** Barlow (embedded from @fontsource/barlow WOFF files) by default; Helvetica when asked or when missing */
-  font?: 'barlow' | 'helvetica';
-}
+export type { SubmittalData, SubmittalPdfOptions } from './pdf-data';
+export { pdfSafe } from './pdf-writer';
 
 export const SUBMITTAL_CAUTIONS = [
   'These results support the design of a qualified person and do not replace it; a qualified person verifies every value.',
@@ -63,26 +29,6 @@ export const SUBMITTAL_CAUTIONS = [
   'Check motor rotation before coupling the load.',
   'Never run a DC series motor unloaded.',
 ] as const;
-
-const SLATE = '#334155';
-const COPPER = '#b87333';
-const MARGIN = 48;
-/** height of the title block at the foot of every page; content stops above it */
-const TITLE_BLOCK_H = 58;
-const BOTTOM = MARGIN + TITLE_BLOCK_H + 8;
-
-/** Replace characters outside the fonts' Latin range. */
-export function pdfSafe(s: string): string {
-  return s
-    .replace(/≥/g, '>=')
-    .replace(/≤/g, '<=')
-    .replace(/Δ/g, 'delta ')
-    .replace(/√/g, 'sqrt')
-    .replace(/·/g, '*')
-    .replace(/−/g, '-')
-    .replace(/≈/g, '~')
-    .replace(/[^\x20-\x7E\u00A0-\u00FF\u2013\u2014\u2018\u2019\u201C\u201D\u2026\n]/g, '?');
-}
 
 function resolveBarlow(): { regular: string; bold: string } | null {
   try {
@@ -95,279 +41,11 @@ function resolveBarlow(): { regular: string; bold: string } | null {
   }
 }
 
-const fmt = (x: number | null | undefined, d = 1): string =>
-  x === null || x === undefined || !Number.isFinite(x) ? '-' : (Math.round(x * 10 ** d) / 10 ** d).toString();
-
-type Doc = InstanceType<typeof PDFDocument>;
-
-class Writer {
-  constructor(
-    readonly doc: Doc,
-    readonly regular: string,
-    readonly bold: string,
-  ) {}
-
-  get width(): number {
-    return this.doc.page.width - 2 * MARGIN;
-  }
-
-  ensure(h: number): void {
-    if (this.doc.y + h > this.doc.page.height - BOTTOM) this.doc.addPage();
-  }
-
-  heading(t: string): void {
-    this.ensure(60);
-    this.doc.moveDown(0.6);
-    this.doc.font(this.bold).fontSize(14).fillColor(SLATE).text(pdfSafe(t), MARGIN, this.doc.y);
-    const y = this.doc.y + 2;
-    this.doc.moveTo(MARGIN, y).lineTo(MARGIN + this.width, y).lineWidth(1).strokeColor(COPPER).stroke();
-    this.doc.moveDown(0.4);
-  }
-
-  sub(t: string): void {
-    this.ensure(40);
-    this.doc.moveDown(0.3);
-    this.doc.font(this.bold).fontSize(10.5).fillColor(SLATE).text(pdfSafe(t), MARGIN, this.doc.y);
-  }
-
-  para(t: string, size = 9): void {
-    this.ensure(20);
-    this.doc.font(this.regular).fontSize(size).fillColor(SLATE).text(pdfSafe(t), MARGIN, this.doc.y, { width: this.width });
-  }
-
-  kv(rows: Array<[string, string]>): void {
-    this.table(['Item', 'Value'], [0.35, 0.65], rows);
-  }
-
-  table(head: string[], fractions: number[], rows: string[][], highlight?: (i: number) => boolean): void {
-    const widths = fractions.map((f) => f * this.width);
-    const size = 8;
-    const rowH = (cells: string[], font: string): number => {
-      this.doc.font(font).fontSize(size);
-      return Math.max(...cells.map((c, i) => this.doc.heightOfString(pdfSafe(c), { width: widths[i] - 6 }))) + 6;
-    };
-    const drawRow = (cells: string[], font: string, fill?: string): void => {
-      const h = rowH(cells, font);
-      if (this.doc.y + h > this.doc.page.height - BOTTOM) this.doc.addPage();
-      const y = this.doc.y;
-      if (fill) this.doc.rect(MARGIN, y, this.width, h).fill(fill);
-      let x = MARGIN;
-      this.doc.font(font).fontSize(size).fillColor(SLATE);
-      cells.forEach((c, i) => {
-        this.doc.text(pdfSafe(c), x + 3, y + 3, { width: widths[i] - 6 });
-        x += widths[i];
-      });
-      this.doc.moveTo(MARGIN, y + h).lineTo(MARGIN + this.width, y + h).lineWidth(0.4).strokeColor('#cbd5e1').stroke();
-      this.doc.x = MARGIN;
-      this.doc.y = y + h;
-    };
-    drawRow(head, this.bold, '#e2e8f0');
-    rows.forEach((r, i) => {
-      drawRow(r, highlight?.(i) ? this.bold : this.regular, highlight?.(i) ? '#f3e3d3' : undefined);
-    });
-    this.doc.moveDown(0.3);
-  }
-}
-
 function starterText(s: LoadSelection): string {
   return `${starterTypeLabel(s.starter.type)}${s.starter.nemaSize !== null ? ` size ${s.starter.nemaSize}` : ''}`;
 }
 
-
-const STEP = 36;
-
-/** The text cut to fit `width` on one line at the current font and size, with an ellipsis when cut. */
-function fitLine(doc: Doc, text: string, width: number): string {
-  const t = pdfSafe(text);
-  if (doc.widthOfString(t) <= width) return t;
-  let n = t.length;
-  while (n > 0 && doc.widthOfString(`${t.slice(0, n).trimEnd()}…`) > width) n--;
-  return `${t.slice(0, n).trimEnd()}…`;
-}
-
-/** One symbol of a one-line, on the vertical at x from y to y + STEP (our own plain style). */
-function drawSymbol(doc: Doc, e: OneLineElement, x: number, y: number, bold: string): void {
-  const mid = y + STEP / 2;
-  const wire = (y1: number, y2: number) => doc.moveTo(x, y1).lineTo(x, y2);
-  doc.save().lineWidth(1.2).strokeColor(SLATE);
-  switch (e.kind) {
-    case 'bus':
-      doc.moveTo(x - 26, y + 14).lineTo(x + 26, y + 14).lineWidth(4).strokeColor(COPPER).stroke();
-      doc.lineWidth(1.2).strokeColor(SLATE);
-      wire(y + 14, y + STEP).stroke();
-      break;
-    case 'disconnect':
-      wire(y, mid - 8).stroke();
-      doc.moveTo(x, mid - 8).lineTo(x + 10, mid + 7).stroke();
-      wire(mid + 8, y + STEP).stroke();
-      doc.circle(x, mid - 8, 1.6).fill(SLATE);
-      break;
-    case 'fuse':
-      wire(y, y + STEP).stroke();
-      doc.rect(x - 5, mid - 11, 10, 22).fillAndStroke('#ffffff', SLATE);
-      break;
-    case 'breaker':
-      wire(y, mid - 10).stroke();
-      doc.moveTo(x, mid - 10).quadraticCurveTo(x + 13, mid, x, mid + 10).stroke();
-      wire(mid + 10, y + STEP).stroke();
-      break;
-    case 'contactor': {
-      const poles = e.poles ?? ['M'];
-      const gap = 22;
-      const x0 = x - ((poles.length - 1) * gap) / 2;
-      const x1 = x0 + (poles.length - 1) * gap;
-      wire(y, y + 6).stroke();
-      wire(y + STEP - 6, y + STEP).stroke();
-      if (poles.length > 1) {
-        doc.moveTo(x0, y + 6).lineTo(x1, y + 6).stroke();
-        doc.moveTo(x0, y + STEP - 6).lineTo(x1, y + STEP - 6).stroke();
-      }
-      poles.forEach((p, i) => {
-        const px = x0 + i * gap;
-        doc.moveTo(px, y + 6).lineTo(px, mid - 4).stroke();
-        doc.moveTo(px - 6, mid - 4).lineTo(px + 6, mid - 4).stroke();
-        doc.moveTo(px - 6, mid + 4).lineTo(px + 6, mid + 4).stroke();
-        doc.moveTo(px, mid + 4).lineTo(px, y + STEP - 6).stroke();
-        doc.font(bold).fontSize(6.5).fillColor(SLATE).text(pdfSafe(p), px + 3, y + 8, { lineBreak: false });
-      });
-      if (e.interlocked && poles.length > 1) doc.moveTo(x0, mid).lineTo(x1, mid).dash(2, { space: 2 }).strokeColor(COPPER).stroke().undash();
-      break;
-    }
-    case 'overload':
-      wire(y, mid - 7).stroke();
-      doc.moveTo(x, mid - 7).lineTo(x + 6, mid - 7).lineTo(x + 6, mid).lineTo(x - 6, mid).lineTo(x - 6, mid + 7).lineTo(x, mid + 7).stroke();
-      wire(mid + 7, y + STEP).stroke();
-      break;
-    case 'vfd':
-    case 'soft-starter':
-      wire(y, mid - 11).stroke();
-      doc.rect(x - 17, mid - 11, 34, 22).stroke();
-      doc.font(bold).fontSize(7).fillColor(COPPER).text(e.kind === 'vfd' ? 'VFD' : 'RVSS', x - 17, mid - 3.5, { width: 34, align: 'center', lineBreak: false });
-      wire(mid + 11, y + STEP).stroke();
-      break;
-    case 'transformer':
-      wire(y, mid - 14).stroke();
-      doc.circle(x, mid - 6, 8).fillAndStroke('#ffffff', SLATE);
-      doc.circle(x, mid + 6, 8).lineWidth(1.2).stroke(COPPER);
-      doc.strokeColor(SLATE);
-      wire(mid + 14, y + STEP).stroke();
-      break;
-    case 'dc-supply':
-      wire(y, mid - 11).stroke();
-      doc.rect(x - 17, mid - 11, 34, 22).stroke();
-      doc.moveTo(x - 17, mid + 11).lineTo(x + 17, mid - 11).lineWidth(0.6).stroke();
-      doc.font(bold).fontSize(6).fillColor(COPPER).text('AC', x - 15, mid - 9, { lineBreak: false }).text('DC', x + 4, mid + 3, { lineBreak: false });
-      doc.lineWidth(1.2);
-      wire(mid + 11, y + STEP).stroke();
-      break;
-    case 'motor':
-      wire(y, mid - 12).stroke();
-      doc.circle(x, mid, 12).lineWidth(1.4).stroke(COPPER);
-      doc.font(bold).fontSize(10).fillColor(SLATE).text('M', x - 12, mid - 5, { width: 24, align: 'center', lineBreak: false });
-      break;
-  }
-  doc.restore();
-}
-
-const oneLineHeight = (s: LoadSelection, feed: MotorFeed = null) => oneLineElements(s, feed).length * STEP + 8;
-
-/** A bucket's one-line drawn with lines and symbols, supply at the top, labels to the right. */
-function drawOneLine(w: Writer, s: LoadSelection, feed: MotorFeed): void {
-  const elements = oneLineElements(s, feed);
-  const height = oneLineHeight(s, feed);
-  w.ensure(height + 24);
-  w.sub(s.tag);
-  const doc = w.doc;
-  const top = doc.y + 4;
-  const x = MARGIN + 40;
-  elements.forEach((e, i) => {
-    const y = top + i * STEP;
-    drawSymbol(doc, e, x, y, w.bold);
-    doc.font(w.bold).fontSize(8.5).fillColor(SLATE);
-    doc.text(fitLine(doc, e.label, w.width - 90), x + 44, y + STEP / 2 - 9, { lineBreak: false });
-    if (e.detail) {
-      doc.font(w.regular).fontSize(7);
-      doc.text(fitLine(doc, e.detail.replace(/ · /g, '; '), w.width - 90), x + 44, y + STEP / 2 + 1, { lineBreak: false });
-    }
-  });
-  doc.x = MARGIN;
-  doc.y = top + height;
-}
-
-export interface TitleBlockData {
-  shop: SubmittalData['shop'];
-  job: { number: string; name: string };
-  panel: { name: string; revision: string; revisionCode: string };
-  signOff: { by: string | null; date: string } | null;
-}
-
-/**
- * The title block at the foot of one page: shop (and logo), job, panel, revision, drawing number from
- * the shop's scheme, page n of N, and who signed off when. Drawn on every page once the document is
- * complete (pages are buffered), so a page added anywhere gets it too.
- */
-function titleBlock(doc: Doc, t: TitleBlockData, fonts: { regular: string; bold: string }, page: number, pages: number, logo: unknown): void {
-  const bottomMargin = doc.page.margins.bottom;
-  doc.page.margins.bottom = 0; // text in the foot must not start a new page
-  const x0 = MARGIN;
-  const w = doc.page.width - 2 * MARGIN;
-  const y0 = doc.page.height - MARGIN - TITLE_BLOCK_H;
-  const cols = [0.27, 0.26, 0.1, 0.16, 0.21].map((f) => f * w);
-  doc.save();
-  doc.rect(x0, y0, w, TITLE_BLOCK_H).lineWidth(0.8).strokeColor(SLATE).stroke();
-  let x = x0;
-  /** `shrink`: smaller type (down to 6.5 pt) before the text is cut */
-  const cell = (i: number, label: string, lines: Array<{ text: string; bold?: boolean; shrink?: boolean }>) => {
-    if (i > 0) doc.moveTo(x, y0).lineTo(x, y0 + TITLE_BLOCK_H).lineWidth(0.5).strokeColor(SLATE).stroke();
-    const cw = cols[i];
-    doc.font(fonts.regular).fontSize(6).fillColor('#64748b').text(label.toUpperCase(), x + 5, y0 + 5, { lineBreak: false });
-    let y = y0 + 15;
-    for (const l of lines) {
-      let size = l.bold ? 8.5 : 7.5;
-      doc.font(l.bold ? fonts.bold : fonts.regular).fontSize(size).fillColor(SLATE);
-      while (l.shrink && size > 6.5 && doc.widthOfString(pdfSafe(l.text)) > cw - 10) doc.fontSize((size -= 0.5));
-      doc.text(fitLine(doc, l.text, cw - 10), x + 5, y, { lineBreak: false });
-      y += l.bold ? 11 : 10;
-    }
-    x += cw;
-  };
-  const address = (t.shop.address ?? '').split(/\r?\n|,\s*/).map((a) => a.trim()).filter(Boolean);
-  let shopX = 0;
-  if (logo) {
-    try {
-      doc.image(logo as Buffer, x0 + 5, y0 + 14, { fit: [36, 36] });
-      shopX = 42;
-    } catch {
-      shopX = 0; // an image pdfkit cannot read: the name stands alone
-    }
-  }
-  x += shopX;
-  cols[0] -= shopX;
-  cell(0, 'Shop', [{ text: t.shop.name, bold: true, shrink: true }, ...address.slice(0, 1).map((text) => ({ text })), ...(address.length > 1 ? [{ text: address.slice(1).join(', ') }] : [])]);
-  cell(1, 'Job / panel', [{ text: `Job ${t.job.number}`, bold: true }, { text: t.job.name }, { text: `Panel ${t.panel.name}` }]);
-  cell(2, 'Revision', [{ text: t.panel.revisionCode, bold: true }, { text: t.signOff ? '' : 'draft' }]);
-  cell(3, 'Signed off', t.signOff ? [{ text: t.signOff.by ?? 'engineer', bold: true }, { text: `on ${t.signOff.date}` }] : [{ text: 'Not signed off', bold: true }]);
-  cell(4, 'Drawing', [{ text: '' }, { text: `Page ${page} of ${pages}` }]);
-  // the drawing number whole on one line: smaller type for a long one, never wrapped or cut
-  const number = pdfSafe(drawingNumber(t.shop.drawingNumberScheme, { job: t.job.number, panel: t.panel.name, rev: t.panel.revisionCode, sheet: page }));
-  let size = 8.5;
-  doc.font(fonts.bold);
-  while (size > 5 && doc.fontSize(size).widthOfString(number) > cols[4] - 10) size -= 0.5;
-  doc.fillColor(SLATE).text(number, x - cols[4] + 5, y0 + 15, { lineBreak: false });
-  doc.restore();
-  doc.page.margins.bottom = bottomMargin;
-}
-
 const LINES: LineName[] = ['L1', 'L2', 'L3', 'A+', 'A-'];
-
-/** The logo read once (pdfkit embeds an opened image once however many pages show it); null when unreadable. */
-function openLogo(doc: Doc, logo: Buffer): unknown {
-  try {
-    return (doc as unknown as { openImage(src: Buffer): unknown }).openImage(logo);
-  } catch {
-    return null;
-  }
-}
 
 /** Write the submittal to the stream; resolves when the stream has the whole document. */
 export function writeSubmittalPdf(
