@@ -10,7 +10,7 @@ import { readSeedCatalogue } from '../server/db/seeders/catalogue';
 import { createSelector } from '../shared/engine/selector';
 import type { LoadInput, SelectionInput } from '../shared/schemas/load';
 import { loadRuleFiles } from '../server/engine/rule-files';
-import { motorConnectionCard } from '../server/modules/checks/connection';
+import { motorConnectionCard } from '../shared/calc/checks/connection-card';
 import { buildPanelDrawings, terminalRowsFor, toCsv, TERMINAL_COLUMNS, WIRE_COLUMNS, wireRowsFor } from '../shared/drawings/panel-drawings';
 import { bucketSheetSvg, schematicSheets, supplySheetSvg, terminalRefMap } from '../shared/drawings/svg';
 import { BOM_MIX, median, motorLoads, timeRuns } from './bench-data';

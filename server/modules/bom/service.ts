@@ -148,6 +148,23 @@ export async function storedBom(actor: CurrentUser, panel: Panel & { job: Job })
   };
 }
 
+/** The one bill of materials of a panel for the checks and the submittal (nothing written). */
+export interface CurrentBom {
+  lines: BomLine[];
+  /** the stored lines, or with none stored the lines a rebuild would store, built in memory */
+  source: 'stored' | 'in-memory';
+  /** stored lines that a rebuild now would change (other parts or quantities) */
+  stale: boolean;
+}
+
+/** The stored lines and whether they are still current; with none stored, the lines a rebuild would store (the same plan). */
+export async function currentBom(organisationId: number, panel: Panel & { job: Job }): Promise<CurrentBom> {
+  const rows = await BomLineRow.findAll({ where: { organisationId, panelId: panel.id }, order: [['position', 'ASC'], ['id', 'ASC']] });
+  const stored = rows.map((r) => r.line as unknown as BomLine);
+  if (stored.length === 0) return { lines: await planBom(organisationId, panel, []), source: 'in-memory', stale: false };
+  return { lines: stored, source: 'stored', stale: await bomOutOfDate(organisationId, panel, stored) };
+}
+
 /** Whether the stored lines differ from what a rebuild would store now (motors, overrides or the catalogue changed). */
 export async function bomOutOfDate(organisationId: number, panel: Panel & { job: Job }, lines: readonly BomLine[]): Promise<boolean> {
   if (!panel.bomGeneratedAt) return true;

@@ -8,7 +8,8 @@ import { buildPanelDrawings, TERMINAL_COLUMNS, terminalRowsFor, WIRE_COLUMNS, wi
 import { bucketSheetSvg, nameplateSvg, schematicSheets, stackSheets, supplySheetSvg, terminalRefMap } from '../../../shared/drawings/svg';
 import type { PanelChecks } from '../../../shared/schemas/checks';
 import type { SubmittalDrawings } from '../submittal/drawing-pages';
-import { computeChecks, CONTROL_VOLTS, type ChecksContext } from '../checks/service';
+import { computeChecks, type ChecksContext } from '../checks/service';
+import { CONTROL_VOLTS } from '../../../shared/calc/checks/control-power-check';
 
 export interface DrawingContext {
   drawings: PanelDrawings;

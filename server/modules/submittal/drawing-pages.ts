@@ -3,7 +3,7 @@
 import SVGtoPDF from 'svg-to-pdfkit';
 import type PDFDocument from 'pdfkit';
 import type { TerminalRow } from '../../../shared/drawings/panel-drawings';
-import { pdfSafe } from './pdf';
+import { pdfSafe } from './pdf-writer';
 
 export interface SubmittalDrawings {
   drawingNumber: string;

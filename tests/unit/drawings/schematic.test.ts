@@ -6,7 +6,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { createSelector } from '../../../shared/engine/selector';
 import { loadRuleFiles } from '../../../server/engine/rule-files';
 import { buildBom } from '../../../shared/calc/bom';
-import { motorConnectionCard } from '../../../server/modules/checks/connection';
+import { motorConnectionCard } from '../../../shared/calc/checks/connection-card';
 import { buildPanelDrawings, drawingNumber, terminalRowsFor, toCsv, TERMINAL_COLUMNS, wireNumberUse, type PanelDrawings } from '../../../shared/drawings/panel-drawings';
 import { railPaths, type PlacedElement } from '../../../shared/drawings/ladder';
 import { bucketSheetSvg, nameplateSvg, schematicSheets } from '../../../shared/drawings/svg';

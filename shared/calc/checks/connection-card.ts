@@ -1,8 +1,8 @@
 // A motor's lead connection card from its answers (lead count, connection, voltage, single-phase type,
 // DC field) and its selection (starter type). The card itself comes from shared/calc/connections.
-import { connectionCard, type ConnectionRequest } from '../../../shared/calc/connections';
-import type { LoadSelection } from '../../../shared/schemas/selection';
-import type { MotorConnectionCard } from '../../../shared/schemas/checks';
+import { connectionCard, type ConnectionRequest } from '../connections';
+import type { LoadSelection } from '../../schemas/selection';
+import type { MotorConnectionCard } from '../../schemas/checks';
 
 
 /** Dual-voltage three-phase motors are wound 230/460 V: at 380 V or more the high-voltage connection (common practice). */
