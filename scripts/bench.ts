@@ -47,6 +47,7 @@ const num = (out: string, re: RegExp): number | null => {
 async function serve(url: string) {
   const { connectDatabase } = await import('../server/db/sequelize');
   const { createApp } = await import('../server/app');
+  const { changeFeed } = await import('../server/db/change-feed');
   connectDatabase(url, { poolMax: 20 });
   // every statement this server sends (sessions, people, panels), read by the bench over IPC
   let statements = 0;
@@ -59,6 +60,7 @@ async function serve(url: string) {
   process.on('message', (m) => {
     if (m === 'statements') process.send?.({ statements });
   });
+  void changeFeed().start(url);
   const app = createApp({ databaseUrl: url, sessionSecret: 'bench-session-secret-not-for-use' });
   const server = app.listen(0, '127.0.0.1', () => console.log(`PORT ${(server.address() as AddressInfo).port}`));
   process.on('SIGTERM', () => {

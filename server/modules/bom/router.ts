@@ -1,10 +1,9 @@
 import type { Response } from 'express';
 import { z } from 'zod';
-import { defineRoute, type AnyRoute } from '../../http/route-table';
+import { defineRoute } from '../../http/route-table';
 import { attachment } from '../../http/attachment';
 import { IdParamSchema } from '../../../shared/schemas/auth';
 import { BomCategorySchema, PartCodeSchema, UnitSchema } from '../../../shared/schemas/catalogue';
-import { catalogueRoutes } from '../catalogue/router';
 import { requirePanel } from '../panels/service';
 import { writeBomCsv, writeBomWorkbook, type BomExportJob, type BomExportPanel } from './export';
 import * as service from './service';
@@ -142,6 +141,3 @@ export const bomRoutes = [
     handler: async ({ user, params, res }) => stream(res, await service.jobExport(user, params.id), 'csv'),
   }),
 ];
-
-/** The estimator's routes: catalogue, labour units and bills of materials. */
-export const estimatingRoutes: AnyRoute[] = [...catalogueRoutes, ...bomRoutes];

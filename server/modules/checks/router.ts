@@ -1,7 +1,6 @@
 import { z } from 'zod';
 import { defineRoute } from '../../http/route-table';
 import { panelChecks } from './service';
-import { submittalRoutes } from '../submittal/router';
 
 const ALL = ['admin', 'designer', 'estimator', 'engineer'] as const;
 const PanelId = z.object({ panelId: z.coerce.number().int().positive() });
@@ -15,5 +14,4 @@ export const checkRoutes = [
     params: PanelId,
     handler: ({ user, params }) => panelChecks(user, params.panelId),
   }),
-  ...submittalRoutes,
 ];
