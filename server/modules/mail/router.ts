@@ -1,12 +1,13 @@
 import { z } from 'zod';
 import { defineRoute } from '../../http/route-table';
+import { ROLE_SETS } from '../../../shared/schemas/auth';
 import { MailMessage } from '../../db/models/mail-message';
 
 export const mailRoutes = [
   defineRoute({
     method: 'get',
     path: '/api/outbox',
-    access: ['admin'],
+    access: ROLE_SETS.admin,
     summary: 'Messages captured by the development mail server',
     query: z.object({ limit: z.coerce.number().int().min(1).max(500).default(100) }),
     handler: async ({ query }) => {

@@ -1,7 +1,8 @@
 import { z } from 'zod';
 import { defineRoute } from '../../http/route-table';
-import { IdParamSchema } from '../../../shared/schemas/auth';
+import { IdParamSchema, ROLE_SETS } from '../../../shared/schemas/auth';
 import { BulkEditSchema, CommentInputSchema, PanelInputSchema, PanelUpdateSchema, ReselectSchema, ReviewActionSchema } from '../../../shared/schemas/panel';
+import { JobUpdateSchema } from '../../../shared/schemas/job';
 import { OverridesPutSchema } from '../../../shared/schemas/override';
 import * as service from './service';
 import * as review from './review';
@@ -9,10 +10,6 @@ import * as ruleCheck from './rule-check';
 import { changeReportWorkbook } from './change-report-export';
 import { sendAttachment } from '../../http/attachment';
 
-const ALL = ['admin', 'designer', 'estimator', 'engineer'] as const;
-const DESIGN = ['admin', 'designer'] as const;
-const ENGINEER = ['engineer'] as const;
-const COMMENT = ['admin', 'designer', 'engineer', 'estimator'] as const;
 
 const PanelId = z.object({ panelId: z.coerce.number().int().positive() });
 const LoadId = z.object({ loadId: z.coerce.number().int().positive() });
@@ -22,21 +19,23 @@ export const panelRoutes = [
   defineRoute({
     method: 'get',
     path: '/api/sign-off-queue',
-    access: ALL,
+    access: ROLE_SETS.everyone,
     summary: `Panels in review, returned, and signed off in the last ${service.SIGNED_OFF_DAYS} days`,
     handler: ({ user }) => service.signOffQueue(user),
   }),
-  defineRoute({ method: 'get', path: '/api/jobs/:id/panels', access: ALL, summary: 'Panels of a job', params: IdParamSchema, handler: ({ user, params }) => service.listPanels(user, params.id) }),
+  // A job's change lives here, not in the jobs module: a change to its supply re-selects its panels.
+  defineRoute({ method: 'patch', path: '/api/jobs/:id', access: ROLE_SETS.design, summary: 'Change a job', params: IdParamSchema, body: JobUpdateSchema, handler: ({ user, params, body }) => service.changeJob(user, params.id, body) }),
+  defineRoute({ method: 'get', path: '/api/jobs/:id/panels', access: ROLE_SETS.everyone, summary: 'Panels of a job', params: IdParamSchema, handler: ({ user, params }) => service.listPanels(user, params.id) }),
   defineRoute({
     method: 'post',
     path: '/api/jobs/:id/panels',
-    access: DESIGN,
+    access: ROLE_SETS.design,
     summary: 'New panel',
     params: IdParamSchema,
     body: PanelInputSchema,
     handler: ({ user, params, body }) => service.createPanel(user, params.id, body),
   }),
-  defineRoute({ method: 'get', path: '/api/panels/:panelId', access: ALL, summary: 'A panel with its motors, selections, comments and revisions', params: PanelId, handler: async ({ user, params, req, res }) => {
+  defineRoute({ method: 'get', path: '/api/panels/:panelId', access: ROLE_SETS.everyone, summary: 'A panel with its motors, selections, comments and revisions', params: PanelId, handler: async ({ user, params, req, res }) => {
       const { json, gzip, key } = await service.panelDetailJson(user, params.panelId);
       res.setHeader('ETag', `W/"${key}"`);
       res.setHeader('Cache-Control', 'private, no-cache');
@@ -61,11 +60,11 @@ export const panelRoutes = [
       return service.updatePanel(user, params.panelId, changes, version);
     },
   }),
-  defineRoute({ method: 'post', path: '/api/panels/:panelId/duplicate', access: DESIGN, summary: 'Duplicate a panel with its motors', params: PanelId, handler: ({ user, params }) => service.duplicatePanel(user, params.panelId) }),
+  defineRoute({ method: 'post', path: '/api/panels/:panelId/duplicate', access: ROLE_SETS.design, summary: 'Duplicate a panel with its motors', params: PanelId, handler: ({ user, params }) => service.duplicatePanel(user, params.panelId) }),
   defineRoute({
     method: 'post',
     path: '/api/panels/:panelId/archive',
-    access: DESIGN,
+    access: ROLE_SETS.design,
     summary: 'Archive or restore a panel',
     params: PanelId,
     body: z.object({ archived: z.boolean(), version: z.number().int().min(0) }),
@@ -75,7 +74,7 @@ export const panelRoutes = [
   defineRoute({
     method: 'post',
     path: '/api/panels/:panelId/loads',
-    access: DESIGN,
+    access: ROLE_SETS.design,
     summary: 'Add a motor',
     params: PanelId,
     body: z.object({ answers: z.record(z.string(), z.unknown()), panelVersion: z.number().int().min(0).optional() }),
@@ -84,7 +83,7 @@ export const panelRoutes = [
   defineRoute({
     method: 'post',
     path: '/api/panels/:panelId/loads/bulk-edit',
-    access: DESIGN,
+    access: ROLE_SETS.design,
     summary: 'Change shared answers on several motors',
     params: PanelId,
     body: BulkEditSchema,
@@ -94,18 +93,18 @@ export const panelRoutes = [
   defineRoute({
     method: 'put',
     path: '/api/loads/:loadId',
-    access: DESIGN,
+    access: ROLE_SETS.design,
     summary: "Change a motor's answers",
     params: LoadId,
     body: LoadBody.extend({ version: z.number().int().min(0) }),
     handler: ({ user, params, body }) => service.updateLoad(user, params.loadId, body.answers, body.version),
   }),
-  defineRoute({ method: 'post', path: '/api/loads/:loadId/copy', access: DESIGN, summary: 'Copy a motor', params: LoadId, handler: ({ user, params }) => service.copyLoad(user, params.loadId) }),
-  defineRoute({ method: 'delete', path: '/api/loads/:loadId', access: DESIGN, summary: 'Remove a motor', params: LoadId, handler: ({ user, params }) => service.deleteLoad(user, params.loadId) }),
+  defineRoute({ method: 'post', path: '/api/loads/:loadId/copy', access: ROLE_SETS.design, summary: 'Copy a motor', params: LoadId, handler: ({ user, params }) => service.copyLoad(user, params.loadId) }),
+  defineRoute({ method: 'delete', path: '/api/loads/:loadId', access: ROLE_SETS.design, summary: 'Remove a motor', params: LoadId, handler: ({ user, params }) => service.deleteLoad(user, params.loadId) }),
   defineRoute({
     method: 'put',
     path: '/api/loads/:loadId/overrides',
-    access: DESIGN,
+    access: ROLE_SETS.design,
     summary: "Set a motor's overrides, each with a justification",
     params: LoadId,
     body: OverridesPutSchema,
@@ -114,7 +113,7 @@ export const panelRoutes = [
   defineRoute({
     method: 'get',
     path: '/api/panels/:panelId/rule-check',
-    access: ALL,
+    access: ROLE_SETS.everyone,
     summary: 'What the current rules and tables would change in the stored selections, motor by motor',
     params: PanelId,
     handler: ({ user, params }) => ruleCheck.ruleCheck(user, params.panelId),
@@ -122,7 +121,7 @@ export const panelRoutes = [
   defineRoute({
     method: 'post',
     path: '/api/panels/:panelId/reselect',
-    access: DESIGN,
+    access: ROLE_SETS.design,
     summary: 'Select every motor again under the current rules and tables (409 in review or when the version is stale)',
     params: PanelId,
     body: ReselectSchema,
@@ -132,7 +131,7 @@ export const panelRoutes = [
   defineRoute({
     method: 'post',
     path: '/api/panels/:panelId/comments',
-    access: COMMENT,
+    access: ROLE_SETS.everyone,
     summary: 'Comment on a panel or one of its motors',
     params: PanelId,
     body: CommentInputSchema,
@@ -141,7 +140,7 @@ export const panelRoutes = [
   defineRoute({
     method: 'post',
     path: '/api/panels/:panelId/submit',
-    access: DESIGN,
+    access: ROLE_SETS.design,
     summary: 'Submit for sign-off',
     params: PanelId,
     body: ReviewActionSchema,
@@ -151,7 +150,7 @@ export const panelRoutes = [
   defineRoute({
     method: 'post',
     path: '/api/panels/:panelId/return',
-    access: ENGINEER,
+    access: ROLE_SETS.engineer,
     summary: 'Return to the designer with a comment',
     params: PanelId,
     body: ReviewActionSchema,
@@ -161,7 +160,7 @@ export const panelRoutes = [
   defineRoute({
     method: 'post',
     path: '/api/panels/:panelId/approve',
-    access: ENGINEER,
+    access: ROLE_SETS.engineer,
     summary: 'Sign off: freeze the next revision',
     params: PanelId,
     body: ReviewActionSchema,
@@ -171,7 +170,7 @@ export const panelRoutes = [
   defineRoute({
     method: 'get',
     path: '/api/panels/:panelId/revisions/:number',
-    access: ALL,
+    access: ROLE_SETS.everyone,
     summary: 'One frozen revision',
     params: PanelId.extend({ number: z.coerce.number().int().min(0) }),
     handler: ({ user, params }) => review.getRevision(user, params.panelId, params.number),
@@ -179,7 +178,7 @@ export const panelRoutes = [
   defineRoute({
     method: 'get',
     path: '/api/panels/:panelId/change-report',
-    access: ALL,
+    access: ROLE_SETS.everyone,
     summary: 'Change report between two revisions',
     params: PanelId,
     query: z.object({ from: z.coerce.number().int().min(0), to: z.coerce.number().int().min(0) }),
@@ -188,7 +187,7 @@ export const panelRoutes = [
   defineRoute({
     method: 'get',
     path: '/api/panels/:panelId/change-report.xlsx',
-    access: ALL,
+    access: ROLE_SETS.everyone,
     summary: 'Change report between two revisions as .xlsx (totals, lines with formulas, decisions)',
     params: PanelId,
     query: z.object({ from: z.coerce.number().int().min(0), to: z.coerce.number().int().min(0) }),

@@ -14,7 +14,8 @@ import { ConflictError, ForbiddenError, NotFoundError, ValidationError, zodIssue
 import * as repo from './repository';
 import { rollupOf, selectAll, selectOne } from './selection';
 import { recordActivity } from '../activity/service';
-import { getJob, jobView } from '../jobs/service';
+import { getJob, jobView, updateJob } from '../jobs/service';
+import type { JobValues } from '../../../shared/schemas/job';
 import type { Panel } from '../../db/models/panel';
 import type { Load } from '../../db/models/load';
 import type { Job } from '../../db/models/job';
@@ -246,6 +247,13 @@ export async function reselectJobPanels(actor: CurrentUser, jobId: number, what:
     await repo.bumpPanel(actor.organisationId, p.id, p.version, { status: reopened ? 'draft' : p.status, rollup: p.rollup }, t);
     if (reopened) await recordActivity(actor, { entity: 'panel', entityId: p.id, jobId, panelId: p.id, action: 'reopened', summary: `Opened a new draft after R${p.revisionNumber}: the job's ${what} changed` }, t);
   }
+}
+
+/** A job's change; a change to its supply (or anything else the selections depend on) re-selects its panels. */
+export async function changeJob(actor: CurrentUser, jobId: number, input: Partial<JobValues> & { version: number }) {
+  return updateJob(actor, jobId, input, async (fields, t) => {
+    if (fields.length) await reselectJobPanels(actor, jobId, fields.join(', '), t);
+  });
 }
 
 export async function addLoads(actor: CurrentUser, panelId: number, answersList: LoadInput[], t: Transaction, p: Panel & { job: Job }) {

@@ -1,11 +1,11 @@
 import { z } from 'zod';
 import { defineRoute } from '../../http/route-table';
+import { ROLE_SETS } from '../../../shared/schemas/auth';
 import { ConflictError } from '../../../shared/errors';
 import { computeChecks } from '../checks/service';
 import { getRevision } from '../panels/review';
 import { writeSubmittalPdf, type SubmittalData } from './pdf';
 
-const ALL = ['admin', 'designer', 'estimator', 'engineer'] as const;
 const PanelId = z.object({ panelId: z.coerce.number().int().positive() });
 
 /** A file name from the job number and panel name: letters, digits, dot, dash and underscore only. */
@@ -23,7 +23,7 @@ export const submittalRoutes = [
   defineRoute({
     method: 'get',
     path: '/api/panels/:panelId/submittal.pdf',
-    access: ALL,
+    access: ROLE_SETS.everyone,
     summary: 'The panel submittal as a PDF (download)',
     params: PanelId,
     handler: async ({ user, params, res }) => {
