@@ -164,7 +164,7 @@ async function main() {
   const { Load } = await import('../server/db/models/load');
   const { DEMO_ORGANISATION, DEMO_USERS } = await import('../server/db/seeders/demo');
   const { DEMO_MOTORS } = await import('../server/db/seeders/demo-panels');
-  const { selectAll } = await import('../server/modules/panels/selection');
+  const { selectAll } = await import('../server/modules/selection/service');
   const { panelDetail } = await import('../server/modules/panels/service');
   const { findUserById } = await import('../server/modules/users/repository');
 

@@ -8,6 +8,7 @@ import { userRoutes } from '../modules/users/router';
 import { jobRoutes } from '../modules/jobs/router';
 import { mailRoutes } from '../modules/mail/router';
 import { panelRoutes } from '../modules/panels/router';
+import { reviewRoutes } from '../modules/review/router';
 import { importRoutes } from '../modules/panels/import-router';
 import { catalogueRoutes } from '../modules/catalogue/router';
 import { bomRoutes } from '../modules/bom/router';
@@ -23,6 +24,7 @@ export function allRoutes(signInLimiter: RequestHandler): AnyRoute[] {
     ...jobRoutes,
     ...mailRoutes,
     ...panelRoutes,
+    ...reviewRoutes,
     ...importRoutes,
     ...catalogueRoutes,
     ...bomRoutes,

@@ -6,7 +6,7 @@ import { send, signInAs, testApp, type Session } from '../setup/api';
 import { db } from '../../server/db/sequelize';
 import { Load } from '../../server/db/models/load';
 import { findUserById } from '../../server/modules/users/repository';
-import { approvePanel } from '../../server/modules/panels/review';
+import { approvePanel } from '../../server/modules/review/service';
 import { rebuild } from '../../server/modules/bom/service';
 import { requirePanel } from '../../server/modules/panels/service';
 import type { CurrentUser, Role } from '../../shared/schemas/auth';

@@ -6,7 +6,7 @@ import { Panel } from '../../server/db/models/panel';
 import { Load } from '../../server/db/models/load';
 import { Organisation } from '../../server/db/models/organisation';
 import { DEMO_ORGANISATION } from '../../server/db/seeders/demo';
-import { selectOne } from '../../server/modules/panels/selection';
+import { selectOne } from '../../server/modules/selection/service';
 import { CatalogueItem } from '../../server/db/models/catalogue-item';
 import { BomLineRow } from '../../server/db/models/bom-line';
 import { CombinationRatingRow } from '../../server/db/models/combination-rating';

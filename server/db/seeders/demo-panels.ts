@@ -4,7 +4,7 @@ import { Panel } from '../models/panel';
 import { Load } from '../models/load';
 import { Job } from '../models/job';
 import type { LoadInput } from '../../../shared/schemas/load';
-import { selectAll } from '../../modules/panels/selection';
+import { selectAll } from '../../modules/selection/service';
 import { regenerateBom } from '../../modules/bom/service';
 
 export const DEMO_MOTORS: LoadInput[] = [

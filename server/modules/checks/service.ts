@@ -7,7 +7,7 @@ import type { CurrentUser } from '../../../shared/schemas/auth';
 import type { BomLine, CatalogueItem } from '../../../shared/schemas/catalogue';
 import { PANEL_BUCKET } from '../../../shared/schemas/catalogue';
 import type { LoadSelection, PanelRollup } from '../../../shared/schemas/selection';
-import type { ControlPowerCheck, ExcludedComponent, HeatCheck, NameplateCheck, PanelChecks, SccrCheck } from '../../../shared/schemas/checks';
+import { CHECK_CAUTIONS, type ControlPowerCheck, type ExcludedComponent, type HeatCheck, type NameplateCheck, type PanelChecks, type SccrCheck } from '../../../shared/schemas/checks';
 import { buildBom, indexCatalogue, selectItem } from '../../../shared/calc/bom';
 import {
   calculatePanelSccr,
@@ -33,12 +33,6 @@ import type { Job } from '../../db/models/job';
 
 /** Control circuit voltage of the panel (the bill of materials' default). */
 export const CONTROL_VOLTS = 120;
-
-export const CHECK_CAUTIONS = [
-  'Results support, not replace, a qualified person’s design; a qualified person verifies them.',
-  'Local codes, the authority having jurisdiction, and the listing and instructions of the equipment take precedence.',
-  'De-energise and lock out before work. Check motor rotation before coupling the load.',
-];
 
 /** The panel's stored mounting as the heat method's mounting. */
 export function heatMounting(mounting: string): EnclosureMounting {

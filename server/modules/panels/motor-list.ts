@@ -10,7 +10,7 @@ import { relayOf } from '../../../shared/calc/overload';
 import { IMPORT_COLUMNS, answerValue } from './import';
 import { loadsOf } from './repository';
 import { requirePanel } from './service';
-import { CHECK_CAUTIONS } from '../checks/service';
+import { CHECK_CAUTIONS } from '../../../shared/schemas/checks';
 import { SCPD_WORDS } from '../../../shared/calc/scpd';
 
 

@@ -11,7 +11,7 @@ import type { RuleCheckBody } from '../../../shared/schemas/panel';
 import { selectionDifferences } from '../../../shared/calc/selection-diff';
 import { recordActivity } from '../activity/service';
 import * as repo from './repository';
-import { selectAll, selectOne } from './selection';
+import { selectAll, selectOne } from '../selection/service';
 import { ValidationError } from '../../../shared/errors';
 import { changePanel, requirePanel, reselectPanel } from './service';
 import type { Load } from '../../db/models/load';

@@ -12,7 +12,7 @@ import type { OverrideInput, StoredOverride } from '../../../shared/schemas/over
 import { applyOverrides, checkOverride } from '../../../shared/calc/overrides';
 import { ConflictError, ForbiddenError, NotFoundError, ValidationError, zodIssues } from '../../../shared/errors';
 import * as repo from './repository';
-import { rollupOf, selectAll, selectOne } from './selection';
+import { rollupOf, selectAll, selectOne } from '../selection/service';
 import { recordActivity } from '../activity/service';
 import { getJob, jobView, updateJob } from '../jobs/service';
 import type { JobValues } from '../../../shared/schemas/job';

@@ -3,7 +3,7 @@ import { defineRoute } from '../../http/route-table';
 import { ROLE_SETS } from '../../../shared/schemas/auth';
 import { ConflictError } from '../../../shared/errors';
 import { computeChecks } from '../checks/service';
-import { getRevision } from '../panels/review';
+import { getRevision } from '../review/service';
 import { writeSubmittalPdf, type SubmittalData } from './pdf';
 
 const PanelId = z.object({ panelId: z.coerce.number().int().positive() });
