@@ -129,7 +129,7 @@ async function panelDetailOf(p: Panel & { job: Job }): Promise<PanelDetail> {
 
 export async function createPanel(actor: CurrentUser, jobId: number, values: { name: string; description: string; mounting: string; markupPercent: number; labourRate: number }) {
   const job = await getJob(actor, jobId);
-  const p = await repo.Panel.create({ ...values, organisationId: actor.organisationId, jobId: job.id, revisionNumber: null, archivedAt: null, rollup: null, submittedAt: null });
+  const p = await repo.createPanel({ ...values, organisationId: actor.organisationId, jobId: job.id, revisionNumber: null, archivedAt: null, rollup: null, submittedAt: null });
   await recordActivity(actor, { entity: 'panel', entityId: p.id, jobId, panelId: p.id, action: 'created', summary: `Created panel ${p.name}` });
   return panelDetail(actor, p.id);
 }
@@ -196,9 +196,10 @@ export async function reselectPanel(p: Panel & { job: Job }, t: Transaction) {
   const loads = await repo.loadsOf(p.id, t);
   const out = await selectAll(p.job, loads.map((l) => l.answers as LoadInput));
   if (out) {
-    await repo.Load.bulkCreate(
+    await repo.saveLoads(
       loads.map((l, i) => ({ ...l.get({ plain: true }), selection: out.results[i] as unknown as Record<string, unknown>, version: l.version + 1 })),
-      { updateOnDuplicate: ['selection', 'version', 'updatedAt'], transaction: t },
+      t,
+      ['selection', 'version', 'updatedAt'],
     );
   }
   p.rollup = out ? (out.panel as unknown as Record<string, unknown>) : null;
@@ -226,10 +227,10 @@ export async function addLoad(actor: CurrentUser, panelId: number, answers: unkn
   return changePanel(actor, panelId, panelVersion, `added ${input.tag}`, async (p, t) => {
     if (await tagTaken(p.id, input.tag, t)) throw new ValidationError(`Tag ${input.tag} is already on this panel`, [{ path: 'body.answers.tag', message: 'already on this panel' }]);
     const selection = await selectOne(p.job, input);
-    const position = (await repo.Load.max<number, Load>('position', { where: { panelId: p.id }, transaction: t })) ?? 0;
-    const l = await repo.Load.create(
+    const position = await repo.lastLoadPosition(p.id, t);
+    const l = await repo.createLoad(
       { organisationId: actor.organisationId, panelId: p.id, tag: input.tag, position: position + 1, answers: input as Record<string, unknown>, selection: selection as unknown as Record<string, unknown>, overrides: [] },
-      { transaction: t },
+      t,
     );
     await refreshRollup(p, t);
     await recordActivity(actor, { entity: 'load', entityId: l.id, jobId: p.jobId, panelId: p.id, action: 'added', summary: `Added motor ${input.tag} to ${p.name}` }, t);
@@ -239,8 +240,7 @@ export async function addLoad(actor: CurrentUser, panelId: number, answers: unkn
 
 /** A change to the job's supply, ambient or code edition: every active panel's motors are selected again. */
 export async function reselectJobPanels(actor: CurrentUser, jobId: number, what: string, t: Transaction) {
-  const panels = await repo.Panel.findAll({ where: { organisationId: actor.organisationId, jobId, archivedAt: null }, include: [{ model: repo.Job, as: 'job', required: true }], transaction: t, lock: { level: t.LOCK.UPDATE, of: repo.Panel } });
-  for (const p of panels as Array<Panel & { job: Job }>) {
+  for (const p of await repo.jobPanelsForUpdate(actor.organisationId, jobId, t)) {
     if (p.status === 'in_review') throw new ConflictError(`Panel ${p.name} is in review: the engineer must return it before the job's ${what} can change`);
     await reselectPanel(p, t);
     const reopened = p.status === 'signed_off';
@@ -266,7 +266,7 @@ export async function addLoads(actor: CurrentUser, panelId: number, answersList:
     tags.add(a.tag.toLowerCase());
     return { organisationId: actor.organisationId, panelId: p.id, tag: a.tag, position: ++position, answers: a as Record<string, unknown>, selection: out!.results[i] as unknown as Record<string, unknown>, overrides: [] };
   });
-  await repo.Load.bulkCreate(rows, { transaction: t });
+  await repo.saveLoads(rows, t);
   await refreshRollup(p, t);
   return rows.length;
 }
@@ -293,9 +293,11 @@ export async function updateLoad(actor: CurrentUser, loadId: number, answers: un
       const b = JSON.stringify((input as Record<string, unknown>)[k]);
       if (a !== b) diff[k] = { from: (l.answers as Record<string, unknown>)[k] ?? null, to: (input as Record<string, unknown>)[k] ?? null };
     }
-    const [count] = await repo.Load.update(
+    const count = await repo.updateLoad(
+      l.id,
       { tag: input.tag, answers: input as Record<string, unknown>, selection: selection as unknown as Record<string, unknown>, version: version + 1 },
-      { where: { id: l.id, version }, transaction: t },
+      t,
+      version,
     );
     if (count === 0) throw new ConflictError(`Someone else changed motor ${l.tag}: reload and apply your change again`);
     await refreshRollup(p, t);
@@ -317,7 +319,7 @@ export async function copyLoad(actor: CurrentUser, loadId: number) {
 export async function deleteLoad(actor: CurrentUser, loadId: number) {
   const l = await requireLoad(actor, loadId);
   await changePanel(actor, l.panelId, null, `removed ${l.tag}`, async (p, t) => {
-    await repo.Load.destroy({ where: { id: l.id }, transaction: t });
+    await repo.deleteLoad(l.id, t);
     await refreshRollup(p, t);
     await recordActivity(actor, { entity: 'load', entityId: l.id, jobId: p.jobId, panelId: p.id, action: 'removed', summary: `Removed motor ${l.tag} from ${p.name}` }, t);
   });
@@ -330,9 +332,10 @@ export async function bulkEdit(actor: CurrentUser, panelId: number, loadIds: num
     const inputs = loads.map((l, i) => parseAnswers({ ...l.answers, ...changes }, `loads[${i}]`));
     const out = await selectAll(p.job, inputs);
     // one statement for all the motors
-    await repo.Load.bulkCreate(
+    await repo.saveLoads(
       loads.map((l, i) => ({ ...l.get({ plain: true }), answers: inputs[i] as Record<string, unknown>, selection: out!.results[i] as unknown as Record<string, unknown>, version: l.version + 1 })),
-      { updateOnDuplicate: ['answers', 'selection', 'version', 'updatedAt'], transaction: t },
+      t,
+      ['answers', 'selection', 'version', 'updatedAt'],
     );
     await refreshRollup(p, t);
     await recordActivity(actor, { entity: 'panel', entityId: p.id, jobId: p.jobId, panelId: p.id, action: 'bulk-edit', summary: `Changed ${Object.keys(changes).join(', ')} on ${loads.length} motors`, diff: changes }, t);
@@ -359,7 +362,7 @@ export async function setOverrides(actor: CurrentUser, loadId: number, overrides
       const same = prev && prev.value === o.value && prev.justification === o.justification;
       return { ...o, was, warnings, by: same ? prev.by : actor.name, at: same ? prev.at : new Date().toISOString() };
     });
-    await repo.Load.update({ overrides: stored as unknown as Array<Record<string, unknown>>, version: version + 1 }, { where: { id: l.id }, transaction: t });
+    await repo.updateLoad(l.id, { overrides: stored as unknown as Array<Record<string, unknown>>, version: version + 1 }, t);
     await recordActivity(
       actor,
       { entity: 'load', entityId: l.id, jobId: p.jobId, panelId: p.id, action: 'override', summary: `Overrides on ${l.tag}: ${stored.map((o) => `${o.field} = ${o.value}`).join('; ') || 'none'}`, diff: { overrides: stored } },
@@ -371,7 +374,7 @@ export async function setOverrides(actor: CurrentUser, loadId: number, overrides
 
 export async function updatePanel(actor: CurrentUser, panelId: number, changes: Record<string, unknown>, version: number) {
   await changePanel(actor, panelId, version, 'panel settings', async (p, t) => {
-    await repo.Panel.update(changes, { where: { id: p.id }, transaction: t });
+    await repo.updatePanel(p.id, changes, t);
     await recordActivity(actor, { entity: 'panel', entityId: p.id, jobId: p.jobId, panelId: p.id, action: 'updated', summary: `Changed panel ${p.name}: ${Object.keys(changes).join(', ')}`, diff: changes }, t);
   });
   return panelDetail(actor, panelId);
@@ -381,7 +384,7 @@ export async function duplicatePanel(actor: CurrentUser, panelId: number) {
   const src = await requirePanel(actor, panelId);
   const loads = await repo.loadsOf(src.id);
   const id = await db().transaction(async (t) => {
-    const p = await repo.Panel.create(
+    const p = await repo.createPanel(
       {
         organisationId: actor.organisationId,
         jobId: src.jobId,
@@ -395,11 +398,11 @@ export async function duplicatePanel(actor: CurrentUser, panelId: number) {
         rollup: src.rollup,
         submittedAt: null,
       },
-      { transaction: t },
+      t,
     );
-    await repo.Load.bulkCreate(
+    await repo.saveLoads(
       loads.map((l) => ({ organisationId: actor.organisationId, panelId: p.id, tag: l.tag, position: l.position, answers: l.answers, selection: l.selection, overrides: l.overrides })),
-      { transaction: t },
+      t,
     );
     await recordActivity(actor, { entity: 'panel', entityId: p.id, jobId: src.jobId, panelId: p.id, action: 'duplicated', summary: `Duplicated panel ${src.name} with ${loads.length} motors` }, t);
     return p.id;
@@ -421,7 +424,7 @@ export async function addComment(actor: CurrentUser, panelId: number, body: stri
     const l = await repo.findLoad(actor.organisationId, loadId);
     if (!l || l.panelId !== p.id) throw new ValidationError('That motor is not on this panel', [{ path: 'body.loadId', message: 'not on this panel' }]);
   }
-  const c = await repo.Comment.create({ organisationId: actor.organisationId, panelId: p.id, loadId, userId: actor.id, body });
+  const c = await repo.createComment({ organisationId: actor.organisationId, panelId: p.id, loadId, userId: actor.id, body });
   await repo.touchPanel(p.id);
   await recordActivity(actor, { entity: 'comment', entityId: c.id, jobId: p.jobId, panelId: p.id, action: 'commented', summary: `Commented on ${p.name}: ${body.slice(0, 80)}` });
   return { id: c.id, loadId, body, author: actor.name, at: c.createdAt.toISOString() } satisfies CommentView;
