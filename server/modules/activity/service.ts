@@ -1,7 +1,6 @@
 import type { Transaction } from 'sequelize';
 import type { CurrentUser } from '../../../shared/schemas/auth';
-import { Activity } from '../../db/models/activity';
-import { User } from '../../db/models/user';
+import { activityRows, insertActivity } from './repository';
 
 export interface ActivityInput {
   entity: string;
@@ -14,7 +13,7 @@ export interface ActivityInput {
 }
 
 export async function recordActivity(actor: CurrentUser, a: ActivityInput, transaction?: Transaction) {
-  await Activity.create(
+  await insertActivity(
     {
       organisationId: actor.organisationId,
       userId: actor.id,
@@ -26,18 +25,16 @@ export async function recordActivity(actor: CurrentUser, a: ActivityInput, trans
       panelId: a.panelId ?? null,
       diff: a.diff ?? null,
     },
-    { transaction },
+    transaction,
   );
 }
 
 export async function listActivity(actor: CurrentUser, where: { jobId?: number; entity?: string }, limit = 200) {
-  const rows = await Activity.findAll({
-    where: { organisationId: actor.organisationId, ...(where.jobId ? { jobId: where.jobId } : {}), ...(where.entity ? { entity: where.entity } : {}) },
-    include: [{ model: User, as: 'user', attributes: ['name'] }],
-    order: [['id', 'DESC']],
+  const rows = await activityRows(
+    { organisationId: actor.organisationId, ...(where.jobId ? { jobId: where.jobId } : {}), ...(where.entity ? { entity: where.entity } : {}) },
     limit,
-  });
-  return rows.map((r) => ({
+  );
+  return rows.map(({ row: r, author }) => ({
     id: r.id,
     entity: r.entity,
     entityId: r.entityId,
@@ -45,7 +42,7 @@ export async function listActivity(actor: CurrentUser, where: { jobId?: number; 
     summary: r.summary,
     diff: r.diff,
     panelId: r.panelId,
-    user: (r as unknown as { user?: { name: string } }).user?.name ?? null,
+    user: author,
     at: r.createdAt,
   }));
 }

@@ -2,7 +2,7 @@
 // message it receives in the Outbox table, where admins read them in the app.
 import { SMTPServer } from 'smtp-server';
 import { simpleParser } from 'mailparser';
-import { MailMessage } from '../../db/models/mail-message';
+import { storeMessage } from './repository';
 
 export function startFakeSmtp(port: number): Promise<SMTPServer> {
   const server = new SMTPServer({
@@ -14,7 +14,7 @@ export function startFakeSmtp(port: number): Promise<SMTPServer> {
       simpleParser(stream)
         .then(async (parsed) => {
           const to = Array.isArray(parsed.to) ? parsed.to.map((a) => a.text).join(', ') : (parsed.to?.text ?? '');
-          await MailMessage.create({
+          await storeMessage({
             toAddress: to,
             fromAddress: parsed.from?.text ?? '',
             subject: parsed.subject ?? '',
