@@ -352,7 +352,7 @@ describe('stored selections against the current rules', () => {
     sel.scpd.ratingAmps = 100;
     sel.relays.phaseReversal = false;
     sel.cautions = sel.cautions.slice(1);
-    await Load.update({ selection: sel as unknown as Record<string, unknown> }, { where: { id: added.id } });
+    await Load.update({ selection: sel as unknown as import('../../server/db/models/load').Load['selection'] }, { where: { id: added.id } });
 
     const check = (await designer.agent.get(`/api/panels/${panel.id}/rule-check`).expect(200)).body;
     expect(check.changed).toHaveLength(1);
@@ -390,7 +390,7 @@ describe('stored selections against the current rules', () => {
     // R-1's answers as an earlier release might have let them through; R-2's stored breaker differs
     await Load.update({ answers: { tag: 'R-1', supply: 'ac3', hp: 10, volts: 460, environment: 'indoor-dusty', poles: 3 } }, { where: { id: a.id } });
     const row = (await Load.findByPk(b.id))!;
-    await Load.update({ selection: { ...(row.selection as Record<string, unknown>), scpd: { ...((row.selection as { scpd: object }).scpd), ratingAmps: 1 } } }, { where: { id: b.id } });
+    await Load.update({ selection: { ...(row.selection as unknown as Record<string, unknown>), scpd: { ...((row.selection as unknown as { scpd: object }).scpd), ratingAmps: 1 } } as unknown as import('../../server/db/models/load').Load['selection'] }, { where: { id: b.id } });
     const check = (await designer.agent.get(`/api/panels/${panel.id}/rule-check`).expect(200)).body;
     expect(check.changed.map((c: { tag: string }) => c.tag)).toEqual(['R-1', 'R-2']);
     expect(check.changed[0].differences).toEqual([{ field: 'answers', label: 'Answers', from: 'accepted', to: expect.stringMatching(/^its answers no longer pass: .*poles/) }]);

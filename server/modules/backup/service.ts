@@ -5,7 +5,6 @@ import { db } from '../../db/sequelize';
 import type { CurrentUser } from '../../../shared/schemas/auth';
 import type { PanelState } from '../../../shared/schemas/panel';
 import { LoadSchema } from '../../../shared/schemas/load';
-import type { BomLine } from '../../../shared/schemas/catalogue';
 import { ConflictError, NotFoundError, ValidationError, zodIssues } from '../../../shared/errors';
 import { recordActivity } from '../activity/service';
 import * as repo from './repository';
@@ -63,7 +62,7 @@ export async function exportJob(actor: CurrentUser, jobId: number): Promise<JobB
           position: l.position,
           answers: l.answers,
           selection: l.selection,
-          overrides: (l.overrides ?? []) as unknown as JobBackup['panels'][number]['loads'][number]['overrides'],
+          overrides: l.overrides ?? [],
         })),
         comments: comments
           .filter((c) => c.panelId === p.id)
@@ -71,7 +70,7 @@ export async function exportJob(actor: CurrentUser, jobId: number): Promise<JobB
         revisions: revisions
           .filter((r) => r.panelId === p.id)
           .map((r) => ({ number: r.number, approvedBy: person(r.approvedBy), approvedAt: r.approvedAt.toISOString(), snapshot: r.snapshot })),
-        bomLines: bomLines.filter((b) => b.panelId === p.id).map((b) => b.line as unknown as BomLine),
+        bomLines: bomLines.filter((b) => b.panelId === p.id).map((b) => b.line),
       };
     }),
   };
@@ -139,7 +138,7 @@ export async function importJob(actor: CurrentUser, backup: JobBackup, opts: Imp
           t,
         );
         const createdIds = await repo.insertLoads(
-          p.loads.map((l) => ({ organisationId, panelId: panel.id, tag: l.tag, position: l.position, answers: l.answers, selection: l.selection, overrides: l.overrides as unknown as Array<Record<string, unknown>> })),
+          p.loads.map((l) => ({ organisationId, panelId: panel.id, tag: l.tag, position: l.position, answers: l.answers, selection: l.selection, overrides: l.overrides })),
           t,
         );
         motors += createdIds.length;
@@ -158,7 +157,7 @@ export async function importJob(actor: CurrentUser, backup: JobBackup, opts: Imp
         }
         if (p.bomLines.length) {
           await repo.insertBomLines(
-            p.bomLines.map((line, position) => ({ organisationId, panelId: panel.id, position, line: line as unknown as Record<string, unknown> })),
+            p.bomLines.map((line, position) => ({ organisationId, panelId: panel.id, position, line: line })),
             t,
           );
         }

@@ -72,7 +72,7 @@ async function buildLines(organisationId: number, panel: Panel & { job: Job }, t
   const selections = await effectiveSelections(panel.id, t);
   const catalogue = await catalogueFor(organisationId, t);
   const labourUnits = await labourUnitsFor(organisationId, t);
-  const rollup = (panel.rollup ?? { feeder: { minAmpacity: 0, conductorSize: 'none', ocpdMaxAmps: 0, basis: '' }, totalFlcAmps: 0, largestMotorTag: null }) as unknown as PanelRollup;
+  const rollup = (panel.rollup ?? { feeder: { minAmpacity: 0, conductorSize: 'none', ocpdMaxAmps: 0, basis: '' }, totalFlcAmps: 0, largestMotorTag: null } satisfies PanelRollup);
   const built = buildBom({
     panelName: panel.name,
     selections: selections.filter((s) => s.errors.length === 0),
@@ -118,10 +118,10 @@ export async function planBom(organisationId: number, panel: Panel & { job: Job 
 /** Rebuilds the automatic lines; manual lines stay, a swap stays on its line, and prices stay frozen unless `reprice`. */
 export async function regenerateBom(organisationId: number, panel: Panel & { job: Job }, t: Transaction, opts: RegenerateOptions = {}) {
   const oldRows = await BomLineRow.findAll({ where: { panelId: panel.id }, order: [['position', 'ASC'], ['id', 'ASC']], transaction: t });
-  const lines = await planBom(organisationId, panel, oldRows.map((r) => r.line as unknown as BomLine), t, opts);
+  const lines = await planBom(organisationId, panel, oldRows.map((r) => r.line), t, opts);
   await BomLineRow.destroy({ where: { panelId: panel.id }, transaction: t });
   await BomLineRow.bulkCreate(
-    lines.map((line, position) => ({ organisationId, panelId: panel.id, position, line: line as unknown as Record<string, unknown> })),
+    lines.map((line, position) => ({ organisationId, panelId: panel.id, position, line: line })),
     { transaction: t },
   );
   await Panel.update({ bomGeneratedAt: new Date() }, { where: { id: panel.id }, transaction: t, silent: true });
@@ -135,7 +135,7 @@ function designSignature(lines: readonly BomLine[]): string {
 
 export async function storedBom(actor: CurrentUser, panel: Panel & { job: Job }): Promise<StoredBom> {
   const rows = await BomLineRow.findAll({ where: { organisationId: actor.organisationId, panelId: panel.id }, order: [['position', 'ASC'], ['id', 'ASC']] });
-  const lines = rows.map((r) => ({ ...(r.line as unknown as BomLine), id: r.id, position: r.position }));
+  const lines = rows.map((r) => ({ ...r.line, id: r.id, position: r.position }));
   // Stale when a rebuild now would give other parts or quantities (motors, overrides or the catalogue changed).
   const plan = panel.bomGeneratedAt ? await planBom(actor.organisationId, panel, lines) : null;
   return {
@@ -161,7 +161,7 @@ export async function bomOutOfDate(organisationId: number, panel: Panel & { job:
 export async function rebuild(actor: CurrentUser, panelRef: Panel & { job: Job }, opts: RegenerateOptions = {}) {
   await db().transaction(async (t) => {
     const panel = await lockedPanel(actor, panelRef.id, t);
-    const before = (await BomLineRow.findAll({ where: { panelId: panel.id }, order: [['position', 'ASC'], ['id', 'ASC']], transaction: t })).map((r) => r.line as unknown as BomLine);
+    const before = (await BomLineRow.findAll({ where: { panelId: panel.id }, order: [['position', 'ASC'], ['id', 'ASC']], transaction: t })).map((r) => r.line);
     const dropped: string[] = [];
     const lines = await regenerateBom(actor.organisationId, panel, t, { ...opts, onDroppedSwap: (s, why) => dropped.push(`${s.code ?? 'a part'} on ${s.bucket} (${why})`) });
     if (designSignature(before) !== designSignature(lines)) await openBomChange(actor, panel, t, 'the bill of materials was rebuilt with other parts');
@@ -244,7 +244,7 @@ export async function addManualLine(actor: CurrentUser, panelId: number, input: 
       requirement: null,
     });
     const last = (await BomLineRow.max('position', { where: { panelId: panel.id }, transaction: t })) as number | null;
-    const row = await BomLineRow.create({ organisationId: actor.organisationId, panelId: panel.id, position: (last ?? -1) + 1, line: line as unknown as Record<string, unknown> }, { transaction: t });
+    const row = await BomLineRow.create({ organisationId: actor.organisationId, panelId: panel.id, position: (last ?? -1) + 1, line: line }, { transaction: t });
     await recordActivity(
       actor,
       { entity: 'bom', entityId: panel.id, jobId: panel.jobId, panelId: panel.id, action: 'line-added', summary: `Added ${line.quantity} ${line.unit} "${line.description}" to ${panel.name}`, diff: { line } },
@@ -272,8 +272,8 @@ export interface LineChanges {
 async function requirementOf(organisationId: number, panel: Panel & { job: Job }, lineId: number, line: BomLine, t?: Transaction): Promise<Requirement[] | null> {
   if (line.requirement !== undefined) return line.requirement;
   const rows = await BomLineRow.findAll({ where: { panelId: panel.id }, order: [['position', 'ASC'], ['id', 'ASC']], transaction: t });
-  const auto = rows.filter((r) => (r.line as unknown as BomLine).source !== 'manual');
-  const key = ordinalKeys(auto.map((r) => r.line as unknown as BomLine))[auto.findIndex((r) => r.id === lineId)];
+  const auto = rows.filter((r) => r.line.source !== 'manual');
+  const key = ordinalKeys(auto.map((r) => r.line))[auto.findIndex((r) => r.id === lineId)];
   const { built } = await buildLines(organisationId, panel, t);
   const builtKeys = ordinalKeys(built.lines);
   return built.lines[builtKeys.indexOf(key ?? '')]?.requirement ?? null;
@@ -289,7 +289,7 @@ export async function updateLine(actor: CurrentUser, panelId: number, lineId: nu
   return db().transaction(async (t) => {
     const panel = await lockedPanel(actor, panelId, t);
     const row = await requireLine(panel.id, lineId, t);
-    const before = row.line as unknown as BomLine;
+    const before = row.line;
     await openBomChange(actor, panel, t, changes.swapCode !== undefined ? `${before.code ?? 'a line'} on ${before.bucket} was swapped in the bill of materials` : 'a line of the bill of materials was changed');
     let after: BomLine = { ...before };
     if (changes.swapCode !== undefined) {
@@ -329,7 +329,7 @@ export async function updateLine(actor: CurrentUser, panelId: number, lineId: nu
     }
     if (changes.swapCode === undefined && direct.length === 0) throw new ValidationError('Nothing to change', [{ path: 'body', message: 'give a quantity or a part to swap to' }]);
     after = checkLine(after);
-    await BomLineRow.update({ line: after as unknown as Record<string, unknown> }, { where: { id: row.id }, transaction: t });
+    await BomLineRow.update({ line: after }, { where: { id: row.id }, transaction: t });
     const diff = Object.fromEntries(Object.keys(after).filter((k) => JSON.stringify(after[k as keyof BomLine]) !== JSON.stringify(before[k as keyof BomLine])).map((k) => [k, [before[k as keyof BomLine], after[k as keyof BomLine]]]));
     const summary = changes.swapCode !== undefined
       ? `Swapped ${before.code ?? 'an unmatched line'} for ${after.code} in ${before.bucket} of ${panel.name}: ${after.swapReason}`
@@ -343,7 +343,7 @@ export async function deleteLine(actor: CurrentUser, panelId: number, lineId: nu
   await db().transaction(async (t) => {
     const panel = await lockedPanel(actor, panelId, t);
     const row = await requireLine(panel.id, lineId, t);
-    const line = row.line as unknown as BomLine;
+    const line = row.line;
     if (line.source !== 'manual') throw new ValidationError('Only manual lines are removed; the rebuild decides the automatic ones', [{ path: 'lineId', message: 'not a manual line' }]);
     await openBomChange(actor, panel, t, 'a manual line was removed from the bill of materials');
     await row.destroy({ transaction: t });
@@ -358,7 +358,7 @@ export async function deleteLine(actor: CurrentUser, panelId: number, lineId: nu
 export async function swapCandidates(actor: CurrentUser, panelId: number, lineId: number) {
   const panel = await requirePanel(actor, panelId);
   const row = await db().transaction((t) => requireLine(panel.id, lineId, t));
-  const line = row.line as unknown as BomLine;
+  const line = row.line;
   if (line.source === 'manual') return [];
   const requirement = await requirementOf(actor.organisationId, panel, row.id, line);
   if (!requirement) return [];
@@ -378,7 +378,7 @@ export async function panelExport(actor: CurrentUser, panelId: number): Promise<
   const rows = await BomLineRow.findAll({ where: { organisationId: actor.organisationId, panelId: panel.id }, order: [['position', 'ASC'], ['id', 'ASC']] });
   return {
     job: { number: panel.job.number, name: panel.job.name, customer: panel.job.customer || undefined, markupPercent: panel.markupPercent, labourRatePerHour: panel.labourRate },
-    panels: [{ name: panel.name, lines: rows.map((r) => r.line as unknown as BomLine) }],
+    panels: [{ name: panel.name, lines: rows.map((r) => r.line) }],
     fileBase: `${panel.job.number}-${panel.name}-bom`,
   };
 }
@@ -390,7 +390,7 @@ export async function jobExport(actor: CurrentUser, jobId: number): Promise<{ jo
   const rows = await BomLineRow.findAll({ where: { organisationId: actor.organisationId, panelId: panels.map((p) => p.id) }, order: [['position', 'ASC'], ['id', 'ASC']] });
   return {
     job: { number: job.number, name: job.name, customer: job.customer || undefined, markupPercent: panels[0]?.markupPercent ?? 15, labourRatePerHour: panels[0]?.labourRate ?? 85 },
-    panels: panels.map((p) => ({ name: p.name, lines: rows.filter((r) => r.panelId === p.id).map((r) => r.line as unknown as BomLine) })),
+    panels: panels.map((p) => ({ name: p.name, lines: rows.filter((r) => r.panelId === p.id).map((r) => r.line) })),
     fileBase: `${job.number}-bom`,
   };
 }

@@ -4,8 +4,7 @@ import { Op, type Transaction, type WhereOptions } from 'sequelize';
 import { db } from '../../db/sequelize';
 import { CatalogueItem as CatalogueRow } from '../../db/models/catalogue-item';
 import { LabourUnit as LabourRow } from '../../db/models/labour-unit';
-import { Activity } from '../../db/models/activity';
-import { User } from '../../db/models/user';
+import { activityRows } from '../activity/repository';
 import type { CurrentUser } from '../../../shared/schemas/auth';
 import {
   CatalogueItemSchema,
@@ -114,18 +113,13 @@ export function setActive(actor: CurrentUser, id: number, active: boolean, versi
 
 export async function itemHistory(actor: CurrentUser, id: number): Promise<HistoryEntry[]> {
   await requireItem(actor, id);
-  const rows = await Activity.findAll({
-    where: { organisationId: actor.organisationId, entity: 'catalogue_item', entityId: id },
-    include: [{ model: User, as: 'user', attributes: ['name'] }],
-    order: [['id', 'DESC']],
-    limit: 200,
-  });
-  return rows.map((r) => ({
+  const rows = await activityRows({ organisationId: actor.organisationId, entity: 'catalogue_item', entityId: id }, 200);
+  return rows.map(({ row: r, author }) => ({
     id: r.id,
     action: r.action,
     summary: r.summary,
     diff: r.diff,
-    user: (r as unknown as { user?: { name: string } }).user?.name ?? null,
+    user: author,
     at: r.createdAt.toISOString(),
   }));
 }

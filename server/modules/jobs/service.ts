@@ -83,7 +83,7 @@ export async function updateJob(
   }
   const diff: Record<string, unknown> = {};
   for (const [k, v] of Object.entries(changes)) {
-    const before = (job as unknown as Record<string, unknown>)[k];
+    const before = job.get(k as keyof JobValues);
     if (before !== v) diff[k] = { from: before, to: v };
   }
   const reselect = SELECTION_FIELDS.filter((f) => f in diff);

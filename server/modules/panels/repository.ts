@@ -57,8 +57,10 @@ export async function loadsOf(panelId: number, transaction?: Transaction) {
   return Load.findAll({ where: { panelId }, order: [['position', 'ASC'], ['id', 'ASC']], transaction });
 }
 
+/** The panel's comments, oldest first, each with its author's name (null when the person is gone). */
 export async function commentsOf(panelId: number) {
-  return Comment.findAll({ where: { panelId }, include: [{ model: User, as: 'author', attributes: ['name'] }], order: [['id', 'ASC']] });
+  const rows = await Comment.findAll({ where: { panelId }, include: [{ model: User, as: 'author', attributes: ['name'] }], order: [['id', 'ASC']] });
+  return rows.map((c) => Object.assign(c, { authorName: (c as Comment & { author?: User | null }).author?.name ?? null }));
 }
 
 export async function revisionsOf(panelId: number) {

@@ -38,7 +38,7 @@ async function differencesOf(job: Parameters<typeof selectAll>[0], loads: Load[]
   const now = await currentSelections(job, loads);
   const changed: RuleCheckBody['changed'] = [];
   loads.forEach((l, i) => {
-    const stored = l.selection as unknown as LoadSelection | null;
+    const stored = l.selection;
     const current = now[i];
     if (current === undefined) return;
     const differences =

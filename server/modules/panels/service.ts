@@ -24,7 +24,7 @@ const EDITABLE: PanelState[] = ['draft', 'returned', 'signed_off'];
 
 export function loadView(l: Load): LoadView {
   const selection = (l.selection ?? null) as LoadSelection | null;
-  const overrides = (l.overrides ?? []) as unknown as StoredOverride[];
+  const overrides = l.overrides ?? [];
   return {
     id: l.id,
     tag: l.tag,
@@ -118,10 +118,10 @@ async function panelDetailOf(p: Panel & { job: Job }): Promise<PanelDetail> {
     markupPercent: p.markupPercent,
     labourRate: p.labourRate,
     rollup: (p.rollup ?? null) as PanelRollup | null,
-    job: jobView(p.job) as unknown as PanelDetail['job'], // dates travel as ISO strings
+    job: jobView(p.job) as unknown as PanelDetail['job'], // cast: the view's dates travel as ISO strings in the JSON answer
     loads: loads.map(loadView).map((l) => (l.overrides.length ? l : { ...l, effective: null })),
     comments: comments.map(
-      (c): CommentView => ({ id: c.id, loadId: c.loadId, body: c.body, author: (c as unknown as { author?: { name: string } }).author?.name ?? null, at: c.createdAt.toISOString() }),
+      (c): CommentView => ({ id: c.id, loadId: c.loadId, body: c.body, author: c.authorName, at: c.createdAt.toISOString() }),
     ),
     revisions: revisions.map((r) => ({ ...r, approvedAt: new Date(r.approvedAt).toISOString() })),
   };
@@ -183,8 +183,8 @@ export async function openBomChange(actor: CurrentUser, p: Panel & { job: Job },
 /** Recomputes the panel roll-up from the motors' stored selections (the rules do not run again). */
 async function refreshRollup(p: Panel & { job: Job }, t: Transaction) {
   const loads = (await repo.loadsOf(p.id, t)).filter((l) => l.selection);
-  const rollup = rollupOf(p.job, loads.map((l) => l.answers as LoadInput), loads.map((l) => l.selection as unknown as LoadSelection));
-  p.rollup = rollup as unknown as Record<string, unknown> | null;
+  const rollup = rollupOf(p.job, loads.map((l) => l.answers), loads.map((l) => l.selection!)); // filtered above
+  p.rollup = rollup;
   p.changed('rollup', true);
 }
 
@@ -197,12 +197,12 @@ export async function reselectPanel(p: Panel & { job: Job }, t: Transaction) {
   const out = await selectAll(p.job, loads.map((l) => l.answers as LoadInput));
   if (out) {
     await repo.saveLoads(
-      loads.map((l, i) => ({ ...l.get({ plain: true }), selection: out.results[i] as unknown as Record<string, unknown>, version: l.version + 1 })),
+      loads.map((l, i) => ({ ...l.get({ plain: true }), selection: out.results[i], version: l.version + 1 })),
       t,
       ['selection', 'version', 'updatedAt'],
     );
   }
-  p.rollup = out ? (out.panel as unknown as Record<string, unknown>) : null;
+  p.rollup = out ? (out.panel) : null;
   p.changed('rollup', true);
 }
 
@@ -229,7 +229,7 @@ export async function addLoad(actor: CurrentUser, panelId: number, answers: unkn
     const selection = await selectOne(p.job, input);
     const position = await repo.lastLoadPosition(p.id, t);
     const l = await repo.createLoad(
-      { organisationId: actor.organisationId, panelId: p.id, tag: input.tag, position: position + 1, answers: input as Record<string, unknown>, selection: selection as unknown as Record<string, unknown>, overrides: [] },
+      { organisationId: actor.organisationId, panelId: p.id, tag: input.tag, position: position + 1, answers: input, selection: selection, overrides: [] },
       t,
     );
     await refreshRollup(p, t);
@@ -264,7 +264,7 @@ export async function addLoads(actor: CurrentUser, panelId: number, answersList:
   const rows = answersList.map((a, i) => {
     if (tags.has(a.tag.toLowerCase())) throw new ValidationError(`Tag ${a.tag} is already on this panel`, [{ path: `rows[${i}].tag`, message: 'already on this panel' }]);
     tags.add(a.tag.toLowerCase());
-    return { organisationId: actor.organisationId, panelId: p.id, tag: a.tag, position: ++position, answers: a as Record<string, unknown>, selection: out!.results[i] as unknown as Record<string, unknown>, overrides: [] };
+    return { organisationId: actor.organisationId, panelId: p.id, tag: a.tag, position: ++position, answers: a, selection: out!.results[i], overrides: [] };
   });
   await repo.saveLoads(rows, t);
   await refreshRollup(p, t);
@@ -295,7 +295,7 @@ export async function updateLoad(actor: CurrentUser, loadId: number, answers: un
     }
     const count = await repo.updateLoad(
       l.id,
-      { tag: input.tag, answers: input as Record<string, unknown>, selection: selection as unknown as Record<string, unknown>, version: version + 1 },
+      { tag: input.tag, answers: input, selection: selection, version: version + 1 },
       t,
       version,
     );
@@ -333,7 +333,7 @@ export async function bulkEdit(actor: CurrentUser, panelId: number, loadIds: num
     const out = await selectAll(p.job, inputs);
     // one statement for all the motors
     await repo.saveLoads(
-      loads.map((l, i) => ({ ...l.get({ plain: true }), answers: inputs[i] as Record<string, unknown>, selection: out!.results[i] as unknown as Record<string, unknown>, version: l.version + 1 })),
+      loads.map((l, i) => ({ ...l.get({ plain: true }), answers: inputs[i], selection: out!.results[i], version: l.version + 1 })),
       t,
       ['answers', 'selection', 'version', 'updatedAt'],
     );
@@ -348,21 +348,22 @@ export async function setOverrides(actor: CurrentUser, loadId: number, overrides
   return changePanel(actor, found.panelId, null, `overrides on ${found.tag}`, async (p, t) => {
     const l = (await repo.findLoad(actor.organisationId, loadId, t))!;
     if (l.version !== version) throw new ConflictError(`Someone else changed motor ${l.tag}: reload and apply your change again`);
-    const sel = l.selection as unknown as LoadSelection | null;
+    const sel = l.selection;
     if (!sel) throw new ValidationError('This motor has no selection to override');
     const fields = new Set<string>();
-    const previous = new Map(((l.overrides ?? []) as unknown as StoredOverride[]).map((o) => [o.field, o]));
+    const previous = new Map((l.overrides ?? []).map((o) => [o.field, o]));
     const stored: StoredOverride[] = overrides.map((o, i) => {
       if (fields.has(o.field)) throw new ValidationError(`${o.field} is overridden twice`, [{ path: `body.overrides[${i}].field`, message: 'duplicate' }]);
       fields.add(o.field);
       const warnings = checkOverride(sel, o, i);
       const [a, b] = o.field.split('.');
-      const was = (sel as unknown as Record<string, Record<string, unknown>>)[a]?.[b] ?? null;
+      const card: unknown = Reflect.get(sel, a!);
+      const was: unknown = card && typeof card === 'object' ? (Reflect.get(card, b!) ?? null) : null;
       const prev = previous.get(o.field);
       const same = prev && prev.value === o.value && prev.justification === o.justification;
       return { ...o, was, warnings, by: same ? prev.by : actor.name, at: same ? prev.at : new Date().toISOString() };
     });
-    await repo.updateLoad(l.id, { overrides: stored as unknown as Array<Record<string, unknown>>, version: version + 1 }, t);
+    await repo.updateLoad(l.id, { overrides: stored, version: version + 1 }, t);
     await recordActivity(
       actor,
       { entity: 'load', entityId: l.id, jobId: p.jobId, panelId: p.id, action: 'override', summary: `Overrides on ${l.tag}: ${stored.map((o) => `${o.field} = ${o.value}`).join('; ') || 'none'}`, diff: { overrides: stored } },
