@@ -5,6 +5,7 @@ import { BulkEditSchema, CommentInputSchema, PanelInputSchema, PanelUpdateSchema
 import { JobUpdateSchema } from '../../../shared/schemas/job';
 import { OverridesPutSchema } from '../../../shared/schemas/override';
 import * as service from './service';
+import * as motors from './motors';
 import * as ruleCheck from './rule-check';
 
 
@@ -75,7 +76,7 @@ export const panelRoutes = [
     summary: 'Add a motor',
     params: PanelId,
     body: z.object({ answers: z.record(z.string(), z.unknown()), panelVersion: z.number().int().min(0).optional() }),
-    handler: ({ user, params, body }) => service.addLoad(user, params.panelId, body.answers, body.panelVersion ?? null),
+    handler: ({ user, params, body }) => motors.addLoad(user, params.panelId, body.answers, body.panelVersion ?? null),
   }),
   defineRoute({
     method: 'post',
@@ -85,7 +86,7 @@ export const panelRoutes = [
     params: PanelId,
     body: BulkEditSchema,
     status: 200,
-    handler: ({ user, params, body }) => service.bulkEdit(user, params.panelId, body.loadIds, body.changes, body.panelVersion),
+    handler: ({ user, params, body }) => motors.bulkEdit(user, params.panelId, body.loadIds, body.changes, body.panelVersion),
   }),
   defineRoute({
     method: 'put',
@@ -94,10 +95,10 @@ export const panelRoutes = [
     summary: "Change a motor's answers",
     params: LoadId,
     body: LoadBody.extend({ version: z.number().int().min(0) }),
-    handler: ({ user, params, body }) => service.updateLoad(user, params.loadId, body.answers, body.version),
+    handler: ({ user, params, body }) => motors.updateLoad(user, params.loadId, body.answers, body.version),
   }),
-  defineRoute({ method: 'post', path: '/api/loads/:loadId/copy', access: ROLE_SETS.design, summary: 'Copy a motor', params: LoadId, handler: ({ user, params }) => service.copyLoad(user, params.loadId) }),
-  defineRoute({ method: 'delete', path: '/api/loads/:loadId', access: ROLE_SETS.design, summary: 'Remove a motor', params: LoadId, handler: ({ user, params }) => service.deleteLoad(user, params.loadId) }),
+  defineRoute({ method: 'post', path: '/api/loads/:loadId/copy', access: ROLE_SETS.design, summary: 'Copy a motor', params: LoadId, handler: ({ user, params }) => motors.copyLoad(user, params.loadId) }),
+  defineRoute({ method: 'delete', path: '/api/loads/:loadId', access: ROLE_SETS.design, summary: 'Remove a motor', params: LoadId, handler: ({ user, params }) => motors.deleteLoad(user, params.loadId) }),
   defineRoute({
     method: 'put',
     path: '/api/loads/:loadId/overrides',
@@ -105,7 +106,7 @@ export const panelRoutes = [
     summary: "Set a motor's overrides, each with a justification",
     params: LoadId,
     body: OverridesPutSchema,
-    handler: ({ user, params, body }) => service.setOverrides(user, params.loadId, body.overrides, body.version),
+    handler: ({ user, params, body }) => motors.setOverrides(user, params.loadId, body.overrides, body.version),
   }),
   defineRoute({
     method: 'get',
