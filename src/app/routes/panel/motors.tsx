@@ -9,6 +9,7 @@ import { Caution, Empty, ErrorNote } from '../../../components/ui/feedback';
 import { Button } from '../../../components/ui/button';
 import { inputClass } from '../../../components/ui/field';
 import { ENVIRONMENT_LABELS } from '../../../features/panels/components/answer-labels';
+import { ROLE_SETS } from '../../../../shared/schemas/auth';
 
 export function Component() {
   const panelId = Number(useParams().panelId);
@@ -20,7 +21,7 @@ export function Component() {
   const [bulkField, setBulkField] = useState('environment');
   const [bulkValue, setBulkValue] = useState('indoor-dusty');
   if (!p) return null;
-  const canEdit = hasRole(me, 'designer', 'admin') && p.status !== 'in_review';
+  const canEdit = hasRole(me, ...ROLE_SETS.design) && p.status !== 'in_review';
   const toggle = (id: number) => setSelected((s) => (s.includes(id) ? s.filter((x) => x !== id) : [...s, id]));
   const applyBulk = () => {
     const value = bulkField === 'critical' || bulkField === 'reverseRotationHazard' ? bulkValue === 'true' : bulkValue;
