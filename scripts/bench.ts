@@ -47,10 +47,11 @@ const num = (out: string, re: RegExp): number | null => {
 async function serve(url: string) {
   const { connectDatabase } = await import('../server/db/sequelize');
   const { createApp } = await import('../server/app');
+  const { changeFeed } = await import('../server/db/change-feed');
   connectDatabase(url, { poolMax: 20 });
   // every statement this server sends (sessions, people, panels), read by the bench over IPC
   let statements = 0;
-  const proto = pg.Client.prototype as unknown as { query: (...a: unknown[]) => unknown };
+  const proto: { query: (...a: unknown[]) => unknown } = pg.Client.prototype;
   const query = proto.query;
   proto.query = function (this: unknown, ...args: unknown[]) {
     statements++;
@@ -59,6 +60,7 @@ async function serve(url: string) {
   process.on('message', (m) => {
     if (m === 'statements') process.send?.({ statements });
   });
+  void changeFeed().start(url);
   const app = createApp({ databaseUrl: url, sessionSecret: 'bench-session-secret-not-for-use' });
   const server = app.listen(0, '127.0.0.1', () => console.log(`PORT ${(server.address() as AddressInfo).port}`));
   process.on('SIGTERM', () => {
@@ -124,7 +126,7 @@ async function load(base: string, urlPath: string, cookies: string[], seconds: n
 // ---- (d) -----------------------------------------------------------------------------------------
 /** Counts the statements the pg driver sends while fn runs (connection set-up left out). */
 async function countQueries<T>(fn: () => Promise<T>): Promise<{ count: number; value: T; texts: string[] }> {
-  const proto = pg.Client.prototype as unknown as { query: (...args: unknown[]) => unknown };
+  const proto: { query: (...args: unknown[]) => unknown } = pg.Client.prototype;
   const original = proto.query;
   const texts: string[] = [];
   proto.query = function (this: unknown, ...args: unknown[]) {
@@ -164,7 +166,7 @@ async function main() {
   const { Load } = await import('../server/db/models/load');
   const { DEMO_ORGANISATION, DEMO_USERS } = await import('../server/db/seeders/demo');
   const { DEMO_MOTORS } = await import('../server/db/seeders/demo-panels');
-  const { selectAll } = await import('../server/modules/panels/selection');
+  const { selectAll } = await import('../server/modules/selection/service');
   const { panelDetail } = await import('../server/modules/panels/service');
   const { findUserById } = await import('../server/modules/users/repository');
 
@@ -182,8 +184,8 @@ async function main() {
     for (const n of PANEL_MOTORS) {
       const answers = Array.from({ length: n }, (_, i) => ({ ...DEMO_MOTORS[i % DEMO_MOTORS.length]!, tag: `${DEMO_MOTORS[i % DEMO_MOTORS.length]!.tag}-${i + 1}` }));
       const out = await selectAll(job, answers);
-      const panel = await Panel.create({ organisationId: org.id, jobId: job.id, name: `Bench ${n} motors`, revisionNumber: null, archivedAt: null, rollup: out ? (out.panel as unknown as Record<string, unknown>) : null, submittedAt: null });
-      await Load.bulkCreate(answers.map((a, i) => ({ organisationId: org.id, panelId: panel.id, tag: a.tag, position: i + 1, answers: a as Record<string, unknown>, selection: out!.results[i] as unknown as Record<string, unknown>, overrides: [] })));
+      const panel = await Panel.create({ organisationId: org.id, jobId: job.id, name: `Bench ${n} motors`, revisionNumber: null, archivedAt: null, rollup: out ? (out.panel) : null, submittedAt: null });
+      await Load.bulkCreate(answers.map((a, i) => ({ organisationId: org.id, panelId: panel.id, tag: a.tag, position: i + 1, answers: a, selection: out!.results[i], overrides: [] })));
       panelIds[n] = panel.id;
     }
 

@@ -1,4 +1,5 @@
-// createApp(): the Express application, without listen (tests use it with supertest).
+// createApp(): the Express application, without listen (tests use it with supertest). It builds the app and
+// starts nothing: the process entry (server/index.ts) and the test set-ups start the change feed.
 import fs from 'node:fs';
 import path from 'node:path';
 import { randomBytes } from 'node:crypto';
@@ -10,16 +11,13 @@ import passport from 'passport';
 import pg from 'pg';
 import onHeaders from 'on-headers';
 import { configurePassport } from './modules/auth/passport';
-import { authRoutes, signInLimiter } from './modules/auth/router';
-import { userRoutes } from './modules/users/router';
-import { jobRoutes } from './modules/jobs/router';
-import { mailRoutes } from './modules/mail/router';
+import { signInLimiter } from './modules/auth/router';
 import { csrfProtection } from './middleware/csrf';
 import { CachedSessionStore } from './middleware/session-cache';
 import { changeFeed } from './db/change-feed';
 import { errorHandler, notFoundApi } from './middleware/errors';
-import { routeTable, toHandlers, type AnyRoute } from './http/route-table';
-import { extraRoutes } from './http/extra-routes';
+import { routeTable, toHandlers } from './http/route-table';
+import { allRoutes } from './http/routes';
 import { env } from './config/env';
 
 export interface AppOptions {
@@ -30,10 +28,6 @@ export interface AppOptions {
 }
 
 const SAFE_METHODS = new Set(['GET', 'HEAD', 'OPTIONS']);
-
-export function allRoutes(): AnyRoute[] {
-  return [...authRoutes(signInLimiter()), ...userRoutes, ...jobRoutes, ...mailRoutes, ...extraRoutes()];
-}
 
 export function createApp(opts: AppOptions): Express {
   const e = env();
@@ -64,9 +58,9 @@ export function createApp(opts: AppOptions): Express {
   const sessionPool = new pg.Pool({ connectionString: opts.databaseUrl, max: 10, connectionTimeoutMillis: 10_000, keepAlive: true });
   sessionPool.on('error', () => undefined); // an idle client dropped by the server; the pool reconnects
   app.locals.sessionPool = sessionPool;
-  // Per-process caches (sessions, signed-in users, panel pages) stay correct through the change feed.
+  // Per-process caches (sessions, signed-in users, panel pages) stay correct through the change feed; while
+  // it is not started (or down) every read asks the database. The caller starts it (startChangeFeed).
   const feed = changeFeed();
-  void feed.start(opts.databaseUrl);
   app.locals.changeFeed = feed;
   app.use('/api', (req, res, next) => {
     if (SAFE_METHODS.has(req.method)) return next();
@@ -94,7 +88,7 @@ export function createApp(opts: AppOptions): Express {
 
   const api = Router();
   routeTable.length = 0;
-  for (const spec of allRoutes()) {
+  for (const spec of allRoutes(signInLimiter())) {
     routeTable.push(spec);
     api[spec.method](spec.path, ...toHandlers(spec));
   }

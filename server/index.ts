@@ -3,7 +3,7 @@ import type { Server } from 'node:http';
 import { createApp } from './app';
 import { prepareDatabase } from './boot';
 import { closeDatabase } from './db/sequelize';
-import type { ChangeFeed } from './db/change-feed';
+import { changeFeed } from './db/change-feed';
 import { env, listenUrl } from './config/env';
 import { fakeSmtpPortOf, startFakeSmtp } from './modules/mail/fake-smtp';
 import { DEMO_USERS } from './db/seeders/demo';
@@ -15,6 +15,8 @@ export async function startServer(databaseUrl: string): Promise<Server> {
     console.warn(`[mail] development mail server not started: ${err.message}`);
     return null;
   });
+  const feed = changeFeed();
+  void feed.start(databaseUrl);
   const app = createApp({ databaseUrl, serveClient: true });
   const server = app.listen(e.PORT, e.HOST);
   await new Promise<void>((resolve, reject) => {
@@ -35,7 +37,7 @@ export async function startServer(databaseUrl: string): Promise<Server> {
     console.log(`\n${signal}: closing`);
     server.close(async () => {
       smtp?.close(() => undefined);
-      await (app.locals.changeFeed as ChangeFeed).stop();
+      await feed.stop();
       await closeDatabase();
       process.exit(0);
     });

@@ -44,7 +44,7 @@ export const routeTable: AnyRoute[] = [];
 export function defineRoute<BS extends Schema | undefined = undefined, QS extends Schema | undefined = undefined, PS extends Schema | undefined = undefined>(
   spec: RouteSpec<BS, QS, PS>,
 ): AnyRoute {
-  return spec as unknown as AnyRoute;
+  return spec as unknown as AnyRoute; // cast: the table holds routes of every schema; the handler's typed context is checked here, at the definition
 }
 
 function parsePart(schema: Schema | undefined, value: unknown, where: string) {

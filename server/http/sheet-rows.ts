@@ -47,7 +47,7 @@ export async function readSheetRows(buffer: Buffer, kind: 'xlsx' | 'csv', limits
   if (packageProblem) throw new UnsupportedFile(`The file was refused: ${packageProblem}`);
   const wb = new ExcelJS.Workbook();
   try {
-    await wb.xlsx.load(buffer as unknown as ArrayBuffer);
+    await wb.xlsx.load(new Uint8Array(buffer).buffer); // exceljs types its input as an ArrayBuffer (JSZip reads either)
   } catch {
     throw new UnsupportedFile('The workbook could not be read: save it again as .xlsx');
   }

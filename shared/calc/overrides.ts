@@ -74,12 +74,13 @@ export function checkOverride(sel: LoadSelection, o: OverrideInput, index = 0): 
 /** The effective selection: the engine's result with the overrides written over it. */
 export function applyOverrides(sel: LoadSelection, overrides: ReadonlyArray<Pick<StoredOverride, 'field' | 'value'>>): LoadSelection {
   if (!overrides.length) return sel;
-  const out = structuredClone(sel) as unknown as Record<string, Record<string, unknown>>;
+  const eff = structuredClone(sel);
   for (const o of overrides) {
     const [a, b] = o.field.split('.');
-    if (out[a] && typeof out[a] === 'object') out[a][b] = o.field === 'overload.tripClass' || o.field === 'scpd.ratingAmps' ? Number(o.value) : o.value;
+    // the field names a card and one of its values ("overload.tripClass"): the override fields' list is the schema
+    const card: unknown = Reflect.get(eff, a!);
+    if (card && typeof card === 'object') Reflect.set(card, b!, o.field === 'overload.tripClass' || o.field === 'scpd.ratingAmps' ? Number(o.value) : o.value);
   }
-  const eff = out as unknown as LoadSelection;
   // the overload relay's position follows the starter actually fitted (sizes stay the engine's)
   if (eff.starter.type !== sel.starter.type) {
     eff.overload.relay = relayFor(eff);

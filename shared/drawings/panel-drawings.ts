@@ -304,3 +304,14 @@ export interface DrawingsView {
   wires: WireRow[];
   buckets: Array<{ tag: string; starter: string; scheme: string; firstRung: number; rungs: number; overload: string; interlocked: Array<[string, string]> }>;
 }
+
+/** The drawing pages of a submittal: the SVG sheets, the terminal plan and the panel marking. */
+export interface SubmittalDrawings {
+  drawingNumber: string;
+  /** SVG sheets in order: supply, then one per bucket */
+  sheets: string[];
+  terminals: TerminalRow[];
+  bomTerminalBlocks: number;
+  colourPractice: string;
+  nameplateSvg: string | null;
+}

@@ -5,6 +5,27 @@ export const ROLES = ['admin', 'designer', 'estimator', 'engineer'] as const;
 export const RoleSchema = z.enum(ROLES);
 export type Role = z.infer<typeof RoleSchema>;
 
+/**
+ * Who may do what: one list per role set, used by the server's route table and the client's buttons alike.
+ * The order is the order a refusal names them in ("This needs the role admin or estimator").
+ */
+export const ROLE_SETS = {
+  /** every signed-in role: reading jobs, panels, bills of materials, checks; commenting */
+  everyone: ROLES,
+  /** people, mail outbox */
+  admin: ['admin'],
+  /** jobs, panels, motors, imports, backups: the panel builder's work */
+  design: ['admin', 'designer'],
+  /** sign-off decisions */
+  engineer: ['engineer'],
+  /** catalogue, labour units and prices */
+  estimate: ['admin', 'estimator'],
+  /** rebuilding a bill of materials from the selections */
+  rebuildBom: ['admin', 'estimator', 'designer'],
+  /** tested combinations are engineering data: the engineer keeps them too */
+  editCombinations: ['admin', 'estimator', 'engineer'],
+} as const satisfies Record<string, readonly Role[]>;
+
 export const ROLE_LABELS: Record<Role, string> = {
   admin: 'Administrator',
   designer: 'Panel builder',

@@ -66,3 +66,10 @@ export interface PanelChecks {
   connectionCards: MotorConnectionCard[];
   cautions: string[];
 }
+
+/** The cautions every check result carries (the checks page, the submittal, the motor list, the change report). */
+export const CHECK_CAUTIONS = [
+  'Results support, not replace, a qualified person’s design; a qualified person verifies them.',
+  'Local codes, the authority having jurisdiction, and the listing and instructions of the equipment take precedence.',
+  'De-energise and lock out before work. Check motor rotation before coupling the load.',
+];

@@ -156,3 +156,27 @@ export interface SignOffEligibility {
   /** why the sign-off is refused, in plain words, or null */
   reason: string | null;
 }
+
+/** A motor as frozen in a revision (the effective selection is there from the first release that froze it). */
+export interface FrozenLoad {
+  tag: string;
+  answers: unknown;
+  selection?: LoadSelection | null;
+  effective?: LoadSelection | null;
+  overrides?: StoredOverride[];
+}
+
+/**
+ * What a sign-off freezes (the `revisions.snapshot` column). Revisions frozen by earlier releases, or restored
+ * from a backup, may lack the later fields: `loads` and `sccr` are optional.
+ */
+export interface RevisionSnapshot {
+  panel?: { name: string; mounting: string; markupPercent: number; labourRate: number };
+  job?: Record<string, unknown>;
+  rollup?: PanelRollup | null;
+  loads?: FrozenLoad[];
+  bom: import('./catalogue').BomLine[];
+  totals: { sell: number; materialCost: number; labourHours: number } & Record<string, unknown>;
+  comment?: string;
+  sccr?: { panelSccrKa: number | null; availableFaultKa: number | null; verdict: string; acknowledged?: { finding: string; by: string; reason: string } | null };
+}

@@ -77,7 +77,7 @@ export async function api<T>(method: string, url: string, body?: unknown, init: 
     }
   }
   if (!res.ok) throw await toError(res);
-  if (init.raw) return res as unknown as T;
+  if (init.raw) return res as unknown as T; // cast: a raw call asks for the Response itself (T is Response there)
   if (res.status === 204) return undefined as T;
   return (await res.json()) as T;
 }

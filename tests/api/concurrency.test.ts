@@ -6,7 +6,7 @@ import { send, signInAs, testApp, type Session } from '../setup/api';
 import { db } from '../../server/db/sequelize';
 import { Load } from '../../server/db/models/load';
 import { findUserById } from '../../server/modules/users/repository';
-import { approvePanel } from '../../server/modules/panels/review';
+import { approvePanel } from '../../server/modules/review/service';
 import { rebuild } from '../../server/modules/bom/service';
 import { requirePanel } from '../../server/modules/panels/service';
 import type { CurrentUser, Role } from '../../shared/schemas/auth';
@@ -139,7 +139,7 @@ describe('concurrent edits and all-or-nothing writes', () => {
   it('bulk edit with one invalid motor changes no motor', async () => {
     const p = await newPanel('Bulk edit');
     // the last motor's stored answers are no longer valid (a DC field on an AC motor), as old data can be
-    await Load.update({ answers: { ...p.loads[2].answers, dcField: 'shunt' } }, { where: { id: p.loads[2].id } });
+    await Load.update({ answers: { ...p.loads[2].answers, dcField: 'shunt' } as Load['answers'] }, { where: { id: p.loads[2].id } });
     const before = await panelState(p.id);
     const v = (await designer.agent.get(`/api/panels/${p.id}`).expect(200)).body.version;
     const r = await send(designer, 'post', `/api/panels/${p.id}/loads/bulk-edit`, { loadIds: p.loads.map((l) => l.id), changes: { critical: true }, panelVersion: v });
@@ -155,7 +155,7 @@ describe('concurrent edits and all-or-nothing writes', () => {
     expect(await panelState(p.id)).toEqual(before);
 
     // with the motor's answers repaired, the same request goes through and changes every motor
-    await Load.update({ answers: p.loads[2].answers }, { where: { id: p.loads[2].id } });
+    await Load.update({ answers: p.loads[2].answers as Load['answers'] }, { where: { id: p.loads[2].id } });
     const ok = await send(designer, 'post', `/api/panels/${p.id}/loads/bulk-edit`, { loadIds: p.loads.map((l) => l.id), changes: { critical: true }, panelVersion: v }).expect(200);
     expect(ok.body.updated).toBe(3);
     for (const l of p.loads) expect((await Load.findByPk(l.id))!.answers.critical).toBe(true);

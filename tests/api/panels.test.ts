@@ -1,3 +1,4 @@
+import type { PanelRollup } from '../../shared/schemas/selection';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import ExcelJS from 'exceljs';
 import type { SMTPServer } from 'smtp-server';
@@ -352,7 +353,7 @@ describe('stored selections against the current rules', () => {
     sel.scpd.ratingAmps = 100;
     sel.relays.phaseReversal = false;
     sel.cautions = sel.cautions.slice(1);
-    await Load.update({ selection: sel as unknown as Record<string, unknown> }, { where: { id: added.id } });
+    await Load.update({ selection: sel as unknown as import('../../server/db/models/load').Load['selection'] }, { where: { id: added.id } });
 
     const check = (await designer.agent.get(`/api/panels/${panel.id}/rule-check`).expect(200)).body;
     expect(check.changed).toHaveLength(1);
@@ -390,7 +391,7 @@ describe('stored selections against the current rules', () => {
     // R-1's answers as an earlier release might have let them through; R-2's stored breaker differs
     await Load.update({ answers: { tag: 'R-1', supply: 'ac3', hp: 10, volts: 460, environment: 'indoor-dusty', poles: 3 } }, { where: { id: a.id } });
     const row = (await Load.findByPk(b.id))!;
-    await Load.update({ selection: { ...(row.selection as Record<string, unknown>), scpd: { ...((row.selection as { scpd: object }).scpd), ratingAmps: 1 } } }, { where: { id: b.id } });
+    await Load.update({ selection: { ...(row.selection as unknown as Record<string, unknown>), scpd: { ...((row.selection as unknown as { scpd: object }).scpd), ratingAmps: 1 } } as unknown as import('../../server/db/models/load').Load['selection'] }, { where: { id: b.id } });
     const check = (await designer.agent.get(`/api/panels/${panel.id}/rule-check`).expect(200)).body;
     expect(check.changed.map((c: { tag: string }) => c.tag)).toEqual(['R-1', 'R-2']);
     expect(check.changed[0].differences).toEqual([{ field: 'answers', label: 'Answers', from: 'accepted', to: expect.stringMatching(/^its answers no longer pass: .*poles/) }]);
@@ -569,11 +570,11 @@ describe('motors at another voltage than the supply (fedFrom)', () => {
     expect((await designer.agent.get(`/api/panels/${panel.id}/rule-check`).expect(200)).body.changed).toEqual([]);
     // the earlier release left the 230 V motor out of the feeder: its roll-up had no other sources
     const row = (await Panel.findByPk(panel.id))!;
-    const old = { ...(row.rollup as Record<string, unknown>) };
+    const old = { ...(row.rollup as unknown as Record<string, unknown>) };
     delete old.otherSources;
     delete old.externalMotors;
     delete old.otherLoadsAmps;
-    await Panel.update({ rollup: old }, { where: { id: panel.id } });
+    await Panel.update({ rollup: old as unknown as PanelRollup }, { where: { id: panel.id } });
     const check = (await designer.agent.get(`/api/panels/${panel.id}/rule-check`).expect(200)).body;
     expect(check.changed).toEqual([
       { loadId: expect.any(Number), tag: 'F-1', differences: [{ field: 'fedFrom', label: 'Fed from', from: 'left out of the feeder', to: 'T1, 3 kVA transformer 480-240/120 V single-phase' }] },

@@ -30,7 +30,7 @@ async function otherOrganisation() {
   const user = await User.create({ organisationId: org.id, email: `lead.${stamp}@brightwater.test`, name: 'Rosa Penhallow', roles: ['admin', 'designer'], passwordHash: await argon2.hash(password), inviteToken: null, lastSignInAt: null });
   const job = await Job.create({ organisationId: org.id, number: 'J-2041', name: 'Other shop, same job number', archivedAt: null, createdBy: user.id });
   const panel = await Panel.create({ organisationId: org.id, jobId: job.id, name: 'Other MCC', revisionNumber: null, archivedAt: null, rollup: null, submittedAt: null });
-  const answers = { tag: 'X-1', supply: 'ac3', hp: 10, volts: 460 };
+  const answers = { tag: 'X-1', supply: 'ac3' as const, hp: 10, volts: 460 };
   const load = await Load.create({ organisationId: org.id, panelId: panel.id, tag: 'X-1', answers, selection: null, overrides: [] });
   await Comment.create({ organisationId: org.id, panelId: panel.id, loadId: null, userId: user.id, body: 'Private note of the other shop' });
   return { org, user, password, job, panel, load };

@@ -4,6 +4,7 @@ import request from 'supertest';
 import type { Express } from 'express';
 import { connectDatabase } from '../../server/db/sequelize';
 import { createApp } from '../../server/app';
+import { changeFeed } from '../../server/db/change-feed';
 import { DEMO_USERS } from '../../server/db/seeders/demo';
 
 let app: Express | null = null;
@@ -13,6 +14,7 @@ export function testApp(): Express {
     process.env.PW_SIGNIN_LIMIT ??= '1000';
     const url = inject('databaseUrl');
     connectDatabase(url, { poolMax: 10 });
+    void changeFeed().start(url);
     app = createApp({ databaseUrl: url, sessionSecret: 'test-secret-for-sessions-only' });
   }
   return app;

@@ -42,8 +42,10 @@ export default async function setup(project: TestProject) {
   const { closeDatabase } = await import('../../server/db/sequelize');
   const { createApp } = await import('../../server/app');
   const { startFakeSmtp } = await import('../../server/modules/mail/fake-smtp');
+  const { changeFeed } = await import('../../server/db/change-feed');
   await prepareDatabase(url, { seed: true });
   const smtp = await startFakeSmtp(smtpPort);
+  void changeFeed().start(url);
   const app = createApp({ databaseUrl: url, sessionSecret: 'e2e-session-secret-1234', serveClient: true });
   const server = app.listen(0, '127.0.0.1');
   await new Promise<void>((resolve) => server.once('listening', () => resolve()));

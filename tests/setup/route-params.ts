@@ -6,7 +6,7 @@ import { Panel } from '../../server/db/models/panel';
 import { Load } from '../../server/db/models/load';
 import { Organisation } from '../../server/db/models/organisation';
 import { DEMO_ORGANISATION } from '../../server/db/seeders/demo';
-import { selectOne } from '../../server/modules/panels/selection';
+import { selectOne } from '../../server/modules/selection/service';
 import { CatalogueItem } from '../../server/db/models/catalogue-item';
 import { BomLineRow } from '../../server/db/models/bom-line';
 import { CombinationRatingRow } from '../../server/db/models/combination-rating';
@@ -18,7 +18,7 @@ export async function paramValues(): Promise<Record<string, string>> {
   const user = await User.findOne({ where: { organisationId, email: 'estimator@copperline.test' } });
   const panel = await Panel.create({ organisationId, jobId: job.id, name: 'Role matrix panel', revisionNumber: null, archivedAt: null, rollup: null, submittedAt: null });
   const answers = { tag: 'RM-1', supply: 'ac3' as const, hp: 10, volts: 460 };
-  const load = await Load.create({ organisationId, panelId: panel.id, tag: 'RM-1', answers, selection: (await selectOne(job, answers)) as unknown as Record<string, unknown>, overrides: [] });
+  const load = await Load.create({ organisationId, panelId: panel.id, tag: 'RM-1', answers, selection: await selectOne(job, answers), overrides: [] });
   const item = await CatalogueItem.create({
     organisationId, code: `RM-ITEM-${Date.now().toString(36).toUpperCase()}`, category: 'fuse', description: 'Role matrix fuse',
     ratings: { volts: 600, amps: 10, fuseClass: 'CC', timeDelay: true }, sccrKa: null, unitCost: 5, active: false,

@@ -1,6 +1,7 @@
 import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
 import type { Organisation } from './organisation';
 import type { Panel } from './panel';
+import type { BomLine } from '../../../shared/schemas/catalogue';
 
 /** One stored bill-of-materials line; `line` holds the shared BomLine shape with its frozen unit cost. */
 export class BomLineRow extends Model<InferAttributes<BomLineRow>, InferCreationAttributes<BomLineRow>> {
@@ -8,7 +9,7 @@ export class BomLineRow extends Model<InferAttributes<BomLineRow>, InferCreation
   declare organisationId: ForeignKey<Organisation['id']>;
   declare panelId: ForeignKey<Panel['id']>;
   declare position: number;
-  declare line: Record<string, unknown>;
+  declare line: BomLine;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 

@@ -1,6 +1,9 @@
 import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
 import type { Organisation } from './organisation';
 import type { Panel } from './panel';
+import type { LoadInput } from '../../../shared/schemas/load';
+import type { LoadSelection } from '../../../shared/schemas/selection';
+import type { StoredOverride } from '../../../shared/schemas/override';
 
 /** A motor on a panel: the designer's answers, the engine's stored selection and the designer's overrides. */
 export class Load extends Model<InferAttributes<Load>, InferCreationAttributes<Load>> {
@@ -9,9 +12,11 @@ export class Load extends Model<InferAttributes<Load>, InferCreationAttributes<L
   declare panelId: ForeignKey<Panel['id']>;
   declare position: CreationOptional<number>;
   declare tag: string;
-  declare answers: Record<string, unknown>;
-  declare selection: Record<string, unknown> | null;
-  declare overrides: CreationOptional<Array<Record<string, unknown>>>;
+  /** the motor's answers as parsed by LoadSchema when saved */
+  declare answers: LoadInput;
+  /** the engine's stored selection (a snapshot: a rule change does not rewrite it) */
+  declare selection: LoadSelection | null;
+  declare overrides: CreationOptional<StoredOverride[]>;
   declare version: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;

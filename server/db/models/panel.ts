@@ -2,6 +2,8 @@ import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAtt
 import type { Organisation } from './organisation';
 import type { Job } from './job';
 import type { Load } from './load';
+import type { PanelState } from '../../../shared/schemas/panel';
+import type { PanelRollup } from '../../../shared/schemas/selection';
 
 export class Panel extends Model<InferAttributes<Panel>, InferCreationAttributes<Panel>> {
   declare id: CreationOptional<number>;
@@ -10,14 +12,14 @@ export class Panel extends Model<InferAttributes<Panel>, InferCreationAttributes
   declare name: string;
   declare description: CreationOptional<string>;
   declare mounting: CreationOptional<string>;
-  declare status: CreationOptional<string>;
+  declare status: CreationOptional<PanelState>;
   declare revisionNumber: number | null;
   declare markupPercent: CreationOptional<number>;
   declare labourRate: CreationOptional<number>;
   /** equipment listed for 75 °C conductors (110.14(C)(1)(a)(3)); null: not answered, taken as yes and flagged */
   declare terminationsListed75C: CreationOptional<boolean | null>;
   declare archivedAt: Date | null;
-  declare rollup: Record<string, unknown> | null;
+  declare rollup: PanelRollup | null;
   declare submittedAt: Date | null;
   declare bomGeneratedAt: CreationOptional<Date | null>;
   declare version: CreationOptional<number>;

@@ -1,6 +1,7 @@
 import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
 import type { Organisation } from './organisation';
 import type { Panel } from './panel';
+import type { RevisionSnapshot } from '../../../shared/schemas/panel';
 
 /** A frozen, signed-off state of a panel: its loads, selections and bill of materials. */
 export class Revision extends Model<InferAttributes<Revision>, InferCreationAttributes<Revision>> {
@@ -8,7 +9,7 @@ export class Revision extends Model<InferAttributes<Revision>, InferCreationAttr
   declare organisationId: ForeignKey<Organisation['id']>;
   declare panelId: ForeignKey<Panel['id']>;
   declare number: number;
-  declare snapshot: Record<string, unknown>;
+  declare snapshot: RevisionSnapshot;
   declare approvedBy: number | null;
   declare approvedAt: Date;
   declare createdAt: CreationOptional<Date>;

@@ -4,7 +4,7 @@ import { Panel } from '../models/panel';
 import { Load } from '../models/load';
 import { Job } from '../models/job';
 import type { LoadInput } from '../../../shared/schemas/load';
-import { selectAll } from '../../modules/panels/selection';
+import { selectAll } from '../../modules/selection/service';
 import { regenerateBom } from '../../modules/bom/service';
 
 export const DEMO_MOTORS: LoadInput[] = [
@@ -31,7 +31,7 @@ export async function seedDemoPanels(organisationId: number, jobId: number, tran
       mounting: 'free-standing',
       revisionNumber: null,
       archivedAt: null,
-      rollup: out ? (out.panel as unknown as Record<string, unknown>) : null,
+      rollup: out ? (out.panel) : null,
       submittedAt: null,
     },
     { transaction },
@@ -42,8 +42,8 @@ export async function seedDemoPanels(organisationId: number, jobId: number, tran
       panelId: panel.id,
       tag: answers.tag,
       position: i + 1,
-      answers: answers as Record<string, unknown>,
-      selection: out!.results[i] as unknown as Record<string, unknown>,
+      answers,
+      selection: out!.results[i],
       overrides: [],
     })),
     { transaction },

@@ -1,8 +1,6 @@
 import type { Transaction } from 'sequelize';
-import { Op } from 'sequelize';
 import type { CurrentUser } from '../../../shared/schemas/auth';
-import { Activity } from '../../db/models/activity';
-import { User } from '../../db/models/user';
+import { actionsOnPanelBy, activityRows, insertActivity } from './repository';
 
 export interface ActivityInput {
   entity: string;
@@ -15,7 +13,7 @@ export interface ActivityInput {
 }
 
 export async function recordActivity(actor: CurrentUser, a: ActivityInput, transaction?: Transaction) {
-  await Activity.create(
+  await insertActivity(
     {
       organisationId: actor.organisationId,
       userId: actor.id,
@@ -27,18 +25,16 @@ export async function recordActivity(actor: CurrentUser, a: ActivityInput, trans
       panelId: a.panelId ?? null,
       diff: a.diff ?? null,
     },
-    { transaction },
+    transaction,
   );
 }
 
 export async function listActivity(actor: CurrentUser, where: { jobId?: number; entity?: string }, limit = 200) {
-  const rows = await Activity.findAll({
-    where: { organisationId: actor.organisationId, ...(where.jobId ? { jobId: where.jobId } : {}), ...(where.entity ? { entity: where.entity } : {}) },
-    include: [{ model: User, as: 'user', attributes: ['name'] }],
-    order: [['id', 'DESC']],
+  const rows = await activityRows(
+    { organisationId: actor.organisationId, ...(where.jobId ? { jobId: where.jobId } : {}), ...(where.entity ? { entity: where.entity } : {}) },
     limit,
-  });
-  return rows.map((r) => ({
+  );
+  return rows.map(({ row: r, author }) => ({
     id: r.id,
     entity: r.entity,
     entityId: r.entityId,
@@ -46,7 +42,7 @@ export async function listActivity(actor: CurrentUser, where: { jobId?: number; 
     summary: r.summary,
     diff: r.diff,
     panelId: r.panelId,
-    user: (r as unknown as { user?: { name: string } }).user?.name ?? null,
+    user: author,
     at: r.createdAt,
   }));
 }
@@ -56,16 +52,5 @@ export async function listActivity(actor: CurrentUser, where: { jobId?: number; 
  * moment (the last sign-off), oldest first: entity, action, summary and diff.
  */
 export async function panelActionsBy(organisationId: number, panel: { id: number; jobId: number }, userId: number, since: Date | null, transaction?: Transaction) {
-  const rows = await Activity.findAll({
-    where: {
-      organisationId,
-      userId,
-      [Op.or]: [{ panelId: panel.id }, { jobId: panel.jobId, entity: 'job' }],
-      ...(since ? { createdAt: { [Op.gt]: since } } : {}),
-    },
-    attributes: ['entity', 'action', 'summary', 'diff'],
-    order: [['id', 'ASC']],
-    transaction,
-  });
-  return rows.map((r) => ({ entity: r.entity, action: r.action, summary: r.summary, diff: r.diff }));
+  return actionsOnPanelBy(organisationId, panel, userId, since, transaction);
 }

@@ -1,6 +1,6 @@
 // Reads a whole job for its backup and writes a restored one. Reads take one query per table
 // whatever the panel and motor counts.
-import { Op, type Transaction } from 'sequelize';
+import { Op, UniqueConstraintError, type CreationAttributes, type Transaction } from 'sequelize';
 import { Job } from '../../db/models/job';
 import { Panel } from '../../db/models/panel';
 import { Load } from '../../db/models/load';
@@ -39,4 +39,39 @@ export async function takenJobNumbers(organisationId: number, prefix: string, tr
   return new Set(rows.map((r) => r.number.toLowerCase()));
 }
 
-export { Job, Panel, Load, Comment, Revision, BomLineRow };
+// ---- writes of a restored job (all inside the import's transaction) ----
+
+export async function insertJob(values: CreationAttributes<Job>, transaction: Transaction) {
+  return Job.create(values, { transaction });
+}
+
+export async function insertPanel(values: CreationAttributes<Panel>, transaction: Transaction) {
+  return Panel.create(values, { transaction });
+}
+
+/** The motors in one statement; returns their new ids in the order given. */
+export async function insertLoads(rows: Array<CreationAttributes<Load>>, transaction: Transaction): Promise<number[]> {
+  return (await Load.bulkCreate(rows, { transaction, returning: true })).map((l) => l.id);
+}
+
+export async function insertComments(rows: Array<CreationAttributes<Comment>>, transaction: Transaction) {
+  await Comment.bulkCreate(rows, { transaction });
+}
+
+export async function insertRevisions(rows: Array<CreationAttributes<Revision>>, transaction: Transaction) {
+  await Revision.bulkCreate(rows, { transaction });
+}
+
+export async function insertBomLines(rows: Array<CreationAttributes<BomLineRow>>, transaction: Transaction) {
+  await BomLineRow.bulkCreate(rows, { transaction });
+}
+
+/** Marks the panel's bill of materials generated now, without touching the panel's own stamp. */
+export async function markBomCurrent(panelId: number, transaction: Transaction) {
+  await Panel.update({ bomGeneratedAt: new Date() }, { where: { id: panelId }, transaction, silent: true });
+}
+
+/** A unique index refused the write (two imports took the same job number at once). */
+export function isUniqueViolation(err: unknown): boolean {
+  return err instanceof UniqueConstraintError;
+}

@@ -1,12 +1,11 @@
 import multer from 'multer';
 import type { RequestHandler } from 'express';
 import { defineRoute } from '../../http/route-table';
-import { IdParamSchema } from '../../../shared/schemas/auth';
+import { IdParamSchema, ROLE_SETS } from '../../../shared/schemas/auth';
 import { DomainError } from '../../../shared/errors';
 import * as service from './service';
 import { JobBackupSchema, MAX_BACKUP_BYTES } from './schema';
 
-const EDIT = ['admin', 'designer'] as const;
 
 const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: MAX_BACKUP_BYTES, files: 1, fields: 0, parts: 1 } }).single('file');
 
@@ -32,7 +31,7 @@ export const backupRoutes = [
   defineRoute({
     method: 'get',
     path: '/api/jobs/:id/export',
-    access: EDIT,
+    access: ROLE_SETS.design,
     summary: 'Export a whole job as a JSON backup',
     params: IdParamSchema,
     handler: async ({ user, params, res }) => {
@@ -45,7 +44,7 @@ export const backupRoutes = [
   defineRoute({
     method: 'post',
     path: '/api/jobs/import',
-    access: EDIT,
+    access: ROLE_SETS.design,
     summary: 'Create a new job from a JSON backup (all or nothing)',
     before: [upload, backupFile],
     body: JobBackupSchema,

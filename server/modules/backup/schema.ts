@@ -4,7 +4,9 @@
 import { z } from 'zod';
 import { countSchema, positionSchema } from '../../../shared/schemas/bounds';
 import { CODE_EDITIONS } from '../../../shared/schemas/job';
-import { MOUNTINGS, PANEL_STATES } from '../../../shared/schemas/panel';
+import { MOUNTINGS, PANEL_STATES, type RevisionSnapshot } from '../../../shared/schemas/panel';
+import type { LoadInput } from '../../../shared/schemas/load';
+import type { LoadSelection, PanelRollup } from '../../../shared/schemas/selection';
 import { OVERRIDE_FIELDS, type OverrideField } from '../../../shared/schemas/override';
 import { BomLineSchema } from '../../../shared/schemas/catalogue';
 
@@ -16,6 +18,11 @@ export const MAX_BACKUP_BYTES = 20 * 1024 * 1024;
 const isoDate = z.iso.datetime({ offset: true });
 const person = z.object({ email: z.string().max(320), name: z.string().max(200) }).strict().nullable();
 const json = z.record(z.string(), z.unknown());
+/**
+ * A JSON object carried as it was frozen, typed as the column it goes back into: checked here as an object
+ * (the same check as `json`); the answers are parsed again by LoadSchema before the import writes.
+ */
+const jsonOf = <T>() => z.custom<T>((v) => json.safeParse(v).success, { message: 'Invalid input: expected an object' });
 
 const BackupOverrideSchema = z
   .object({
@@ -34,8 +41,8 @@ const BackupLoadSchema = z
     ref: z.string().min(1).max(40),
     tag: z.string().trim().min(1).max(40),
     position: positionSchema,
-    answers: json,
-    selection: json.nullable(),
+    answers: jsonOf<LoadInput>(),
+    selection: jsonOf<LoadSelection>().nullable(),
     overrides: z.array(BackupOverrideSchema).max(20),
   })
   .strict();
@@ -54,7 +61,7 @@ const BackupRevisionSchema = z
     number: countSchema,
     approvedBy: person,
     approvedAt: isoDate,
-    snapshot: json,
+    snapshot: jsonOf<RevisionSnapshot>(),
   })
   .strict();
 
@@ -75,7 +82,7 @@ const BackupPanelSchema = z
     bomGeneratedAt: isoDate.nullable(),
     /** whether the stored bill of materials was older than the panel's last change */
     bomStale: z.boolean(),
-    rollup: json.nullable(),
+    rollup: jsonOf<PanelRollup>().nullable(),
     loads: z.array(BackupLoadSchema).max(2000),
     comments: z.array(BackupCommentSchema).max(5000),
     revisions: z.array(BackupRevisionSchema).max(500),

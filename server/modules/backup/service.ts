@@ -1,12 +1,10 @@
 // Job backup: export a whole job (panels, motors with answers, selections and overrides, comments,
 // frozen revisions, bill-of-materials lines) as one JSON document, and import it back as a new job
 // in one transaction.
-import { UniqueConstraintError } from 'sequelize';
 import { db } from '../../db/sequelize';
 import type { CurrentUser } from '../../../shared/schemas/auth';
 import type { PanelState } from '../../../shared/schemas/panel';
 import { LoadSchema } from '../../../shared/schemas/load';
-import type { BomLine } from '../../../shared/schemas/catalogue';
 import { ConflictError, NotFoundError, ValidationError, zodIssues } from '../../../shared/errors';
 import { recordActivity } from '../activity/service';
 import * as repo from './repository';
@@ -65,7 +63,7 @@ export async function exportJob(actor: CurrentUser, jobId: number): Promise<JobB
           position: l.position,
           answers: l.answers,
           selection: l.selection,
-          overrides: (l.overrides ?? []) as unknown as JobBackup['panels'][number]['loads'][number]['overrides'],
+          overrides: l.overrides ?? [],
         })),
         comments: comments
           .filter((c) => c.panelId === p.id)
@@ -73,7 +71,7 @@ export async function exportJob(actor: CurrentUser, jobId: number): Promise<JobB
         revisions: revisions
           .filter((r) => r.panelId === p.id)
           .map((r) => ({ number: r.number, approvedBy: person(r.approvedBy), approvedAt: r.approvedAt.toISOString(), snapshot: r.snapshot })),
-        bomLines: bomLines.filter((b) => b.panelId === p.id).map((b) => b.line as unknown as BomLine),
+        bomLines: bomLines.filter((b) => b.panelId === p.id).map((b) => b.line),
       };
     }),
   };
@@ -119,10 +117,10 @@ export async function importJob(actor: CurrentUser, backup: JobBackup, opts: Imp
       const userOf = (p: { email: string } | null) => (p ? (userIds.get(p.email) ?? null) : null);
 
       const { archivedAt, ...jobValues } = backup.job;
-      const job = await repo.Job.create({ ...jobValues, number, organisationId, createdBy: actor.id, archivedAt: archivedAt ? new Date(archivedAt) : null }, { transaction: t });
+      const job = await repo.insertJob({ ...jobValues, number, organisationId, createdBy: actor.id, archivedAt: archivedAt ? new Date(archivedAt) : null }, t);
       let motors = 0;
       for (const p of backup.panels) {
-        const panel = await repo.Panel.create(
+        const panel = await repo.insertPanel(
           {
             organisationId,
             jobId: job.id,
@@ -139,34 +137,34 @@ export async function importJob(actor: CurrentUser, backup: JobBackup, opts: Imp
             bomGeneratedAt: p.bomGeneratedAt ? new Date(p.bomGeneratedAt) : null,
             rollup: p.rollup,
           },
-          { transaction: t },
+          t,
         );
-        const created = await repo.Load.bulkCreate(
-          p.loads.map((l) => ({ organisationId, panelId: panel.id, tag: l.tag, position: l.position, answers: l.answers, selection: l.selection, overrides: l.overrides as unknown as Array<Record<string, unknown>> })),
-          { transaction: t, returning: true },
+        const createdIds = await repo.insertLoads(
+          p.loads.map((l) => ({ organisationId, panelId: panel.id, tag: l.tag, position: l.position, answers: l.answers, selection: l.selection, overrides: l.overrides })),
+          t,
         );
-        motors += created.length;
-        const loadIds = new Map(p.loads.map((l, i) => [l.ref, created[i]!.id]));
+        motors += createdIds.length;
+        const loadIds = new Map(p.loads.map((l, i) => [l.ref, createdIds[i]!]));
         if (p.comments.length) {
-          await repo.Comment.bulkCreate(
+          await repo.insertComments(
             p.comments.map((c) => ({ organisationId, panelId: panel.id, loadId: c.loadRef ? loadIds.get(c.loadRef)! : null, userId: userOf(c.author), body: c.body, createdAt: new Date(c.at) })),
-            { transaction: t },
+            t,
           );
         }
         if (p.revisions.length) {
-          await repo.Revision.bulkCreate(
+          await repo.insertRevisions(
             p.revisions.map((r) => ({ organisationId, panelId: panel.id, number: r.number, snapshot: r.snapshot, approvedBy: userOf(r.approvedBy), approvedAt: new Date(r.approvedAt) })),
-            { transaction: t },
+            t,
           );
         }
         if (p.bomLines.length) {
-          await repo.BomLineRow.bulkCreate(
-            p.bomLines.map((line, position) => ({ organisationId, panelId: panel.id, position, line: line as unknown as Record<string, unknown> })),
-            { transaction: t },
+          await repo.insertBomLines(
+            p.bomLines.map((line, position) => ({ organisationId, panelId: panel.id, position, line: line })),
+            t,
           );
         }
         // A bill of materials that was current when exported stays current (not older than the panel row).
-        if (p.bomGeneratedAt && !p.bomStale) await repo.Panel.update({ bomGeneratedAt: new Date() }, { where: { id: panel.id }, transaction: t, silent: true });
+        if (p.bomGeneratedAt && !p.bomStale) await repo.markBomCurrent(panel.id, t);
       }
       await recordActivity(
         actor,
@@ -177,7 +175,7 @@ export async function importJob(actor: CurrentUser, backup: JobBackup, opts: Imp
       return { id: job.id, number, panels: backup.panels.length, motors };
     });
   } catch (err) {
-    if (err instanceof UniqueConstraintError) throw new ConflictError('Another import or new job took the same job number at the same moment: import again');
+    if (repo.isUniqueViolation(err)) throw new ConflictError('Another import or new job took the same job number at the same moment: import again');
     throw err;
   }
 }

@@ -1,18 +1,14 @@
 import type { Response } from 'express';
 import { z } from 'zod';
 import { idParamSchema } from '../../../shared/schemas/bounds';
-import { defineRoute, type AnyRoute } from '../../http/route-table';
+import { defineRoute } from '../../http/route-table';
 import { attachment } from '../../http/attachment';
-import { IdParamSchema } from '../../../shared/schemas/auth';
+import { IdParamSchema, ROLE_SETS } from '../../../shared/schemas/auth';
 import { BomCategorySchema, PartCodeSchema, UnitSchema } from '../../../shared/schemas/catalogue';
-import { catalogueRoutes } from '../catalogue/router';
 import { requirePanel } from '../panels/service';
 import { writeBomCsv, writeBomWorkbook, type BomExportJob, type BomExportPanel } from './export';
 import * as service from './service';
 
-const ALL = ['admin', 'designer', 'estimator', 'engineer'] as const;
-const REBUILD = ['admin', 'estimator', 'designer'] as const;
-const ESTIMATE = ['admin', 'estimator'] as const;
 
 const PanelId = z.object({ panelId: idParamSchema });
 const LineId = PanelId.extend({ lineId: idParamSchema });
@@ -55,7 +51,7 @@ export const bomRoutes = [
   defineRoute({
     method: 'get',
     path: '/api/panels/:panelId/bom',
-    access: ALL,
+    access: ROLE_SETS.everyone,
     summary: "A panel's bill of materials with totals and the stale flag",
     params: PanelId,
     handler: async ({ user, params }) => service.storedBom(user, await requirePanel(user, params.panelId)),
@@ -63,7 +59,7 @@ export const bomRoutes = [
   defineRoute({
     method: 'post',
     path: '/api/panels/:panelId/bom/rebuild',
-    access: REBUILD,
+    access: ROLE_SETS.rebuildBom,
     summary: 'Rebuild the automatic lines from the selections (manual lines and swaps kept; reprice to take today\'s catalogue prices)',
     params: PanelId,
     body: z.object({ reprice: z.boolean().default(false) }).strict(),
@@ -76,7 +72,7 @@ export const bomRoutes = [
   defineRoute({
     method: 'post',
     path: '/api/panels/:panelId/bom/lines',
-    access: ESTIMATE,
+    access: ROLE_SETS.estimate,
     summary: 'Add a manual line (freight, engineering hours, spares …)',
     params: PanelId,
     body: ManualLineBody,
@@ -85,7 +81,7 @@ export const bomRoutes = [
   defineRoute({
     method: 'patch',
     path: '/api/panels/:panelId/bom/lines/:lineId',
-    access: ESTIMATE,
+    access: ROLE_SETS.estimate,
     summary: 'Change a manual line, or swap a line for an equivalent catalogue item with a reason',
     params: LineId,
     body: LinePatchBody,
@@ -94,7 +90,7 @@ export const bomRoutes = [
   defineRoute({
     method: 'delete',
     path: '/api/panels/:panelId/bom/lines/:lineId',
-    access: ESTIMATE,
+    access: ROLE_SETS.estimate,
     summary: 'Remove a manual line',
     params: LineId,
     handler: async ({ user, params }) => {
@@ -105,7 +101,7 @@ export const bomRoutes = [
   defineRoute({
     method: 'get',
     path: '/api/panels/:panelId/bom/lines/:lineId/alternatives',
-    access: ALL,
+    access: ROLE_SETS.everyone,
     summary: 'Active catalogue items of the same category a line may be swapped for',
     params: LineId,
     handler: ({ user, params }) => service.swapCandidates(user, params.panelId, params.lineId),
@@ -113,7 +109,7 @@ export const bomRoutes = [
   defineRoute({
     method: 'get',
     path: '/api/panels/:panelId/bom.xlsx',
-    access: ALL,
+    access: ROLE_SETS.everyone,
     summary: "A panel's bill of materials as .xlsx (streamed)",
     params: PanelId,
     handler: async ({ user, params, res }) => stream(res, await service.panelExport(user, params.panelId), 'xlsx'),
@@ -121,7 +117,7 @@ export const bomRoutes = [
   defineRoute({
     method: 'get',
     path: '/api/panels/:panelId/bom.csv',
-    access: ALL,
+    access: ROLE_SETS.everyone,
     summary: "A panel's bill of materials as .csv",
     params: PanelId,
     handler: async ({ user, params, res }) => stream(res, await service.panelExport(user, params.panelId), 'csv'),
@@ -129,7 +125,7 @@ export const bomRoutes = [
   defineRoute({
     method: 'get',
     path: '/api/jobs/:id/bom.xlsx',
-    access: ALL,
+    access: ROLE_SETS.everyone,
     summary: "A job's bill of materials (every panel not archived) as .xlsx (streamed)",
     params: IdParamSchema,
     handler: async ({ user, params, res }) => stream(res, await service.jobExport(user, params.id), 'xlsx'),
@@ -137,12 +133,9 @@ export const bomRoutes = [
   defineRoute({
     method: 'get',
     path: '/api/jobs/:id/bom.csv',
-    access: ALL,
+    access: ROLE_SETS.everyone,
     summary: "A job's bill of materials as .csv",
     params: IdParamSchema,
     handler: async ({ user, params, res }) => stream(res, await service.jobExport(user, params.id), 'csv'),
   }),
 ];
-
-/** The estimator's routes: catalogue, labour units and bills of materials. */
-export const estimatingRoutes: AnyRoute[] = [...catalogueRoutes, ...bomRoutes];

@@ -2,8 +2,8 @@
 // applied) and the organisation's catalogue, keeping the estimator's manual lines and swaps.
 import type { Transaction } from 'sequelize';
 import { db } from '../../db/sequelize';
-import { BomLineRow } from '../../db/models/bom-line';
-import { Panel } from '../../db/models/panel';
+import type { Panel } from '../../db/models/panel';
+import * as repo from './repository';
 import type { Job } from '../../db/models/job';
 import type { CurrentUser } from '../../../shared/schemas/auth';
 import { BomLineSchema, PANEL_BUCKET, type BomLine, type BomTotals, type CatalogueItem, type Requirement } from '../../../shared/schemas/catalogue';
@@ -73,7 +73,7 @@ async function buildLines(organisationId: number, panel: Panel & { job: Job }, t
   const selections = await effectiveSelections(panel.id, t);
   const catalogue = await catalogueFor(organisationId, t);
   const labourUnits = await labourUnitsFor(organisationId, t);
-  const rollup = (panel.rollup ?? { feeder: { minAmpacity: 0, conductorSize: 'none', ocpdMaxAmps: 0, basis: '' }, totalFlcAmps: 0, largestMotorTag: null }) as unknown as PanelRollup;
+  const rollup = (panel.rollup ?? { feeder: { minAmpacity: 0, conductorSize: 'none', ocpdMaxAmps: 0, basis: '' }, totalFlcAmps: 0, largestMotorTag: null } satisfies PanelRollup);
   const built = buildBom({
     panelName: panel.name,
     selections: selections.filter((s) => s.errors.length === 0),
@@ -118,14 +118,9 @@ export async function planBom(organisationId: number, panel: Panel & { job: Job 
 
 /** Rebuilds the automatic lines; manual lines stay, a swap stays on its line, and prices stay frozen unless `reprice`. */
 export async function regenerateBom(organisationId: number, panel: Panel & { job: Job }, t: Transaction, opts: RegenerateOptions = {}) {
-  const oldRows = await BomLineRow.findAll({ where: { panelId: panel.id }, order: [['position', 'ASC'], ['id', 'ASC']], transaction: t });
-  const lines = await planBom(organisationId, panel, oldRows.map((r) => r.line as unknown as BomLine), t, opts);
-  await BomLineRow.destroy({ where: { panelId: panel.id }, transaction: t });
-  await BomLineRow.bulkCreate(
-    lines.map((line, position) => ({ organisationId, panelId: panel.id, position, line: line as unknown as Record<string, unknown> })),
-    { transaction: t },
-  );
-  await Panel.update({ bomGeneratedAt: new Date() }, { where: { id: panel.id }, transaction: t, silent: true });
+  const oldRows = await repo.bomRowsOf(panel.id, t);
+  const lines = await planBom(organisationId, panel, oldRows.map((r) => r.line), t, opts);
+  await repo.replaceBomLines(organisationId, panel.id, lines, t);
   return lines;
 }
 
@@ -135,8 +130,8 @@ function designSignature(lines: readonly BomLine[]): string {
 }
 
 export async function storedBom(actor: CurrentUser, panel: Panel & { job: Job }): Promise<StoredBom> {
-  const rows = await BomLineRow.findAll({ where: { organisationId: actor.organisationId, panelId: panel.id }, order: [['position', 'ASC'], ['id', 'ASC']] });
-  const lines = rows.map((r) => ({ ...(r.line as unknown as BomLine), id: r.id, position: r.position }));
+  const rows = await repo.bomRowsFor(actor.organisationId, panel.id);
+  const lines = rows.map((r) => ({ ...r.line, id: r.id, position: r.position }));
   // Stale when a rebuild now would give other parts or quantities (motors, overrides or the catalogue changed).
   const plan = panel.bomGeneratedAt ? await planBom(actor.organisationId, panel, lines) : null;
   return {
@@ -159,8 +154,8 @@ export interface CurrentBom {
 
 /** The stored lines and whether they are still current; with none stored, the lines a rebuild would store (the same plan). */
 export async function currentBom(organisationId: number, panel: Panel & { job: Job }): Promise<CurrentBom> {
-  const rows = await BomLineRow.findAll({ where: { organisationId, panelId: panel.id }, order: [['position', 'ASC'], ['id', 'ASC']] });
-  const stored = rows.map((r) => r.line as unknown as BomLine);
+  const rows = await repo.bomRowsFor(organisationId, panel.id);
+  const stored = rows.map((r) => r.line);
   if (stored.length === 0) return { lines: await planBom(organisationId, panel, []), source: 'in-memory', stale: false };
   return { lines: stored, source: 'stored', stale: await bomOutOfDate(organisationId, panel, stored) };
 }
@@ -179,7 +174,7 @@ export async function bomOutOfDate(organisationId: number, panel: Panel & { job:
 export async function rebuild(actor: CurrentUser, panelRef: Panel & { job: Job }, opts: RegenerateOptions = {}) {
   await db().transaction(async (t) => {
     const panel = await lockedPanel(actor, panelRef.id, t);
-    const before = (await BomLineRow.findAll({ where: { panelId: panel.id }, order: [['position', 'ASC'], ['id', 'ASC']], transaction: t })).map((r) => r.line as unknown as BomLine);
+    const before = (await repo.bomRowsOf(panel.id, t)).map((r) => r.line);
     const dropped: string[] = [];
     const lines = await regenerateBom(actor.organisationId, panel, t, { ...opts, onDroppedSwap: (s, why) => dropped.push(`${s.code ?? 'a part'} on ${s.bucket} (${why})`) });
     if (designSignature(before) !== designSignature(lines)) await openBomChange(actor, panel, t, 'the bill of materials was rebuilt with other parts');
@@ -217,7 +212,7 @@ async function lockedPanel(actor: CurrentUser, panelId: number, t: Transaction) 
 }
 
 async function requireLine(panelId: number, lineId: number, t: Transaction) {
-  const r = await BomLineRow.findOne({ where: { id: lineId, panelId }, transaction: t });
+  const r = await repo.findBomLine(panelId, lineId, t);
   if (!r) throw new NotFoundError('Bill-of-materials line');
   return r;
 }
@@ -261,8 +256,7 @@ export async function addManualLine(actor: CurrentUser, panelId: number, input: 
       swapReason: null,
       requirement: null,
     });
-    const last = (await BomLineRow.max('position', { where: { panelId: panel.id }, transaction: t })) as number | null;
-    const row = await BomLineRow.create({ organisationId: actor.organisationId, panelId: panel.id, position: (last ?? -1) + 1, line: line as unknown as Record<string, unknown> }, { transaction: t });
+    const row = await repo.appendBomLine(actor.organisationId, panel.id, line, t);
     await recordActivity(
       actor,
       { entity: 'bom', entityId: panel.id, jobId: panel.jobId, panelId: panel.id, action: 'line-added', summary: `Added ${line.quantity} ${line.unit} "${line.description}" to ${panel.name}`, diff: { line } },
@@ -289,9 +283,9 @@ export interface LineChanges {
  */
 async function requirementOf(organisationId: number, panel: Panel & { job: Job }, lineId: number, line: BomLine, t?: Transaction): Promise<Requirement[] | null> {
   if (line.requirement !== undefined) return line.requirement;
-  const rows = await BomLineRow.findAll({ where: { panelId: panel.id }, order: [['position', 'ASC'], ['id', 'ASC']], transaction: t });
-  const auto = rows.filter((r) => (r.line as unknown as BomLine).source !== 'manual');
-  const key = ordinalKeys(auto.map((r) => r.line as unknown as BomLine))[auto.findIndex((r) => r.id === lineId)];
+  const rows = await repo.bomRowsOf(panel.id, t);
+  const auto = rows.filter((r) => r.line.source !== 'manual');
+  const key = ordinalKeys(auto.map((r) => r.line))[auto.findIndex((r) => r.id === lineId)];
   const { built } = await buildLines(organisationId, panel, t);
   const builtKeys = ordinalKeys(built.lines);
   return built.lines[builtKeys.indexOf(key ?? '')]?.requirement ?? null;
@@ -307,7 +301,7 @@ export async function updateLine(actor: CurrentUser, panelId: number, lineId: nu
   return db().transaction(async (t) => {
     const panel = await lockedPanel(actor, panelId, t);
     const row = await requireLine(panel.id, lineId, t);
-    const before = row.line as unknown as BomLine;
+    const before = row.line;
     await openBomChange(actor, panel, t, changes.swapCode !== undefined ? `${before.code ?? 'a line'} on ${before.bucket} was swapped in the bill of materials` : 'a line of the bill of materials was changed');
     let after: BomLine = { ...before };
     if (changes.swapCode !== undefined) {
@@ -347,7 +341,7 @@ export async function updateLine(actor: CurrentUser, panelId: number, lineId: nu
     }
     if (changes.swapCode === undefined && direct.length === 0) throw new ValidationError('Nothing to change', [{ path: 'body', message: 'give a quantity or a part to swap to' }]);
     after = checkLine(after);
-    await BomLineRow.update({ line: after as unknown as Record<string, unknown> }, { where: { id: row.id }, transaction: t });
+    await repo.updateBomLine(row.id, after, t);
     const diff = Object.fromEntries(Object.keys(after).filter((k) => JSON.stringify(after[k as keyof BomLine]) !== JSON.stringify(before[k as keyof BomLine])).map((k) => [k, [before[k as keyof BomLine], after[k as keyof BomLine]]]));
     const summary = changes.swapCode !== undefined
       ? `Swapped ${before.code ?? 'an unmatched line'} for ${after.code} in ${before.bucket} of ${panel.name}: ${after.swapReason}`
@@ -361,10 +355,10 @@ export async function deleteLine(actor: CurrentUser, panelId: number, lineId: nu
   await db().transaction(async (t) => {
     const panel = await lockedPanel(actor, panelId, t);
     const row = await requireLine(panel.id, lineId, t);
-    const line = row.line as unknown as BomLine;
+    const line = row.line;
     if (line.source !== 'manual') throw new ValidationError('Only manual lines are removed; the rebuild decides the automatic ones', [{ path: 'lineId', message: 'not a manual line' }]);
     await openBomChange(actor, panel, t, 'a manual line was removed from the bill of materials');
-    await row.destroy({ transaction: t });
+    await repo.deleteBomLine(row.id, t);
     await recordActivity(actor, { entity: 'bom', entityId: panel.id, jobId: panel.jobId, panelId: panel.id, action: 'line-removed', summary: `Removed "${line.description}" from ${panel.name}`, diff: { line } }, t);
   });
 }
@@ -376,7 +370,7 @@ export async function deleteLine(actor: CurrentUser, panelId: number, lineId: nu
 export async function swapCandidates(actor: CurrentUser, panelId: number, lineId: number) {
   const panel = await requirePanel(actor, panelId);
   const row = await db().transaction((t) => requireLine(panel.id, lineId, t));
-  const line = row.line as unknown as BomLine;
+  const line = row.line;
   if (line.source === 'manual') return [];
   const requirement = await requirementOf(actor.organisationId, panel, row.id, line);
   if (!requirement) return [];
@@ -393,10 +387,10 @@ export async function swapCandidates(actor: CurrentUser, panelId: number, lineId
 
 export async function panelExport(actor: CurrentUser, panelId: number): Promise<{ job: BomExportJob; panels: BomExportPanel[]; fileBase: string }> {
   const panel = await requirePanel(actor, panelId);
-  const rows = await BomLineRow.findAll({ where: { organisationId: actor.organisationId, panelId: panel.id }, order: [['position', 'ASC'], ['id', 'ASC']] });
+  const rows = await repo.bomRowsFor(actor.organisationId, panel.id);
   return {
     job: { number: panel.job.number, name: panel.job.name, customer: panel.job.customer || undefined, markupPercent: panel.markupPercent, labourRatePerHour: panel.labourRate },
-    panels: [{ name: panel.name, lines: rows.map((r) => r.line as unknown as BomLine) }],
+    panels: [{ name: panel.name, lines: rows.map((r) => r.line) }],
     fileBase: `${panel.job.number}-${panel.name}-bom`,
   };
 }
@@ -404,12 +398,12 @@ export async function panelExport(actor: CurrentUser, panelId: number): Promise<
 /** Every panel of the job that is not archived. The summary's rate and markup are the first panel's (each panel's own are on the page), the shop's defaults for a job with no panel. */
 export async function jobExport(actor: CurrentUser, jobId: number): Promise<{ job: BomExportJob; panels: BomExportPanel[]; fileBase: string }> {
   const job = await getJob(actor, jobId);
-  const panels = await Panel.findAll({ where: { organisationId: actor.organisationId, jobId: job.id, archivedAt: null }, order: [['name', 'ASC'], ['id', 'ASC']] });
-  const rows = await BomLineRow.findAll({ where: { organisationId: actor.organisationId, panelId: panels.map((p) => p.id) }, order: [['position', 'ASC'], ['id', 'ASC']] });
+  const panels = await repo.jobPanels(actor.organisationId, job.id);
+  const rows = await repo.bomRowsFor(actor.organisationId, panels.map((p) => p.id));
   const shop = panels.length ? null : await shopSettingsOf(actor.organisationId);
   return {
     job: { number: job.number, name: job.name, customer: job.customer || undefined, markupPercent: panels[0]?.markupPercent ?? shop!.defaultMarkupPercent, labourRatePerHour: panels[0]?.labourRate ?? shop!.defaultLabourRate },
-    panels: panels.map((p) => ({ name: p.name, lines: rows.filter((r) => r.panelId === p.id).map((r) => r.line as unknown as BomLine) })),
+    panels: panels.map((p) => ({ name: p.name, lines: rows.filter((r) => r.panelId === p.id).map((r) => r.line) })),
     fileBase: `${job.number}-bom`,
   };
 }

@@ -1,15 +1,16 @@
 // Tested combination ratings of the shop's catalogue parts (UL 508A SB4): stored per organisation,
 // edited by estimators, engineers and administrators (routes in router.ts), and read by the panel's SCCR worksheet.
 import type { z } from 'zod';
-import { Op, type Transaction } from 'sequelize';
+import type { Transaction } from 'sequelize';
 import type { CurrentUser } from '../../../shared/schemas/auth';
 import { CombinationInputSchema, type CombinationUpdateSchema, type CombinationValues, type CombinationView } from '../../../shared/schemas/combination';
 import type { CombinationRating } from '../../../shared/standards/ul508a-sb4';
 import { ConflictError, NotFoundError, ValidationError, zodIssues } from '../../../shared/errors';
 import { csvField, unneutraliseCsvText } from './spreadsheet';
 import { readSheetRows } from '../../http/sheet-rows';
-import { CombinationRatingRow } from '../../db/models/combination-rating';
-import { CatalogueItem as CatalogueRow } from '../../db/models/catalogue-item';
+import type { CombinationRatingRow } from '../../db/models/combination-rating';
+import * as repo from './repository';
+import type { CatalogueRow } from './repository';
 import { db } from '../../db/sequelize';
 import { FeedCache } from '../../db/change-feed';
 import { recordActivity } from '../activity/service';
@@ -39,7 +40,7 @@ const active = new FeedCache<number, readonly CombinationRating[]>(['c']);
 
 export async function activeCombinations(organisationId: number): Promise<readonly CombinationRating[]> {
   return active.get(organisationId, async () => {
-    const rows = await CombinationRatingRow.findAll({ where: { organisationId, active: true }, order: [['ref', 'ASC']] });
+    const rows = await repo.activeCombinationRows(organisationId);
     return Object.freeze(
       rows.map((r) => Object.freeze({ id: r.ref, componentCodes: r.componentCodes, ratingKa: r.ratingKa, ...(r.maxVolts !== null ? { maxVolts: r.maxVolts } : {}), source: r.source })),
     );
@@ -51,7 +52,7 @@ export async function activeCombinations(organisationId: number): Promise<readon
  * on a protective device of the combination (its own rating limits the branch).
  */
 async function checkAgainstCatalogue(organisationId: number, v: Pick<CombinationValues, 'componentCodes' | 'ratingKa'>, t: Transaction, known?: ReadonlyMap<string, CatalogueRow>) {
-  const byCode = known ?? new Map((await CatalogueRow.findAll({ where: { organisationId, code: { [Op.in]: v.componentCodes } }, transaction: t })).map((i) => [i.code, i]));
+  const byCode = known ?? (await repo.itemsByCode(organisationId, v.componentCodes, t));
   const items = v.componentCodes.flatMap((code) => byCode.get(code) ?? []);
   const issues = v.componentCodes.flatMap((code, i) => (byCode.has(code) ? [] : [{ path: `body.componentCodes.${i}`, message: `${code} is not in the catalogue` }]));
   if (issues.length) throw new ValidationError('A combination can name only parts of the catalogue', issues);
@@ -64,17 +65,17 @@ async function checkAgainstCatalogue(organisationId: number, v: Pick<Combination
 }
 
 export async function listCombinations(actor: CurrentUser): Promise<CombinationView[]> {
-  const rows = await CombinationRatingRow.findAll({ where: { organisationId: actor.organisationId }, order: [['ref', 'ASC']] });
+  const rows = await repo.combinationRows(actor.organisationId);
   return rows.map(view);
 }
 
 export async function createCombination(actor: CurrentUser, v: CombinationValues): Promise<CombinationView> {
   return db().transaction(async (t) => {
-    if (await CombinationRatingRow.findOne({ where: { organisationId: actor.organisationId, ref: v.ref }, transaction: t })) {
+    if (await repo.findCombinationByRef(actor.organisationId, v.ref, t)) {
       throw new ConflictError(`There is already a combination ${v.ref}`, [{ path: 'body.ref', message: 'already used' }]);
     }
     await checkAgainstCatalogue(actor.organisationId, v, t);
-    const r = await CombinationRatingRow.create({ ...v, organisationId: actor.organisationId }, { transaction: t });
+    const r = await repo.insertCombination({ ...v, organisationId: actor.organisationId }, t);
     await recordActivity(actor, { entity: 'combination_rating', entityId: r.id, action: 'created', summary: `Added tested combination ${v.ref}: ${v.componentCodes.join(' + ')} at ${v.ratingKa} kA` }, t);
     return view(r);
   });
@@ -83,12 +84,12 @@ export async function createCombination(actor: CurrentUser, v: CombinationValues
 export async function updateCombination(actor: CurrentUser, id: number, input: z.output<typeof CombinationUpdateSchema>): Promise<CombinationView> {
   const { version, ...changes } = input;
   return db().transaction(async (t) => {
-    const r = await CombinationRatingRow.findOne({ where: { organisationId: actor.organisationId, id }, transaction: t, lock: t.LOCK.UPDATE });
+    const r = await repo.findCombinationForUpdate(actor.organisationId, id, t);
     if (!r) throw new NotFoundError('Combination rating');
     if (r.version !== version) throw new ConflictError(`Someone else changed ${r.ref} since you opened it: reload to see their change, then apply yours again`);
     const next = { componentCodes: changes.componentCodes ?? r.componentCodes, ratingKa: changes.ratingKa ?? r.ratingKa };
     await checkAgainstCatalogue(actor.organisationId, next, t);
-    await r.update({ ...changes, version: version + 1 }, { transaction: t });
+    await repo.writeCombination(r, { ...changes, version: version + 1 }, t);
     const what = Object.keys(changes).join(', ') || 'nothing';
     await recordActivity(actor, { entity: 'combination_rating', entityId: id, action: 'updated', summary: `Changed tested combination ${r.ref}: ${what}`, diff: changes }, t);
     return view(r);
@@ -150,12 +151,14 @@ export async function importCombinations(actor: CurrentUser, buffer: Buffer, kin
   if (issues.length) throw new ValidationError(`${new Set(issues.map((x) => x.path.split('.')[0])).size} row(s) have problems: nothing was imported`, issues);
 
   return db().transaction(async (t) => {
-    const existing = new Map(
-      (await CombinationRatingRow.findAll({ where: { organisationId: actor.organisationId, ref: { [Op.in]: values.map((v) => v.ref) } }, transaction: t, lock: t.LOCK.UPDATE })).map((r) => [r.ref, r]),
+    const existing = await repo.combinationsByRefForUpdate(
+      actor.organisationId,
+      values.map((v) => v.ref),
+      t,
     );
     // every part of every row in one query, not one per row
     const codes = [...new Set(values.flatMap((v) => v.componentCodes))];
-    const known = new Map((await CatalogueRow.findAll({ where: { organisationId: actor.organisationId, code: { [Op.in]: codes } }, transaction: t })).map((i) => [i.code, i]));
+    const known = await repo.itemsByCode(actor.organisationId, codes, t);
     const fresh: Array<CombinationValues & { organisationId: number }> = [];
     let changed = 0;
     let unchanged = 0;
@@ -169,12 +172,12 @@ export async function importCombinations(actor: CurrentUser, buffer: Buffer, kin
       const r = existing.get(v.ref);
       if (!r) fresh.push({ ...v, organisationId: actor.organisationId });
       else if (JSON.stringify([r.componentCodes, r.ratingKa, r.maxVolts, r.source, r.active]) !== JSON.stringify([v.componentCodes, v.ratingKa, v.maxVolts, v.source, v.active])) {
-        await r.update({ componentCodes: v.componentCodes, ratingKa: v.ratingKa, maxVolts: v.maxVolts, source: v.source, active: v.active, version: r.version + 1 }, { transaction: t });
+        await repo.writeCombination(r, { componentCodes: v.componentCodes, ratingKa: v.ratingKa, maxVolts: v.maxVolts, source: v.source, active: v.active, version: r.version + 1 }, t);
         changed++;
       } else unchanged++;
     }
     // the new ones in one statement; a changed one is an update of its own row (its version moves)
-    await CombinationRatingRow.bulkCreate(fresh, { transaction: t });
+    await repo.insertCombinations(fresh, t);
     const created = fresh.length;
     await recordActivity(actor, { entity: 'combination_rating', entityId: 0, action: 'imported', summary: `Imported tested combinations: ${created} new, ${changed} changed, ${unchanged} unchanged` }, t);
     return { created, changed, unchanged };

@@ -2,6 +2,7 @@ import multer from 'multer';
 import { z } from 'zod';
 import { idParamSchema, versionSchema } from '../../../shared/schemas/bounds';
 import { defineRoute } from '../../http/route-table';
+import { ROLE_SETS } from '../../../shared/schemas/auth';
 import { CatalogueItemBaseSchema, CatalogueItemSchema, CategorySchema, LabourKeySchema } from '../../../shared/schemas/catalogue';
 import { ValidationError } from '../../../shared/errors';
 import { IMPORT_LIMITS, catalogueToCsv, writeCatalogueXlsx } from './spreadsheet';
@@ -11,10 +12,6 @@ import * as service from './service';
 import * as combinations from './combinations';
 import { CombinationInputSchema, CombinationUpdateSchema } from '../../../shared/schemas/combination';
 
-const ALL = ['admin', 'designer', 'estimator', 'engineer'] as const;
-const EDIT = ['admin', 'estimator'] as const;
-/** tested combinations are engineering data: the engineer keeps them too */
-const EDIT_COMBINATIONS = ['admin', 'estimator', 'engineer'] as const;
 
 const ItemId = z.object({ itemId: idParamSchema });
 const Version = versionSchema;
@@ -77,7 +74,7 @@ export const catalogueRoutes = [
   defineRoute({
     method: 'get',
     path: '/api/catalogue/items',
-    access: ALL,
+    access: ROLE_SETS.everyone,
     summary: 'Catalogue items (filter by category, text in code or description, active)',
     query: ListQuery,
     handler: ({ user, query }) => service.listItems(user, query),
@@ -85,16 +82,16 @@ export const catalogueRoutes = [
   defineRoute({
     method: 'post',
     path: '/api/catalogue/items',
-    access: EDIT,
+    access: ROLE_SETS.estimate,
     summary: 'Add a catalogue item',
     body: CatalogueItemSchema,
     handler: ({ user, body }) => service.createItem(user, body),
   }),
-  defineRoute({ method: 'get', path: '/api/catalogue/items/:itemId', access: ALL, summary: 'One catalogue item', params: ItemId, handler: ({ user, params }) => service.getItem(user, params.itemId) }),
+  defineRoute({ method: 'get', path: '/api/catalogue/items/:itemId', access: ROLE_SETS.everyone, summary: 'One catalogue item', params: ItemId, handler: ({ user, params }) => service.getItem(user, params.itemId) }),
   defineRoute({
     method: 'patch',
     path: '/api/catalogue/items/:itemId',
-    access: EDIT,
+    access: ROLE_SETS.estimate,
     summary: 'Change a catalogue item (price, labour, lead time, ratings …); 409 when the version is stale',
     params: ItemId,
     body: ItemPatch,
@@ -106,7 +103,7 @@ export const catalogueRoutes = [
   defineRoute({
     method: 'post',
     path: '/api/catalogue/items/:itemId/active',
-    access: EDIT,
+    access: ROLE_SETS.estimate,
     summary: 'Deactivate or reactivate a catalogue item',
     params: ItemId,
     body: z.object({ active: z.boolean(), version: Version }).strict(),
@@ -116,7 +113,7 @@ export const catalogueRoutes = [
   defineRoute({
     method: 'get',
     path: '/api/catalogue/items/:itemId/history',
-    access: ALL,
+    access: ROLE_SETS.everyone,
     summary: 'Who changed a catalogue item, what and when',
     params: ItemId,
     handler: ({ user, params }) => service.itemHistory(user, params.itemId),
@@ -124,7 +121,7 @@ export const catalogueRoutes = [
   defineRoute({
     method: 'get',
     path: '/api/catalogue.xlsx',
-    access: ALL,
+    access: ROLE_SETS.everyone,
     summary: 'The whole catalogue as .xlsx (streamed)',
     handler: async ({ user, res }) => {
       const items = await service.allItems(user);
@@ -137,14 +134,14 @@ export const catalogueRoutes = [
   defineRoute({
     method: 'get',
     path: '/api/catalogue.csv',
-    access: ALL,
+    access: ROLE_SETS.everyone,
     summary: 'The whole catalogue as .csv',
     handler: async ({ user, res }) => sendAttachment(res, `panelwright-catalogue-${stamp()}`, 'csv', `\uFEFF${catalogueToCsv(await service.allItems(user))}`),
   }),
   defineRoute({
     method: 'post',
     path: '/api/catalogue/import',
-    access: EDIT,
+    access: ROLE_SETS.estimate,
     summary: 'Import .xlsx/.csv: every row good, or nothing written (errors listed by row)',
     before: [upload],
     status: 200,
@@ -154,21 +151,21 @@ export const catalogueRoutes = [
       return service.importCatalogue(user, f.buffer, fileKind(f.originalname, f.mimetype));
     },
   }),
-  defineRoute({ method: 'get', path: '/api/labour-units', access: ALL, summary: "The shop's labour units", handler: ({ user }) => service.listLabourUnits(user) }),
+  defineRoute({ method: 'get', path: '/api/labour-units', access: ROLE_SETS.everyone, summary: "The shop's labour units", handler: ({ user }) => service.listLabourUnits(user) }),
   defineRoute({
     method: 'patch',
     path: '/api/labour-units/:key',
-    access: EDIT,
+    access: ROLE_SETS.estimate,
     summary: 'Change a labour unit (hours, description)',
     params: z.object({ key: LabourKeySchema }),
     body: z.object({ hours: z.number().finite().nonnegative().max(100).optional(), description: z.string().trim().min(1).max(200).optional(), version: Version }).strict(),
     handler: ({ user, params, body }) => service.updateLabourUnit(user, params.key, body, body.version),
   }),
-  defineRoute({ method: 'get', path: '/api/catalogue/combinations', access: ALL, summary: 'Tested combination ratings (UL 508A SB4)', handler: ({ user }) => combinations.listCombinations(user) }),
+  defineRoute({ method: 'get', path: '/api/catalogue/combinations', access: ROLE_SETS.everyone, summary: 'Tested combination ratings (UL 508A SB4)', handler: ({ user }) => combinations.listCombinations(user) }),
   defineRoute({
     method: 'post',
     path: '/api/catalogue/combinations',
-    access: EDIT_COMBINATIONS,
+    access: ROLE_SETS.editCombinations,
     summary: 'Add a tested combination rating',
     body: CombinationInputSchema,
     handler: ({ user, body }) => combinations.createCombination(user, body),
@@ -176,14 +173,14 @@ export const catalogueRoutes = [
   defineRoute({
     method: 'get',
     path: '/api/catalogue/combinations.csv',
-    access: ALL,
+    access: ROLE_SETS.everyone,
     summary: 'The tested combination ratings as .csv (the import format)',
     handler: async ({ user, res }) => sendAttachment(res, `panelwright-combinations-${stamp()}`, 'csv', `\uFEFF${await combinations.combinationsCsv(user)}`),
   }),
   defineRoute({
     method: 'post',
     path: '/api/catalogue/combinations/import',
-    access: EDIT_COMBINATIONS,
+    access: ROLE_SETS.editCombinations,
     summary: 'Import a combination table (.csv/.xlsx): every row good, or nothing written (problems listed by row)',
     before: [upload],
     status: 200,
@@ -196,7 +193,7 @@ export const catalogueRoutes = [
   defineRoute({
     method: 'patch',
     path: '/api/catalogue/combinations/:combinationId',
-    access: EDIT_COMBINATIONS,
+    access: ROLE_SETS.editCombinations,
     summary: 'Change or deactivate a tested combination rating; 409 when the version is stale',
     params: z.object({ combinationId: idParamSchema }),
     body: CombinationUpdateSchema,

@@ -1,11 +1,8 @@
 // The shop's catalogue and labour units: list, edit with optimistic versions, import all-or-nothing,
 // and the history of every item (from the activity log).
-import { Op, type Transaction, type WhereOptions } from 'sequelize';
+import type { Transaction } from 'sequelize';
 import { db } from '../../db/sequelize';
-import { CatalogueItem as CatalogueRow } from '../../db/models/catalogue-item';
-import { LabourUnit as LabourRow } from '../../db/models/labour-unit';
-import { Activity } from '../../db/models/activity';
-import { User } from '../../db/models/user';
+import { activityRows } from '../activity/repository';
 import type { CurrentUser } from '../../../shared/schemas/auth';
 import {
   CatalogueItemSchema,
@@ -21,28 +18,22 @@ import {
 } from '../../../shared/schemas/catalogue';
 import { ConflictError, NotFoundError, ValidationError, zodIssues } from '../../../shared/errors';
 import { recordActivity } from '../activity/service';
-import { fromItem, toItem } from './repository';
+import * as repo from './repository';
+import { toItem, type CatalogueRow } from './repository';
 import { parseCatalogueFile, type ImportError } from './spreadsheet';
 
 const entry = (r: CatalogueRow): CatalogueEntry => ({ ...toItem(r), id: r.id, version: r.version, updatedAt: r.updatedAt.toISOString() });
 
 export async function listItems(actor: CurrentUser, f: CatalogueFilter): Promise<CatalogueEntry[]> {
-  const where: WhereOptions = { organisationId: actor.organisationId };
-  const and: WhereOptions[] = [where];
-  if (f.category) and.push({ category: f.category });
-  if (f.active === 'true' || f.active === undefined) and.push({ active: true });
-  else if (f.active === 'false') and.push({ active: false });
+  const active = f.active === 'true' || f.active === undefined ? true : f.active === 'false' ? false : null;
   const q = f.q?.trim();
-  if (q) {
-    const like = `%${q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
-    and.push({ [Op.or]: [{ code: { [Op.iLike]: like } }, { description: { [Op.iLike]: like } }] });
-  }
-  const rows = await CatalogueRow.findAll({ where: { [Op.and]: and }, order: [['category', 'ASC'], ['code', 'ASC']] });
+  const like = q ? `%${q.replace(/[\\%_]/g, (c) => `\\${c}`)}%` : null;
+  const rows = await repo.searchItems(actor.organisationId, { category: f.category, active, like });
   return rows.map(entry);
 }
 
 async function requireItem(actor: CurrentUser, id: number, t?: Transaction, lock = false) {
-  const r = await CatalogueRow.findOne({ where: { organisationId: actor.organisationId, id }, transaction: t, lock: lock && t ? t.LOCK.UPDATE : undefined });
+  const r = await repo.findItem(actor.organisationId, id, t, lock);
   if (!r) throw new NotFoundError('Catalogue item');
   return r;
 }
@@ -81,9 +72,9 @@ export function itemDiff(before: CatalogueItem | null, after: CatalogueItem): Re
 /** `item` is already validated by CatalogueItemSchema (the route's body schema). */
 export async function createItem(actor: CurrentUser, item: CatalogueItem): Promise<CatalogueEntry> {
   return db().transaction(async (t) => {
-    const exists = await CatalogueRow.findOne({ where: { organisationId: actor.organisationId, code: item.code }, transaction: t });
+    const exists = await repo.findItemByCode(actor.organisationId, item.code, t);
     if (exists) throw new ConflictError(`The catalogue already has an item ${item.code}`, [{ path: 'body.code', message: 'already in the catalogue' }]);
-    const r = await CatalogueRow.create(fromItem(actor.organisationId, item), { transaction: t });
+    const r = await repo.insertItem(actor.organisationId, item, t);
     await recordActivity(actor, { entity: 'catalogue_item', entityId: r.id, action: 'created', summary: `Added ${item.code} to the catalogue`, diff: itemDiff(null, item) }, t);
     return entry(r);
   });
@@ -99,12 +90,12 @@ export async function updateItem(actor: CurrentUser, id: number, changes: ItemCh
     const after = validateItem({ ...before, ...changes, code: before.code });
     const diff = itemDiff(before, after);
     if (Object.keys(diff).length === 0) return entry(r);
-    const [count] = await CatalogueRow.update({ ...fromItem(actor.organisationId, after), version: version + 1 }, { where: { id, version }, transaction: t });
+    const count = await repo.writeItem(actor.organisationId, id, after, version + 1, t, version);
     if (count !== 1) throw new ConflictError(`Someone else changed ${r.code} since you opened it`);
     const what = Object.keys(diff).join(', ');
     const action = 'active' in diff && Object.keys(diff).length === 1 ? (after.active ? 'reactivated' : 'deactivated') : 'updated';
     await recordActivity(actor, { entity: 'catalogue_item', entityId: id, action, summary: action === 'updated' ? `Changed ${r.code}: ${what}` : `${action === 'reactivated' ? 'Reactivated' : 'Deactivated'} ${r.code}`, diff }, t);
-    return entry((await CatalogueRow.findByPk(id, { transaction: t }))!);
+    return entry((await repo.itemById(id, t))!);
   });
 }
 
@@ -114,24 +105,19 @@ export function setActive(actor: CurrentUser, id: number, active: boolean, versi
 
 export async function itemHistory(actor: CurrentUser, id: number): Promise<HistoryEntry[]> {
   await requireItem(actor, id);
-  const rows = await Activity.findAll({
-    where: { organisationId: actor.organisationId, entity: 'catalogue_item', entityId: id },
-    include: [{ model: User, as: 'user', attributes: ['name'] }],
-    order: [['id', 'DESC']],
-    limit: 200,
-  });
-  return rows.map((r) => ({
+  const rows = await activityRows({ organisationId: actor.organisationId, entity: 'catalogue_item', entityId: id }, 200);
+  return rows.map(({ row: r, author }) => ({
     id: r.id,
     action: r.action,
     summary: r.summary,
     diff: r.diff,
-    user: (r as unknown as { user?: { name: string } }).user?.name ?? null,
+    user: author,
     at: r.createdAt.toISOString(),
   }));
 }
 
 export async function allItems(actor: CurrentUser): Promise<CatalogueItem[]> {
-  const rows = await CatalogueRow.findAll({ where: { organisationId: actor.organisationId }, order: [['category', 'ASC'], ['code', 'ASC']] });
+  const rows = await repo.allItemRows(actor.organisationId);
   return rows.map(toItem);
 }
 
@@ -153,7 +139,7 @@ export async function importCatalogue(actor: CurrentUser, buffer: Buffer, kind: 
   const parsed = await parseCatalogueFile(buffer, kind);
   if (parsed.errors.length > 0) throw new ImportRejected(parsed.errors);
   return db().transaction(async (t) => {
-    const existing = await CatalogueRow.findAll({ where: { organisationId: actor.organisationId }, transaction: t, lock: t.LOCK.UPDATE });
+    const existing = await repo.allItemRows(actor.organisationId, t, true);
     const byCode = new Map(existing.map((r) => [r.code, r]));
     const fresh: CatalogueItem[] = [];
     let updated = 0;
@@ -169,12 +155,12 @@ export async function importCatalogue(actor: CurrentUser, buffer: Buffer, kind: 
         unchanged++;
         continue;
       }
-      await CatalogueRow.update({ ...fromItem(actor.organisationId, item), version: r.version + 1 }, { where: { id: r.id }, transaction: t });
+      await repo.writeItem(actor.organisationId, r.id, item, r.version + 1, t);
       await recordActivity(actor, { entity: 'catalogue_item', entityId: r.id, action: 'imported', summary: `Import changed ${item.code}: ${Object.keys(diff).join(', ')}`, diff }, t);
       updated++;
     }
     if (fresh.length > 0) {
-      const created = await CatalogueRow.bulkCreate(fresh.map((i) => fromItem(actor.organisationId, i)), { transaction: t, returning: true });
+      const created = await repo.insertItems(actor.organisationId, fresh, t);
       for (const [i, r] of created.entries()) {
         await recordActivity(actor, { entity: 'catalogue_item', entityId: r.id, action: 'imported', summary: `Import added ${fresh[i]!.code}`, diff: itemDiff(null, fresh[i]!) }, t);
       }
@@ -187,26 +173,28 @@ export async function importCatalogue(actor: CurrentUser, buffer: Buffer, kind: 
 // Labour units
 
 export async function listLabourUnits(actor: CurrentUser): Promise<LabourUnitEntry[]> {
-  const rows = await LabourRow.findAll({ where: { organisationId: actor.organisationId }, order: [['key', 'ASC']] });
+  const rows = await repo.labourRows(actor.organisationId);
   return rows.map((r) => ({ key: r.key as LabourKey, description: r.label, hours: r.hours, per: r.per as LabourUnit['per'], version: r.version }));
 }
 
 export async function updateLabourUnit(actor: CurrentUser, key: LabourKey, changes: { hours?: number; description?: string }, version: number): Promise<LabourUnitEntry> {
   return db().transaction(async (t) => {
-    const r = await LabourRow.findOne({ where: { organisationId: actor.organisationId, key }, transaction: t, lock: t.LOCK.UPDATE });
+    const r = await repo.findLabourUnitForUpdate(actor.organisationId, key, t);
     if (!r) throw new NotFoundError('Labour unit');
     if (r.version !== version) throw new ConflictError(`Someone else changed the labour unit "${r.label}" since you opened it: reload, then apply your change again`, { currentVersion: r.version });
     const diff: Record<string, [unknown, unknown]> = {};
     if (changes.hours !== undefined && changes.hours !== r.hours) diff.hours = [r.hours, changes.hours];
     if (changes.description !== undefined && changes.description !== r.label) diff.description = [r.label, changes.description];
     if (Object.keys(diff).length > 0) {
-      await LabourRow.update(
+      await repo.writeLabourUnit(
+        r.id,
+        version,
         { ...(changes.hours !== undefined ? { hours: changes.hours } : {}), ...(changes.description !== undefined ? { label: changes.description } : {}), version: version + 1 },
-        { where: { id: r.id, version }, transaction: t },
+        t,
       );
       await recordActivity(actor, { entity: 'labour_unit', entityId: r.id, action: 'updated', summary: `Changed labour unit ${key}: ${Object.keys(diff).join(', ')}`, diff }, t);
     }
-    const now = (await LabourRow.findByPk(r.id, { transaction: t }))!;
+    const now = (await repo.labourUnitById(r.id, t))!;
     return { key: now.key as LabourKey, description: now.label, hours: now.hours, per: now.per as LabourUnit['per'], version: now.version };
   });
 }

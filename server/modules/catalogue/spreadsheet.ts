@@ -320,7 +320,7 @@ async function readXlsx(buffer: Buffer): Promise<Table> {
   let timer: ReturnType<typeof setTimeout> | undefined;
   try {
     await Promise.race([
-      wb.xlsx.load(buffer as unknown as ArrayBuffer),
+      wb.xlsx.load(new Uint8Array(buffer).buffer), // exceljs types its input as an ArrayBuffer (JSZip reads either)
       new Promise((_, reject) => {
         timer = setTimeout(() => reject(new Error('timeout')), IMPORT_LIMITS.loadTimeoutMs);
       }),

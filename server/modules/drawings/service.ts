@@ -7,7 +7,7 @@ import { NotFoundError } from '../../../shared/errors';
 import { buildPanelDrawings, TERMINAL_COLUMNS, terminalRowsFor, WIRE_COLUMNS, wireRowsFor, type PanelDrawings } from '../../../shared/drawings/panel-drawings';
 import { bucketSheetSvg, nameplateSvg, schematicSheets, stackSheets, supplySheetSvg, terminalRefMap } from '../../../shared/drawings/svg';
 import type { PanelChecks } from '../../../shared/schemas/checks';
-import type { SubmittalDrawings } from '../submittal/drawing-pages';
+import type { SubmittalDrawings } from '../../../shared/drawings/panel-drawings';
 import { computeChecks, type ChecksContext } from '../checks/service';
 import { CONTROL_VOLTS } from '../../../shared/calc/checks/control-power-check';
 

@@ -5,7 +5,7 @@ import * as repo from './repository';
 import { recordActivity } from '../activity/service';
 import type { Job } from '../../db/models/job';
 import { db } from '../../db/sequelize';
-import { reselectJobPanels } from '../panels/service';
+import type { Transaction } from 'sequelize';
 
 /** Job fields as the job form names them, for the activity log. */
 const JOB_FIELD_WORDS: Record<string, string> = {
@@ -66,7 +66,16 @@ export async function createJob(actor: CurrentUser, values: JobValues) {
   return jobView(job);
 }
 
-export async function updateJob(actor: CurrentUser, id: number, input: Partial<JobValues> & { version: number }) {
+/**
+ * Changes a job. `afterChange` runs in the same transaction with the job fields the motor selections depend
+ * on that moved (the panels module passes its re-selection of the job's panels: panels sit above jobs).
+ */
+export async function updateJob(
+  actor: CurrentUser,
+  id: number,
+  input: Partial<JobValues> & { version: number },
+  afterChange?: (selectionFields: string[], t: Transaction) => Promise<void>,
+) {
   const job = await getJob(actor, id);
   const { version, ...changes } = input;
   if (changes.number && changes.number !== job.number && (await repo.numberTaken(actor.organisationId, changes.number, id))) {
@@ -74,7 +83,7 @@ export async function updateJob(actor: CurrentUser, id: number, input: Partial<J
   }
   const diff: Record<string, unknown> = {};
   for (const [k, v] of Object.entries(changes)) {
-    const before = (job as unknown as Record<string, unknown>)[k];
+    const before = job.get(k as keyof JobValues);
     if (before !== v) diff[k] = { from: before, to: v };
   }
   const reselect = SELECTION_FIELDS.filter((f) => f in diff);
@@ -82,7 +91,7 @@ export async function updateJob(actor: CurrentUser, id: number, input: Partial<J
     const count = await repo.updateJobVersioned(actor.organisationId, id, version, changes, t);
     if (count === 0) throw new ConflictError('Someone else changed this job since you opened it: reload to see their change, then apply yours again');
     await recordActivity(actor, { entity: 'job', entityId: id, jobId: id, action: 'updated', summary: `Changed job ${job.number}: ${Object.keys(diff).map((k) => JOB_FIELD_WORDS[k] ?? k).join(', ') || 'no fields'}`, diff }, t);
-    if (reselect.length) await reselectJobPanels(actor, id, reselect.join(', '), t);
+    if (afterChange) await afterChange(reselect, t);
   });
   return jobView((await repo.findJob(actor.organisationId, id))!);
 }

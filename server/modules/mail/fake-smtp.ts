@@ -3,9 +3,9 @@
 import { SMTPServer } from 'smtp-server';
 import { simpleParser } from 'mailparser';
 import type { AddressInfo } from 'node:net';
-import { MailMessage } from '../../db/models/mail-message';
 import { choosePort } from '../../config/ports';
 import { sendThroughFakeSmtpPort } from './mailer';
+import { storeMessage } from './repository';
 
 /**
  * Starts the fake on `port`, or, when another program holds it, on the next free port above it
@@ -23,7 +23,7 @@ export async function startFakeSmtp(port: number, opts: { explicit?: string | nu
       simpleParser(stream)
         .then(async (parsed) => {
           const to = Array.isArray(parsed.to) ? parsed.to.map((a) => a.text).join(', ') : (parsed.to?.text ?? '');
-          await MailMessage.create({
+          await storeMessage({
             toAddress: to,
             fromAddress: parsed.from?.text ?? '',
             subject: parsed.subject ?? '',

@@ -2,13 +2,12 @@ import multer from 'multer';
 import { z } from 'zod';
 import { idParamSchema } from '../../../shared/schemas/bounds';
 import { defineRoute } from '../../http/route-table';
+import { ROLE_SETS } from '../../../shared/schemas/auth';
 import { ValidationError } from '../../../shared/errors';
 import { MAX_IMPORT_BYTES, commitImport, importTemplate, panelPreview } from './import';
 import { motorListExport } from './motor-list';
 import { sendAttachment } from '../../http/attachment';
 
-const DESIGN = ['admin', 'designer'] as const;
-const ALL = ['admin', 'designer', 'estimator', 'engineer'] as const;
 const PanelId = z.object({ panelId: idParamSchema });
 
 const upload = multer({
@@ -25,7 +24,7 @@ export const importRoutes = [
   defineRoute({
     method: 'get',
     path: '/api/panels/:panelId/motors.xlsx',
-    access: ALL,
+    access: ROLE_SETS.everyone,
     summary: "The panel's motor list (.xlsx): every answer in the import format, the selections as a schedule",
     params: PanelId,
     handler: async ({ user, params, res }) => {
@@ -36,7 +35,7 @@ export const importRoutes = [
   defineRoute({
     method: 'get',
     path: '/api/panels/:panelId/import/template',
-    access: DESIGN,
+    access: ROLE_SETS.design,
     summary: 'Motor-list template (.xlsx)',
     params: PanelId,
     handler: async ({ user, params, res }) => sendAttachment(res, 'panelwright-motor-list', 'xlsx', await importTemplate(user, params.panelId)),
@@ -44,7 +43,7 @@ export const importRoutes = [
   defineRoute({
     method: 'post',
     path: '/api/panels/:panelId/import/preview',
-    access: DESIGN,
+    access: ROLE_SETS.design,
     summary: 'Preview a motor-list upload: every row with its problems, nothing saved',
     params: PanelId,
     before: [upload],
@@ -57,7 +56,7 @@ export const importRoutes = [
   defineRoute({
     method: 'post',
     path: '/api/panels/:panelId/import/commit',
-    access: DESIGN,
+    access: ROLE_SETS.design,
     summary: 'Import a motor list: all rows or none',
     params: PanelId,
     before: [upload],

@@ -7,71 +7,17 @@ import { flcRefusal } from '../../../shared/calc/flc';
 import { ValidationError, zodIssues } from '../../../shared/errors';
 // each row's problems in plain sentences (the same error map as the forms)
 import '../../../shared/plain-messages';
-import { changePanel, addLoads, requirePanel } from './service';
+import { changePanel, requirePanel } from './service';
+import { addLoads } from './motors';
 import { recordActivity } from '../activity/service';
 import { loadsOf } from './repository';
 import { UnsupportedFile, readSheetRows } from '../../http/sheet-rows';
+import { IMPORT_COLUMNS, type Column } from './import-columns';
 
 export const MAX_IMPORT_ROWS = 2000;
 export const MAX_IMPORT_BYTES = 2 * 1024 * 1024;
 
-interface Column {
-  header: string;
-  key: string;
-  kind: 'string' | 'number' | 'boolean' | 'integer';
-  note: string;
-  example: string | number | boolean;
-  /** where the value sits in the answers when it is not `key` at the top (e.g. conductor.material) */
-  path?: readonly [string, string];
-}
-
-export const IMPORT_COLUMNS: Column[] = [
-  { header: 'tag', key: 'tag', kind: 'string', note: 'unique on the panel', example: 'P-201' },
-  { header: 'description', key: 'description', kind: 'string', note: '', example: 'Backwash pump' },
-  { header: 'supply', key: 'supply', kind: 'string', note: 'ac3, ac1 or dc', example: 'ac3' },
-  { header: 'hp', key: 'hp', kind: 'number', note: 'or kw', example: 20 },
-  { header: 'kw', key: 'kw', kind: 'number', note: 'or hp', example: '' },
-  { header: 'volts', key: 'volts', kind: 'number', note: 'rated voltage', example: 460 },
-  { header: 'hz', key: 'hz', kind: 'integer', note: '60 by default', example: 60 },
-  { header: 'fla', key: 'fla', kind: 'number', note: 'nameplate amperes', example: 25 },
-  { header: 'serviceFactor', key: 'serviceFactor', kind: 'number', note: '1.0 by default', example: 1.15 },
-  { header: 'codeLetter', key: 'codeLetter', kind: 'string', note: 'NEMA code letter', example: 'G' },
-  { header: 'design', key: 'design', kind: 'string', note: 'A, B, C or D', example: 'B' },
-  { header: 'leads', key: 'leads', kind: 'integer', note: '3, 6, 9 or 12', example: '' },
-  { header: 'connection', key: 'connection', kind: 'string', note: 'wye or delta', example: '' },
-  { header: 'singlePhaseType', key: 'singlePhaseType', kind: 'string', note: 'split-phase, capacitor-start, psc, two-value-capacitor', example: '' },
-  { header: 'dcField', key: 'dcField', kind: 'string', note: 'shunt, series, compound', example: '' },
-  { header: 'duty', key: 'duty', kind: 'string', note: 'continuous or intermittent', example: 'continuous' },
-  { header: 'reversing', key: 'reversing', kind: 'boolean', note: 'yes/no', example: 'no' },
-  { header: 'jogging', key: 'jogging', kind: 'boolean', note: 'yes/no', example: 'no' },
-  { header: 'speedControl', key: 'speedControl', kind: 'string', note: 'fixed or variable', example: 'fixed' },
-  { header: 'turndown', key: 'turndown', kind: 'number', note: 'e.g. 10 for 10:1', example: '' },
-  { header: 'torque', key: 'torque', kind: 'string', note: 'variable or constant', example: '' },
-  { header: 'startingLimit', key: 'startingLimit', kind: 'string', note: 'none or reduced-inrush', example: 'none' },
-  { header: 'inertia', key: 'inertia', kind: 'string', note: 'normal, high, very-high', example: 'normal' },
-  { header: 'reverseRotationHazard', key: 'reverseRotationHazard', kind: 'boolean', note: 'yes/no', example: 'no' },
-  { header: 'critical', key: 'critical', kind: 'boolean', note: 'yes/no', example: 'no' },
-  { header: 'environment', key: 'environment', kind: 'string', note: 'indoor-dry, indoor-dusty, outdoor, washdown, corrosive, class1-div1 …', example: 'indoor-dusty' },
-  { header: 'scpdType', key: 'scpdType', kind: 'string', note: 'inverse-time-breaker, instantaneous-trip-breaker, dual-element-fuse, non-time-delay-fuse', example: 'inverse-time-breaker' },
-  { header: 'cableLengthFt', key: 'cableLengthFt', kind: 'number', note: 'feet', example: 80 },
-  { header: 'tempRiseC', key: 'tempRiseC', kind: 'number', note: 'marked temperature rise, °C (40 or less allows 125 % overload, 430.32)', example: '' },
-  { header: 'lockedRotorWithstandS', key: 'lockedRotorWithstandS', kind: 'number', note: "locked-rotor withstand (hot safe stall) time, s, from the motor maker's data: limits the trip class", example: '' },
-  { header: 'energyEfficient', key: 'energyEfficient', kind: 'boolean', note: 'yes/no; Design B energy-efficient (Table 430.52 instantaneous-trip 1100 %)', example: 'no' },
-  { header: 'poles', key: 'poles', kind: 'integer', note: 'even number (synchronous speed)', example: 4 },
-  { header: 'rotor', key: 'rotor', kind: 'string', note: 'squirrel-cage or wound-rotor', example: 'squirrel-cage' },
-  { header: 'plugging', key: 'plugging', kind: 'boolean', note: 'yes/no', example: 'no' },
-  { header: 'twoSpeed', key: 'twoSpeed', kind: 'boolean', note: 'yes/no; two-speed motor', example: 'no' },
-  { header: 'starterPreference', key: 'starterPreference', kind: 'string', note: 'rvss, wye-delta or part-winding (when inrush must be limited)', example: '' },
-  { header: 'insideDelta', key: 'insideDelta', kind: 'boolean', note: 'yes/no; soft starter inside the delta', example: 'no' },
-  { header: 'quickStop', key: 'quickStop', kind: 'boolean', note: 'yes/no; DC quick stops (dynamic braking)', example: 'no' },
-  { header: 'controlScheme', key: 'controlScheme', kind: 'string', note: 'three-wire (default), two-wire or hand-off-auto', example: 'three-wire' },
-  { header: 'driveInputAmps', key: 'driveInputAmps', kind: 'number', note: "the chosen drive's rated input current, A (430.122(A))", example: '' },
-  { header: 'fedFrom', key: 'fedFrom', kind: 'string', note: 'a motor at another voltage than the supply: panel (a transformer or DC supply in the panel, the default) or external (a source outside the panel)', example: 'panel' },
-  { header: 'conductorMaterial', key: 'conductorMaterial', kind: 'string', note: 'cu or al (cu by default)', example: 'cu', path: ['conductor', 'material'] },
-  { header: 'conductorTempC', key: 'conductorTempC', kind: 'integer', note: 'insulation rating 60, 75 or 90 (75 by default)', example: 75, path: ['conductor', 'tempRatingC'] },
-  { header: 'scpdOverridePercent', key: 'scpdOverridePercent', kind: 'number', note: '430.52(C)(1) Exception No. 2 limit, % (only with a reason)', example: '', path: ['scpdOverride', 'maxPercent'] },
-  { header: 'scpdOverrideReason', key: 'scpdOverrideReason', kind: 'string', note: 'why the motor will not start at the normal limit', example: '', path: ['scpdOverride', 'reason'] },
-];
+export { IMPORT_COLUMNS };
 
 /** A column's value in a motor's answers (nested columns read their path). */
 export function answerValue(answers: Record<string, unknown>, c: Column): unknown {

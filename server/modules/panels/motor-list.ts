@@ -5,13 +5,12 @@ import { starterTypeLabel } from '../../../shared/labels';
 import ExcelJS from 'exceljs';
 import type { CurrentUser } from '../../../shared/schemas/auth';
 import type { LoadSelection } from '../../../shared/schemas/selection';
-import type { StoredOverride } from '../../../shared/schemas/override';
 import { applyOverrides } from '../../../shared/calc/overrides';
 import { relayOf } from '../../../shared/calc/overload';
 import { IMPORT_COLUMNS, answerValue } from './import';
 import { loadsOf } from './repository';
 import { requirePanel } from './service';
-import { CHECK_CAUTIONS } from '../checks/service';
+import { CHECK_CAUTIONS } from '../../../shared/schemas/checks';
 import { SCPD_WORDS } from '../../../shared/calc/scpd';
 
 
@@ -76,12 +75,12 @@ export async function motorListExport(actor: CurrentUser, panelId: number) {
   schedule.getRow(1).font = { bold: true };
   schedule.views = [{ state: 'frozen', ySplit: 1, xSplit: 1 }];
   for (const l of loads) {
-    const stored = l.selection as unknown as LoadSelection | null;
+    const stored = l.selection;
     if (!stored) {
       schedule.addRow([l.tag, 'no selection']);
       continue;
     }
-    const overrides = (l.overrides ?? []) as unknown as StoredOverride[];
+    const overrides = l.overrides ?? [];
     const s = applyOverrides(stored, overrides);
     const row = schedule.addRow(SCHEDULE.map(([, , pick]) => pick(s)));
     if (overrides.length) row.getCell(1).note = `Overridden by the designer: ${overrides.map((o) => `${o.field} = ${o.value} (${o.justification})`).join('; ')}`;

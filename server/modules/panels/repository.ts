@@ -1,4 +1,4 @@
-import { QueryTypes, type Transaction } from 'sequelize';
+import { QueryTypes, type CreationAttributes, type Transaction } from 'sequelize';
 import { db } from '../../db/sequelize';
 import { Panel } from '../../db/models/panel';
 import { Load } from '../../db/models/load';
@@ -57,8 +57,10 @@ export async function loadsOf(panelId: number, transaction?: Transaction) {
   return Load.findAll({ where: { panelId }, order: [['position', 'ASC'], ['id', 'ASC']], transaction });
 }
 
+/** The panel's comments, oldest first, each with its author's name (null when the person is gone). */
 export async function commentsOf(panelId: number) {
-  return Comment.findAll({ where: { panelId }, include: [{ model: User, as: 'author', attributes: ['name'] }], order: [['id', 'ASC']] });
+  const rows = await Comment.findAll({ where: { panelId }, include: [{ model: User, as: 'author', attributes: ['name'] }], order: [['id', 'ASC']] });
+  return rows.map((c) => Object.assign(c, { authorName: (c as Comment & { author?: User | null }).author?.name ?? null }));
 }
 
 export async function revisionsOf(panelId: number) {
@@ -100,4 +102,56 @@ export async function usersWithRole(organisationId: number, role: string) {
   });
 }
 
-export { Panel, Load, Revision, Comment, Job };
+export async function createPanel(values: CreationAttributes<Panel>, transaction?: Transaction) {
+  return Panel.create(values, { transaction });
+}
+
+export async function updatePanel(id: number, values: Partial<CreationAttributes<Panel>>, transaction?: Transaction) {
+  await Panel.update(values, { where: { id }, transaction });
+}
+
+/** The job's panels not archived, with their job, locked for the change (a change to the job's supply). */
+export async function jobPanelsForUpdate(organisationId: number, jobId: number, transaction: Transaction) {
+  const panels = await Panel.findAll({
+    where: { organisationId, jobId, archivedAt: null },
+    include: [{ model: Job, as: 'job', required: true }],
+    transaction,
+    lock: { level: transaction.LOCK.UPDATE, of: Panel },
+  });
+  return panels as Array<Panel & { job: Job }>;
+}
+
+export async function createLoad(values: CreationAttributes<Load>, transaction?: Transaction) {
+  return Load.create(values, { transaction });
+}
+
+/** New motors in one statement; with `updateOnDuplicate`, changed fields of existing motors in one statement. */
+export async function saveLoads(rows: Array<CreationAttributes<Load>>, transaction: Transaction, updateOnDuplicate?: Array<keyof CreationAttributes<Load>>) {
+  await Load.bulkCreate(rows, { transaction, ...(updateOnDuplicate ? { updateOnDuplicate } : {}) });
+}
+
+export async function lastLoadPosition(panelId: number, transaction?: Transaction): Promise<number> {
+  return (await Load.max<number, Load>('position', { where: { panelId }, transaction })) ?? 0;
+}
+
+/** Changes a motor; with `version`, only while it is still that version. Returns the rows changed. */
+export async function updateLoad(id: number, values: Partial<CreationAttributes<Load>>, transaction: Transaction, version?: number) {
+  const [count] = await Load.update(values, { where: version === undefined ? { id } : { id, version }, transaction });
+  return count;
+}
+
+export async function deleteLoad(id: number, transaction: Transaction) {
+  await Load.destroy({ where: { id }, transaction });
+}
+
+export async function createComment(values: CreationAttributes<Comment>, transaction?: Transaction) {
+  return Comment.create(values, { transaction });
+}
+
+export async function createRevision(values: CreationAttributes<Revision>, transaction: Transaction) {
+  return Revision.create(values, { transaction });
+}
+
+export async function findRevision(organisationId: number, panelId: number, number: number, transaction?: Transaction) {
+  return Revision.findOne({ where: { organisationId, panelId, number }, transaction });
+}

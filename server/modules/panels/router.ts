@@ -1,19 +1,14 @@
 import { z } from 'zod';
-import { countParamSchema, idParamSchema, versionSchema } from '../../../shared/schemas/bounds';
+import { idParamSchema, versionSchema } from '../../../shared/schemas/bounds';
 import { defineRoute } from '../../http/route-table';
-import { IdParamSchema } from '../../../shared/schemas/auth';
-import { BulkEditSchema, CommentInputSchema, PanelInputSchema, PanelUpdateSchema, ReselectSchema, ReviewActionSchema } from '../../../shared/schemas/panel';
+import { IdParamSchema, ROLE_SETS } from '../../../shared/schemas/auth';
+import { BulkEditSchema, CommentInputSchema, PanelInputSchema, PanelUpdateSchema, ReselectSchema } from '../../../shared/schemas/panel';
+import { JobUpdateSchema } from '../../../shared/schemas/job';
 import { OverridesPutSchema } from '../../../shared/schemas/override';
 import * as service from './service';
-import * as review from './review';
+import * as motors from './motors';
 import * as ruleCheck from './rule-check';
-import { changeReportWorkbook } from './change-report-export';
-import { sendAttachment } from '../../http/attachment';
 
-const ALL = ['admin', 'designer', 'estimator', 'engineer'] as const;
-const DESIGN = ['admin', 'designer'] as const;
-const ENGINEER = ['engineer'] as const;
-const COMMENT = ['admin', 'designer', 'engineer', 'estimator'] as const;
 
 const PanelId = z.object({ panelId: idParamSchema });
 const LoadId = z.object({ loadId: idParamSchema });
@@ -23,21 +18,23 @@ export const panelRoutes = [
   defineRoute({
     method: 'get',
     path: '/api/sign-off-queue',
-    access: ALL,
+    access: ROLE_SETS.everyone,
     summary: `Panels in review, returned, and signed off in the last ${service.SIGNED_OFF_DAYS} days`,
     handler: ({ user }) => service.signOffQueue(user),
   }),
-  defineRoute({ method: 'get', path: '/api/jobs/:id/panels', access: ALL, summary: 'Panels of a job', params: IdParamSchema, handler: ({ user, params }) => service.listPanels(user, params.id) }),
+  // A job's change lives here, not in the jobs module: a change to its supply re-selects its panels.
+  defineRoute({ method: 'patch', path: '/api/jobs/:id', access: ROLE_SETS.design, summary: 'Change a job', params: IdParamSchema, body: JobUpdateSchema, handler: ({ user, params, body }) => service.changeJob(user, params.id, body) }),
+  defineRoute({ method: 'get', path: '/api/jobs/:id/panels', access: ROLE_SETS.everyone, summary: 'Panels of a job', params: IdParamSchema, handler: ({ user, params }) => service.listPanels(user, params.id) }),
   defineRoute({
     method: 'post',
     path: '/api/jobs/:id/panels',
-    access: DESIGN,
+    access: ROLE_SETS.design,
     summary: 'New panel',
     params: IdParamSchema,
     body: PanelInputSchema,
     handler: ({ user, params, body }) => service.createPanel(user, params.id, body),
   }),
-  defineRoute({ method: 'get', path: '/api/panels/:panelId', access: ALL, summary: 'A panel with its motors, selections, comments and revisions', params: PanelId, handler: async ({ user, params, req, res }) => {
+  defineRoute({ method: 'get', path: '/api/panels/:panelId', access: ROLE_SETS.everyone, summary: 'A panel with its motors, selections, comments and revisions', params: PanelId, handler: async ({ user, params, req, res }) => {
       const { json, gzip, key } = await service.panelDetailJson(user, params.panelId);
       res.setHeader('ETag', `W/"${key}"`);
       res.setHeader('Cache-Control', 'private, no-cache');
@@ -62,11 +59,11 @@ export const panelRoutes = [
       return service.updatePanel(user, params.panelId, changes, version);
     },
   }),
-  defineRoute({ method: 'post', path: '/api/panels/:panelId/duplicate', access: DESIGN, summary: 'Duplicate a panel with its motors', params: PanelId, handler: ({ user, params }) => service.duplicatePanel(user, params.panelId) }),
+  defineRoute({ method: 'post', path: '/api/panels/:panelId/duplicate', access: ROLE_SETS.design, summary: 'Duplicate a panel with its motors', params: PanelId, handler: ({ user, params }) => service.duplicatePanel(user, params.panelId) }),
   defineRoute({
     method: 'post',
     path: '/api/panels/:panelId/archive',
-    access: DESIGN,
+    access: ROLE_SETS.design,
     summary: 'Archive or restore a panel',
     params: PanelId,
     body: z.object({ archived: z.boolean(), version: versionSchema }),
@@ -76,46 +73,46 @@ export const panelRoutes = [
   defineRoute({
     method: 'post',
     path: '/api/panels/:panelId/loads',
-    access: DESIGN,
+    access: ROLE_SETS.design,
     summary: 'Add a motor',
     params: PanelId,
     body: z.object({ answers: z.record(z.string(), z.unknown()), panelVersion: versionSchema.optional() }),
-    handler: ({ user, params, body }) => service.addLoad(user, params.panelId, body.answers, body.panelVersion ?? null),
+    handler: ({ user, params, body }) => motors.addLoad(user, params.panelId, body.answers, body.panelVersion ?? null),
   }),
   defineRoute({
     method: 'post',
     path: '/api/panels/:panelId/loads/bulk-edit',
-    access: DESIGN,
+    access: ROLE_SETS.design,
     summary: 'Change shared answers on several motors',
     params: PanelId,
     body: BulkEditSchema,
     status: 200,
-    handler: ({ user, params, body }) => service.bulkEdit(user, params.panelId, body.loadIds, body.changes, body.panelVersion),
+    handler: ({ user, params, body }) => motors.bulkEdit(user, params.panelId, body.loadIds, body.changes, body.panelVersion),
   }),
   defineRoute({
     method: 'put',
     path: '/api/loads/:loadId',
-    access: DESIGN,
+    access: ROLE_SETS.design,
     summary: "Change a motor's answers",
     params: LoadId,
     body: LoadBody.extend({ version: versionSchema }),
-    handler: ({ user, params, body }) => service.updateLoad(user, params.loadId, body.answers, body.version),
+    handler: ({ user, params, body }) => motors.updateLoad(user, params.loadId, body.answers, body.version),
   }),
-  defineRoute({ method: 'post', path: '/api/loads/:loadId/copy', access: DESIGN, summary: 'Copy a motor', params: LoadId, handler: ({ user, params }) => service.copyLoad(user, params.loadId) }),
-  defineRoute({ method: 'delete', path: '/api/loads/:loadId', access: DESIGN, summary: 'Remove a motor', params: LoadId, handler: ({ user, params }) => service.deleteLoad(user, params.loadId) }),
+  defineRoute({ method: 'post', path: '/api/loads/:loadId/copy', access: ROLE_SETS.design, summary: 'Copy a motor', params: LoadId, handler: ({ user, params }) => motors.copyLoad(user, params.loadId) }),
+  defineRoute({ method: 'delete', path: '/api/loads/:loadId', access: ROLE_SETS.design, summary: 'Remove a motor', params: LoadId, handler: ({ user, params }) => motors.deleteLoad(user, params.loadId) }),
   defineRoute({
     method: 'put',
     path: '/api/loads/:loadId/overrides',
-    access: DESIGN,
+    access: ROLE_SETS.design,
     summary: "Set a motor's overrides, each with a justification",
     params: LoadId,
     body: OverridesPutSchema,
-    handler: ({ user, params, body }) => service.setOverrides(user, params.loadId, body.overrides, body.version),
+    handler: ({ user, params, body }) => motors.setOverrides(user, params.loadId, body.overrides, body.version),
   }),
   defineRoute({
     method: 'get',
     path: '/api/panels/:panelId/rule-check',
-    access: ALL,
+    access: ROLE_SETS.everyone,
     summary: 'What the current rules and tables would change in the stored selections, motor by motor',
     params: PanelId,
     handler: ({ user, params }) => ruleCheck.ruleCheck(user, params.panelId),
@@ -123,7 +120,7 @@ export const panelRoutes = [
   defineRoute({
     method: 'post',
     path: '/api/panels/:panelId/reselect',
-    access: DESIGN,
+    access: ROLE_SETS.design,
     summary: 'Select every motor again under the current rules and tables (409 in review or when the version is stale)',
     params: PanelId,
     body: ReselectSchema,
@@ -133,77 +130,10 @@ export const panelRoutes = [
   defineRoute({
     method: 'post',
     path: '/api/panels/:panelId/comments',
-    access: COMMENT,
+    access: ROLE_SETS.everyone,
     summary: 'Comment on a panel or one of its motors',
     params: PanelId,
     body: CommentInputSchema,
     handler: ({ user, params, body }) => service.addComment(user, params.panelId, body.body, body.loadId),
-  }),
-  defineRoute({
-    method: 'post',
-    path: '/api/panels/:panelId/submit',
-    access: DESIGN,
-    summary: 'Submit for sign-off',
-    params: PanelId,
-    body: ReviewActionSchema,
-    status: 200,
-    handler: ({ user, params, body }) => review.submitForReview(user, params.panelId, body.version, body.comment),
-  }),
-  defineRoute({
-    method: 'post',
-    path: '/api/panels/:panelId/return',
-    access: ENGINEER,
-    summary: 'Return to the designer with a comment',
-    params: PanelId,
-    body: ReviewActionSchema,
-    status: 200,
-    handler: ({ user, params, body }) => review.returnPanel(user, params.panelId, body.version, body.comment),
-  }),
-  defineRoute({
-    method: 'post',
-    path: '/api/panels/:panelId/approve',
-    access: ENGINEER,
-    summary: 'Sign off: freeze the next revision',
-    params: PanelId,
-    body: ReviewActionSchema,
-    status: 200,
-    handler: ({ user, params, body }) => review.approvePanel(user, params.panelId, body.version, body.comment, { acknowledgeSccr: body.acknowledgeSccr }),
-  }),
-  defineRoute({
-    method: 'get',
-    path: '/api/panels/:panelId/sign-off-eligibility',
-    access: ALL,
-    summary: 'Whether the signed-in person may sign the panel off as its reviewer (separation of duties), and why not',
-    params: PanelId,
-    handler: ({ user, params }) => review.signOffEligibility(user, params.panelId),
-  }),
-  defineRoute({
-    method: 'get',
-    path: '/api/panels/:panelId/revisions/:number',
-    access: ALL,
-    summary: 'One frozen revision',
-    params: PanelId.extend({ number: countParamSchema }),
-    handler: ({ user, params }) => review.getRevision(user, params.panelId, params.number),
-  }),
-  defineRoute({
-    method: 'get',
-    path: '/api/panels/:panelId/change-report',
-    access: ALL,
-    summary: 'Change report between two revisions',
-    params: PanelId,
-    query: z.object({ from: countParamSchema, to: countParamSchema }),
-    handler: ({ user, params, query }) => review.compareRevisions(user, params.panelId, query.from, query.to),
-  }),
-  defineRoute({
-    method: 'get',
-    path: '/api/panels/:panelId/change-report.xlsx',
-    access: ALL,
-    summary: 'Change report between two revisions as .xlsx (totals, lines with formulas, decisions)',
-    params: PanelId,
-    query: z.object({ from: countParamSchema, to: countParamSchema }),
-    handler: async ({ user, params, query, res }) => {
-      const out = await changeReportWorkbook(user, params.panelId, query.from, query.to);
-      return sendAttachment(res, out.base, 'xlsx', out.buffer);
-    },
   }),
 ];

@@ -13,7 +13,7 @@ import type { RuleCheckBody } from '../../../shared/schemas/panel';
 import { selectionDifferences } from '../../../shared/calc/selection-diff';
 import { recordActivity } from '../activity/service';
 import * as repo from './repository';
-import { panelSupply, selectAll, selectOne } from './selection';
+import { panelSupply, selectAll, selectOne } from '../selection/service';
 import { ValidationError } from '../../../shared/errors';
 import { changePanel, requirePanel, reselectPanel } from './service';
 import type { Load } from '../../db/models/load';
@@ -49,7 +49,7 @@ async function differencesOf(job: Parameters<typeof selectAll>[0], loads: Load[]
   const { results: now, rollup } = await currentSelections(job, loads);
   const changed: RuleCheckBody['changed'] = [];
   loads.forEach((l, i) => {
-    const stored = l.selection as unknown as LoadSelection | null;
+    const stored = l.selection;
     const current = now[i];
     if (current === undefined) return;
     const differences =

@@ -5,16 +5,14 @@ import { changeFeed } from '../../db/change-feed';
 import type { CurrentUser } from '../../../shared/schemas/auth';
 import type { CommentView, LoadView, PanelDetail, PanelState } from '../../../shared/schemas/panel';
 import type { LoadInput } from '../../../shared/schemas/load';
-import { LoadSchema } from '../../../shared/schemas/load';
-import { flcRefusal } from '../../../shared/calc/flc';
 import type { LoadSelection, PanelRollup } from '../../../shared/schemas/selection';
-import type { OverrideInput, StoredOverride } from '../../../shared/schemas/override';
-import { applyOverrides, checkOverride } from '../../../shared/calc/overrides';
-import { ConflictError, ForbiddenError, NotFoundError, ValidationError, zodIssues } from '../../../shared/errors';
+import { applyOverrides } from '../../../shared/calc/overrides';
+import { ConflictError, ForbiddenError, NotFoundError, ValidationError } from '../../../shared/errors';
 import * as repo from './repository';
-import { panelSupply, rollupOf, selectAll, selectOne } from './selection';
+import { panelSupply, rollupOf, selectAll } from '../selection/service';
 import { recordActivity } from '../activity/service';
-import { getJob, jobView } from '../jobs/service';
+import { getJob, jobView, updateJob } from '../jobs/service';
+import type { JobValues } from '../../../shared/schemas/job';
 import { shopSettingsOf } from '../settings/service';
 import type { Panel } from '../../db/models/panel';
 import type { Load } from '../../db/models/load';
@@ -24,7 +22,7 @@ const EDITABLE: PanelState[] = ['draft', 'returned', 'signed_off'];
 
 export function loadView(l: Load): LoadView {
   const selection = (l.selection ?? null) as LoadSelection | null;
-  const overrides = (l.overrides ?? []) as unknown as StoredOverride[];
+  const overrides = l.overrides ?? [];
   return {
     id: l.id,
     tag: l.tag,
@@ -119,10 +117,10 @@ async function panelDetailOf(p: Panel & { job: Job }): Promise<PanelDetail> {
     labourRate: p.labourRate,
     terminationsListed75C: p.terminationsListed75C ?? null,
     rollup: (p.rollup ?? null) as PanelRollup | null,
-    job: jobView(p.job) as unknown as PanelDetail['job'], // dates travel as ISO strings
+    job: jobView(p.job) as unknown as PanelDetail['job'], // cast: the view's dates travel as ISO strings in the JSON answer
     loads: loads.map(loadView).map((l) => (l.overrides.length ? l : { ...l, effective: null })),
     comments: comments.map(
-      (c): CommentView => ({ id: c.id, loadId: c.loadId, body: c.body, author: (c as unknown as { author?: { name: string } }).author?.name ?? null, at: c.createdAt.toISOString() }),
+      (c): CommentView => ({ id: c.id, loadId: c.loadId, body: c.body, author: c.authorName, at: c.createdAt.toISOString() }),
     ),
     revisions: revisions.map((r) => ({ ...r, approvedAt: new Date(r.approvedAt).toISOString() })),
   };
@@ -133,7 +131,7 @@ export async function createPanel(actor: CurrentUser, jobId: number, values: { n
   const job = await getJob(actor, jobId);
   const shop = await shopSettingsOf(actor.organisationId);
   const pricing = { markupPercent: values.markupPercent ?? shop.defaultMarkupPercent, labourRate: values.labourRate ?? shop.defaultLabourRate };
-  const p = await repo.Panel.create({ ...values, ...pricing, organisationId: actor.organisationId, jobId: job.id, revisionNumber: null, archivedAt: null, rollup: null, submittedAt: null });
+  const p = await repo.createPanel({ ...values, ...pricing, organisationId: actor.organisationId, jobId: job.id, revisionNumber: null, archivedAt: null, rollup: null, submittedAt: null });
   await recordActivity(actor, { entity: 'panel', entityId: p.id, jobId, panelId: p.id, action: 'created', summary: `Created panel ${p.name}` });
   return panelDetail(actor, p.id);
 }
@@ -185,10 +183,10 @@ export async function openBomChange(actor: CurrentUser, p: Panel & { job: Job },
 }
 
 /** Recomputes the panel roll-up from the motors' stored selections (the rules do not run again). */
-async function refreshRollup(p: Panel & { job: Job }, t: Transaction) {
+export async function refreshRollup(p: Panel & { job: Job }, t: Transaction) {
   const loads = (await repo.loadsOf(p.id, t)).filter((l) => l.selection);
-  const rollup = rollupOf(panelSupply(p), loads.map((l) => l.answers as LoadInput), loads.map((l) => l.selection as unknown as LoadSelection));
-  p.rollup = rollup as unknown as Record<string, unknown> | null;
+  const rollup = rollupOf(panelSupply(p), loads.map((l) => l.answers), loads.map((l) => l.selection!)); // filtered above
+  p.rollup = rollup;
   p.changed('rollup', true);
 }
 
@@ -200,51 +198,19 @@ export async function reselectPanel(p: Panel & { job: Job }, t: Transaction) {
   const loads = await repo.loadsOf(p.id, t);
   const out = await selectAll(panelSupply(p), loads.map((l) => l.answers as LoadInput));
   if (out) {
-    await repo.Load.bulkCreate(
-      loads.map((l, i) => ({ ...l.get({ plain: true }), selection: out.results[i] as unknown as Record<string, unknown>, version: l.version + 1 })),
-      { updateOnDuplicate: ['selection', 'version', 'updatedAt'], transaction: t },
+    await repo.saveLoads(
+      loads.map((l, i) => ({ ...l.get({ plain: true }), selection: out.results[i], version: l.version + 1 })),
+      t,
+      ['selection', 'version', 'updatedAt'],
     );
   }
-  p.rollup = out ? (out.panel as unknown as Record<string, unknown>) : null;
+  p.rollup = out ? (out.panel) : null;
   p.changed('rollup', true);
-}
-
-function parseAnswers(raw: unknown, prefix = 'body.answers'): LoadInput {
-  const r = LoadSchema.safeParse(raw);
-  if (!r.success) {
-    const issues = zodIssues(r.error.issues).map((i) => ({ ...i, path: i.path ? `${prefix}.${i.path}` : prefix }));
-    throw new ValidationError(`The motor's answers have ${issues.length} problem${issues.length === 1 ? '' : 's'}`, issues);
-  }
-  const refusal = flcRefusal(r.data); // a motor the engine cannot size is refused, not stored with zeros
-  if (refusal) throw new ValidationError(`${r.data.tag} cannot be sized: ${refusal.message}`, [{ path: `${prefix}.${refusal.path}`, message: refusal.message }]);
-  return raw as LoadInput;
-}
-
-async function tagTaken(panelId: number, tag: string, t: Transaction, exceptId?: number) {
-  const rows = await repo.loadsOf(panelId, t);
-  return rows.some((l) => l.tag.toLowerCase() === tag.toLowerCase() && l.id !== exceptId);
-}
-
-export async function addLoad(actor: CurrentUser, panelId: number, answers: unknown, panelVersion: number | null) {
-  const input = parseAnswers(answers);
-  return changePanel(actor, panelId, panelVersion, `added ${input.tag}`, async (p, t) => {
-    if (await tagTaken(p.id, input.tag, t)) throw new ValidationError(`Tag ${input.tag} is already on this panel`, [{ path: 'body.answers.tag', message: 'already on this panel' }]);
-    const selection = await selectOne(panelSupply(p), input);
-    const position = (await repo.Load.max<number, Load>('position', { where: { panelId: p.id }, transaction: t })) ?? 0;
-    const l = await repo.Load.create(
-      { organisationId: actor.organisationId, panelId: p.id, tag: input.tag, position: position + 1, answers: input as Record<string, unknown>, selection: selection as unknown as Record<string, unknown>, overrides: [] },
-      { transaction: t },
-    );
-    await refreshRollup(p, t);
-    await recordActivity(actor, { entity: 'load', entityId: l.id, jobId: p.jobId, panelId: p.id, action: 'added', summary: `Added motor ${input.tag} to ${p.name}` }, t);
-    return loadView(l);
-  });
 }
 
 /** A change to the job's supply, ambient or code edition: every active panel's motors are selected again. */
 export async function reselectJobPanels(actor: CurrentUser, jobId: number, what: string, t: Transaction) {
-  const panels = await repo.Panel.findAll({ where: { organisationId: actor.organisationId, jobId, archivedAt: null }, include: [{ model: repo.Job, as: 'job', required: true }], transaction: t, lock: { level: t.LOCK.UPDATE, of: repo.Panel } });
-  for (const p of panels as Array<Panel & { job: Job }>) {
+  for (const p of await repo.jobPanelsForUpdate(actor.organisationId, jobId, t)) {
     if (p.status === 'in_review') throw new ConflictError(`Panel ${p.name} is in review: the engineer must return it before the job's ${what} can change`);
     await reselectPanel(p, t);
     const reopened = p.status === 'signed_off';
@@ -253,122 +219,18 @@ export async function reselectJobPanels(actor: CurrentUser, jobId: number, what:
   }
 }
 
-export async function addLoads(actor: CurrentUser, _panelId: number, answersList: LoadInput[], t: Transaction, p: Panel & { job: Job }) {
-  const existing = await repo.loadsOf(p.id, t);
-  const tags = new Set(existing.map((l) => l.tag.toLowerCase()));
-  let position = existing.reduce((m, l) => Math.max(m, l.position), 0);
-  const out = await selectAll(panelSupply(p), answersList);
-  const rows = answersList.map((a, i) => {
-    if (tags.has(a.tag.toLowerCase())) throw new ValidationError(`Tag ${a.tag} is already on this panel`, [{ path: `rows[${i}].tag`, message: 'already on this panel' }]);
-    tags.add(a.tag.toLowerCase());
-    return { organisationId: actor.organisationId, panelId: p.id, tag: a.tag, position: ++position, answers: a as Record<string, unknown>, selection: out!.results[i] as unknown as Record<string, unknown>, overrides: [] };
+/** A job's change; a change to its supply (or anything else the selections depend on) re-selects its panels. */
+export async function changeJob(actor: CurrentUser, jobId: number, input: Partial<JobValues> & { version: number }) {
+  return updateJob(actor, jobId, input, async (fields, t) => {
+    if (fields.length) await reselectJobPanels(actor, jobId, fields.join(', '), t);
   });
-  await repo.Load.bulkCreate(rows, { transaction: t });
-  await refreshRollup(p, t);
-  return rows.length;
 }
 
 export { changePanel };
 
-async function requireLoad(actor: CurrentUser, loadId: number) {
-  const l = await repo.findLoad(actor.organisationId, loadId);
-  if (!l) throw new NotFoundError('Motor');
-  return l;
-}
-
-export async function updateLoad(actor: CurrentUser, loadId: number, answers: unknown, version: number) {
-  const input = parseAnswers(answers);
-  const found = await requireLoad(actor, loadId);
-  return changePanel(actor, found.panelId, null, `changed ${input.tag}`, async (p, t) => {
-    const l = (await repo.findLoad(actor.organisationId, loadId, t))!;
-    if (l.version !== version) throw new ConflictError(`Someone else changed motor ${l.tag} since you opened it: reload to see their change, then apply yours again`);
-    if (input.tag !== l.tag && (await tagTaken(p.id, input.tag, t, l.id))) throw new ValidationError(`Tag ${input.tag} is already on this panel`, [{ path: 'body.answers.tag', message: 'already on this panel' }]);
-    const selection = await selectOne(panelSupply(p), input);
-    const diff: Record<string, unknown> = {};
-    for (const k of new Set([...Object.keys(l.answers), ...Object.keys(input)])) {
-      const a = JSON.stringify((l.answers as Record<string, unknown>)[k]);
-      const b = JSON.stringify((input as Record<string, unknown>)[k]);
-      if (a !== b) diff[k] = { from: (l.answers as Record<string, unknown>)[k] ?? null, to: (input as Record<string, unknown>)[k] ?? null };
-    }
-    const [count] = await repo.Load.update(
-      { tag: input.tag, answers: input as Record<string, unknown>, selection: selection as unknown as Record<string, unknown>, version: version + 1 },
-      { where: { id: l.id, version }, transaction: t },
-    );
-    if (count === 0) throw new ConflictError(`Someone else changed motor ${l.tag}: reload and apply your change again`);
-    await refreshRollup(p, t);
-    await recordActivity(actor, { entity: 'load', entityId: l.id, jobId: p.jobId, panelId: p.id, action: 'changed', summary: `Changed motor ${input.tag}: ${Object.keys(diff).join(', ') || 'no answers'}`, diff }, t);
-    return loadView((await repo.findLoad(actor.organisationId, loadId, t))!);
-  });
-}
-
-export async function copyLoad(actor: CurrentUser, loadId: number) {
-  const l = await requireLoad(actor, loadId);
-  const siblings = await repo.loadsOf(l.panelId);
-  const tags = new Set(siblings.map((s) => s.tag.toLowerCase()));
-  let n = 2;
-  let tag = `${l.tag}-${n}`;
-  while (tags.has(tag.toLowerCase())) tag = `${l.tag}-${++n}`;
-  return addLoad(actor, l.panelId, { ...l.answers, tag: tag.slice(0, 40) }, null);
-}
-
-export async function deleteLoad(actor: CurrentUser, loadId: number) {
-  const l = await requireLoad(actor, loadId);
-  await changePanel(actor, l.panelId, null, `removed ${l.tag}`, async (p, t) => {
-    await repo.Load.destroy({ where: { id: l.id }, transaction: t });
-    await refreshRollup(p, t);
-    await recordActivity(actor, { entity: 'load', entityId: l.id, jobId: p.jobId, panelId: p.id, action: 'removed', summary: `Removed motor ${l.tag} from ${p.name}` }, t);
-  });
-}
-
-export async function bulkEdit(actor: CurrentUser, panelId: number, loadIds: number[], changes: Record<string, unknown>, panelVersion: number) {
-  return changePanel(actor, panelId, panelVersion, 'bulk edit', async (p, t) => {
-    const loads = (await repo.loadsOf(p.id, t)).filter((l) => loadIds.includes(l.id));
-    if (loads.length !== loadIds.length) throw new NotFoundError('One of the motors');
-    const inputs = loads.map((l, i) => parseAnswers({ ...l.answers, ...changes }, `loads[${i}]`));
-    const out = await selectAll(panelSupply(p), inputs);
-    // one statement for all the motors
-    await repo.Load.bulkCreate(
-      loads.map((l, i) => ({ ...l.get({ plain: true }), answers: inputs[i] as Record<string, unknown>, selection: out!.results[i] as unknown as Record<string, unknown>, version: l.version + 1 })),
-      { updateOnDuplicate: ['answers', 'selection', 'version', 'updatedAt'], transaction: t },
-    );
-    await refreshRollup(p, t);
-    await recordActivity(actor, { entity: 'panel', entityId: p.id, jobId: p.jobId, panelId: p.id, action: 'bulk-edit', summary: `Changed ${Object.keys(changes).join(', ')} on ${loads.length} motors`, diff: changes }, t);
-    return { updated: loads.length };
-  });
-}
-
-export async function setOverrides(actor: CurrentUser, loadId: number, overrides: OverrideInput[], version: number) {
-  const found = await requireLoad(actor, loadId);
-  return changePanel(actor, found.panelId, null, `overrides on ${found.tag}`, async (p, t) => {
-    const l = (await repo.findLoad(actor.organisationId, loadId, t))!;
-    if (l.version !== version) throw new ConflictError(`Someone else changed motor ${l.tag}: reload and apply your change again`);
-    const sel = l.selection as unknown as LoadSelection | null;
-    if (!sel) throw new ValidationError('This motor has no selection to override');
-    const fields = new Set<string>();
-    const previous = new Map(((l.overrides ?? []) as unknown as StoredOverride[]).map((o) => [o.field, o]));
-    const stored: StoredOverride[] = overrides.map((o, i) => {
-      if (fields.has(o.field)) throw new ValidationError(`${o.field} is overridden twice`, [{ path: `body.overrides[${i}].field`, message: 'duplicate' }]);
-      fields.add(o.field);
-      const warnings = checkOverride(sel, o, i);
-      const [a, b] = o.field.split('.');
-      const was = (sel as unknown as Record<string, Record<string, unknown>>)[a]?.[b] ?? null;
-      const prev = previous.get(o.field);
-      const same = prev && prev.value === o.value && prev.justification === o.justification;
-      return { ...o, was, warnings, by: same ? prev.by : actor.name, at: same ? prev.at : new Date().toISOString() };
-    });
-    await repo.Load.update({ overrides: stored as unknown as Array<Record<string, unknown>>, version: version + 1 }, { where: { id: l.id }, transaction: t });
-    await recordActivity(
-      actor,
-      { entity: 'load', entityId: l.id, jobId: p.jobId, panelId: p.id, action: 'override', summary: `Overrides on ${l.tag}: ${stored.map((o) => `${o.field} = ${o.value}`).join('; ') || 'none'}`, diff: { overrides: stored } },
-      t,
-    );
-    return loadView((await repo.findLoad(actor.organisationId, loadId, t))!);
-  });
-}
-
 export async function updatePanel(actor: CurrentUser, panelId: number, changes: Record<string, unknown>, version: number) {
   await changePanel(actor, panelId, version, 'panel settings', async (p, t) => {
-    await repo.Panel.update(changes, { where: { id: p.id }, transaction: t });
+    await repo.updatePanel(p.id, changes, t);
     if ('terminationsListed75C' in changes && (changes.terminationsListed75C ?? null) !== (p.terminationsListed75C ?? null)) {
       // the conductors follow the termination rating (110.14(C)(1)): every motor is selected again
       p.terminationsListed75C = (changes.terminationsListed75C ?? null) as boolean | null;
@@ -383,7 +245,7 @@ export async function duplicatePanel(actor: CurrentUser, panelId: number) {
   const src = await requirePanel(actor, panelId);
   const loads = await repo.loadsOf(src.id);
   const id = await db().transaction(async (t) => {
-    const p = await repo.Panel.create(
+    const p = await repo.createPanel(
       {
         organisationId: actor.organisationId,
         jobId: src.jobId,
@@ -398,11 +260,11 @@ export async function duplicatePanel(actor: CurrentUser, panelId: number) {
         rollup: src.rollup,
         submittedAt: null,
       },
-      { transaction: t },
+      t,
     );
-    await repo.Load.bulkCreate(
+    await repo.saveLoads(
       loads.map((l) => ({ organisationId: actor.organisationId, panelId: p.id, tag: l.tag, position: l.position, answers: l.answers, selection: l.selection, overrides: l.overrides })),
-      { transaction: t },
+      t,
     );
     await recordActivity(actor, { entity: 'panel', entityId: p.id, jobId: src.jobId, panelId: p.id, action: 'duplicated', summary: `Duplicated panel ${src.name} with ${loads.length} motors` }, t);
     return p.id;
@@ -424,7 +286,7 @@ export async function addComment(actor: CurrentUser, panelId: number, body: stri
     const l = await repo.findLoad(actor.organisationId, loadId);
     if (!l || l.panelId !== p.id) throw new ValidationError('That motor is not on this panel', [{ path: 'body.loadId', message: 'not on this panel' }]);
   }
-  const c = await repo.Comment.create({ organisationId: actor.organisationId, panelId: p.id, loadId, userId: actor.id, body });
+  const c = await repo.createComment({ organisationId: actor.organisationId, panelId: p.id, loadId, userId: actor.id, body });
   await repo.touchPanel(p.id);
   await recordActivity(actor, { entity: 'comment', entityId: c.id, jobId: p.jobId, panelId: p.id, action: 'commented', summary: `Commented on ${p.name}: ${body.slice(0, 80)}` });
   return { id: c.id, loadId, body, author: actor.name, at: c.createdAt.toISOString() } satisfies CommentView;

@@ -2,18 +2,10 @@
 // panel marking, drawn into the PDF from the same SVG the Drawings section shows (svg-to-pdfkit), landscape.
 import SVGtoPDF from 'svg-to-pdfkit';
 import type PDFDocument from 'pdfkit';
-import type { TerminalRow } from '../../../shared/drawings/panel-drawings';
+import type { SubmittalDrawings, TerminalRow } from '../../../shared/drawings/panel-drawings';
 import { pdfSafe } from './pdf-writer';
 
-export interface SubmittalDrawings {
-  drawingNumber: string;
-  /** SVG sheets in order: supply, then one per bucket */
-  sheets: string[];
-  terminals: TerminalRow[];
-  bomTerminalBlocks: number;
-  colourPractice: string;
-  nameplateSvg: string | null;
-}
+export type { SubmittalDrawings };
 
 const MARGIN = 24;
 const safe = (s: string) => pdfSafe(s.replace(/ · /g, ', ').replace(/→/g, '->').replace(/↔/g, '<->').replace(/φ/g, 'ph').replace(/[✖⚠]/g, '!'));

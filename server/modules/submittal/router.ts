@@ -1,15 +1,15 @@
 import { z } from 'zod';
 import { idParamSchema } from '../../../shared/schemas/bounds';
 import { defineRoute } from '../../http/route-table';
+import { ROLE_SETS } from '../../../shared/schemas/auth';
 import { ConflictError } from '../../../shared/errors';
 import { computeChecks } from '../checks/service';
-import { getRevision } from '../panels/review';
+import { getRevision } from '../review/service';
 import { revisionsOf } from '../panels/repository';
 import { logoOf } from '../settings/service';
 import { writeSubmittalPdf, type SubmittalData } from './pdf';
 import { drawingsFrom, submittalDrawings } from '../drawings/service';
 
-const ALL = ['admin', 'designer', 'estimator', 'engineer'] as const;
 const PanelId = z.object({ panelId: idParamSchema });
 
 /** A file name from the job number and panel name: letters, digits, dot, dash and underscore only. */
@@ -27,7 +27,7 @@ export const submittalRoutes = [
   defineRoute({
     method: 'get',
     path: '/api/panels/:panelId/submittal.pdf',
-    access: ALL,
+    access: ROLE_SETS.everyone,
     summary: 'The panel submittal as a PDF (download)',
     params: PanelId,
     handler: async ({ user, params, res }) => {

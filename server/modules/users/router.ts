@@ -1,14 +1,14 @@
 import { defineRoute } from '../../http/route-table';
-import { IdParamSchema, UserCreateSchema, UserUpdateSchema } from '../../../shared/schemas/auth';
+import { IdParamSchema, UserCreateSchema, UserUpdateSchema, ROLE_SETS } from '../../../shared/schemas/auth';
 import * as service from './service';
 
 export const userRoutes = [
-  defineRoute({ method: 'get', path: '/api/users', access: ['admin'], summary: 'People of the organisation', handler: ({ user }) => service.listUsers(user) }),
-  defineRoute({ method: 'post', path: '/api/users', access: ['admin'], summary: 'Invite a person', body: UserCreateSchema, handler: ({ user, body }) => service.inviteUser(user, body) }),
+  defineRoute({ method: 'get', path: '/api/users', access: ROLE_SETS.admin, summary: 'People of the organisation', handler: ({ user }) => service.listUsers(user) }),
+  defineRoute({ method: 'post', path: '/api/users', access: ROLE_SETS.admin, summary: 'Invite a person', body: UserCreateSchema, handler: ({ user, body }) => service.inviteUser(user, body) }),
   defineRoute({
     method: 'patch',
     path: '/api/users/:id',
-    access: ['admin'],
+    access: ROLE_SETS.admin,
     summary: 'Change roles, name, or deactivate',
     params: IdParamSchema,
     body: UserUpdateSchema,

@@ -1,18 +1,10 @@
 import { NavLink, Outlet, useNavigate, useNavigation } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
 import { hasRole, sessionQueries, useSignOut } from '../../features/auth/api/session';
-import { ROLE_LABELS, type Role } from '../../../shared/schemas/auth';
-import { ErrorBoundary } from './error-boundary';
+import { ROLE_LABELS, type Role, ROLE_SETS } from '../../../shared/schemas/auth';
+import { ErrorBoundary } from '../../components/ui/error-boundary';
+import { Mark } from '../../components/ui/mark';
 import { panelQueries } from '../../features/panels/api/panels';
-
-function Mark() {
-  return (
-    <svg viewBox="0 0 24 24" className="h-6 w-6" aria-hidden>
-      <rect x="1" y="1" width="22" height="22" rx="4" fill="none" stroke="#c4814a" strokeWidth="2" />
-      <path d="M7 18V6h6a3.5 3.5 0 010 7H7" fill="none" stroke="#e8ecef" strokeWidth="2.2" />
-    </svg>
-  );
-}
 
 export function AppLayout() {
   const { data: me } = useQuery(sessionQueries.me());
@@ -21,14 +13,14 @@ export function AppLayout() {
   const navigation = useNavigation();
   // panels waiting on this person: in review for an engineer, returned for a panel builder
   const queue = useQuery({ ...panelQueries.queue(), enabled: !!me });
-  const waiting = (queue.data ?? []).filter((p) => (p.status === 'in_review' && hasRole(me, 'engineer')) || (p.status === 'returned' && hasRole(me, 'designer', 'admin'))).length;
+  const waiting = (queue.data ?? []).filter((p) => (p.status === 'in_review' && hasRole(me, ...ROLE_SETS.engineer)) || (p.status === 'returned' && hasRole(me, ...ROLE_SETS.design))).length;
   const links: Array<{ to: string; label: string; show: boolean }> = [
     { to: '/jobs', label: 'Jobs', show: true },
     { to: '/catalogue', label: 'Catalogue', show: true },
     { to: '/labour-units', label: 'Labour units', show: true },
-    { to: '/people', label: 'People', show: hasRole(me, 'admin') },
-    { to: '/settings', label: 'Shop settings', show: hasRole(me, 'admin') },
-    { to: '/outbox', label: 'Outbox', show: hasRole(me, 'admin') },
+    { to: '/people', label: 'People', show: hasRole(me, ...ROLE_SETS.admin) },
+    { to: '/settings', label: 'Shop settings', show: hasRole(me, ...ROLE_SETS.admin) },
+    { to: '/outbox', label: 'Outbox', show: hasRole(me, ...ROLE_SETS.admin) },
   ];
   return (
     <div className="min-h-screen">

@@ -2,6 +2,7 @@ import { useCallback, useState } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import { queryClient } from '../../lib/query-client';
 import { hasRole, sessionQueries } from '../../features/auth/api/session';
+import { ROLE_SETS } from '../../../shared/schemas/auth';
 import { CATALOGUE_EXPORT, catalogueQueries, useCreateItem, useUpdateItem } from '../../features/catalogue/api/catalogue';
 import type { CatalogueEntry, ItemChanges } from '../../../shared/schemas/catalogue';
 import { CatalogueTable } from '../../features/catalogue/components/catalogue-table';
@@ -22,7 +23,7 @@ export async function loader() {
 export function Component() {
   const items = useQuery(catalogueQueries.list(LIST));
   const { data: me } = useQuery(sessionQueries.me());
-  const canEdit = hasRole(me, 'admin', 'estimator');
+  const canEdit = hasRole(me, ...ROLE_SETS.estimate);
   const update = useUpdateItem();
   const create = useCreateItem();
   const [panel, setPanel] = useState<'none' | 'add' | 'import'>('none');
@@ -66,7 +67,7 @@ export function Component() {
       {items.isPending ? <Loading what="Loading the catalogue" /> : items.isError ? <ErrorNote error={items.error} /> : (
         <CatalogueTable items={items.data} canEdit={canEdit} onChange={onChange} onHistory={onHistory} historyOf={history?.id ?? null} />
       )}
-      <CombinationsSection canEdit={hasRole(me, 'admin', 'estimator', 'engineer')} />
+      <CombinationsSection canEdit={hasRole(me, ...ROLE_SETS.editCombinations)} />
       <p className="text-xs text-ink-soft">Prices are the shop's own. A change here does not alter a bill of materials already priced: its lines keep the unit cost they were priced at until the estimator re-prices them.</p>
     </div>
   );

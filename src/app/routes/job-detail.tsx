@@ -9,6 +9,7 @@ import { Button } from '../../components/ui/button';
 import { JobForm } from '../../features/jobs/components/job-form';
 import { JobPanels } from '../../features/panels/components/job-panels';
 import { ActivityList } from '../../features/jobs/components/activity-list';
+import { ROLE_SETS } from '../../../shared/schemas/auth';
 
 export async function loader({ params }: LoaderFunctionArgs) {
   await queryClient.ensureQueryData(jobQueries.detail(Number(params.jobId)));
@@ -24,7 +25,7 @@ export function Component() {
   if (job.isPending) return <Loading what="Loading job" />;
   if (job.isError) return <ErrorNote error={job.error} />;
   const j = job.data;
-  const canEdit = hasRole(me, 'designer', 'admin');
+  const canEdit = hasRole(me, ...ROLE_SETS.design);
   return (
     <div>
       <PageHeader

@@ -7,6 +7,7 @@ import { queryClient } from '../../lib/query-client';
 import { Empty, ErrorNote, Loading, PageHeader } from '../../components/ui/feedback';
 import { inputClass } from '../../components/ui/field';
 import { SignOffQueue } from '../../features/panels/components/sign-off-queue';
+import { ROLE_SETS } from '../../../shared/schemas/auth';
 
 function filtersFrom(params: URLSearchParams): JobListFilters {
   return {
@@ -50,7 +51,7 @@ export function Component() {
         title="Jobs"
         subtitle="Customer orders, each with its panels and motors"
         actions={
-          hasRole(me, 'designer', 'admin') ? (
+          hasRole(me, ...ROLE_SETS.design) ? (
             <Link to="/jobs/new" className="rounded bg-copper-600 px-3 py-1.5 text-sm font-semibold text-white hover:bg-copper-700">
               + New job
             </Link>
@@ -77,7 +78,7 @@ export function Component() {
         <ErrorNote error={jobs.error} />
       ) : jobs.data.length === 0 ? (
         <Empty title={filters.q ? `No job matches “${filters.q}”` : 'No jobs yet'}>
-          {hasRole(me, 'designer', 'admin') ? 'Start with + New job.' : 'A panel builder creates jobs.'}
+          {hasRole(me, ...ROLE_SETS.design) ? 'Start with + New job.' : 'A panel builder creates jobs.'}
         </Empty>
       ) : (
         <div className="overflow-x-auto rounded border border-line bg-panel">

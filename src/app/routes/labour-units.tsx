@@ -2,6 +2,7 @@ import { useCallback } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import { queryClient } from '../../lib/query-client';
 import { hasRole, sessionQueries } from '../../features/auth/api/session';
+import { ROLE_SETS } from '../../../shared/schemas/auth';
 import { catalogueQueries, useUpdateLabourUnit } from '../../features/catalogue/api/catalogue';
 import type { LabourUnitEntry } from '../../../shared/schemas/catalogue';
 import { LabourUnitsTable } from '../../features/catalogue/components/labour-units-table';
@@ -15,7 +16,7 @@ export async function loader() {
 export function Component() {
   const units = useQuery(catalogueQueries.labourUnits());
   const { data: me } = useQuery(sessionQueries.me());
-  const canEdit = hasRole(me, 'admin', 'estimator');
+  const canEdit = hasRole(me, ...ROLE_SETS.estimate);
   const update = useUpdateLabourUnit();
   const onChange = useCallback((u: LabourUnitEntry, hours: number) => update.mutate({ key: u.key, version: u.version, hours }), [update.mutate]);
   return (

@@ -3,6 +3,7 @@ import { useQuery, useQueryClient } from '@tanstack/react-query';
 import { useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { queryClient } from '../../../lib/query-client';
 import { hasRole, sessionQueries } from '../../../features/auth/api/session';
+import { ROLE_SETS } from '../../../../shared/schemas/auth';
 import { panelQueries, useUpdatePanel } from '../../../features/panels/api/panels';
 import { bomDownloads, bomQueries, useAddManualLine, useDeleteLine, useRebuildBom, useUpdateLine, type StoredLine } from '../../../features/bom/api/bom';
 import { BomTable, type LineActions } from '../../../features/bom/components/bom-table';
@@ -39,9 +40,9 @@ export function Component() {
   const qc = useQueryClient();
   // a change to a signed-off panel's bill of materials opens a new draft: the panel's state moves too
   const panelMoved = useCallback(() => qc.invalidateQueries({ queryKey: panelQueries.detail(panelId).queryKey }), [qc, panelId]);
-  const canRebuild = hasRole(me, 'admin', 'estimator', 'designer');
+  const canRebuild = hasRole(me, ...ROLE_SETS.rebuildBom);
   const inReview = panel?.status === 'in_review';
-  const canPrice = hasRole(me, 'admin', 'estimator');
+  const canPrice = hasRole(me, ...ROLE_SETS.estimate);
   const canEdit = canPrice && !inReview;
   const actions = useMemo<LineActions>(
     () =>

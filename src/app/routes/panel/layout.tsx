@@ -7,6 +7,7 @@ import { ErrorNote, Loading } from '../../../components/ui/feedback';
 import { SignOffState } from '../../../components/ui/status';
 import { Button } from '../../../components/ui/button';
 import { RuleCheckBanner } from '../../../features/panels/components/rule-check-banner';
+import { ROLE_SETS } from '../../../../shared/schemas/auth';
 
 export async function loader({ params }: LoaderFunctionArgs) {
   await queryClient.ensureQueryData(panelQueries.detail(Number(params.panelId)));
@@ -51,7 +52,7 @@ export function Component() {
           ].join(' · ')}
         </span>
         {errors > 0 ? <span className="rounded bg-bad-bg px-2 py-0.5 text-xs font-semibold text-state-returned">✖ {errors} motor{errors > 1 ? 's' : ''} need fixing</span> : null}
-        {hasRole(me, 'designer', 'admin') ? (
+        {hasRole(me, ...ROLE_SETS.design) ? (
           <span className="ml-auto flex gap-2">
             <Button variant="secondary" disabled={duplicate.isPending} waitsFor="Duplicating…" onClick={() => duplicate.mutate()}>
               Duplicate panel
@@ -70,7 +71,7 @@ export function Component() {
           </Link>
         </p>
       ) : null}
-      <RuleCheckBanner panel={p} canEdit={hasRole(me, 'designer', 'admin')} />
+      <RuleCheckBanner panel={p} canEdit={hasRole(me, ...ROLE_SETS.design)} />
       <nav aria-label="Panel sections" className="mb-4 flex gap-1 border-b border-line">
         {SECTIONS.map((s) => (
           <NavLink

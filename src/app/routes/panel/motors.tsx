@@ -10,6 +10,7 @@ import { Button } from '../../../components/ui/button';
 import { inputClass } from '../../../components/ui/field';
 import { ENVIRONMENT_LABELS } from '../../../features/panels/components/answer-labels';
 import { sourcesSummary } from '../../../../shared/calc/other-sources';
+import { ROLE_SETS } from '../../../../shared/schemas/auth';
 
 export function Component() {
   const panelId = Number(useParams().panelId);
@@ -21,7 +22,7 @@ export function Component() {
   const [bulkField, setBulkField] = useState('environment');
   const [bulkValue, setBulkValue] = useState('indoor-dusty');
   if (!p) return null;
-  const canEdit = hasRole(me, 'designer', 'admin') && p.status !== 'in_review';
+  const canEdit = hasRole(me, ...ROLE_SETS.design) && p.status !== 'in_review';
   const sources = sourcesSummary(p.rollup);
   const sourceOf = new Map(sources.sources.flatMap((s) => s.motors.map((m) => [m.tag, s] as const)));
   const external = new Set(sources.externalMotors.map((m) => m.tag));

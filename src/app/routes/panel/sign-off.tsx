@@ -5,109 +5,19 @@ import { panelQueries, usePanelAction } from '../../../features/panels/api/panel
 import { hasRole, sessionQueries } from '../../../features/auth/api/session';
 import { SignOffState } from '../../../components/ui/status';
 import { Button } from '../../../components/ui/button';
-import { Caution, ErrorNote, Loading } from '../../../components/ui/feedback';
+import { Caution, ErrorNote } from '../../../components/ui/feedback';
 import { inputClass } from '../../../components/ui/field';
 import { ApiError, get } from '../../../lib/api-client';
 import type { SignOffEligibility } from '../../../../shared/schemas/panel';
 import { checkQueries } from '../../../features/checks/api/checks';
-import { DecisionDifferences } from '../../../features/panels/components/decision-differences';
+import { ChangeReport } from '../../../features/panels/components/change-report';
+import { LimitingParts, lineLink } from '../../../features/bom/components/limiting-parts';
 import { bomQueries } from '../../../features/bom/api/bom';
-import { lineKey } from '../../../features/bom/components/bom-table';
 import { bucketLabel, categoryLabel } from '../../../features/bom/components/format';
 import { OVERRIDE_FIELDS } from '../../../../shared/schemas/override';
-import { PANEL_BUCKET } from '../../../../shared/schemas/catalogue';
-import type { SccrRow } from '../../../../shared/calc/sccr';
 
 /** The shortest reason an engineer gives when signing off below the available fault current (the server holds the same). */
 const MIN_REASON = 15;
-
-/** Where a line of the bill of materials is, for a link from this section. */
-const lineLink = (bucket: string, code: string | null) => `../bill-of-materials?line=${encodeURIComponent(lineKey(bucket, code))}`;
-
-/** The parts that set the panel's SCCR (weakest link, UL 508A SB4), each linked to its line in the bill of materials. */
-function LimitingParts({ rows }: { rows: SccrRow[] }) {
-  if (rows.length === 0) return null;
-  const seen = new Set<string>();
-  const unique = rows.filter((r) => {
-    const k = `${r.location}|${r.code}`;
-    if (seen.has(k)) return false;
-    seen.add(k);
-    return true;
-  });
-  const shown = unique.slice(0, 4);
-  return (
-    <p className="text-sm" data-testid="sign-off-sccr-limiting">
-      Limited by{' '}
-      {shown.map((r, i) => {
-        const bucket = r.location === 'feeder' ? PANEL_BUCKET : r.location;
-        return (
-          <span key={`${r.location}|${r.code}`}>
-            {i > 0 ? (i === shown.length - 1 && unique.length === shown.length ? ' and ' : ', ') : null}
-            <Link relative="path" to={lineLink(bucket, r.code.startsWith('(') ? null : r.code)} className="font-semibold text-copper-700 underline">
-              {r.code}
-            </Link>{' '}
-            ({r.location === 'feeder' ? 'feeder' : r.location}, {r.ratingKa ?? '—'} kA)
-          </span>
-        );
-      })}
-      {unique.length > shown.length ? ` and ${unique.length - shown.length} more at the same rating` : ''}.
-    </p>
-  );
-}
-import { formatMoney as money } from '../../../../shared/format/money';
-
-
-function ChangeReport({ panelId, from, to }: { panelId: number; from: number; to: number }) {
-  const r = useQuery(panelQueries.changeReport(panelId, from, to));
-  if (r.isPending) return <Loading what="Comparing revisions" />;
-  if (r.isError) return <ErrorNote error={r.error} />;
-  const d = r.data;
-  const rows = [
-    ...d.bom.added.map((e) => ({ kind: 'Added', e })),
-    ...d.bom.removed.map((e) => ({ kind: 'Removed', e })),
-    ...d.bom.changed.map((e) => ({ kind: 'Changed', e })),
-  ];
-  return (
-    <div className="space-y-2" role="group" aria-label="Change report">
-      <a className="text-sm font-semibold text-copper-700 underline" href={`/api/panels/${panelId}/change-report.xlsx?from=${from}&to=${to}`} download>
-        Download R{from} → R{to} (.xlsx)
-      </a>
-      <p className="text-sm">
-        Motors added: <strong>{d.motors.added.join(', ') || 'none'}</strong> · removed: <strong>{d.motors.removed.join(', ') || 'none'}</strong> · changed:{' '}
-        <strong>{d.motors.changed.join(', ') || 'none'}</strong>
-      </p>
-      {d.motors.decisions.length ? (
-        <DecisionDifferences motors={d.motors.decisions} before={`R${d.from}`} after={`R${d.to}`} label="Decisions that changed" />
-      ) : null}
-      <p className="text-sm">
-        Material {money(d.totals.from.materialCost)} → {money(d.totals.to.materialCost)} (<strong>{d.totals.materialDelta >= 0 ? '+' : ''}{money(d.totals.materialDelta)}</strong>) · Sell{' '}
-        {money(d.totals.from.sell)} → {money(d.totals.to.sell)} (<strong data-testid="sell-delta">{d.totals.sellDelta >= 0 ? '+' : ''}{money(d.totals.sellDelta)}</strong>)
-      </p>
-      {rows.length === 0 ? (
-        <p className="text-sm text-ink-soft">The bills of materials are the same.</p>
-      ) : (
-        <table className="dense w-full text-sm">
-          <thead className="text-left text-xs uppercase text-ink-soft">
-            <tr><th className="py-1">Change</th><th>Bucket</th><th>Part</th><th>Description</th><th className="text-right">Qty before</th><th className="text-right">Qty after</th><th className="text-right">Cost Δ ($)</th></tr>
-          </thead>
-          <tbody>
-            {rows.map(({ kind, e }) => (
-              <tr key={`${kind}-${e.key}`} className="border-t border-line/60">
-                <td className="py-1 font-semibold">{kind === 'Added' ? '+' : kind === 'Removed' ? '−' : '≠'} {kind}</td>
-                <td>{e.bucket}</td>
-                <td>{e.code ?? '—'}</td>
-                <td>{e.description}</td>
-                <td className="text-right">{e.before?.quantity ?? '—'}</td>
-                <td className="text-right">{e.after?.quantity ?? '—'}</td>
-                <td className="text-right">{e.costDelta.toFixed(2)}</td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
-      )}
-    </div>
-  );
-}
 
 export function Component() {
   const panelId = Number(useParams().panelId);

@@ -3,9 +3,9 @@
 // labour deltas as formulas over the before/after columns), and the decisions that moved motor by motor.
 import ExcelJS from 'exceljs';
 import type { CurrentUser } from '../../../shared/schemas/auth';
-import { compareRevisions } from './review';
-import { requirePanel } from './service';
-import { CHECK_CAUTIONS } from '../checks/service';
+import { compareRevisions } from './service';
+import { requirePanel } from '../panels/service';
+import { CHECK_CAUTIONS } from '../../../shared/schemas/checks';
 
 const MONEY = '#,##0.00';
 

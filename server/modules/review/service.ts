@@ -7,8 +7,8 @@ import { computeTotals, diffBoms } from '../../../shared/calc/bom';
 import { selectionDifferences } from '../../../shared/calc/selection-diff';
 import type { LoadSelection } from '../../../shared/schemas/selection';
 import { ConflictError, ForbiddenError, NotFoundError, ValidationError } from '../../../shared/errors';
-import * as repo from './repository';
-import { loadView, panelDetail, requirePanel } from './service';
+import * as repo from '../panels/repository';
+import { loadView, panelDetail, requirePanel } from '../panels/service';
 import { panelActionsBy, recordActivity } from '../activity/service';
 import { shopSettingsOf } from '../settings/service';
 import type { Transaction } from 'sequelize';
@@ -32,7 +32,7 @@ export async function submitForReview(actor: CurrentUser, panelId: number, versi
     const broken = loads.map(loadView).filter((l) => !l.selection || l.selection.errors.length > 0);
     if (broken.length) throw new ValidationError(`Fix the motors with errors first: ${broken.map((l) => l.tag).join(', ')}`, broken.map((l) => ({ path: `loads.${l.tag}`, message: l.selection?.errors.join('; ') ?? 'no selection' })));
     await repo.bumpPanel(actor.organisationId, p.id, p.version, { status: 'in_review', submittedAt: new Date() }, t);
-    if (comment) await repo.Comment.create({ organisationId: actor.organisationId, panelId: p.id, loadId: null, userId: actor.id, body: comment }, { transaction: t });
+    if (comment) await repo.createComment({ organisationId: actor.organisationId, panelId: p.id, loadId: null, userId: actor.id, body: comment }, t);
     await recordActivity(actor, { entity: 'panel', entityId: p.id, jobId: p.jobId, panelId: p.id, action: 'submitted', summary: `Submitted ${p.name} for sign-off (${loads.length} motors)` }, t);
     return p;
   });
@@ -52,7 +52,7 @@ export async function returnPanel(actor: CurrentUser, panelId: number, version: 
     if (p.version !== version) throw new ConflictError(`Someone else changed panel ${p.name} since you opened it: reload and try again`);
     if (p.status !== 'in_review') throw new ConflictError(`Panel ${p.name} is not in review`);
     await repo.bumpPanel(actor.organisationId, p.id, p.version, { status: 'returned' }, t);
-    await repo.Comment.create({ organisationId: actor.organisationId, panelId: p.id, loadId: null, userId: actor.id, body: `Returned: ${comment}` }, { transaction: t });
+    await repo.createComment({ organisationId: actor.organisationId, panelId: p.id, loadId: null, userId: actor.id, body: `Returned: ${comment}` }, t);
     await recordActivity(actor, { entity: 'panel', entityId: p.id, jobId: p.jobId, panelId: p.id, action: 'returned', summary: `Returned ${p.name}: ${comment.slice(0, 120)}` }, t);
     return p;
   });
@@ -82,7 +82,7 @@ function authoring(a: { entity: string; action: string; diff: Record<string, unk
  * Empty when they may sign it off as its reviewer.
  */
 async function authoredBy(actor: CurrentUser, p: Panel, t?: Transaction): Promise<string[]> {
-  const last = p.revisionNumber === null ? null : await repo.Revision.findOne({ where: { organisationId: actor.organisationId, panelId: p.id, number: p.revisionNumber }, transaction: t });
+  const last = p.revisionNumber === null ? null : await repo.findRevision(actor.organisationId, p.id, p.revisionNumber, t);
   const actions = await panelActionsBy(actor.organisationId, p, actor.id, last?.approvedAt ?? null, t);
   return [...new Set(actions.filter(authoring).map((a) => a.summary))];
 }
@@ -172,7 +172,7 @@ export async function approvePanel(
       comment,
       sccr: { panelSccrKa: sccr.panelSccrKa, availableFaultKa: p.job.availableFaultKa ?? null, verdict: sccr.verdict, acknowledged: finding ? { finding, by: actor.name, reason: comment } : null },
     };
-    await repo.Revision.create({ organisationId: actor.organisationId, panelId: p.id, number, snapshot, approvedBy: actor.id, approvedAt: new Date() }, { transaction: t });
+    await repo.createRevision({ organisationId: actor.organisationId, panelId: p.id, number, snapshot, approvedBy: actor.id, approvedAt: new Date() }, t);
     if (opts.failAfterFreeze) throw new Error('failure injected after the revision was written');
     await repo.bumpPanel(actor.organisationId, p.id, p.version, { status: 'signed_off', revisionNumber: number, bomGeneratedAt: new Date() }, t);
     await recordActivity(actor, { entity: 'panel', entityId: p.id, jobId: p.jobId, panelId: p.id, action: 'signed-off', summary: `Signed off ${p.name} as R${number}${finding ? ` acknowledging: ${finding}` : ''}${comment ? `: ${comment.slice(0, 100)}` : ''}` }, t);
@@ -202,7 +202,7 @@ export async function approvePanel(
 
 export async function getRevision(actor: CurrentUser, panelId: number, number: number) {
   await requirePanel(actor, panelId);
-  const r = await repo.Revision.findOne({ where: { organisationId: actor.organisationId, panelId, number } });
+  const r = await repo.findRevision(actor.organisationId, panelId, number);
   if (!r) throw new NotFoundError(`Revision R${number}`);
   return { number: r.number, approvedAt: r.approvedAt, snapshot: r.snapshot };
 }
