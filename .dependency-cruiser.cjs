@@ -16,7 +16,10 @@ const { layers } = require('./server/modules/order.json');
 function moduleOrderRules() {
   return layers.flatMap((layer, index) =>
     layer.map((name) => {
-      const notBelow = layers.slice(index).flat().filter((other) => other !== name);
+      const notBelow = layers
+        .slice(index)
+        .flat()
+        .filter((other) => other !== name);
       return {
         name: `module-order-${name}`,
         comment: `server/modules/${name} may import only modules of a lower layer (server/modules/order.json), not ${notBelow.join(', ')}`,

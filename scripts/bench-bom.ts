@@ -35,7 +35,17 @@ async function main(): Promise<void> {
 
   const build = () =>
     selections.map((s, i) =>
-      buildBom({ panelName: `MCC-${i + 1}`, selections: s.results, panel: s.panel, supply: { volts: input.supply.volts, phases: input.supply.phases, hz: input.supply.hz ?? 60 }, enclosureType: '12', catalogue, labourUnits, markupPercent: 15, labourRatePerHour: 85 }),
+      buildBom({
+        panelName: `MCC-${i + 1}`,
+        selections: s.results,
+        panel: s.panel,
+        supply: { volts: input.supply.volts, phases: input.supply.phases, hz: input.supply.hz ?? 60 },
+        enclosureType: '12',
+        catalogue,
+        labourUnits,
+        markupPercent: 15,
+        labourRatePerHour: 85,
+      }),
     );
   build(); // warm-up (JIT), not timed
   let boms = build();
@@ -51,7 +61,12 @@ async function main(): Promise<void> {
   let bytes = 0;
   for (let i = 0; i < 4; i++) {
     let n = 0;
-    const sink = new Writable({ write(chunk: Buffer, _e, cb) { n += chunk.length; cb(); } });
+    const sink = new Writable({
+      write(chunk: Buffer, _e, cb) {
+        n += chunk.length;
+        cb();
+      },
+    });
     const done = new Promise((r) => sink.on('finish', r));
     const t = performance.now();
     await writeBomWorkbook(jobInfo, panels, sink);
@@ -63,7 +78,9 @@ async function main(): Promise<void> {
   console.log(`bill of materials, ${MOTORS} motors in ${PANELS} panels, ${catalogue.length} catalogue items`);
   console.log(`  lines: ${lines}, unmatched: ${unmatched.length}`);
   console.log(`  build:  median ${median(buildTimes).toFixed(1)} ms, min ${Math.min(...buildTimes).toFixed(1)} ms (target < 1000 ms)`);
-  console.log(`  .xlsx:  median ${median(writeTimes).toFixed(1)} ms, min ${Math.min(...writeTimes).toFixed(1)} ms, ${(bytes / 1024).toFixed(0)} kB (target < 2000 ms)`);
+  console.log(
+    `  .xlsx:  median ${median(writeTimes).toFixed(1)} ms, min ${Math.min(...writeTimes).toFixed(1)} ms, ${(bytes / 1024).toFixed(0)} kB (target < 2000 ms)`,
+  );
   if (unmatched.length > 0) {
     const byNeed = new Map<string, number>();
     for (const u of unmatched) byNeed.set(u.requiredRatings ?? u.category, (byNeed.get(u.requiredRatings ?? u.category) ?? 0) + 1);

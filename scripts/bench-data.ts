@@ -62,7 +62,7 @@ function rng(seed: number): () => number {
 /** n motors drawn by the mix, on a 480 V, 65 kA supply. */
 export function motorLoads(n: number, mix: MotorMix): SelectionInput {
   const r = rng(mix.seed);
-  const pick = <T,>(xs: readonly T[]): T => xs[Math.floor(r() * xs.length)] as T;
+  const pick = <T>(xs: readonly T[]): T => xs[Math.floor(r() * xs.length)] as T;
   const env = mix.environment;
   const loads: LoadInput[] = [];
   for (let i = 0; i < n; i++) {

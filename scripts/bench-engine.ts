@@ -28,7 +28,8 @@ function sizingOnly(input: SelectionInput): void {
     const p = branchProtection({ flcAmps: flc.flcAmps, type: l.scpdType, motor: motorKind(l) }, '2023');
     branchConductor({ flcAmps: flc.flcAmps, material: l.conductor.material, tempRatingC: l.conductor.tempRatingC, ambientC: 30 }, '2023');
     motorDisconnect({ flcAmps: flc.flcAmps, hp: flc.hp }, '2023');
-    if (l.supply !== 'dc') nemaStarterSize({ hp: flc.hp, phases: l.supply === 'ac3' ? 3 : 1, volts: l.volts, duty: 'normal', amps: flc.flcAmps }, '2023');
+    if (l.supply !== 'dc')
+      nemaStarterSize({ hp: flc.hp, phases: l.supply === 'ac3' ? 3 : 1, volts: l.volts, duty: 'normal', amps: flc.flcAmps }, '2023');
     branches.push({ tag: l.tag, flcAmps: flc.flcAmps, branchDeviceAmps: p.ratingAmps });
   }
   feederRollup({ branches, material: 'cu', tempRatingC: 75, ambientC: 30, ocpdFamily: 'breaker' }, '2023');
@@ -37,7 +38,10 @@ function sizingOnly(input: SelectionInput): void {
 async function main(): Promise<void> {
   const input = motorLoads(MOTORS, ENGINE_MIX);
   const stageMs = new Map<StageName, number>();
-  const profile = { now: () => performance.now(), add: (stage: StageName, ms: number) => stageMs.set(stage, (stageMs.get(stage) ?? 0) + ms) };
+  const profile = {
+    now: () => performance.now(),
+    add: (stage: StageName, ms: number) => stageMs.set(stage, (stageMs.get(stage) ?? 0) + ms),
+  };
   const t0 = performance.now();
   const selector = createSelector(loadRuleFiles(), { profile });
   const tLoad = performance.now() - t0;
@@ -58,14 +62,18 @@ async function main(): Promise<void> {
   const s = median(sizingTimes);
   const withErrors = out?.results.filter((r) => r.errors.length > 0).length ?? 0;
   console.log(`rule files loaded and engine built once: ${selector.ruleCount} rules in ${tLoad.toFixed(1)} ms`);
-  console.log(`selectPanel, ${MOTORS} motors (rules + sizing + roll-up): median ${e.toFixed(1)} ms of ${runs} runs (${(e / MOTORS).toFixed(3)} ms per motor)`);
+  console.log(
+    `selectPanel, ${MOTORS} motors (rules + sizing + roll-up): median ${e.toFixed(1)} ms of ${runs} runs (${(e / MOTORS).toFixed(3)} ms per motor)`,
+  );
   const stage = (st: StageName) => median(perStage.get(st) ?? [0]);
   console.log(`per stage, median of ${runs} runs: ${STAGES.map((st) => `${st} ${stage(st).toFixed(1)} ms`).join(', ')}`);
   console.log(`ratio rules / sizing stage, same runs: ${(stage('rules') / stage('sizing')).toFixed(1)}x (goal at most 5x)`);
   console.log(`sizing functions alone, same ${MOTORS} motors: median ${s.toFixed(1)} ms`);
   console.log(`ratio rules stage / sizing alone: ${(stage('rules') / s).toFixed(1)}x`);
   console.log(`ratio engine / sizing alone: ${(e / s).toFixed(1)}x`);
-  console.log(`budget 500 ms: ${e < 500 ? 'met' : 'NOT met'}; loads with errors: ${withErrors}; feeder ${out?.panel.feeder.minAmpacity} A min ampacity`);
+  console.log(
+    `budget 500 ms: ${e < 500 ? 'met' : 'NOT met'}; loads with errors: ${withErrors}; feeder ${out?.panel.feeder.minAmpacity} A min ampacity`,
+  );
 }
 
 main().catch((e) => {

@@ -34,7 +34,11 @@ type AutocannonFn = (opts: {
 const moduleName = 'autocannon';
 
 function tsx(script: string): { out: string; ok: boolean } {
-  const r = spawnSync(process.execPath, [...process.execArgv, path.join(root, 'scripts', script)], { cwd: root, encoding: 'utf8', env: { ...process.env, PW_QUIET: '1' } });
+  const r = spawnSync(process.execPath, [...process.execArgv, path.join(root, 'scripts', script)], {
+    cwd: root,
+    encoding: 'utf8',
+    env: { ...process.env, PW_QUIET: '1' },
+  });
   return { out: `${r.stdout}${r.stderr}`, ok: r.status === 0 };
 }
 
@@ -74,11 +78,23 @@ async function signedInCookies(base: string, email: string, password: string, n:
   const cookies: string[] = [];
   for (let i = 0; i < n; i++) {
     const first = await fetch(`${base}/api/auth/csrf`);
-    const anon = first.headers.getSetCookie().find((c) => c.startsWith('pw.sid='))!.split(';')[0]!;
+    const anon = first.headers
+      .getSetCookie()
+      .find((c) => c.startsWith('pw.sid='))!
+      .split(';')[0]!;
     const { token } = (await first.json()) as { token: string };
-    const r = await fetch(`${base}/api/auth/sign-in`, { method: 'POST', headers: { 'content-type': 'application/json', 'x-csrf-token': token, cookie: anon }, body: JSON.stringify({ email, password }) });
+    const r = await fetch(`${base}/api/auth/sign-in`, {
+      method: 'POST',
+      headers: { 'content-type': 'application/json', 'x-csrf-token': token, cookie: anon },
+      body: JSON.stringify({ email, password }),
+    });
     if (r.status !== 200) throw new Error(`bench sign-in ${i} failed: ${r.status} ${await r.text()}`);
-    cookies.push(r.headers.getSetCookie().find((c) => c.startsWith('pw.sid='))!.split(';')[0]!);
+    cookies.push(
+      r.headers
+        .getSetCookie()
+        .find((c) => c.startsWith('pw.sid='))!
+        .split(';')[0]!,
+    );
   }
   return cookies;
 }
@@ -182,17 +198,47 @@ async function main() {
     const job = await Job.create({ organisationId: org.id, number: 'J-BENCH', name: 'Benchmark job', archivedAt: null, createdBy: null });
     const panelIds: Record<number, number> = {};
     for (const n of PANEL_MOTORS) {
-      const answers = Array.from({ length: n }, (_, i) => ({ ...DEMO_MOTORS[i % DEMO_MOTORS.length]!, tag: `${DEMO_MOTORS[i % DEMO_MOTORS.length]!.tag}-${i + 1}` }));
+      const answers = Array.from({ length: n }, (_, i) => ({
+        ...DEMO_MOTORS[i % DEMO_MOTORS.length]!,
+        tag: `${DEMO_MOTORS[i % DEMO_MOTORS.length]!.tag}-${i + 1}`,
+      }));
       const out = await selectAll(job, answers);
-      const panel = await Panel.create({ organisationId: org.id, jobId: job.id, name: `Bench ${n} motors`, revisionNumber: null, archivedAt: null, rollup: out ? (out.panel) : null, submittedAt: null });
-      await Load.bulkCreate(answers.map((a, i) => ({ organisationId: org.id, panelId: panel.id, tag: a.tag, position: i + 1, answers: a, selection: out!.results[i], overrides: [] })));
+      const panel = await Panel.create({
+        organisationId: org.id,
+        jobId: job.id,
+        name: `Bench ${n} motors`,
+        revisionNumber: null,
+        archivedAt: null,
+        rollup: out ? out.panel : null,
+        submittedAt: null,
+      });
+      await Load.bulkCreate(
+        answers.map((a, i) => ({
+          organisationId: org.id,
+          panelId: panel.id,
+          tag: a.tag,
+          position: i + 1,
+          answers: a,
+          selection: out!.results[i],
+          overrides: [],
+        })),
+      );
       panelIds[n] = panel.id;
     }
 
     // (d)
     const designer = DEMO_USERS.find((u) => u.roles[0] === 'designer')!;
-    const u = (await findUserById((await (await import('../server/db/models/user')).User.findOne({ where: { email: designer.email } }))!.id))!;
-    const actor = { id: u.id, organisationId: u.organisationId, organisationName: u.organisationName, email: u.email, name: u.name, roles: u.roles as never };
+    const u = (await findUserById(
+      (await (await import('../server/db/models/user')).User.findOne({ where: { email: designer.email } }))!.id,
+    ))!;
+    const actor = {
+      id: u.id,
+      organisationId: u.organisationId,
+      organisationName: u.organisationName,
+      email: u.email,
+      name: u.name,
+      roles: u.roles as never,
+    };
     const queries: Record<number, number> = {};
     for (const n of PANEL_MOTORS) {
       await panelDetail(actor, panelIds[n]!); // warm the pool: a first connection is not a query of the panel
@@ -237,40 +283,80 @@ async function main() {
     const sqlPerRequest = ((await statements()) - sqlBefore) / api.requests;
 
     // ---- the table ----
-    const e = { engine: num(engine.out, /selectPanel, 500 motors.*?median ([\d.]+) ms/), sizing: num(engine.out, /sizing functions alone.*?median ([\d.]+) ms/), ratio: num(engine.out, /ratio engine \/ sizing alone: ([\d.]+)x/) };
-    const b = { build: num(bom.out, /build:\s+median ([\d.]+) ms/), xlsx: num(bom.out, /\.xlsx:\s+median ([\d.]+) ms/), kb: num(bom.out, /\.xlsx:.*?, (\d+) kB/), lines: num(bom.out, /lines: (\d+)/) };
-    const dr = { job: num(drawings.out, /drawings, 200-motor job.*?median ([\d.]+) ms/), bucket: num(drawings.out, /one bucket's schematic SVG.*?median ([\d.]+) ms/) };
+    const e = {
+      engine: num(engine.out, /selectPanel, 500 motors.*?median ([\d.]+) ms/),
+      sizing: num(engine.out, /sizing functions alone.*?median ([\d.]+) ms/),
+      ratio: num(engine.out, /ratio engine \/ sizing alone: ([\d.]+)x/),
+    };
+    const b = {
+      build: num(bom.out, /build:\s+median ([\d.]+) ms/),
+      xlsx: num(bom.out, /\.xlsx:\s+median ([\d.]+) ms/),
+      kb: num(bom.out, /\.xlsx:.*?, (\d+) kB/),
+      lines: num(bom.out, /lines: (\d+)/),
+    };
+    const dr = {
+      job: num(drawings.out, /drawings, 200-motor job.*?median ([\d.]+) ms/),
+      bucket: num(drawings.out, /one bucket's schematic SVG.*?median ([\d.]+) ms/),
+    };
     const maxQueries = Math.max(...Object.values(queries));
     const rows: Array<[string, string, string]> = [
       ['Selection engine, 500 motors (rules + sizing + roll-up)', e.engine === null ? 'n/a' : `${e.engine.toFixed(1)} ms`, ''],
       ['Sizing functions alone, same 500 motors', e.sizing === null ? 'n/a' : `${e.sizing.toFixed(1)} ms`, ''],
       ['Ratio engine / sizing alone', e.ratio === null ? 'n/a' : `${e.ratio.toFixed(1)}×`, ''],
-      [`Bill of materials build, 200 motors (${b.lines ?? '?'} lines)`, b.build === null ? 'n/a' : `${b.build.toFixed(1)} ms`, b.build === null ? '' : b.build < 1000 ? '< 1000 ms: met' : '< 1000 ms: NOT met'],
-      ['Bill of materials .xlsx export, 200 motors', b.xlsx === null ? 'n/a' : `${b.xlsx.toFixed(1)} ms (${b.kb} kB)`, b.xlsx === null ? '' : b.xlsx < 2000 ? '< 2000 ms: met' : '< 2000 ms: NOT met'],
-      ['Drawings, 200-motor job (all panels, all sheets, terminal plan, wire list)', dr.job === null ? 'n/a' : `${dr.job.toFixed(0)} ms`, dr.job === null ? '' : dr.job < 1000 ? '< 1000 ms: met' : '< 1000 ms: NOT met'],
-      ['One bucket’s schematic SVG', dr.bucket === null ? 'n/a' : `${dr.bucket.toFixed(2)} ms`, dr.bucket === null ? '' : dr.bucket < 20 ? '< 20 ms: met' : '< 20 ms: NOT met'],
+      [
+        `Bill of materials build, 200 motors (${b.lines ?? '?'} lines)`,
+        b.build === null ? 'n/a' : `${b.build.toFixed(1)} ms`,
+        b.build === null ? '' : b.build < 1000 ? '< 1000 ms: met' : '< 1000 ms: NOT met',
+      ],
+      [
+        'Bill of materials .xlsx export, 200 motors',
+        b.xlsx === null ? 'n/a' : `${b.xlsx.toFixed(1)} ms (${b.kb} kB)`,
+        b.xlsx === null ? '' : b.xlsx < 2000 ? '< 2000 ms: met' : '< 2000 ms: NOT met',
+      ],
+      [
+        'Drawings, 200-motor job (all panels, all sheets, terminal plan, wire list)',
+        dr.job === null ? 'n/a' : `${dr.job.toFixed(0)} ms`,
+        dr.job === null ? '' : dr.job < 1000 ? '< 1000 ms: met' : '< 1000 ms: NOT met',
+      ],
+      [
+        'One bucket’s schematic SVG',
+        dr.bucket === null ? 'n/a' : `${dr.bucket.toFixed(2)} ms`,
+        dr.bucket === null ? '' : dr.bucket < 20 ? '< 20 ms: met' : '< 20 ms: NOT met',
+      ],
       [`GET /api/panels/:panelId (10 motors), ${CLIENTS} clients, ${DURATION_S} s: p50`, `${api.p50.toFixed(1)} ms`, ''],
       ['  p95', `${api.p95.toFixed(1)} ms`, api.p95 < BUDGET.p95Ms ? `< ${BUDGET.p95Ms} ms: met` : `< ${BUDGET.p95Ms} ms: NOT met`],
       ['  p99', `${api.p99.toFixed(1)} ms`, ''],
-      ['  throughput', `${api.perSecond.toFixed(0)} requests/s (${api.requests} requests, ${api.non2xx} non-2xx, ${api.errors} errors)`, ''],
+      [
+        '  throughput',
+        `${api.perSecond.toFixed(0)} requests/s (${api.requests} requests, ${api.non2xx} non-2xx, ${api.errors} errors)`,
+        '',
+      ],
       ['  SQL statements per request, whole server (session, person, panel)', sqlPerRequest.toFixed(3), ''],
-      ...PANEL_MOTORS.map((n): [string, string, string] => [`SQL queries, panel data, ${n} motors`, String(queries[n]), queries[n]! <= BUDGET.queries ? `≤ ${BUDGET.queries}: met` : `≤ ${BUDGET.queries}: NOT met`]),
+      ...PANEL_MOTORS.map((n): [string, string, string] => [
+        `SQL queries, panel data, ${n} motors`,
+        String(queries[n]),
+        queries[n]! <= BUDGET.queries ? `≤ ${BUDGET.queries}: met` : `≤ ${BUDGET.queries}: NOT met`,
+      ]),
     ];
     const w0 = Math.max(...rows.map((r) => r[0].length));
     const w1 = Math.max(...rows.map((r) => r[1].length));
     const cpu = os.cpus();
     console.log('');
-    console.log(`Panelwright bench, ${started.toISOString().slice(0, 10)}, ${cpu.length} × ${cpu[0]?.model.trim() ?? 'CPU'}, ${(os.totalmem() / 2 ** 30).toFixed(1)} GB RAM, Node ${process.version}, ${os.platform()} ${os.release()}`);
+    console.log(
+      `Panelwright bench, ${started.toISOString().slice(0, 10)}, ${cpu.length} × ${cpu[0]?.model.trim() ?? 'CPU'}, ${(os.totalmem() / 2 ** 30).toFixed(1)} GB RAM, Node ${process.version}, ${os.platform()} ${os.release()}`,
+    );
     console.log('');
     console.log(`| ${'Measure'.padEnd(w0)} | ${'Figure'.padEnd(w1)} | Budget |`);
     console.log(`| ${'-'.repeat(w0)} | ${'-'.repeat(w1)} | ------ |`);
     for (const [a, f, bud] of rows) console.log(`| ${a.padEnd(w0)} | ${f.padEnd(w1)} | ${bud} |`);
     console.log('');
-    console.log('SQL queries, panel data: one panelDetail call (the panel page\'s data built from the database), counted at');
-    console.log('the pg driver; a newly opened pool connection\'s set-up is left out. PW_BENCH_SQL=1 lists the statements.');
+    console.log("SQL queries, panel data: one panelDetail call (the panel page's data built from the database), counted at");
+    console.log("the pg driver; a newly opened pool connection's set-up is left out. PW_BENCH_SQL=1 lists the statements.");
     console.log('SQL statements per request: everything the server process sent during the measured run, divided by the');
     console.log('requests; repeated reads are answered from per-process caches kept current by the change feed.');
-    console.log(`Load: autocannon in this process, the server in a child process (NODE_ENV=production), PostgreSQL on 127.0.0.1; one signed-in session per connection; ${WARMUP_S} s warm-up not counted.`);
+    console.log(
+      `Load: autocannon in this process, the server in a child process (NODE_ENV=production), PostgreSQL on 127.0.0.1; one signed-in session per connection; ${WARMUP_S} s warm-up not counted.`,
+    );
     if (!engine.ok) console.log(`\nbench-engine failed:\n${engine.out}`);
     if (!bom.ok) console.log(`\nbench-bom failed:\n${bom.out}`);
     if (!drawings.ok) console.log(`\nbench-drawings failed:\n${drawings.out}`);

@@ -15,7 +15,11 @@ const CHECKS: Array<{ pattern: RegExp; unless?: RegExp; problem: string }> = [
   { pattern: /eslint-disable/, problem: 'an eslint-disable comment silences nothing here (the project lints with Biome)' },
   { pattern: /@ts-(ignore|nocheck)\b/, problem: 'use @ts-expect-error with a reason' },
   { pattern: /@ts-expect-error(?!\s+\S)/, problem: '@ts-expect-error without a reason on the same line' },
-  { pattern: /biome-ignore/, unless: /biome-ignore(-all|-start|-end)?\s+[^\s:]+:\s*\S/, problem: 'biome-ignore without a reason on the same line' },
+  {
+    pattern: /biome-ignore/,
+    unless: /biome-ignore(-all|-start|-end)?\s+[^\s:]+:\s*\S/,
+    problem: 'biome-ignore without a reason on the same line',
+  },
 ];
 
 // the patterns above, as they appear in this file, are not suppressions
@@ -30,7 +34,8 @@ for (const file of files) {
     continue; // deleted in the working tree
   }
   text.split('\n').forEach((line, i) => {
-    for (const { pattern, unless, problem } of CHECKS) if (pattern.test(line) && !unless?.test(line)) problems.push(`${file}:${i + 1}: ${problem}`);
+    for (const { pattern, unless, problem } of CHECKS)
+      if (pattern.test(line) && !unless?.test(line)) problems.push(`${file}:${i + 1}: ${problem}`);
   });
 }
 if (problems.length) {

@@ -149,7 +149,17 @@ export async function ensureCluster(): Promise<string> {
     const pwTmp = path.join(dir, '..', `.pwfile-${process.pid}`);
     fs.writeFileSync(pwTmp, pwd, { mode: 0o644 });
     try {
-      runPg(path.join(bin, 'initdb'), ['-D', dir, '-U', 'postgres', '--auth=scram-sha-256', `--pwfile=${pwTmp}`, '-E', 'UTF8', '--locale=C.UTF-8']);
+      runPg(path.join(bin, 'initdb'), [
+        '-D',
+        dir,
+        '-U',
+        'postgres',
+        '--auth=scram-sha-256',
+        `--pwfile=${pwTmp}`,
+        '-E',
+        'UTF8',
+        '--locale=C.UTF-8',
+      ]);
     } finally {
       fs.rmSync(pwTmp, { force: true });
     }
@@ -175,8 +185,15 @@ export async function ensureCluster(): Promise<string> {
   log(`starting PostgreSQL on 127.0.0.1:${pgPort}`);
   const logFile = path.join(dir, 'server.log');
   runPg(path.join(bin, 'pg_ctl'), [
-    '-D', dir, '-l', logFile, '-w', '-t', '60',
-    '-o', `-c listen_addresses=127.0.0.1 -p ${pgPort} -c unix_socket_directories='' -c max_connections=200 -c fsync=off`,
+    '-D',
+    dir,
+    '-l',
+    logFile,
+    '-w',
+    '-t',
+    '60',
+    '-o',
+    `-c listen_addresses=127.0.0.1 -p ${pgPort} -c unix_socket_directories='' -c max_connections=200 -c fsync=off`,
     'start',
   ]);
   lifecycle().started = { dir, bin };

@@ -20,7 +20,10 @@ process.on('SIGTERM', early);
 
 function buildClient(): Promise<void> {
   return new Promise((resolve, reject) => {
-    build = spawn(process.execPath, [path.join(root, 'node_modules', 'vite', 'bin', 'vite.js'), 'build', '--logLevel', 'warn'], { cwd: root, stdio: 'inherit' });
+    build = spawn(process.execPath, [path.join(root, 'node_modules', 'vite', 'bin', 'vite.js'), 'build', '--logLevel', 'warn'], {
+      cwd: root,
+      stdio: 'inherit',
+    });
     build.once('error', reject);
     build.once('exit', (code) => {
       build = null;

@@ -73,13 +73,24 @@ export function createApp(opts: AppOptions): Express {
       name: 'pw.sid',
       secret: opts.sessionSecret ?? e.SESSION_SECRET ?? randomBytes(32).toString('hex'),
       store: new CachedSessionStore(
-        new PgStore({ pool: sessionPool, tableName: 'session', createTableIfMissing: false, disableTouch: true, pruneSessionInterval: e.NODE_ENV === 'test' ? false : 60 * 15 }),
+        new PgStore({
+          pool: sessionPool,
+          tableName: 'session',
+          createTableIfMissing: false,
+          disableTouch: true,
+          pruneSessionInterval: e.NODE_ENV === 'test' ? false : 60 * 15,
+        }),
         feed,
       ),
       resave: false,
       saveUninitialized: false,
       rolling: false,
-      cookie: { httpOnly: true, sameSite: 'lax', secure: e.NODE_ENV === 'production' && e.APP_URL.startsWith('https'), maxAge: 12 * 60 * 60 * 1000 },
+      cookie: {
+        httpOnly: true,
+        sameSite: 'lax',
+        secure: e.NODE_ENV === 'production' && e.APP_URL.startsWith('https'),
+        maxAge: 12 * 60 * 60 * 1000,
+      },
     }),
   );
   configurePassport();

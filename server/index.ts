@@ -11,10 +11,14 @@ import { DEMO_USERS } from './db/seeders/demo';
 export async function startServer(databaseUrl: string): Promise<Server> {
   const e = env();
   await prepareDatabase(databaseUrl, { seed: true });
-  const smtp = e.SMTP_URL ? null : await startFakeSmtp(e.PW_SMTP_FAKE_PORT, { explicit: process.env.PW_SMTP_FAKE_PORT !== undefined ? 'PW_SMTP_FAKE_PORT' : null }).catch((err: Error) => {
-    console.warn(`[mail] development mail server not started: ${err.message}`);
-    return null;
-  });
+  const smtp = e.SMTP_URL
+    ? null
+    : await startFakeSmtp(e.PW_SMTP_FAKE_PORT, {
+        explicit: process.env.PW_SMTP_FAKE_PORT !== undefined ? 'PW_SMTP_FAKE_PORT' : null,
+      }).catch((err: Error) => {
+        console.warn(`[mail] development mail server not started: ${err.message}`);
+        return null;
+      });
   const feed = changeFeed();
   void feed.start(databaseUrl);
   const app = createApp({ databaseUrl, serveClient: true });

@@ -64,7 +64,10 @@ export class RuleFileError extends DomainError {
 /** Issues of a zod error as { path, message } with paths like "loads[3].hp". */
 export function zodIssues(issues: ReadonlyArray<{ path: ReadonlyArray<PropertyKey>; message: string }>): FieldIssue[] {
   return issues.map((i) => ({
-    path: i.path.reduce<string>((acc, seg) => (typeof seg === 'number' ? `${acc}[${seg}]` : acc ? `${acc}.${String(seg)}` : String(seg)), ''),
+    path: i.path.reduce<string>(
+      (acc, seg) => (typeof seg === 'number' ? `${acc}[${seg}]` : acc ? `${acc}.${String(seg)}` : String(seg)),
+      '',
+    ),
     message: i.message,
   }));
 }

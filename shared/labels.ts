@@ -122,9 +122,29 @@ export const RATING_LABELS: Record<keyof Ratings, string> = {
 
 /** Units of the ratings, for a field's label ("Coil voltage (V)"). */
 export const RATING_UNITS: Partial<Record<keyof Ratings, string>> = {
-  volts: 'V', voltsMin: 'V', coilVolts: 'V', amps: 'A', iecAc3Amps: 'A', iecAc4Amps: 'A', settingMinAmps: 'A', settingMaxAmps: 'A',
-  kaic: 'kA', va: 'VA', sealedVa: 'VA', inrushVa: 'VA', secondaryVolts: 'V', normalDutyAmps: 'A', heavyDutyAmps: 'A', inputAmps: 'A',
-  heightMm: 'mm', widthMm: 'mm', depthMm: 'mm', cfm: 'cfm', coolingW: 'W', ohms: 'Ω', watts: 'W',
+  volts: 'V',
+  voltsMin: 'V',
+  coilVolts: 'V',
+  amps: 'A',
+  iecAc3Amps: 'A',
+  iecAc4Amps: 'A',
+  settingMinAmps: 'A',
+  settingMaxAmps: 'A',
+  kaic: 'kA',
+  va: 'VA',
+  sealedVa: 'VA',
+  inrushVa: 'VA',
+  secondaryVolts: 'V',
+  normalDutyAmps: 'A',
+  heavyDutyAmps: 'A',
+  inputAmps: 'A',
+  heightMm: 'mm',
+  widthMm: 'mm',
+  depthMm: 'mm',
+  cfm: 'cfm',
+  coolingW: 'W',
+  ohms: 'Ω',
+  watts: 'W',
 };
 
 /** Fields of the other forms (catalogue item, job, panel, people, combinations), for error sentences. */
@@ -212,7 +232,9 @@ export const DECISION_VALUE_LABELS: Partial<Record<DecisionKey, Record<string, s
   'starter.iecCategory': { 'AC-3': 'AC-3', 'AC-4': 'AC-4' },
   'vfd.duty': { normal: 'Normal duty', heavy: 'Heavy duty' },
   'vfd.outputFilter': { none: 'No output filter', 'dv-dt': 'dV/dt filter', 'sine-wave': 'Sine-wave filter' },
-  'enclosure.nemaType': Object.fromEntries(['1', '2', '3', '3R', '3S', '4', '4X', '5', '6', '6P', '7', '9', '12', '12K', '13'].map((t) => [t, `NEMA Type ${t}`])),
+  'enclosure.nemaType': Object.fromEntries(
+    ['1', '2', '3', '3R', '3S', '4', '4X', '5', '6', '6P', '7', '9', '12', '12K', '13'].map((t) => [t, `NEMA Type ${t}`]),
+  ),
 };
 
 /** Words for the answers' own choices (supply, duty, protective device …), for lists and previews. */
@@ -238,19 +260,46 @@ export const ANSWER_VALUE_LABELS: Record<string, Record<string, string>> = {
   dcField: { shunt: 'Shunt', series: 'Series', compound: 'Compound' },
   torque: { variable: 'Variable torque', constant: 'Constant torque' },
   codeLetter: { none: 'none' },
-  controlScheme: { 'three-wire': 'Three-wire: stop/start with seal-in', 'two-wire': 'Two-wire: a maintained contact (restarts by itself)', 'hand-off-auto': 'Hand-off-auto selector' },
+  controlScheme: {
+    'three-wire': 'Three-wire: stop/start with seal-in',
+    'two-wire': 'Two-wire: a maintained contact (restarts by itself)',
+    'hand-off-auto': 'Hand-off-auto selector',
+  },
   fedFrom: { panel: "The panel's own transformer or DC supply", external: 'A source outside the panel' },
 };
 
 /** Text ratings' values (kind, function) of the catalogue seed, in words. */
 export const RATING_VALUE_LABELS: Record<string, string> = {
-  'wall-mount': 'wall-mount', 'free-standing': 'free-standing', thermal: 'thermal', electronic: 'electronic', iec: 'IEC', nema: 'NEMA',
-  power: 'power', control: 'control', ground: 'ground', 'feed-through': 'feed-through', front: 'front-mounted',
-  'sine-wave': 'sine-wave filter', 'dv-dt': 'dV/dt filter', 'air-conditioner': 'air conditioner', 'filter-fan': 'filter fan',
-  'push-button': 'push-button', 'pilot-light': 'pilot light', 'selector-switch': 'selector switch',
-  'run-light': 'run light', 'fault-light': 'fault light', start: 'start', stop: 'stop', slow: 'slow', fast: 'fast',
-  forward: 'forward', reverse: 'reverse', 'hand-off-auto': 'hand-off-auto', 'forward-off-reverse': 'forward-off-reverse',
-  'single-phase': 'single-phase', 'three-phase': 'three-phase',
+  'wall-mount': 'wall-mount',
+  'free-standing': 'free-standing',
+  thermal: 'thermal',
+  electronic: 'electronic',
+  iec: 'IEC',
+  nema: 'NEMA',
+  power: 'power',
+  control: 'control',
+  ground: 'ground',
+  'feed-through': 'feed-through',
+  front: 'front-mounted',
+  'sine-wave': 'sine-wave filter',
+  'dv-dt': 'dV/dt filter',
+  'air-conditioner': 'air conditioner',
+  'filter-fan': 'filter fan',
+  'push-button': 'push-button',
+  'pilot-light': 'pilot light',
+  'selector-switch': 'selector switch',
+  'run-light': 'run light',
+  'fault-light': 'fault light',
+  start: 'start',
+  stop: 'stop',
+  slow: 'slow',
+  fast: 'fast',
+  forward: 'forward',
+  reverse: 'reverse',
+  'hand-off-auto': 'hand-off-auto',
+  'forward-off-reverse': 'forward-off-reverse',
+  'single-phase': 'single-phase',
+  'three-phase': 'three-phase',
 };
 
 /** A text rating's value in words; a value of the shop's own (not in the table) is shown as typed, hyphens as spaces. */
@@ -294,7 +343,11 @@ export function fieldLabel(path: string): string | undefined {
   const clean = path.replace(/\[\d+\]/g, '').replace(/^(body|query|params)\./, '');
   if (clean === '' || /^(body|query|params)$/.test(clean)) return undefined;
   const parts = clean.split('.');
-  const one = (k: string) => NESTED_ANSWER_LABELS[k] ?? (ANSWER_LABELS as Record<string, string>)[k] ?? (RATING_LABELS as Record<string, string>)[k] ?? FORM_FIELD_LABELS[k];
+  const one = (k: string) =>
+    NESTED_ANSWER_LABELS[k] ??
+    (ANSWER_LABELS as Record<string, string>)[k] ??
+    (RATING_LABELS as Record<string, string>)[k] ??
+    FORM_FIELD_LABELS[k];
   // the longest known tail first ("conductor.tempRatingC" before "tempRatingC"), then any known segment
   for (let i = 0; i < parts.length; i++) {
     const found = one(parts.slice(i).join('.'));

@@ -12,7 +12,12 @@ import { answerValueLabel, fieldLabel } from './labels';
 type RawIssue = Parameters<z.core.$ZodErrorMap>[0];
 
 const list = (xs: string[]) => (xs.length <= 1 ? xs.join('') : `${xs.slice(0, -1).join(', ')} or ${xs[xs.length - 1]}`);
-const fmt = (n: unknown) => (typeof n === 'bigint' ? n.toString() : typeof n === 'number' ? n.toLocaleString('en-US', { maximumFractionDigits: 6, useGrouping: false }) : String(n));
+const fmt = (n: unknown) =>
+  typeof n === 'bigint'
+    ? n.toString()
+    : typeof n === 'number'
+      ? n.toLocaleString('en-US', { maximumFractionDigits: 6, useGrouping: false })
+      : String(n);
 const isEmpty = (v: unknown) => v === undefined || v === null || v === '';
 
 /** The plain sentence for one zod issue (the raw issue an error map receives). */
@@ -36,7 +41,11 @@ export function plainMessage(issue: RawIssue): string {
       if (i.origin === 'string') return Number(min) <= 1 ? 'This is needed.' : `Enter at least ${fmt(min)} characters.`;
       if (i.origin === 'array' || i.origin === 'set') return Number(min) <= 1 ? 'Choose at least one.' : `Choose at least ${fmt(min)}.`;
       if (i.origin === 'file') return 'The file is empty.';
-      return i.inclusive === false ? (Number(min) === 0 ? 'Enter a number greater than 0.' : `Enter a number greater than ${fmt(min)}.`) : `Enter ${fmt(min)} or more.`;
+      return i.inclusive === false
+        ? Number(min) === 0
+          ? 'Enter a number greater than 0.'
+          : `Enter a number greater than ${fmt(min)}.`
+        : `Enter ${fmt(min)} or more.`;
     }
     case 'too_big': {
       const max = i.maximum as number | bigint;

@@ -41,7 +41,12 @@ async function main(argv: string[]): Promise<void> {
       ...out.results.flatMap((r, i) => r.errors.map((message) => ({ path: `loads[${i}]`, message: `${r.tag}: ${message}` }))),
       ...(out.panel.errors ?? []).map((message) => ({ path: 'panel', message })),
     ];
-    finish(errors.length ? 3 : 0, { results: out.results, panel: out.panel, codeEdition: out.codeEdition, ...(errors.length ? { errors } : {}) });
+    finish(errors.length ? 3 : 0, {
+      results: out.results,
+      panel: out.panel,
+      codeEdition: out.codeEdition,
+      ...(errors.length ? { errors } : {}),
+    });
   } catch (e) {
     if (e instanceof ValidationError) finish(2, { errors: e.details });
     if (e instanceof DomainError) finish(1, { errors: [{ path: '', message: e.message, code: e.code }] });

@@ -61,7 +61,12 @@ export class ChangeFeed {
     if (this.stopped || !this.url) return;
     // TCP keepalive: a connection silently dropped on the way (a firewall's idle timeout) ends with an
     // error instead of leaving the feed deaf while it believes itself live
-    const client = new pg.Client({ connectionString: this.url, application_name: 'panelwright-change-feed', keepAlive: true, keepAliveInitialDelayMillis: 10_000 });
+    const client = new pg.Client({
+      connectionString: this.url,
+      application_name: 'panelwright-change-feed',
+      keepAlive: true,
+      keepAliveInitialDelayMillis: 10_000,
+    });
     client.on('notification', (msg) => {
       if (msg.channel !== CHANNEL || !msg.payload) return;
       this.received++;

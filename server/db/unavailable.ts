@@ -20,13 +20,33 @@ function unavailableSqlState(code: string): boolean {
 }
 
 /** node-postgres's own messages for a connection lost or never made. */
-const PG_MESSAGES = [/connection terminated/i, /timeout exceeded when trying to connect/i, /client has encountered a connection error/i, /connection (is )?not open/i, /Client was closed and is not queryable/i];
+const PG_MESSAGES = [
+  /connection terminated/i,
+  /timeout exceeded when trying to connect/i,
+  /client has encountered a connection error/i,
+  /connection (is )?not open/i,
+  /Client was closed and is not queryable/i,
+];
 
 export function isDatabaseUnavailable(err: unknown, depth = 0): boolean {
   if (!err || typeof err !== 'object' || depth > 4) return false;
   if (err instanceof SequelizeConnectionError) return true; // ConnectionRefusedError, ConnectionAcquireTimeoutError, HostNotReachableError …
-  const e = err as { name?: unknown; code?: unknown; message?: unknown; parent?: unknown; original?: unknown; cause?: unknown; errors?: unknown };
-  if (typeof e.name === 'string' && /^Sequelize(Connection|ConnectionRefused|ConnectionAcquireTimeout|ConnectionTimedOut|HostNotReachable|HostNotFound|InvalidConnection)Error$/.test(e.name)) return true;
+  const e = err as {
+    name?: unknown;
+    code?: unknown;
+    message?: unknown;
+    parent?: unknown;
+    original?: unknown;
+    cause?: unknown;
+    errors?: unknown;
+  };
+  if (
+    typeof e.name === 'string' &&
+    /^Sequelize(Connection|ConnectionRefused|ConnectionAcquireTimeout|ConnectionTimedOut|HostNotReachable|HostNotFound|InvalidConnection)Error$/.test(
+      e.name,
+    )
+  )
+    return true;
   if (typeof e.code === 'string' && (SOCKET_CODES.has(e.code) || unavailableSqlState(e.code))) return true;
   if (typeof e.message === 'string' && PG_MESSAGES.some((re) => re.test(e.message as string))) return true;
   if (Array.isArray(e.errors) && e.errors.some((x) => isDatabaseUnavailable(x, depth + 1))) return true; // AggregateError of a dual-stack connect

@@ -41,9 +41,11 @@ export type AnyRoute = RouteSpec<Schema | undefined, Schema | undefined, Schema 
 
 export const routeTable: AnyRoute[] = [];
 
-export function defineRoute<BS extends Schema | undefined = undefined, QS extends Schema | undefined = undefined, PS extends Schema | undefined = undefined>(
-  spec: RouteSpec<BS, QS, PS>,
-): AnyRoute {
+export function defineRoute<
+  BS extends Schema | undefined = undefined,
+  QS extends Schema | undefined = undefined,
+  PS extends Schema | undefined = undefined,
+>(spec: RouteSpec<BS, QS, PS>): AnyRoute {
   return spec as unknown as AnyRoute; // cast: the table holds routes of every schema; the handler's typed context is checked here, at the definition
 }
 
@@ -53,7 +55,10 @@ function parsePart(schema: Schema | undefined, value: unknown, where: string) {
   if (!r.success) {
     const issues = zodIssues(r.error.issues).map((i) => ({ ...i, path: i.path ? `${where}.${i.path}` : where }));
     // the summary names each field by its label, never its key; the details keep the path for the form
-    throw new ValidationError(`Check ${issues.length === 1 ? 'this answer' : `these ${issues.length} answers`}: ${issues.map((i) => issueSentence(i.path, i.message)).join('; ')}`, issues);
+    throw new ValidationError(
+      `Check ${issues.length === 1 ? 'this answer' : `these ${issues.length} answers`}: ${issues.map((i) => issueSentence(i.path, i.message)).join('; ')}`,
+      issues,
+    );
   }
   return r.data;
 }

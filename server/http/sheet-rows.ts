@@ -30,7 +30,10 @@ export function cellText(v: unknown): string {
 
 /** The rows of an uploaded .csv or .xlsx; at most `maxRows` under the header (`what` names them in the refusal). */
 export async function readSheetRows(buffer: Buffer, kind: 'xlsx' | 'csv', limits: { maxRows: number; what: string }): Promise<string[][]> {
-  const tooMany = () => new ValidationError(`At most ${limits.maxRows} ${limits.what} and ${MAX_COLUMNS} columns per file`, [{ path: 'file', message: 'too many rows or columns' }]);
+  const tooMany = () =>
+    new ValidationError(`At most ${limits.maxRows} ${limits.what} and ${MAX_COLUMNS} columns per file`, [
+      { path: 'file', message: 'too many rows or columns' },
+    ]);
   if (kind === 'csv') {
     const text = buffer.toString('utf8').replace(/^\uFEFF/, '');
     if (text.includes('\u0000')) throw new UnsupportedFile('The file is not a text CSV');

@@ -18,10 +18,13 @@ const STATUS: Record<string, number> = {
 };
 
 /** The answer while PostgreSQL cannot be reached: the request did nothing, and may be repeated. */
-export const DATABASE_UNAVAILABLE_MESSAGE = 'The database is unreachable, so nothing was read or saved. The server reconnects by itself; try again in a few seconds.';
+export const DATABASE_UNAVAILABLE_MESSAGE =
+  'The database is unreachable, so nothing was read or saved. The server reconnects by itself; try again in a few seconds.';
 
 export const notFoundApi: RequestHandler = (req, res) => {
-  res.status(404).json({ error: { code: 'not_found', message: `No API route ${req.method} ${req.originalUrl.split("?")[0]}`, details: null } });
+  res
+    .status(404)
+    .json({ error: { code: 'not_found', message: `No API route ${req.method} ${req.originalUrl.split('?')[0]}`, details: null } });
 };
 
 export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
@@ -43,7 +46,15 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
     return;
   }
   if (e?.code && String(e.code).startsWith('LIMIT_')) {
-    res.status(400).json({ error: { code: 'validation_failed', message: e.message ?? 'Upload refused', details: [{ path: 'file', message: e.message ?? 'Upload refused' }] } });
+    res
+      .status(400)
+      .json({
+        error: {
+          code: 'validation_failed',
+          message: e.message ?? 'Upload refused',
+          details: [{ path: 'file', message: e.message ?? 'Upload refused' }],
+        },
+      });
     return;
   }
   if (typeof e?.status === 'number' && e.status >= 400 && e.status < 500) {
@@ -53,7 +64,15 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   if (isDatabaseUnavailable(err)) {
     console.warn(`[database] ${req.method} ${req.path}: unreachable (${err instanceof Error ? err.message : String(err)})`);
     res.setHeader('Retry-After', String(DATABASE_RETRY_AFTER_S));
-    res.status(503).json({ error: { code: 'database_unavailable', message: DATABASE_UNAVAILABLE_MESSAGE, details: { retryAfterSeconds: DATABASE_RETRY_AFTER_S } } });
+    res
+      .status(503)
+      .json({
+        error: {
+          code: 'database_unavailable',
+          message: DATABASE_UNAVAILABLE_MESSAGE,
+          details: { retryAfterSeconds: DATABASE_RETRY_AFTER_S },
+        },
+      });
     return;
   }
   console.error(`[error] ${req.method} ${req.path}:`, err instanceof Error ? err.message : err);

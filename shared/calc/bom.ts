@@ -22,7 +22,16 @@ export { type BomDiff, type DiffEntry, type DiffSide, diffBoms } from './bom-sta
 export { LAYOUT_ALLOWANCE } from '../standards/panel-layout';
 export { controlPoints, pilotScheme } from './bom-stages/control-scheme';
 export { type LabourTable, swappedLine, unitLabourHours } from './bom-stages/lines';
-export { type CatalogueIndex, indexCatalogue, lineServes, lineShortfalls, satisfies, selectItem, shortfalls, usableAreaMm2 } from './bom-stages/match';
+export {
+  type CatalogueIndex,
+  indexCatalogue,
+  lineServes,
+  lineShortfalls,
+  satisfies,
+  selectItem,
+  shortfalls,
+  usableAreaMm2,
+} from './bom-stages/match';
 export { normaliseEnclosureType, normaliseWireSize, parseConductor } from './bom-stages/normalise';
 export { computeTotals, extendedCost, extendedLabourHours, type RollupLine, rollupByCode } from './bom-stages/totals';
 
@@ -97,4 +106,3 @@ export function buildBom(input: BuildBomInput): BuildBomResult {
   const lines = ctx.lines.lines;
   return { lines, totals: computeTotals(lines, input.markupPercent ?? 0, input.labourRatePerHour ?? 0), control, enclosure };
 }
-

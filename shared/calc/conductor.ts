@@ -29,7 +29,17 @@ export interface ConductorChoice {
 }
 
 /** Sizes 110.14(C)(1)(a) names: 14 AWG through 1 AWG. */
-const SMALL_TERMINATION_SIZES: ReadonlySet<string> = new Set(['14 AWG', '12 AWG', '10 AWG', '8 AWG', '6 AWG', '4 AWG', '3 AWG', '2 AWG', '1 AWG']);
+const SMALL_TERMINATION_SIZES: ReadonlySet<string> = new Set([
+  '14 AWG',
+  '12 AWG',
+  '10 AWG',
+  '8 AWG',
+  '6 AWG',
+  '4 AWG',
+  '3 AWG',
+  '2 AWG',
+  '1 AWG',
+]);
 
 /**
  * The termination column a conductor is held to (110.14(C)(1)): 75 °C where the equipment is listed
@@ -41,7 +51,14 @@ export function terminationColumnC(size: string, terminationsListed75C: boolean,
   return SMALL_TERMINATION_SIZES.has(size) || circuitAmps <= 100 ? 60 : 75;
 }
 
-export function allowableAmpacity(size: string, material: ConductorMaterial, insulation: TempRating, ambientC: number, edition: CodeEdition, terminationC: 60 | 75 = TERMINATION_TEMP_C as 75): number {
+export function allowableAmpacity(
+  size: string,
+  material: ConductorMaterial,
+  insulation: TempRating,
+  ambientC: number,
+  edition: CodeEdition,
+  terminationC: 60 | 75 = TERMINATION_TEMP_C as 75,
+): number {
   const termination = Math.min(insulation, terminationC) as TempRating;
   const corrected = ampacity310_16(size, material, insulation) * ambientCorrectionFactor(ambientC, insulation, edition);
   return round2(Math.min(corrected, ampacity310_16(size, material, termination)));
@@ -93,7 +110,9 @@ export function selectConductor(
     for (const size of parallelSizes) {
       const a = allowableAmpacity(size, material, tempRatingC, ambientC, edition, termAt(size)) * sets;
       if (a + 1e-9 >= minAmpacity) {
-        cautions.push(`${sets} parallel sets (310.10(G)): each set in its own raceway, same length, material, size and termination; more than three current-carrying conductors in one raceway need the adjustment of 310.15(C)(1).`);
+        cautions.push(
+          `${sets} parallel sets (310.10(G)): each set in its own raceway, same length, material, size and termination; more than three current-carrying conductors in one raceway need the adjustment of 310.15(C)(1).`,
+        );
         return {
           size: `${sets} × ${size} per phase`,
           sets,
@@ -111,7 +130,15 @@ export function selectConductor(
 
 /** Motor branch-circuit conductors, 430.22: at least 125 % of the table FLC. */
 export function branchConductor(
-  input: { flcAmps: number; material: ConductorMaterial; tempRatingC: TempRating; ambientC: number; driveInputAmps?: number; terminationsListed75C?: boolean; circuitAmps?: number },
+  input: {
+    flcAmps: number;
+    material: ConductorMaterial;
+    tempRatingC: TempRating;
+    ambientC: number;
+    driveInputAmps?: number;
+    terminationsListed75C?: boolean;
+    circuitAmps?: number;
+  },
   edition: CodeEdition,
 ): ConductorChoice & { minAmpacity: number } {
   const byMotor = round2(input.flcAmps * 1.25);
@@ -131,7 +158,15 @@ export function branchConductor(
  * the engineer confirms). Six leads in both cases (T1–T6, or T1–T3 and T7–T9).
  */
 export function motorLeadConductors(
-  input: { flcAmps: number; starterType: string; material: ConductorMaterial; tempRatingC: TempRating; ambientC: number; terminationsListed75C?: boolean; circuitAmps?: number },
+  input: {
+    flcAmps: number;
+    starterType: string;
+    material: ConductorMaterial;
+    tempRatingC: TempRating;
+    ambientC: number;
+    terminationsListed75C?: boolean;
+    circuitAmps?: number;
+  },
   edition: CodeEdition,
 ): (MotorLeadConductors & { cautions: string[] }) | null {
   const share = input.starterType === 'wye-delta' ? 0.58 : input.starterType === 'part-winding' ? 0.5 : null;
@@ -159,7 +194,9 @@ export function motorLeadText(s: { conductor: { motorLeads?: MotorLeadConductors
 }
 
 /** The running voltage drop in words, or null when no cable length was given. */
-export function voltageDropText(s: { conductor: { voltageDrop?: { volts: number; percent: number; lengthFt: number; limitPercent: number; sizeWithinLimit: string | null } } }): string | null {
+export function voltageDropText(s: {
+  conductor: { voltageDrop?: { volts: number; percent: number; lengthFt: number; limitPercent: number; sizeWithinLimit: string | null } };
+}): string | null {
   const d = s.conductor.voltageDrop;
   if (!d) return null;
   const over = d.percent > d.limitPercent;
@@ -167,7 +204,9 @@ export function voltageDropText(s: { conductor: { voltageDrop?: { volts: number;
 }
 
 /** The conductors if the terminations are held to 60 °C, in words, or null when they are the same or not computed. */
-export function termination60Text(s: { conductor: { termination60C?: { size: string; ampacity: number; minAmpacity: number }; material: ConductorMaterial } }): string | null {
+export function termination60Text(s: {
+  conductor: { termination60C?: { size: string; ampacity: number; minAmpacity: number }; material: ConductorMaterial };
+}): string | null {
   const t = s.conductor.termination60C;
   if (!t) return null;
   return `at 60 °C terminations (110.14(C)(1)(a)): ${t.size} ${s.conductor.material === 'cu' ? 'Cu' : 'Al'} (${t.ampacity} A ≥ ${t.minAmpacity} A)`;

@@ -78,7 +78,11 @@ const TWELVE: Record<'wye' | 'delta', Record<'low' | 'high', ConnectionStep>> = 
     high: step('Run (high voltage, series wye)', lineOneLeadEach(), [...seriesJoints(), ['T10', 'T11', 'T12']]),
   },
   delta: {
-    low: step('Run (low voltage, parallel delta)', { L1: ['T1', 'T6', 'T7', 'T12'], L2: ['T2', 'T4', 'T8', 'T10'], L3: ['T3', 'T5', 'T9', 'T11'] }),
+    low: step('Run (low voltage, parallel delta)', {
+      L1: ['T1', 'T6', 'T7', 'T12'],
+      L2: ['T2', 'T4', 'T8', 'T10'],
+      L3: ['T3', 'T5', 'T9', 'T11'],
+    }),
     high: step('Run (high voltage, series delta)', { L1: ['T1', 'T12'], L2: ['T2', 'T10'], L3: ['T3', 'T11'] }, seriesJoints()),
   },
 };
@@ -144,7 +148,8 @@ export function connectionCard(req: ConnectionRequest): ConnectionCard {
     }
     const table = req.leads === 9 ? NINE : TWELVE;
     const run = table[req.winding][req.voltage];
-    const insulatedNote = req.voltage === 'low' ? 'Low voltage puts the winding halves in parallel.' : 'High voltage puts the winding halves in series.';
+    const insulatedNote =
+      req.voltage === 'low' ? 'Low voltage puts the winding halves in parallel.' : 'High voltage puts the winding halves in series.';
     return {
       title: `Three-phase, ${req.leads} leads, ${req.winding}, ${req.voltage} voltage`,
       motor: 'three-phase',

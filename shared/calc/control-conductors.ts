@@ -44,7 +44,9 @@ export function checkControlConductor(c: ControlConductorInput): ControlConducto
       maxAmps: lim.maxAmps,
       ok,
       basis: lim.basis,
-      finding: ok ? null : `${label} behind a ${c.deviceAmps} A device: ${CONTROL_COLUMN_WORDS[c.column]} allows at most ${lim.maxAmps} A — fit a smaller fuse or a larger conductor (430.72(B)).`,
+      finding: ok
+        ? null
+        : `${label} behind a ${c.deviceAmps} A device: ${CONTROL_COLUMN_WORDS[c.column]} allows at most ${lim.maxAmps} A — fit a smaller fuse or a larger conductor (430.72(B)).`,
     };
   } catch (e) {
     if (!(e instanceof DomainError)) throw e;
@@ -57,7 +59,12 @@ export interface ControlConductorRow {
   conductor: string;
   material: ConductorMaterial;
   run: 'within' | 'beyond';
-  device: { description: string; code: string | null; amps: number | null; kind: 'control fuse' | 'transformer secondary fuse' | 'branch protective device' };
+  device: {
+    description: string;
+    code: string | null;
+    amps: number | null;
+    kind: 'control fuse' | 'transformer secondary fuse' | 'branch protective device';
+  };
   column: ControlColumn;
   maxAmps: number | null;
   ok: boolean | null;
@@ -78,13 +85,20 @@ function wireSizeOf(line: BomLine, item: CatalogueItem | undefined): string | nu
 }
 
 function singleFuse(lines: readonly BomLine[], byCode: ReadonlyMap<string, CatalogueItem>): { line: BomLine; amps: number | null } | null {
-  const fuses = lines.filter((l) => l.category === 'fuse' && l.quantity === 1).map((line) => ({ line, amps: line.code ? (byCode.get(line.code)?.ratings.amps ?? null) : null }));
+  const fuses = lines
+    .filter((l) => l.category === 'fuse' && l.quantity === 1)
+    .map((line) => ({ line, amps: line.code ? (byCode.get(line.code)?.ratings.amps ?? null) : null }));
   if (fuses.length === 0) return null;
   return fuses.sort((a, b) => (a.amps ?? Infinity) - (b.amps ?? Infinity))[0] as { line: BomLine; amps: number | null };
 }
 
 /** Every control conductor of a bill of materials checked against the device that protects it. */
-export function controlConductorChecks(lines: readonly BomLine[], byCode: ReadonlyMap<string, CatalogueItem>, selections: readonly LoadSelection[], panelBucket = PANEL_BUCKET): ControlConductorCheck {
+export function controlConductorChecks(
+  lines: readonly BomLine[],
+  byCode: ReadonlyMap<string, CatalogueItem>,
+  selections: readonly LoadSelection[],
+  panelBucket = PANEL_BUCKET,
+): ControlConductorCheck {
   const rows: ControlConductorRow[] = [];
   const bySel = new Map(selections.map((s) => [s.tag, s]));
   const buckets = new Map<string, BomLine[]>();
@@ -92,7 +106,9 @@ export function controlConductorChecks(lines: readonly BomLine[], byCode: Readon
   const secondary = singleFuse(buckets.get(panelBucket) ?? [], byCode);
   for (const [bucket, own] of buckets) {
     if (bucket === panelBucket) continue;
-    const wires = own.filter((l) => l.category === 'wire' && (l.code ? byCode.get(l.code)?.ratings.kind === 'control' : /control/i.test(l.requiredRatings ?? '')));
+    const wires = own.filter(
+      (l) => l.category === 'wire' && (l.code ? byCode.get(l.code)?.ratings.kind === 'control' : /control/i.test(l.requiredRatings ?? '')),
+    );
     if (wires.length === 0) continue;
     const fuse = singleFuse(own, byCode);
     const sel = bySel.get(bucket);
@@ -106,22 +122,49 @@ export function controlConductorChecks(lines: readonly BomLine[], byCode: Readon
         device = { description: fuse.line.description, code: fuse.line.code, amps: fuse.amps, kind: 'control fuse' };
         column = 'A';
       } else if (secondary) {
-        device = { description: secondary.line.description, code: secondary.line.code, amps: secondary.amps, kind: 'transformer secondary fuse' };
+        device = {
+          description: secondary.line.description,
+          code: secondary.line.code,
+          amps: secondary.amps,
+          kind: 'transformer secondary fuse',
+        };
         column = 'A';
       } else {
-        device = { description: sel ? `branch ${sel.scpd.type.replace(/-/g, ' ')}` : 'branch protective device', code: null, amps: sel && sel.scpd.ratingAmps > 0 ? sel.scpd.ratingAmps : null, kind: 'branch protective device' };
+        device = {
+          description: sel ? `branch ${sel.scpd.type.replace(/-/g, ' ')}` : 'branch protective device',
+          code: null,
+          amps: sel && sel.scpd.ratingAmps > 0 ? sel.scpd.ratingAmps : null,
+          kind: 'branch protective device',
+        };
         column = 'C';
       }
       const v: ControlConductorVerdict =
         device.amps === null
-          ? { maxAmps: null, ok: null, basis: 'the protecting device has no ampere rating in the catalogue', finding: `${bucket}: ${size} Cu control wire not checked, the rating of ${device.description} is not known` }
+          ? {
+              maxAmps: null,
+              ok: null,
+              basis: 'the protecting device has no ampere rating in the catalogue',
+              finding: `${bucket}: ${size} Cu control wire not checked, the rating of ${device.description} is not known`,
+            }
           : checkControlConductor({ size, material: 'cu', column, deviceAmps: device.amps });
-      rows.push({ bucket, conductor: size, material: 'cu', run: 'beyond', device, column, maxAmps: v.maxAmps, ok: v.ok, basis: v.basis, finding: v.finding && device.amps !== null ? `${bucket}: ${v.finding}` : v.finding });
+      rows.push({
+        bucket,
+        conductor: size,
+        material: 'cu',
+        run: 'beyond',
+        device,
+        column,
+        maxAmps: v.maxAmps,
+        ok: v.ok,
+        basis: v.basis,
+        finding: v.finding && device.amps !== null ? `${bucket}: ${v.finding}` : v.finding,
+      });
     }
   }
   return {
     rows,
     findings: rows.flatMap((r) => (r.finding ? [r.finding] : [])),
-    basis: 'NEC 2023 430.72(A), 430.72(B), Table 430.72(B) (values from memory); control wire of each bucket taken to its field terminals (extending beyond the enclosure, common practice)',
+    basis:
+      'NEC 2023 430.72(A), 430.72(B), Table 430.72(B) (values from memory); control wire of each bucket taken to its field terminals (extending beyond the enclosure, common practice)',
   };
 }

@@ -12,7 +12,10 @@ export interface DisconnectResult {
   basis: string;
 }
 
-export function motorDisconnect(input: { flcAmps: number; hp: number | null; driveInputAmps?: number }, edition: CodeEdition): DisconnectResult {
+export function motorDisconnect(
+  input: { flcAmps: number; hp: number | null; driveInputAmps?: number },
+  edition: CodeEdition,
+): DisconnectResult {
   const byMotor = disconnectMinAmps(input.flcAmps);
   const byDrive = input.driveInputAmps !== undefined ? disconnectMinAmps(input.driveInputAmps) : 0;
   const minAmps = round2(Math.max(byMotor, byDrive));

@@ -9,7 +9,11 @@
 import { nec, type CodeEdition } from '../standards/code-edition';
 import { round2 } from './round';
 
-export function vfdMinOutputAmps(flaAmps: number, duty: 'normal' | 'heavy', edition: CodeEdition): { minOutputAmps: number; basis: string } {
+export function vfdMinOutputAmps(
+  flaAmps: number,
+  duty: 'normal' | 'heavy',
+  edition: CodeEdition,
+): { minOutputAmps: number; basis: string } {
   return {
     minOutputAmps: round2(flaAmps),
     basis: `drive ${duty}-duty output current >= motor nameplate FLA (common practice); ${nec(edition, '430.122, 430.124(A), 430.130')}`,

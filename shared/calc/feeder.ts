@@ -39,7 +39,10 @@ export interface FeederInput {
   terminationsListed75C?: boolean;
 }
 
-export function feederRollup(input: FeederInput, edition: CodeEdition): PanelRollup & { notes: string[]; errors: string[]; otherLoadsAmps: number } {
+export function feederRollup(
+  input: FeederInput,
+  edition: CodeEdition,
+): PanelRollup & { notes: string[]; errors: string[]; otherLoadsAmps: number } {
   const notes: string[] = [];
   const errors: string[] = [];
   const b = input.branches;
@@ -62,11 +65,15 @@ export function feederRollup(input: FeederInput, edition: CodeEdition): PanelRol
   const minAmpacity = round2(1.25 * largestFlc + (total - largestFlc) + otherAmps);
 
   // the largest protective device among the motor branches and the other loads' primary devices
-  const devices = [...b.map((x) => ({ tag: x.tag, deviceAmps: x.branchDeviceAmps, amps: x.flcAmps })), ...others.map((x) => ({ tag: x.tag, deviceAmps: x.deviceAmps, amps: x.amps }))];
+  const devices = [
+    ...b.map((x) => ({ tag: x.tag, deviceAmps: x.branchDeviceAmps, amps: x.flcAmps })),
+    ...others.map((x) => ({ tag: x.tag, deviceAmps: x.deviceAmps, amps: x.amps })),
+  ];
   let largestDevice = devices[0] as (typeof devices)[number];
   for (const x of devices) if (x.deviceAmps > largestDevice.deviceAmps) largestDevice = x;
   const ocpdComputed = round2(largestDevice.deviceAmps + (total + otherAmps - largestDevice.amps));
-  if (others.length > 0) notes.push(`430.24, 430.63: ${others.map((x) => `${x.tag} ${x.amps} A`).join(', ')} of other sources' primary current added at 100 %.`);
+  if (others.length > 0)
+    notes.push(`430.24, 430.63: ${others.map((x) => `${x.tag} ${x.amps} A`).join(', ')} of other sources' primary current added at 100 %.`);
 
   let conductorSize = 'outside Table 310.16';
   let conductorBasis = '';
@@ -81,11 +88,14 @@ export function feederRollup(input: FeederInput, edition: CodeEdition): PanelRol
   let ocpdMaxAmps = 0;
   try {
     ocpdMaxAmps = nextLowerStandard(ocpdComputed, edition, input.ocpdFamily);
-    if (ocpdComputed > 6000) notes.push(`430.62(A) permits up to ${ocpdComputed} A; 6000 A is the largest standard rating of Table 240.6(A).`);
+    if (ocpdComputed > 6000)
+      notes.push(`430.62(A) permits up to ${ocpdComputed} A; 6000 A is the largest standard rating of Table 240.6(A).`);
   } catch (e) {
     errors.push(`feeder protective device: ${(e as Error).message}`);
   }
-  notes.push(`430.62(A): ${largestDevice.deviceAmps} A (${largestDevice.tag}) + ${round2(total + otherAmps - largestDevice.amps)} A of other ${others.length ? 'currents' : 'FLCs'} = ${ocpdComputed} A, next lower standard rating ${ocpdMaxAmps} A.`);
+  notes.push(
+    `430.62(A): ${largestDevice.deviceAmps} A (${largestDevice.tag}) + ${round2(total + otherAmps - largestDevice.amps)} A of other ${others.length ? 'currents' : 'FLCs'} = ${ocpdComputed} A, next lower standard rating ${ocpdMaxAmps} A.`,
+  );
   return {
     feeder: {
       minAmpacity,

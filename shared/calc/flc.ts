@@ -65,7 +65,9 @@ export function fullLoadCurrent(input: FlcInput, edition: CodeEdition): FlcResul
   else throw new OutsideTableError('430.6(A)(1)', 'hp or kw is required');
 
   const fromNameplate = (why: string): FlcResult => {
-    cautions.push(`${why}; the nameplate current ${input.fla} A is used for conductors and protection in place of a table value — confirm with the engineer.`);
+    cautions.push(
+      `${why}; the nameplate current ${input.fla} A is used for conductors and protection in place of a table value — confirm with the engineer.`,
+    );
     return {
       flcAmps: input.fla as number,
       tableVolts: null,
@@ -91,7 +93,11 @@ export function fullLoadCurrent(input: FlcInput, edition: CodeEdition): FlcResul
   if (input.kw !== undefined) {
     const near = view.rows.find((r) => Math.abs(hp - r) / r <= KW_ROW_TOLERANCE);
     if (near !== undefined) {
-      assumed.push({ field: 'kw', assumed: `${formatHp(near)} hp row`, note: `${input.kw} kW = ${round2(hp)} hp, within 2 % of the ${formatHp(near)} hp row (common practice)` });
+      assumed.push({
+        field: 'kw',
+        assumed: `${formatHp(near)} hp row`,
+        note: `${input.kw} kW = ${round2(hp)} hp, within 2 % of the ${formatHp(near)} hp row (common practice)`,
+      });
       return { flcAmps: view.value(near), tableVolts: view.column, hp: round2(hp), source, basis, assumed, cautions };
     }
   } else {
@@ -113,7 +119,15 @@ export function fullLoadCurrent(input: FlcInput, edition: CodeEdition): FlcResul
     assumed: `${formatHp(upper)} hp row (${flc} A), the next higher row`,
     note: `${formatHp(round2(hp))} hp is not a row of ${view.name}: the next higher horsepower row is taken, not interpolated (430.6(A)(1) gives no interpolation for horsepower; interpolating would undersize conductors and protection); a nameplate FLA above it still governs the overload (430.6(A)(2))`,
   });
-  return { flcAmps: flc, tableVolts: view.column, hp: round2(hp), source: `${source}, next higher row ${formatHp(upper)} hp for ${formatHp(round2(hp))} hp`, basis, assumed, cautions };
+  return {
+    flcAmps: flc,
+    tableVolts: view.column,
+    hp: round2(hp),
+    source: `${source}, next higher row ${formatHp(upper)} hp for ${formatHp(round2(hp))} hp`,
+    basis,
+    assumed,
+    cautions,
+  };
 }
 
 /** Why a motor cannot be sized: the answer to correct (its path) and the reason in words. */
@@ -133,7 +147,10 @@ export function flcRefusal(input: FlcInput): FlcRefusal | null {
     tableView(input.supply, input.volts);
   } catch (e) {
     if (!(e instanceof OutsideTableError)) throw e;
-    return { path: 'volts', message: `rated ${input.volts} V: no full-load current table covers it (${e.message}); give the nameplate FLA to size this motor on its nameplate current` };
+    return {
+      path: 'volts',
+      message: `rated ${input.volts} V: no full-load current table covers it (${e.message}); give the nameplate FLA to size this motor on its nameplate current`,
+    };
   }
   try {
     fullLoadCurrent(input, '2023');

@@ -100,7 +100,11 @@ export function sourceLoss(s: HeatSourceInput): HeatSourceResult {
   const base = { bucketTag: s.bucketTag, code: s.code, description: s.description };
   const atLoad = s.category === 'vfd' || s.category === 'soft-starter';
   if (s.category === 'soft-starter' && s.loadAmps !== undefined && !s.bypassed && s.heatLossW === undefined) {
-    return { ...base, watts: qty * SOFT_STARTER_W_PER_A * s.loadAmps, basis: `${SOFT_STARTER_W_PER_A} W/A at ${s.loadAmps} A (common practice)` };
+    return {
+      ...base,
+      watts: qty * SOFT_STARTER_W_PER_A * s.loadAmps,
+      basis: `${SOFT_STARTER_W_PER_A} W/A at ${s.loadAmps} A (common practice)`,
+    };
   }
   if (s.heatLossW !== undefined) {
     if (atLoad && s.ratedAmps && s.loadAmps !== undefined) {

@@ -28,7 +28,6 @@ export interface OneLineElement {
   interlocked?: boolean;
 }
 
-
 function contactorPoles(s: LoadSelection): { poles: string[]; label: string } {
   switch (s.starter.type) {
     case 'FVR':
@@ -57,10 +56,23 @@ function feedElements(s: LoadSelection, feed: MotorFeed): OneLineElement[] {
     { kind: 'breaker', label: `${src.primaryProtection.ratingAmps} A ${src.tag} primary breaker`, detail: src.primaryProtection.basis },
     src.kind === 'transformer'
       ? { kind: 'transformer', label: `${src.tag} — ${src.kva} kVA transformer`, detail: `${src.primaryVolts}-${src.secondaryLabel}` }
-      : { kind: 'dc-supply', label: `${src.tag} — DC supply`, detail: `${src.primaryVolts} V in, ${src.secondaryLabel} ≥ ${src.secondaryAmps} A out` },
+      : {
+          kind: 'dc-supply',
+          label: `${src.tag} — DC supply`,
+          detail: `${src.primaryVolts} V in, ${src.secondaryLabel} ≥ ${src.secondaryAmps} A out`,
+        },
   ];
-  if (src.secondaryProtection) out.push({ kind: 'breaker', label: `${src.secondaryProtection.ratingAmps} A ${src.tag} secondary breaker`, detail: src.secondaryProtection.basis });
-  out.push({ kind: 'bus', label: `${src.tag} secondary bus`, detail: src.kind === 'transformer' ? `${src.secondaryLabel}` : src.secondaryLabel });
+  if (src.secondaryProtection)
+    out.push({
+      kind: 'breaker',
+      label: `${src.secondaryProtection.ratingAmps} A ${src.tag} secondary breaker`,
+      detail: src.secondaryProtection.basis,
+    });
+  out.push({
+    kind: 'bus',
+    label: `${src.tag} secondary bus`,
+    detail: src.kind === 'transformer' ? `${src.secondaryLabel}` : src.secondaryLabel,
+  });
   return out;
 }
 
@@ -81,7 +93,9 @@ export function oneLineElements(s: LoadSelection, feed: MotorFeed = null): OneLi
     out.push({
       kind: 'vfd',
       label: s.starter.type === 'VFD' ? 'Variable-frequency drive' : 'DC drive',
-      detail: s.vfd ? `≥ ${s.vfd.minOutputAmps} A, ${decisionValueLabel('vfd.duty', s.vfd.duty)?.toLowerCase()}${s.vfd.outputFilter !== 'none' ? `, ${decisionValueLabel('vfd.outputFilter', s.vfd.outputFilter)}` : ''}` : undefined,
+      detail: s.vfd
+        ? `≥ ${s.vfd.minOutputAmps} A, ${decisionValueLabel('vfd.duty', s.vfd.duty)?.toLowerCase()}${s.vfd.outputFilter !== 'none' ? `, ${decisionValueLabel('vfd.outputFilter', s.vfd.outputFilter)}` : ''}`
+        : undefined,
     });
   } else if (s.starter.type === 'RVSS') {
     out.push({
@@ -115,8 +129,11 @@ export function oneLineElements(s: LoadSelection, feed: MotorFeed = null): OneLi
   out.push({
     kind: 'motor',
     label: `${s.tag}${s.hp !== null ? ` — ${s.hp} hp` : ''}`,
-    detail: [`FLC ${s.flcAmps} A`, ...(s.conductor.motorLeads ? [`${s.conductor.motorLeads.count} leads ${s.conductor.motorLeads.size}`] : []), ...relays].join(' · '),
+    detail: [
+      `FLC ${s.flcAmps} A`,
+      ...(s.conductor.motorLeads ? [`${s.conductor.motorLeads.count} leads ${s.conductor.motorLeads.size}`] : []),
+      ...relays,
+    ].join(' · '),
   });
   return out;
 }
-

@@ -37,25 +37,71 @@ const DC_SUPPLY_KVA_PER_KW = 1 / 0.85;
 export type SourceNeed =
   | { on: 'bus' }
   | { on: 'bus-dc-drive'; amps: number; note: string }
-  | { on: 'transformer'; key: string; phases: 1 | 3; secondaryVolts: number; secondaryLabel: string; splitPhase: boolean; circuitVolts: number; amps: number; note?: string }
+  | {
+      on: 'transformer';
+      key: string;
+      phases: 1 | 3;
+      secondaryVolts: number;
+      secondaryLabel: string;
+      splitPhase: boolean;
+      circuitVolts: number;
+      amps: number;
+      note?: string;
+    }
   | { on: 'dc-supply'; key: string; dcVolts: number; amps: number }
   | { on: 'none'; reason: string };
 
 const SECONDARY_LABEL: Record<number, string> = { 208: '208Y/120 V', 240: '240 V', 480: '480Y/277 V', 600: '600 V', 120: '120 V' };
 
-function acNeed(motorPhases: 1 | 3, circuit: number, supply: Pick<Supply, 'phases'>, amps: number): Extract<SourceNeed, { on: 'transformer' }> {
+function acNeed(
+  motorPhases: 1 | 3,
+  circuit: number,
+  supply: Pick<Supply, 'phases'>,
+  amps: number,
+): Extract<SourceNeed, { on: 'transformer' }> {
   if (motorPhases === 1 && (circuit === 120 || circuit === 240)) {
-    return { on: 'transformer', key: '1-240/120', phases: 1, secondaryVolts: 240, secondaryLabel: '240/120 V single-phase', splitPhase: true, circuitVolts: circuit, amps };
+    return {
+      on: 'transformer',
+      key: '1-240/120',
+      phases: 1,
+      secondaryVolts: 240,
+      secondaryLabel: '240/120 V single-phase',
+      splitPhase: true,
+      circuitVolts: circuit,
+      amps,
+    };
   }
   if (supply.phases === 1) {
-    return { on: 'transformer', key: `1-${circuit}`, phases: 1, secondaryVolts: circuit, secondaryLabel: `${circuit} V single-phase`, splitPhase: false, circuitVolts: circuit, amps };
+    return {
+      on: 'transformer',
+      key: `1-${circuit}`,
+      phases: 1,
+      secondaryVolts: circuit,
+      secondaryLabel: `${circuit} V single-phase`,
+      splitPhase: false,
+      circuitVolts: circuit,
+      amps,
+    };
   }
   const label = `${SECONDARY_LABEL[circuit] ?? `${circuit} V`} three-phase`;
-  return { on: 'transformer', key: `3-${circuit}`, phases: 3, secondaryVolts: circuit, secondaryLabel: label, splitPhase: false, circuitVolts: circuit, amps };
+  return {
+    on: 'transformer',
+    key: `3-${circuit}`,
+    phases: 3,
+    secondaryVolts: circuit,
+    secondaryLabel: label,
+    splitPhase: false,
+    circuitVolts: circuit,
+    amps,
+  };
 }
 
 /** The source a motor needs on this supply (its selection gives the current it draws). */
-export function sourceNeed(load: Pick<Load, 'supply' | 'volts'>, selection: Pick<LoadSelection, 'flcAmps' | 'starter'>, supply: Pick<Supply, 'volts' | 'phases'>): SourceNeed {
+export function sourceNeed(
+  load: Pick<Load, 'supply' | 'volts'>,
+  selection: Pick<LoadSelection, 'flcAmps' | 'starter'>,
+  supply: Pick<Supply, 'volts' | 'phases'>,
+): SourceNeed {
   const system = nominalSystemVolts(supply.volts);
   if (load.supply === 'dc') {
     const line = selection.starter.type === 'dc-drive' ? DC_DRIVE_LINE[load.volts] : undefined;
@@ -68,7 +114,11 @@ export function sourceNeed(load: Pick<Load, 'supply' | 'volts'>, selection: Pick
   const circuit = nominalSystemVolts(load.volts);
   // a motor rated at the supply's own voltage (say 400 V on a 400 V supply, outside the nominal systems) is on the bus too
   if (load.volts === supply.volts || (circuit !== null && circuit === system)) return { on: 'bus' };
-  if (circuit === null) return { on: 'none', reason: `rated ${load.volts} V is outside the nominal system voltages (120, 208, 240, 480, 600 V): no standard transformer secondary` };
+  if (circuit === null)
+    return {
+      on: 'none',
+      reason: `rated ${load.volts} V is outside the nominal system voltages (120, 208, 240, 480, 600 V): no standard transformer secondary`,
+    };
   return acNeed(load.supply === 'ac1' ? 1 : 3, circuit, supply, selection.flcAmps);
 }
 
@@ -109,7 +159,12 @@ interface Group {
  * whose selection has errors, and three-phase motors on a single-phase supply, are left to the
  * feeder roll-up's own errors.
  */
-export function otherSources(supply: Supply, loads: readonly Load[], results: readonly LoadSelection[], edition: CodeEdition): OtherSourcesResult {
+export function otherSources(
+  supply: Supply,
+  loads: readonly Load[],
+  results: readonly LoadSelection[],
+  edition: CodeEdition,
+): OtherSourcesResult {
   const out: OtherSourcesResult = { sources: [], externalMotors: [], branches: [], otherLoads: [], notes: [], errors: [] };
   const groups = new Map<string, Group>();
   results.forEach((r, i) => {
@@ -130,12 +185,20 @@ export function otherSources(supply: Supply, loads: readonly Load[], results: re
     if (load.fedFrom === 'external' || need.on === 'none') {
       const needs = sourceNeedWords(need) ?? '';
       out.externalMotors.push({ tag: r.tag, supply: load.supply as SupplyKind, volts: load.volts, needs });
-      out.notes.push(`${r.tag}: rated ${load.volts} V ${load.supply === 'dc' ? 'DC' : load.supply === 'ac1' ? 'single-phase' : 'three-phase'}, fed from a source outside the panel (${needs}): left out of the feeder and the panel's full-load current`);
+      out.notes.push(
+        `${r.tag}: rated ${load.volts} V ${load.supply === 'dc' ? 'DC' : load.supply === 'ac1' ? 'single-phase' : 'three-phase'}, fed from a source outside the panel (${needs}): left out of the feeder and the panel's full-load current`,
+      );
       return;
     }
     let g = groups.get(need.key);
     if (!g) groups.set(need.key, (g = { need, motors: [], notes: [] }));
-    g.motors.push({ tag: r.tag, supply: load.supply as SupplyKind, volts: load.volts, amps: need.amps, circuitVolts: need.on === 'transformer' ? need.circuitVolts : need.dcVolts });
+    g.motors.push({
+      tag: r.tag,
+      supply: load.supply as SupplyKind,
+      volts: load.volts,
+      amps: need.amps,
+      circuitVolts: need.on === 'transformer' ? need.circuitVolts : need.dcVolts,
+    });
     if (need.on === 'transformer' && need.note) g.notes.push(`${r.tag}: ${need.note}`);
   });
 
@@ -184,7 +247,9 @@ export function otherSources(supply: Supply, loads: readonly Load[], results: re
           ],
         });
         out.otherLoads.push({ tag, amps: primaryAmps, deviceAmps: p.primary.ratingAmps });
-        out.notes.push(`${tag}: ${tags} fed from a ${size.kva} kVA ${supply.volts}-${n.secondaryLabel} transformer in the panel; its rated primary current ${primaryAmps} A is counted in the feeder and the full-load current`);
+        out.notes.push(
+          `${tag}: ${tags} fed from a ${size.kva} kVA ${supply.volts}-${n.secondaryLabel} transformer in the panel; its rated primary current ${primaryAmps} A is counted in the feeder and the full-load current`,
+        );
       } else {
         const n = g.need;
         const [tag, dn] = nextTag('DC', d);
@@ -226,7 +291,9 @@ export function otherSources(supply: Supply, loads: readonly Load[], results: re
           ],
         });
         out.otherLoads.push({ tag, amps: primaryAmps, deviceAmps: ratingAmps });
-        out.notes.push(`${tag}: ${tags} fed from a ${n.dcVolts} V DC supply in the panel; its estimated input current ${primaryAmps} A is counted in the feeder and the full-load current`);
+        out.notes.push(
+          `${tag}: ${tags} fed from a ${n.dcVolts} V DC supply in the panel; its estimated input current ${primaryAmps} A is counted in the feeder and the full-load current`,
+        );
       }
     } catch (e) {
       out.errors.push(`${tags}: no source sized in the panel (${(e as Error).message}); left out of the feeder`);
@@ -242,20 +309,27 @@ export interface SourcesSummary {
   lines: string[];
 }
 
-const kindWords = (m: { supply: SupplyKind; volts: number }) => `${m.volts} V ${m.supply === 'dc' ? 'DC' : m.supply === 'ac1' ? 'single-phase' : 'three-phase'}`;
+const kindWords = (m: { supply: SupplyKind; volts: number }) =>
+  `${m.volts} V ${m.supply === 'dc' ? 'DC' : m.supply === 'ac1' ? 'single-phase' : 'three-phase'}`;
 
 /** The panel's other sources and its motors fed from outside it, in words. */
-export function sourcesSummary(rollup: { otherSources?: OtherSource[]; externalMotors?: ExternalMotor[] } | null | undefined): SourcesSummary {
+export function sourcesSummary(
+  rollup: { otherSources?: OtherSource[]; externalMotors?: ExternalMotor[] } | null | undefined,
+): SourcesSummary {
   const sources = rollup?.otherSources ?? [];
   const externalMotors = rollup?.externalMotors ?? [];
   const lines: string[] = [];
   for (const s of sources) {
     const motors = s.motors.map((m) => `${m.tag} (${kindWords(m)})`).join(', ');
     const prot = `${s.primaryProtection.ratingAmps} A primary${s.secondaryProtection ? `, ${s.secondaryProtection.ratingAmps} A secondary` : ''} protection`;
-    lines.push(`${s.tag}: ${motors} fed from ${s.kind === 'transformer' ? `a ${s.kva} kVA ${s.primaryVolts}-${s.secondaryLabel} transformer` : `a ${s.secondaryLabel} supply (${s.secondaryAmps} A)`} in the panel; ${prot}; ${s.primaryAmps} A at ${s.primaryVolts} V counted in the feeder and the full-load current.`);
+    lines.push(
+      `${s.tag}: ${motors} fed from ${s.kind === 'transformer' ? `a ${s.kva} kVA ${s.primaryVolts}-${s.secondaryLabel} transformer` : `a ${s.secondaryLabel} supply (${s.secondaryAmps} A)`} in the panel; ${prot}; ${s.primaryAmps} A at ${s.primaryVolts} V counted in the feeder and the full-load current.`,
+    );
   }
   for (const m of externalMotors) {
-    lines.push(`${m.tag} (${kindWords(m)}) needs ${m.needs}: fed from a source outside the panel, left out of the feeder and the panel's full-load current — the source and its protection are someone else's to provide.`);
+    lines.push(
+      `${m.tag} (${kindWords(m)}) needs ${m.needs}: fed from a source outside the panel, left out of the feeder and the panel's full-load current — the source and its protection are someone else's to provide.`,
+    );
   }
   return { sources, externalMotors, lines };
 }

@@ -14,7 +14,10 @@ export interface OverloadResult {
   why: string;
 }
 
-export function overloadMaxSetting(input: { flaAmps: number; serviceFactor: number; tempRiseC?: number }, edition: CodeEdition): OverloadResult {
+export function overloadMaxSetting(
+  input: { flaAmps: number; serviceFactor: number; tempRiseC?: number },
+  edition: CodeEdition,
+): OverloadResult {
   let maxPercent = 115;
   let why = 'service factor below 1.15 and no marked temperature rise of 40 °C or less';
   if (input.serviceFactor >= 1.15) {
@@ -41,7 +44,10 @@ export function overloadMaxSetting(input: { flaAmps: number; serviceFactor: numb
  *   that of 430.32 (NEC 430.4);
  * - every other starter: one relay carrying the line current.
  */
-export function overloadRelay(input: { flaAmps: number; maxSettingAmps: number; starterType: string }, edition: CodeEdition): OverloadRelay {
+export function overloadRelay(
+  input: { flaAmps: number; maxSettingAmps: number; starterType: string },
+  edition: CodeEdition,
+): OverloadRelay {
   const { flaAmps, maxSettingAmps, starterType } = input;
   if (starterType === 'wye-delta') {
     const share = 1 / Math.sqrt(3);
@@ -64,7 +70,14 @@ export function overloadRelay(input: { flaAmps: number; maxSettingAmps: number; 
       basis: nec(edition, '430.4'),
     };
   }
-  return { share: 1, count: starterType === 'two-speed' ? 2 : 1, settingAmps: round2(flaAmps), maxAmps: round2(maxSettingAmps), note: null, basis: nec(edition, '430.32(A)(1)') };
+  return {
+    share: 1,
+    count: starterType === 'two-speed' ? 2 : 1,
+    settingAmps: round2(flaAmps),
+    maxAmps: round2(maxSettingAmps),
+    note: null,
+    basis: nec(edition, '430.32(A)(1)'),
+  };
 }
 
 type RelayInputs = Pick<LoadSelection, 'flaAmps' | 'overload' | 'starter'>;

@@ -37,7 +37,8 @@ export function checkOverride(sel: LoadSelection, o: OverrideInput, index = 0): 
           `${v} A is above the ${sel.scpd.ratingAmps} A that 430.52(C)(1) with Exception 1 permits; the higher limits of Exception 2 apply only where the motor will not start`,
         );
       }
-      if (v < sel.flcAmps) warnings.push(`${v} A is below the motor's ${sel.flcAmps} A full-load current: nuisance tripping on start is likely`);
+      if (v < sel.flcAmps)
+        warnings.push(`${v} A is below the motor's ${sel.flcAmps} A full-load current: nuisance tripping on start is likely`);
       break;
     }
     case 'conductor.size': {
@@ -47,25 +48,33 @@ export function checkOverride(sel: LoadSelection, o: OverrideInput, index = 0): 
       } catch {
         bad(`${o.value} is not a size in Table 310.16 (write e.g. "10 AWG", "1/0 AWG", "250 kcmil")`);
       }
-      if (amp < sel.conductor.minAmpacity) bad(`${o.value} carries ${amp} A, below the ${sel.conductor.minAmpacity} A that 430.22 requires (125 % of FLC)`);
+      if (amp < sel.conductor.minAmpacity)
+        bad(`${o.value} carries ${amp} A, below the ${sel.conductor.minAmpacity} A that 430.22 requires (125 % of FLC)`);
       break;
     }
     case 'overload.tripClass':
       if (![10, 20, 30].includes(Number(o.value))) bad('Trip class is 10, 20 or 30');
-      if (Number(o.value) > sel.overload.tripClass) warnings.push(`Class ${o.value} trips slower than the chosen class ${sel.overload.tripClass}: confirm it stays within the motor's locked-rotor withstand time`);
+      if (Number(o.value) > sel.overload.tripClass)
+        warnings.push(
+          `Class ${o.value} trips slower than the chosen class ${sel.overload.tripClass}: confirm it stays within the motor's locked-rotor withstand time`,
+        );
       break;
     case 'relays.phaseLoss':
     case 'relays.phaseReversal':
       if (typeof o.value !== 'boolean') bad('Give true or false');
-      if (o.value === false && getPath(sel, o.field) === true) warnings.push(`Removes a relay the rules chose (${o.field === 'relays.phaseLoss' ? 'phase loss' : 'phase reversal'})`);
+      if (o.value === false && getPath(sel, o.field) === true)
+        warnings.push(`Removes a relay the rules chose (${o.field === 'relays.phaseLoss' ? 'phase loss' : 'phase reversal'})`);
       break;
     case 'enclosure.nemaType':
       if (!['1', '3R', '4', '4X', '7', '9', '12'].includes(String(o.value))) bad('NEMA type is one of 1, 3R, 4, 4X, 7, 9, 12');
-      if (String(o.value) !== sel.enclosure.nemaType) warnings.push(`Enclosure type ${o.value} replaces the type ${sel.enclosure.nemaType} chosen for the environment`);
+      if (String(o.value) !== sel.enclosure.nemaType)
+        warnings.push(`Enclosure type ${o.value} replaces the type ${sel.enclosure.nemaType} chosen for the environment`);
       break;
     case 'starter.type':
     case 'scpd.type':
-      warnings.push(`${o.field === 'starter.type' ? 'Starter' : 'Protective device'} type changed from ${String(getPath(sel, o.field))}: sizes were computed for the engine's choice`);
+      warnings.push(
+        `${o.field === 'starter.type' ? 'Starter' : 'Protective device'} type changed from ${String(getPath(sel, o.field))}: sizes were computed for the engine's choice`,
+      );
       break;
   }
   return warnings;
@@ -79,7 +88,8 @@ export function applyOverrides(sel: LoadSelection, overrides: ReadonlyArray<Pick
     const [a, b] = o.field.split('.');
     // the field names a card and one of its values ("overload.tripClass"): the override fields' list is the schema
     const card: unknown = Reflect.get(eff, a!);
-    if (card && typeof card === 'object') Reflect.set(card, b!, o.field === 'overload.tripClass' || o.field === 'scpd.ratingAmps' ? Number(o.value) : o.value);
+    if (card && typeof card === 'object')
+      Reflect.set(card, b!, o.field === 'overload.tripClass' || o.field === 'scpd.ratingAmps' ? Number(o.value) : o.value);
   }
   // the overload relay's position follows the starter actually fitted (sizes stay the engine's)
   if (eff.starter.type !== sel.starter.type) {

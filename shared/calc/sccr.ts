@@ -262,7 +262,7 @@ function replaceInInput(input: SccrInput, location: string, code: string, by: Sc
 }
 
 function findComponent(input: SccrInput, location: string, code: string): SccrComponentInput | undefined {
-  const list = location === 'feeder' ? input.feeder : input.buckets.find((b) => b.tag === location)?.components ?? [];
+  const list = location === 'feeder' ? input.feeder : (input.buckets.find((b) => b.tag === location)?.components ?? []);
   return list.find((c) => c.code === code);
 }
 

@@ -48,13 +48,17 @@ export function branchProtection(
   if (input.override) {
     const limit = exception2LimitPercent(input.motor, input.type, input.flcAmps);
     if (input.override.maxPercent > limit) {
-      throw new ValidationError(`scpdOverride.maxPercent ${input.override.maxPercent} % exceeds the ${limit} % limit of 430.52(C)(1) Exception 2 for this device`, [
-        { path: 'scpdOverride.maxPercent', message: `at most ${limit} % for ${input.type}` },
-      ]);
+      throw new ValidationError(
+        `scpdOverride.maxPercent ${input.override.maxPercent} % exceeds the ${limit} % limit of 430.52(C)(1) Exception 2 for this device`,
+        [{ path: 'scpdOverride.maxPercent', message: `at most ${limit} % for ${input.type}` }],
+      );
     }
     const computed = round2((input.flcAmps * input.override.maxPercent) / 100);
     const clause = input.type === 'instantaneous-trip-breaker' ? '430.52(C)(3) Exception No. 1' : '430.52(C)(1) Exception No. 2';
-    const rating = input.type === 'instantaneous-trip-breaker' ? Math.floor(computed * 10) / 10 : nextLowerStandard(computed, edition, family(input.type));
+    const rating =
+      input.type === 'instantaneous-trip-breaker'
+        ? Math.floor(computed * 10) / 10
+        : nextLowerStandard(computed, edition, family(input.type));
     return {
       type: input.type,
       maxPercent: input.override.maxPercent,
@@ -82,7 +86,12 @@ export function branchProtection(
     maxPercent: tablePercent,
     computedMaxAmps: computed,
     ratingAmps: rating,
-    basis: nec(edition, rating > computed + 1e-9 ? '430.52(C)(1) Exception No. 1, Table 430.52, Table 240.6(A)' : '430.52(C)(1), Table 430.52, Table 240.6(A)'),
+    basis: nec(
+      edition,
+      rating > computed + 1e-9
+        ? '430.52(C)(1) Exception No. 1, Table 430.52, Table 240.6(A)'
+        : '430.52(C)(1), Table 430.52, Table 240.6(A)',
+    ),
     exception: rating > computed + 1e-9 ? 'exception-1' : 'none',
   };
 }
@@ -99,7 +108,13 @@ function perWindingProtection(input: { flcAmps: number; type: ScpdType; motor: M
   const maxPercent = maxPercent430_52(input.motor, input.type) / 2;
   const computed = round2((input.flcAmps * maxPercent) / 100);
   if (input.type === 'instantaneous-trip-breaker') {
-    return { count: 2, maxPercent, computedMaxAmps: computed, ratingAmps: Math.floor(computed * 10) / 10, basis: nec(edition, '430.4, 430.52(C)(3), Table 430.52') };
+    return {
+      count: 2,
+      maxPercent,
+      computedMaxAmps: computed,
+      ratingAmps: Math.floor(computed * 10) / 10,
+      basis: nec(edition, '430.4, 430.52(C)(3), Table 430.52'),
+    };
   }
   const rating = nextHigherStandard(computed, edition, family(input.type));
   return {
@@ -107,7 +122,12 @@ function perWindingProtection(input: { flcAmps: number; type: ScpdType; motor: M
     maxPercent,
     computedMaxAmps: computed,
     ratingAmps: rating,
-    basis: nec(edition, rating > computed + 1e-9 ? '430.4 (one-half of 430.52), 430.52(C)(1) Exception No. 1, Table 240.6(A)' : '430.4 (one-half of 430.52), Table 240.6(A)'),
+    basis: nec(
+      edition,
+      rating > computed + 1e-9
+        ? '430.4 (one-half of 430.52), 430.52(C)(1) Exception No. 1, Table 240.6(A)'
+        : '430.4 (one-half of 430.52), Table 240.6(A)',
+    ),
   };
 }
 
@@ -130,11 +150,18 @@ function partWindingSingleFuse(flcAmps: number, edition: CodeEdition): ScpdResul
  * the 430.52 one (time-delay fuses then at most 150 % of FLC; an Exception No. 2 override stands), and
  * the alternative of a device on each half-winding.
  */
-export function partWindingProtection(single: ScpdResult, input: { flcAmps: number; motor: MotorKind }, edition: CodeEdition): { single: ScpdResult; perWinding: PerWindingScpd } {
+export function partWindingProtection(
+  single: ScpdResult,
+  input: { flcAmps: number; motor: MotorKind },
+  edition: CodeEdition,
+): { single: ScpdResult; perWinding: PerWindingScpd } {
   const both =
     single.type === 'dual-element-fuse' && single.exception !== 'exception-2'
       ? partWindingSingleFuse(input.flcAmps, edition)
-      : { ...single, basis: `${single.basis}; ${nec(edition, '430.4 Exception')} (one device for both windings: it must let the motor start)` };
+      : {
+          ...single,
+          basis: `${single.basis}; ${nec(edition, '430.4 Exception')} (one device for both windings: it must let the motor start)`,
+        };
   return { single: both, perWinding: perWindingProtection({ flcAmps: input.flcAmps, type: single.type, motor: input.motor }, edition) };
 }
 

@@ -32,7 +32,15 @@ type Plan = {
  */
 const PLAN: Plan = {
   flcAmps: 'Full-load current (A)',
-  starter: { type: ['Starter', (s) => starterTypeLabel(s.starter.type)], nemaSize: 'NEMA size', iecAmps: 'Contactor current (A)', reversingContactors: 'Reversing contactors', iecCategory: null, interlock: null, basis: null },
+  starter: {
+    type: ['Starter', (s) => starterTypeLabel(s.starter.type)],
+    nemaSize: 'NEMA size',
+    iecAmps: 'Contactor current (A)',
+    reversingContactors: 'Reversing contactors',
+    iecCategory: null,
+    interlock: null,
+    basis: null,
+  },
   overload: {
     maxSettingAmps: 'Overload limit (A)',
     tripClass: 'Trip class',
@@ -41,7 +49,14 @@ const PLAN: Plan = {
     maxPercent: null,
     basis: null,
   },
-  scpd: { type: ['Branch protection type', (s) => answerValueLabel('scpdType', s.scpd.type)], ratingAmps: 'Branch protection (A)', perWinding: ['Per half-winding devices (A)', (s) => s.scpd.perWinding?.ratingAmps ?? null], maxPercent: null, computedMaxAmps: null, basis: null },
+  scpd: {
+    type: ['Branch protection type', (s) => answerValueLabel('scpdType', s.scpd.type)],
+    ratingAmps: 'Branch protection (A)',
+    perWinding: ['Per half-winding devices (A)', (s) => s.scpd.perWinding?.ratingAmps ?? null],
+    maxPercent: null,
+    computedMaxAmps: null,
+    basis: null,
+  },
   conductor: {
     size: 'Conductors',
     motorLeads: ['Conductors to the motor', (s) => s.conductor.motorLeads?.size ?? null],
@@ -60,7 +75,9 @@ const PLAN: Plan = {
     minOutputAmps: 'Drive output (A)',
     duty: ['Drive duty', (s) => (s.vfd ? decisionValueLabel('vfd.duty', s.vfd.duty) : null)],
     outputFilter: ['Drive output filter', (s) => (s.vfd ? decisionValueLabel('vfd.outputFilter', s.vfd.outputFilter) : null)],
-    inverterDutyMotor: 'Inverter-duty motor', basis: null },
+    inverterDutyMotor: 'Inverter-duty motor',
+    basis: null,
+  },
   softStarter: { minAmps: 'Soft starter (A)', bypass: 'Soft starter bypass', insideDelta: null },
   dc: { fieldLossProtection: 'Field-loss protection', dynamicBraking: 'Dynamic braking', field: null },
   controlScheme: ['Control scheme', (s) => s.controlScheme ?? 'three-wire'],
@@ -82,20 +99,22 @@ const PLAN: Plan = {
   trace: null,
 };
 
-const FIELDS: ReadonlyArray<readonly [string, string, Pick]> = Object.entries(PLAN).flatMap(([key, entry]): Array<readonly [string, string, Pick]> => {
-  if (entry === null) return [];
-  if (typeof entry === 'string' || Array.isArray(entry)) return [decision(key, entry as Decision, (s) => Reflect.get(s, key))];
-  return Object.entries(entry as Record<string, Decision | null>).flatMap(([field, d]) =>
-    d === null
-      ? []
-      : [
-          decision(`${key}.${field}`, d, (s) => {
-            const card: unknown = Reflect.get(s, key);
-            return card && typeof card === 'object' ? (Reflect.get(card, field) ?? null) : null;
-          }),
-        ],
-  );
-});
+const FIELDS: ReadonlyArray<readonly [string, string, Pick]> = Object.entries(PLAN).flatMap(
+  ([key, entry]): Array<readonly [string, string, Pick]> => {
+    if (entry === null) return [];
+    if (typeof entry === 'string' || Array.isArray(entry)) return [decision(key, entry as Decision, (s) => Reflect.get(s, key))];
+    return Object.entries(entry as Record<string, Decision | null>).flatMap(([field, d]) =>
+      d === null
+        ? []
+        : [
+            decision(`${key}.${field}`, d, (s) => {
+              const card: unknown = Reflect.get(s, key);
+              return card && typeof card === 'object' ? (Reflect.get(card, field) ?? null) : null;
+            }),
+          ],
+    );
+  },
+);
 
 function decision(field: string, d: Decision, read: Pick): readonly [string, string, Pick] {
   return typeof d === 'string' ? [field, d, read] : [field, d[0], d[1]];
@@ -125,8 +144,18 @@ export function selectionDifferences(before: LoadSelection, after: LoadSelection
   if (ca.join('\n') !== cb.join('\n')) {
     const added = cb.filter((c) => !ca.includes(c));
     const removed = ca.filter((c) => !cb.includes(c)).length;
-    const what = added.length === removed ? `${added.length} reworded` : [added.length ? `${added.length} new or reworded` : '', removed > added.length ? `${removed - added.length} gone` : ''].filter(Boolean).join(', ');
-    out.push({ field: 'cautions', label: 'Cautions', from: `${ca.length}`, to: `${cb.length} (${what})${added.length ? `: ${added.map((c) => `“${c}”`).join(' ')}` : ''}` });
+    const what =
+      added.length === removed
+        ? `${added.length} reworded`
+        : [added.length ? `${added.length} new or reworded` : '', removed > added.length ? `${removed - added.length} gone` : '']
+            .filter(Boolean)
+            .join(', ');
+    out.push({
+      field: 'cautions',
+      label: 'Cautions',
+      from: `${ca.length}`,
+      to: `${cb.length} (${what})${added.length ? `: ${added.map((c) => `“${c}”`).join(' ')}` : ''}`,
+    });
   }
   return out;
 }

@@ -64,7 +64,9 @@ export function transformerKva(input: TransformerKvaInput): TransformerKva {
     }
     const worst = Math.max(legs[0] as number, legs[1] as number);
     lineAmps = worst + 0.25 * largest;
-    steps.push(`halves of the ${input.secondaryVolts}/${half} V secondary carry ${round2(legs[0] as number)} A and ${round2(legs[1] as number)} A; the more loaded ${round2(worst)} A + 25 % of the largest motor's ${largest} A = ${round2(lineAmps)} A`);
+    steps.push(
+      `halves of the ${input.secondaryVolts}/${half} V secondary carry ${round2(legs[0] as number)} A and ${round2(legs[1] as number)} A; the more loaded ${round2(worst)} A + 25 % of the largest motor's ${largest} A = ${round2(lineAmps)} A`,
+    );
   } else {
     const sum = input.loads.reduce((s, l) => s + l.amps, 0);
     lineAmps = sum + 0.25 * largest;
@@ -73,7 +75,9 @@ export function transformerKva(input: TransformerKvaInput): TransformerKva {
   const va = input.phases === 3 ? SQRT3 * input.secondaryVolts * lineAmps : input.secondaryVolts * lineAmps;
   const loadKva = Math.round(va / 10) / 100;
   const kva = nextStandardKva(va / 1000, input.phases);
-  steps.push(`${round2(lineAmps)} A × ${input.phases === 3 ? '√3 × ' : ''}${input.secondaryVolts} V = ${loadKva} kVA; next standard rating ${kva} kVA (${TRANSFORMER_KVA_SOURCE})`);
+  steps.push(
+    `${round2(lineAmps)} A × ${input.phases === 3 ? '√3 × ' : ''}${input.secondaryVolts} V = ${loadKva} kVA; next standard rating ${kva} kVA (${TRANSFORMER_KVA_SOURCE})`,
+  );
   return { loadAmps: round2(lineAmps), loadKva, kva, steps };
 }
 
@@ -87,7 +91,11 @@ export function ratedAmps(kva: number, volts: number, phases: 1 | 3): number {
  * permits it (Table 450.3(B) Note 1). Inverse-time breaker ratings first; below 10 A the fuse ratings
  * of Table 240.6(A) (1, 3, 6 A).
  */
-export function deviceWithin(maxAmps: number, nextHigherPermitted: boolean, edition: CodeEdition): { ratingAmps: number; family: DeviceFamily } {
+export function deviceWithin(
+  maxAmps: number,
+  nextHigherPermitted: boolean,
+  edition: CodeEdition,
+): { ratingAmps: number; family: DeviceFamily } {
   for (const family of ['breaker', 'fuse'] as const) {
     try {
       if (nextHigherPermitted) return { ratingAmps: nextHigherStandard(maxAmps, edition, family), family };
@@ -96,7 +104,10 @@ export function deviceWithin(maxAmps: number, nextHigherPermitted: boolean, edit
       if (!(e instanceof OutsideTableError)) throw e;
     }
   }
-  throw new OutsideTableError('Table 240.6(A)', `no standard rating within ${round2(maxAmps)} A (smallest ${standardRatings(edition, 'fuse')[0]} A)`);
+  throw new OutsideTableError(
+    'Table 240.6(A)',
+    `no standard rating within ${round2(maxAmps)} A (smallest ${standardRatings(edition, 'fuse')[0]} A)`,
+  );
 }
 
 export interface TransformerProtection {
@@ -105,10 +116,17 @@ export interface TransformerProtection {
   secondary: (SourceProtection & { family: DeviceFamily }) | null;
 }
 
-function side(limit: Limit450, amps: number, method: TransformerProtectionMethod, where: string, edition: CodeEdition): SourceProtection & { family: DeviceFamily } {
+function side(
+  limit: Limit450,
+  amps: number,
+  method: TransformerProtectionMethod,
+  where: string,
+  edition: CodeEdition,
+): SourceProtection & { family: DeviceFamily } {
   const maxAmps = round2((limit.percent * amps) / 100);
   const d = deviceWithin(maxAmps, limit.nextHigherPermitted, edition);
-  if (d.ratingAmps + 1e-9 < amps) throw new OutsideTableError(TABLE_450_3B, `no standard ${where} device between the rated ${amps} A and the ${maxAmps} A limit`);
+  if (d.ratingAmps + 1e-9 < amps)
+    throw new OutsideTableError(TABLE_450_3B, `no standard ${where} device between the rated ${amps} A and the ${maxAmps} A limit`);
   const higher = limit.nextHigherPermitted && d.ratingAmps > maxAmps + 1e-9 ? ', next higher standard rating (Note 1)' : '';
   return {
     method,
@@ -132,6 +150,9 @@ export function transformerProtection(
 ): TransformerProtection {
   const method = input.method ?? 'primary-and-secondary';
   const primary = side(primaryLimit(method, input.primaryAmps), input.primaryAmps, method, 'primary', edition);
-  const secondary = method === 'primary-and-secondary' ? side(secondaryLimit(input.secondaryAmps), input.secondaryAmps, method, 'secondary', edition) : null;
+  const secondary =
+    method === 'primary-and-secondary'
+      ? side(secondaryLimit(input.secondaryAmps), input.secondaryAmps, method, 'secondary', edition)
+      : null;
   return { method, primary, secondary };
 }

@@ -49,7 +49,15 @@ function dropVolts(amps: number, ohmsPerKft: number, lengthFt: number, sets: num
 }
 
 export function motorVoltageDrop(
-  input: { amps: number; ratedVolts: number; threePhase: boolean; lengthFt: number; conductor: string; material: ConductorMaterial; circuit?: RunCircuit },
+  input: {
+    amps: number;
+    ratedVolts: number;
+    threePhase: boolean;
+    lengthFt: number;
+    conductor: string;
+    material: ConductorMaterial;
+    circuit?: RunCircuit;
+  },
   edition: CodeEdition,
 ): VoltageDropResult {
   const { sets, size } = parseConductor(input.conductor);
@@ -62,7 +70,10 @@ export function motorVoltageDrop(
   if (percent > DROP_LIMIT_PERCENT) {
     const sizes = sizesFor(input.material);
     for (const s of sizes.slice(sizes.indexOf(size as (typeof sizes)[number]) + 1)) {
-      if ((dropVolts(input.amps, resistanceOhmsPerKft(s, input.material), input.lengthFt, sets, input.threePhase, circuit) / sys) * 100 <= DROP_LIMIT_PERCENT) {
+      if (
+        (dropVolts(input.amps, resistanceOhmsPerKft(s, input.material), input.lengthFt, sets, input.threePhase, circuit) / sys) * 100 <=
+        DROP_LIMIT_PERCENT
+      ) {
         sizeWithinLimit = sets > 1 ? `${sets} × ${s} per phase` : s;
         break;
       }

@@ -70,8 +70,10 @@ export interface LadderLayout {
   notes: Array<{ row: number; text: string }>;
 }
 
-const widthOf = (n: Net): number => (n.kind === 'el' ? 1 : n.kind === 'series' ? n.items.reduce((a, x) => a + widthOf(x), 0) : Math.max(...n.alts.map(widthOf)));
-const heightOf = (n: Net): number => (n.kind === 'el' ? 1 : n.kind === 'series' ? Math.max(1, ...n.items.map(heightOf)) : n.alts.reduce((a, x) => a + heightOf(x), 0));
+const widthOf = (n: Net): number =>
+  n.kind === 'el' ? 1 : n.kind === 'series' ? n.items.reduce((a, x) => a + widthOf(x), 0) : Math.max(...n.alts.map(widthOf));
+const heightOf = (n: Net): number =>
+  n.kind === 'el' ? 1 : n.kind === 'series' ? Math.max(1, ...n.items.map(heightOf)) : n.alts.reduce((a, x) => a + heightOf(x), 0);
 const endsInCoil = (n: Net): boolean => {
   if (n.kind === 'el') return n.el.kind === 'coil' || n.el.kind === 'light' || n.el.kind === 'input';
   if (n.kind === 'series') return n.items.length > 0 && endsInCoil(n.items[n.items.length - 1]!);

@@ -6,7 +6,16 @@ import type { BomLine } from '../schemas/catalogue';
 import { PANEL_BUCKET } from '../schemas/catalogue';
 import type { LoadSelection } from '../schemas/selection';
 import type { ConnectionCard } from '../calc/connections';
-import { buildBucketSchematic, COLOUR, COLOUR_PRACTICE, deviceOf, terminalOf, type BucketSchematic, type FieldPoint, type PowerBand } from './schematic';
+import {
+  buildBucketSchematic,
+  COLOUR,
+  COLOUR_PRACTICE,
+  deviceOf,
+  terminalOf,
+  type BucketSchematic,
+  type FieldPoint,
+  type PowerBand,
+} from './schematic';
 
 export interface DrawingBucketInput {
   selection: LoadSelection;
@@ -84,7 +93,12 @@ export const SHOP_FALLBACK = '[Shop name]';
 
 /** A drawing number from the job number and panel name: letters, digits and dashes. */
 export function drawingNumber(jobNumber: string, panelName: string): string {
-  const clean = (x: string) => x.normalize('NFKD').replace(/[^A-Za-z0-9]+/g, '-').replace(/^-+|-+$/g, '').toUpperCase();
+  const clean = (x: string) =>
+    x
+      .normalize('NFKD')
+      .replace(/[^A-Za-z0-9]+/g, '-')
+      .replace(/^-+|-+$/g, '')
+      .toUpperCase();
   return `${clean(jobNumber) || 'JOB'}-${clean(panelName).slice(0, 24) || 'PANEL'}-E`;
 }
 
@@ -102,7 +116,10 @@ export function buildPanelDrawings(input: PanelDrawingInput): PanelDrawings {
   const buckets: BucketSchematic[] = [];
   let rung = 1;
   input.buckets.forEach((bi, i) => {
-    const sch = buildBucketSchematic({ index: i + 1, selection: bi.selection, bom: byBucket.get(bi.selection.tag) ?? [], card: bi.card, jogging: bi.jogging }, rung);
+    const sch = buildBucketSchematic(
+      { index: i + 1, selection: bi.selection, bom: byBucket.get(bi.selection.tag) ?? [], card: bi.card, jogging: bi.jogging },
+      rung,
+    );
     rung = Math.ceil((rung + sch.layout.rows) / 10) * 10 + 1;
     buckets.push(sch);
   });
@@ -136,16 +153,34 @@ export function buildPanelDrawings(input: PanelDrawingInput): PanelDrawings {
         bucket: sch.tag,
       });
     };
-    for (const g of ['motor', 'ground', 'remote', 'plc'] as const) for (const p of sch.fieldPoints.filter((x) => x.group === g)) push(p, g === 'ground' ? 'ground' : 'feed-through');
+    for (const g of ['motor', 'ground', 'remote', 'plc'] as const)
+      for (const p of sch.fieldPoints.filter((x) => x.group === g)) push(p, g === 'ground' ? 'ground' : 'feed-through');
     const short = terminals.filter((t) => t.bucket === sch.tag && !t.inBom).length;
-    if (short > 0) warnings.push(`${sch.tag}: the schematic lands ${short} more field conductor${short === 1 ? '' : 's'} than the bill of materials has terminal blocks for; regenerate the bill of materials or add them.`);
+    if (short > 0)
+      warnings.push(
+        `${sch.tag}: the schematic lands ${short} more field conductor${short === 1 ? '' : 's'} than the bill of materials has terminal blocks for; regenerate the bill of materials or add them.`,
+      );
     while (feed > 0) push(null, 'feed-through');
     while (ground > 0) push(null, 'ground');
   }
   const extra = input.bom.filter((l) => l.category === 'terminal-block' && !buckets.some((b) => b.tag === l.bucket));
   for (const l of extra) {
     for (let k = 1; k <= l.quantity; k++) {
-      terminals.push({ strip: 'TB0', number: k, ref: `TB0:${k}`, block: isGround(l) ? 'ground' : 'feed-through', wire: '', purpose: `Spare (${l.bucket === PANEL_BUCKET ? 'panel' : l.bucket} line of the bill of materials)`, group: 'spare', panelSide: '', field: '', conductor: '', colour: '', inBom: true, bucket: l.bucket });
+      terminals.push({
+        strip: 'TB0',
+        number: k,
+        ref: `TB0:${k}`,
+        block: isGround(l) ? 'ground' : 'feed-through',
+        wire: '',
+        purpose: `Spare (${l.bucket === PANEL_BUCKET ? 'panel' : l.bucket} line of the bill of materials)`,
+        group: 'spare',
+        panelSide: '',
+        field: '',
+        conductor: '',
+        colour: '',
+        inBom: true,
+        bucket: l.bucket,
+      });
     }
   }
 
@@ -155,19 +190,91 @@ export function buildPanelDrawings(input: PanelDrawingInput): PanelDrawings {
   const supplySheet = `${number}-01`;
   const phases = input.supply.phases === 1 ? ['L1', 'L2'] : ['L1', 'L2', 'L3'];
   phases.forEach((p, i) => {
-    wires.push({ wire: p, from: 'Supply (field, by others)', to: `MAIN:L${i + 1}`, conductor: 'feeder (see protection card)', colour: COLOUR.power, bucket: PANEL_BUCKET, sheet: supplySheet });
-    wires.push({ wire: `1${p}`, from: `MAIN:T${i + 1}`, to: `PDB:${p}`, conductor: 'feeder', colour: COLOUR.power, bucket: PANEL_BUCKET, sheet: supplySheet });
+    wires.push({
+      wire: p,
+      from: 'Supply (field, by others)',
+      to: `MAIN:L${i + 1}`,
+      conductor: 'feeder (see protection card)',
+      colour: COLOUR.power,
+      bucket: PANEL_BUCKET,
+      sheet: supplySheet,
+    });
+    wires.push({
+      wire: `1${p}`,
+      from: `MAIN:T${i + 1}`,
+      to: `PDB:${p}`,
+      conductor: 'feeder',
+      colour: COLOUR.power,
+      bucket: PANEL_BUCKET,
+      sheet: supplySheet,
+    });
   });
-  wires.push({ wire: '11', from: 'PDB:L1', to: 'CPT-FU:1', conductor: '14 AWG', colour: COLOUR.power, bucket: PANEL_BUCKET, sheet: supplySheet });
-  wires.push({ wire: '12', from: 'PDB:L2', to: 'CPT-FU:3', conductor: '14 AWG', colour: COLOUR.power, bucket: PANEL_BUCKET, sheet: supplySheet });
-  wires.push({ wire: '13', from: 'CPT-FU:2', to: 'CPT:H1', conductor: '14 AWG', colour: COLOUR.power, bucket: PANEL_BUCKET, sheet: supplySheet });
-  wires.push({ wire: '14', from: 'CPT-FU:4', to: 'CPT:H2', conductor: '14 AWG', colour: COLOUR.power, bucket: PANEL_BUCKET, sheet: supplySheet });
-  wires.push({ wire: '15', from: 'CPT:X1', to: 'X1-FU:1', conductor: '14 AWG', colour: COLOUR.control, bucket: PANEL_BUCKET, sheet: supplySheet });
-  wires.push({ wire: 'X1', from: 'X1-FU:2', to: 'control fuses of every bucket', conductor: '14 AWG', colour: COLOUR.control, bucket: PANEL_BUCKET, sheet: supplySheet });
-  wires.push({ wire: 'X2', from: 'CPT:X2', to: 'X2 bus; bonded to the ground bar', conductor: '14 AWG', colour: COLOUR.grounded, bucket: PANEL_BUCKET, sheet: supplySheet });
+  wires.push({
+    wire: '11',
+    from: 'PDB:L1',
+    to: 'CPT-FU:1',
+    conductor: '14 AWG',
+    colour: COLOUR.power,
+    bucket: PANEL_BUCKET,
+    sheet: supplySheet,
+  });
+  wires.push({
+    wire: '12',
+    from: 'PDB:L2',
+    to: 'CPT-FU:3',
+    conductor: '14 AWG',
+    colour: COLOUR.power,
+    bucket: PANEL_BUCKET,
+    sheet: supplySheet,
+  });
+  wires.push({
+    wire: '13',
+    from: 'CPT-FU:2',
+    to: 'CPT:H1',
+    conductor: '14 AWG',
+    colour: COLOUR.power,
+    bucket: PANEL_BUCKET,
+    sheet: supplySheet,
+  });
+  wires.push({
+    wire: '14',
+    from: 'CPT-FU:4',
+    to: 'CPT:H2',
+    conductor: '14 AWG',
+    colour: COLOUR.power,
+    bucket: PANEL_BUCKET,
+    sheet: supplySheet,
+  });
+  wires.push({
+    wire: '15',
+    from: 'CPT:X1',
+    to: 'X1-FU:1',
+    conductor: '14 AWG',
+    colour: COLOUR.control,
+    bucket: PANEL_BUCKET,
+    sheet: supplySheet,
+  });
+  wires.push({
+    wire: 'X1',
+    from: 'X1-FU:2',
+    to: 'control fuses of every bucket',
+    conductor: '14 AWG',
+    colour: COLOUR.control,
+    bucket: PANEL_BUCKET,
+    sheet: supplySheet,
+  });
+  wires.push({
+    wire: 'X2',
+    from: 'CPT:X2',
+    to: 'X2 bus; bonded to the ground bar',
+    conductor: '14 AWG',
+    colour: COLOUR.grounded,
+    bucket: PANEL_BUCKET,
+    sheet: supplySheet,
+  });
   buckets.forEach((sch, i) => {
     const sheet = sheetOf(i);
-    const size = sch.power.lines.length ? (input.buckets[i]!.selection.conductor.size) : '';
+    const size = sch.power.lines.length ? input.buckets[i]!.selection.conductor.size : '';
     const leadSize = input.buckets[i]!.selection.conductor.motorLeads?.size ?? size;
     const chain = (bands: PowerBand[], start: { refs: string[]; wires: string[] }, sz: string) => {
       let { refs, wires: ws } = start;
@@ -175,11 +282,30 @@ export function buildPanelDrawings(input: PanelDrawingInput): PanelDrawings {
         if (refs[k]) wires.push({ wire: ws[k] ?? '', from: refs[k]!, to, conductor: sz, colour: COLOUR.power, bucket: sch.tag, sheet });
       };
       for (const band of bands) {
-        if (band.kind === 'pmr') refs.forEach((_, k) => { wires.push({ wire: ws[k] ?? '', from: refs[k]!, to: `${band.device}:L${k + 1}`, conductor: '14 AWG', colour: COLOUR.power, bucket: sch.tag, sheet }); });
-        else if (band.kind === 'terminals') (band.marks ?? []).forEach((_, k) => { row(k, `${band.device}:${terminalNumber(terminals, sch.tag, band.wires[k] ?? '')}`); });
-        else if (band.kind === 'star') refs.forEach((_, k) => { row(k, `${band.device}:L${k + 1}`); });
+        if (band.kind === 'pmr')
+          refs.forEach((_, k) => {
+            wires.push({
+              wire: ws[k] ?? '',
+              from: refs[k]!,
+              to: `${band.device}:L${k + 1}`,
+              conductor: '14 AWG',
+              colour: COLOUR.power,
+              bucket: sch.tag,
+              sheet,
+            });
+          });
+        else if (band.kind === 'terminals')
+          (band.marks ?? []).forEach((_, k) => {
+            row(k, `${band.device}:${terminalNumber(terminals, sch.tag, band.wires[k] ?? '')}`);
+          });
+        else if (band.kind === 'star')
+          refs.forEach((_, k) => {
+            row(k, `${band.device}:L${k + 1}`);
+          });
         else {
-          refs.forEach((_, k) => { row(k, `${band.device}:L${k + 1}`); });
+          refs.forEach((_, k) => {
+            row(k, `${band.device}:L${k + 1}`);
+          });
           refs = band.wires.map((_, k) => `${band.device}:T${k + 1}`);
           ws = band.wires;
         }
@@ -191,15 +317,25 @@ export function buildPanelDrawings(input: PanelDrawingInput): PanelDrawings {
       const sp = sch.power.split;
       const l = chain(sp.left.bands, afterHead, sp.rejoin ? size : leadSize);
       // reversing: the reverse contactor takes L1 and L3 (L1 and L2 single-phase) interchanged
-      const sw = <T,>(x: T[]) => (sp.swap ? [x[x.length - 1]!, ...x.slice(1, -1), x[0]!] : x);
+      const sw = <T>(x: T[]) => (sp.swap ? [x[x.length - 1]!, ...x.slice(1, -1), x[0]!] : x);
       const r = chain(sp.right.bands, { refs: sw(afterHead.refs), wires: sw(afterHead.wires) }, sp.rejoin ? size : leadSize);
       if (sp.rejoin) {
-        r.refs.forEach((ref, k) => { wires.push({ wire: l.wires[k] ?? '', from: ref, to: l.refs[k]!, conductor: size, colour: COLOUR.power, bucket: sch.tag, sheet }); });
+        r.refs.forEach((ref, k) => {
+          wires.push({ wire: l.wires[k] ?? '', from: ref, to: l.refs[k]!, conductor: size, colour: COLOUR.power, bucket: sch.tag, sheet });
+        });
         chain(sch.power.tail, l, size);
       }
     } else chain(sch.power.tail, afterHead, size);
     // control: the bucket's control fuse feeds its rail
-    wires.push({ wire: 'X1', from: 'X1 bus', to: `${sch.index}CFU:1`, conductor: sch.controlWireSize, colour: COLOUR.control, bucket: sch.tag, sheet });
+    wires.push({
+      wire: 'X1',
+      from: 'X1 bus',
+      to: `${sch.index}CFU:1`,
+      conductor: sch.controlWireSize,
+      colour: COLOUR.control,
+      bucket: sch.tag,
+      sheet,
+    });
     const nodes = new Map<number, string[]>();
     nodes.set(0, [`${sch.index}CFU:2`]);
     const order = [...sch.layout.elements].sort((a, z) => a.row - z.row || a.col - z.col);
@@ -222,21 +358,43 @@ export function buildPanelDrawings(input: PanelDrawingInput): PanelDrawings {
       const wire = sch.nodeWire[node]!;
       const colour = node === 1 ? COLOUR.grounded : foreign.has(node) ? COLOUR.foreign : COLOUR.control;
       const uniq = [...new Set(refs)];
-      if (node === 1) for (const r of uniq) wires.push({ wire, from: r, to: 'X2 bus', conductor: sch.controlWireSize, colour, bucket: sch.tag, sheet });
-      else for (let k = 1; k < uniq.length; k++) wires.push({ wire, from: uniq[k - 1]!, to: uniq[k]!, conductor: /AI/.test(uniq[k]!) ? '18 AWG shielded pair' : sch.controlWireSize, colour, bucket: sch.tag, sheet });
+      if (node === 1)
+        for (const r of uniq) wires.push({ wire, from: r, to: 'X2 bus', conductor: sch.controlWireSize, colour, bucket: sch.tag, sheet });
+      else
+        for (let k = 1; k < uniq.length; k++)
+          wires.push({
+            wire,
+            from: uniq[k - 1]!,
+            to: uniq[k]!,
+            conductor: /AI/.test(uniq[k]!) ? '18 AWG shielded pair' : sch.controlWireSize,
+            colour,
+            bucket: sch.tag,
+            sheet,
+          });
     }
   });
 
   const sheets: SheetRef[] = [
     { number: supplySheet, title: 'Supply, main disconnect and control power', kind: 'supply' },
-    ...buckets.map((b, i) => ({ number: sheetOf(i), title: `${b.tag} control schematic — ${b.starter}`, kind: 'schematic' as const, tag: b.tag })),
+    ...buckets.map((b, i) => ({
+      number: sheetOf(i),
+      title: `${b.tag} control schematic — ${b.starter}`,
+      kind: 'schematic' as const,
+      tag: b.tag,
+    })),
     { number: `${number}-${String(buckets.length + 2).padStart(2, '0')}`, title: 'Terminal plan', kind: 'terminals' },
     { number: `${number}-${String(buckets.length + 3).padStart(2, '0')}`, title: 'Wire list', kind: 'wires' },
     { number: `${number}-${String(buckets.length + 4).padStart(2, '0')}`, title: 'Panel marking (nameplate)', kind: 'nameplate' },
   ];
   return {
     drawingNumber: number,
-    title: { job: `${input.jobNumber} ${input.jobName}`.trim(), panel: input.panelName, revision: input.revision, date: input.date, shop: input.shopName?.trim() || SHOP_FALLBACK },
+    title: {
+      job: `${input.jobNumber} ${input.jobName}`.trim(),
+      panel: input.panelName,
+      revision: input.revision,
+      date: input.date,
+      shop: input.shopName?.trim() || SHOP_FALLBACK,
+    },
     supply: input.supply,
     controlVolts: input.controlVolts,
     buckets,
@@ -278,11 +436,39 @@ const csvCell = (v: unknown) => {
   return /[",\n\r]/.test(s) || /^[=+\-@]/.test(s) ? `"${(/^[=+\-@]/.test(s) ? `'${s}` : s).replace(/"/g, '""')}"` : s;
 };
 
-export const TERMINAL_COLUMNS = ['terminal', 'strip', 'number', 'block', 'wire', 'purpose', 'group', 'panel side', 'field side', 'conductor', 'colour', 'in bill of materials', 'bucket'] as const;
+export const TERMINAL_COLUMNS = [
+  'terminal',
+  'strip',
+  'number',
+  'block',
+  'wire',
+  'purpose',
+  'group',
+  'panel side',
+  'field side',
+  'conductor',
+  'colour',
+  'in bill of materials',
+  'bucket',
+] as const;
 export const WIRE_COLUMNS = ['wire', 'from', 'to', 'conductor', 'colour', 'bucket', 'sheet'] as const;
 
 export function terminalRowsFor(d: PanelDrawings): unknown[][] {
-  return d.terminals.map((t) => [t.ref, t.strip, t.number, t.block, t.wire, t.purpose, t.group, t.panelSide, t.field, t.conductor, t.colour, t.inBom ? 'yes' : 'NO', t.bucket]);
+  return d.terminals.map((t) => [
+    t.ref,
+    t.strip,
+    t.number,
+    t.block,
+    t.wire,
+    t.purpose,
+    t.group,
+    t.panelSide,
+    t.field,
+    t.conductor,
+    t.colour,
+    t.inBom ? 'yes' : 'NO',
+    t.bucket,
+  ]);
 }
 export function wireRowsFor(d: PanelDrawings): unknown[][] {
   return d.wires.map((w) => [w.wire, w.from, w.to, w.conductor, w.colour, w.bucket, w.sheet]);
@@ -302,7 +488,15 @@ export interface DrawingsView {
   bomTerminalBlocks: number;
   terminals: TerminalRow[];
   wires: WireRow[];
-  buckets: Array<{ tag: string; starter: string; scheme: string; firstRung: number; rungs: number; overload: string; interlocked: Array<[string, string]> }>;
+  buckets: Array<{
+    tag: string;
+    starter: string;
+    scheme: string;
+    firstRung: number;
+    rungs: number;
+    overload: string;
+    interlocked: Array<[string, string]>;
+  }>;
 }
 
 /** The drawing pages of a submittal: the SVG sheets, the terminal plan and the panel marking. */

@@ -129,15 +129,34 @@ export function buildBucketSchematic(input: BucketInput, firstRung: number): Buc
   };
 
   // ---------------------------------------------------------------- control circuit
-  const OL: Net | null = overload === 'relay' ? el({ kind: 'overload', device: dev(d('OL'), `Overload relay, trip class ${s.overload.tripClass}`) }) : null;
-  if (overload === 'drive') notes.push('Motor overload by the drive’s electronic overload (NEC 2023 430.124 where the drive is listed for it): no separate overload contact.');
-  if (overload === 'starter') notes.push(t === 'RVSS' ? 'Overload protection inside the soft starter: its fault contact opens the run relay circuit.' : 'Overload protection inside the starter: its trip contact is drawn in series with the coil.');
+  const OL: Net | null =
+    overload === 'relay' ? el({ kind: 'overload', device: dev(d('OL'), `Overload relay, trip class ${s.overload.tripClass}`) }) : null;
+  if (overload === 'drive')
+    notes.push(
+      'Motor overload by the drive’s electronic overload (NEC 2023 430.124 where the drive is listed for it): no separate overload contact.',
+    );
+  if (overload === 'starter')
+    notes.push(
+      t === 'RVSS'
+        ? 'Overload protection inside the soft starter: its fault contact opens the run relay circuit.'
+        : 'Overload protection inside the starter: its trip contact is drawn in series with the coil.',
+    );
   const prefix: Net[] = [];
   if (pmr) {
-    const what = [s.relays.phaseLoss && !s.relays.phaseLossByOverload ? 'phase loss' : null, s.relays.phaseReversal ? 'phase reversal' : null].filter(Boolean).join(' / ');
+    const what = [
+      s.relays.phaseLoss && !s.relays.phaseLossByOverload ? 'phase loss' : null,
+      s.relays.phaseReversal ? 'phase reversal' : null,
+    ]
+      .filter(Boolean)
+      .join(' / ');
     prefix.push(el({ kind: 'contact', device: dev(d('PMR'), `Phase monitor relay (${what})`), contact: 'no', label: 'OK' }));
   }
-  if (s.relays.phaseLossByOverload) notes.push(overload === 'relay' ? 'Phase loss detected by the electronic overload relay (its 95-96 contact opens).' : 'Phase loss detected by the drive or starter’s own protection (its fault contact opens).');
+  if (s.relays.phaseLossByOverload)
+    notes.push(
+      overload === 'relay'
+        ? 'Phase loss detected by the electronic overload relay (its 95-96 contact opens).'
+        : 'Phase loss detected by the drive or starter’s own protection (its fault contact opens).',
+    );
   if (fieldLoss) prefix.push(el({ kind: 'contact', device: dev(d('FL'), 'Field-loss relay'), contact: 'no', label: 'FIELD' }));
   const stop = () => el({ kind: 'push', device: dev(d('PB1'), 'Stop push-button'), contact: 'nc', label: 'STOP' });
   let fieldSeq = 0;
@@ -163,40 +182,97 @@ export function buildBucketSchematic(input: BucketInput, firstRung: number): Buc
       return par(twoDirections ? ser(hand, par(start, seal)) : hand, auto);
     }
     if (input.jogging) {
-      const jog = dev(d(pb === 'PB3' ? 'PB8' : 'PB9'), `Jog ${startLabel === 'START' ? '' : `${startLabel.toLowerCase()} `}push-button (one NO, one NC)`);
-      if (!notes.some((x) => x.startsWith('Jog'))) notes.push('Jog: the jog push-button’s NC contact opens the seal-in while its NO contact runs the coil; add the jog push-buttons to the bill of materials (it does not list them).');
-      return par(start, ser(seal, el({ kind: 'push', device: jog, contact: 'nc', label: 'JOG' })), el({ kind: 'push', device: jog, contact: 'no', label: 'JOG' }));
+      const jog = dev(
+        d(pb === 'PB3' ? 'PB8' : 'PB9'),
+        `Jog ${startLabel === 'START' ? '' : `${startLabel.toLowerCase()} `}push-button (one NO, one NC)`,
+      );
+      if (!notes.some((x) => x.startsWith('Jog')))
+        notes.push(
+          'Jog: the jog push-button’s NC contact opens the seal-in while its NO contact runs the coil; add the jog push-buttons to the bill of materials (it does not list them).',
+        );
+      return par(
+        start,
+        ser(seal, el({ kind: 'push', device: jog, contact: 'nc', label: 'JOG' })),
+        el({ kind: 'push', device: jog, contact: 'no', label: 'JOG' }),
+      );
     }
     return par(start, seal);
   };
-  const head = (): Net[] => [...prefix, ...(scheme === 'three-wire' ? [stop(), remoteStop()] : scheme === 'hand-off-auto' && (t === 'FVR' || t === 'two-speed') ? [stop()] : [])];
+  const head = (): Net[] => [
+    ...prefix,
+    ...(scheme === 'three-wire'
+      ? [stop(), remoteStop()]
+      : scheme === 'hand-off-auto' && (t === 'FVR' || t === 'two-speed')
+        ? [stop()]
+        : []),
+  ];
   const coil = (device: string, label: string, description: string) => el({ kind: 'coil', device: dev(device, description), label });
   const nc = (device: string) => el({ kind: 'contact', device, contact: 'nc', label: 'IL' });
   const no = (device: string, label?: string) => el({ kind: 'contact', device, contact: 'no', ...(label ? { label } : {}) });
-  const light = (device: string, colour: 'R' | 'G' | 'A', label: string) => el({ kind: 'light', device: dev(device, `Pilot light, ${label.toLowerCase()}`), colour, label });
-  const status = (n: Net, what: string) => circuits.push({ ends: 'open', body: ser(el({ kind: 'terminal', label: `${what} (to plant control, by others)` }), n, el({ kind: 'terminal', label: `${what} return` })), note: `${what}: dry contact to the plant control system` });
+  const light = (device: string, colour: 'R' | 'G' | 'A', label: string) =>
+    el({ kind: 'light', device: dev(device, `Pilot light, ${label.toLowerCase()}`), colour, label });
+  const status = (n: Net, what: string) =>
+    circuits.push({
+      ends: 'open',
+      body: ser(
+        el({ kind: 'terminal', label: `${what} (to plant control, by others)` }),
+        n,
+        el({ kind: 'terminal', label: `${what} return` }),
+      ),
+      note: `${what}: dry contact to the plant control system`,
+    });
 
   let starterText: string = t;
   if (t === 'FVNR' || t === 'RVSS' || t === 'VFD' || t === 'dc-drive' || t === 'dc-armature-resistance') {
     if (t === 'FVNR') {
       const M = d('M');
-      circuits.push({ ends: 'rail', body: ser(...head(), command(M, 'START', 'PB2', cmdLabel), ...ol([coil(M, 'M', `Contactor, NEMA size ${s.starter.nemaSize ?? '—'}`)])), note: 'Motor run' });
+      circuits.push({
+        ends: 'rail',
+        body: ser(
+          ...head(),
+          command(M, 'START', 'PB2', cmdLabel),
+          ...ol([coil(M, 'M', `Contactor, NEMA size ${s.starter.nemaSize ?? '—'}`)]),
+        ),
+        note: 'Motor run',
+      });
       circuits.push({ ends: 'rail', body: ser(no(M), light(d('PL1'), 'R', 'RUN')) });
       status(no(M), 'Running');
       starterText = 'Full-voltage non-reversing';
     } else if (t === 'dc-armature-resistance') {
       const A = d('A');
-      const trip = el({ kind: 'contact', device: dev(d('DCS'), 'DC starter (accelerating resistors, built-in overload)'), contact: 'nc', label: 'OL TRIP' });
+      const trip = el({
+        kind: 'contact',
+        device: dev(d('DCS'), 'DC starter (accelerating resistors, built-in overload)'),
+        contact: 'nc',
+        label: 'OL TRIP',
+      });
       if (s.starter.reversingContactors) {
         const F = d('AF');
         const R = d('AR');
-        circuits.push({ ends: 'rail', body: ser(...head(), par(ser(command(F, 'FWD', 'PB2', 'Remote forward (maintained)'), nc(R), coil(F, 'AF', 'Armature contactor, forward')), ser(command(R, 'REV', 'PB3', 'Remote reverse (maintained)'), nc(F), coil(R, 'AR', 'Armature contactor, reverse'))), trip), note: 'Armature forward / reverse' });
+        circuits.push({
+          ends: 'rail',
+          body: ser(
+            ...head(),
+            par(
+              ser(command(F, 'FWD', 'PB2', 'Remote forward (maintained)'), nc(R), coil(F, 'AF', 'Armature contactor, forward')),
+              ser(command(R, 'REV', 'PB3', 'Remote reverse (maintained)'), nc(F), coil(R, 'AR', 'Armature contactor, reverse')),
+            ),
+            trip,
+          ),
+          note: 'Armature forward / reverse',
+        });
         interlocked.push([F, R]);
         circuits.push({ ends: 'rail', body: ser(par(no(F), no(R)), light(d('PL1'), 'R', 'RUN')) });
         status(par(no(F), no(R)), 'Running');
-        notes.push('Reversal by the armature current (A1 and A2 interchanged by AF / AR); the field keeps its polarity. Never reverse both.');
+        notes.push(
+          'Reversal by the armature current (A1 and A2 interchanged by AF / AR); the field keeps its polarity. Never reverse both.',
+        );
       } else {
-        circuits.push({ ends: 'rail', body: ser(...head(), command(A, 'START', 'PB2', cmdLabel), coil(A, 'A', 'Armature contactor'), trip), note: 'Armature contactor' });
+        circuits.push({
+          ends: 'rail',
+          body: ser(...head(), command(A, 'START', 'PB2', cmdLabel), coil(A, 'A', 'Armature contactor'), trip),
+          note: 'Armature contactor',
+        });
         circuits.push({ ends: 'rail', body: ser(no(A), light(d('PL1'), 'R', 'RUN')) });
         status(no(A), 'Running');
       }
@@ -205,30 +281,70 @@ export function buildBucketSchematic(input: BucketInput, firstRung: number): Buc
       // soft starter and drives: an interposing relay gives the run command to the controller's input
       const CR = d('CR');
       const ctrl = t === 'RVSS' ? d('SST') : t === 'VFD' ? d('VFD') : d('DCD');
-      dev(ctrl, t === 'RVSS' ? `Soft starter${s.softStarter?.bypass ? ', bypass' : ''}` : t === 'VFD' ? 'Adjustable-speed drive' : 'DC drive');
+      dev(
+        ctrl,
+        t === 'RVSS' ? `Soft starter${s.softStarter?.bypass ? ', bypass' : ''}` : t === 'VFD' ? 'Adjustable-speed drive' : 'DC drive',
+      );
       const fault = el({ kind: 'contact', device: ctrl, contact: 'nc', label: 'FAULT' });
-      circuits.push({ ends: 'rail', body: ser(...head(), command(CR, 'START', 'PB2', cmdLabel), fault, ...ol([coil(CR, 'CR', 'Run relay')])), note: 'Run command' });
-      circuits.push({ ends: 'open', body: ser(el({ kind: 'input', device: ctrl, label: 'DI COM' }), no(CR, 'RUN'), el({ kind: 'input', device: ctrl, label: 'DI1 RUN/ENABLE' })), note: `Run/enable input of ${ctrl}` });
+      circuits.push({
+        ends: 'rail',
+        body: ser(...head(), command(CR, 'START', 'PB2', cmdLabel), fault, ...ol([coil(CR, 'CR', 'Run relay')])),
+        note: 'Run command',
+      });
+      circuits.push({
+        ends: 'open',
+        body: ser(
+          el({ kind: 'input', device: ctrl, label: 'DI COM' }),
+          no(CR, 'RUN'),
+          el({ kind: 'input', device: ctrl, label: 'DI1 RUN/ENABLE' }),
+        ),
+        note: `Run/enable input of ${ctrl}`,
+      });
       circuits.push({ ends: 'rail', body: ser(no(CR), light(d('PL1'), 'R', 'RUN')) });
-      if (drive) circuits.push({ ends: 'rail', body: ser(el({ kind: 'contact', device: ctrl, contact: 'no', label: 'FAULT' }), light(d('PL2'), 'A', 'FAULT')) });
+      if (drive)
+        circuits.push({
+          ends: 'rail',
+          body: ser(el({ kind: 'contact', device: ctrl, contact: 'no', label: 'FAULT' }), light(d('PL2'), 'A', 'FAULT')),
+        });
       status(no(CR), 'Running');
       if (drive) {
         status(el({ kind: 'contact', device: ctrl, contact: 'no', label: 'FAULT' }), 'Drive fault');
-        circuits.push({ ends: 'open', body: ser(el({ kind: 'terminal', label: 'Speed reference 4-20 mA + (by others)' }), el({ kind: 'input', device: ctrl, label: 'AI1 +' })), note: 'Speed reference from the plant control system (shielded pair, shield at the drive end)' });
-        circuits.push({ ends: 'open', body: ser(el({ kind: 'terminal', label: 'Speed reference 4-20 mA −' }), el({ kind: 'input', device: ctrl, label: 'AI COM' })) });
+        circuits.push({
+          ends: 'open',
+          body: ser(
+            el({ kind: 'terminal', label: 'Speed reference 4-20 mA + (by others)' }),
+            el({ kind: 'input', device: ctrl, label: 'AI1 +' }),
+          ),
+          note: 'Speed reference from the plant control system (shielded pair, shield at the drive end)',
+        });
+        circuits.push({
+          ends: 'open',
+          body: ser(el({ kind: 'terminal', label: 'Speed reference 4-20 mA −' }), el({ kind: 'input', device: ctrl, label: 'AI COM' })),
+        });
       }
       if (t === 'RVSS') {
         if (s.softStarter?.bypass) {
           const internal = input.bom.some((l) => l.category === 'soft-starter' && /bypass/i.test(l.description));
-          if (internal || !hasLine(input.bom, 'contactor')) notes.push('Bypass contactor inside the soft starter (closed by the starter at the end of the ramp).');
+          if (internal || !hasLine(input.bom, 'contactor'))
+            notes.push('Bypass contactor inside the soft starter (closed by the starter at the end of the ramp).');
           else {
-            circuits.push({ ends: 'rail', body: ser(el({ kind: 'contact', device: ctrl, contact: 'no', label: 'END OF RAMP' }), ...ol([coil(d('BP'), 'BP', 'Bypass contactor')])), note: 'Bypass at the end of the ramp' });
+            circuits.push({
+              ends: 'rail',
+              body: ser(
+                el({ kind: 'contact', device: ctrl, contact: 'no', label: 'END OF RAMP' }),
+                ...ol([coil(d('BP'), 'BP', 'Bypass contactor')]),
+              ),
+              note: 'Bypass at the end of the ramp',
+            });
           }
         }
         notes.push('The soft starter’s fault output opens the run relay circuit.');
         starterText = 'Solid-state reduced-voltage (soft starter)';
       } else starterText = t === 'VFD' ? 'Adjustable-speed drive' : 'DC drive';
-      if (t === 'dc-drive' && s.starter.reversingContactors) notes.push('Reversal by the drive (armature reversal in a four-quadrant drive, or a field reversal as its instructions say); no reversing contactors.');
+      if (t === 'dc-drive' && s.starter.reversingContactors)
+        notes.push(
+          'Reversal by the drive (armature reversal in a four-quadrant drive, or a field reversal as its instructions say); no reversing contactors.',
+        );
     }
   } else if (t === 'FVR' || t === 'two-speed') {
     const two = t === 'two-speed';
@@ -242,8 +358,16 @@ export function buildBucketSchematic(input: BucketInput, firstRung: number): Buc
       body: ser(
         ...head(),
         par(
-          ser(command(F, lf, 'PB2', `Remote ${lf.toLowerCase()} (maintained)`), nc(R), coil(F, two ? 'FM' : 'F', descr(two ? 'fast' : 'forward'))),
-          ser(command(R, lr, 'PB3', `Remote ${lr.toLowerCase()} (maintained)`), nc(F), coil(R, two ? 'SM' : 'R', descr(two ? 'slow' : 'reverse'))),
+          ser(
+            command(F, lf, 'PB2', `Remote ${lf.toLowerCase()} (maintained)`),
+            nc(R),
+            coil(F, two ? 'FM' : 'F', descr(two ? 'fast' : 'forward')),
+          ),
+          ser(
+            command(R, lr, 'PB3', `Remote ${lr.toLowerCase()} (maintained)`),
+            nc(F),
+            coil(R, two ? 'SM' : 'R', descr(two ? 'slow' : 'reverse')),
+          ),
         ),
         ...(OL ? [OL] : []),
       ),
@@ -253,7 +377,10 @@ export function buildBucketSchematic(input: BucketInput, firstRung: number): Buc
     circuits.push({ ends: 'rail', body: ser(no(F), light(d('PL1'), 'R', lf)) });
     circuits.push({ ends: 'rail', body: ser(no(R), light(d('PL2'), 'R', lr)) });
     status(par(no(F), no(R)), 'Running');
-    if (!two) notes.push('Reverse only after stop: the push-buttons do not plug-reverse (common practice) unless the machine is meant to be plugged.');
+    if (!two)
+      notes.push(
+        'Reverse only after stop: the push-buttons do not plug-reverse (common practice) unless the machine is meant to be plugged.',
+      );
     starterText = two ? 'Two-speed' : 'Full-voltage reversing';
   } else if (t === 'wye-delta') {
     const M = d('M');
@@ -279,7 +406,9 @@ export function buildBucketSchematic(input: BucketInput, firstRung: number): Buc
     interlocked.push([S, D]);
     circuits.push({ ends: 'rail', body: ser(no(D), light(d('PL1'), 'R', 'RUN')) });
     status(no(M), 'Running');
-    notes.push('Set the transition timer to the motor’s acceleration time; the star contactor drops before the delta contactor closes (open transition), mechanically and electrically interlocked.');
+    notes.push(
+      'Set the transition timer to the motor’s acceleration time; the star contactor drops before the delta contactor closes (open transition), mechanically and electrically interlocked.',
+    );
     starterText = 'Wye-delta, open transition';
   } else if (t === 'part-winding') {
     const M1 = d('M1');
@@ -291,7 +420,11 @@ export function buildBucketSchematic(input: BucketInput, firstRung: number): Buc
       body: ser(
         ...head(),
         command(M1, 'START', 'PB2', cmdLabel),
-        par(ser(coil(M1, 'M1', 'Contactor, first winding')), ser(coil(TR, 'TR', 'Part-winding timer')), ser(el({ kind: 'contact', device: TR, contact: 'no-tc', label: 'TR' }), coil(M2, 'M2', 'Contactor, second winding'))),
+        par(
+          ser(coil(M1, 'M1', 'Contactor, first winding')),
+          ser(coil(TR, 'TR', 'Part-winding timer')),
+          ser(el({ kind: 'contact', device: TR, contact: 'no-tc', label: 'TR' }), coil(M2, 'M2', 'Contactor, second winding')),
+        ),
         ...(OL ? [OL] : []),
       ),
       note: 'Part-winding start',
@@ -302,14 +435,26 @@ export function buildBucketSchematic(input: BucketInput, firstRung: number): Buc
     starterText = 'Part-winding';
   }
 
-  if (scheme === 'two-wire') notes.push('Two-wire control restarts the motor when power returns: the engineer confirms that this is safe (NFPA 79 7.5, from memory).');
+  if (scheme === 'two-wire')
+    notes.push(
+      'Two-wire control restarts the motor when power returns: the engineer confirms that this is safe (NFPA 79 7.5, from memory).',
+    );
   notes.push('Emergency stop: by the machine builder where the machine calls for one (NFPA 79 stop categories); not in this bucket.');
 
   // the overload relays of a part-winding motor: one per winding, both in series
   if (t === 'part-winding' && OL) {
     const c = circuits[0]!;
-    c.body = ser(...(c.body as { items: Net[] }).items.slice(0, -1), el({ kind: 'overload', device: d('OL1') }), el({ kind: 'overload', device: d('OL2') }));
-    devices.splice(devices.findIndex((x) => x.tag === d('OL')), 1, { tag: d('OL1'), description: 'Overload relay, first winding' }, { tag: d('OL2'), description: 'Overload relay, second winding' });
+    c.body = ser(
+      ...(c.body as { items: Net[] }).items.slice(0, -1),
+      el({ kind: 'overload', device: d('OL1') }),
+      el({ kind: 'overload', device: d('OL2') }),
+    );
+    devices.splice(
+      devices.findIndex((x) => x.tag === d('OL')),
+      1,
+      { tag: d('OL1'), description: 'Overload relay, first winding' },
+      { tag: d('OL2'), description: 'Overload relay, second winding' },
+    );
   }
 
   // circuits between the rails first, then the isolated ones (dry contacts, drive inputs) below the rails' ends
@@ -329,7 +474,8 @@ export function buildBucketSchematic(input: BucketInput, firstRung: number): Buc
 
   // ---------------------------------------------------------------- cross-references
   const coils = new Map<string, CrossRef>();
-  for (const e of layout.elements) if (e.el.kind === 'coil') coils.set(e.el.device, { device: e.el.device, coilRung: firstRung + e.row, no: [], nc: [] });
+  for (const e of layout.elements)
+    if (e.el.kind === 'coil') coils.set(e.el.device, { device: e.el.device, coilRung: firstRung + e.row, no: [], nc: [] });
   for (const e of layout.elements) {
     if (e.el.kind !== 'contact') continue;
     const x = coils.get(e.el.device);
@@ -342,25 +488,68 @@ export function buildBucketSchematic(input: BucketInput, firstRung: number): Buc
   const fieldPoints: FieldPoint[] = [];
   const leadSize = s.conductor.motorLeads?.size ?? s.conductor.size;
   const motorTerms = power.motorLeads;
-  const termBand = [...power.tail, ...(power.split ? [...power.split.left.bands, ...power.split.right.bands] : [])].filter((x) => x.kind === 'terminals');
+  const termBand = [...power.tail, ...(power.split ? [...power.split.left.bands, ...power.split.right.bands] : [])].filter(
+    (x) => x.kind === 'terminals',
+  );
   const wiresAtTerms = termBand.flatMap((x) => x.wires);
   const sets = /^\s*(\d+)\s*[×x]/.exec(s.conductor.size);
   const nSets = sets ? Number(sets[1]) : 1;
   motorTerms.forEach((lead, i) => {
     for (let k = 0; k < nSets; k++) {
-      fieldPoints.push({ wire: wiresAtTerms[i] ?? '', purpose: `Motor lead ${lead}${nSets > 1 ? ` (set ${k + 1})` : ''}`, group: 'motor', field: `${s.tag} ${lead}`, panelSide: termPanelSide(power, i), conductor: leadSize, colour: COLOUR.power });
+      fieldPoints.push({
+        wire: wiresAtTerms[i] ?? '',
+        purpose: `Motor lead ${lead}${nSets > 1 ? ` (set ${k + 1})` : ''}`,
+        group: 'motor',
+        field: `${s.tag} ${lead}`,
+        panelSide: termPanelSide(power, i),
+        conductor: leadSize,
+        colour: COLOUR.power,
+      });
     }
   });
-  fieldPoints.push({ wire: 'PE', purpose: 'Motor frame ground', group: 'ground', field: `${s.tag} frame`, panelSide: 'ground bar', conductor: `${leadSize} (size by NEC 250.122)`, colour: COLOUR.ground });
+  fieldPoints.push({
+    wire: 'PE',
+    purpose: 'Motor frame ground',
+    group: 'ground',
+    field: `${s.tag} frame`,
+    panelSide: 'ground bar',
+    conductor: `${leadSize} (size by NEC 250.122)`,
+    colour: COLOUR.ground,
+  });
   for (const e of order) {
     if (e.el.kind === 'field') {
       const purpose = e.el.label;
-      fieldPoints.push({ wire: nodeWire[e.left]!, purpose: `${purpose}: out`, group: 'remote', field: `${purpose} (by others)`, panelSide: neighbour(layout, e.left, e, nodeWire), conductor: controlSize, colour: COLOUR.control });
-      fieldPoints.push({ wire: nodeWire[e.right]!, purpose: `${purpose}: return`, group: 'remote', field: `${purpose} (by others)`, panelSide: neighbour(layout, e.right, e, nodeWire), conductor: controlSize, colour: COLOUR.control });
+      fieldPoints.push({
+        wire: nodeWire[e.left]!,
+        purpose: `${purpose}: out`,
+        group: 'remote',
+        field: `${purpose} (by others)`,
+        panelSide: neighbour(layout, e.left, e, nodeWire),
+        conductor: controlSize,
+        colour: COLOUR.control,
+      });
+      fieldPoints.push({
+        wire: nodeWire[e.right]!,
+        purpose: `${purpose}: return`,
+        group: 'remote',
+        field: `${purpose} (by others)`,
+        panelSide: neighbour(layout, e.right, e, nodeWire),
+        conductor: controlSize,
+        colour: COLOUR.control,
+      });
     }
     if (e.el.kind === 'terminal') {
-      const n = e.left === e.right ? e.left : layout.elements.some((x) => x !== e && (x.left === e.left || x.right === e.left)) ? e.left : e.right;
-      fieldPoints.push({ wire: nodeWire[n]!, purpose: e.el.label, group: 'plc', field: e.el.label, panelSide: neighbour(layout, n, e, nodeWire), conductor: /4-20/.test(e.el.label) ? '18 AWG shielded pair' : controlSize, colour: COLOUR.foreign });
+      const n =
+        e.left === e.right ? e.left : layout.elements.some((x) => x !== e && (x.left === e.left || x.right === e.left)) ? e.left : e.right;
+      fieldPoints.push({
+        wire: nodeWire[n]!,
+        purpose: e.el.label,
+        group: 'plc',
+        field: e.el.label,
+        panelSide: neighbour(layout, n, e, nodeWire),
+        conductor: /4-20/.test(e.el.label) ? '18 AWG shielded pair' : controlSize,
+        colour: COLOUR.foreign,
+      });
     }
   }
 
@@ -428,20 +617,50 @@ export function terminalOf(e: Element, side: 'left' | 'right'): string {
   }
 }
 
-function powerCircuit(input: BucketInput, d: (n: string) => string, nextWire: () => string, dev: (tag: string, description: string) => string): PowerCircuit {
+function powerCircuit(
+  input: BucketInput,
+  d: (n: string) => string,
+  nextWire: () => string,
+  dev: (tag: string, description: string) => string,
+): PowerCircuit {
   const s = input.selection;
   const t = s.starter.type;
   const poles = s.supply === 'ac3' ? 3 : s.supply === 'ac1' && s.volts <= 120 ? 1 : 2;
-  const lines = s.supply === 'ac3' ? ['1L1', '1L2', '1L3'] : s.supply === 'dc' && t !== 'dc-drive' ? ['DC+', 'DC−'] : poles === 1 ? ['1L1', 'N'] : ['1L1', '1L2'];
+  const lines =
+    s.supply === 'ac3'
+      ? ['1L1', '1L2', '1L3']
+      : s.supply === 'dc' && t !== 'dc-drive'
+        ? ['DC+', 'DC−']
+        : poles === 1
+          ? ['1L1', 'N']
+          : ['1L1', '1L2'];
   const n = t === 'dc-drive' ? 3 : lines.length;
   const inLines = t === 'dc-drive' ? ['1L1', '1L2', '1L3'] : lines;
   const wires = (k = n) => Array.from({ length: k }, nextWire);
   const head: PowerBand[] = [];
   const scpd = s.scpd;
   const scpdText = `${scpd.ratingAmps} A`;
-  if (scpd.type === 'inverse-time-breaker') head.push({ kind: 'cb', device: dev(d('CB'), `Inverse-time breaker ${scpdText}, ${poles}-pole`), label: `${scpdText}`, wires: wires() });
-  else if (scpd.type === 'instantaneous-trip-breaker') head.push({ kind: 'mcp', device: dev(d('MCP'), `Motor circuit protector, trip ≤ ${scpdText}`), label: `≤ ${scpdText}`, wires: wires() });
-  else head.push({ kind: 'fuse', device: dev(d('FU'), `${scpd.type === 'dual-element-fuse' ? 'Dual-element' : 'Non-time-delay'} fuses ${scpdText}`), label: scpdText, wires: wires() });
+  if (scpd.type === 'inverse-time-breaker')
+    head.push({
+      kind: 'cb',
+      device: dev(d('CB'), `Inverse-time breaker ${scpdText}, ${poles}-pole`),
+      label: `${scpdText}`,
+      wires: wires(),
+    });
+  else if (scpd.type === 'instantaneous-trip-breaker')
+    head.push({
+      kind: 'mcp',
+      device: dev(d('MCP'), `Motor circuit protector, trip ≤ ${scpdText}`),
+      label: `≤ ${scpdText}`,
+      wires: wires(),
+    });
+  else
+    head.push({
+      kind: 'fuse',
+      device: dev(d('FU'), `${scpd.type === 'dual-element-fuse' ? 'Dual-element' : 'Non-time-delay'} fuses ${scpdText}`),
+      label: scpdText,
+      wires: wires(),
+    });
   if (hasLine(input.bom, 'phase-monitor-relay')) head.push({ kind: 'pmr', device: d('PMR'), label: 'monitors', wires: [] });
   const ol = (name = 'OL'): PowerBand => ({ kind: 'ol', device: d(name), label: `class ${s.overload.tripClass}`, wires: wires() });
   const contactor = (name: string, label: string): PowerBand => ({ kind: 'contactor', device: d(name), label, wires: wires() });
@@ -473,11 +692,18 @@ function powerCircuit(input: BucketInput, d: (n: string) => string, nextWire: ()
       if (t === 'FVR') {
         const f = contactor('F', 'F');
         // the reverse contactor's outputs are the forward contactor's: one node, one number
-        split = { left: { device: d('F'), bands: [f] }, right: { device: d('R'), bands: [{ kind: 'contactor', device: d('R'), label: 'R', wires: f.wires }] }, rejoin: true, swap: true, interlock: true };
+        split = {
+          left: { device: d('F'), bands: [f] },
+          right: { device: d('R'), bands: [{ kind: 'contactor', device: d('R'), label: 'R', wires: f.wires }] },
+          rejoin: true,
+          swap: true,
+          interlock: true,
+        };
         tail = [...(relay ? [ol()] : [])];
         motorLeads = leadNames();
         tail.push(terms(motorLeads));
-        if (s.supply === 'ac1') extras.push('Single-phase reversal: interchange the start winding leads T5 and T8 (see the connection card), not the line.');
+        if (s.supply === 'ac1')
+          extras.push('Single-phase reversal: interchange the start winding leads T5 and T8 (see the connection card), not the line.');
       } else {
         split = {
           left: { device: d('FM'), bands: [contactor('FM', 'FM'), ...(relay ? [ol('OLF')] : []), terms(['T11', 'T12', 'T13'])] },
@@ -493,13 +719,22 @@ function powerCircuit(input: BucketInput, d: (n: string) => string, nextWire: ()
     case 'wye-delta':
       split = {
         left: { device: d('M'), bands: [contactor('M', 'M'), ...(relay ? [ol()] : []), terms(['T1', 'T2', 'T3'])] },
-        right: { device: d('D'), bands: [contactor('D', 'D'), { kind: 'star', device: d('S'), label: `mech. interlocked with ${d('D')}`, wires: wires(1) }, terms(['T6', 'T4', 'T5'])] },
+        right: {
+          device: d('D'),
+          bands: [
+            contactor('D', 'D'),
+            { kind: 'star', device: d('S'), label: `mech. interlocked with ${d('D')}`, wires: wires(1) },
+            terms(['T6', 'T4', 'T5']),
+          ],
+        },
         rejoin: false,
         swap: false,
         interlock: false,
       };
       motorLeads = ['T1', 'T2', 'T3', 'T6', 'T4', 'T5'];
-      extras.push('Delta contactor D closes L1–T6, L2–T4, L3–T5; star contactor S joins T4-T5-T6 (NEMA MG 1 lead markings). The overload relay in the line leads carries FLA/√3 in the delta (set at the relay’s dial as the protection card says).');
+      extras.push(
+        'Delta contactor D closes L1–T6, L2–T4, L3–T5; star contactor S joins T4-T5-T6 (NEMA MG 1 lead markings). The overload relay in the line leads carries FLA/√3 in the delta (set at the relay’s dial as the protection card says).',
+      );
       break;
     case 'part-winding':
       split = {
@@ -513,13 +748,28 @@ function powerCircuit(input: BucketInput, d: (n: string) => string, nextWire: ()
       extras.push('Both contactors close in the same phase order; T4-T5-T6 joined in the motor box.');
       break;
     case 'RVSS':
-      tail = [{ kind: 'sst', device: d('SST'), label: s.softStarter?.insideDelta ? 'inside delta' : 'in line', wires: wires(), marks: ['T1', 'T2', 'T3'] }, ...(relay ? [ol()] : [])];
+      tail = [
+        {
+          kind: 'sst',
+          device: d('SST'),
+          label: s.softStarter?.insideDelta ? 'inside delta' : 'in line',
+          wires: wires(),
+          marks: ['T1', 'T2', 'T3'],
+        },
+        ...(relay ? [ol()] : []),
+      ];
       motorLeads = leadNames();
       tail.push(terms(motorLeads));
       break;
     case 'VFD':
       tail = [{ kind: 'vfd', device: d('VFD'), label: 'L1 L2 L3 → U V W', wires: wires(), marks: ['U', 'V', 'W'] }];
-      if (s.vfd && s.vfd.outputFilter !== 'none') tail.push({ kind: 'filter', device: dev(d('FLT'), s.vfd.outputFilter === 'dv-dt' ? 'dV/dt output filter' : 'Sine-wave output filter'), label: s.vfd.outputFilter, wires: wires() });
+      if (s.vfd && s.vfd.outputFilter !== 'none')
+        tail.push({
+          kind: 'filter',
+          device: dev(d('FLT'), s.vfd.outputFilter === 'dv-dt' ? 'dV/dt output filter' : 'Sine-wave output filter'),
+          label: s.vfd.outputFilter,
+          wires: wires(),
+        });
       if (relay) tail.push(ol());
       motorLeads = leadNames();
       tail.push(terms(motorLeads));
@@ -530,7 +780,15 @@ function powerCircuit(input: BucketInput, d: (n: string) => string, nextWire: ()
       tail.push(terms(motorLeads));
       break;
     default: // dc-armature-resistance
-      tail = [{ kind: 'dc-starter', device: d('DCS'), label: s.starter.reversingContactors ? 'AF / AR, resistors, OL' : 'A, resistors, OL', wires: wires(), marks: ['A+', 'A−'] }];
+      tail = [
+        {
+          kind: 'dc-starter',
+          device: d('DCS'),
+          label: s.starter.reversingContactors ? 'AF / AR, resistors, OL' : 'A, resistors, OL',
+          wires: wires(),
+          marks: ['A+', 'A−'],
+        },
+      ];
       motorLeads = leadNames();
       tail.push(terms(motorLeads));
       break;
@@ -540,11 +798,17 @@ function powerCircuit(input: BucketInput, d: (n: string) => string, nextWire: ()
       motorLeads = [...motorLeads, 'F1', 'F2'];
       const last = [...tail].reverse().find((x) => x.kind === 'terminals');
       if (last) last.marks = [...(last.marks ?? []), 'F1', 'F2'];
-      extras.push(`Shunt field F1–F2 fed from the ${t === 'dc-drive' ? 'drive’s field supply' : 'field supply'}${s.dc.fieldLossProtection ? ', through the field-loss relay FL' : ''}.`);
+      extras.push(
+        `Shunt field F1–F2 fed from the ${t === 'dc-drive' ? 'drive’s field supply' : 'field supply'}${s.dc.fieldLossProtection ? ', through the field-loss relay FL' : ''}.`,
+      );
     }
     if (s.dc.dynamicBraking) dev(d('DB'), 'Dynamic braking resistor');
-    if (t === 'dc-armature-resistance' && s.starter.reversingContactors) extras.push('Reversing contactors AF / AR: check that the DC starter provides them; the bill of materials lists the starter only.');
-    if (s.dc.dynamicBraking) extras.push(`Dynamic braking: resistor ${d('DB')} across the armature through a normally closed armature contact (closes when the armature contactor opens).`);
+    if (t === 'dc-armature-resistance' && s.starter.reversingContactors)
+      extras.push('Reversing contactors AF / AR: check that the DC starter provides them; the bill of materials lists the starter only.');
+    if (s.dc.dynamicBraking)
+      extras.push(
+        `Dynamic braking: resistor ${d('DB')} across the armature through a normally closed armature contact (closes when the armature contactor opens).`,
+      );
     if (s.dc.field === 'series' || s.dc.field === 'compound') extras.push('Never run a DC series motor unloaded: it runs away.');
   }
   // wire numbers through the terminal strip to the motor: a wire keeps its number through terminals
@@ -567,5 +831,13 @@ function powerCircuit(input: BucketInput, d: (n: string) => string, nextWire: ()
     const tb = tail.find((x) => x.kind === 'terminals');
     if (tb && s.dc && s.dc.field !== 'series') tb.wires = [...out.slice(0, 2), nextWire(), nextWire()];
   }
-  return { lines: inLines, head, split, tail, motorLeads, extras, motorLabel: `${s.tag} ${s.hp !== null ? `${s.hp} hp` : ''} ${s.volts} V`.trim() };
+  return {
+    lines: inLines,
+    head,
+    split,
+    tail,
+    motorLeads,
+    extras,
+    motorLabel: `${s.tag} ${s.hp !== null ? `${s.hp} hp` : ''} ${s.volts} V`.trim(),
+  };
 }

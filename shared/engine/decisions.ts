@@ -7,7 +7,17 @@ import { z } from 'zod';
 import type { StarterType } from '../schemas/selection';
 import { ENCLOSURE_TYPES } from '../standards/nema-250-enclosure-types';
 
-export const STARTER_TYPES = ['FVNR', 'FVR', 'RVSS', 'VFD', 'wye-delta', 'part-winding', 'two-speed', 'dc-armature-resistance', 'dc-drive'] as const;
+export const STARTER_TYPES = [
+  'FVNR',
+  'FVR',
+  'RVSS',
+  'VFD',
+  'wye-delta',
+  'part-winding',
+  'two-speed',
+  'dc-armature-resistance',
+  'dc-drive',
+] as const;
 
 export const DECISION_SCHEMAS = {
   'starter.type': z.enum(STARTER_TYPES),
@@ -45,12 +55,36 @@ export function isDecisionKey(key: string): key is DecisionKey {
  * leaves one undecided (reported as an error on the load, never silently).
  */
 export const REQUIRED_DECISIONS: Record<'ac' | 'dc', Partial<Decisions>> = {
-  ac: { 'starter.type': 'FVNR', 'starter.nemaDuty': 'normal', 'starter.iecCategory': 'AC-3', 'overload.tripClass': 10, 'enclosure.nemaType': '12' },
+  ac: {
+    'starter.type': 'FVNR',
+    'starter.nemaDuty': 'normal',
+    'starter.iecCategory': 'AC-3',
+    'overload.tripClass': 10,
+    'enclosure.nemaType': '12',
+  },
   dc: { 'starter.type': 'FVNR', 'overload.tripClass': 10, 'enclosure.nemaType': '12' },
 };
 
 /** The value a result carries for a decision no rule made where the decision is not required. */
-export const UNDECIDED: Required<Pick<Decisions, 'vfd.duty' | 'vfd.inverterDutyMotor' | 'vfd.outputFilter' | 'softStarter.bypass' | 'softStarter.insideDelta' | 'dc.fieldLossProtection' | 'dc.dynamicBraking' | 'starter.reversingContactors' | 'starter.interlock' | 'overload.providedByDrive' | 'relays.phaseLoss' | 'relays.phaseReversal' | 'relays.phaseLossByOverload' | 'enclosure.flagForEngineer'>> = {
+export const UNDECIDED: Required<
+  Pick<
+    Decisions,
+    | 'vfd.duty'
+    | 'vfd.inverterDutyMotor'
+    | 'vfd.outputFilter'
+    | 'softStarter.bypass'
+    | 'softStarter.insideDelta'
+    | 'dc.fieldLossProtection'
+    | 'dc.dynamicBraking'
+    | 'starter.reversingContactors'
+    | 'starter.interlock'
+    | 'overload.providedByDrive'
+    | 'relays.phaseLoss'
+    | 'relays.phaseReversal'
+    | 'relays.phaseLossByOverload'
+    | 'enclosure.flagForEngineer'
+  >
+> = {
   'vfd.duty': 'heavy',
   'vfd.inverterDutyMotor': false,
   'vfd.outputFilter': 'none',
@@ -77,7 +111,12 @@ export const STARTER_NEEDS: Record<StarterType, { ac: boolean; leads?: readonly 
   FVR: { ac: true },
   RVSS: { ac: true },
   VFD: { ac: true },
-  'wye-delta': { ac: true, leads: [6, 12], connection: 'delta', error: 'wye-delta starting needs a six- or twelve-lead motor wound to run in delta' },
+  'wye-delta': {
+    ac: true,
+    leads: [6, 12],
+    connection: 'delta',
+    error: 'wye-delta starting needs a six- or twelve-lead motor wound to run in delta',
+  },
   'part-winding': { ac: true },
   'two-speed': { ac: true },
   'dc-armature-resistance': { ac: false },

@@ -9,7 +9,12 @@ import type { LoadSelection, SelectionOutput } from '../schemas/selection';
 import type { CodeEdition } from '../standards/code-edition';
 import { nominalSystemVolts } from '../standards/nominal-system-voltages';
 
-export function panelRollupOf(supply: Supply, loads: ReadonlyArray<Load>, results: ReadonlyArray<LoadSelection>, edition: CodeEdition): SelectionOutput['panel'] {
+export function panelRollupOf(
+  supply: Supply,
+  loads: ReadonlyArray<Load>,
+  results: ReadonlyArray<LoadSelection>,
+  edition: CodeEdition,
+): SelectionOutput['panel'] {
   const notes: string[] = [];
   const errors: string[] = [];
   const branches: FeederBranch[] = [];
@@ -32,13 +37,23 @@ export function panelRollupOf(supply: Supply, loads: ReadonlyArray<Load>, result
       // 430.62(A): an instantaneous-trip branch counts at the Table 430.52 % of the feeder device type
       const p = branchProtection({ flcAmps: r.flcAmps, type: supply.feeder.ocpdType, motor: motorKind(load) }, edition);
       deviceAmps = p.ratingAmps;
-      notes.push(`${r.tag}: instantaneous-trip branch counted at ${p.maxPercent} % (${supply.feeder.ocpdType}) = ${p.ratingAmps} A per 430.62(A)`);
+      notes.push(
+        `${r.tag}: instantaneous-trip branch counted at ${p.maxPercent} % (${supply.feeder.ocpdType}) = ${p.ratingAmps} A per 430.62(A)`,
+      );
     }
     branches.push({ tag: r.tag, flcAmps: r.flcAmps, branchDeviceAmps: deviceAmps });
   });
   const os = otherSources(supply, loads, results, edition);
   const f = feederRollup(
-    { branches: [...branches, ...os.branches], otherLoads: os.otherLoads, material: supply.feeder.material, tempRatingC: supply.feeder.tempRatingC, ambientC: supply.ambientC, ocpdFamily: feederFamily, terminationsListed75C: supply.terminationsListed75C !== false },
+    {
+      branches: [...branches, ...os.branches],
+      otherLoads: os.otherLoads,
+      material: supply.feeder.material,
+      tempRatingC: supply.feeder.tempRatingC,
+      ambientC: supply.ambientC,
+      ocpdFamily: feederFamily,
+      terminationsListed75C: supply.terminationsListed75C !== false,
+    },
     edition,
   );
   return {

@@ -14,7 +14,18 @@ import { RuleFileError } from '../errors';
 import { DECISION_SCHEMAS, isDecisionKey } from './decisions';
 import { FACT_SCHEMAS, isFactName } from './facts';
 
-export const OPERATORS = ['equal', 'notEqual', 'lessThan', 'lessThanInclusive', 'greaterThan', 'greaterThanInclusive', 'in', 'notIn', 'contains', 'doesNotContain'] as const;
+export const OPERATORS = [
+  'equal',
+  'notEqual',
+  'lessThan',
+  'lessThanInclusive',
+  'greaterThan',
+  'greaterThanInclusive',
+  'in',
+  'notIn',
+  'contains',
+  'doesNotContain',
+] as const;
 type Operator = (typeof OPERATORS)[number];
 
 const scalar = z.union([z.string(), z.number(), z.boolean(), z.null()]);

@@ -62,7 +62,14 @@ export function ruleSets(rules: ReadonlyArray<RuleFile>): RuleSets {
     if (!engine) {
       engine = new Engine([], { allowUndefinedFacts: false, allowUndefinedConditions: false, replaceFactsInEventParams: false });
       // every rule at one engine priority: a single pass; the rule file's priority decides conflicts (decisions.ts)
-      for (const r of inPlay) engine.addRule({ name: r.id, priority: 1, conditions: r.conditions as unknown as TopLevelCondition /* cast: the rule-file schema checks the conditions; json-rules-engine's type is stricter than its runtime */, event: r.event });
+      for (const r of inPlay)
+        engine.addRule({
+          name: r.id,
+          priority: 1,
+          conditions:
+            r.conditions as unknown as TopLevelCondition /* cast: the rule-file schema checks the conditions; json-rules-engine's type is stricter than its runtime */,
+          event: r.event,
+        });
       engines.set(key, engine);
     }
     return engine;

@@ -9,7 +9,16 @@
 
 import { ValidationError, zodIssues } from '../errors';
 import { flcRefusal } from '../calc/flc';
-import { LoadSchema, SelectionInputSchema, SupplySchema, type Load, type LoadInput, type SelectionInput, type Supply, type SupplyInput } from '../schemas/load';
+import {
+  LoadSchema,
+  SelectionInputSchema,
+  SupplySchema,
+  type Load,
+  type LoadInput,
+  type SelectionInput,
+  type Supply,
+  type SupplyInput,
+} from '../schemas/load';
 import type { LoadSelection, SelectionOutput } from '../schemas/selection';
 import { DEFAULT_CODE_EDITION, type CodeEdition } from '../standards/code-edition';
 import { buildFacts } from './facts';
@@ -55,7 +64,17 @@ export interface Selector {
   panelRollup(supply: SupplyInput, loads: ReadonlyArray<LoadInput>, results: ReadonlyArray<LoadSelection>): SelectionOutput['panel'];
 }
 
-function parseOrThrow<T>(schema: { safeParse(v: unknown): { success: true; data: T } | { success: false; error: { issues: ReadonlyArray<{ path: ReadonlyArray<PropertyKey>; message: string }> } } }, value: unknown, prefix: string): T {
+function parseOrThrow<T>(
+  schema: {
+    safeParse(
+      v: unknown,
+    ):
+      | { success: true; data: T }
+      | { success: false; error: { issues: ReadonlyArray<{ path: ReadonlyArray<PropertyKey>; message: string }> } };
+  },
+  value: unknown,
+  prefix: string,
+): T {
   const r = schema.safeParse(value);
   if (r.success) return r.data;
   const issues = zodIssues(r.error.issues).map((i) => ({ ...i, path: prefix ? (i.path ? `${prefix}.${i.path}` : prefix) : i.path }));
@@ -70,7 +89,10 @@ function refuseUnsizable(loads: ReadonlyArray<Load>, pathOf: (i: number, field: 
   });
   if (issues.length === 0) return;
   const first = issues[0] as { path: string; message: string };
-  const message = issues.length === 1 ? `This motor cannot be sized: ${first.message}` : `${issues.length} motors cannot be sized: ${issues.map((i) => `${i.path}: ${i.message}`).join('; ')}`;
+  const message =
+    issues.length === 1
+      ? `This motor cannot be sized: ${first.message}`
+      : `${issues.length} motors cannot be sized: ${issues.map((i) => `${i.path}: ${i.message}`).join('; ')}`;
   throw new ValidationError(message, issues);
 }
 
@@ -131,7 +153,11 @@ export function createSelector(ruleFiles: ReadonlyArray<RuleFileInput>, options:
     return { results, panel, codeEdition: `NEC ${edition}` };
   }
 
-  function panelRollup(supply: SupplyInput, loads: ReadonlyArray<LoadInput>, results: ReadonlyArray<LoadSelection>): SelectionOutput['panel'] {
+  function panelRollup(
+    supply: SupplyInput,
+    loads: ReadonlyArray<LoadInput>,
+    results: ReadonlyArray<LoadSelection>,
+  ): SelectionOutput['panel'] {
     const s = parseOrThrow(SupplySchema, supply, 'supply');
     const parsed = loads.map((l, i) => parseOrThrow(LoadSchema, l, `loads[${i}]`));
     return panelRollupOf(s, parsed, results, edition);

@@ -1,6 +1,16 @@
 // The bill-of-materials line: its bucket and category, the requirement it was matched against, its totals.
 import { z } from 'zod';
-import { CATEGORY_IDS, CategorySchema, FuseClassSchema, HpVoltsSchema, nonNegative, PartCodeSchema, positive, UnitSchema, WireSizeSchema } from './catalogue-items';
+import {
+  CATEGORY_IDS,
+  CategorySchema,
+  FuseClassSchema,
+  HpVoltsSchema,
+  nonNegative,
+  PartCodeSchema,
+  positive,
+  UnitSchema,
+  WireSizeSchema,
+} from './catalogue-items';
 
 /** Bucket name of the panel's own items (enclosure, main, transformer …). */
 export const PANEL_BUCKET = '(panel)';

@@ -40,9 +40,10 @@ export const CATEGORIES = [
 export type Category = (typeof CATEGORIES)[number]['id'];
 export const CATEGORY_IDS = CATEGORIES.map((c) => c.id) as [Category, ...Category[]];
 export const CategorySchema = z.enum(CATEGORY_IDS);
-export const CATEGORY_LABELS: Record<Category, string> = Object.fromEntries(
-  CATEGORIES.map((c) => [c.id, c.label]),
-) as Record<Category, string>;
+export const CATEGORY_LABELS: Record<Category, string> = Object.fromEntries(CATEGORIES.map((c) => [c.id, c.label])) as Record<
+  Category,
+  string
+>;
 
 /** NEMA ICS 2 starter sizes in ascending order. */
 export const NEMA_SIZES = ['00', '0', '1', '2', '3', '4', '5', '6', '7', '8', '9'] as const;
@@ -58,8 +59,28 @@ export const HpVoltsSchema = z.enum(HP_VOLTS);
 
 /** Conductor sizes, smallest first: AWG then kcmil. */
 export const WIRE_SIZES = [
-  '18', '16', '14', '12', '10', '8', '6', '4', '3', '2', '1', '1/0', '2/0', '3/0', '4/0',
-  '250', '300', '350', '400', '500', '600', '750',
+  '18',
+  '16',
+  '14',
+  '12',
+  '10',
+  '8',
+  '6',
+  '4',
+  '3',
+  '2',
+  '1',
+  '1/0',
+  '2/0',
+  '3/0',
+  '4/0',
+  '250',
+  '300',
+  '350',
+  '400',
+  '500',
+  '600',
+  '750',
 ] as const;
 export const WireSizeSchema = z.enum(WIRE_SIZES);
 
@@ -93,7 +114,10 @@ export const RatingsSchema = z
     /** adjustable setting range, A (overload relays, MMPs, motor circuit protector instantaneous trip) */
     settingMinAmps: positive.optional(),
     settingMaxAmps: positive.optional(),
-    tripClasses: z.array(z.union([z.literal(10), z.literal(20), z.literal(30)])).min(1).optional(),
+    tripClasses: z
+      .array(z.union([z.literal(10), z.literal(20), z.literal(30)]))
+      .min(1)
+      .optional(),
     electronic: z.boolean().optional(),
     detectsPhaseLoss: z.boolean().optional(),
     detectsPhaseReversal: z.boolean().optional(),
@@ -176,9 +200,7 @@ export const UNITS = ['ea', 'ft'] as const;
 export const UnitSchema = z.enum(UNITS);
 
 /** Part code: upper-case letters, digits, hyphens, e.g. PW-CN-N1-120 (see catalog/README.md). */
-export const PartCodeSchema = z
-  .string()
-  .regex(/^[A-Z0-9][A-Z0-9-]{2,39}$/, 'part code: 3–40 upper-case letters, digits or hyphens');
+export const PartCodeSchema = z.string().regex(/^[A-Z0-9][A-Z0-9-]{2,39}$/, 'part code: 3–40 upper-case letters, digits or hyphens');
 
 /** The item's fields without the cross-field checks (for .partial()/.pick() in request schemas); validate with CatalogueItemSchema. */
 export const CatalogueItemBaseSchema = z
@@ -203,26 +225,26 @@ export const CatalogueItemBaseSchema = z
   .strict();
 
 export const CatalogueItemSchema = CatalogueItemBaseSchema.superRefine((item, ctx) => {
-    for (const key of REQUIRED_RATINGS[item.category]) {
-      if (item.ratings[key] === undefined) {
-        ctx.addIssue({
-          code: 'custom',
-          path: ['ratings', key],
-          message: `${CATEGORY_LABELS[item.category]} need a rating: ${RATING_LABELS[key].toLowerCase()}`,
-        });
-      }
+  for (const key of REQUIRED_RATINGS[item.category]) {
+    if (item.ratings[key] === undefined) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['ratings', key],
+        message: `${CATEGORY_LABELS[item.category]} need a rating: ${RATING_LABELS[key].toLowerCase()}`,
+      });
     }
-    const r = item.ratings;
-    if (r.settingMinAmps !== undefined && r.settingMaxAmps !== undefined && r.settingMinAmps > r.settingMaxAmps) {
-      ctx.addIssue({ code: 'custom', path: ['ratings', 'settingMinAmps'], message: 'setting range minimum is above its maximum' });
-    }
-    if (r.voltsMin !== undefined && r.volts !== undefined && r.voltsMin > r.volts) {
-      ctx.addIssue({ code: 'custom', path: ['ratings', 'voltsMin'], message: 'voltsMin is above volts' });
-    }
-    if (r.wireMin && r.wireMax && WIRE_SIZES.indexOf(r.wireMin) > WIRE_SIZES.indexOf(r.wireMax)) {
-      ctx.addIssue({ code: 'custom', path: ['ratings', 'wireMin'], message: 'wireMin is larger than wireMax' });
-    }
-  });
+  }
+  const r = item.ratings;
+  if (r.settingMinAmps !== undefined && r.settingMaxAmps !== undefined && r.settingMinAmps > r.settingMaxAmps) {
+    ctx.addIssue({ code: 'custom', path: ['ratings', 'settingMinAmps'], message: 'setting range minimum is above its maximum' });
+  }
+  if (r.voltsMin !== undefined && r.volts !== undefined && r.voltsMin > r.volts) {
+    ctx.addIssue({ code: 'custom', path: ['ratings', 'voltsMin'], message: 'voltsMin is above volts' });
+  }
+  if (r.wireMin && r.wireMax && WIRE_SIZES.indexOf(r.wireMin) > WIRE_SIZES.indexOf(r.wireMax)) {
+    ctx.addIssue({ code: 'custom', path: ['ratings', 'wireMin'], message: 'wireMin is larger than wireMax' });
+  }
+});
 export type CatalogueItem = z.output<typeof CatalogueItemSchema>;
 export type CatalogueItemInput = z.input<typeof CatalogueItemSchema>;
 

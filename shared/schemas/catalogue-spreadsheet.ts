@@ -8,7 +8,10 @@ export interface CatalogueColumn {
   header: string;
   kind: ColumnKind;
   /** where the value goes in a CatalogueItem */
-  target: { top: Exclude<keyof CatalogueItem, 'ratings'> } | { rating: Exclude<keyof Ratings, 'hpByVolts'> } | { hp: (typeof HP_VOLTS)[number] };
+  target:
+    | { top: Exclude<keyof CatalogueItem, 'ratings'> }
+    | { rating: Exclude<keyof Ratings, 'hpByVolts'> }
+    | { hp: (typeof HP_VOLTS)[number] };
   required?: boolean;
   width?: number;
 }
@@ -119,13 +122,22 @@ function parseCell(raw: string | number | boolean | null | undefined, kind: Colu
       return { error: `"${String(raw)}" is not yes/no (true/false)` };
     }
     case 'numberList': {
-      const parts = String(raw).split(LIST_SEPARATOR).map((p) => p.trim()).filter(Boolean);
+      const parts = String(raw)
+        .split(LIST_SEPARATOR)
+        .map((p) => p.trim())
+        .filter(Boolean);
       const nums = parts.map(Number);
-      if (nums.some((n) => !Number.isFinite(n))) return { error: `"${String(raw)}" is not a list of numbers separated by "${LIST_SEPARATOR}"` };
+      if (nums.some((n) => !Number.isFinite(n)))
+        return { error: `"${String(raw)}" is not a list of numbers separated by "${LIST_SEPARATOR}"` };
       return { value: nums };
     }
     case 'stringList':
-      return { value: String(raw).split(LIST_SEPARATOR).map((p) => p.trim()).filter(Boolean) };
+      return {
+        value: String(raw)
+          .split(LIST_SEPARATOR)
+          .map((p) => p.trim())
+          .filter(Boolean),
+      };
   }
 }
 

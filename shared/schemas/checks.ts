@@ -22,7 +22,15 @@ export interface SccrCheck extends SccrResult {
 
 export interface HeatCheck {
   result: HeatResult | null;
-  enclosure: null | { code: string | null; description: string; heightMm: number; widthMm: number; depthMm: number; sections: number; mounting: EnclosureMounting };
+  enclosure: null | {
+    code: string | null;
+    description: string;
+    heightMm: number;
+    widthMm: number;
+    depthMm: number;
+    sections: number;
+    mounting: EnclosureMounting;
+  };
   reason: string | null;
 }
 
@@ -51,7 +59,19 @@ export interface MotorConnectionCard {
 
 export interface PanelChecks {
   panel: { id: number; name: string; mounting: string; enclosureType: string; revision: string };
-  job: { id: number; number: string; name: string; customer: string; site: string; supplyVolts: number; supplyPhases: number; supplyHz: number; availableFaultKa: number; ambientC: number; codeEdition: string };
+  job: {
+    id: number;
+    number: string;
+    name: string;
+    customer: string;
+    site: string;
+    supplyVolts: number;
+    supplyPhases: number;
+    supplyHz: number;
+    availableFaultKa: number;
+    ambientC: number;
+    codeEdition: string;
+  };
   bom: { source: 'stored' | 'in-memory'; stale: boolean; unmatchedLines: number; note: string | null };
   /** motors left out of the checks because their selection has errors */
   motorsWithErrors: string[];

@@ -29,7 +29,13 @@ export type CombinationInput = z.input<typeof CombinationInputSchema>;
 export type CombinationValues = z.output<typeof CombinationInputSchema>;
 
 export const CombinationUpdateSchema = z
-  .object({ componentCodes: fields.componentCodes, ratingKa: fields.ratingKa, maxVolts: fields.maxVolts, source: fields.source, active: fields.active })
+  .object({
+    componentCodes: fields.componentCodes,
+    ratingKa: fields.ratingKa,
+    maxVolts: fields.maxVolts,
+    source: fields.source,
+    active: fields.active,
+  })
   .partial()
   .extend({ version: versionSchema })
   .strict();

@@ -11,8 +11,14 @@ const jobFields = {
   customer: z.string().trim().max(200),
   site: z.string().trim().max(200),
   supplyVolts: z.coerce.number().int().min(100, 'At least 100 V').max(1000, 'At most 1000 V (NEC 409 covers up to 1000 V)'),
-  supplyPhases: z.coerce.number().int().refine((p) => p === 1 || p === 3, 'Single-phase (1) or three-phase (3)'),
-  supplyHz: z.coerce.number().int().refine((h) => h === 50 || h === 60, '50 or 60 Hz'),
+  supplyPhases: z.coerce
+    .number()
+    .int()
+    .refine((p) => p === 1 || p === 3, 'Single-phase (1) or three-phase (3)'),
+  supplyHz: z.coerce
+    .number()
+    .int()
+    .refine((h) => h === 50 || h === 60, '50 or 60 Hz'),
   availableFaultKa: z.coerce.number().min(0.1, 'At least 0.1 kA').max(200, 'At most 200 kA'),
   ambientC: z.coerce.number().min(-40).max(60, 'At most 60 °C'),
   voltageUnbalancePercent: z.coerce.number().min(0, 'At least 0 %').max(20, 'At most 20 %'),
@@ -67,7 +73,10 @@ export interface JobSummary {
 }
 
 /** The job fields the selection engine's supply is made of. */
-export type JobSupplyFields = Pick<JobSummary, 'supplyVolts' | 'supplyPhases' | 'supplyHz' | 'availableFaultKa' | 'ambientC' | 'voltageUnbalancePercent'> & {
+export type JobSupplyFields = Pick<
+  JobSummary,
+  'supplyVolts' | 'supplyPhases' | 'supplyHz' | 'availableFaultKa' | 'ambientC' | 'voltageUnbalancePercent'
+> & {
   /** the panel's answer (110.14(C)(1)(a)(3)); null or absent: not answered */
   terminationsListed75C?: boolean | null;
 };

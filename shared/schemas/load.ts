@@ -65,7 +65,13 @@ const LoadObject = z
     codeLetter: z.enum(CODE_LETTERS, { error: 'Use a NEC Table 430.7(B) code letter (A–V, no I, O, Q)' }).optional(),
     design: z.enum(['A', 'B', 'C', 'D']).optional(),
     energyEfficient: z.boolean().default(false),
-    poles: z.number().int().min(2).max(48).refine((p) => p % 2 === 0, 'The number of poles is even').optional(),
+    poles: z
+      .number()
+      .int()
+      .min(2)
+      .max(48)
+      .refine((p) => p % 2 === 0, 'The number of poles is even')
+      .optional(),
     rotor: z.enum(['squirrel-cage', 'wound-rotor']).default('squirrel-cage'),
     singlePhaseType: z.enum(['split-phase', 'capacitor-start', 'psc', 'two-value-capacitor']).optional(),
     dcField: z.enum(['shunt', 'series', 'compound']).optional(),
@@ -106,7 +112,9 @@ const LoadObject = z
     quickStop: z.boolean().default(false),
     /** control of the starter's coil: three-wire (stop/start with seal-in, no restart after a power loss),
      *  two-wire (a maintained contact from a remote controller, restarts by itself) or hand-off-auto */
-    controlScheme: z.enum(CONTROL_SCHEMES, { error: 'controlScheme must be "three-wire", "two-wire" or "hand-off-auto"' }).default('three-wire'),
+    controlScheme: z
+      .enum(CONTROL_SCHEMES, { error: 'controlScheme must be "three-wire", "two-wire" or "hand-off-auto"' })
+      .default('three-wire'),
     /** rated input current of the chosen drive, for its input conductors (430.122(A)) */
     driveInputAmps: positive('driveInputAmps').max(5000).optional(),
     /** 430.52(C)(1) Exception 2: a higher protective-device limit, only with a reason */
@@ -127,8 +135,10 @@ function crossCheck(l: LoadShape, ctx: z.RefinementCtx): void {
   if (l.hp === undefined && l.kw === undefined) issue('hp', 'Give the horsepower or the kW');
   if (l.hp !== undefined && l.kw !== undefined) issue('kw', 'Give the horsepower or the kW, not both');
   if (l.supply !== 'dc' && l.dcField !== undefined) issue('dcField', 'A DC field applies to DC motors only');
-  if (l.supply === 'dc' && l.singlePhaseType !== undefined) issue('singlePhaseType', 'A single-phase type applies to single-phase motors only');
-  if (l.supply === 'ac3' && l.singlePhaseType !== undefined) issue('singlePhaseType', 'A single-phase type applies to single-phase motors only');
+  if (l.supply === 'dc' && l.singlePhaseType !== undefined)
+    issue('singlePhaseType', 'A single-phase type applies to single-phase motors only');
+  if (l.supply === 'ac3' && l.singlePhaseType !== undefined)
+    issue('singlePhaseType', 'A single-phase type applies to single-phase motors only');
   if (l.supply !== 'ac3') {
     if (l.rotor === 'wound-rotor') issue('rotor', 'A wound rotor applies to three-phase motors only');
     if (l.design !== undefined) issue('design', 'NEMA design letters A–D apply to three-phase motors only');
@@ -143,7 +153,8 @@ function crossCheck(l: LoadShape, ctx: z.RefinementCtx): void {
     if (l.torque !== undefined) issue('torque', 'Load torque applies only to variable speed');
   }
   if (l.leads === 3 && l.connection !== undefined && l.insideDelta) issue('insideDelta', 'Inside-delta needs a six- or twelve-lead motor');
-  if (l.rotor === 'wound-rotor' && l.starterPreference !== undefined) issue('starterPreference', 'A reduced-voltage method applies to squirrel-cage motors');
+  if (l.rotor === 'wound-rotor' && l.starterPreference !== undefined)
+    issue('starterPreference', 'A reduced-voltage method applies to squirrel-cage motors');
 }
 
 /** The load fields without the cross-field checks, for forms that extend them (apply `loadCrossCheck` after). */

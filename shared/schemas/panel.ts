@@ -132,7 +132,9 @@ export const BulkEditSchema = z.object({
     .object({
       environment: z.string().optional(),
       scpdType: z.string().optional(),
-      conductor: z.object({ material: z.enum(['cu', 'al']), tempRatingC: z.union([z.literal(60), z.literal(75), z.literal(90)]) }).optional(),
+      conductor: z
+        .object({ material: z.enum(['cu', 'al']), tempRatingC: z.union([z.literal(60), z.literal(75), z.literal(90)]) })
+        .optional(),
       critical: z.boolean().optional(),
       reverseRotationHazard: z.boolean().optional(),
       inertia: z.string().optional(),
@@ -178,5 +180,10 @@ export interface RevisionSnapshot {
   bom: import('./catalogue').BomLine[];
   totals: { sell: number; materialCost: number; labourHours: number } & Record<string, unknown>;
   comment?: string;
-  sccr?: { panelSccrKa: number | null; availableFaultKa: number | null; verdict: string; acknowledged?: { finding: string; by: string; reason: string } | null };
+  sccr?: {
+    panelSccrKa: number | null;
+    availableFaultKa: number | null;
+    verdict: string;
+    acknowledged?: { finding: string; by: string; reason: string } | null;
+  };
 }

@@ -13,11 +13,7 @@ export type StarterType =
   | 'dc-armature-resistance'
   | 'dc-drive';
 
-export type ScpdType =
-  | 'inverse-time-breaker'
-  | 'instantaneous-trip-breaker'
-  | 'dual-element-fuse'
-  | 'non-time-delay-fuse';
+export type ScpdType = 'inverse-time-breaker' | 'instantaneous-trip-breaker' | 'dual-element-fuse' | 'non-time-delay-fuse';
 
 export type SupplyKind = 'ac3' | 'ac1' | 'dc';
 

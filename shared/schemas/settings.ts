@@ -25,7 +25,8 @@ export function drawingSchemeProblems(scheme: string): string[] {
       problems.push(`{${m[1]}} is not a known part: use {job}, {panel}, {rev} or {sheet}`);
       continue;
     }
-    if (pad !== undefined && (name !== 'sheet' || !/^[1-4]$/.test(pad))) problems.push(`{${m[1]}}: only the sheet takes a width, 1 to 4 digits, as in {sheet:2}`);
+    if (pad !== undefined && (name !== 'sheet' || !/^[1-4]$/.test(pad)))
+      problems.push(`{${m[1]}}: only the sheet takes a width, 1 to 4 digits, as in {sheet:2}`);
     found.add(name);
   }
   const rest = scheme.replace(TOKEN_RE, '');
@@ -57,7 +58,11 @@ export function drawingNumber(scheme: string, parts: DrawingNumberParts): string
 }
 
 const money = (max: number, what: string) =>
-  z.number({ error: `Enter the ${what} as a number` }).finite(`Enter the ${what} as a number`).min(0, `The ${what} cannot be negative`).max(max, `The ${what} is at most ${max}`);
+  z
+    .number({ error: `Enter the ${what} as a number` })
+    .finite(`Enter the ${what} as a number`)
+    .min(0, `The ${what} cannot be negative`)
+    .max(max, `The ${what} is at most ${max}`);
 
 /** The fields of the shop settings form (the same rules on the server). */
 export const ShopSettingsFields = z.object({

@@ -11,15 +11,53 @@ export type PilotFunction = 'start' | 'stop' | 'forward' | 'reverse' | 'fast' | 
 
 /** Door devices of each starter type's control scheme: [function, quantity] (common practice). */
 export const PILOT_DEVICES: Record<StarterType, ReadonlyArray<readonly [PilotFunction, number]>> = {
-  FVNR: [['start', 1], ['stop', 1], ['run-light', 1]],
-  FVR: [['forward', 1], ['reverse', 1], ['stop', 1], ['run-light', 2]],
-  'two-speed': [['fast', 1], ['slow', 1], ['stop', 1], ['run-light', 2]],
-  'wye-delta': [['start', 1], ['stop', 1], ['run-light', 1]],
-  'part-winding': [['start', 1], ['stop', 1], ['run-light', 1]],
-  RVSS: [['start', 1], ['stop', 1], ['run-light', 1]],
-  VFD: [['hand-off-auto', 1], ['run-light', 1], ['fault-light', 1]],
-  'dc-drive': [['hand-off-auto', 1], ['run-light', 1], ['fault-light', 1]],
-  'dc-armature-resistance': [['start', 1], ['stop', 1], ['run-light', 1]],
+  FVNR: [
+    ['start', 1],
+    ['stop', 1],
+    ['run-light', 1],
+  ],
+  FVR: [
+    ['forward', 1],
+    ['reverse', 1],
+    ['stop', 1],
+    ['run-light', 2],
+  ],
+  'two-speed': [
+    ['fast', 1],
+    ['slow', 1],
+    ['stop', 1],
+    ['run-light', 2],
+  ],
+  'wye-delta': [
+    ['start', 1],
+    ['stop', 1],
+    ['run-light', 1],
+  ],
+  'part-winding': [
+    ['start', 1],
+    ['stop', 1],
+    ['run-light', 1],
+  ],
+  RVSS: [
+    ['start', 1],
+    ['stop', 1],
+    ['run-light', 1],
+  ],
+  VFD: [
+    ['hand-off-auto', 1],
+    ['run-light', 1],
+    ['fault-light', 1],
+  ],
+  'dc-drive': [
+    ['hand-off-auto', 1],
+    ['run-light', 1],
+    ['fault-light', 1],
+  ],
+  'dc-armature-resistance': [
+    ['start', 1],
+    ['stop', 1],
+    ['run-light', 1],
+  ],
 };
 
 /** The catalogue kind of each door device. */

@@ -15,10 +15,30 @@ export type TempRating = 60 | 75 | 90;
 
 /** Sizes in ascending order. */
 export const SIZES = [
-  '14 AWG', '12 AWG', '10 AWG', '8 AWG', '6 AWG', '4 AWG', '3 AWG', '2 AWG', '1 AWG',
-  '1/0 AWG', '2/0 AWG', '3/0 AWG', '4/0 AWG',
-  '250 kcmil', '300 kcmil', '350 kcmil', '400 kcmil', '500 kcmil', '600 kcmil', '700 kcmil', '750 kcmil',
-  '800 kcmil', '900 kcmil', '1000 kcmil',
+  '14 AWG',
+  '12 AWG',
+  '10 AWG',
+  '8 AWG',
+  '6 AWG',
+  '4 AWG',
+  '3 AWG',
+  '2 AWG',
+  '1 AWG',
+  '1/0 AWG',
+  '2/0 AWG',
+  '3/0 AWG',
+  '4/0 AWG',
+  '250 kcmil',
+  '300 kcmil',
+  '350 kcmil',
+  '400 kcmil',
+  '500 kcmil',
+  '600 kcmil',
+  '700 kcmil',
+  '750 kcmil',
+  '800 kcmil',
+  '900 kcmil',
+  '1000 kcmil',
 ] as const;
 export type ConductorSize = (typeof SIZES)[number];
 

@@ -11,7 +11,15 @@ export const TABLE_430_247 = 'Table 430.247';
 export const COLUMNS_430_247 = [90, 120, 180, 240, 500, 550] as const;
 export type Column430247 = (typeof COLUMNS_430_247)[number];
 
-type Row = readonly [hp: number, a90: number | null, a120: number | null, a180: number | null, a240: number | null, a500: number | null, a550: number | null];
+type Row = readonly [
+  hp: number,
+  a90: number | null,
+  a120: number | null,
+  a180: number | null,
+  a240: number | null,
+  a500: number | null,
+  a550: number | null,
+];
 
 const _ = null;
 export const ROWS_430_247: readonly Row[] = [

@@ -14,7 +14,16 @@ export const TABLE_430_250 = 'Table 430.250';
 export const COLUMNS_430_250 = [115, 200, 208, 230, 460, 575, 2300] as const;
 export type Column430250 = (typeof COLUMNS_430_250)[number];
 
-type Row = readonly [hp: number, a115: number | null, a200: number | null, a208: number | null, a230: number | null, a460: number | null, a575: number | null, a2300: number | null];
+type Row = readonly [
+  hp: number,
+  a115: number | null,
+  a200: number | null,
+  a208: number | null,
+  a230: number | null,
+  a460: number | null,
+  a575: number | null,
+  a2300: number | null,
+];
 
 const _ = null;
 export const ROWS_430_250: readonly Row[] = [

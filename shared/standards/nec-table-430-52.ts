@@ -6,11 +6,7 @@ import { OutsideTableError } from '../errors';
 
 export const TABLE_430_52 = 'Table 430.52';
 
-export type ProtectiveDevice =
-  | 'non-time-delay-fuse'
-  | 'dual-element-fuse'
-  | 'instantaneous-trip-breaker'
-  | 'inverse-time-breaker';
+export type ProtectiveDevice = 'non-time-delay-fuse' | 'dual-element-fuse' | 'instantaneous-trip-breaker' | 'inverse-time-breaker';
 
 export type MotorKind =
   | 'single-phase'
@@ -22,9 +18,19 @@ export type MotorKind =
 const PERCENT: Record<MotorKind, Record<ProtectiveDevice, number>> = {
   'single-phase': { 'non-time-delay-fuse': 300, 'dual-element-fuse': 175, 'instantaneous-trip-breaker': 800, 'inverse-time-breaker': 250 },
   'squirrel-cage': { 'non-time-delay-fuse': 300, 'dual-element-fuse': 175, 'instantaneous-trip-breaker': 800, 'inverse-time-breaker': 250 },
-  'squirrel-cage-design-b-energy-efficient': { 'non-time-delay-fuse': 300, 'dual-element-fuse': 175, 'instantaneous-trip-breaker': 1100, 'inverse-time-breaker': 250 },
+  'squirrel-cage-design-b-energy-efficient': {
+    'non-time-delay-fuse': 300,
+    'dual-element-fuse': 175,
+    'instantaneous-trip-breaker': 1100,
+    'inverse-time-breaker': 250,
+  },
   'wound-rotor': { 'non-time-delay-fuse': 150, 'dual-element-fuse': 150, 'instantaneous-trip-breaker': 800, 'inverse-time-breaker': 150 },
-  'dc-constant-voltage': { 'non-time-delay-fuse': 150, 'dual-element-fuse': 150, 'instantaneous-trip-breaker': 250, 'inverse-time-breaker': 150 },
+  'dc-constant-voltage': {
+    'non-time-delay-fuse': 150,
+    'dual-element-fuse': 150,
+    'instantaneous-trip-breaker': 250,
+    'inverse-time-breaker': 150,
+  },
 };
 
 export function maxPercent430_52(motor: MotorKind, device: ProtectiveDevice): number {

@@ -57,7 +57,10 @@ export function controlConductorMaxAmps(size: string, material: ConductorMateria
   if (row) {
     const v = row[column];
     if (v === 'note-1') {
-      return { maxAmps: ampacity310_16(s, material, 60), basis: `NEC 2023 ${TABLE_430_72B}, ${CONTROL_COLUMN_WORDS[column]}, Note 1: ${label} at its ampacity (Table 310.16, 60 °C; from memory)` };
+      return {
+        maxAmps: ampacity310_16(s, material, 60),
+        basis: `NEC 2023 ${TABLE_430_72B}, ${CONTROL_COLUMN_WORDS[column]}, Note 1: ${label} at its ampacity (Table 310.16, 60 °C; from memory)`,
+      };
     }
     return { maxAmps: v, basis: `NEC 2023 ${TABLE_430_72B}, ${CONTROL_COLUMN_WORDS[column]}: ${label} ${v} A (from memory)` };
   }
@@ -70,10 +73,20 @@ export function controlConductorMaxAmps(size: string, material: ConductorMateria
     larger = false;
   }
   if (!larger) throw new OutsideTableError(TABLE_430_72B, `${label} is not in the table`);
-  if (column === 'A') return { maxAmps: ampacity310_16(s, material, 60), basis: `NEC 2023 ${TABLE_430_72B}, ${CONTROL_COLUMN_WORDS.A}, Note 1: ${label} at its ampacity (Table 310.16, 60 °C; from memory)` };
+  if (column === 'A')
+    return {
+      maxAmps: ampacity310_16(s, material, 60),
+      basis: `NEC 2023 ${TABLE_430_72B}, ${CONTROL_COLUMN_WORDS.A}, Note 1: ${label} at its ampacity (Table 310.16, 60 °C; from memory)`,
+    };
   if (column === 'C') {
     const a = ampacity310_16(s, material, 60) * 3;
-    return { maxAmps: a, basis: `NEC 2023 ${TABLE_430_72B}, ${CONTROL_COLUMN_WORDS.C}, Note 3: 300 % of the Table 310.16 60 °C ampacity of ${label} (from memory)` };
+    return {
+      maxAmps: a,
+      basis: `NEC 2023 ${TABLE_430_72B}, ${CONTROL_COLUMN_WORDS.C}, Note 3: 300 % of the Table 310.16 60 °C ampacity of ${label} (from memory)`,
+    };
   }
-  throw new OutsideTableError(TABLE_430_72B, `${label} in column B takes Note 2 (400 % of Table 310.17 at 60 °C), which this product does not carry`);
+  throw new OutsideTableError(
+    TABLE_430_72B,
+    `${label} in column B takes Note 2 (400 % of Table 310.17 at 60 °C), which this product does not carry`,
+  );
 }

@@ -28,8 +28,10 @@ export interface Limit450 {
 
 /** The primary device limit of Table 450.3(B) for a rated primary current. */
 export function primaryLimit(method: TransformerProtectionMethod, primaryAmps: number): Limit450 {
-  if (!(primaryAmps > 0) || !Number.isFinite(primaryAmps)) throw new OutsideTableError(TABLE_450_3B, `rated primary current ${primaryAmps} A is not a current`);
-  if (method === 'primary-and-secondary') return { percent: 250, nextHigherPermitted: false, row: 'primary and secondary protection, primary' };
+  if (!(primaryAmps > 0) || !Number.isFinite(primaryAmps))
+    throw new OutsideTableError(TABLE_450_3B, `rated primary current ${primaryAmps} A is not a current`);
+  if (method === 'primary-and-secondary')
+    return { percent: 250, nextHigherPermitted: false, row: 'primary and secondary protection, primary' };
   if (primaryAmps >= 9) return { percent: 125, nextHigherPermitted: true, row: 'primary only protection, currents of 9 A or more' };
   if (primaryAmps >= 2) return { percent: 167, nextHigherPermitted: false, row: 'primary only protection, currents less than 9 A' };
   return { percent: 300, nextHigherPermitted: false, row: 'primary only protection, currents less than 2 A' };
@@ -37,7 +39,8 @@ export function primaryLimit(method: TransformerProtectionMethod, primaryAmps: n
 
 /** The secondary device limit of Table 450.3(B) (only with primary-and-secondary protection). */
 export function secondaryLimit(secondaryAmps: number): Limit450 {
-  if (!(secondaryAmps > 0) || !Number.isFinite(secondaryAmps)) throw new OutsideTableError(TABLE_450_3B, `rated secondary current ${secondaryAmps} A is not a current`);
+  if (!(secondaryAmps > 0) || !Number.isFinite(secondaryAmps))
+    throw new OutsideTableError(TABLE_450_3B, `rated secondary current ${secondaryAmps} A is not a current`);
   if (secondaryAmps >= 9) return { percent: 125, nextHigherPermitted: true, row: 'secondary, currents of 9 A or more' };
   return { percent: 167, nextHigherPermitted: false, row: 'secondary, currents less than 9 A' };
 }

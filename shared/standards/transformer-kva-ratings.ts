@@ -14,6 +14,10 @@ export function nextStandardKva(kva: number, phases: 1 | 3): number {
   const list: readonly number[] = phases === 1 ? SINGLE_PHASE_KVA : THREE_PHASE_KVA;
   if (!(kva > 0) || !Number.isFinite(kva)) throw new OutsideTableError(TRANSFORMER_KVA_SOURCE, `${kva} kVA is not a load`);
   const r = list.find((v) => v >= kva - 1e-9);
-  if (r === undefined) throw new OutsideTableError(TRANSFORMER_KVA_SOURCE, `${round2(kva)} kVA is above the largest ${phases === 1 ? 'single' : 'three'}-phase rating listed (${list.at(-1)} kVA)`);
+  if (r === undefined)
+    throw new OutsideTableError(
+      TRANSFORMER_KVA_SOURCE,
+      `${round2(kva)} kVA is above the largest ${phases === 1 ? 'single' : 'three'}-phase rating listed (${list.at(-1)} kVA)`,
+    );
   return r;
 }

@@ -178,8 +178,7 @@ export function raiseByCurrentLimitingFeeder(
   }
   const ratingKa = Math.min(feeder.interruptingKa, lt.atProspectiveKa);
   if (ratingKa <= component.ratingKa) return keep('the feeder device would not raise the rating');
-  const i2tNote =
-    component.i2tWithstandA2s === undefined ? '; I²t not compared: no withstand I²t published for the component' : '';
+  const i2tNote = component.i2tWithstandA2s === undefined ? '; I²t not compared: no withstand I²t published for the component' : '';
   return {
     raised: true,
     ratingKa,

@@ -67,13 +67,23 @@ export async function api<T>(method: string, url: string, body?: unknown, init: 
   const isForm = typeof FormData !== 'undefined' && body instanceof FormData;
   if (body !== undefined && !isForm) headers['content-type'] = 'application/json';
   if (method !== 'GET') headers['x-csrf-token'] = await ensureCsrf();
-  let res = await fetch(url, { method, headers, credentials: 'same-origin', body: body === undefined ? undefined : isForm ? body : JSON.stringify(body) });
+  let res = await fetch(url, {
+    method,
+    headers,
+    credentials: 'same-origin',
+    body: body === undefined ? undefined : isForm ? body : JSON.stringify(body),
+  });
   if (res.status === 403 && method !== 'GET') {
     const err = await toError(res.clone());
     if (err.code === 'csrf_failed') {
       csrf = null;
       headers['x-csrf-token'] = await ensureCsrf();
-      res = await fetch(url, { method, headers, credentials: 'same-origin', body: body === undefined ? undefined : isForm ? body : JSON.stringify(body) });
+      res = await fetch(url, {
+        method,
+        headers,
+        credentials: 'same-origin',
+        body: body === undefined ? undefined : isForm ? body : JSON.stringify(body),
+      });
     }
   }
   if (!res.ok) throw await toError(res);

@@ -14,7 +14,8 @@ export function makeQueryClient() {
           if (isDatabaseUnavailable(err)) return count * (err.retryAfterSeconds ?? 5) * 1000 < DATABASE_RETRY_FOR_MS;
           return !(err instanceof ApiError && err.status < 500) && count < 2;
         },
-        retryDelay: (count, err) => (isDatabaseUnavailable(err) ? (err.retryAfterSeconds ?? 5) * 1000 : Math.min(1000 * 2 ** count, 30_000)),
+        retryDelay: (count, err) =>
+          isDatabaseUnavailable(err) ? (err.retryAfterSeconds ?? 5) * 1000 : Math.min(1000 * 2 ** count, 30_000),
         refetchOnWindowFocus: false,
       },
     },

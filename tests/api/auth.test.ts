@@ -20,8 +20,12 @@ describe('sign-in', () => {
 
   it('refuses a wrong password with 401 JSON and the same message as an unknown e-mail', async () => {
     const s = await anonymous();
-    const wrong = await send(s, 'post', '/api/auth/sign-in', { email: 'designer@copperline.test', password: 'not-the-password-9' }).expect(401);
-    const unknown = await send(s, 'post', '/api/auth/sign-in', { email: 'nobody@copperline.test', password: 'not-the-password-9' }).expect(401);
+    const wrong = await send(s, 'post', '/api/auth/sign-in', { email: 'designer@copperline.test', password: 'not-the-password-9' }).expect(
+      401,
+    );
+    const unknown = await send(s, 'post', '/api/auth/sign-in', { email: 'nobody@copperline.test', password: 'not-the-password-9' }).expect(
+      401,
+    );
     expect(wrong.body.error.code).toBe('unauthenticated');
     expect(unknown.body.error.message).toBe(wrong.body.error.message);
   });
@@ -33,7 +37,11 @@ describe('sign-in', () => {
     const before = sessionCookie(first);
     expect(before).toBeDefined();
     const u = demoUser('engineer');
-    const res = await agent.post('/api/auth/sign-in').set('x-csrf-token', first.body.token).send({ email: u.email, password: u.password }).expect(200);
+    const res = await agent
+      .post('/api/auth/sign-in')
+      .set('x-csrf-token', first.body.token)
+      .send({ email: u.email, password: u.password })
+      .expect(200);
     const after = sessionCookie(res);
     expect(after).toBeDefined();
     expect(after).not.toBe(before);

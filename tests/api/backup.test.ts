@@ -45,7 +45,14 @@ async function counts() {
 async function actorOf(s: Session): Promise<CurrentUser> {
   const me = await s.agent.get('/api/auth/me').expect(200);
   const u = (await findUserById(me.body.id))!;
-  return { id: u.id, organisationId: u.organisationId, organisationName: u.organisationName, email: u.email, name: u.name, roles: u.roles as Role[] };
+  return {
+    id: u.id,
+    organisationId: u.organisationId,
+    organisationName: u.organisationName,
+    email: u.email,
+    name: u.name,
+    roles: u.roles as Role[],
+  };
 }
 
 describe('job backup', () => {
@@ -64,9 +71,19 @@ describe('job backup', () => {
     // A job with everything a backup must carry: overrides, comments on the panel and on a motor,
     // a frozen revision with its bill of materials, and an archived second panel.
     richNumber = `BK-${Date.now().toString(36)}`;
-    const job = await send(designer, 'post', '/api/jobs', { number: richNumber, name: 'Backup round trip', customer: 'Fictional mill', supplyVolts: 480, availableFaultKa: 42 }).expect(201);
+    const job = await send(designer, 'post', '/api/jobs', {
+      number: richNumber,
+      name: 'Backup round trip',
+      customer: 'Fictional mill',
+      supplyVolts: 480,
+      availableFaultKa: 42,
+    }).expect(201);
     richJobId = job.body.id;
-    const panel = await send(designer, 'post', `/api/jobs/${richJobId}/panels`, { name: 'MCC-B1', mounting: 'row-end', markupPercent: 18 }).expect(201);
+    const panel = await send(designer, 'post', `/api/jobs/${richJobId}/panels`, {
+      name: 'MCC-B1',
+      mounting: 'row-end',
+      markupPercent: 18,
+    }).expect(201);
     const pid = panel.body.id as number;
     const motors = [
       { tag: 'P-1', supply: 'ac3', hp: 25, volts: 460, environment: 'washdown' },
@@ -84,7 +101,11 @@ describe('job backup', () => {
     let v = (await designer.agent.get(`/api/panels/${pid}`).expect(200)).body.version;
     await send(designer, 'post', `/api/panels/${pid}/submit`, { version: v, comment: 'Ready for sign-off' }).expect(200);
     v = (await designer.agent.get(`/api/panels/${pid}`).expect(200)).body.version;
-    const approved = await send(engineer, 'post', `/api/panels/${pid}/approve`, { version: v, comment: 'Approved as drawn, fault study pending', acknowledgeSccr: true }).expect(200);
+    const approved = await send(engineer, 'post', `/api/panels/${pid}/approve`, {
+      version: v,
+      comment: 'Approved as drawn, fault study pending',
+      acknowledgeSccr: true,
+    }).expect(200);
     expect(approved.body.status).toBe('signed_off');
     const second = await send(designer, 'post', `/api/jobs/${richJobId}/panels`, { name: 'Spare panel' }).expect(201);
     await send(designer, 'post', `/api/panels/${second.body.id}/archive`, { archived: true, version: second.body.version }).expect(200);
@@ -128,7 +149,10 @@ describe('job backup', () => {
     const { voltageUnbalancePercent: _dropped, ...olderJob } = first.job;
     const older = await send(designer, 'post', '/api/jobs/import', { ...first, job: olderJob }).expect(201);
     expect((await designer.agent.get(`/api/jobs/${older.body.id}`).expect(200)).body.voltageUnbalancePercent).toBe(0);
-    const given = await send(designer, 'post', '/api/jobs/import', { ...first, job: { ...first.job, voltageUnbalancePercent: 2.5 } }).expect(201);
+    const given = await send(designer, 'post', '/api/jobs/import', {
+      ...first,
+      job: { ...first.job, voltageUnbalancePercent: 2.5 },
+    }).expect(201);
     const back = (await designer.agent.get(`/api/jobs/${given.body.id}/export`).expect(200)).body as JobBackup;
     expect(back.job.voltageUnbalancePercent).toBe(2.5);
   });
@@ -153,7 +177,9 @@ describe('job backup', () => {
     expect(comparable(again)).toEqual(comparable(first));
 
     // the restored panel reads like the original: signed off, R0, comment on F-2, current bill of materials
-    const restored = (await designer.agent.get(`/api/jobs/${imported.body.id}/panels`).expect(200)).body.find((p: { name: string }) => p.name === 'MCC-B1');
+    const restored = (await designer.agent.get(`/api/jobs/${imported.body.id}/panels`).expect(200)).body.find(
+      (p: { name: string }) => p.name === 'MCC-B1',
+    );
     const detail = (await designer.agent.get(`/api/panels/${restored.id}`).expect(200)).body;
     expect(detail.status).toBe('signed_off');
     expect(detail.revisions.map((r: { number: number; approvedBy: string }) => [r.number, r.approvedBy])).toEqual([[0, 'Ines Markham']]);
@@ -165,21 +191,34 @@ describe('job backup', () => {
 
   it('accepts the backup as an uploaded .json file', async () => {
     const first = (await designer.agent.get(`/api/jobs/${demoJobId}/export`).expect(200)).body as JobBackup;
-    const r = await designer.agent.post('/api/jobs/import').set('x-csrf-token', designer.token).attach('file', Buffer.from(JSON.stringify(first)), { filename: 'J-2041.panelwright.json', contentType: 'application/json' }).expect(201);
+    const r = await designer.agent
+      .post('/api/jobs/import')
+      .set('x-csrf-token', designer.token)
+      .attach('file', Buffer.from(JSON.stringify(first)), { filename: 'J-2041.panelwright.json', contentType: 'application/json' })
+      .expect(201);
     expect(r.body.number).toMatch(/^J-2041-copy/);
     expect(r.body.motors).toBe(8);
   });
 
   it('refuses a wrong file type (415), an oversized file (413) and a file that is not JSON (400)', async () => {
     const before = await counts();
-    const txt = await designer.agent.post('/api/jobs/import').set('x-csrf-token', designer.token).attach('file', Buffer.from('number,name\nJ-1,x\n'), { filename: 'jobs.csv', contentType: 'text/csv' });
+    const txt = await designer.agent
+      .post('/api/jobs/import')
+      .set('x-csrf-token', designer.token)
+      .attach('file', Buffer.from('number,name\nJ-1,x\n'), { filename: 'jobs.csv', contentType: 'text/csv' });
     expect(txt.status).toBe(415);
     expect(txt.body.error.code).toBe('unsupported_file');
     const big = Buffer.alloc(MAX_BACKUP_BYTES + 1024, 0x20);
-    const over = await designer.agent.post('/api/jobs/import').set('x-csrf-token', designer.token).attach('file', big, { filename: 'big.json', contentType: 'application/json' });
+    const over = await designer.agent
+      .post('/api/jobs/import')
+      .set('x-csrf-token', designer.token)
+      .attach('file', big, { filename: 'big.json', contentType: 'application/json' });
     expect(over.status).toBe(413);
     expect(over.body.error.code).toBe('payload_too_large');
-    const bad = await designer.agent.post('/api/jobs/import').set('x-csrf-token', designer.token).attach('file', Buffer.from('{"format": "panelwright-job", '), { filename: 'cut.json', contentType: 'application/json' });
+    const bad = await designer.agent
+      .post('/api/jobs/import')
+      .set('x-csrf-token', designer.token)
+      .attach('file', Buffer.from('{"format": "panelwright-job", '), { filename: 'cut.json', contentType: 'application/json' });
     expect(bad.status).toBe(400);
     expect(bad.body.error.code).toBe('bad_json');
     expect(await counts()).toEqual(before);
@@ -193,7 +232,11 @@ describe('job backup', () => {
       ['future version', (b) => ((b as Json).version = 2), 'body.version'],
       ['negative hp', (b) => (b.panels[0].loads[0].answers.hp = -5), 'body.panels[0].loads[0].answers.hp'],
       ['unknown panel state', (b) => ((b.panels[0] as Json).status = 'approved-ish'), 'body.panels[0].status'],
-      ['comment on a missing motor', (b) => b.panels[0].comments.push({ loadRef: 'P9.L9', body: 'x', author: null, at: new Date().toISOString() }), `body.panels[0].comments[${good.panels[0].comments.length}].loadRef`],
+      [
+        'comment on a missing motor',
+        (b) => b.panels[0].comments.push({ loadRef: 'P9.L9', body: 'x', author: null, at: new Date().toISOString() }),
+        `body.panels[0].comments[${good.panels[0].comments.length}].loadRef`,
+      ],
       ['duplicate tag', (b) => (b.panels[0].loads[1].tag = b.panels[0].loads[0].tag), 'body.panels[0].loads[1].tag'],
     ];
     for (const [name, mutate, path] of cases) {
@@ -202,7 +245,10 @@ describe('job backup', () => {
       const r = await send(designer, 'post', '/api/jobs/import', b);
       expect(r.status, name).toBe(400);
       expect(r.body.error.code, name).toBe('validation_failed');
-      expect(r.body.error.details.map((d: { path: string }) => d.path), name).toContain(path);
+      expect(
+        r.body.error.details.map((d: { path: string }) => d.path),
+        name,
+      ).toContain(path);
     }
     expect(await counts()).toEqual(before);
   });

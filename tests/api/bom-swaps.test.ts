@@ -35,7 +35,7 @@ let panelId: number;
 /** a second make of NEMA size 2 contactor with a 120 V coil (invented part), marked lower and hotter than the demo one */
 const OTHER_SIZE_2 = `PW-CN-N2-120-${Date.now().toString(36).toUpperCase().slice(-6)}`;
 
-const lines = async () => ((await estimator.agent.get(`/api/panels/${panelId}/bom`).expect(200)).body as { lines: Line[]; stale: boolean });
+const lines = async () => (await estimator.agent.get(`/api/panels/${panelId}/bom`).expect(200)).body as { lines: Line[]; stale: boolean };
 const panel = async () => (await designer.agent.get(`/api/panels/${panelId}`).expect(200)).body as Panel;
 const contactor = async () => (await lines()).lines.find((l) => l.bucket === 'M-25' && l.category === 'contactor')!;
 
@@ -48,19 +48,38 @@ async function signOff() {
 }
 
 beforeAll(async () => {
-  [designer, estimator, engineer, admin] = await Promise.all([signInAs('designer'), signInAs('estimator'), signInAs('engineer'), signInAs('admin')]);
+  [designer, estimator, engineer, admin] = await Promise.all([
+    signInAs('designer'),
+    signInAs('estimator'),
+    signInAs('engineer'),
+    signInAs('admin'),
+  ]);
   // 2 kA available: the panel's parts (5 kA and up, invented demo ratings) cover it, so sign-off needs no acknowledgement
-  const job = (await send(designer, 'post', '/api/jobs', { number: uniq(), name: 'Swap test', availableFaultKa: 2, ambientC: 30 }).expect(201)).body;
+  const job = (
+    await send(designer, 'post', '/api/jobs', { number: uniq(), name: 'Swap test', availableFaultKa: 2, ambientC: 30 }).expect(201)
+  ).body;
   jobId = job.id;
   panelId = (await send(designer, 'post', `/api/jobs/${jobId}/panels`, { name: 'Swap panel' }).expect(201)).body.id;
-  await send(designer, 'post', `/api/panels/${panelId}/loads`, { answers: { tag: 'M-25', supply: 'ac3', hp: 25, volts: 460, fla: 34, serviceFactor: 1.15, environment: 'indoor-dry' } }).expect(201);
+  await send(designer, 'post', `/api/panels/${panelId}/loads`, {
+    answers: { tag: 'M-25', supply: 'ac3', hp: 25, volts: 460, fla: 34, serviceFactor: 1.15, environment: 'indoor-dry' },
+  }).expect(201);
   await send(estimator, 'post', `/api/panels/${panelId}/bom/rebuild`, {}).expect(200);
   await send(admin, 'post', '/api/catalogue/items', {
     code: OTHER_SIZE_2,
     description: 'Contactor, NEMA size 2, 3-pole, 45 A, 120 V AC coil (second make, test)',
     category: 'contactor',
     unit: 'ea',
-    ratings: { volts: 600, poles: 3, coilVolts: 120, nemaSize: '2', amps: 45, hpByVolts: { '460': 25 }, sealedVa: 40, inrushVa: 350, kind: 'nema' },
+    ratings: {
+      volts: 600,
+      poles: 3,
+      coilVolts: 120,
+      nemaSize: '2',
+      amps: 45,
+      hpByVolts: { '460': 25 },
+      sealedVa: 40,
+      inrushVa: 350,
+      kind: 'nema',
+    },
     sccrKa: 3,
     heatLossW: 40,
     // dearer than the demo size 2 (188), so the matcher keeps picking that one
@@ -79,7 +98,9 @@ describe('the swap list and the swap', () => {
 
   it('offers only the parts that meet it: not the size 00 or the 24 V coil, but the second size 2 make', async () => {
     const line = await contactor();
-    const offered = ((await estimator.agent.get(`/api/panels/${panelId}/bom/lines/${line.id}/alternatives`).expect(200)).body as Array<{ code: string }>).map((a) => a.code);
+    const offered = (
+      (await estimator.agent.get(`/api/panels/${panelId}/bom/lines/${line.id}/alternatives`).expect(200)).body as Array<{ code: string }>
+    ).map((a) => a.code);
     expect(offered).toEqual([OTHER_SIZE_2]);
     expect(offered).not.toContain('PW-CN-N00-120');
     expect(offered).not.toContain('PW-CN-N2-24');
@@ -87,22 +108,44 @@ describe('the swap list and the swap', () => {
 
   it('refuses a swap for a part that does not meet it, naming what it lacks, and leaves the line as it was', async () => {
     const line = await contactor();
-    const small = await send(estimator, 'patch', `/api/panels/${panelId}/bom/lines/${line.id}`, { swapCode: 'PW-CN-N00-120', swapReason: 'In stock' }).expect(400);
+    const small = await send(estimator, 'patch', `/api/panels/${panelId}/bom/lines/${line.id}`, {
+      swapCode: 'PW-CN-N00-120',
+      swapReason: 'In stock',
+    }).expect(400);
     // catalogue: PW-CN-N00-120 is a NEMA size 00, 9 A contactor
-    expect(small.body.error.message).toBe('PW-CN-N00-120 does not meet what motor M-25 needs: NEMA size 00 (9 A), not the NEMA size 2 motor M-25 needs');
-    expect(small.body.error.details).toEqual([{ path: 'body.swapCode', message: 'NEMA size 00 (9 A), not the NEMA size 2 motor M-25 needs' }]);
-    const coil = await send(estimator, 'patch', `/api/panels/${panelId}/bom/lines/${line.id}`, { swapCode: 'PW-CN-N2-24', swapReason: 'In stock' }).expect(400);
+    expect(small.body.error.message).toBe(
+      'PW-CN-N00-120 does not meet what motor M-25 needs: NEMA size 00 (9 A), not the NEMA size 2 motor M-25 needs',
+    );
+    expect(small.body.error.details).toEqual([
+      { path: 'body.swapCode', message: 'NEMA size 00 (9 A), not the NEMA size 2 motor M-25 needs' },
+    ]);
+    const coil = await send(estimator, 'patch', `/api/panels/${panelId}/bom/lines/${line.id}`, {
+      swapCode: 'PW-CN-N2-24',
+      swapReason: 'In stock',
+    }).expect(400);
     expect(coil.body.error.message).toMatch(/24 V coil, not the 120 V control voltage motor M-25 needs/);
     expect((await contactor()).code).toBe('PW-CN-N2-120');
 
     // the overload relay: its dial must hold the motor's 34 A nameplate current (NEC 430.32 sets the limit, the dial is set at FLA)
     const b = await lines();
     const relayLine = b.lines.find((l) => l.bucket === 'M-25' && l.category === 'overload-relay')!;
-    const relays = (await estimator.agent.get('/api/catalogue/items?category=overload-relay').expect(200)).body as Array<{ code: string; active: boolean; ratings: { settingMinAmps: number; settingMaxAmps: number } }>;
+    const relays = (await estimator.agent.get('/api/catalogue/items?category=overload-relay').expect(200)).body as Array<{
+      code: string;
+      active: boolean;
+      ratings: { settingMinAmps: number; settingMaxAmps: number };
+    }>;
     const tooSmall = relays.find((r) => r.active && r.ratings.settingMaxAmps < 34)!;
-    const refused = await send(estimator, 'patch', `/api/panels/${panelId}/bom/lines/${relayLine.id}`, { swapCode: tooSmall.code, swapReason: 'In stock' }).expect(400);
-    expect(refused.body.error.message).toContain(`setting range ${tooSmall.ratings.settingMinAmps}–${tooSmall.ratings.settingMaxAmps} A does not hold the 34 A setting motor M-25 needs`);
-    const fitting = ((await estimator.agent.get(`/api/panels/${panelId}/bom/lines/${relayLine.id}/alternatives`).expect(200)).body as Array<{ code: string; ratings: { settingMinAmps: number; settingMaxAmps: number } }>);
+    const refused = await send(estimator, 'patch', `/api/panels/${panelId}/bom/lines/${relayLine.id}`, {
+      swapCode: tooSmall.code,
+      swapReason: 'In stock',
+    }).expect(400);
+    expect(refused.body.error.message).toContain(
+      `setting range ${tooSmall.ratings.settingMinAmps}–${tooSmall.ratings.settingMaxAmps} A does not hold the 34 A setting motor M-25 needs`,
+    );
+    const fitting = (await estimator.agent.get(`/api/panels/${panelId}/bom/lines/${relayLine.id}/alternatives`).expect(200)).body as Array<{
+      code: string;
+      ratings: { settingMinAmps: number; settingMaxAmps: number };
+    }>;
     for (const r of fitting) {
       expect(r.ratings.settingMinAmps).toBeLessThanOrEqual(34);
       expect(r.ratings.settingMaxAmps).toBeGreaterThanOrEqual(34);
@@ -115,14 +158,34 @@ describe('a signed-off panel', () => {
     const signed = await signOff();
     const before = (await engineer.agent.get(`/api/panels/${panelId}/checks`).expect(200)).body;
     const line = await contactor();
-    const swapped = (await send(estimator, 'patch', `/api/panels/${panelId}/bom/lines/${line.id}`, { swapCode: OTHER_SIZE_2, swapReason: "Customer's standard make" }).expect(200)).body as Line;
-    expect(swapped).toMatchObject({ code: OTHER_SIZE_2, source: 'swapped', swappedFrom: 'PW-CN-N2-120', swapReason: "Customer's standard make", unitCost: 205 });
+    const swapped = (
+      await send(estimator, 'patch', `/api/panels/${panelId}/bom/lines/${line.id}`, {
+        swapCode: OTHER_SIZE_2,
+        swapReason: "Customer's standard make",
+      }).expect(200)
+    ).body as Line;
+    expect(swapped).toMatchObject({
+      code: OTHER_SIZE_2,
+      source: 'swapped',
+      swappedFrom: 'PW-CN-N2-120',
+      swapReason: "Customer's standard make",
+      unitCost: 205,
+    });
     const p = await panel();
     expect(p.status).toBe('draft');
     expect(p.revisionNumber).toBe(signed.revisionNumber);
-    const activity = (await designer.agent.get(`/api/jobs/${jobId}/activity`).expect(200)).body as Array<{ action: string; summary: string }> | { items: Array<{ action: string; summary: string }> };
+    const activity = (await designer.agent.get(`/api/jobs/${jobId}/activity`).expect(200)).body as
+      | Array<{ action: string; summary: string }>
+      | { items: Array<{ action: string; summary: string }> };
     const items = Array.isArray(activity) ? activity : activity.items;
-    expect(items.some((a) => a.action === 'reopened' && a.summary.includes(`Opened a new draft after R${signed.revisionNumber}`) && a.summary.includes('swapped'))).toBe(true);
+    expect(
+      items.some(
+        (a) =>
+          a.action === 'reopened' &&
+          a.summary.includes(`Opened a new draft after R${signed.revisionNumber}`) &&
+          a.summary.includes('swapped'),
+      ),
+    ).toBe(true);
 
     // the bill of materials is still up to date (the swap is kept by a rebuild), and the checks see the swapped part:
     // its 3 kA marking limits the panel (weakest link, UL 508A SB4) and its 40 W are in the heat load
@@ -144,14 +207,27 @@ describe('a signed-off panel', () => {
     let p = await panel();
     p = (await send(designer, 'post', `/api/panels/${panelId}/submit`, { version: p.version }).expect(200)).body;
     const line = await contactor();
-    const swap = await send(estimator, 'patch', `/api/panels/${panelId}/bom/lines/${line.id}`, { swapCode: 'PW-CN-N2-120', swapReason: 'Back to the first make' }).expect(409);
+    const swap = await send(estimator, 'patch', `/api/panels/${panelId}/bom/lines/${line.id}`, {
+      swapCode: 'PW-CN-N2-120',
+      swapReason: 'Back to the first make',
+    }).expect(409);
     expect(swap.body.error.message).toMatch(/is in review: the engineer must return it before its bill of materials can change/);
-    await send(estimator, 'post', `/api/panels/${panelId}/bom/lines`, { category: 'freight', description: 'Freight', quantity: 1, unitCost: 100 }).expect(409);
+    await send(estimator, 'post', `/api/panels/${panelId}/bom/lines`, {
+      category: 'freight',
+      description: 'Freight',
+      quantity: 1,
+      unitCost: 100,
+    }).expect(409);
     // a rebuild that changes no part is no change to the design
     await send(estimator, 'post', `/api/panels/${panelId}/bom/rebuild`, {}).expect(200);
     expect((await panel()).status).toBe('in_review');
 
-    p = (await send(engineer, 'post', `/api/panels/${panelId}/approve`, { version: (await panel()).version, comment: 'Second make accepted' }).expect(200)).body;
+    p = (
+      await send(engineer, 'post', `/api/panels/${panelId}/approve`, {
+        version: (await panel()).version,
+        comment: 'Second make accepted',
+      }).expect(200)
+    ).body;
     expect(p.status).toBe('signed_off');
     const rev = (await engineer.agent.get(`/api/panels/${panelId}/revisions/${p.revisionNumber}`).expect(200)).body;
     const frozen = (rev.snapshot.bom as Line[]).find((l) => l.bucket === 'M-25' && l.category === 'contactor')!;
@@ -160,7 +236,14 @@ describe('a signed-off panel', () => {
 
   it('opens a new draft on a manual line too, and on removing it', async () => {
     expect((await panel()).status).toBe('signed_off');
-    const freight = (await send(estimator, 'post', `/api/panels/${panelId}/bom/lines`, { category: 'freight', description: 'Freight to site', quantity: 1, unitCost: 300 }).expect(201)).body as Line;
+    const freight = (
+      await send(estimator, 'post', `/api/panels/${panelId}/bom/lines`, {
+        category: 'freight',
+        description: 'Freight to site',
+        quantity: 1,
+        unitCost: 300,
+      }).expect(201)
+    ).body as Line;
     expect((await panel()).status).toBe('draft');
     await signOff();
     // the sign-off rebuilt the lines: the manual line is kept, under a new id
@@ -178,8 +261,14 @@ describe('a signed-off panel', () => {
     await send(estimator, 'post', `/api/panels/${panelId}/bom/rebuild`, {}).expect(200);
     const line = await contactor();
     expect(line).toMatchObject({ code: 'PW-CN-N3-120', source: 'auto' });
-    const activity = (await designer.agent.get(`/api/jobs/${jobId}/activity`).expect(200)).body as Array<{ action: string; summary: string }> | { items: Array<{ action: string; summary: string }> };
+    const activity = (await designer.agent.get(`/api/jobs/${jobId}/activity`).expect(200)).body as
+      | Array<{ action: string; summary: string }>
+      | { items: Array<{ action: string; summary: string }> };
     const items = Array.isArray(activity) ? activity : activity.items;
-    expect(items.find((a) => a.action === 'rebuilt')?.summary).toMatch(new RegExp(`dropped the swap that no longer fit: ${OTHER_SIZE_2} on M-25 \\(NEMA size 2 \\(45 A\\), not the NEMA size 3 motor M-25 needs\\)`));
+    expect(items.find((a) => a.action === 'rebuilt')?.summary).toMatch(
+      new RegExp(
+        `dropped the swap that no longer fit: ${OTHER_SIZE_2} on M-25 \\(NEMA size 2 \\(45 A\\), not the NEMA size 3 motor M-25 needs\\)`,
+      ),
+    );
   });
 });

@@ -22,7 +22,17 @@ interface Line {
 }
 interface Bom {
   lines: Line[];
-  totals: { materialCost: number; labourHours: number; labourRate: number; labourCost: number; cost: number; markupPercent: number; markup: number; sell: number; unmatchedLines: number };
+  totals: {
+    materialCost: number;
+    labourHours: number;
+    labourRate: number;
+    labourCost: number;
+    cost: number;
+    markupPercent: number;
+    markup: number;
+    sell: number;
+    unmatchedLines: number;
+  };
   stale: boolean;
   generatedAt: string | null;
 }
@@ -92,22 +102,48 @@ describe('rebuild', () => {
 describe('manual lines and swaps', () => {
   it('adds freight and engineering hours, keeps them through a rebuild, and removes them', async () => {
     const before = await bom();
-    await send(designer, 'post', `/api/panels/${panelId}/bom/lines`, { category: 'freight', description: 'Freight to site', quantity: 1, unitCost: 450 }).expect(403);
-    const freight = (await send(estimator, 'post', `/api/panels/${panelId}/bom/lines`, { category: 'freight', description: 'Freight to site', quantity: 1, unitCost: 450 }).expect(201)).body as Line;
+    await send(designer, 'post', `/api/panels/${panelId}/bom/lines`, {
+      category: 'freight',
+      description: 'Freight to site',
+      quantity: 1,
+      unitCost: 450,
+    }).expect(403);
+    const freight = (
+      await send(estimator, 'post', `/api/panels/${panelId}/bom/lines`, {
+        category: 'freight',
+        description: 'Freight to site',
+        quantity: 1,
+        unitCost: 450,
+      }).expect(201)
+    ).body as Line;
     expect(freight).toMatchObject({ bucket: '(panel)', status: 'manual', source: 'manual', unitCost: 450, code: null });
-    const eng = (await send(estimator, 'post', `/api/panels/${panelId}/bom/lines`, { category: 'engineering', description: 'Engineering and drawings', quantity: 6, unitCost: 0, unitLabourHours: 1 }).expect(201)).body as Line;
+    const eng = (
+      await send(estimator, 'post', `/api/panels/${panelId}/bom/lines`, {
+        category: 'engineering',
+        description: 'Engineering and drawings',
+        quantity: 6,
+        unitCost: 0,
+        unitLabourHours: 1,
+      }).expect(201)
+    ).body as Line;
 
     let b = await bom();
     expect(b.totals.materialCost).toBeCloseTo(before.totals.materialCost + 450, 2);
     expect(b.totals.labourHours).toBeCloseTo(before.totals.labourHours + 6, 2);
 
     // a manual line's quantity changes directly
-    const more = (await send(estimator, 'patch', `/api/panels/${panelId}/bom/lines/${freight.id}`, { quantity: 2 }).expect(200)).body as Line;
+    const more = (await send(estimator, 'patch', `/api/panels/${panelId}/bom/lines/${freight.id}`, { quantity: 2 }).expect(200))
+      .body as Line;
     expect(more.quantity).toBe(2);
 
     b = (await send(estimator, 'post', `/api/panels/${panelId}/bom/rebuild`, {}).expect(200)).body as Bom;
     const kept = b.lines.filter((l) => l.source === 'manual').map((l) => [l.description, l.quantity]);
-    expect(kept).toEqual(expect.arrayContaining([['Freight to site', 2], ['Engineering and drawings', 6]]));
+    expect(kept).toEqual(
+      expect.arrayContaining([
+        ['Freight to site', 2],
+        ['Engineering and drawings', 6],
+      ]),
+    );
     expect(b.totals.materialCost).toBeCloseTo(before.totals.materialCost + 900, 2);
 
     // an automatic line is not removed or re-quantified by hand
@@ -116,21 +152,25 @@ describe('manual lines and swaps', () => {
     const q = await send(estimator, 'patch', `/api/panels/${panelId}/bom/lines/${auto.id}`, { quantity: 7 }).expect(400);
     expect(q.body.error.message).toMatch(/follow the design/);
 
-    for (const l of b.lines.filter((x) => x.source === 'manual')) await send(estimator, 'delete', `/api/panels/${panelId}/bom/lines/${l.id}`).expect(204);
+    for (const l of b.lines.filter((x) => x.source === 'manual'))
+      await send(estimator, 'delete', `/api/panels/${panelId}/bom/lines/${l.id}`).expect(204);
     b = await bom();
     expect(b.lines.some((l) => l.source === 'manual')).toBe(false);
     expect(b.totals.materialCost).toBeCloseTo(before.totals.materialCost, 2);
     void eng;
   });
 
-  it('swaps a part for an equivalent with a reason, at the new part\'s price, and keeps the swap through a rebuild', async () => {
+  it("swaps a part for an equivalent with a reason, at the new part's price, and keeps the swap through a rebuild", async () => {
     const b = (await send(estimator, 'post', `/api/panels/${panelId}/bom/rebuild`, {}).expect(200)).body as Bom;
     const line = b.lines.find((l) => l.bucket === 'C-201' && l.category === 'contactor' && l.status === 'matched')!;
     expect(line).toBeDefined();
     // the demo catalogue has one size 1 contactor with a 120 V coil: a second make is what a swap may take
     // (only parts that meet the line's requirement are offered; tests/api/bom-swaps.test.ts)
     const second = await addSecondMake(estimator, line.code!);
-    const alternatives = (await estimator.agent.get(`/api/panels/${panelId}/bom/lines/${line.id}/alternatives`).expect(200)).body as Array<{ code: string; unitCost: number }>;
+    const alternatives = (await estimator.agent.get(`/api/panels/${panelId}/bom/lines/${line.id}/alternatives`).expect(200)).body as Array<{
+      code: string;
+      unitCost: number;
+    }>;
     expect(alternatives.length).toBeGreaterThan(0);
     expect(alternatives.map((a) => a.code)).toContain(second);
     expect(alternatives.map((a) => a.code)).not.toContain(line.code);
@@ -139,11 +179,25 @@ describe('manual lines and swaps', () => {
     const noReason = await send(estimator, 'patch', `/api/panels/${panelId}/bom/lines/${line.id}`, { swapCode: pick.code }).expect(400);
     expect(noReason.body.error.details[0].path).toBe('body.swapReason');
     const overload = b.lines.find((l) => l.category === 'overload-relay' && l.code)!;
-    await send(estimator, 'patch', `/api/panels/${panelId}/bom/lines/${line.id}`, { swapCode: overload.code, swapReason: 'stock' }).expect(400);
+    await send(estimator, 'patch', `/api/panels/${panelId}/bom/lines/${line.id}`, { swapCode: overload.code, swapReason: 'stock' }).expect(
+      400,
+    );
     await send(designer, 'patch', `/api/panels/${panelId}/bom/lines/${line.id}`, { swapCode: pick.code, swapReason: 'stock' }).expect(403);
 
-    const swapped = (await send(estimator, 'patch', `/api/panels/${panelId}/bom/lines/${line.id}`, { swapCode: pick.code, swapReason: 'Customer standard for conveyors' }).expect(200)).body as Line;
-    expect(swapped).toMatchObject({ code: pick.code, source: 'swapped', status: 'matched', swapReason: 'Customer standard for conveyors', unitCost: pick.unitCost, quantity: line.quantity });
+    const swapped = (
+      await send(estimator, 'patch', `/api/panels/${panelId}/bom/lines/${line.id}`, {
+        swapCode: pick.code,
+        swapReason: 'Customer standard for conveyors',
+      }).expect(200)
+    ).body as Line;
+    expect(swapped).toMatchObject({
+      code: pick.code,
+      source: 'swapped',
+      status: 'matched',
+      swapReason: 'Customer standard for conveyors',
+      unitCost: pick.unitCost,
+      quantity: line.quantity,
+    });
 
     const after = (await send(estimator, 'post', `/api/panels/${panelId}/bom/rebuild`, {}).expect(200)).body as Bom;
     const still = after.lines.filter((l) => l.bucket === 'C-201' && l.category === 'contactor');
@@ -163,7 +217,14 @@ describe('downloads', () => {
 
   it('writes the panel .xlsx with formulas for extended costs, and a text starting with = stays text', async () => {
     const injected = '=HYPERLINK("http://example.invalid","click")';
-    const manual = (await send(estimator, 'post', `/api/panels/${panelId}/bom/lines`, { category: 'other', description: injected, quantity: 3, unitCost: 12.5 }).expect(201)).body as Line;
+    const manual = (
+      await send(estimator, 'post', `/api/panels/${panelId}/bom/lines`, {
+        category: 'other',
+        description: injected,
+        quantity: 3,
+        unitCost: 12.5,
+      }).expect(201)
+    ).body as Line;
     const b = await bom();
     const { wb, headers } = await workbook(`/api/panels/${panelId}/bom.xlsx`);
     expect(headers['content-type']).toBe('application/vnd.openxmlformats-officedocument.spreadsheetml.sheet');
@@ -203,12 +264,20 @@ describe('downloads', () => {
   });
 
   it('writes the whole job: a sheet for every panel that is not archived', async () => {
-    const panels = (await estimator.agent.get(`/api/jobs/${jobId}/panels`).expect(200)).body as Array<{ name: string; archivedAt: string | null }>;
+    const panels = (await estimator.agent.get(`/api/jobs/${jobId}/panels`).expect(200)).body as Array<{
+      name: string;
+      archivedAt: string | null;
+    }>;
     const { wb, headers } = await workbook(`/api/jobs/${jobId}/bom.xlsx`);
     expect(headers['content-disposition']).toMatch(/filename="J-2041-bom\.xlsx"/);
     const names = wb.worksheets.map((w) => w.name);
     expect(names[0]).toBe('Summary');
     expect(names.at(-1)).toBe('Roll-up by part');
-    expect(names.slice(1, -1).sort()).toEqual(panels.filter((p) => !p.archivedAt).map((p) => p.name.slice(0, 31)).sort());
+    expect(names.slice(1, -1).sort()).toEqual(
+      panels
+        .filter((p) => !p.archivedAt)
+        .map((p) => p.name.slice(0, 31))
+        .sort(),
+    );
   });
 });

@@ -55,7 +55,12 @@ const content = (items: Entry[]) =>
 
 describe('catalogue items', () => {
   it('lets estimators and admins edit, designers and engineers only read', async () => {
-    const [estimator, designer, engineer, admin] = await Promise.all([signInAs('estimator'), signInAs('designer'), signInAs('engineer'), signInAs('admin')]);
+    const [estimator, designer, engineer, admin] = await Promise.all([
+      signInAs('estimator'),
+      signInAs('designer'),
+      signInAs('engineer'),
+      signInAs('admin'),
+    ]);
     const code = `PW-TEST-${uniq()}`;
     await send(designer, 'post', '/api/catalogue/items', fuse(code)).expect(403);
     await send(engineer, 'post', '/api/catalogue/items', fuse(code)).expect(403);
@@ -83,7 +88,14 @@ describe('catalogue items', () => {
     const code = `PW-TEST-${uniq()}`;
     const item = (await send(estimator, 'post', '/api/catalogue/items', fuse(code, 7.5)).expect(201)).body as Entry;
 
-    const v1 = (await send(estimator, 'patch', `/api/catalogue/items/${item.id}`, { unitCost: 8.25, labourHours: 0.02, leadTimeDays: 10, version: 0 }).expect(200)).body as Entry;
+    const v1 = (
+      await send(estimator, 'patch', `/api/catalogue/items/${item.id}`, {
+        unitCost: 8.25,
+        labourHours: 0.02,
+        leadTimeDays: 10,
+        version: 0,
+      }).expect(200)
+    ).body as Entry;
     expect(v1).toMatchObject({ unitCost: 8.25, labourHours: 0.02, leadTimeDays: 10, version: 1 });
 
     // an admin who opened version 0 is refused instead of overwriting the estimator's price
@@ -96,16 +108,22 @@ describe('catalogue items', () => {
     // the code is the key bills of materials refer to: not changeable
     await send(estimator, 'patch', `/api/catalogue/items/${item.id}`, { code: 'PW-OTHER-1', version: 1 }).expect(400);
 
-    const off = (await send(admin, 'post', `/api/catalogue/items/${item.id}/active`, { active: false, version: 1 }).expect(200)).body as Entry;
+    const off = (await send(admin, 'post', `/api/catalogue/items/${item.id}/active`, { active: false, version: 1 }).expect(200))
+      .body as Entry;
     expect(off).toMatchObject({ active: false, version: 2 });
     const activeOnly = (await estimator.agent.get(`/api/catalogue/items?q=${code}`).expect(200)).body as Entry[];
     expect(activeOnly).toEqual([]);
     const inactive = (await estimator.agent.get(`/api/catalogue/items?q=${code}&active=false`).expect(200)).body as Entry[];
     expect(inactive.map((i) => i.code)).toEqual([code]);
-    const on = (await send(admin, 'post', `/api/catalogue/items/${item.id}/active`, { active: true, version: 2 }).expect(200)).body as Entry;
+    const on = (await send(admin, 'post', `/api/catalogue/items/${item.id}/active`, { active: true, version: 2 }).expect(200))
+      .body as Entry;
     expect(on).toMatchObject({ active: true, version: 3 });
 
-    const history = (await estimator.agent.get(`/api/catalogue/items/${item.id}/history`).expect(200)).body as Array<{ action: string; user: string; diff: Record<string, unknown> }>;
+    const history = (await estimator.agent.get(`/api/catalogue/items/${item.id}/history`).expect(200)).body as Array<{
+      action: string;
+      user: string;
+      diff: Record<string, unknown>;
+    }>;
     expect(history.map((h) => h.action)).toEqual(['reactivated', 'deactivated', 'updated', 'created']);
     expect(history.map((h) => h.user)).toEqual(['Ada Quarry', 'Ada Quarry', 'Esme Tolliver', 'Esme Tolliver']);
     // exactly the fields sent: the others (heat loss 1.2 W, 4 terminations, SCCR) keep their values
@@ -126,11 +144,16 @@ describe('catalogue items', () => {
 describe('labour units', () => {
   it('are read by every role and changed by estimators with the version', async () => {
     const [estimator, engineer] = await Promise.all([signInAs('estimator'), signInAs('engineer')]);
-    const units = (await engineer.agent.get('/api/labour-units').expect(200)).body as Array<{ key: string; hours: number; version: number }>;
+    const units = (await engineer.agent.get('/api/labour-units').expect(200)).body as Array<{
+      key: string;
+      hours: number;
+      version: number;
+    }>;
     expect(units).toHaveLength(10); // catalog/labour-units.json
     const term = units.find((u) => u.key === 'termination')!;
     await send(engineer, 'patch', '/api/labour-units/termination', { hours: 0.07, version: term.version }).expect(403);
-    const changed = (await send(estimator, 'patch', '/api/labour-units/termination', { hours: 0.07, version: term.version }).expect(200)).body;
+    const changed = (await send(estimator, 'patch', '/api/labour-units/termination', { hours: 0.07, version: term.version }).expect(200))
+      .body;
     expect(changed).toMatchObject({ key: 'termination', hours: 0.07, version: term.version + 1 });
     await send(estimator, 'patch', '/api/labour-units/termination', { hours: 0.08, version: term.version }).expect(409);
     await send(estimator, 'patch', '/api/labour-units/termination', { hours: term.hours, version: term.version + 1 }).expect(200);
@@ -145,7 +168,9 @@ describe('catalogue export and import', () => {
 
     const xlsx = await download(estimator, '/api/catalogue.xlsx');
     expect(xlsx.subarray(0, 2).toString()).toBe('PK');
-    const r1 = (await upload(estimator, 'catalogue.xlsx', xlsx, 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet').expect(200)).body;
+    const r1 = (
+      await upload(estimator, 'catalogue.xlsx', xlsx, 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet').expect(200)
+    ).body;
     expect(r1).toEqual({ created: 0, updated: 0, unchanged: before.length });
     expect(content(await allItems(estimator))).toEqual(before);
 
@@ -184,7 +209,10 @@ describe('catalogue export and import', () => {
     const before = content(await allItems(estimator));
     const csv = (await estimator.agent.get('/api/catalogue.csv').expect(200)).text.replace(/^\uFEFF/, '');
     // rows without quoted fields, so that splitting on commas is exact
-    const lines = csv.trim().split('\r\n').filter((l) => !l.includes('"'));
+    const lines = csv
+      .trim()
+      .split('\r\n')
+      .filter((l) => !l.includes('"'));
     const header = lines[0]!.split(',');
     const costAt = header.indexOf('unitCost');
     // rows 2 and 3 are good but priced differently: they must not be written either
@@ -226,7 +254,9 @@ describe('catalogue export and import', () => {
     added.getCell(col('unitCost')).value = { formula: 'ROUND(25/2,2)', result: 12.5 };
     added.commit();
     const file = Buffer.from(await wb.xlsx.writeBuffer());
-    const r = (await upload(estimator, 'hand-edited.xlsx', file, 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet').expect(200)).body;
+    const r = (
+      await upload(estimator, 'hand-edited.xlsx', file, 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet').expect(200)
+    ).body;
     expect(r).toMatchObject({ created: 1 });
 
     const item = (await allItems(estimator)).find((i) => i.code === code)!;
@@ -261,10 +291,20 @@ describe('catalogue export and import', () => {
     expect(big.status).toBe(413);
     expect(big.body.error.code).toBe('payload_too_large');
     // 64 MB of spaces deflated to a few dozen kB, its expanded size understated in the zip headers
-    const sheet = Buffer.concat([Buffer.from('<?xml version="1.0"?><worksheet xmlns="http://schemas.openxmlformats.org/spreadsheetml/2006/main"><sheetData>'), Buffer.alloc(64 * 1024 * 1024, 0x20), Buffer.from('</sheetData></worksheet>')]);
+    const sheet = Buffer.concat([
+      Buffer.from('<?xml version="1.0"?><worksheet xmlns="http://schemas.openxmlformats.org/spreadsheetml/2006/main"><sheetData>'),
+      Buffer.alloc(64 * 1024 * 1024, 0x20),
+      Buffer.from('</sheetData></worksheet>'),
+    ]);
     const bomb = makeZip([
-      { name: '[Content_Types].xml', data: Buffer.from('<?xml version="1.0"?><Types xmlns="http://schemas.openxmlformats.org/package/2006/content-types"/>') },
-      { name: 'xl/workbook.xml', data: Buffer.from('<?xml version="1.0"?><workbook xmlns="http://schemas.openxmlformats.org/spreadsheetml/2006/main"/>') },
+      {
+        name: '[Content_Types].xml',
+        data: Buffer.from('<?xml version="1.0"?><Types xmlns="http://schemas.openxmlformats.org/package/2006/content-types"/>'),
+      },
+      {
+        name: 'xl/workbook.xml',
+        data: Buffer.from('<?xml version="1.0"?><workbook xmlns="http://schemas.openxmlformats.org/spreadsheetml/2006/main"/>'),
+      },
       { name: 'xl/worksheets/sheet1.xml', data: sheet, declaredSize: 4096 },
     ]);
     expect(bomb.length).toBeLessThan(IMPORT_LIMITS.maxFileBytes);
@@ -286,7 +326,12 @@ describe('catalogue export and import', () => {
     const estimator = await signInAs('estimator');
     const empty = await upload(estimator, 'empty.csv', '', 'text/csv').expect(400);
     expect(empty.body.error.details[0].message).toBe('the file is empty');
-    const notXlsx = await upload(estimator, 'fake.xlsx', 'this is plain text, not a workbook', 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet').expect(400);
+    const notXlsx = await upload(
+      estimator,
+      'fake.xlsx',
+      'this is plain text, not a workbook',
+      'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet',
+    ).expect(400);
     expect(notXlsx.body.error.details[0].message).toMatch(/not an \.xlsx workbook/);
     const cols = await upload(estimator, 'cols.csv', 'code,description\r\nPW-X-1,thing\r\n', 'text/csv').expect(400);
     expect(cols.body.error.details.map((d: { message: string }) => d.message)).toContain('missing required column "category"');
@@ -300,11 +345,18 @@ describe('frozen unit cost', () => {
   it('keeps a stored bill-of-materials line at the unit cost it was priced at when the catalogue price changes', async () => {
     const designer = await signInAs('designer');
     const estimator = await signInAs('estimator');
-    const job = (await send(designer, 'post', '/api/jobs', { number: `FZ-${uniq()}`, name: 'Frozen price check', availableFaultKa: 22 }).expect(201)).body;
+    const job = (
+      await send(designer, 'post', '/api/jobs', { number: `FZ-${uniq()}`, name: 'Frozen price check', availableFaultKa: 22 }).expect(201)
+    ).body;
     const panel = (await send(designer, 'post', `/api/jobs/${job.id}/panels`, { name: 'MCC-Z' }).expect(201)).body;
-    await send(designer, 'post', `/api/panels/${panel.id}/loads`, { answers: { tag: 'P-9', supply: 'ac3', hp: 10, volts: 460 } }).expect(201);
+    await send(designer, 'post', `/api/panels/${panel.id}/loads`, { answers: { tag: 'P-9', supply: 'ac3', hp: 10, volts: 460 } }).expect(
+      201,
+    );
     const built = (await send(estimator, 'post', `/api/panels/${panel.id}/bom/rebuild`, {}).expect(200)).body;
-    const line = built.lines.find((l: { bucket: string; category: string; status: string }) => l.bucket === 'P-9' && l.category === 'contactor' && l.status === 'matched');
+    const line = built.lines.find(
+      (l: { bucket: string; category: string; status: string }) =>
+        l.bucket === 'P-9' && l.category === 'contactor' && l.status === 'matched',
+    );
     expect(line).toBeDefined();
     const [item] = (await estimator.agent.get(`/api/catalogue/items?q=${line.code}`).expect(200)).body as Entry[];
     expect(item!.unitCost).toBe(line.unitCost);
@@ -319,9 +371,13 @@ describe('frozen unit cost', () => {
 
     // a plain rebuild keeps the frozen price; only an explicit re-price takes today's
     const again = (await send(estimator, 'post', `/api/panels/${panel.id}/bom/rebuild`, {}).expect(200)).body;
-    expect(again.lines.find((l: { code: string; bucket: string }) => l.code === line.code && l.bucket === 'P-9').unitCost).toBe(line.unitCost);
+    expect(again.lines.find((l: { code: string; bucket: string }) => l.code === line.code && l.bucket === 'P-9').unitCost).toBe(
+      line.unitCost,
+    );
     const repriced = (await send(estimator, 'post', `/api/panels/${panel.id}/bom/rebuild`, { reprice: true }).expect(200)).body;
     expect(repriced.lines.find((l: { code: string; bucket: string }) => l.code === line.code && l.bucket === 'P-9').unitCost).toBe(raised);
-    await send(estimator, 'patch', `/api/catalogue/items/${item!.id}`, { unitCost: item!.unitCost, version: item!.version + 1 }).expect(200);
+    await send(estimator, 'patch', `/api/catalogue/items/${item!.id}`, { unitCost: item!.unitCost, version: item!.version + 1 }).expect(
+      200,
+    );
   });
 });

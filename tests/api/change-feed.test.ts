@@ -76,7 +76,8 @@ beforeAll(async () => {
   other = new pg.Client({ connectionString: inject('databaseUrl') });
   await other.connect();
   designer = await signInAs('designer');
-  const job = (await send(designer, 'post', '/api/jobs', { number: uniq(), name: 'Clarifier drives', availableFaultKa: 22 }).expect(201)).body as { id: number };
+  const job = (await send(designer, 'post', '/api/jobs', { number: uniq(), name: 'Clarifier drives', availableFaultKa: 22 }).expect(201))
+    .body as { id: number };
   jobId = job.id;
   panelId = ((await send(designer, 'post', `/api/jobs/${job.id}/panels`, { name: 'MCC-C' }).expect(201)).body as { id: number }).id;
 });
@@ -97,7 +98,12 @@ describe('change notifications', () => {
       await other.query('update users set last_sign_in_at = now() where id = $1', [engineerId]);
       await other.query('delete from session where sid = $1', [sid]);
       const digest = createHash('md5').update(sid).digest('hex');
-      const expected: Array<[ChangeKind, string]> = [['p', String(panelId)], ['j', String(jobId)], ['u', String(engineerId)], ['s', digest]];
+      const expected: Array<[ChangeKind, string]> = [
+        ['p', String(panelId)],
+        ['j', String(jobId)],
+        ['u', String(engineerId)],
+        ['s', digest],
+      ];
       const has = () => expected.every(([k, key]) => seen.some(([k2, key2]) => k2 === k && key2 === key));
       await until('the four notifications', async () => (has() ? true : undefined));
       expect(seen).toEqual(expect.arrayContaining(expected));
@@ -164,7 +170,15 @@ describe('a change made by another instance', () => {
     const org = (await Organisation.findOne({ where: { name: DEMO_ORGANISATION } }))!;
     const password = 'feed-test-pass-1';
     const email = `${uniq().toLowerCase()}@copperline.test`;
-    const u = await User.create({ organisationId: org.id, email, name: 'Ilse Marwood', roles: ['designer'], passwordHash: await argon2.hash(password), inviteToken: null, lastSignInAt: null });
+    const u = await User.create({
+      organisationId: org.id,
+      email,
+      name: 'Ilse Marwood',
+      roles: ['designer'],
+      passwordHash: await argon2.hash(password),
+      inviteToken: null,
+      lastSignInAt: null,
+    });
     const s = await signIn(email, password);
     expect(await quietRead(s)).toEqual([]); // the person is now held in memory
     await other.query('update users set active = false where id = $1', [u.id]);
@@ -183,7 +197,10 @@ describe('the catalogue', () => {
 
     // a price changed by another instance
     const first = items[0]!;
-    await other.query('update catalogue_items set unit_cost = unit_cost + 1 where organisation_id = $1 and code = $2', [org.id, first.code]);
+    await other.query('update catalogue_items set unit_cost = unit_cost + 1 where organisation_id = $1 and code = $2', [
+      org.id,
+      first.code,
+    ]);
     const changed = await until('the new price', async () => {
       const now = (await catalogueFor(org.id)).find((c) => c.code === first.code)!;
       return now.unitCost === first.unitCost + 1 ? now : undefined;
@@ -199,7 +216,10 @@ describe('the catalogue', () => {
       [org.id, code, first.code],
     );
     await until('the new item', async () => ((await catalogueFor(org.id)).some((c) => c.code === code) ? true : undefined));
-    await other.query('update catalogue_items set unit_cost = unit_cost - 1 where organisation_id = $1 and code = $2', [org.id, first.code]);
+    await other.query('update catalogue_items set unit_cost = unit_cost - 1 where organisation_id = $1 and code = $2', [
+      org.id,
+      first.code,
+    ]);
     await other.query('delete from catalogue_items where organisation_id = $1 and code = $2', [org.id, code]);
   });
 
@@ -223,7 +243,9 @@ describe('when the feed is down', () => {
   it('asks the database on every read, so a change elsewhere shows at once, and listens again by itself', async () => {
     const feed = changeFeed();
     await getPanel(designer).expect(200);
-    await other.query(`select pg_terminate_backend(pid) from pg_stat_activity where application_name = 'panelwright-change-feed' and datname = current_database()`);
+    await other.query(
+      `select pg_terminate_backend(pid) from pg_stat_activity where application_name = 'panelwright-change-feed' and datname = current_database()`,
+    );
     await until('the feed to notice', async () => (feed.live ? undefined : true));
     // no notification can arrive now: the read itself must find the change
     const name = `Renamed while deaf ${uniq()}`;
@@ -242,7 +264,9 @@ describe('a connection that stops hearing', () => {
     const feed = changeFeed();
     feed.setHeartbeat(200, 150);
     // reconnect so that the short heartbeat applies
-    await other.query(`select pg_terminate_backend(pid) from pg_stat_activity where application_name = 'panelwright-change-feed' and datname = current_database()`);
+    await other.query(
+      `select pg_terminate_backend(pid) from pg_stat_activity where application_name = 'panelwright-change-feed' and datname = current_database()`,
+    );
     await until('the feed to notice', async () => (feed.live ? undefined : true));
     await until('the feed to listen again', async () => (feed.live ? true : undefined), 10_000);
     expect(await quietRead(designer)).toEqual([]);

@@ -60,9 +60,20 @@ describe('panel checks', () => {
       expect(r.code).toMatch(/^PW-|^\(unmatched/);
     }
     // every row at the lowest value is marked limiting, and no other
-    expect(rows.filter((r) => r.limiting).map((r) => `${r.location} ${r.code}`).sort()).toEqual(rows.filter((r) => r.ratingKa === lowest).map((r) => `${r.location} ${r.code}`).sort());
+    expect(
+      rows
+        .filter((r) => r.limiting)
+        .map((r) => `${r.location} ${r.code}`)
+        .sort(),
+    ).toEqual(
+      rows
+        .filter((r) => r.ratingKa === lowest)
+        .map((r) => `${r.location} ${r.code}`)
+        .sort(),
+    );
     // every bucket with a selection appears on the worksheet
-    for (const tag of ['P-101', 'P-102', 'P-110', 'C-201', 'K-301', 'M-401', 'V-501', 'H-601']) expect(rows.some((r) => r.location === tag)).toBe(true);
+    for (const tag of ['P-101', 'P-102', 'P-110', 'C-201', 'K-301', 'M-401', 'V-501', 'H-601'])
+      expect(rows.some((r) => r.location === tag)).toBe(true);
   });
 
   it('takes the tested combinations of breaker, contactor and overload relay (UL 508A SB4; invented demo combination data)', () => {
@@ -122,7 +133,11 @@ describe('panel checks', () => {
     expect(r.exceeded).toBe(35 + p / (5.5 * ae) > 40);
     if (r.exceeded) expect(r.cooling.excessW).toBeCloseTo(p - 5.5 * ae * (40 - 35), 0);
     // the drive of P-110 is counted at its load
-    expect((r.sources as Array<{ bucketTag: string | null; basis: string }>).some((s) => s.bucketTag === 'P-110' && /load|throughput/.test(s.basis))).toBe(true);
+    expect(
+      (r.sources as Array<{ bucketTag: string | null; basis: string }>).some(
+        (s) => s.bucketTag === 'P-110' && /load|throughput/.test(s.basis),
+      ),
+    ).toBe(true);
   });
 
   it('sizes the control power transformer and protects it per NEC 2023 430.72(C) and 450.3(B)', () => {
@@ -139,11 +154,17 @@ describe('panel checks', () => {
     expect(cp.secondary.basis).toContain('450.3(B)');
   });
 
-  it('checks every bucket\'s control wire against its control fuse, Table 430.72(B) column A (values from memory)', () => {
+  it("checks every bucket's control wire against its control fuse, Table 430.72(B) column A (values from memory)", () => {
     const cc = checks.controlConductors;
     expect(cc.basis).toContain('Table 430.72(B)');
     expect(cc.rows.length).toBeGreaterThan(0);
-    for (const r of cc.rows as Array<{ conductor: string; column: string; device: { kind: string; amps: number | null }; maxAmps: number; ok: boolean }>) {
+    for (const r of cc.rows as Array<{
+      conductor: string;
+      column: string;
+      device: { kind: string; amps: number | null };
+      maxAmps: number;
+      ok: boolean;
+    }>) {
       expect(r.column).toBe('A');
       expect(r.device.kind).toBe('control fuse');
       // 14 AWG Cu: Note 1, its ampacity (Table 310.16 60 °C, 15 A); 16 AWG Cu: 10 A
@@ -241,8 +262,12 @@ describe('SCCR verdict against the job', () => {
   it('flips when the available fault current is set above the panel SCCR', async () => {
     const designer = await signInAs('designer');
     const engineer = await signInAs('engineer');
-    const job = (await send(designer, 'post', '/api/jobs', { number: uniq(), name: 'Pump hall copy', availableFaultKa: 1, ambientC: 35 }).expect(201)).body;
-    const panel = (await send(designer, 'post', `/api/jobs/${job.id}/panels`, { name: 'MCC-1 copy', mounting: 'free-standing' }).expect(201)).body;
+    const job = (
+      await send(designer, 'post', '/api/jobs', { number: uniq(), name: 'Pump hall copy', availableFaultKa: 1, ambientC: 35 }).expect(201)
+    ).body;
+    const panel = (
+      await send(designer, 'post', `/api/jobs/${job.id}/panels`, { name: 'MCC-1 copy', mounting: 'free-standing' }).expect(201)
+    ).body;
     for (const answers of DEMO_MOTORS) await send(designer, 'post', `/api/panels/${panel.id}/loads`, { answers }).expect(201);
 
     const low = (await engineer.agent.get(`/api/panels/${panel.id}/checks`).expect(200)).body;

@@ -14,7 +14,14 @@ import type { CurrentUser, Role } from '../../shared/schemas/auth';
 async function actorOf(s: Session): Promise<CurrentUser> {
   const me = await s.agent.get('/api/auth/me').expect(200);
   const u = (await findUserById(me.body.id))!;
-  return { id: u.id, organisationId: u.organisationId, organisationName: u.organisationName, email: u.email, name: u.name, roles: u.roles as Role[] };
+  return {
+    id: u.id,
+    organisationId: u.organisationId,
+    organisationName: u.organisationName,
+    email: u.email,
+    name: u.name,
+    roles: u.roles as Role[],
+  };
 }
 
 /** Everything stored about one panel, as text: any change to any of its rows changes it. */
@@ -46,8 +53,12 @@ describe('concurrent edits and all-or-nothing writes', () => {
   async function newPanel(name: string) {
     const p = await send(designer, 'post', `/api/jobs/${jobId}/panels`, { name }).expect(201);
     const loads = [];
-    for (const answers of MOTORS) loads.push((await send(designer, 'post', `/api/panels/${p.body.id}/loads`, { answers }).expect(201)).body);
-    return { id: p.body.id as number, loads: loads as Array<{ id: number; version: number; tag: string; answers: Record<string, unknown> }> };
+    for (const answers of MOTORS)
+      loads.push((await send(designer, 'post', `/api/panels/${p.body.id}/loads`, { answers }).expect(201)).body);
+    return {
+      id: p.body.id as number,
+      loads: loads as Array<{ id: number; version: number; tag: string; answers: Record<string, unknown> }>,
+    };
   }
 
   beforeAll(async () => {
@@ -62,11 +73,16 @@ describe('concurrent edits and all-or-nothing writes', () => {
     const seenByDesigner = (await designer.agent.get(`/api/panels/${p.id}`).expect(200)).body;
     const seenByAdmin = (await admin.agent.get(`/api/panels/${p.id}`).expect(200)).body;
     expect(seenByAdmin.version).toBe(seenByDesigner.version);
-    await send(designer, 'patch', `/api/panels/${p.id}`, { description: 'Designer: add a space heater', version: seenByDesigner.version }).expect(200);
+    await send(designer, 'patch', `/api/panels/${p.id}`, {
+      description: 'Designer: add a space heater',
+      version: seenByDesigner.version,
+    }).expect(200);
     const late = await send(admin, 'patch', `/api/panels/${p.id}`, { description: 'Admin: no heater', version: seenByAdmin.version });
     expect(late.status).toBe(409);
     expect(late.body.error.code).toBe('conflict');
-    expect(late.body.error.message).toBe('Someone else changed panel Two editors since you opened it: reload to see their change, then apply yours again');
+    expect(late.body.error.message).toBe(
+      'Someone else changed panel Two editors since you opened it: reload to see their change, then apply yours again',
+    );
     const now = (await admin.agent.get(`/api/panels/${p.id}`).expect(200)).body;
     expect(now.description).toBe('Designer: add a space heater');
     expect(now.version).toBe(seenByDesigner.version + 1);
@@ -78,7 +94,9 @@ describe('concurrent edits and all-or-nothing writes', () => {
     await send(designer, 'put', `/api/loads/${m.id}`, { answers: { ...m.answers, hp: 25 }, version: m.version }).expect(200);
     const late = await send(admin, 'put', `/api/loads/${m.id}`, { answers: { ...m.answers, hp: 30 }, version: m.version });
     expect(late.status).toBe(409);
-    expect(late.body.error.message).toBe('Someone else changed motor P-1 since you opened it: reload to see their change, then apply yours again');
+    expect(late.body.error.message).toBe(
+      'Someone else changed motor P-1 since you opened it: reload to see their change, then apply yours again',
+    );
     const stored = (await Load.findByPk(m.id))!;
     expect(stored.answers.hp).toBe(25);
     expect(stored.version).toBe(m.version + 1);
@@ -102,7 +120,10 @@ describe('concurrent edits and all-or-nothing writes', () => {
     const p = await newPanel('Override race');
     const m = p.loads[0];
     await send(designer, 'put', `/api/loads/${m.id}`, { answers: { ...m.answers, hp: 25 }, version: m.version }).expect(200);
-    const late = await send(admin, 'put', `/api/loads/${m.id}/overrides`, { overrides: [{ field: 'enclosure.nemaType', value: '4X', justification: 'Spray area beside the clarifier' }], version: m.version });
+    const late = await send(admin, 'put', `/api/loads/${m.id}/overrides`, {
+      overrides: [{ field: 'enclosure.nemaType', value: '4X', justification: 'Spray area beside the clarifier' }],
+      version: m.version,
+    });
     expect(late.status).toBe(409);
     expect(late.body.error.message).toMatch(/^Someone else changed motor P-1/);
     expect((await Load.findByPk(m.id))!.overrides).toEqual([]);
@@ -120,7 +141,9 @@ describe('concurrent edits and all-or-nothing writes', () => {
     expect(before.bom.length).toBeGreaterThan(0);
     expect(before.revisions).toBe('');
 
-    await expect(approvePanel(eng, p.id, v, 'looks fine, fault study pending', { failAfterFreeze: true, acknowledgeSccr: true })).rejects.toThrow(/failure injected/);
+    await expect(
+      approvePanel(eng, p.id, v, 'looks fine, fault study pending', { failAfterFreeze: true, acknowledgeSccr: true }),
+    ).rejects.toThrow(/failure injected/);
     const after = await panelState(p.id);
     expect(after).toEqual(before);
     const detail = (await designer.agent.get(`/api/panels/${p.id}`).expect(200)).body;
@@ -142,7 +165,11 @@ describe('concurrent edits and all-or-nothing writes', () => {
     await Load.update({ answers: { ...p.loads[2].answers, dcField: 'shunt' } as Load['answers'] }, { where: { id: p.loads[2].id } });
     const before = await panelState(p.id);
     const v = (await designer.agent.get(`/api/panels/${p.id}`).expect(200)).body.version;
-    const r = await send(designer, 'post', `/api/panels/${p.id}/loads/bulk-edit`, { loadIds: p.loads.map((l) => l.id), changes: { critical: true }, panelVersion: v });
+    const r = await send(designer, 'post', `/api/panels/${p.id}/loads/bulk-edit`, {
+      loadIds: p.loads.map((l) => l.id),
+      changes: { critical: true },
+      panelVersion: v,
+    });
     expect(r.status).toBe(400);
     expect(r.body.error.code).toBe('validation_failed');
     expect(r.body.error.details.map((d: { path: string }) => d.path)).toContain('loads[2].dcField');
@@ -150,13 +177,21 @@ describe('concurrent edits and all-or-nothing writes', () => {
 
     // one motor of another panel among the ids: refused, nothing changed either
     const other = await newPanel('Bulk edit, other panel');
-    const r2 = await send(designer, 'post', `/api/panels/${p.id}/loads/bulk-edit`, { loadIds: [p.loads[0].id, other.loads[0].id], changes: { critical: true }, panelVersion: v });
+    const r2 = await send(designer, 'post', `/api/panels/${p.id}/loads/bulk-edit`, {
+      loadIds: [p.loads[0].id, other.loads[0].id],
+      changes: { critical: true },
+      panelVersion: v,
+    });
     expect(r2.status).toBe(404);
     expect(await panelState(p.id)).toEqual(before);
 
     // with the motor's answers repaired, the same request goes through and changes every motor
     await Load.update({ answers: p.loads[2].answers as Load['answers'] }, { where: { id: p.loads[2].id } });
-    const ok = await send(designer, 'post', `/api/panels/${p.id}/loads/bulk-edit`, { loadIds: p.loads.map((l) => l.id), changes: { critical: true }, panelVersion: v }).expect(200);
+    const ok = await send(designer, 'post', `/api/panels/${p.id}/loads/bulk-edit`, {
+      loadIds: p.loads.map((l) => l.id),
+      changes: { critical: true },
+      panelVersion: v,
+    }).expect(200);
     expect(ok.body.updated).toBe(3);
     for (const l of p.loads) expect((await Load.findByPk(l.id))!.answers.critical).toBe(true);
   });

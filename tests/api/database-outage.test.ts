@@ -132,11 +132,15 @@ describe('while the database is unreachable', () => {
     expect(isDatabaseUnavailable(new ConnectionRefusedError(refused))).toBe(true); // Sequelize
     expect(isDatabaseUnavailable(refused)).toBe(true); // node-postgres (session store, change feed)
     expect(isDatabaseUnavailable(new Error('Connection terminated unexpectedly'))).toBe(true);
-    expect(isDatabaseUnavailable(Object.assign(new Error('terminating connection due to administrator command'), { code: '57P01' }))).toBe(true);
+    expect(isDatabaseUnavailable(Object.assign(new Error('terminating connection due to administrator command'), { code: '57P01' }))).toBe(
+      true,
+    );
     expect(isDatabaseUnavailable(Object.assign(new Error('the database system is starting up'), { code: '57P03' }))).toBe(true);
     expect(isDatabaseUnavailable({ name: 'SequelizeDatabaseError', parent: { code: '08006', message: 'connection failure' } })).toBe(true);
     // a query the database refused is a fault, not an outage
-    expect(isDatabaseUnavailable(Object.assign(new Error('value "481025102958626" is out of range for type integer'), { code: '22003' }))).toBe(false);
+    expect(
+      isDatabaseUnavailable(Object.assign(new Error('value "481025102958626" is out of range for type integer'), { code: '22003' })),
+    ).toBe(false);
     expect(isDatabaseUnavailable(new TypeError('x is undefined'))).toBe(false);
     expect(isDatabaseUnavailable(null)).toBe(false);
   });
@@ -146,7 +150,9 @@ describe('while the database is unreachable', () => {
     const error = vi.spyOn(console, 'error');
     try {
       const before = await counts();
-      await send(designer, 'post', `/api/panels/${panelId}/loads`, { answers: { tag: 'P-1', supply: 'ac3', hp: 10, volts: 460 } }).expect(201);
+      await send(designer, 'post', `/api/panels/${panelId}/loads`, { answers: { tag: 'P-1', supply: 'ac3', hp: 10, volts: 460 } }).expect(
+        201,
+      );
       const withOne = await counts();
       expect(withOne.loads).toBe(before.loads + 1);
 
@@ -155,11 +161,20 @@ describe('while the database is unreachable', () => {
       const anonymousAgent = request.agent(app);
       expectUnavailable(await designer.agent.get('/api/auth/me'), 'GET /api/auth/me');
       expectUnavailable(await designer.agent.get(`/api/panels/${panelId}`), 'GET panel');
-      expectUnavailable(await send(designer, 'post', `/api/panels/${panelId}/loads`, { answers: { tag: 'P-2', supply: 'ac3', hp: 15, volts: 460 } }), 'POST motor');
-      expectUnavailable(await send(designer, 'patch', `/api/jobs/${jobId}`, { name: 'Renamed during the outage', version: 0 }), 'PATCH job');
+      expectUnavailable(
+        await send(designer, 'post', `/api/panels/${panelId}/loads`, { answers: { tag: 'P-2', supply: 'ac3', hp: 15, volts: 460 } }),
+        'POST motor',
+      );
+      expectUnavailable(
+        await send(designer, 'patch', `/api/jobs/${jobId}`, { name: 'Renamed during the outage', version: 0 }),
+        'PATCH job',
+      );
       const csrf = (await anonymousAgent.get('/api/auth/csrf').expect(200)).body.token as string; // needs no database
       const u = demoUser('designer');
-      expectUnavailable(await anonymousAgent.post('/api/auth/sign-in').set('x-csrf-token', csrf).send({ email: u.email, password: u.password }), 'sign-in');
+      expectUnavailable(
+        await anonymousAgent.post('/api/auth/sign-in').set('x-csrf-token', csrf).send({ email: u.email, password: u.password }),
+        'sign-in',
+      );
       expect(error).not.toHaveBeenCalledWith(expect.stringMatching(/^\[error\]/), expect.anything());
 
       await relay.open();
@@ -173,7 +188,9 @@ describe('while the database is unreachable', () => {
       expect(after).toEqual(withOne);
       const job = await direct.query<{ name: string }>('select name from jobs where id = $1', [jobId]);
       expect(job.rows[0]!.name).toBe('Outage job');
-      await send(designer, 'post', `/api/panels/${panelId}/loads`, { answers: { tag: 'P-2', supply: 'ac3', hp: 15, volts: 460 } }).expect(201);
+      await send(designer, 'post', `/api/panels/${panelId}/loads`, { answers: { tag: 'P-2', supply: 'ac3', hp: 15, volts: 460 } }).expect(
+        201,
+      );
       expect((await counts()).loads).toBe(withOne.loads + 1);
     } finally {
       await relay.open();
@@ -194,7 +211,9 @@ describe('while the database is unreachable', () => {
           setImmediate(() => void relay.close());
         }
       };
-      const r = await send(designer, 'post', `/api/panels/${panelId}/loads`, { answers: { tag: 'P-3', supply: 'ac3', hp: 20, volts: 460 } });
+      const r = await send(designer, 'post', `/api/panels/${panelId}/loads`, {
+        answers: { tag: 'P-3', supply: 'ac3', hp: 20, volts: 460 },
+      });
       relay.onClientData = null;
       expect(cut, 'the relay saw the insert').toBe(true);
       expectUnavailable(r, 'POST motor cut mid-transaction');

@@ -18,7 +18,11 @@ function binary(res: unknown, cb: (err: Error | null, body: Buffer) => void) {
   stream.on('end', () => cb(null, Buffer.concat(chunks)));
 }
 
-const csvRows = (text: string) => text.trim().split('\r\n').map((l) => l.split(','));
+const csvRows = (text: string) =>
+  text
+    .trim()
+    .split('\r\n')
+    .map((l) => l.split(','));
 
 describe('panel drawings', () => {
   let engineer: Session;
@@ -37,9 +41,20 @@ describe('panel drawings', () => {
       const svg = await s.agent.get(`${base}/schematic.svg`).expect(200);
       expect(svg.headers['content-type']).toMatch(/^image\/svg\+xml/);
       await s.agent.get(`${base}/nameplate.svg`).expect(200).expect('content-type', /svg/);
-      await s.agent.get(`${base}/wires.csv`).expect(200).expect('content-type', /text\/csv/);
-      await s.agent.get(`${base}/terminals.csv`).expect(200).expect('content-type', /text\/csv/);
-      await s.agent.get(`${base}/wiring.xlsx`).buffer(true).parse(binary).expect(200).expect('content-type', /spreadsheetml/);
+      await s.agent
+        .get(`${base}/wires.csv`)
+        .expect(200)
+        .expect('content-type', /text\/csv/);
+      await s.agent
+        .get(`${base}/terminals.csv`)
+        .expect(200)
+        .expect('content-type', /text\/csv/);
+      await s.agent
+        .get(`${base}/wiring.xlsx`)
+        .buffer(true)
+        .parse(binary)
+        .expect(200)
+        .expect('content-type', /spreadsheetml/);
     }
   });
 
@@ -50,22 +65,32 @@ describe('panel drawings', () => {
     expect(text).toContain('Wye-delta, open transition');
     expect(text).not.toContain('C-201 Screenings conveyor');
     await engineer.agent.get(`/api/panels/${panelId}/drawings/schematic.svg?tag=NOPE-1`).expect(404);
-    const all = (await engineer.agent.get(`/api/panels/${panelId}/drawings/schematic.svg`).buffer(true).parse(binary).expect(200)).body.toString('utf8');
+    const all = (
+      await engineer.agent.get(`/api/panels/${panelId}/drawings/schematic.svg`).buffer(true).parse(binary).expect(200)
+    ).body.toString('utf8');
     for (const tag of ['P-101', 'C-201', 'K-301', 'H-601']) expect(all).toContain(`${tag} `);
     expect(all).toContain('IEEE 315 / NEMA ICS 19');
   });
 
   it('lists as many terminals as the bill of materials holds terminal blocks (one source)', async () => {
-    const bom = (await engineer.agent.get(`/api/panels/${panelId}/bom`).expect(200)).body as { lines: Array<{ category: string; quantity: number }> };
+    const bom = (await engineer.agent.get(`/api/panels/${panelId}/bom`).expect(200)).body as {
+      lines: Array<{ category: string; quantity: number }>;
+    };
     const blocks = bom.lines.filter((l) => l.category === 'terminal-block').reduce((n, l) => n + l.quantity, 0);
-    const d = (await engineer.agent.get(`/api/panels/${panelId}/drawings`).expect(200)).body as { terminals: Array<{ inBom: boolean }>; bomTerminalBlocks: number; sheets: Array<{ number: string }> };
+    const d = (await engineer.agent.get(`/api/panels/${panelId}/drawings`).expect(200)).body as {
+      terminals: Array<{ inBom: boolean }>;
+      bomTerminalBlocks: number;
+      sheets: Array<{ number: string }>;
+    };
     expect(blocks).toBeGreaterThan(0);
     expect(d.bomTerminalBlocks).toBe(blocks);
     expect(d.terminals.length).toBe(blocks);
     const csv = (await engineer.agent.get(`/api/panels/${panelId}/drawings/terminals.csv`).expect(200)).text;
     expect(csvRows(csv).length - 1).toBe(blocks);
     const wb = new ExcelJS.Workbook();
-    await wb.xlsx.load((await engineer.agent.get(`/api/panels/${panelId}/drawings/wiring.xlsx`).buffer(true).parse(binary).expect(200)).body);
+    await wb.xlsx.load(
+      (await engineer.agent.get(`/api/panels/${panelId}/drawings/wiring.xlsx`).buffer(true).parse(binary).expect(200)).body,
+    );
     expect(wb.getWorksheet('Terminals')!.rowCount - 1).toBe(blocks);
     const wires = (await engineer.agent.get(`/api/panels/${panelId}/drawings/wires.csv`).expect(200)).text;
     expect(wb.getWorksheet('Wires')!.rowCount).toBe(csvRows(wires).length);
@@ -73,8 +98,13 @@ describe('panel drawings', () => {
   });
 
   it('prints the nameplate with the checks’ full-load current and SCCR (NEC 2023 409.110)', async () => {
-    const checks = (await engineer.agent.get(`/api/panels/${panelId}/checks`).expect(200)).body as { nameplate: { result: { fullLoadAmps: number; lines: Array<{ label: string; value: string }> } }; sccr: { panelSccrKa: number | null } };
-    const svg = (await engineer.agent.get(`/api/panels/${panelId}/drawings/nameplate.svg`).buffer(true).parse(binary).expect(200)).body.toString('utf8');
+    const checks = (await engineer.agent.get(`/api/panels/${panelId}/checks`).expect(200)).body as {
+      nameplate: { result: { fullLoadAmps: number; lines: Array<{ label: string; value: string }> } };
+      sccr: { panelSccrKa: number | null };
+    };
+    const svg = (
+      await engineer.agent.get(`/api/panels/${panelId}/drawings/nameplate.svg`).buffer(true).parse(binary).expect(200)
+    ).body.toString('utf8');
     const flc = /class="np-full-load-current">([^<]+)</.exec(svg)?.[1];
     const sccr = /class="np-short-circuit-current-rating">([^<]+)</.exec(svg)?.[1];
     expect(flc).toBe(`${checks.nameplate.result.fullLoadAmps} A`);

@@ -58,11 +58,26 @@ const junk: fc.Arbitrary<J> = fc.letrec<{ value: J }>((tie) => ({
     { depthSize: 'small' },
     scalar,
     fc.array(tie('value'), { maxLength: 4 }),
-    fc.record({ entries: fc.array(fc.tuple(fc.oneof(fc.string({ maxLength: 8 }), fc.constantFrom(...PROTO_KEYS, 'roles', 'isAdmin')), tie('value')), { maxLength: 4 }) }),
+    fc.record({
+      entries: fc.array(fc.tuple(fc.oneof(fc.string({ maxLength: 8 }), fc.constantFrom(...PROTO_KEYS, 'roles', 'isAdmin')), tie('value')), {
+        maxLength: 4,
+      }),
+    }),
   ),
 })).value;
 
-const LOAD_KEYS = Object.keys((LoadSchema as unknown as { shape?: Record<string, unknown> }).shape ?? {}).concat(['tag', 'supply', 'hp', 'kw', 'volts', 'fla', 'singlePhaseType', 'dcField', 'conductor', 'scpdOverride']);
+const LOAD_KEYS = Object.keys((LoadSchema as unknown as { shape?: Record<string, unknown> }).shape ?? {}).concat([
+  'tag',
+  'supply',
+  'hp',
+  'kw',
+  'volts',
+  'fla',
+  'singlePhaseType',
+  'dcField',
+  'conductor',
+  'scpdOverride',
+]);
 /** Motor answers close to valid: the engine's field names with near-miss or junk values. */
 const answersArb: fc.Arbitrary<J> = fc.record({
   entries: fc.array(
@@ -82,13 +97,32 @@ function shapeKeys(schema: z.ZodType | undefined): string[] {
 /** Bodies for one route: malformed text, non-objects, and objects built from the route's own field names. */
 function bodies(route: AnyRoute): fc.Arbitrary<string> {
   const keys = shapeKeys(route.body);
-  const near = fc.constantFrom<J>(0, 1, 'x', 'A valid-looking name', true, false, [], { entries: [] }, new Date(0).toISOString(), 'wall-mounted', 'panelwright-job');
+  const near = fc.constantFrom<J>(
+    0,
+    1,
+    'x',
+    'A valid-looking name',
+    true,
+    false,
+    [],
+    { entries: [] },
+    new Date(0).toISOString(),
+    'wall-mounted',
+    'panelwright-job',
+  );
   const keyArb = keys.length
-    ? fc.oneof({ weight: 6, arbitrary: fc.constantFrom(...keys) }, { weight: 1, arbitrary: fc.constantFrom(...PROTO_KEYS, 'id', 'organisationId', 'roles', 'passwordHash') }, { weight: 1, arbitrary: fc.string({ maxLength: 10 }) })
+    ? fc.oneof(
+        { weight: 6, arbitrary: fc.constantFrom(...keys) },
+        { weight: 1, arbitrary: fc.constantFrom(...PROTO_KEYS, 'id', 'organisationId', 'roles', 'passwordHash') },
+        { weight: 1, arbitrary: fc.string({ maxLength: 10 }) },
+      )
     : fc.oneof(fc.constantFrom(...PROTO_KEYS, 'id', 'roles'), fc.string({ maxLength: 10 }));
   const valueFor = (k: string): fc.Arbitrary<J> => (k === 'answers' || k === 'changes' ? fc.oneof(answersArb, junk) : fc.oneof(junk, near));
   const objectBody = fc
-    .array(keyArb.chain((k) => valueFor(k).map((v): [string, J] => [k, v])), { maxLength: keys.length + 3 })
+    .array(
+      keyArb.chain((k) => valueFor(k).map((v): [string, J] => [k, v])),
+      { maxLength: keys.length + 3 },
+    )
     .map((entries) => toJson({ entries }));
   const raw = fc.constantFrom(
     '{"__proto__": {"roles": ["admin"], "isAdmin": true, "version": 0}}',
@@ -181,11 +215,17 @@ function expected(route: AnyRoute, text: string): Expected | null {
     return route.before?.length ? { status: 400, code: 'validation_failed', paths: ['file'] } : null;
   }
   const r = route.body.safeParse(parsed ?? {});
-  if (!r.success) return { status: 400, code: 'validation_failed', paths: zodIssues(r.error.issues).map((i) => (i.path ? `body.${i.path}` : 'body')) };
+  if (!r.success)
+    return { status: 400, code: 'validation_failed', paths: zodIssues(r.error.issues).map((i) => (i.path ? `body.${i.path}` : 'body')) };
   const answers = (r.data as { answers?: unknown }).answers;
   if (answers !== undefined) {
     const a = LoadSchema.safeParse(answers);
-    if (!a.success) return { status: 400, code: 'validation_failed', paths: zodIssues(a.error.issues).map((i) => (i.path ? `body.answers.${i.path}` : 'body.answers')) };
+    if (!a.success)
+      return {
+        status: 400,
+        code: 'validation_failed',
+        paths: zodIssues(a.error.issues).map((i) => (i.path ? `body.answers.${i.path}` : 'body.answers')),
+      };
   }
   return null;
 }
@@ -205,7 +245,10 @@ async function tableDigest() {
   );
   const out: Record<string, string> = {};
   for (const { name } of tables) {
-    const [row] = await db().query<{ n: number; h: string }>(`select count(*)::int as n, md5(coalesce(string_agg(t::text, '|' order by t::text), '')) as h from "${name}" t`, { type: QueryTypes.SELECT });
+    const [row] = await db().query<{ n: number; h: string }>(
+      `select count(*)::int as n, md5(coalesce(string_agg(t::text, '|' order by t::text), '')) as h from "${name}" t`,
+      { type: QueryTypes.SELECT },
+    );
     out[name] = `${row!.n}:${row!.h}`;
   }
   return out;
@@ -229,7 +272,8 @@ function checkShape(body: unknown, where: string) {
 
 describe('malformed input on every write route', () => {
   testApp();
-  const writeRoutes = () => routeTable.filter((r) => r.method !== 'get' && r.path !== '/api/auth/sign-in' && r.path !== '/api/auth/sign-out');
+  const writeRoutes = () =>
+    routeTable.filter((r) => r.method !== 'get' && r.path !== '/api/auth/sign-in' && r.path !== '/api/auth/sign-out');
   const sessions = new Map<DemoRole | null, Session>();
   let params: Record<string, string>;
   let before: Record<string, string>;
@@ -259,25 +303,42 @@ describe('malformed input on every write route', () => {
       const s = sessions.get(roleFor(route))!;
       const url = fill(route.path, params);
       const where = `${route.method.toUpperCase()} ${route.path}`;
-      await fc.assert(
-        fc.asyncProperty(bodies(route), async (text) => {
-          const want = expected(route, text);
-          fc.pre(want !== null);
-          const r = await s.agent[route.method as 'post'](url).set('x-csrf-token', s.token).set('content-type', 'application/json').send(text);
-          checked++;
-          const got = `${r.status} ${JSON.stringify(r.body).slice(0, 300)}`;
-          expect(r.headers['content-type'], `${where}: ${got}`).toMatch(/application\/json/);
-          checkShape(r.body, `${where}: ${got}`);
-          expect(r.status, `${where} body ${text.slice(0, 200)}: ${got}`).toBe(want!.status);
-          expect(r.body.error.code, `${where}: ${got}`).toBe(want!.code);
-          if (want!.paths) {
-            const paths = (r.body.error.details as Array<{ path: string; message: string }>).map((d) => d.path);
-            expect(paths.length, `${where}: ${got}`).toBeGreaterThan(0);
-            expect([...paths].sort(), `${where} body ${text.slice(0, 200)}`).toEqual([...want!.paths].sort());
-          }
-        }),
-        { numRuns: RUNS, maxSkipsPerRun: 50 },
-      ).catch((e: unknown) => failures.push(`${where}: ${e instanceof Error ? e.message.split('\n').filter((l) => !/^\s*at |Hint|^$/.test(l)).slice(0, 14).join('\n') : String(e)}`));
+      await fc
+        .assert(
+          fc.asyncProperty(bodies(route), async (text) => {
+            const want = expected(route, text);
+            fc.pre(want !== null);
+            const r = await s.agent[route.method as 'post'](url)
+              .set('x-csrf-token', s.token)
+              .set('content-type', 'application/json')
+              .send(text);
+            checked++;
+            const got = `${r.status} ${JSON.stringify(r.body).slice(0, 300)}`;
+            expect(r.headers['content-type'], `${where}: ${got}`).toMatch(/application\/json/);
+            checkShape(r.body, `${where}: ${got}`);
+            expect(r.status, `${where} body ${text.slice(0, 200)}: ${got}`).toBe(want!.status);
+            expect(r.body.error.code, `${where}: ${got}`).toBe(want!.code);
+            if (want!.paths) {
+              const paths = (r.body.error.details as Array<{ path: string; message: string }>).map((d) => d.path);
+              expect(paths.length, `${where}: ${got}`).toBeGreaterThan(0);
+              expect([...paths].sort(), `${where} body ${text.slice(0, 200)}`).toEqual([...want!.paths].sort());
+            }
+          }),
+          { numRuns: RUNS, maxSkipsPerRun: 50 },
+        )
+        .catch((e: unknown) =>
+          failures.push(
+            `${where}: ${
+              e instanceof Error
+                ? e.message
+                    .split('\n')
+                    .filter((l) => !/^\s*at |Hint|^$/.test(l))
+                    .slice(0, 14)
+                    .join('\n')
+                : String(e)
+            }`,
+          ),
+        );
     }
     expect(failures).toEqual([]);
     expect(checked).toBeGreaterThan(writeRoutes().length * 10);
@@ -285,7 +346,21 @@ describe('malformed input on every write route', () => {
 
   it('answers junk path parameters with 400 naming the parameter, or 404, never a 500', async () => {
     // a small, fixed set: every value on every parameter of every route
-    const junkParams = ['0', '-1', 'abc', '1.5', '1e400', 'NaN', 'Infinity', '99999999999999999999', '2147483648', '1%3Bdrop', '%00', '%2e%2e', '%F0%9F%94%8C'];
+    const junkParams = [
+      '0',
+      '-1',
+      'abc',
+      '1.5',
+      '1e400',
+      'NaN',
+      'Infinity',
+      '99999999999999999999',
+      '2147483648',
+      '1%3Bdrop',
+      '%00',
+      '%2e%2e',
+      '%F0%9F%94%8C',
+    ];
     const failures: string[] = [];
     let checked = 0;
     for (const route of routeTable.filter((r) => /:\w+/.test(r.path) && r.path !== '/api/auth/sign-out')) {
@@ -293,7 +368,10 @@ describe('malformed input on every write route', () => {
       for (const name of [...route.path.matchAll(/:(\w+)/g)].map((m) => m[1]!)) {
         for (const value of junkParams) {
           const url = fill(route.path, { ...params, [name]: value });
-          const r = route.method === 'get' ? await s.agent.get(url) : await s.agent[route.method as 'post'](url).set('x-csrf-token', s.token).send({});
+          const r =
+            route.method === 'get'
+              ? await s.agent.get(url)
+              : await s.agent[route.method as 'post'](url).set('x-csrf-token', s.token).send({});
           checked++;
           const where = `${route.method.toUpperCase()} ${route.path} ${name}=${value}: ${r.status} ${JSON.stringify(r.body).slice(0, 200)}`;
           if (r.status >= 500) failures.push(where);
@@ -302,7 +380,12 @@ describe('malformed input on every write route', () => {
           else if (!r.body?.error || typeof r.body.error.message !== 'string') failures.push(`${where} (not the error shape)`);
           else if (r.status === 400) {
             const paths = ((r.body.error.details ?? []) as Array<{ path: string }>).map((d) => d.path);
-            if (r.body.error.code !== 'validation_failed' || paths.length === 0 || !paths.every((p) => /^(params\.\w+|query\.\w+|body(\.|$)|file$)/.test(p))) failures.push(`${where} (field not named)`);
+            if (
+              r.body.error.code !== 'validation_failed' ||
+              paths.length === 0 ||
+              !paths.every((p) => /^(params\.\w+|query\.\w+|body(\.|$)|file$)/.test(p))
+            )
+              failures.push(`${where} (field not named)`);
           }
         }
       }
@@ -321,11 +404,14 @@ describe('malformed input on every write route', () => {
       const fields = integerFields(route.body);
       for (const path of fields) {
         for (const big of BIG_INTEGERS) {
-          const r = await s.agent[route.method as 'post'](url).set('x-csrf-token', s.token).send(bodyWith(path, big) as object);
+          const r = await s.agent[route.method as 'post'](url)
+            .set('x-csrf-token', s.token)
+            .send(bodyWith(path, big) as object);
           checked++;
           const where = `${route.method.toUpperCase()} ${route.path} ${issuePath(path)}=${big}: ${r.status} ${JSON.stringify(r.body).slice(0, 300)}`;
           const named = ((r.body?.error?.details ?? []) as Array<{ path: string }>).map((d) => d.path);
-          if (r.status !== 400 || r.body?.error?.code !== 'validation_failed' || !named.includes(`body.${issuePath(path)}`)) failures.push(where);
+          if (r.status !== 400 || r.body?.error?.code !== 'validation_failed' || !named.includes(`body.${issuePath(path)}`))
+            failures.push(where);
         }
       }
     }
@@ -336,21 +422,68 @@ describe('malformed input on every write route', () => {
 
   it('refuses the archive with version 481025102958626 (the value that reached PostgreSQL as "out of range for type integer") and its kin, with every other field valid', async () => {
     const cases: Array<{ role: DemoRole; method: 'post' | 'patch'; path: string; body: Record<string, unknown>; field: string }> = [
-      { role: 'designer', method: 'post', path: '/api/panels/:panelId/archive', body: { archived: true, version: 481025102958626 }, field: 'body.version' },
-      { role: 'designer', method: 'post', path: '/api/panels/:panelId/archive', body: { archived: false, version: INT4_MAX + 1 }, field: 'body.version' },
-      { role: 'designer', method: 'post', path: '/api/jobs/:id/archive', body: { archived: true, version: 2 ** 53 - 1 }, field: 'body.version' },
-      { role: 'designer', method: 'patch', path: '/api/jobs/:id', body: { name: 'Renamed by a big version', version: 481025102958626 }, field: 'body.version' },
-      { role: 'designer', method: 'post', path: '/api/panels/:panelId/reselect', body: { version: 481025102958626 }, field: 'body.version' },
-      { role: 'designer', method: 'post', path: '/api/panels/:panelId/comments', body: { body: 'A comment on a motor', loadId: 481025102958626 }, field: 'body.loadId' },
-      { role: 'admin', method: 'patch', path: '/api/users/:id', body: { name: 'Big version', version: INT4_MAX + 1 }, field: 'body.version' },
+      {
+        role: 'designer',
+        method: 'post',
+        path: '/api/panels/:panelId/archive',
+        body: { archived: true, version: 481025102958626 },
+        field: 'body.version',
+      },
+      {
+        role: 'designer',
+        method: 'post',
+        path: '/api/panels/:panelId/archive',
+        body: { archived: false, version: INT4_MAX + 1 },
+        field: 'body.version',
+      },
+      {
+        role: 'designer',
+        method: 'post',
+        path: '/api/jobs/:id/archive',
+        body: { archived: true, version: 2 ** 53 - 1 },
+        field: 'body.version',
+      },
+      {
+        role: 'designer',
+        method: 'patch',
+        path: '/api/jobs/:id',
+        body: { name: 'Renamed by a big version', version: 481025102958626 },
+        field: 'body.version',
+      },
+      {
+        role: 'designer',
+        method: 'post',
+        path: '/api/panels/:panelId/reselect',
+        body: { version: 481025102958626 },
+        field: 'body.version',
+      },
+      {
+        role: 'designer',
+        method: 'post',
+        path: '/api/panels/:panelId/comments',
+        body: { body: 'A comment on a motor', loadId: 481025102958626 },
+        field: 'body.loadId',
+      },
+      {
+        role: 'admin',
+        method: 'patch',
+        path: '/api/users/:id',
+        body: { name: 'Big version', version: INT4_MAX + 1 },
+        field: 'body.version',
+      },
     ];
     for (const c of cases) {
       const s = sessions.get(c.role)!;
-      const r = await s.agent[c.method](fill(c.path, { ...params, id: c.path.startsWith('/api/users') ? params.userId! : params.id! })).set('x-csrf-token', s.token).send(c.body);
+      const r = await s.agent[c.method](fill(c.path, { ...params, id: c.path.startsWith('/api/users') ? params.userId! : params.id! }))
+        .set('x-csrf-token', s.token)
+        .send(c.body);
       const where = `${c.method.toUpperCase()} ${c.path} ${JSON.stringify(c.body)}: ${r.status} ${JSON.stringify(r.body).slice(0, 300)}`;
       expect(r.status, where).toBe(400);
       expect(r.body.error.code, where).toBe('validation_failed');
-      expect((r.body.error.details as Array<{ path: string }>).map((d) => d.path), where).toEqual([c.field]);
+      expect(
+        (r.body.error.details as Array<{ path: string }>).map((d) => d.path),
+        where,
+      ).toEqual([c.field]);
     }
     // the same numbers as path parameters
     const s = sessions.get('designer')!;

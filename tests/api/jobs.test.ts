@@ -63,7 +63,15 @@ describe('jobs', () => {
   it("never shows another organisation's job, by list or by id", async () => {
     const org = await Organisation.create({ name: 'Other shop (test)' });
     const email = `other.${Date.now()}@other.test`;
-    await User.create({ organisationId: org.id, email, name: 'Other Designer', roles: ['designer'], passwordHash: await argon2.hash('other-shop-pass-1'), inviteToken: null, lastSignInAt: null });
+    await User.create({
+      organisationId: org.id,
+      email,
+      name: 'Other Designer',
+      roles: ['designer'],
+      passwordHash: await argon2.hash('other-shop-pass-1'),
+      inviteToken: null,
+      lastSignInAt: null,
+    });
     const other = await signIn(email, 'other-shop-pass-1');
     const mine = await signInAs('designer');
     const job = (await send(mine, 'post', '/api/jobs', { number: uniq(), name: 'Private job' }).expect(201)).body;
@@ -86,7 +94,12 @@ describe('error contract', () => {
 
   it('answers malformed JSON with 400 JSON and no stack trace', async () => {
     const s = await signInAs('designer');
-    const r = await s.agent.post('/api/jobs').set('x-csrf-token', s.token).set('content-type', 'application/json').send('{"number": ').expect(400);
+    const r = await s.agent
+      .post('/api/jobs')
+      .set('x-csrf-token', s.token)
+      .set('content-type', 'application/json')
+      .send('{"number": ')
+      .expect(400);
     expect(r.body.error.code).toBe('bad_json');
     expect(r.text).not.toMatch(/node_modules|at .*\(/);
   });

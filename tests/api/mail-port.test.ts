@@ -34,7 +34,9 @@ describe('the development mail fake on a held port', () => {
   });
 
   it('refuses a held port asked for explicitly, naming the variable', async () => {
-    await expect(startFakeSmtp(held, { explicit: 'PW_SMTP_FAKE_PORT' })).rejects.toThrow(`Port ${held} (PW_SMTP_FAKE_PORT) is held by another program`);
+    await expect(startFakeSmtp(held, { explicit: 'PW_SMTP_FAKE_PORT' })).rejects.toThrow(
+      `Port ${held} (PW_SMTP_FAKE_PORT) is held by another program`,
+    );
   });
 
   it('otherwise takes the next free port, and the mail sent reaches the Outbox', async () => {

@@ -46,7 +46,10 @@ describe('role matrix', () => {
         const ok = allowed(route, who);
         const expected = ok ? 'not 401/403' : who ? '403' : '401';
         const good = ok ? r.status !== 401 && r.status !== 403 && r.status < 500 : r.status === (who ? 403 : 401);
-        if (!good) failures.push(`${route.method.toUpperCase()} ${route.path}: ${r.status} (expected ${expected}) ${JSON.stringify(r.body).slice(0, 160)}`);
+        if (!good)
+          failures.push(
+            `${route.method.toUpperCase()} ${route.path}: ${r.status} (expected ${expected}) ${JSON.stringify(r.body).slice(0, 160)}`,
+          );
         if (!ok) expect(r.body.error?.code).toBe(who ? 'forbidden' : 'unauthenticated');
         if (route.path === '/api/auth/sign-out' && who) s = await signInAs(who);
       }

@@ -27,12 +27,40 @@ async function otherOrganisation() {
   const stamp = Date.now().toString(36);
   const org = await Organisation.create({ name: `Brightwater Controls ${stamp} (fictional)` });
   const password = 'other-org-pass-2024';
-  const user = await User.create({ organisationId: org.id, email: `lead.${stamp}@brightwater.test`, name: 'Rosa Penhallow', roles: ['admin', 'designer'], passwordHash: await argon2.hash(password), inviteToken: null, lastSignInAt: null });
-  const job = await Job.create({ organisationId: org.id, number: 'J-2041', name: 'Other shop, same job number', archivedAt: null, createdBy: user.id });
-  const panel = await Panel.create({ organisationId: org.id, jobId: job.id, name: 'Other MCC', revisionNumber: null, archivedAt: null, rollup: null, submittedAt: null });
+  const user = await User.create({
+    organisationId: org.id,
+    email: `lead.${stamp}@brightwater.test`,
+    name: 'Rosa Penhallow',
+    roles: ['admin', 'designer'],
+    passwordHash: await argon2.hash(password),
+    inviteToken: null,
+    lastSignInAt: null,
+  });
+  const job = await Job.create({
+    organisationId: org.id,
+    number: 'J-2041',
+    name: 'Other shop, same job number',
+    archivedAt: null,
+    createdBy: user.id,
+  });
+  const panel = await Panel.create({
+    organisationId: org.id,
+    jobId: job.id,
+    name: 'Other MCC',
+    revisionNumber: null,
+    archivedAt: null,
+    rollup: null,
+    submittedAt: null,
+  });
   const answers = { tag: 'X-1', supply: 'ac3' as const, hp: 10, volts: 460 };
   const load = await Load.create({ organisationId: org.id, panelId: panel.id, tag: 'X-1', answers, selection: null, overrides: [] });
-  await Comment.create({ organisationId: org.id, panelId: panel.id, loadId: null, userId: user.id, body: 'Private note of the other shop' });
+  await Comment.create({
+    organisationId: org.id,
+    panelId: panel.id,
+    loadId: null,
+    userId: user.id,
+    body: 'Private note of the other shop',
+  });
   return { org, user, password, job, panel, load };
 }
 
@@ -47,7 +75,11 @@ describe('sessions and cross-site requests', () => {
     const first = await agent.get('/api/auth/csrf').expect(200);
     const planted = sessionCookie(first)!;
     const u = demoUser('designer');
-    const res = await agent.post('/api/auth/sign-in').set('x-csrf-token', first.body.token).send({ email: u.email, password: u.password }).expect(200);
+    const res = await agent
+      .post('/api/auth/sign-in')
+      .set('x-csrf-token', first.body.token)
+      .send({ email: u.email, password: u.password })
+      .expect(200);
     expect(sessionCookie(res)).not.toBe(planted);
     await agent.get('/api/auth/me').expect(200);
     // someone holding the pre-sign-in cookie (planted by an attacker) is not signed in
@@ -60,7 +92,10 @@ describe('sessions and cross-site requests', () => {
   it('refuses a CSRF token that belongs to another session', async () => {
     const a = await signInAs('designer');
     const b = await signInAs('admin');
-    const r = await a.agent.post('/api/jobs').set('x-csrf-token', b.token).send({ number: `X-${Date.now()}`, name: 'Forged' });
+    const r = await a.agent
+      .post('/api/jobs')
+      .set('x-csrf-token', b.token)
+      .send({ number: `X-${Date.now()}`, name: 'Forged' });
     expect(r.status).toBe(403);
     expect(r.body.error.code).toBe('csrf_failed');
   });
@@ -68,7 +103,12 @@ describe('sessions and cross-site requests', () => {
   it('refuses a cross-site form post carrying the victim cookie (no token header; token in body or query ignored)', async () => {
     const s = await signInAs('designer');
     const number = `XS-${Date.now()}`;
-    const form = await s.agent.post('/api/jobs').set('origin', 'https://attacker.invalid').set('referer', 'https://attacker.invalid/page').type('form').send({ number, name: 'Cross-site', _csrf: s.token });
+    const form = await s.agent
+      .post('/api/jobs')
+      .set('origin', 'https://attacker.invalid')
+      .set('referer', 'https://attacker.invalid/page')
+      .type('form')
+      .send({ number, name: 'Cross-site', _csrf: s.token });
     expect(form.status).toBe(403);
     expect(form.body.error.code).toBe('csrf_failed');
     const inBody = await s.agent.post('/api/jobs').send({ number, name: 'Cross-site', csrfToken: s.token, _csrf: s.token });
@@ -82,14 +122,20 @@ describe('sessions and cross-site requests', () => {
     const r = await request(testApp()).get('/api/auth/csrf').set('origin', 'https://attacker.invalid').expect(200);
     expect(r.headers['access-control-allow-origin']).toBeUndefined();
     expect(r.headers['access-control-allow-credentials']).toBeUndefined();
-    const pre = await request(testApp()).options('/api/jobs').set('origin', 'https://attacker.invalid').set('access-control-request-method', 'POST');
+    const pre = await request(testApp())
+      .options('/api/jobs')
+      .set('origin', 'https://attacker.invalid')
+      .set('access-control-request-method', 'POST');
     expect(pre.headers['access-control-allow-origin']).toBeUndefined();
   });
 
   it('refuses the old CSRF token and cookie after sign-out', async () => {
     const s = await signInAs('designer');
     await send(s, 'post', '/api/auth/sign-out').expect(204);
-    const r = await s.agent.post('/api/jobs').set('x-csrf-token', s.token).send({ number: `SO-${Date.now()}`, name: 'After sign-out' });
+    const r = await s.agent
+      .post('/api/jobs')
+      .set('x-csrf-token', s.token)
+      .send({ number: `SO-${Date.now()}`, name: 'After sign-out' });
     expect(r.status).toBe(403);
     expect(r.body.error.code).toBe('csrf_failed');
   });
@@ -105,14 +151,17 @@ describe('sign-in throttling', () => {
       const s = await anonymous(app);
       const target = demoUser('engineer');
       const statuses: number[] = [];
-      for (let i = 0; i < 4; i++) statuses.push((await send(s, 'post', '/api/auth/sign-in', { email: target.email, password: `guess-number-${i}` })).status);
+      for (let i = 0; i < 4; i++)
+        statuses.push((await send(s, 'post', '/api/auth/sign-in', { email: target.email, password: `guess-number-${i}` })).status);
       expect(statuses).toEqual([401, 401, 401, 401]);
       const locked = await send(s, 'post', '/api/auth/sign-in', { email: target.email, password: target.password });
       expect(locked.status).toBe(429);
       expect(locked.body.error.code).toBe('too_many_requests');
       expect(locked.headers['ratelimit-policy'] ?? locked.headers.ratelimit).toBeDefined();
       // the same address in another case is the same account: still locked
-      expect((await send(s, 'post', '/api/auth/sign-in', { email: target.email.toUpperCase(), password: target.password })).status).toBe(429);
+      expect((await send(s, 'post', '/api/auth/sign-in', { email: target.email.toUpperCase(), password: target.password })).status).toBe(
+        429,
+      );
       // another person signing in from the same place is not locked out
       const other = demoUser('estimator');
       expect((await send(s, 'post', '/api/auth/sign-in', { email: other.email, password: other.password })).status).toBe(200);
@@ -129,13 +178,20 @@ describe('roles', () => {
     const me = (await designer.agent.get('/api/auth/me').expect(200)).body;
     // the people routes are the administrator's
     expect((await send(designer, 'patch', `/api/users/${me.id}`, { roles: ['admin'], version: 0 })).status).toBe(403);
-    expect((await send(designer, 'post', '/api/users', { email: `sock.${Date.now()}@copperline.test`, name: 'Sock Puppet', roles: ['admin'] })).status).toBe(403);
+    expect(
+      (await send(designer, 'post', '/api/users', { email: `sock.${Date.now()}@copperline.test`, name: 'Sock Puppet', roles: ['admin'] }))
+        .status,
+    ).toBe(403);
     // mass assignment through other routes and the sign-in body is ignored or refused
     const u = demoUser('designer');
     const again = await signIn(u.email, u.password);
     const re = await send(again, 'post', '/api/auth/sign-in', { email: u.email, password: u.password, roles: ['admin'] }).expect(200);
     again.token = re.body.token;
-    const raw = await again.agent.post('/api/jobs').set('x-csrf-token', again.token).set('content-type', 'application/json').send(`{"number": "PP-${Date.now()}", "name": "Proto", "__proto__": {"roles": ["admin"]}, "roles": ["admin"]}`);
+    const raw = await again.agent
+      .post('/api/jobs')
+      .set('x-csrf-token', again.token)
+      .set('content-type', 'application/json')
+      .send(`{"number": "PP-${Date.now()}", "name": "Proto", "__proto__": {"roles": ["admin"]}, "roles": ["admin"]}`);
     expect([201, 400]).toContain(raw.status);
     const after = (await again.agent.get('/api/auth/me').expect(200)).body;
     expect(after.roles).toEqual(['designer']);
@@ -145,7 +201,10 @@ describe('roles', () => {
     const list = (await admin.agent.get('/api/users').expect(200)).body as Array<{ id: number; version: number; email: string }>;
     const target = list.find((x) => x.email === u.email)!;
     for (const field of ['passwordHash', 'organisationId', 'inviteToken', 'email']) {
-      const r = await send(admin, 'patch', `/api/users/${target.id}`, { [field]: field === 'organisationId' ? 999 : 'x', version: target.version });
+      const r = await send(admin, 'patch', `/api/users/${target.id}`, {
+        [field]: field === 'organisationId' ? 999 : 'x',
+        version: target.version,
+      });
       expect(r.status, field).toBe(400);
       expect(r.body.error.details[0].path, field).toBe('body');
     }
@@ -181,7 +240,13 @@ describe('another organisation’s data', () => {
   });
 
   it('answers 404 to every read route given the other organisation’s ids', async () => {
-    const ids: Record<string, string> = { id: String(other.job.id), panelId: String(other.panel.id), loadId: String(other.load.id), userId: String(other.user.id), number: '0' };
+    const ids: Record<string, string> = {
+      id: String(other.job.id),
+      panelId: String(other.panel.id),
+      loadId: String(other.load.id),
+      userId: String(other.user.id),
+      number: '0',
+    };
     const leaks: string[] = [];
     for (const route of routeTable.filter((r) => r.method === 'get' && /:(id|panelId|loadId)\b/.test(r.path))) {
       const query = /change-report(\.xlsx)?$/.test(route.path) ? '?from=0&to=0' : '';
@@ -191,7 +256,8 @@ describe('another organisation’s data', () => {
       // timestamp inside the file
       const r = await admin.agent.get(`${url}${query}`);
       if (r.status !== 404) leaks.push(`${route.path}: ${r.status} ${JSON.stringify(r.body).slice(0, 120)}`);
-      if (JSON.stringify(r.body ?? '').includes('Private note') || JSON.stringify(r.body ?? '').includes('Other MCC')) leaks.push(`${route.path}: shows the other organisation's data`);
+      if (JSON.stringify(r.body ?? '').includes('Private note') || JSON.stringify(r.body ?? '').includes('Other MCC'))
+        leaks.push(`${route.path}: shows the other organisation's data`);
     }
     expect(leaks).toEqual([]);
     const jobs = (await admin.agent.get('/api/jobs').expect(200)).body as Array<{ id: number }>;
@@ -204,7 +270,7 @@ describe('another organisation’s data', () => {
       const theirs = await signIn(other.user.email, other.password);
       const theirQueue = (await theirs.agent.get('/api/sign-off-queue').expect(200)).body as Array<{ panelId: number }>;
       expect(theirQueue.map((q) => q.panelId)).toContain(other.panel.id);
-      const ours = (await admin.agent.get('/api/sign-off-queue').expect(200));
+      const ours = await admin.agent.get('/api/sign-off-queue').expect(200);
       expect((ours.body as Array<{ panelId: number }>).map((q) => q.panelId)).not.toContain(other.panel.id);
       expect(ours.text).not.toContain('Private note');
     } finally {
@@ -221,16 +287,26 @@ describe('another organisation’s data', () => {
   });
 
   it('refuses to change the other organisation’s job, panel and motor, and changes nothing', async () => {
-    const before = JSON.stringify([await Job.findByPk(other.job.id), await Panel.findByPk(other.panel.id), await Load.findByPk(other.load.id)]);
+    const before = JSON.stringify([
+      await Job.findByPk(other.job.id),
+      await Panel.findByPk(other.panel.id),
+      await Load.findByPk(other.load.id),
+    ]);
     const attempts: Array<[string, Promise<request.Response>]> = [
       ['patch job', send(designer, 'patch', `/api/jobs/${other.job.id}`, { name: 'Taken over', version: 0 })],
       ['archive job', send(designer, 'post', `/api/jobs/${other.job.id}/archive`, { archived: true, version: 0 })],
       ['new panel in job', send(designer, 'post', `/api/jobs/${other.job.id}/panels`, { name: 'Planted panel' })],
       ['patch panel', send(designer, 'patch', `/api/panels/${other.panel.id}`, { name: 'Taken over', version: 0 })],
-      ['add motor', send(designer, 'post', `/api/panels/${other.panel.id}/loads`, { answers: { tag: 'Z-9', supply: 'ac3', hp: 5, volts: 460 } })],
+      [
+        'add motor',
+        send(designer, 'post', `/api/panels/${other.panel.id}/loads`, { answers: { tag: 'Z-9', supply: 'ac3', hp: 5, volts: 460 } }),
+      ],
       ['duplicate panel', send(designer, 'post', `/api/panels/${other.panel.id}/duplicate`)],
       ['comment', send(designer, 'post', `/api/panels/${other.panel.id}/comments`, { body: 'Planted comment' })],
-      ['change motor', send(designer, 'put', `/api/loads/${other.load.id}`, { answers: { tag: 'X-1', supply: 'ac3', hp: 50, volts: 460 }, version: 0 })],
+      [
+        'change motor',
+        send(designer, 'put', `/api/loads/${other.load.id}`, { answers: { tag: 'X-1', supply: 'ac3', hp: 50, volts: 460 }, version: 0 }),
+      ],
       ['copy motor', send(designer, 'post', `/api/loads/${other.load.id}/copy`)],
       ['delete motor', send(designer, 'delete', `/api/loads/${other.load.id}`)],
       ['overrides', send(designer, 'put', `/api/loads/${other.load.id}/overrides`, { overrides: [], version: 0 })],
@@ -241,7 +317,9 @@ describe('another organisation’s data', () => {
       expect(r.status, `${name}: ${JSON.stringify(r.body)}`).toBe(404);
       expect(r.body.error.code, name).toBe('not_found');
     }
-    expect(JSON.stringify([await Job.findByPk(other.job.id), await Panel.findByPk(other.panel.id), await Load.findByPk(other.load.id)])).toBe(before);
+    expect(
+      JSON.stringify([await Job.findByPk(other.job.id), await Panel.findByPk(other.panel.id), await Load.findByPk(other.load.id)]),
+    ).toBe(before);
     expect(await Panel.count({ where: { jobId: other.job.id } })).toBe(1);
     expect(await Comment.count({ where: { panelId: other.panel.id } })).toBe(1);
   });
@@ -249,7 +327,11 @@ describe('another organisation’s data', () => {
   it('refuses the other organisation’s motor in a request on one’s own panel', async () => {
     const p = await paramValues();
     const v = (await designer.agent.get(`/api/panels/${p.panelId}`).expect(200)).body.version;
-    const bulk = await send(designer, 'post', `/api/panels/${p.panelId}/loads/bulk-edit`, { loadIds: [Number(p.loadId), other.load.id], changes: { critical: true }, panelVersion: v });
+    const bulk = await send(designer, 'post', `/api/panels/${p.panelId}/loads/bulk-edit`, {
+      loadIds: [Number(p.loadId), other.load.id],
+      changes: { critical: true },
+      panelVersion: v,
+    });
     expect(bulk.status).toBe(404);
     const comment = await send(designer, 'post', `/api/panels/${p.panelId}/comments`, { body: 'About their motor', loadId: other.load.id });
     expect(comment.status).toBe(400);
@@ -275,7 +357,9 @@ describe('passwords and secrets', () => {
   function captureLogs() {
     for (const m of ['log', 'info', 'warn', 'error', 'debug'] as const) {
       vi.spyOn(console, m).mockImplementation((...args: unknown[]) => {
-        logged.push(args.map((a) => (a instanceof Error ? `${a.message} ${a.stack}` : typeof a === 'string' ? a : JSON.stringify(a))).join(' '));
+        logged.push(
+          args.map((a) => (a instanceof Error ? `${a.message} ${a.stack}` : typeof a === 'string' ? a : JSON.stringify(a))).join(' '),
+        );
       });
     }
     const write = (stream: NodeJS.WriteStream) =>
@@ -316,7 +400,11 @@ describe('passwords and secrets', () => {
 
   it('never answers with a password hash or an invite token', async () => {
     const admin = await signInAs('admin');
-    await send(admin, 'post', '/api/users', { email: `pending.${Date.now()}@copperline.test`, name: 'Pending Person', roles: ['estimator'] }).expect(201);
+    await send(admin, 'post', '/api/users', {
+      email: `pending.${Date.now()}@copperline.test`,
+      name: 'Pending Person',
+      roles: ['estimator'],
+    }).expect(201);
     const secrets = (await User.findAll()).flatMap((u) => [u.passwordHash, u.inviteToken]).filter((x): x is string => !!x);
     expect(secrets.some((x) => x.startsWith('$argon2'))).toBe(true);
     expect(secrets.length).toBeGreaterThan(4);
@@ -330,7 +418,9 @@ describe('passwords and secrets', () => {
     }
     expect(bodies.find((b) => b.startsWith('/api/users '))).toBeDefined();
     expect(bodies.find((b) => b.startsWith('/api/auth/me '))).toBeDefined();
-    const leaks = bodies.filter((b) => secrets.some((s) => b.includes(s)) || /passwordHash|password_hash|inviteToken|invite_token|\$argon2/.test(b));
+    const leaks = bodies.filter(
+      (b) => secrets.some((s) => b.includes(s)) || /passwordHash|password_hash|inviteToken|invite_token|\$argon2/.test(b),
+    );
     expect(leaks.map((b) => b.slice(0, 80))).toEqual([]);
   });
 
@@ -345,7 +435,11 @@ describe('passwords and secrets', () => {
     await send(anon, 'post', '/api/auth/sign-in', { email: designer.email, password: tried[2] });
     await send(anon, 'post', '/api/auth/sign-in', { email: 'not-an-email', password: tried[0] });
     await send(anon, 'post', '/api/auth/accept-invite', { token: 'no-such-invitation-token', password: tried[1] });
-    await anon.agent.post('/api/auth/sign-in').set('x-csrf-token', anon.token).set('content-type', 'application/json').send(`{"email": "${designer.email}", "password": "${tried[0]}"`);
+    await anon.agent
+      .post('/api/auth/sign-in')
+      .set('x-csrf-token', anon.token)
+      .set('content-type', 'application/json')
+      .send(`{"email": "${designer.email}", "password": "${tried[0]}"`);
     vi.restoreAllMocks();
     const out = logged.join('\n');
     for (const t of tried) expect(out).not.toContain(t);
@@ -355,7 +449,11 @@ describe('passwords and secrets', () => {
 
   it('sends the security headers on API answers and on errors', async () => {
     const app = testApp();
-    for (const r of [await request(app).get('/api/health'), await request(app).get('/api/no-such-route'), await request(app).get('/api/jobs')]) {
+    for (const r of [
+      await request(app).get('/api/health'),
+      await request(app).get('/api/no-such-route'),
+      await request(app).get('/api/jobs'),
+    ]) {
       expect(r.headers['x-content-type-options']).toBe('nosniff');
       expect(r.headers['x-frame-options']).toBe('SAMEORIGIN');
       expect(r.headers['content-security-policy']).toContain("frame-ancestors 'none'");
@@ -377,8 +475,18 @@ describe('uploads of a motor list', () => {
     testApp();
   });
 
-  async function upload(s: Session, panelId: string, step: 'preview' | 'commit', data: Buffer, filename: string, contentType = 'application/octet-stream') {
-    return s.agent.post(`/api/panels/${panelId}/import/${step}`).set('x-csrf-token', s.token).attach('file', data, { filename, contentType });
+  async function upload(
+    s: Session,
+    panelId: string,
+    step: 'preview' | 'commit',
+    data: Buffer,
+    filename: string,
+    contentType = 'application/octet-stream',
+  ) {
+    return s.agent
+      .post(`/api/panels/${panelId}/import/${step}`)
+      .set('x-csrf-token', s.token)
+      .attach('file', data, { filename, contentType });
   }
 
   it('refuses a wrong type, an oversized file and a package that expands to an absurd size, importing nothing', async () => {
@@ -397,9 +505,16 @@ describe('uploads of a motor list', () => {
     expect(big.status).toBe(413);
     expect(big.body.error.code).toBe('payload_too_large');
     // a sheet of 64 MB of spaces that deflates to a few dozen kB, its expanded size understated in the headers
-    const sheet = Buffer.concat([Buffer.from('<?xml version="1.0"?><worksheet xmlns="http://schemas.openxmlformats.org/spreadsheetml/2006/main"><sheetData>'), Buffer.alloc(64 * 1024 * 1024, 0x20), Buffer.from('</sheetData></worksheet>')]);
+    const sheet = Buffer.concat([
+      Buffer.from('<?xml version="1.0"?><worksheet xmlns="http://schemas.openxmlformats.org/spreadsheetml/2006/main"><sheetData>'),
+      Buffer.alloc(64 * 1024 * 1024, 0x20),
+      Buffer.from('</sheetData></worksheet>'),
+    ]);
     const bomb = makeZip([
-      { name: '[Content_Types].xml', data: Buffer.from('<?xml version="1.0"?><Types xmlns="http://schemas.openxmlformats.org/package/2006/content-types"/>') },
+      {
+        name: '[Content_Types].xml',
+        data: Buffer.from('<?xml version="1.0"?><Types xmlns="http://schemas.openxmlformats.org/package/2006/content-types"/>'),
+      },
       { name: 'xl/worksheets/sheet1.xml', data: sheet, declaredSize: 4096 },
     ]);
     expect(bomb.length).toBeLessThan(MAX_IMPORT_BYTES);
@@ -414,11 +529,15 @@ describe('uploads of a motor list', () => {
   it('keeps formula text in cells as plain text', async () => {
     const p = await paramValues();
     const designer = await signInAs('designer');
-    const formulas = ['=HYPERLINK("http://example.invalid","open")', '+cmd|\' /C calc\'!A0', '@SUM(1+1)', '-2+3'];
-    const csv = ['tag,description,supply,hp,volts', ...formulas.map((f, i) => `FX-${i + 1},"${f.replace(/"/g, '""')}",ac3,5,460`)].join('\n');
+    const formulas = ['=HYPERLINK("http://example.invalid","open")', "+cmd|' /C calc'!A0", '@SUM(1+1)', '-2+3'];
+    const csv = ['tag,description,supply,hp,volts', ...formulas.map((f, i) => `FX-${i + 1},"${f.replace(/"/g, '""')}",ac3,5,460`)].join(
+      '\n',
+    );
     const r = await upload(designer, p.panelId, 'commit', Buffer.from(csv), 'motors.csv', 'text/csv');
     expect(r.status, JSON.stringify(r.body)).toBe(201);
-    const detail = (await designer.agent.get(`/api/panels/${p.panelId}`).expect(200)).body as { loads: Array<{ tag: string; answers: { description?: string } }> };
+    const detail = (await designer.agent.get(`/api/panels/${p.panelId}`).expect(200)).body as {
+      loads: Array<{ tag: string; answers: { description?: string } }>;
+    };
     const stored = formulas.map((_f, i) => detail.loads.find((l) => l.tag === `FX-${i + 1}`)?.answers.description);
     expect(stored).toEqual(formulas);
   });

@@ -16,8 +16,20 @@ const PASSWORD = 'settings-test-pass-1';
 const PNG = Buffer.from('iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mNk+M9QDwADhgGAWjR9awAAAABJRU5ErkJggg==', 'base64');
 
 type Who = 'admin' | 'designer' | 'estimator' | 'engineer' | 'both';
-const ROLES: Record<Who, string[]> = { admin: ['admin'], designer: ['designer'], estimator: ['estimator'], engineer: ['engineer'], both: ['designer', 'engineer'] };
-const NAMES: Record<Who, string> = { admin: 'Ola Admin', designer: 'Pia Builder', estimator: 'Tom Estimator', engineer: 'Una Engineer', both: 'Rhea Both' };
+const ROLES: Record<Who, string[]> = {
+  admin: ['admin'],
+  designer: ['designer'],
+  estimator: ['estimator'],
+  engineer: ['engineer'],
+  both: ['designer', 'engineer'],
+};
+const NAMES: Record<Who, string> = {
+  admin: 'Ola Admin',
+  designer: 'Pia Builder',
+  estimator: 'Tom Estimator',
+  engineer: 'Una Engineer',
+  both: 'Rhea Both',
+};
 
 let shopName: string;
 const s = {} as Record<Who, Session>;
@@ -38,7 +50,15 @@ beforeAll(async () => {
   const tag = uniq().toLowerCase();
   for (const who of Object.keys(ROLES) as Who[]) {
     const email = `${who}-${tag}@lantern.test`;
-    await User.create({ organisationId: org.id, email, name: NAMES[who], roles: ROLES[who], passwordHash: hash, inviteToken: null, lastSignInAt: null });
+    await User.create({
+      organisationId: org.id,
+      email,
+      name: NAMES[who],
+      roles: ROLES[who],
+      passwordHash: hash,
+      inviteToken: null,
+      lastSignInAt: null,
+    });
     s[who] = await signIn(email, PASSWORD);
   }
 });
@@ -55,7 +75,11 @@ async function put(body: Record<string, unknown>, status: number, who: Who = 'ad
 }
 
 function uploadLogo(who: Who, version: number, data: Buffer, name = 'logo.png') {
-  return s[who].agent.put('/api/settings/logo').set('x-csrf-token', s[who].token).field('version', String(version)).attach('file', data, name);
+  return s[who].agent
+    .put('/api/settings/logo')
+    .set('x-csrf-token', s[who].token)
+    .field('version', String(version))
+    .attach('file', data, name);
 }
 
 describe('shop settings', () => {
@@ -64,7 +88,14 @@ describe('shop settings', () => {
       const r = (await s[who].agent.get('/api/settings').expect(200)).body;
       expect(r.name).toBe(shopName);
       // the product's defaults (migration 0008): $85/h and 15 % markup, as the panels had before
-      expect(r).toMatchObject({ address: '', defaultLabourRate: 85, defaultMarkupPercent: 15, drawingNumberScheme: '{job}-{panel}-{sheet:2}', allowSelfSignOff: false, logo: null });
+      expect(r).toMatchObject({
+        address: '',
+        defaultLabourRate: 85,
+        defaultMarkupPercent: 15,
+        drawingNumberScheme: '{job}-{panel}-{sheet:2}',
+        allowSelfSignOff: false,
+        logo: null,
+      });
       expect(typeof r.version).toBe('number');
     }
     await (await anonymous()).agent.get('/api/settings').expect(401);
@@ -100,7 +131,11 @@ describe('shop settings', () => {
   it('saves a change, and answers 409 to a second change from the same stale version', async () => {
     const before = await settings();
     const { logo: _l, updatedAt: _u, ...fields } = before;
-    const r = await send(s.admin, 'put', '/api/settings', { ...fields, address: '4 Kiln Road\nLantern Hill', drawingNumberScheme: 'LHC-{job}-{panel}-{rev}-{sheet:3}' }).expect(200);
+    const r = await send(s.admin, 'put', '/api/settings', {
+      ...fields,
+      address: '4 Kiln Road\nLantern Hill',
+      drawingNumberScheme: 'LHC-{job}-{panel}-{rev}-{sheet:3}',
+    }).expect(200);
     expect(r.body.version).toBe(before.version + 1);
     expect(r.body.address).toBe('4 Kiln Road\nLantern Hill');
     const stale = await send(s.admin, 'put', '/api/settings', { ...fields, address: 'Somewhere else' }).expect(409);
@@ -115,7 +150,9 @@ describe('shop settings', () => {
     await put({ defaultLabourRate: 112.5, defaultMarkupPercent: 22 }, 200);
     const fresh = (await send(s.designer, 'post', `/api/jobs/${job.id}/panels`, { name: 'After' }).expect(201)).body;
     expect([fresh.markupPercent, fresh.labourRate]).toEqual([22, 112.5]);
-    const own = (await send(s.designer, 'post', `/api/jobs/${job.id}/panels`, { name: 'Own', markupPercent: 10, labourRate: 70 }).expect(201)).body;
+    const own = (
+      await send(s.designer, 'post', `/api/jobs/${job.id}/panels`, { name: 'Own', markupPercent: 10, labourRate: 70 }).expect(201)
+    ).body;
     expect([own.markupPercent, own.labourRate]).toEqual([10, 70]);
     const again = (await s.designer.agent.get(`/api/panels/${old.id}`).expect(200)).body;
     expect([again.markupPercent, again.labourRate]).toEqual([15, 85]);
@@ -150,7 +187,15 @@ describe('shop settings', () => {
   });
 
   it('prints the shop on the submittal: name on every page, page n of N, drawing numbers by the scheme, the nameplate manufacturer', async () => {
-    const job = (await send(s.designer, 'post', '/api/jobs', { number: 'LH-77', name: 'Filter gallery', supplyVolts: 480, supplyPhases: 3, availableFaultKa: 10 }).expect(201)).body;
+    const job = (
+      await send(s.designer, 'post', '/api/jobs', {
+        number: 'LH-77',
+        name: 'Filter gallery',
+        supplyVolts: 480,
+        supplyPhases: 3,
+        availableFaultKa: 10,
+      }).expect(201)
+    ).body;
     const panel = (await send(s.designer, 'post', `/api/jobs/${job.id}/panels`, { name: 'MCC 2' }).expect(201)).body;
     for (const m of DEMO_MOTORS.slice(0, 3)) await send(s.designer, 'post', `/api/panels/${panel.id}/loads`, { answers: m }).expect(201);
     await send(s.designer, 'post', `/api/panels/${panel.id}/bom/rebuild`, {}).expect((r) => expect(r.status).toBeLessThan(300));
@@ -179,15 +224,24 @@ async function reviewPanel(author: Who, name: string) {
   const panel = (await send(s[author], 'post', `/api/jobs/${job.id}/panels`, { name }).expect(201)).body;
   await send(s[author], 'post', `/api/panels/${panel.id}/loads`, { answers: DEMO_MOTORS[3] }).expect(201);
   const fresh = (await s[author].agent.get(`/api/panels/${panel.id}`).expect(200)).body;
-  const submitted = (await send(s[author], 'post', `/api/panels/${panel.id}/submit`, { version: fresh.version, comment: '' }).expect(200)).body;
+  const submitted = (await send(s[author], 'post', `/api/panels/${panel.id}/submit`, { version: fresh.version, comment: '' }).expect(200))
+    .body;
   return { jobId: job.id as number, panelId: panel.id as number, version: submitted.version as number };
 }
 
 const approve = (who: Who, panelId: number, version: number) =>
-  send(s[who], 'post', `/api/panels/${panelId}/approve`, { version, comment: 'Checked against the fault study on file', acknowledgeSccr: true });
+  send(s[who], 'post', `/api/panels/${panelId}/approve`, {
+    version,
+    comment: 'Checked against the fault study on file',
+    acknowledgeSccr: true,
+  });
 
 async function actions(jobId: number) {
-  return ((await s.admin.agent.get(`/api/jobs/${jobId}/activity`).expect(200)).body as Array<{ action: string; summary: string; user: string }>);
+  return (await s.admin.agent.get(`/api/jobs/${jobId}/activity`).expect(200)).body as Array<{
+    action: string;
+    summary: string;
+    user: string;
+  }>;
 }
 
 describe('separation of duties at sign-off', () => {
@@ -246,7 +300,10 @@ describe('separation of duties at sign-off', () => {
     await approve('engineer', panelId, version).expect(200); // R0 by another engineer
     // the panel builder opens the next draft and submits; the dual-role person did nothing since R0
     const p = (await s.designer.agent.get(`/api/panels/${panelId}`).expect(200)).body;
-    await send(s.designer, 'put', `/api/loads/${p.loads[0].id}`, { answers: { ...p.loads[0].answers, critical: true }, version: p.loads[0].version }).expect(200);
+    await send(s.designer, 'put', `/api/loads/${p.loads[0].id}`, {
+      answers: { ...p.loads[0].answers, critical: true },
+      version: p.loads[0].version,
+    }).expect(200);
     const draft = (await s.designer.agent.get(`/api/panels/${panelId}`).expect(200)).body;
     const sub = (await send(s.designer, 'post', `/api/panels/${panelId}/submit`, { version: draft.version, comment: '' }).expect(200)).body;
     expect((await approve('both', panelId, sub.version).expect(200)).body.revisionNumber).toBe(1);

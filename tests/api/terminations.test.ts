@@ -11,7 +11,8 @@ describe('terminations listed for 75 °C, a panel answer', () => {
   it('not answered: 14 AWG at 75 °C with 12 AWG beside it and flagged; "no" selects the motors again at 60 °C (12 AWG); the backup carries it', async () => {
     const designer = await signInAs('designer');
     const estimator = await signInAs('estimator');
-    const job = (await send(designer, 'post', '/api/jobs', { number: uniq(), name: 'Cooling tower', availableFaultKa: 22 }).expect(201)).body;
+    const job = (await send(designer, 'post', '/api/jobs', { number: uniq(), name: 'Cooling tower', availableFaultKa: 22 }).expect(201))
+      .body;
     const panel = (await send(designer, 'post', `/api/jobs/${job.id}/panels`, { name: 'CT-1' }).expect(201)).body;
     expect(panel.terminationsListed75C).toBeNull();
     const load = (await send(designer, 'post', `/api/panels/${panel.id}/loads`, { answers: TEN_HP }).expect(201)).body;

@@ -39,7 +39,9 @@ describe('motor wizard', () => {
     expect(within(preview).getByRole('heading', { name: /Selection/ })).toBeTruthy();
     await answerTenHorsepower();
     // NEC 2023 Table 430.250: 10 hp at 460 V, 14 A
-    const flcRow = await waitFor(() => within(preview).getByText('Full-load current (table)').closest('tr') as HTMLElement, { timeout: 10_000 });
+    const flcRow = await waitFor(() => within(preview).getByText('Full-load current (table)').closest('tr') as HTMLElement, {
+      timeout: 10_000,
+    });
     expect(within(flcRow).getByText('14 A')).toBeTruthy();
     expect(flcRow.textContent).toMatch(/Table 430\.250/);
     // the caution stands wherever results are shown
@@ -59,7 +61,10 @@ describe('motor wizard', () => {
     server.use(
       http.post(`/api/panels/${PANEL.id}/loads`, async ({ request }) => {
         sent = (await request.json()) as { answers: Record<string, unknown> };
-        return HttpResponse.json({ id: 501, tag: 'P-101', position: 1, answers: sent.answers, selection: null, effective: null, overrides: [], version: 0 }, { status: 201 });
+        return HttpResponse.json(
+          { id: 501, tag: 'P-101', position: 1, answers: sent.answers, selection: null, effective: null, overrides: [], version: 0 },
+          { status: 201 },
+        );
       }),
     );
     const { router } = openWizard();
@@ -71,7 +76,9 @@ describe('motor wizard', () => {
   });
 
   it('shows the server error and stays on the wizard when saving fails', async () => {
-    server.use(http.post(`/api/panels/${PANEL.id}/loads`, () => apiError(500, 'internal', 'The database did not answer; nothing was saved.')));
+    server.use(
+      http.post(`/api/panels/${PANEL.id}/loads`, () => apiError(500, 'internal', 'The database did not answer; nothing was saved.')),
+    );
     const { router } = openWizard();
     await answerTenHorsepower();
     fireEvent.click(screen.getByRole('button', { name: 'Add motor' }));

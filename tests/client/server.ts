@@ -9,7 +9,12 @@ export const csrfHandler = http.get('/api/auth/csrf', () => HttpResponse.json({ 
 export const server = setupServer(csrfHandler);
 
 export const meHandler = (user: CurrentUser | null) =>
-  http.get('/api/auth/me', () => (user ? HttpResponse.json(user) : HttpResponse.json({ error: { code: 'unauthenticated', message: 'Sign in first', details: null } }, { status: 401 })));
+  http.get('/api/auth/me', () =>
+    user
+      ? HttpResponse.json(user)
+      : HttpResponse.json({ error: { code: 'unauthenticated', message: 'Sign in first', details: null } }, { status: 401 }),
+  );
 
 /** the error body of server/middleware/errors.ts */
-export const apiError = (status: number, code: string, message: string, details: unknown = null) => HttpResponse.json({ error: { code, message, details } }, { status });
+export const apiError = (status: number, code: string, message: string, details: unknown = null) =>
+  HttpResponse.json({ error: { code, message, details } }, { status });

@@ -9,7 +9,14 @@ import type { PanelDetail } from '../../shared/schemas/panel';
 import { apiError, meHandler, server } from './server';
 import { JOB, panelDetail, renderRoute } from './render';
 
-const user = (name: string, roles: Role[]): CurrentUser => ({ id: roles.length, organisationId: 1, organisationName: 'Harbourside Controls', email: `${name.split(' ')[0].toLowerCase()}@example.test`, name, roles });
+const user = (name: string, roles: Role[]): CurrentUser => ({
+  id: roles.length,
+  organisationId: 1,
+  organisationName: 'Harbourside Controls',
+  email: `${name.split(' ')[0].toLowerCase()}@example.test`,
+  name,
+  roles,
+});
 const DESIGNER = user('Robin Castell', ['designer']);
 const ENGINEER = user('Dana Whitfield', ['engineer']);
 
@@ -25,7 +32,13 @@ function panelServer(start: PanelDetail, me: CurrentUser) {
       posted.push({ action: String(params.action), body });
       if (params.action === 'submit') panel = { ...panel, status: 'in_review', version: panel.version + 1 };
       if (params.action === 'approve')
-        panel = { ...panel, status: 'signed_off', revisionNumber: 0, version: panel.version + 1, revisions: [{ number: 0, approvedAt: '2026-11-03T14:00:00.000Z', approvedBy: me.name }] };
+        panel = {
+          ...panel,
+          status: 'signed_off',
+          revisionNumber: 0,
+          version: panel.version + 1,
+          revisions: [{ number: 0, approvedAt: '2026-11-03T14:00:00.000Z', approvedBy: me.name }],
+        };
       return HttpResponse.json(panel);
     }),
   );
@@ -46,10 +59,13 @@ const checksWithSccr = (panelSccrKa: number, verdict: 'adequate' | 'below-availa
 /** The section's other reads while a panel is in review: its bill of materials (for the swaps) and whether this engineer may sign (separation of duties). */
 const reviewReads = (reason: string | null = null) => [
   http.get('/api/panels/12/bom', () => HttpResponse.json({ lines: [], totals: null, generatedAt: null, stale: false })),
-  http.get('/api/panels/12/sign-off-eligibility', () => HttpResponse.json({ selfReview: reason !== null, allowed: false, actions: [], reason })),
+  http.get('/api/panels/12/sign-off-eligibility', () =>
+    HttpResponse.json({ selfReview: reason !== null, allowed: false, actions: [], reason }),
+  ),
 ];
 
-const openSignOff = (panel: PanelDetail) => renderRoute([{ path: '/jobs/:jobId/panels/:panelId/sign-off', element: <SignOff /> }], `/jobs/${JOB.id}/panels/${panel.id}/sign-off`);
+const openSignOff = (panel: PanelDetail) =>
+  renderRoute([{ path: '/jobs/:jobId/panels/:panelId/sign-off', element: <SignOff /> }], `/jobs/${JOB.id}/panels/${panel.id}/sign-off`);
 
 const signOffSection = async () => (await screen.findByRole('heading', { name: /^Sign-off/ })).closest('section') as HTMLElement;
 
@@ -69,7 +85,11 @@ describe('sign-off section, panel builder', () => {
 
   it('shows the server error and keeps the panel a draft when the server refuses', async () => {
     panelServer(panelDetail({ status: 'draft' }), DESIGNER);
-    server.use(http.post('/api/panels/12/submit', () => apiError(409, 'conflict', 'Someone changed this panel since you opened it. Reload and try again.')));
+    server.use(
+      http.post('/api/panels/12/submit', () =>
+        apiError(409, 'conflict', 'Someone changed this panel since you opened it. Reload and try again.'),
+      ),
+    );
     openSignOff(panelDetail());
     const section = await signOffSection();
     fireEvent.click(await within(section).findByRole('button', { name: 'Submit for sign-off' }));
@@ -105,7 +125,11 @@ describe('sign-off section, engineer', () => {
 
   it('shows the server error when signing off fails', async () => {
     panelServer(panelDetail({ status: 'in_review' }), ENGINEER);
-    server.use(checksWithSccr(65, 'adequate'), ...reviewReads(), http.post('/api/panels/12/approve', () => apiError(500, 'internal', 'The revision could not be frozen; the panel is unchanged.')));
+    server.use(
+      checksWithSccr(65, 'adequate'),
+      ...reviewReads(),
+      http.post('/api/panels/12/approve', () => apiError(500, 'internal', 'The revision could not be frozen; the panel is unchanged.')),
+    );
     openSignOff(panelDetail());
     const section = await signOffSection();
     fireEvent.click(await within(section).findByRole('button', { name: /Sign off as R0/ }));

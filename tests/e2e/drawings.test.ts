@@ -59,7 +59,9 @@ describe('drawings in the browser', () => {
     const page = await openDemoPanel(browser);
     const note = page.getByRole('note', { name: 'Motors at another voltage' });
     // the demo's 0.5 hp 115 V sampling pump (9.8 A, NEC 2023 Table 430.248): (125 % × 9.8 A) × 240 V = 2.94 kVA → 3 kVA
-    await note.getByText(/T1: M-401 \(115 V single-phase\) fed from a 3 kVA 480-240\/120 V single-phase transformer in the panel/).waitFor();
+    await note
+      .getByText(/T1: M-401 \(115 V single-phase\) fed from a 3 kVA 480-240\/120 V single-phase transformer in the panel/)
+      .waitFor();
     // the 5 hp 240 V DC hoist (20 A, Table 430.247): a 240 V DC supply ≥ 25 A (125 %)
     await note.getByText(/DC1: H-601 \(240 V DC\) fed from a 240 V DC supply \(25 A\) in the panel/).waitFor();
     const row = page.getByRole('table', { name: 'Motors' }).getByRole('row').filter({ hasText: 'M-401' });
@@ -70,7 +72,9 @@ describe('drawings in the browser', () => {
     const m401 = page.getByRole('img', { name: /^One-line of M-401:/ });
     await m401.waitFor();
     const title = await m401.locator('title').textContent();
-    expect(title).toMatch(/^One-line of M-401: Feeder bus, \d+ A T1 primary breaker, T1 — 3 kVA transformer, \d+ A T1 secondary breaker, T1 secondary bus, /);
+    expect(title).toMatch(
+      /^One-line of M-401: Feeder bus, \d+ A T1 primary breaker, T1 — 3 kVA transformer, \d+ A T1 secondary breaker, T1 secondary bus, /,
+    );
   });
 
   it('asks the designer where a motor at another voltage is fed from, and only then', async () => {
@@ -102,7 +106,10 @@ describe('drawings in the browser', () => {
     expect(await row.getByText('87.5').count()).toBe(0);
 
     // the motor list as a workbook: the import format first, then the schedule
-    const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('link', { name: 'Export motor list (.xlsx)' }).click()]);
+    const [download] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByRole('link', { name: 'Export motor list (.xlsx)' }).click(),
+    ]);
     expect(download.suggestedFilename()).toBe('J-2041-MCC-1 Pump hall-motors.xlsx');
     const wb = new ExcelJS.Workbook();
     await wb.xlsx.readFile((await download.path())!);
@@ -115,7 +122,11 @@ describe('drawings in the browser', () => {
     // demo job's 35 °C ambient (Table 310.15(B)(1)(1)) = 61.1 A
     await page.getByRole('navigation', { name: 'Panel sections' }).getByRole('link', { name: 'Protection' }).click();
     await page.waitForURL(/\/protection$/);
-    await page.getByTestId('motor-leads').filter({ hasText: 'controller to motor: 6 × 6 AWG Cu (61.1 A ≥ 55.83 A, 58 % of FLC)' }).first().waitFor();
+    await page
+      .getByTestId('motor-leads')
+      .filter({ hasText: 'controller to motor: 6 × 6 AWG Cu (61.1 A ≥ 55.83 A, 58 % of FLC)' })
+      .first()
+      .waitFor();
     expect(await page.getByTestId('motor-leads').count()).toBe(1); // only the wye-delta blower has them
   });
   it('opens the control schematics of the reversing conveyor and the wye-delta blower with their interlocks', async () => {
@@ -123,14 +134,21 @@ describe('drawings in the browser', () => {
     await page.getByRole('navigation', { name: 'Panel sections' }).getByRole('link', { name: 'Drawings' }).click();
     await page.waitForURL(/\/drawings$/);
     const list = page.getByRole('navigation', { name: 'Sheet list' });
-    for (const [tag, coils] of [['C-201', ['F', 'R']], ['K-301', ['S', 'D']]] as const) {
+    for (const [tag, coils] of [
+      ['C-201', ['F', 'R']],
+      ['K-301', ['S', 'D']],
+    ] as const) {
       await list.getByRole('button', { name: new RegExp(`${tag} control schematic`) }).click();
       const sheet = page.getByRole('img', { name: new RegExp(`${tag} control schematic`) });
       await sheet.waitFor();
       // the mechanical interlock drawn, and each coil's NC interlock contact of the other contactor
       expect(await sheet.locator('text.mech-interlock').count()).toBeGreaterThanOrEqual(1);
       const xrefs = await sheet.locator('text.xref').allTextContents();
-      for (const c of coils) expect(xrefs.some((x) => new RegExp(`^\\d+${c}: .*NC \\d+`).test(x)), `${tag} ${c}: ${xrefs.join(' | ')}`).toBe(true);
+      for (const c of coils)
+        expect(
+          xrefs.some((x) => new RegExp(`^\\d+${c}: .*NC \\d+`).test(x)),
+          `${tag} ${c}: ${xrefs.join(' | ')}`,
+        ).toBe(true);
       expect(await sheet.getByText('IL', { exact: false }).count()).toBeGreaterThanOrEqual(2);
       expect(await sheet.getByText('IEEE 315 / NEMA ICS 19', { exact: false }).count()).toBeGreaterThan(0);
       await screenshot(page, `drawings-${tag}`);
@@ -138,7 +156,11 @@ describe('drawings in the browser', () => {
     await list.getByRole('button', { name: /Terminal plan/ }).click();
     await page.getByText(/terminals, the \d+ terminal blocks of the bill of materials/).waitFor();
     await list.getByRole('button', { name: /Panel marking/ }).click();
-    await page.getByRole('img', { name: /Panel marking/ }).locator('text').filter({ hasText: 'INDUSTRIAL CONTROL PANEL' }).waitFor();
+    await page
+      .getByRole('img', { name: /Panel marking/ })
+      .locator('text')
+      .filter({ hasText: 'INDUSTRIAL CONTROL PANEL' })
+      .waitFor();
     await screenshot(page, 'drawings-nameplate');
   });
 });

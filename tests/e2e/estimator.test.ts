@@ -35,12 +35,21 @@ describe('estimator in the browser', () => {
     await page.getByText('✔ Up to date with the motors and the catalogue.').waitFor();
 
     // a subtotal row per bucket, motors and panel items
-    for (const tag of ['P-101', 'P-110', 'C-201', 'H-601']) await table.getByRole('row', { name: new RegExp(`^Subtotal ${tag}`) }).waitFor();
+    for (const tag of ['P-101', 'P-110', 'C-201', 'H-601'])
+      await table.getByRole('row', { name: new RegExp(`^Subtotal ${tag}`) }).waitFor();
     await table.getByRole('row', { name: /^Subtotal \(panel\)/ }).waitFor();
 
     // footer totals: sell = cost + markup, as the page shows them
     const foot = table.locator('tfoot');
-    const cell = async (label: string) => parseMoney((await foot.getByRole('row').filter({ has: page.getByRole('rowheader', { name: label, exact: true }) }).locator('td').nth(1).textContent()) ?? '');
+    const cell = async (label: string) =>
+      parseMoney(
+        (await foot
+          .getByRole('row')
+          .filter({ has: page.getByRole('rowheader', { name: label, exact: true }) })
+          .locator('td')
+          .nth(1)
+          .textContent()) ?? '',
+      );
     const cost = await cell('Cost (material + labour)');
     const markup = await cell('Markup 15 %');
     const sell = await cell('Sell');
@@ -81,7 +90,15 @@ describe('estimator in the browser', () => {
     await table.waitFor();
 
     // the panel's enclosure: larger enclosures of its NEMA type fit, smaller ones and other types do not
-    const bom = (await (await page.request.get(`${baseUrl()}/api/panels/${panelId}/bom`)).json()) as { lines: Array<{ id: number; bucket: string; category: string; code: string | null; requirement: Array<{ nemaType: string; minUsableAreaMm2: number; minDepthMm: number }> }> };
+    const bom = (await (await page.request.get(`${baseUrl()}/api/panels/${panelId}/bom`)).json()) as {
+      lines: Array<{
+        id: number;
+        bucket: string;
+        category: string;
+        code: string | null;
+        requirement: Array<{ nemaType: string; minUsableAreaMm2: number; minDepthMm: number }>;
+      }>;
+    };
     const enc = bom.lines.find((l) => l.category === 'enclosure' && l.code)!;
     const need = enc.requirement[0]!;
     await table.getByRole('row').filter({ hasText: enc.code! }).getByRole('button', { name: 'Swap' }).click();
@@ -91,10 +108,23 @@ describe('estimator in the browser', () => {
     await select.waitFor();
     const offered = (await select.locator('option').allTextContents()).filter((t) => t !== 'Choose…').map((t) => t.split(' — ')[0]!);
     expect(offered.length).toBeGreaterThan(0);
-    const all = (await (await page.request.get(`${baseUrl()}/api/catalogue/items?category=enclosure`)).json()) as Array<{ code: string; active: boolean; ratings: { nemaType: string; heightMm: number; widthMm: number; depthMm: number } }>;
+    const all = (await (await page.request.get(`${baseUrl()}/api/catalogue/items?category=enclosure`)).json()) as Array<{
+      code: string;
+      active: boolean;
+      ratings: { nemaType: string; heightMm: number; widthMm: number; depthMm: number };
+    }>;
     // usable back panel (H − 150 mm) × (W − 100 mm), the matcher's rule (common practice, catalog/README.md)
-    const fits = (i: (typeof all)[number]) => i.active && i.ratings.nemaType === need.nemaType && i.ratings.depthMm >= need.minDepthMm && (i.ratings.heightMm - 150) * (i.ratings.widthMm - 100) >= need.minUsableAreaMm2;
-    expect(offered.sort()).toEqual(all.filter((i) => fits(i) && i.code !== enc.code).map((i) => i.code).sort());
+    const fits = (i: (typeof all)[number]) =>
+      i.active &&
+      i.ratings.nemaType === need.nemaType &&
+      i.ratings.depthMm >= need.minDepthMm &&
+      (i.ratings.heightMm - 150) * (i.ratings.widthMm - 100) >= need.minUsableAreaMm2;
+    expect(offered.sort()).toEqual(
+      all
+        .filter((i) => fits(i) && i.code !== enc.code)
+        .map((i) => i.code)
+        .sort(),
+    );
     // and the catalogue does hold enclosures that would not do (so the list is a choice, not the whole category)
     expect(all.filter((i) => i.active && !fits(i)).length).toBeGreaterThan(0);
     await screenshot(page, 'bom-swap-fitting');
@@ -202,7 +232,9 @@ describe('estimator in the browser', () => {
     // a maker's table typed into the file format comes in as a whole (set aside, so no panel changes)
     const tableRef = `E2E-TBL-${Date.now().toString(36).toUpperCase()}`;
     const csv = `ref,parts,ratingKa,maxVolts,source,active\r\n${tableRef},PW-BR-3P-010 + PW-CN-N0-120,5,480,maker table (test data),no\r\n`;
-    await section.getByLabel('Import a combination table').setInputFiles({ name: 'table.csv', mimeType: 'text/csv', buffer: Buffer.from(csv) });
+    await section
+      .getByLabel('Import a combination table')
+      .setInputFiles({ name: 'table.csv', mimeType: 'text/csv', buffer: Buffer.from(csv) });
     await section.getByRole('status').filter({ hasText: '✔ Imported: 1 new, 0 changed' }).waitFor();
     await section.getByRole('row').filter({ hasText: tableRef }).getByText('○ set aside').waitFor();
   });

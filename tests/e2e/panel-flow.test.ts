@@ -13,7 +13,10 @@ import { launch, newPage, screenshot, signInThroughForm } from '../setup/browser
 let browser: Browser;
 let panelUrl = '';
 
-async function fillWizard(page: Page, v: { tag: string; hp: string; fla?: string; serviceFactor?: string; reversing?: boolean; reverseHazard?: boolean }) {
+async function fillWizard(
+  page: Page,
+  v: { tag: string; hp: string; fla?: string; serviceFactor?: string; reversing?: boolean; reverseHazard?: boolean },
+) {
   await page.getByLabel('Tag', { exact: true }).fill(v.tag);
   // a new motor starts with no supply, voltage or service factor: the nameplate's answers are typed
   await page.getByLabel('Supply').selectOption('ac3');
@@ -101,7 +104,10 @@ describe('designer → engineer → estimator', () => {
 
     await page.getByRole('link', { name: 'Import motor list' }).click();
     const csv = path.join(os.tmpdir(), `motors-${Date.now()}.csv`);
-    fs.writeFileSync(csv, 'tag,description,supply,hp,volts,environment\r\nSP-2,Polymer pump,ac3,5,460,washdown\r\nSP-3,Cake conveyor,ac3,10,460,indoor-dusty\r\n');
+    fs.writeFileSync(
+      csv,
+      'tag,description,supply,hp,volts,environment\r\nSP-2,Polymer pump,ac3,5,460,washdown\r\nSP-3,Cake conveyor,ac3,10,460,indoor-dusty\r\n',
+    );
     await page.getByLabel('Motor list file').setInputFiles(csv);
     await page.getByText('✔ 2 rows are ready to import.').waitFor();
     await page.getByRole('button', { name: /Import 2 motors/ }).click();
@@ -119,13 +125,19 @@ describe('designer → engineer → estimator', () => {
     await signInThroughForm(page, 'engineer');
     await page.waitForURL(/\/jobs$/);
     // the jobs page puts the engineer's queue first: the submitted panel, opened at its Protection section
-    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: /^Jobs\s*[1-9]\d* waiting for you$/ }).waitFor();
+    await page
+      .getByRole('navigation', { name: 'Main' })
+      .getByRole('link', { name: /^Jobs\s*[1-9]\d* waiting for you$/ })
+      .waitFor();
     const waiting = page.getByRole('region', { name: 'Sign-off queue' }).getByLabel('Waiting for sign-off');
     await waiting.getByText('your next work').waitFor();
     await waiting.getByRole('link', { name: 'J-2042 · MCC-S Sludge press' }).click();
     await page.waitForURL(`${panelUrl}/protection`);
     const card = page.getByRole('article', { name: 'Motor SP-1' });
-    await card.getByText(/430\.52/).first().waitFor();
+    await card
+      .getByText(/430\.52/)
+      .first()
+      .waitFor();
     // the overload relay's dial at the nameplate FLA of 31 A; the trip limit 125 % = 38.75 A (NEC 2023 430.32(A)(1))
     await card.getByText('dial at 31 A (nameplate FLA)').waitFor();
     await card.getByText(/≤ 38\.75 A \(125 %\)/).waitFor();
@@ -150,7 +162,10 @@ describe('designer → engineer → estimator', () => {
     await page.getByRole('table', { name: 'Motors' }).getByRole('link', { name: 'SP-1' }).click();
     await page.getByRole('button', { name: /4\. Protection/ }).click();
     await page.getByLabel('Branch protective device').selectOption('dual-element-fuse');
-    await page.getByRole('complementary', { name: 'Selection preview' }).getByText(/Dual-element fuse 60 A/).waitFor();
+    await page
+      .getByRole('complementary', { name: 'Selection preview' })
+      .getByText(/Dual-element fuse 60 A/)
+      .waitFor();
     await page.getByRole('button', { name: 'Save motor' }).click();
     await page.waitForURL(/\/motors$/);
     await submitAndSignOff(page, 'R0');
@@ -176,15 +191,27 @@ describe('designer → engineer → estimator', () => {
     expect(delta).toMatch(/^\+\$[\d,]+\.\d\d$/);
     await screenshot(est, 'change-report');
     // the change-order price as a workbook: the sell price change matches the page
-    const [changes] = await Promise.all([est.waitForEvent('download'), report.getByRole('link', { name: 'Download R0 → R1 (.xlsx)' }).click()]);
+    const [changes] = await Promise.all([
+      est.waitForEvent('download'),
+      report.getByRole('link', { name: 'Download R0 → R1 (.xlsx)' }).click(),
+    ]);
     const cw = new ExcelJS.Workbook();
     await cw.xlsx.readFile((await changes.path())!);
-    const sell = cw.getWorksheet('Summary')!.getRows(1, 12)!.find((r) => r.getCell(1).value === 'Sell price')!;
+    const sell = cw
+      .getWorksheet('Summary')!
+      .getRows(1, 12)!
+      .find((r) => r.getCell(1).value === 'Sell price')!;
     const result = (sell.getCell(4).value as { result: number }).result;
     expect(`+${result.toLocaleString('en-US', { style: 'currency', currency: 'USD' })}`).toBe(delta);
 
     await est.goto(`${panelUrl}/bill-of-materials`);
-    const [download] = await Promise.all([est.waitForEvent('download'), est.getByRole('link', { name: /\.xlsx/ }).first().click()]);
+    const [download] = await Promise.all([
+      est.waitForEvent('download'),
+      est
+        .getByRole('link', { name: /\.xlsx/ })
+        .first()
+        .click(),
+    ]);
     const file = await download.path();
     const wb = new ExcelJS.Workbook();
     await wb.xlsx.readFile(file!);
@@ -199,8 +226,13 @@ describe('designer → engineer → estimator', () => {
     const client = new pg.Client({ connectionString: inject('e2eDatabaseUrl') });
     await client.connect();
     const panelId = Number(/\/panels\/(\d+)$/.exec(panelUrl)![1]);
-    const engine = await client.query(`SELECT selection->'scpd'->>'ratingAmps' AS amps FROM loads WHERE panel_id = $1 AND tag = 'SP-1'`, [panelId]);
-    const updated = await client.query(`UPDATE loads SET selection = jsonb_set(selection, '{scpd,ratingAmps}', '999') WHERE panel_id = $1 AND tag = 'SP-1'`, [panelId]);
+    const engine = await client.query(`SELECT selection->'scpd'->>'ratingAmps' AS amps FROM loads WHERE panel_id = $1 AND tag = 'SP-1'`, [
+      panelId,
+    ]);
+    const updated = await client.query(
+      `UPDATE loads SET selection = jsonb_set(selection, '{scpd,ratingAmps}', '999') WHERE panel_id = $1 AND tag = 'SP-1'`,
+      [panelId],
+    );
     await client.end();
     expect(updated.rowCount).toBe(1);
 

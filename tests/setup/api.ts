@@ -62,11 +62,19 @@ export function send(s: Session, method: 'post' | 'patch' | 'put' | 'delete', ur
  * picking the first), for a swap that meets the line's requirement. Returns the new code.
  */
 export async function addSecondMake(s: Session, code: string, extraCost = 20): Promise<string> {
-  const items = (await s.agent.get(`/api/catalogue/items?q=${encodeURIComponent(code)}&active=all`).expect(200)).body as Array<Record<string, unknown> & { code: string }>;
+  const items = (await s.agent.get(`/api/catalogue/items?q=${encodeURIComponent(code)}&active=all`).expect(200)).body as Array<
+    Record<string, unknown> & { code: string }
+  >;
   const item = items.find((i) => i.code === code);
   if (!item) throw new Error(`no catalogue item ${code}`);
   const { id: _id, version: _v, updatedAt: _u, ...fields } = item as Record<string, unknown>;
   const second = `${code}-B${Math.floor(Math.random() * 1e6)}`.slice(0, 40);
-  await send(s, 'post', '/api/catalogue/items', { ...fields, code: second, description: `${String(item.description)} (second make, test)`.slice(0, 200), unitCost: Number(item.unitCost) + extraCost, active: true }).expect(201);
+  await send(s, 'post', '/api/catalogue/items', {
+    ...fields,
+    code: second,
+    description: `${String(item.description)} (second make, test)`.slice(0, 200),
+    unitCost: Number(item.unitCost) + extraCost,
+    active: true,
+  }).expect(201);
   return second;
 }

@@ -4,7 +4,14 @@ import fs from 'node:fs';
 import path from 'node:path';
 import { DEMO_USERS } from '../../server/db/seeders/demo';
 
-export const CHROMIUM_FLAGS = ['--headless', '--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--no-first-run'];
+export const CHROMIUM_FLAGS = [
+  '--headless',
+  '--no-sandbox',
+  '--disable-gpu',
+  '--disable-background-networking',
+  '--disable-component-update',
+  '--no-first-run',
+];
 
 export async function launch(): Promise<Browser> {
   return chromium.launch({ executablePath: '/usr/bin/chromium', args: CHROMIUM_FLAGS, headless: true });

@@ -26,7 +26,10 @@ function ensureChromium() {
 export default async function setup(project: TestProject) {
   process.env.PW_QUIET = '1';
   ensureChromium();
-  execFileSync(process.execPath, [path.join(root, 'node_modules', 'vite', 'bin', 'vite.js'), 'build', '--logLevel', 'error'], { cwd: root, stdio: 'inherit' });
+  execFileSync(process.execPath, [path.join(root, 'node_modules', 'vite', 'bin', 'vite.js'), 'build', '--logLevel', 'error'], {
+    cwd: root,
+    stdio: 'inherit',
+  });
 
   const name = `pw_e2e_${process.pid}_${Date.now().toString(36)}`;
   const admin = await acquireCluster();

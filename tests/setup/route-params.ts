@@ -14,24 +14,81 @@ import { CombinationRatingRow } from '../../server/db/models/combination-rating'
 export async function paramValues(): Promise<Record<string, string>> {
   const org = await Organisation.findOne({ where: { name: DEMO_ORGANISATION } });
   const organisationId = org!.id;
-  const job = await Job.create({ organisationId, number: `RM-${Date.now().toString(36)}`, name: 'Role matrix job', archivedAt: null, createdBy: null });
+  const job = await Job.create({
+    organisationId,
+    number: `RM-${Date.now().toString(36)}`,
+    name: 'Role matrix job',
+    archivedAt: null,
+    createdBy: null,
+  });
   const user = await User.findOne({ where: { organisationId, email: 'estimator@copperline.test' } });
-  const panel = await Panel.create({ organisationId, jobId: job.id, name: 'Role matrix panel', revisionNumber: null, archivedAt: null, rollup: null, submittedAt: null });
+  const panel = await Panel.create({
+    organisationId,
+    jobId: job.id,
+    name: 'Role matrix panel',
+    revisionNumber: null,
+    archivedAt: null,
+    rollup: null,
+    submittedAt: null,
+  });
   const answers = { tag: 'RM-1', supply: 'ac3' as const, hp: 10, volts: 460 };
-  const load = await Load.create({ organisationId, panelId: panel.id, tag: 'RM-1', answers, selection: await selectOne(job, answers), overrides: [] });
+  const load = await Load.create({
+    organisationId,
+    panelId: panel.id,
+    tag: 'RM-1',
+    answers,
+    selection: await selectOne(job, answers),
+    overrides: [],
+  });
   const item = await CatalogueItem.create({
-    organisationId, code: `RM-ITEM-${Date.now().toString(36).toUpperCase()}`, category: 'fuse', description: 'Role matrix fuse',
-    ratings: { volts: 600, amps: 10, fuseClass: 'CC', timeDelay: true }, sccrKa: null, unitCost: 5, active: false,
+    organisationId,
+    code: `RM-ITEM-${Date.now().toString(36).toUpperCase()}`,
+    category: 'fuse',
+    description: 'Role matrix fuse',
+    ratings: { volts: 600, amps: 10, fuseClass: 'CC', timeDelay: true },
+    sccrKa: null,
+    unitCost: 5,
+    active: false,
   });
   const line = await BomLineRow.create({
-    organisationId, panelId: panel.id, position: 0,
-    line: { bucket: '(panel)', category: 'freight', code: null, description: 'Role matrix freight', quantity: 1, unit: 'ea', unitCost: 10, unitLabourHours: 0, heatLossW: 0, sccrKa: null, status: 'manual', requiredRatings: null, source: 'manual', swapReason: null },
+    organisationId,
+    panelId: panel.id,
+    position: 0,
+    line: {
+      bucket: '(panel)',
+      category: 'freight',
+      code: null,
+      description: 'Role matrix freight',
+      quantity: 1,
+      unit: 'ea',
+      unitCost: 10,
+      unitLabourHours: 0,
+      heatLossW: 0,
+      sccrKa: null,
+      status: 'manual',
+      requiredRatings: null,
+      source: 'manual',
+      swapReason: null,
+    },
   });
   const combination = await CombinationRatingRow.create({
-    organisationId, ref: `RM-CMB-${Date.now().toString(36)}`, componentCodes: [item.code, 'PW-CN-N1-120'], ratingKa: 5, maxVolts: null, source: 'Role matrix combination', active: false,
+    organisationId,
+    ref: `RM-CMB-${Date.now().toString(36)}`,
+    componentCodes: [item.code, 'PW-CN-N1-120'],
+    ratingKa: 5,
+    maxVolts: null,
+    source: 'Role matrix combination',
+    active: false,
   });
   return {
-    id: String(job.id), userId: String(user!.id), panelId: String(panel.id), loadId: String(load.id), number: '0',
-    itemId: String(item.id), lineId: String(line.id), key: 'termination', combinationId: String(combination.id),
+    id: String(job.id),
+    userId: String(user!.id),
+    panelId: String(panel.id),
+    loadId: String(load.id),
+    number: '0',
+    itemId: String(item.id),
+    lineId: String(line.id),
+    key: 'termination',
+    combinationId: String(combination.id),
   };
 }

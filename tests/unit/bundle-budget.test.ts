@@ -32,8 +32,12 @@ describe('client bundle budget', () => {
   let temp: string | null = null;
 
   beforeAll(async () => {
-    const sources = ['src', 'shared', 'rules', 'index.html', 'vite.config.ts', 'package.json'].map((p) => path.join(root, p)).filter((p) => fs.existsSync(p));
-    const fresh = fs.existsSync(path.join(outDir, 'index.html')) && newestMtime(path.join(outDir, 'index.html')) >= Math.max(...sources.map(newestMtime));
+    const sources = ['src', 'shared', 'rules', 'index.html', 'vite.config.ts', 'package.json']
+      .map((p) => path.join(root, p))
+      .filter((p) => fs.existsSync(p));
+    const fresh =
+      fs.existsSync(path.join(outDir, 'index.html')) &&
+      newestMtime(path.join(outDir, 'index.html')) >= Math.max(...sources.map(newestMtime));
     if (!fresh || process.env.PW_BUNDLE_REBUILD === '1') {
       temp = fs.mkdtempSync(path.join(os.tmpdir(), 'pw-bundle-'));
       outDir = temp;
@@ -62,7 +66,9 @@ describe('client bundle budget', () => {
     expect(files.length).toBeGreaterThan(0);
     const gz = files.map((f) => ({ file: path.basename(f), bytes: zlib.gzipSync(fs.readFileSync(f), { level: 9 }).length }));
     const total = gz.reduce((n, f) => n + f.bytes, 0);
-    console.log(`first page JavaScript: ${(total / 1024).toFixed(1)} kB gzipped in ${gz.length} file(s): ${gz.map((f) => `${f.file} ${(f.bytes / 1024).toFixed(1)} kB`).join(', ')}`);
+    console.log(
+      `first page JavaScript: ${(total / 1024).toFixed(1)} kB gzipped in ${gz.length} file(s): ${gz.map((f) => `${f.file} ${(f.bytes / 1024).toFixed(1)} kB`).join(', ')}`,
+    );
     expect(total).toBeGreaterThan(10 * 1024); // the React runtime alone is more: the files were found
     expect(total).toBeLessThan(BUDGET_GZIP_BYTES);
   });
@@ -81,17 +87,21 @@ describe('client bundle budget', () => {
   it('keeps the selector and the rule files out of the first page', () => {
     const ids = ruleIds(path.join(root, 'rules'));
     expect(ids.length).toBeGreaterThan(10);
-    const entryText = entryFiles().map((f) => fs.readFileSync(f, 'utf8')).join('\n');
+    const entryText = entryFiles()
+      .map((f) => fs.readFileSync(f, 'utf8'))
+      .join('\n');
     // the minifier may quote a string with ", ' or `
     const quoted = (text: string, id: string) => ['"', "'", '`'].some((q) => text.includes(`${q}${id}${q}`));
     const inEntry = ids.filter((id) => quoted(entryText, id));
     expect(inEntry).toEqual([]);
     // the rule ids are in the build: the search above can find them
     const entry = new Set(entryFiles().map((f) => path.basename(f)));
-    const wizard = jsChunks().filter((c) => !entry.has(c)).find((c) => {
-      const text = fs.readFileSync(path.join(outDir, 'assets', c), 'utf8');
-      return ids.every((id) => quoted(text, id));
-    });
+    const wizard = jsChunks()
+      .filter((c) => !entry.has(c))
+      .find((c) => {
+        const text = fs.readFileSync(path.join(outDir, 'assets', c), 'utf8');
+        return ids.every((id) => quoted(text, id));
+      });
     expect(wizard).toBeDefined();
   });
 });

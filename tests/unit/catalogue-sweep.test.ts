@@ -6,7 +6,10 @@ import { CatalogueFileSchema, LabourUnitsFileSchema, LABOUR_KEYS, CATEGORY_IDS }
 import { isItemFile } from '../../server/db/seeders/catalogue';
 
 const dir = path.resolve(__dirname, '../../catalog');
-const files = fs.readdirSync(dir).filter((f) => f.endsWith('.json')).sort();
+const files = fs
+  .readdirSync(dir)
+  .filter((f) => f.endsWith('.json'))
+  .sort();
 const itemFiles = files.filter(isItemFile);
 
 describe('catalog/ sweep', () => {
@@ -22,7 +25,9 @@ describe('catalog/ sweep', () => {
   });
 
   it('codes are unique across all files', () => {
-    const codes = itemFiles.flatMap((f) => (JSON.parse(fs.readFileSync(path.join(dir, f), 'utf8')) as Array<{ code: string }>).map((i) => i.code));
+    const codes = itemFiles.flatMap((f) =>
+      (JSON.parse(fs.readFileSync(path.join(dir, f), 'utf8')) as Array<{ code: string }>).map((i) => i.code),
+    );
     const dupes = codes.filter((c, i) => codes.indexOf(c) !== i);
     expect(dupes).toEqual([]);
   });
@@ -35,7 +40,69 @@ describe('catalog/ sweep', () => {
 
   it('no manufacturer names in descriptions (generic items only)', () => {
     // descriptions are built from generic trade words; a capitalised word outside this list would be a name
-    const allowed = new Set(['Contactor', 'NEMA', 'IEC', 'AC', 'DC', 'V', 'A', 'Mechanical', 'Auxiliary', 'N.O.', 'N.C.', 'Overload', 'Circuit', 'Motor', 'Fuse', 'UL', 'J', 'RK5', 'CC', 'Fused', 'Disconnect', 'Manual', 'Soft', 'Variable-frequency', 'Phase-monitoring', 'C', 'O', 'AC-3', 'Control', 'Terminal', 'Push', 'START', 'STOP', 'FWD', 'REV', 'FAST', 'SLOW', 'Selector', 'HAND-OFF-AUTO', 'FWD-OFF-REV', 'Pilot', 'LED', 'RUN', 'FAULT', 'Wire', 'Enclosure', 'Type', 'Filter', 'Main', 'Power', 'Output', 'Dynamic', 'Field-loss', 'MCP', 'W', 'VA', 'AWG', 'X', 'Enclosure,', 'Fuse,', 'Wire,']);
+    const allowed = new Set([
+      'Contactor',
+      'NEMA',
+      'IEC',
+      'AC',
+      'DC',
+      'V',
+      'A',
+      'Mechanical',
+      'Auxiliary',
+      'N.O.',
+      'N.C.',
+      'Overload',
+      'Circuit',
+      'Motor',
+      'Fuse',
+      'UL',
+      'J',
+      'RK5',
+      'CC',
+      'Fused',
+      'Disconnect',
+      'Manual',
+      'Soft',
+      'Variable-frequency',
+      'Phase-monitoring',
+      'C',
+      'O',
+      'AC-3',
+      'Control',
+      'Terminal',
+      'Push',
+      'START',
+      'STOP',
+      'FWD',
+      'REV',
+      'FAST',
+      'SLOW',
+      'Selector',
+      'HAND-OFF-AUTO',
+      'FWD-OFF-REV',
+      'Pilot',
+      'LED',
+      'RUN',
+      'FAULT',
+      'Wire',
+      'Enclosure',
+      'Type',
+      'Filter',
+      'Main',
+      'Power',
+      'Output',
+      'Dynamic',
+      'Field-loss',
+      'MCP',
+      'W',
+      'VA',
+      'AWG',
+      'X',
+      'Enclosure,',
+      'Fuse,',
+      'Wire,',
+    ]);
     const items = itemFiles.flatMap((f) => CatalogueFileSchema.parse(JSON.parse(fs.readFileSync(path.join(dir, f), 'utf8'))));
     const odd = new Set<string>();
     for (const i of items) for (const w of i.description.split(/[\s,;()"×–/]+/)) if (/^[A-Z]/.test(w) && !allowed.has(w)) odd.add(w);
@@ -57,7 +124,9 @@ describe('catalog/combination-ratings.json (invented demo data)', () => {
     for (const c of combos) {
       for (const code of c.componentCodes) expect(items.has(code), `${c.ref}: ${code}`).toBe(true);
       // UL 508A SB4: a branch is rated no higher than its protective device's interrupting rating
-      const devices = c.componentCodes.map((code) => items.get(code)!).filter((i) => i.category === 'inverse-time-breaker' || i.category === 'fuse');
+      const devices = c.componentCodes
+        .map((code) => items.get(code)!)
+        .filter((i) => i.category === 'inverse-time-breaker' || i.category === 'fuse');
       expect(devices.length, c.ref).toBeGreaterThan(0);
       for (const d of devices) expect(c.ratingKa, `${c.ref} vs ${d.code}`).toBeLessThanOrEqual(d.sccrKa ?? 0);
     }

@@ -11,7 +11,9 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { stopsClusterWhenDone } from '../../scripts/postgres';
 
 const root = path.resolve(import.meta.dirname, '..', '..');
-const hasPostgres = fs.existsSync('/usr/lib/postgresql') && fs.readdirSync('/usr/lib/postgresql').some((v) => fs.existsSync(`/usr/lib/postgresql/${v}/bin/pg_ctl`));
+const hasPostgres =
+  fs.existsSync('/usr/lib/postgresql') &&
+  fs.readdirSync('/usr/lib/postgresql').some((v) => fs.existsSync(`/usr/lib/postgresql/${v}/bin/pg_ctl`));
 
 let dataDir = '';
 let env: NodeJS.ProcessEnv = {};
@@ -25,7 +27,11 @@ async function freePort(): Promise<number> {
 }
 
 function tsx(script: string, args: string[] = []): ChildProcess {
-  return spawn(process.execPath, ['--import', 'tsx', path.join(root, script), ...args], { cwd: root, env, stdio: ['ignore', 'pipe', 'pipe'] });
+  return spawn(process.execPath, ['--import', 'tsx', path.join(root, script), ...args], {
+    cwd: root,
+    env,
+    stdio: ['ignore', 'pipe', 'pipe'],
+  });
 }
 
 /** Runs a script to its end; its output. */
@@ -90,7 +96,14 @@ describe.skipIf(!hasPostgres)('the PostgreSQL that npm start uses', () => {
   beforeAll(async () => {
     dataDir = fs.mkdtempSync(path.join(os.tmpdir(), 'pw-lifecycle-'));
     fs.chmodSync(dataDir, 0o755); // the postgres user must reach the cluster folder
-    env = { ...process.env, PW_DATA_DIR: dataDir, PW_SKIP_BUILD: '1', PORT: String(await freePort()), PW_SMTP_FAKE_PORT: String(await freePort()), NODE_ENV: 'development' };
+    env = {
+      ...process.env,
+      PW_DATA_DIR: dataDir,
+      PW_SKIP_BUILD: '1',
+      PORT: String(await freePort()),
+      PW_SMTP_FAKE_PORT: String(await freePort()),
+      NODE_ENV: 'development',
+    };
     for (const k of ['DATABASE_URL', 'PW_PG_PORT', 'PW_KEEP_DB', 'PW_DB_NAME', 'PW_QUIET', 'APP_URL']) delete env[k];
   });
 
@@ -98,9 +111,20 @@ describe.skipIf(!hasPostgres)('the PostgreSQL that npm start uses', () => {
     // whatever happened above, no cluster of this test stays running
     if (!dataDir) return;
     if (fs.existsSync(path.join(dataDir, 'pg')) && postmasterPid()) {
-      const bin = fs.readdirSync('/usr/lib/postgresql').map((v) => `/usr/lib/postgresql/${v}/bin/pg_ctl`).find((f) => fs.existsSync(f))!;
+      const bin = fs
+        .readdirSync('/usr/lib/postgresql')
+        .map((v) => `/usr/lib/postgresql/${v}/bin/pg_ctl`)
+        .find((f) => fs.existsSync(f))!;
       const asRoot = process.getuid?.() === 0;
-      spawnSync(asRoot ? 'runuser' : bin, [...(asRoot ? ['-u', 'postgres', '--', bin] : []), '-D', clusterDir(), '-m', 'immediate', '-w', 'stop']);
+      spawnSync(asRoot ? 'runuser' : bin, [
+        ...(asRoot ? ['-u', 'postgres', '--', bin] : []),
+        '-D',
+        clusterDir(),
+        '-m',
+        'immediate',
+        '-w',
+        'stop',
+      ]);
     }
     const target = fs.existsSync(path.join(dataDir, 'pg')) ? clusterDir() : null;
     fs.rmSync(dataDir, { recursive: true, force: true });

@@ -5,7 +5,15 @@ import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
 import type { z } from 'zod';
-import { DECISION_LABELS, RATING_LABELS, RATING_VALUE_LABELS, decisionValueLabel, fieldLabel, starterTypeLabel, ANSWER_LABELS } from '../../shared/labels';
+import {
+  DECISION_LABELS,
+  RATING_LABELS,
+  RATING_VALUE_LABELS,
+  decisionValueLabel,
+  fieldLabel,
+  starterTypeLabel,
+  ANSWER_LABELS,
+} from '../../shared/labels';
 import { issueSentence } from '../../shared/plain-messages';
 import { isDecisionKey, STARTER_TYPES } from '../../shared/engine/decisions';
 import { RatingsSchema, REQUIRED_RATINGS, CatalogueItemSchema } from '../../shared/schemas/catalogue';
@@ -14,7 +22,8 @@ import { JobInputSchema } from '../../shared/schemas/job';
 import { previewImport } from '../../server/modules/panels/import';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
-const walk = (dir: string): string[] => readdirSync(dir, { withFileTypes: true }).flatMap((e) => (e.isDirectory() ? walk(path.join(dir, e.name)) : [path.join(dir, e.name)]));
+const walk = (dir: string): string[] =>
+  readdirSync(dir, { withFileTypes: true }).flatMap((e) => (e.isDirectory() ? walk(path.join(dir, e.name)) : [path.join(dir, e.name)]));
 
 /** Every (decision, value) a rule file sets, from rules/**.json as stored. */
 const decided: Array<[string, unknown, string]> = walk(path.join(root, 'rules'))
@@ -28,13 +37,18 @@ const decided: Array<[string, unknown, string]> = walk(path.join(root, 'rules'))
 const seedRatingKeys = new Set(
   readdirSync(path.join(root, 'catalog'))
     .filter((f) => f.endsWith('.json') && f !== 'combination-ratings.json' && f !== 'labour-units.json')
-    .flatMap((f) => (JSON.parse(readFileSync(path.join(root, 'catalog', f), 'utf8')) as Array<{ ratings: Record<string, unknown> }>).flatMap((i) => Object.keys(i.ratings))),
+    .flatMap((f) =>
+      (JSON.parse(readFileSync(path.join(root, 'catalog', f), 'utf8')) as Array<{ ratings: Record<string, unknown> }>).flatMap((i) =>
+        Object.keys(i.ratings),
+      ),
+    ),
 );
 const schemaRatingKeys = Object.keys(RatingsSchema.shape);
 
 /** the trade's own abbreviations stay as the trade writes them */
 const TRADE_TERMS = new Set(['FVNR', 'FVR', 'RVSS', 'VFD', 'AC-3', 'AC-4']);
-const looksLikeKey = (s: string) => !TRADE_TERMS.has(s) && ( /^[a-z]+[A-Z][A-Za-z]*$/.test(s) || /^[A-Z]{4,}$/.test(s) || /^[a-z0-9]+(-[a-z0-9]+)+$/.test(s));
+const looksLikeKey = (s: string) =>
+  !TRADE_TERMS.has(s) && (/^[a-z]+[A-Z][A-Za-z]*$/.test(s) || /^[A-Z]{4,}$/.test(s) || /^[a-z0-9]+(-[a-z0-9]+)+$/.test(s));
 
 describe('a label for every key the product shows', () => {
   it('finds the rules and the catalogue seed (the walk itself can fail)', () => {
@@ -56,7 +70,11 @@ describe('a label for every key the product shows', () => {
   it('every text rating value in the catalogue seed (kind, function) has words', () => {
     const values = readdirSync(path.join(root, 'catalog'))
       .filter((f) => f.endsWith('.json') && f !== 'combination-ratings.json' && f !== 'labour-units.json')
-      .flatMap((f) => (JSON.parse(readFileSync(path.join(root, 'catalog', f), 'utf8')) as Array<{ ratings: { kind?: string; function?: string } }>).flatMap((i) => [i.ratings.kind, i.ratings.function]))
+      .flatMap((f) =>
+        (
+          JSON.parse(readFileSync(path.join(root, 'catalog', f), 'utf8')) as Array<{ ratings: { kind?: string; function?: string } }>
+        ).flatMap((i) => [i.ratings.kind, i.ratings.function]),
+      )
       .filter((v): v is string => typeof v === 'string');
     expect(values.length).toBeGreaterThan(100);
     for (const v of new Set(values)) expect(RATING_VALUE_LABELS[v], v).toBeTruthy();
@@ -94,7 +112,14 @@ describe('plain sentences for typical validation problems', () => {
   };
 
   it('a catalogue item: NaN, an empty description, a negative cost', () => {
-    const m = messages(CatalogueItemSchema, { code: 'PW-X-1', description: '', category: 'contactor', unitCost: Number.NaN, leadTimeDays: 2.5, ratings: { volts: 600, coilVolts: 120, amps: 9, sealedVa: 8, inrushVa: -1 } });
+    const m = messages(CatalogueItemSchema, {
+      code: 'PW-X-1',
+      description: '',
+      category: 'contactor',
+      unitCost: Number.NaN,
+      leadTimeDays: 2.5,
+      ratings: { volts: 600, coilVolts: 120, amps: 9, sealedVa: 8, inrushVa: -1 },
+    });
     expect(m.unitCost).toBe('Enter a number.'); // was "Invalid input: expected number, received NaN"
     expect(m.description).toBe('This is needed.'); // was "Too small: expected string to have >=1 characters"
     expect(m.leadTimeDays).toBe('Enter a whole number.');

@@ -9,7 +9,9 @@ import { createSelector } from '../../shared/engine/selector';
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
 
 function walk(dir: string): string[] {
-  return readdirSync(dir, { withFileTypes: true }).flatMap((e) => (e.isDirectory() ? walk(path.join(dir, e.name)) : [path.join(dir, e.name)]));
+  return readdirSync(dir, { withFileTypes: true }).flatMap((e) =>
+    e.isDirectory() ? walk(path.join(dir, e.name)) : [path.join(dir, e.name)],
+  );
 }
 
 const ruleFiles = walk(path.join(root, 'rules')).map((f) => path.relative(root, f).split(path.sep).join('/'));
@@ -25,7 +27,9 @@ describe('rules/ sweep', () => {
     expect(rule.event.params.basis.trim()).not.toBe('');
   });
   it('the whole set builds one engine (ids unique)', () => {
-    const s = createSelector(ruleFiles.map((file) => ({ file, content: JSON.parse(readFileSync(path.join(root, file), 'utf8')) as unknown })));
+    const s = createSelector(
+      ruleFiles.map((file) => ({ file, content: JSON.parse(readFileSync(path.join(root, file), 'utf8')) as unknown })),
+    );
     expect(s.ruleCount).toBe(ruleFiles.length);
   });
 });

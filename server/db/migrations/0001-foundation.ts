@@ -176,7 +176,21 @@ export async function up({ context: qi }: MigrationParams<QueryInterface>) {
 }
 
 export async function down({ context: qi }: MigrationParams<QueryInterface>) {
-  for (const t of ['mail_messages', 'bom_lines', 'labour_units', 'catalogue_items', 'activities', 'comments', 'revisions', 'loads', 'panels', 'jobs', 'session', 'users', 'organisations']) {
+  for (const t of [
+    'mail_messages',
+    'bom_lines',
+    'labour_units',
+    'catalogue_items',
+    'activities',
+    'comments',
+    'revisions',
+    'loads',
+    'panels',
+    'jobs',
+    'session',
+    'users',
+    'organisations',
+  ]) {
     await qi.dropTable(t);
   }
 }

@@ -22,7 +22,7 @@ export async function up({ context: qi }: MigrationParams<QueryInterface>) {
   await qi.addIndex('combination_ratings', ['organisation_id', 'ref'], { unique: true, name: 'combination_ratings_org_ref' });
   // on the change feed with the catalogue (migration 0005): the SCCR worksheet keeps them in memory
   await qi.sequelize.query(
-    'create trigger pw_combination_change after insert or update or delete or truncate on combination_ratings for each statement execute function pw_notify_table_change(\'c\')',
+    "create trigger pw_combination_change after insert or update or delete or truncate on combination_ratings for each statement execute function pw_notify_table_change('c')",
   );
 }
 

@@ -21,16 +21,30 @@ export async function up({ context: qi }: MigrationParams<QueryInterface>) {
   await qi.addColumn('organisations', 'logo_key', { type: DataTypes.STRING(200), allowNull: true });
   await qi.addColumn('organisations', 'default_labour_rate', { type: DataTypes.DOUBLE, allowNull: false, defaultValue: 85 });
   await qi.addColumn('organisations', 'default_markup_percent', { type: DataTypes.DOUBLE, allowNull: false, defaultValue: 15 });
-  await qi.addColumn('organisations', 'drawing_number_scheme', { type: DataTypes.STRING(80), allowNull: false, defaultValue: '{job}-{panel}-{sheet:2}' });
+  await qi.addColumn('organisations', 'drawing_number_scheme', {
+    type: DataTypes.STRING(80),
+    allowNull: false,
+    defaultValue: '{job}-{panel}-{sheet:2}',
+  });
   await qi.addColumn('organisations', 'allow_self_sign_off', { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false });
   await qi.addColumn('organisations', 'version', { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 });
   // the signed-in people's cache holds the organisation's name: a renamed shop announces it as a user change
-  await qi.sequelize.query("create trigger pw_organisations_change after update or delete on organisations for each row execute function pw_notify_row_change('u')");
+  await qi.sequelize.query(
+    "create trigger pw_organisations_change after update or delete on organisations for each row execute function pw_notify_row_change('u')",
+  );
 }
 
 export async function down({ context: qi }: MigrationParams<QueryInterface>) {
   await qi.sequelize.query('drop trigger if exists pw_organisations_change on organisations');
-  for (const c of ['version', 'allow_self_sign_off', 'drawing_number_scheme', 'default_markup_percent', 'default_labour_rate', 'logo_key', 'address']) {
+  for (const c of [
+    'version',
+    'allow_self_sign_off',
+    'drawing_number_scheme',
+    'default_markup_percent',
+    'default_labour_rate',
+    'logo_key',
+    'address',
+  ]) {
     await qi.removeColumn('organisations', c);
   }
   await qi.dropTable('stored_files');

@@ -15,12 +15,39 @@ import { CombinationRatingRow } from './combination-rating';
 import { StoredFileRow } from './stored-file';
 
 export function initModels(sequelize: Sequelize) {
-  for (const m of [Organisation, User, Job, Panel, Load, Revision, Comment, Activity, CatalogueItem, LabourUnit, BomLineRow, MailMessage, CombinationRatingRow, StoredFileRow]) {
+  for (const m of [
+    Organisation,
+    User,
+    Job,
+    Panel,
+    Load,
+    Revision,
+    Comment,
+    Activity,
+    CatalogueItem,
+    LabourUnit,
+    BomLineRow,
+    MailMessage,
+    CombinationRatingRow,
+    StoredFileRow,
+  ]) {
     m.initModel(sequelize);
   }
   Organisation.hasMany(User, { foreignKey: 'organisationId' });
   User.belongsTo(Organisation, { foreignKey: 'organisationId' });
-  const scoped = [Job, Panel, Load, Revision, Comment, Activity, CatalogueItem, LabourUnit, BomLineRow, CombinationRatingRow, StoredFileRow] as Array<{ belongsTo: typeof Job.belongsTo }>;
+  const scoped = [
+    Job,
+    Panel,
+    Load,
+    Revision,
+    Comment,
+    Activity,
+    CatalogueItem,
+    LabourUnit,
+    BomLineRow,
+    CombinationRatingRow,
+    StoredFileRow,
+  ] as Array<{ belongsTo: typeof Job.belongsTo }>;
   for (const m of scoped) m.belongsTo.call(m as typeof Job, Organisation, { foreignKey: 'organisationId' });
   Job.hasMany(Panel, { foreignKey: 'jobId', as: 'panels' });
   Panel.belongsTo(Job, { foreignKey: 'jobId', as: 'job' });

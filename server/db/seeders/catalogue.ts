@@ -39,10 +39,16 @@ export function readSeedLabourUnits(dir = CATALOG_DIR) {
 }
 
 export async function seedCatalogue(organisationId: number, transaction: Transaction) {
-  await CatalogueRow.bulkCreate(readSeedCatalogue().map((i) => fromItem(organisationId, i)), { transaction });
+  await CatalogueRow.bulkCreate(
+    readSeedCatalogue().map((i) => fromItem(organisationId, i)),
+    { transaction },
+  );
   await LabourRow.bulkCreate(
     readSeedLabourUnits().map((u) => ({ organisationId, key: u.key, label: u.description, hours: u.hours, per: u.per })),
     { transaction },
   );
-  await CombinationRatingRow.bulkCreate(readSeedCombinations().map((c) => ({ ...c, organisationId })), { transaction });
+  await CombinationRatingRow.bulkCreate(
+    readSeedCombinations().map((c) => ({ ...c, organisationId })),
+    { transaction },
+  );
 }

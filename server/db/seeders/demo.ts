@@ -26,7 +26,15 @@ export async function seedDemo(sequelize: Sequelize): Promise<boolean> {
     for (const u of DEMO_USERS) {
       users.push(
         await User.create(
-          { organisationId: org.id, email: u.email, name: u.name, roles: [...u.roles], passwordHash: await argon2.hash(u.password), inviteToken: null, lastSignInAt: null },
+          {
+            organisationId: org.id,
+            email: u.email,
+            name: u.name,
+            roles: [...u.roles],
+            passwordHash: await argon2.hash(u.password),
+            inviteToken: null,
+            lastSignInAt: null,
+          },
           { transaction },
         ),
       );

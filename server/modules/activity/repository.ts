@@ -9,12 +9,23 @@ export async function insertActivity(values: CreationAttributes<Activity>, trans
 
 /** Newest first, each with its author's name (null when the person is gone). */
 export async function activityRows(where: WhereOptions<Activity>, limit: number) {
-  const rows = await Activity.findAll({ where, include: [{ model: User, as: 'user', attributes: ['name'] }], order: [['id', 'DESC']], limit });
+  const rows = await Activity.findAll({
+    where,
+    include: [{ model: User, as: 'user', attributes: ['name'] }],
+    order: [['id', 'DESC']],
+    limit,
+  });
   return rows.map((r) => ({ row: r, author: (r as Activity & { user?: User | null }).user?.name ?? null }));
 }
 
 /** A person's rows on a panel, or on its job's own data, after a moment (or all), oldest first. */
-export async function actionsOnPanelBy(organisationId: number, panel: { id: number; jobId: number }, userId: number, since: Date | null, transaction?: Transaction) {
+export async function actionsOnPanelBy(
+  organisationId: number,
+  panel: { id: number; jobId: number },
+  userId: number,
+  since: Date | null,
+  transaction?: Transaction,
+) {
   const rows = await Activity.findAll({
     where: {
       organisationId,

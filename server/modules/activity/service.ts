@@ -31,7 +31,11 @@ export async function recordActivity(actor: CurrentUser, a: ActivityInput, trans
 
 export async function listActivity(actor: CurrentUser, where: { jobId?: number; entity?: string }, limit = 200) {
   const rows = await activityRows(
-    { organisationId: actor.organisationId, ...(where.jobId ? { jobId: where.jobId } : {}), ...(where.entity ? { entity: where.entity } : {}) },
+    {
+      organisationId: actor.organisationId,
+      ...(where.jobId ? { jobId: where.jobId } : {}),
+      ...(where.entity ? { entity: where.entity } : {}),
+    },
     limit,
   );
   return rows.map(({ row: r, author }) => ({
@@ -51,6 +55,12 @@ export async function listActivity(actor: CurrentUser, where: { jobId?: number; 
  * What a person did to a panel, or to its job's own data (supply, fault current, code edition), since a
  * moment (the last sign-off), oldest first: entity, action, summary and diff.
  */
-export async function panelActionsBy(organisationId: number, panel: { id: number; jobId: number }, userId: number, since: Date | null, transaction?: Transaction) {
+export async function panelActionsBy(
+  organisationId: number,
+  panel: { id: number; jobId: number },
+  userId: number,
+  since: Date | null,
+  transaction?: Transaction,
+) {
   return actionsOnPanelBy(organisationId, panel, userId, since, transaction);
 }

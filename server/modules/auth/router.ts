@@ -29,7 +29,11 @@ export function signInLimiter(): RequestHandler {
 
 function authenticate(req: Parameters<RequestHandler>[0], res: Parameters<RequestHandler>[1]): Promise<{ id: number } | false> {
   return new Promise((resolve, reject) => {
-    passport.authenticate('local', (err: unknown, user: { id: number } | false) => (err ? reject(err) : resolve(user)))(req, res, () => undefined);
+    passport.authenticate('local', (err: unknown, user: { id: number } | false) => (err ? reject(err) : resolve(user)))(
+      req,
+      res,
+      () => undefined,
+    );
   });
 }
 

@@ -18,13 +18,43 @@ export async function jobContents(organisationId: number, jobId: number) {
   const panelIds = panels.map((p) => p.id);
   const inPanels = { organisationId, panelId: { [Op.in]: panelIds } };
   const [loads, comments, revisions, bomLines] = await Promise.all([
-    Load.findAll({ where: inPanels, order: [['panelId', 'ASC'], ['position', 'ASC'], ['id', 'ASC']] }),
-    Comment.findAll({ where: inPanels, order: [['panelId', 'ASC'], ['id', 'ASC']] }),
-    Revision.findAll({ where: inPanels, order: [['panelId', 'ASC'], ['number', 'ASC']] }),
-    BomLineRow.findAll({ where: inPanels, order: [['panelId', 'ASC'], ['position', 'ASC'], ['id', 'ASC']] }),
+    Load.findAll({
+      where: inPanels,
+      order: [
+        ['panelId', 'ASC'],
+        ['position', 'ASC'],
+        ['id', 'ASC'],
+      ],
+    }),
+    Comment.findAll({
+      where: inPanels,
+      order: [
+        ['panelId', 'ASC'],
+        ['id', 'ASC'],
+      ],
+    }),
+    Revision.findAll({
+      where: inPanels,
+      order: [
+        ['panelId', 'ASC'],
+        ['number', 'ASC'],
+      ],
+    }),
+    BomLineRow.findAll({
+      where: inPanels,
+      order: [
+        ['panelId', 'ASC'],
+        ['position', 'ASC'],
+        ['id', 'ASC'],
+      ],
+    }),
   ]);
-  const userIds = [...new Set([...comments.map((c) => c.userId), ...revisions.map((r) => r.approvedBy)].filter((x): x is number => x !== null))];
-  const users = userIds.length ? await User.findAll({ where: { organisationId, id: { [Op.in]: userIds } }, attributes: ['id', 'email', 'name'] }) : [];
+  const userIds = [
+    ...new Set([...comments.map((c) => c.userId), ...revisions.map((r) => r.approvedBy)].filter((x): x is number => x !== null)),
+  ];
+  const users = userIds.length
+    ? await User.findAll({ where: { organisationId, id: { [Op.in]: userIds } }, attributes: ['id', 'email', 'name'] })
+    : [];
   return { panels, loads, comments, revisions, bomLines, users };
 }
 

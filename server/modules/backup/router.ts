@@ -6,8 +6,9 @@ import { DomainError } from '../../../shared/errors';
 import * as service from './service';
 import { JobBackupSchema, MAX_BACKUP_BYTES } from './schema';
 
-
-const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: MAX_BACKUP_BYTES, files: 1, fields: 0, parts: 1 } }).single('file');
+const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: MAX_BACKUP_BYTES, files: 1, fields: 0, parts: 1 } }).single(
+  'file',
+);
 
 /**
  * The backup arrives either as a JSON body (up to the API's 1 MB body limit) or, for larger jobs, as
@@ -18,7 +19,12 @@ const backupFile: RequestHandler = (req, _res, next) => {
   if (!f) return next();
   const named = /\.json$/i.test(f.originalname);
   const typed = ['application/json', 'application/octet-stream', 'text/plain', ''].includes(f.mimetype);
-  if (!named || !typed) return next(new DomainError('unsupported_file', 'A job backup is a .json file exported from Panelwright', [{ path: 'file', message: 'not a .json file' }]));
+  if (!named || !typed)
+    return next(
+      new DomainError('unsupported_file', 'A job backup is a .json file exported from Panelwright', [
+        { path: 'file', message: 'not a .json file' },
+      ]),
+    );
   try {
     req.body = JSON.parse(f.buffer.toString('utf8'));
   } catch {

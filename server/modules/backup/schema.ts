@@ -16,7 +16,10 @@ export const BACKUP_VERSION = 1;
 export const MAX_BACKUP_BYTES = 20 * 1024 * 1024;
 
 const isoDate = z.iso.datetime({ offset: true });
-const person = z.object({ email: z.string().max(320), name: z.string().max(200) }).strict().nullable();
+const person = z
+  .object({ email: z.string().max(320), name: z.string().max(200) })
+  .strict()
+  .nullable();
 const json = z.record(z.string(), z.unknown());
 /**
  * A JSON object carried as it was frozen, typed as the column it goes back into: checked here as an object
@@ -119,22 +122,27 @@ export const JobBackupSchema = z
   .superRefine((b, ctx) => {
     const panelRefs = new Set<string>();
     b.panels.forEach((p, pi) => {
-      if (panelRefs.has(p.ref)) ctx.addIssue({ code: 'custom', path: ['panels', pi, 'ref'], message: `panel reference ${p.ref} is used twice` });
+      if (panelRefs.has(p.ref))
+        ctx.addIssue({ code: 'custom', path: ['panels', pi, 'ref'], message: `panel reference ${p.ref} is used twice` });
       panelRefs.add(p.ref);
       const loadRefs = new Set<string>();
       const tags = new Set<string>();
       p.loads.forEach((l, li) => {
-        if (loadRefs.has(l.ref)) ctx.addIssue({ code: 'custom', path: ['panels', pi, 'loads', li, 'ref'], message: `motor reference ${l.ref} is used twice` });
-        if (tags.has(l.tag.toLowerCase())) ctx.addIssue({ code: 'custom', path: ['panels', pi, 'loads', li, 'tag'], message: `tag ${l.tag} is used twice on this panel` });
+        if (loadRefs.has(l.ref))
+          ctx.addIssue({ code: 'custom', path: ['panels', pi, 'loads', li, 'ref'], message: `motor reference ${l.ref} is used twice` });
+        if (tags.has(l.tag.toLowerCase()))
+          ctx.addIssue({ code: 'custom', path: ['panels', pi, 'loads', li, 'tag'], message: `tag ${l.tag} is used twice on this panel` });
         loadRefs.add(l.ref);
         tags.add(l.tag.toLowerCase());
       });
       p.comments.forEach((c, ci) => {
-        if (c.loadRef !== null && !loadRefs.has(c.loadRef)) ctx.addIssue({ code: 'custom', path: ['panels', pi, 'comments', ci, 'loadRef'], message: `no motor ${c.loadRef} on this panel` });
+        if (c.loadRef !== null && !loadRefs.has(c.loadRef))
+          ctx.addIssue({ code: 'custom', path: ['panels', pi, 'comments', ci, 'loadRef'], message: `no motor ${c.loadRef} on this panel` });
       });
       const numbers = new Set<number>();
       p.revisions.forEach((r, ri) => {
-        if (numbers.has(r.number)) ctx.addIssue({ code: 'custom', path: ['panels', pi, 'revisions', ri, 'number'], message: `revision R${r.number} appears twice` });
+        if (numbers.has(r.number))
+          ctx.addIssue({ code: 'custom', path: ['panels', pi, 'revisions', ri, 'number'], message: `revision R${r.number} appears twice` });
         numbers.add(r.number);
       });
     });

@@ -67,10 +67,20 @@ export async function exportJob(actor: CurrentUser, jobId: number): Promise<JobB
         })),
         comments: comments
           .filter((c) => c.panelId === p.id)
-          .map((c) => ({ loadRef: c.loadId === null ? null : (loadRef.get(c.loadId) ?? null), body: c.body, author: person(c.userId), at: c.createdAt.toISOString() })),
+          .map((c) => ({
+            loadRef: c.loadId === null ? null : (loadRef.get(c.loadId) ?? null),
+            body: c.body,
+            author: person(c.userId),
+            at: c.createdAt.toISOString(),
+          })),
         revisions: revisions
           .filter((r) => r.panelId === p.id)
-          .map((r) => ({ number: r.number, approvedBy: person(r.approvedBy), approvedAt: r.approvedAt.toISOString(), snapshot: r.snapshot })),
+          .map((r) => ({
+            number: r.number,
+            approvedBy: person(r.approvedBy),
+            approvedAt: r.approvedAt.toISOString(),
+            snapshot: r.snapshot,
+          })),
         bomLines: bomLines.filter((b) => b.panelId === p.id).map((b) => b.line),
       };
     }),
@@ -93,10 +103,19 @@ function checkAnswers(backup: JobBackup) {
   const issues = backup.panels.flatMap((p, pi) =>
     p.loads.flatMap((l, li) => {
       const r = LoadSchema.safeParse(l.answers);
-      return r.success ? [] : zodIssues(r.error.issues).map((i) => ({ ...i, path: `body.panels[${pi}].loads[${li}].answers${i.path ? `.${i.path}` : ''}` }));
+      return r.success
+        ? []
+        : zodIssues(r.error.issues).map((i) => ({ ...i, path: `body.panels[${pi}].loads[${li}].answers${i.path ? `.${i.path}` : ''}` }));
     }),
   );
-  if (issues.length) throw new ValidationError(`The backup has ${issues.length} motor answer problem${issues.length === 1 ? '' : 's'}: ${issues.slice(0, 5).map((i) => `${i.path} ${i.message}`).join('; ')}`, issues);
+  if (issues.length)
+    throw new ValidationError(
+      `The backup has ${issues.length} motor answer problem${issues.length === 1 ? '' : 's'}: ${issues
+        .slice(0, 5)
+        .map((i) => `${i.path} ${i.message}`)
+        .join('; ')}`,
+      issues,
+    );
 }
 
 export interface ImportOptions {
@@ -112,12 +131,21 @@ export async function importJob(actor: CurrentUser, backup: JobBackup, opts: Imp
     return await db().transaction(async (t) => {
       const taken = await repo.takenJobNumbers(organisationId, backup.job.number, t);
       const number = freeNumber(backup.job.number, taken);
-      const emails = [...new Set(backup.panels.flatMap((p) => [...p.comments.map((c) => c.author?.email), ...p.revisions.map((r) => r.approvedBy?.email)]).filter((e): e is string => !!e))];
+      const emails = [
+        ...new Set(
+          backup.panels
+            .flatMap((p) => [...p.comments.map((c) => c.author?.email), ...p.revisions.map((r) => r.approvedBy?.email)])
+            .filter((e): e is string => !!e),
+        ),
+      ];
       const userIds = await repo.usersByEmail(organisationId, emails, t);
       const userOf = (p: { email: string } | null) => (p ? (userIds.get(p.email) ?? null) : null);
 
       const { archivedAt, ...jobValues } = backup.job;
-      const job = await repo.insertJob({ ...jobValues, number, organisationId, createdBy: actor.id, archivedAt: archivedAt ? new Date(archivedAt) : null }, t);
+      const job = await repo.insertJob(
+        { ...jobValues, number, organisationId, createdBy: actor.id, archivedAt: archivedAt ? new Date(archivedAt) : null },
+        t,
+      );
       let motors = 0;
       for (const p of backup.panels) {
         const panel = await repo.insertPanel(
@@ -140,20 +168,42 @@ export async function importJob(actor: CurrentUser, backup: JobBackup, opts: Imp
           t,
         );
         const createdIds = await repo.insertLoads(
-          p.loads.map((l) => ({ organisationId, panelId: panel.id, tag: l.tag, position: l.position, answers: l.answers, selection: l.selection, overrides: l.overrides })),
+          p.loads.map((l) => ({
+            organisationId,
+            panelId: panel.id,
+            tag: l.tag,
+            position: l.position,
+            answers: l.answers,
+            selection: l.selection,
+            overrides: l.overrides,
+          })),
           t,
         );
         motors += createdIds.length;
         const loadIds = new Map(p.loads.map((l, i) => [l.ref, createdIds[i]!]));
         if (p.comments.length) {
           await repo.insertComments(
-            p.comments.map((c) => ({ organisationId, panelId: panel.id, loadId: c.loadRef ? loadIds.get(c.loadRef)! : null, userId: userOf(c.author), body: c.body, createdAt: new Date(c.at) })),
+            p.comments.map((c) => ({
+              organisationId,
+              panelId: panel.id,
+              loadId: c.loadRef ? loadIds.get(c.loadRef)! : null,
+              userId: userOf(c.author),
+              body: c.body,
+              createdAt: new Date(c.at),
+            })),
             t,
           );
         }
         if (p.revisions.length) {
           await repo.insertRevisions(
-            p.revisions.map((r) => ({ organisationId, panelId: panel.id, number: r.number, snapshot: r.snapshot, approvedBy: userOf(r.approvedBy), approvedAt: new Date(r.approvedAt) })),
+            p.revisions.map((r) => ({
+              organisationId,
+              panelId: panel.id,
+              number: r.number,
+              snapshot: r.snapshot,
+              approvedBy: userOf(r.approvedBy),
+              approvedAt: new Date(r.approvedAt),
+            })),
             t,
           );
         }
@@ -168,14 +218,21 @@ export async function importJob(actor: CurrentUser, backup: JobBackup, opts: Imp
       }
       await recordActivity(
         actor,
-        { entity: 'job', entityId: job.id, jobId: job.id, action: 'imported', summary: `Imported job ${number} ${job.name} from a backup (${backup.panels.length} panels, ${motors} motors)` },
+        {
+          entity: 'job',
+          entityId: job.id,
+          jobId: job.id,
+          action: 'imported',
+          summary: `Imported job ${number} ${job.name} from a backup (${backup.panels.length} panels, ${motors} motors)`,
+        },
         t,
       );
       if (opts.failAfterWrite) throw new Error('failure injected after the import was written');
       return { id: job.id, number, panels: backup.panels.length, motors };
     });
   } catch (err) {
-    if (repo.isUniqueViolation(err)) throw new ConflictError('Another import or new job took the same job number at the same moment: import again');
+    if (repo.isUniqueViolation(err))
+      throw new ConflictError('Another import or new job took the same job number at the same moment: import again');
     throw err;
   }
 }

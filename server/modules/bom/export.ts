@@ -29,7 +29,8 @@ const PERCENT = '0.0';
 const SUMMARY = 'Summary';
 const ROLLUP = 'Roll-up by part';
 
-const categoryLabel = (c: BomCategory): string => (c in CATEGORY_LABELS ? CATEGORY_LABELS[c as keyof typeof CATEGORY_LABELS] : c[0]!.toUpperCase() + c.slice(1));
+const categoryLabel = (c: BomCategory): string =>
+  c in CATEGORY_LABELS ? CATEGORY_LABELS[c as keyof typeof CATEGORY_LABELS] : c[0]!.toUpperCase() + c.slice(1);
 
 /** A text for a cell: always a string value, never a formula. */
 const text = (s: string | null | undefined): string => xmlSafe(s ?? '');
@@ -38,7 +39,11 @@ const text = (s: string | null | undefined): string => xmlSafe(s ?? '');
 export function sheetNames(panelNames: readonly string[]): string[] {
   const used = new Set([SUMMARY.toLowerCase(), ROLLUP.toLowerCase()]);
   return panelNames.map((raw, i) => {
-    let base = xmlSafe(raw).replace(/[[\]:*?/\\]/g, '-').replace(/^'+|'+$/g, '').trim() || `Panel ${i + 1}`;
+    let base =
+      xmlSafe(raw)
+        .replace(/[[\]:*?/\\]/g, '-')
+        .replace(/^'+|'+$/g, '')
+        .trim() || `Panel ${i + 1}`;
     base = base.slice(0, 31);
     let name = base;
     for (let n = 2; used.has(name.toLowerCase()); n++) {
@@ -86,7 +91,18 @@ function layoutPanel(sheet: string, lines: readonly BomLine[]): PanelLayout {
   }
   const lastRow = Math.max(firstRow, row - 1);
   row++;
-  return { sheet, groups, firstRow, lastRow, materialRow: row, hoursRow: row + 1, labourCostRow: row + 2, costRow: row + 3, markupRow: row + 4, sellRow: row + 5 };
+  return {
+    sheet,
+    groups,
+    firstRow,
+    lastRow,
+    materialRow: row,
+    hoursRow: row + 1,
+    labourCostRow: row + 2,
+    costRow: row + 3,
+    markupRow: row + 4,
+    sellRow: row + 5,
+  };
 }
 
 const PANEL_COLUMNS: Array<{ header: string; width: number }> = [
@@ -168,7 +184,11 @@ export async function writeBomWorkbook(job: BomExportJob, panels: readonly BomEx
   tr.getCell(3).numFmt = HOURS;
   tr.commit();
   sum.addRow([]).commit();
-  sum.addRow([text('Results support, not replace, a qualified person\'s design. Prices are the shop\'s catalogue prices frozen on each line.')]).commit();
+  sum
+    .addRow([
+      text("Results support, not replace, a qualified person's design. Prices are the shop's catalogue prices frozen on each line."),
+    ])
+    .commit();
   sum.commit();
 
   // ---------------- Panels
@@ -252,7 +272,17 @@ export async function writeBomWorkbook(job: BomExportJob, panels: readonly BomEx
 
   // ---------------- Roll-up by part code
   const ru = wb.addWorksheet(ROLLUP, { views: [{ state: 'frozen', ySplit: 3 }] });
-  ru.columns = [{ width: 20 }, { width: 56 }, { width: 22 }, { width: 6 }, { width: 10 }, { width: 12 }, { width: 14 }, { width: 40 }, { width: 48 }];
+  ru.columns = [
+    { width: 20 },
+    { width: 56 },
+    { width: 22 },
+    { width: 6 },
+    { width: 10 },
+    { width: 12 },
+    { width: 14 },
+    { width: 40 },
+    { width: 48 },
+  ];
   const r1 = ru.addRow([text(`Roll-up by part code — ${title}`)]);
   r1.font = { bold: true, size: 13 };
   r1.commit();
@@ -291,8 +321,21 @@ export async function writeBomWorkbook(job: BomExportJob, panels: readonly BomEx
 }
 
 export const BOM_CSV_HEADERS = [
-  'panel', 'bucket', 'category', 'code', 'description', 'quantity', 'unit', 'unitCost', 'extendedCost',
-  'unitLabourHours', 'labourHours', 'status', 'source', 'requiredRatings', 'swapReason',
+  'panel',
+  'bucket',
+  'category',
+  'code',
+  'description',
+  'quantity',
+  'unit',
+  'unitCost',
+  'extendedCost',
+  'unitLabourHours',
+  'labourHours',
+  'status',
+  'source',
+  'requiredRatings',
+  'swapReason',
 ];
 
 /** The bill of materials as CSV text: one row per line, every text neutralised against formula injection. */
@@ -302,10 +345,21 @@ export function bomCsv(panels: readonly BomExportPanel[]): string {
     for (const l of p.lines) {
       out.push(
         [
-          csvField(p.name), csvField(l.bucket), csvField(l.category), csvField(l.code), csvField(l.description),
-          csvField(l.quantity), csvField(l.unit), csvField(l.unitCost), csvField(extendedCost(l)),
-          csvField(l.unitLabourHours), csvField(extendedLabourHours(l)), csvField(l.status), csvField(l.source),
-          csvField(l.requiredRatings), csvField(l.swapReason),
+          csvField(p.name),
+          csvField(l.bucket),
+          csvField(l.category),
+          csvField(l.code),
+          csvField(l.description),
+          csvField(l.quantity),
+          csvField(l.unit),
+          csvField(l.unitCost),
+          csvField(extendedCost(l)),
+          csvField(l.unitLabourHours),
+          csvField(extendedLabourHours(l)),
+          csvField(l.status),
+          csvField(l.source),
+          csvField(l.requiredRatings),
+          csvField(l.swapReason),
         ].join(','),
       );
     }

@@ -49,5 +49,11 @@ export async function deleteBomLine(id: number, transaction: Transaction) {
 
 /** The job's panels that are not archived, by name. */
 export async function jobPanels(organisationId: number, jobId: number) {
-  return Panel.findAll({ where: { organisationId, jobId, archivedAt: null }, order: [['name', 'ASC'], ['id', 'ASC']] });
+  return Panel.findAll({
+    where: { organisationId, jobId, archivedAt: null },
+    order: [
+      ['name', 'ASC'],
+      ['id', 'ASC'],
+    ],
+  });
 }

@@ -9,7 +9,6 @@ import { requirePanel } from '../panels/service';
 import { writeBomCsv, writeBomWorkbook, type BomExportJob, type BomExportPanel } from './export';
 import * as service from './service';
 
-
 const PanelId = z.object({ panelId: idParamSchema });
 const LineId = PanelId.extend({ lineId: idParamSchema });
 const money = z.number().finite().nonnegative().max(10_000_000);
@@ -39,7 +38,6 @@ const LinePatchBody = z
   })
   .strict();
 
-
 async function stream(res: Response, out: { job: BomExportJob; panels: BomExportPanel[]; fileBase: string }, ext: 'xlsx' | 'csv') {
   attachment(res, out.fileBase, ext);
   if (ext === 'xlsx') await writeBomWorkbook(out.job, out.panels, res);
@@ -60,7 +58,7 @@ export const bomRoutes = [
     method: 'post',
     path: '/api/panels/:panelId/bom/rebuild',
     access: ROLE_SETS.rebuildBom,
-    summary: 'Rebuild the automatic lines from the selections (manual lines and swaps kept; reprice to take today\'s catalogue prices)',
+    summary: "Rebuild the automatic lines from the selections (manual lines and swaps kept; reprice to take today's catalogue prices)",
     params: PanelId,
     body: z.object({ reprice: z.boolean().default(false) }).strict(),
     status: 200,

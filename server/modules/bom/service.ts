@@ -6,7 +6,14 @@ import type { Panel } from '../../db/models/panel';
 import * as repo from './repository';
 import type { Job } from '../../db/models/job';
 import type { CurrentUser } from '../../../shared/schemas/auth';
-import { BomLineSchema, PANEL_BUCKET, type BomLine, type BomTotals, type CatalogueItem, type Requirement } from '../../../shared/schemas/catalogue';
+import {
+  BomLineSchema,
+  PANEL_BUCKET,
+  type BomLine,
+  type BomTotals,
+  type CatalogueItem,
+  type Requirement,
+} from '../../../shared/schemas/catalogue';
 import { NotFoundError, ValidationError, zodIssues } from '../../../shared/errors';
 import type { BomExportJob, BomExportPanel } from './export';
 import { getJob } from '../jobs/service';
@@ -73,7 +80,13 @@ async function buildLines(organisationId: number, panel: Panel & { job: Job }, t
   const selections = await effectiveSelections(panel.id, t);
   const catalogue = await catalogueFor(organisationId, t);
   const labourUnits = await labourUnitsFor(organisationId, t);
-  const rollup = (panel.rollup ?? { feeder: { minAmpacity: 0, conductorSize: 'none', ocpdMaxAmps: 0, basis: '' }, totalFlcAmps: 0, largestMotorTag: null } satisfies PanelRollup);
+  const rollup =
+    panel.rollup ??
+    ({
+      feeder: { minAmpacity: 0, conductorSize: 'none', ocpdMaxAmps: 0, basis: '' },
+      totalFlcAmps: 0,
+      largestMotorTag: null,
+    } satisfies PanelRollup);
   const built = buildBom({
     panelName: panel.name,
     selections: selections.filter((s) => s.errors.length === 0),
@@ -86,7 +99,13 @@ async function buildLines(organisationId: number, panel: Panel & { job: Job }, t
   return { built, catalogue, labourUnits };
 }
 
-export async function planBom(organisationId: number, panel: Panel & { job: Job }, old: readonly BomLine[], t?: Transaction, opts: RegenerateOptions = {}): Promise<BomLine[]> {
+export async function planBom(
+  organisationId: number,
+  panel: Panel & { job: Job },
+  old: readonly BomLine[],
+  t?: Transaction,
+  opts: RegenerateOptions = {},
+): Promise<BomLine[]> {
   const { built, catalogue, labourUnits } = await buildLines(organisationId, panel, t);
   const byCode = new Map(catalogue.map((c) => [c.code, c]));
   const labour = new Map(labourUnits.map((u) => [u.key, u]));
@@ -105,7 +124,13 @@ export async function planBom(organisationId: number, panel: Panel & { job: Job 
     let line: BomLine = l;
     if (swap) {
       // a swap stays only while its part is active and still meets what the line needs now
-      const why = !item ? `${swap.code} is no longer in the catalogue` : !item.active ? `${item.code} is deactivated` : l.requirement ? lineShortfalls(item, l.requirement, lineServes(l.bucket)).join('; ') : `the line now needs ${l.requiredRatings ?? 'a part the catalogue cannot be searched for'}`;
+      const why = !item
+        ? `${swap.code} is no longer in the catalogue`
+        : !item.active
+          ? `${item.code} is deactivated`
+          : l.requirement
+            ? lineShortfalls(item, l.requirement, lineServes(l.bucket)).join('; ')
+            : `the line now needs ${l.requiredRatings ?? 'a part the catalogue cannot be searched for'}`;
       if (item?.active && l.requirement && !why) line = swappedLine(l, item, labour, swap.swapReason);
       else opts.onDroppedSwap?.(swap, why);
     }
@@ -119,14 +144,22 @@ export async function planBom(organisationId: number, panel: Panel & { job: Job 
 /** Rebuilds the automatic lines; manual lines stay, a swap stays on its line, and prices stay frozen unless `reprice`. */
 export async function regenerateBom(organisationId: number, panel: Panel & { job: Job }, t: Transaction, opts: RegenerateOptions = {}) {
   const oldRows = await repo.bomRowsOf(panel.id, t);
-  const lines = await planBom(organisationId, panel, oldRows.map((r) => r.line), t, opts);
+  const lines = await planBom(
+    organisationId,
+    panel,
+    oldRows.map((r) => r.line),
+    t,
+    opts,
+  );
   await repo.replaceBomLines(organisationId, panel.id, lines, t);
   return lines;
 }
 
 /** What decides a stored bill of materials: its automatic lines' parts and quantities (prices excluded: they stay frozen). */
 function designSignature(lines: readonly BomLine[]): string {
-  return JSON.stringify(lines.filter((l) => l.source !== 'manual').map((l) => [l.bucket, l.category, l.code, l.quantity, l.status, l.requiredRatings]));
+  return JSON.stringify(
+    lines.filter((l) => l.source !== 'manual').map((l) => [l.bucket, l.category, l.code, l.quantity, l.status, l.requiredRatings]),
+  );
 }
 
 export async function storedBom(actor: CurrentUser, panel: Panel & { job: Job }): Promise<StoredBom> {
@@ -176,8 +209,12 @@ export async function rebuild(actor: CurrentUser, panelRef: Panel & { job: Job }
     const panel = await lockedPanel(actor, panelRef.id, t);
     const before = (await repo.bomRowsOf(panel.id, t)).map((r) => r.line);
     const dropped: string[] = [];
-    const lines = await regenerateBom(actor.organisationId, panel, t, { ...opts, onDroppedSwap: (s, why) => dropped.push(`${s.code ?? 'a part'} on ${s.bucket} (${why})`) });
-    if (designSignature(before) !== designSignature(lines)) await openBomChange(actor, panel, t, 'the bill of materials was rebuilt with other parts');
+    const lines = await regenerateBom(actor.organisationId, panel, t, {
+      ...opts,
+      onDroppedSwap: (s, why) => dropped.push(`${s.code ?? 'a part'} on ${s.bucket} (${why})`),
+    });
+    if (designSignature(before) !== designSignature(lines))
+      await openBomChange(actor, panel, t, 'the bill of materials was rebuilt with other parts');
     await recordActivity(
       actor,
       {
@@ -221,7 +258,10 @@ function checkLine(line: BomLine): BomLine {
   const r = BomLineSchema.safeParse(line);
   if (!r.success) {
     const issues = zodIssues(r.error.issues).map((i) => ({ ...i, path: `body.${i.path}` }));
-    throw new ValidationError(`The line has ${issues.length} problem${issues.length === 1 ? '' : 's'}: ${issues.map((i) => `${i.path} ${i.message}`).join('; ')}`, issues);
+    throw new ValidationError(
+      `The line has ${issues.length} problem${issues.length === 1 ? '' : 's'}: ${issues.map((i) => `${i.path} ${i.message}`).join('; ')}`,
+      issues,
+    );
   }
   return r.data;
 }
@@ -234,11 +274,13 @@ export async function addManualLine(actor: CurrentUser, panelId: number, input: 
     let item: CatalogueItem | undefined;
     if (input.code) {
       item = (await catalogueFor(actor.organisationId, t)).find((c) => c.code === input.code);
-      if (!item) throw new ValidationError(`There is no catalogue item ${input.code}`, [{ path: 'body.code', message: 'not in the catalogue' }]);
+      if (!item)
+        throw new ValidationError(`There is no catalogue item ${input.code}`, [{ path: 'body.code', message: 'not in the catalogue' }]);
     }
     const labour = new Map((await labourUnitsFor(actor.organisationId, t)).map((u) => [u.key, u]));
     const description = input.description?.trim() || item?.description;
-    if (!description) throw new ValidationError('Describe the line', [{ path: 'body.description', message: 'required without a part code' }]);
+    if (!description)
+      throw new ValidationError('Describe the line', [{ path: 'body.description', message: 'required without a part code' }]);
     const line = checkLine({
       bucket: input.bucket?.trim() || PANEL_BUCKET,
       category: input.category,
@@ -259,7 +301,15 @@ export async function addManualLine(actor: CurrentUser, panelId: number, input: 
     const row = await repo.appendBomLine(actor.organisationId, panel.id, line, t);
     await recordActivity(
       actor,
-      { entity: 'bom', entityId: panel.id, jobId: panel.jobId, panelId: panel.id, action: 'line-added', summary: `Added ${line.quantity} ${line.unit} "${line.description}" to ${panel.name}`, diff: { line } },
+      {
+        entity: 'bom',
+        entityId: panel.id,
+        jobId: panel.jobId,
+        panelId: panel.id,
+        action: 'line-added',
+        summary: `Added ${line.quantity} ${line.unit} "${line.description}" to ${panel.name}`,
+        diff: { line },
+      },
       t,
     );
     return { ...line, id: row.id, position: row.position };
@@ -281,7 +331,13 @@ export interface LineChanges {
  * lines kept it, the one today's build gives the same line (bucket, category and order). Null when the
  * line's need is not one the catalogue can be searched for.
  */
-async function requirementOf(organisationId: number, panel: Panel & { job: Job }, lineId: number, line: BomLine, t?: Transaction): Promise<Requirement[] | null> {
+async function requirementOf(
+  organisationId: number,
+  panel: Panel & { job: Job },
+  lineId: number,
+  line: BomLine,
+  t?: Transaction,
+): Promise<Requirement[] | null> {
   if (line.requirement !== undefined) return line.requirement;
   const rows = await repo.bomRowsOf(panel.id, t);
   const auto = rows.filter((r) => r.line.source !== 'manual');
@@ -302,24 +358,41 @@ export async function updateLine(actor: CurrentUser, panelId: number, lineId: nu
     const panel = await lockedPanel(actor, panelId, t);
     const row = await requireLine(panel.id, lineId, t);
     const before = row.line;
-    await openBomChange(actor, panel, t, changes.swapCode !== undefined ? `${before.code ?? 'a line'} on ${before.bucket} was swapped in the bill of materials` : 'a line of the bill of materials was changed');
+    await openBomChange(
+      actor,
+      panel,
+      t,
+      changes.swapCode !== undefined
+        ? `${before.code ?? 'a line'} on ${before.bucket} was swapped in the bill of materials`
+        : 'a line of the bill of materials was changed',
+    );
     let after: BomLine = { ...before };
     if (changes.swapCode !== undefined) {
       const reason = changes.swapReason?.trim();
-      if (!reason) throw new ValidationError('Give the reason for the swap', [{ path: 'body.swapReason', message: 'a swap needs a reason' }]);
-      if (before.source === 'manual') throw new ValidationError('A manual line is changed directly, not swapped', [{ path: 'body.swapCode', message: 'not for a manual line' }]);
+      if (!reason)
+        throw new ValidationError('Give the reason for the swap', [{ path: 'body.swapReason', message: 'a swap needs a reason' }]);
+      if (before.source === 'manual')
+        throw new ValidationError('A manual line is changed directly, not swapped', [
+          { path: 'body.swapCode', message: 'not for a manual line' },
+        ]);
       const item = (await catalogueFor(actor.organisationId, t)).find((c) => c.code === changes.swapCode);
-      if (!item) throw new ValidationError(`There is no catalogue item ${changes.swapCode}`, [{ path: 'body.swapCode', message: 'not in the catalogue' }]);
+      if (!item)
+        throw new ValidationError(`There is no catalogue item ${changes.swapCode}`, [
+          { path: 'body.swapCode', message: 'not in the catalogue' },
+        ]);
       if (!item.active) throw new ValidationError(`${item.code} is deactivated`, [{ path: 'body.swapCode', message: 'deactivated item' }]);
       if (item.category !== before.category) {
-        throw new ValidationError(`${item.code} is not an equivalent: it is not in the line's category`, [{ path: 'body.swapCode', message: `must be a ${before.category}` }]);
+        throw new ValidationError(`${item.code} is not an equivalent: it is not in the line's category`, [
+          { path: 'body.swapCode', message: `must be a ${before.category}` },
+        ]);
       }
       const requirement = await requirementOf(actor.organisationId, panel, row.id, before, t);
       const who = lineServes(before.bucket);
       if (!requirement) {
-        throw new ValidationError(`What ${who} needs here (${before.requiredRatings ?? before.description}) cannot be checked against the catalogue: add a manual line for the part instead`, [
-          { path: 'body.swapCode', message: 'no requirement to check a part against' },
-        ]);
+        throw new ValidationError(
+          `What ${who} needs here (${before.requiredRatings ?? before.description}) cannot be checked against the catalogue: add a manual line for the part instead`,
+          [{ path: 'body.swapCode', message: 'no requirement to check a part against' }],
+        );
       }
       const lacks = lineShortfalls(item, requirement, who);
       if (lacks.length > 0) {
@@ -333,20 +406,39 @@ export async function updateLine(actor: CurrentUser, panelId: number, lineId: nu
     const direct = (['quantity', 'description', 'unitCost', 'unitLabourHours'] as const).filter((k) => changes[k] !== undefined);
     if (direct.length > 0) {
       if (before.source !== 'manual') {
-        throw new ValidationError('The quantity and price of an automatic line follow the design and the catalogue: swap the part, or add a manual line', [
-          { path: `body.${direct[0]}`, message: 'only manual lines are edited directly' },
-        ]);
+        throw new ValidationError(
+          'The quantity and price of an automatic line follow the design and the catalogue: swap the part, or add a manual line',
+          [{ path: `body.${direct[0]}`, message: 'only manual lines are edited directly' }],
+        );
       }
       after = { ...after, ...Object.fromEntries(direct.map((k) => [k, changes[k]])) };
     }
-    if (changes.swapCode === undefined && direct.length === 0) throw new ValidationError('Nothing to change', [{ path: 'body', message: 'give a quantity or a part to swap to' }]);
+    if (changes.swapCode === undefined && direct.length === 0)
+      throw new ValidationError('Nothing to change', [{ path: 'body', message: 'give a quantity or a part to swap to' }]);
     after = checkLine(after);
     await repo.updateBomLine(row.id, after, t);
-    const diff = Object.fromEntries(Object.keys(after).filter((k) => JSON.stringify(after[k as keyof BomLine]) !== JSON.stringify(before[k as keyof BomLine])).map((k) => [k, [before[k as keyof BomLine], after[k as keyof BomLine]]]));
-    const summary = changes.swapCode !== undefined
-      ? `Swapped ${before.code ?? 'an unmatched line'} for ${after.code} in ${before.bucket} of ${panel.name}: ${after.swapReason}`
-      : `Changed "${after.description}" in ${panel.name}: ${direct.join(', ')}`;
-    await recordActivity(actor, { entity: 'bom', entityId: panel.id, jobId: panel.jobId, panelId: panel.id, action: changes.swapCode !== undefined ? 'line-swapped' : 'line-changed', summary, diff }, t);
+    const diff = Object.fromEntries(
+      Object.keys(after)
+        .filter((k) => JSON.stringify(after[k as keyof BomLine]) !== JSON.stringify(before[k as keyof BomLine]))
+        .map((k) => [k, [before[k as keyof BomLine], after[k as keyof BomLine]]]),
+    );
+    const summary =
+      changes.swapCode !== undefined
+        ? `Swapped ${before.code ?? 'an unmatched line'} for ${after.code} in ${before.bucket} of ${panel.name}: ${after.swapReason}`
+        : `Changed "${after.description}" in ${panel.name}: ${direct.join(', ')}`;
+    await recordActivity(
+      actor,
+      {
+        entity: 'bom',
+        entityId: panel.id,
+        jobId: panel.jobId,
+        panelId: panel.id,
+        action: changes.swapCode !== undefined ? 'line-swapped' : 'line-changed',
+        summary,
+        diff,
+      },
+      t,
+    );
     return { ...after, id: row.id, position: row.position };
   });
 }
@@ -356,10 +448,25 @@ export async function deleteLine(actor: CurrentUser, panelId: number, lineId: nu
     const panel = await lockedPanel(actor, panelId, t);
     const row = await requireLine(panel.id, lineId, t);
     const line = row.line;
-    if (line.source !== 'manual') throw new ValidationError('Only manual lines are removed; the rebuild decides the automatic ones', [{ path: 'lineId', message: 'not a manual line' }]);
+    if (line.source !== 'manual')
+      throw new ValidationError('Only manual lines are removed; the rebuild decides the automatic ones', [
+        { path: 'lineId', message: 'not a manual line' },
+      ]);
     await openBomChange(actor, panel, t, 'a manual line was removed from the bill of materials');
     await repo.deleteBomLine(row.id, t);
-    await recordActivity(actor, { entity: 'bom', entityId: panel.id, jobId: panel.jobId, panelId: panel.id, action: 'line-removed', summary: `Removed "${line.description}" from ${panel.name}`, diff: { line } }, t);
+    await recordActivity(
+      actor,
+      {
+        entity: 'bom',
+        entityId: panel.id,
+        jobId: panel.jobId,
+        panelId: panel.id,
+        action: 'line-removed',
+        summary: `Removed "${line.description}" from ${panel.name}`,
+        diff: { line },
+      },
+      t,
+    );
   });
 }
 
@@ -385,24 +492,45 @@ export async function swapCandidates(actor: CurrentUser, panelId: number, lineId
 // ---------------------------------------------------------------------------------------------
 // Export
 
-export async function panelExport(actor: CurrentUser, panelId: number): Promise<{ job: BomExportJob; panels: BomExportPanel[]; fileBase: string }> {
+export async function panelExport(
+  actor: CurrentUser,
+  panelId: number,
+): Promise<{ job: BomExportJob; panels: BomExportPanel[]; fileBase: string }> {
   const panel = await requirePanel(actor, panelId);
   const rows = await repo.bomRowsFor(actor.organisationId, panel.id);
   return {
-    job: { number: panel.job.number, name: panel.job.name, customer: panel.job.customer || undefined, markupPercent: panel.markupPercent, labourRatePerHour: panel.labourRate },
+    job: {
+      number: panel.job.number,
+      name: panel.job.name,
+      customer: panel.job.customer || undefined,
+      markupPercent: panel.markupPercent,
+      labourRatePerHour: panel.labourRate,
+    },
     panels: [{ name: panel.name, lines: rows.map((r) => r.line) }],
     fileBase: `${panel.job.number}-${panel.name}-bom`,
   };
 }
 
 /** Every panel of the job that is not archived. The summary's rate and markup are the first panel's (each panel's own are on the page), the shop's defaults for a job with no panel. */
-export async function jobExport(actor: CurrentUser, jobId: number): Promise<{ job: BomExportJob; panels: BomExportPanel[]; fileBase: string }> {
+export async function jobExport(
+  actor: CurrentUser,
+  jobId: number,
+): Promise<{ job: BomExportJob; panels: BomExportPanel[]; fileBase: string }> {
   const job = await getJob(actor, jobId);
   const panels = await repo.jobPanels(actor.organisationId, job.id);
-  const rows = await repo.bomRowsFor(actor.organisationId, panels.map((p) => p.id));
+  const rows = await repo.bomRowsFor(
+    actor.organisationId,
+    panels.map((p) => p.id),
+  );
   const shop = panels.length ? null : await shopSettingsOf(actor.organisationId);
   return {
-    job: { number: job.number, name: job.name, customer: job.customer || undefined, markupPercent: panels[0]?.markupPercent ?? shop!.defaultMarkupPercent, labourRatePerHour: panels[0]?.labourRate ?? shop!.defaultLabourRate },
+    job: {
+      number: job.number,
+      name: job.name,
+      customer: job.customer || undefined,
+      markupPercent: panels[0]?.markupPercent ?? shop!.defaultMarkupPercent,
+      labourRatePerHour: panels[0]?.labourRate ?? shop!.defaultLabourRate,
+    },
     panels: panels.map((p) => ({ name: p.name, lines: rows.filter((r) => r.panelId === p.id).map((r) => r.line) })),
     fileBase: `${job.number}-bom`,
   };

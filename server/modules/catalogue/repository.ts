@@ -49,7 +49,14 @@ export function fromItem(organisationId: number, i: CatalogueItem) {
 const catalogues = new FeedCache<number, readonly CatalogueItem[]>(['c']);
 
 async function readCatalogue(organisationId: number, transaction?: Transaction): Promise<readonly CatalogueItem[]> {
-  const rows = await CatalogueRow.findAll({ where: { organisationId }, order: [['category', 'ASC'], ['code', 'ASC']], transaction });
+  const rows = await CatalogueRow.findAll({
+    where: { organisationId },
+    order: [
+      ['category', 'ASC'],
+      ['code', 'ASC'],
+    ],
+    transaction,
+  });
   return Object.freeze(
     rows.map((r) => {
       const item = toItem(r);
@@ -77,11 +84,21 @@ export async function searchItems(organisationId: number, f: { category?: string
   if (f.category) and.push({ category: f.category });
   if (f.active !== null) and.push({ active: f.active });
   if (f.like) and.push({ [Op.or]: [{ code: { [Op.iLike]: f.like } }, { description: { [Op.iLike]: f.like } }] });
-  return CatalogueRow.findAll({ where: { [Op.and]: and }, order: [['category', 'ASC'], ['code', 'ASC']] });
+  return CatalogueRow.findAll({
+    where: { [Op.and]: and },
+    order: [
+      ['category', 'ASC'],
+      ['code', 'ASC'],
+    ],
+  });
 }
 
 export async function findItem(organisationId: number, id: number, transaction?: Transaction, lock = false) {
-  return CatalogueRow.findOne({ where: { organisationId, id }, transaction, lock: lock && transaction ? transaction.LOCK.UPDATE : undefined });
+  return CatalogueRow.findOne({
+    where: { organisationId, id },
+    transaction,
+    lock: lock && transaction ? transaction.LOCK.UPDATE : undefined,
+  });
 }
 
 export async function findItemByCode(organisationId: number, code: string, transaction: Transaction) {
@@ -93,13 +110,29 @@ export async function itemById(id: number, transaction: Transaction) {
 }
 
 /** The items of the given codes, by code (one query). */
-export async function itemsByCode(organisationId: number, codes: readonly string[], transaction: Transaction): Promise<Map<string, CatalogueRow>> {
-  return new Map((await CatalogueRow.findAll({ where: { organisationId, code: { [Op.in]: [...codes] } }, transaction })).map((i) => [i.code, i]));
+export async function itemsByCode(
+  organisationId: number,
+  codes: readonly string[],
+  transaction: Transaction,
+): Promise<Map<string, CatalogueRow>> {
+  return new Map(
+    (await CatalogueRow.findAll({ where: { organisationId, code: { [Op.in]: [...codes] } }, transaction })).map((i) => [i.code, i]),
+  );
 }
 
 /** Every item of the organisation, by category and code; locked for an import when `lock`. */
 export async function allItemRows(organisationId: number, transaction?: Transaction, lock = false) {
-  return CatalogueRow.findAll({ where: { organisationId }, order: lock ? undefined : [['category', 'ASC'], ['code', 'ASC']], transaction, lock: lock && transaction ? transaction.LOCK.UPDATE : undefined });
+  return CatalogueRow.findAll({
+    where: { organisationId },
+    order: lock
+      ? undefined
+      : [
+          ['category', 'ASC'],
+          ['code', 'ASC'],
+        ],
+    transaction,
+    lock: lock && transaction ? transaction.LOCK.UPDATE : undefined,
+  });
 }
 
 export async function insertItem(organisationId: number, item: CatalogueItem, transaction: Transaction) {
@@ -108,12 +141,25 @@ export async function insertItem(organisationId: number, item: CatalogueItem, tr
 
 /** New items in one statement; returns their rows in the order given. */
 export async function insertItems(organisationId: number, items: readonly CatalogueItem[], transaction: Transaction) {
-  return CatalogueRow.bulkCreate(items.map((i) => fromItem(organisationId, i)), { transaction, returning: true });
+  return CatalogueRow.bulkCreate(
+    items.map((i) => fromItem(organisationId, i)),
+    { transaction, returning: true },
+  );
 }
 
 /** Writes an item's fields and its next version; with `version`, only while it is still that version. Returns the rows changed. */
-export async function writeItem(organisationId: number, id: number, item: CatalogueItem, nextVersion: number, transaction: Transaction, version?: number) {
-  const [count] = await CatalogueRow.update({ ...fromItem(organisationId, item), version: nextVersion }, { where: version === undefined ? { id } : { id, version }, transaction });
+export async function writeItem(
+  organisationId: number,
+  id: number,
+  item: CatalogueItem,
+  nextVersion: number,
+  transaction: Transaction,
+  version?: number,
+) {
+  const [count] = await CatalogueRow.update(
+    { ...fromItem(organisationId, item), version: nextVersion },
+    { where: version === undefined ? { id } : { id, version }, transaction },
+  );
   return count;
 }
 
@@ -127,7 +173,12 @@ export async function findLabourUnitForUpdate(organisationId: number, key: strin
   return LabourRow.findOne({ where: { organisationId, key }, transaction, lock: transaction.LOCK.UPDATE });
 }
 
-export async function writeLabourUnit(id: number, version: number, values: { hours?: number; label?: string; version: number }, transaction: Transaction) {
+export async function writeLabourUnit(
+  id: number,
+  version: number,
+  values: { hours?: number; label?: string; version: number },
+  transaction: Transaction,
+) {
   const [count] = await LabourRow.update(values, { where: { id, version }, transaction });
   return count;
 }
@@ -152,7 +203,15 @@ export async function findCombinationForUpdate(organisationId: number, id: numbe
 
 /** The combinations of the given refs, by ref, locked for an import. */
 export async function combinationsByRefForUpdate(organisationId: number, refs: readonly string[], transaction: Transaction) {
-  return new Map((await CombinationRatingRow.findAll({ where: { organisationId, ref: { [Op.in]: [...refs] } }, transaction, lock: transaction.LOCK.UPDATE })).map((r) => [r.ref, r]));
+  return new Map(
+    (
+      await CombinationRatingRow.findAll({
+        where: { organisationId, ref: { [Op.in]: [...refs] } },
+        transaction,
+        lock: transaction.LOCK.UPDATE,
+      })
+    ).map((r) => [r.ref, r]),
+  );
 }
 
 export async function insertCombination(values: CreationAttributes<CombinationRatingRow>, transaction: Transaction) {
@@ -164,7 +223,11 @@ export async function insertCombinations(rows: Array<CreationAttributes<Combinat
 }
 
 /** Changes a combination row in place (the row passed in carries the new values afterwards). */
-export async function writeCombination(row: CombinationRatingRow, values: Partial<CreationAttributes<CombinationRatingRow>>, transaction: Transaction) {
+export async function writeCombination(
+  row: CombinationRatingRow,
+  values: Partial<CreationAttributes<CombinationRatingRow>>,
+  transaction: Transaction,
+) {
   await row.update(values, { transaction });
 }
 

@@ -12,7 +12,6 @@ import * as service from './service';
 import * as combinations from './combinations';
 import { CombinationInputSchema, CombinationUpdateSchema } from '../../../shared/schemas/combination';
 
-
 const ItemId = z.object({ itemId: idParamSchema });
 const Version = versionSchema;
 
@@ -44,9 +43,12 @@ const ItemPatch = z
   })
   .strict();
 
-const XLSX_TYPES = new Set(['application/vnd.openxmlformats-officedocument.spreadsheetml.sheet', 'application/octet-stream', 'application/zip']);
+const XLSX_TYPES = new Set([
+  'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet',
+  'application/octet-stream',
+  'application/zip',
+]);
 const CSV_TYPES = new Set(['text/csv', 'text/plain', 'application/csv', 'application/vnd.ms-excel', 'application/octet-stream']);
-
 
 export function fileKind(name: string, mime: string): 'xlsx' | 'csv' {
   const lower = name.toLowerCase();
@@ -87,7 +89,14 @@ export const catalogueRoutes = [
     body: CatalogueItemSchema,
     handler: ({ user, body }) => service.createItem(user, body),
   }),
-  defineRoute({ method: 'get', path: '/api/catalogue/items/:itemId', access: ROLE_SETS.everyone, summary: 'One catalogue item', params: ItemId, handler: ({ user, params }) => service.getItem(user, params.itemId) }),
+  defineRoute({
+    method: 'get',
+    path: '/api/catalogue/items/:itemId',
+    access: ROLE_SETS.everyone,
+    summary: 'One catalogue item',
+    params: ItemId,
+    handler: ({ user, params }) => service.getItem(user, params.itemId),
+  }),
   defineRoute({
     method: 'patch',
     path: '/api/catalogue/items/:itemId',
@@ -136,7 +145,8 @@ export const catalogueRoutes = [
     path: '/api/catalogue.csv',
     access: ROLE_SETS.everyone,
     summary: 'The whole catalogue as .csv',
-    handler: async ({ user, res }) => sendAttachment(res, `panelwright-catalogue-${stamp()}`, 'csv', `\uFEFF${catalogueToCsv(await service.allItems(user))}`),
+    handler: async ({ user, res }) =>
+      sendAttachment(res, `panelwright-catalogue-${stamp()}`, 'csv', `\uFEFF${catalogueToCsv(await service.allItems(user))}`),
   }),
   defineRoute({
     method: 'post',
@@ -151,17 +161,35 @@ export const catalogueRoutes = [
       return service.importCatalogue(user, f.buffer, fileKind(f.originalname, f.mimetype));
     },
   }),
-  defineRoute({ method: 'get', path: '/api/labour-units', access: ROLE_SETS.everyone, summary: "The shop's labour units", handler: ({ user }) => service.listLabourUnits(user) }),
+  defineRoute({
+    method: 'get',
+    path: '/api/labour-units',
+    access: ROLE_SETS.everyone,
+    summary: "The shop's labour units",
+    handler: ({ user }) => service.listLabourUnits(user),
+  }),
   defineRoute({
     method: 'patch',
     path: '/api/labour-units/:key',
     access: ROLE_SETS.estimate,
     summary: 'Change a labour unit (hours, description)',
     params: z.object({ key: LabourKeySchema }),
-    body: z.object({ hours: z.number().finite().nonnegative().max(100).optional(), description: z.string().trim().min(1).max(200).optional(), version: Version }).strict(),
+    body: z
+      .object({
+        hours: z.number().finite().nonnegative().max(100).optional(),
+        description: z.string().trim().min(1).max(200).optional(),
+        version: Version,
+      })
+      .strict(),
     handler: ({ user, params, body }) => service.updateLabourUnit(user, params.key, body, body.version),
   }),
-  defineRoute({ method: 'get', path: '/api/catalogue/combinations', access: ROLE_SETS.everyone, summary: 'Tested combination ratings (UL 508A SB4)', handler: ({ user }) => combinations.listCombinations(user) }),
+  defineRoute({
+    method: 'get',
+    path: '/api/catalogue/combinations',
+    access: ROLE_SETS.everyone,
+    summary: 'Tested combination ratings (UL 508A SB4)',
+    handler: ({ user }) => combinations.listCombinations(user),
+  }),
   defineRoute({
     method: 'post',
     path: '/api/catalogue/combinations',
@@ -175,7 +203,8 @@ export const catalogueRoutes = [
     path: '/api/catalogue/combinations.csv',
     access: ROLE_SETS.everyone,
     summary: 'The tested combination ratings as .csv (the import format)',
-    handler: async ({ user, res }) => sendAttachment(res, `panelwright-combinations-${stamp()}`, 'csv', `\uFEFF${await combinations.combinationsCsv(user)}`),
+    handler: async ({ user, res }) =>
+      sendAttachment(res, `panelwright-combinations-${stamp()}`, 'csv', `\uFEFF${await combinations.combinationsCsv(user)}`),
   }),
   defineRoute({
     method: 'post',

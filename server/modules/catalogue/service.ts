@@ -46,7 +46,10 @@ function validateItem(raw: unknown): CatalogueItem {
   const r = CatalogueItemSchema.safeParse(raw);
   if (!r.success) {
     const issues = zodIssues(r.error.issues).map((i) => ({ ...i, path: i.path ? `body.${i.path}` : 'body' }));
-    throw new ValidationError(`The item has ${issues.length} problem${issues.length === 1 ? '' : 's'}: ${issues.map((i) => `${i.path} ${i.message}`).join('; ')}`, issues);
+    throw new ValidationError(
+      `The item has ${issues.length} problem${issues.length === 1 ? '' : 's'}: ${issues.map((i) => `${i.path} ${i.message}`).join('; ')}`,
+      issues,
+    );
   }
   return r.data;
 }
@@ -54,7 +57,9 @@ function validateItem(raw: unknown): CatalogueItem {
 /** JSON with object keys sorted, so that two equal values compare equal whatever their key order. */
 function canonical(v: unknown): string {
   return JSON.stringify(v, (_k, x: unknown) =>
-    x && typeof x === 'object' && !Array.isArray(x) ? Object.fromEntries(Object.entries(x as Record<string, unknown>).sort(([a], [b]) => a.localeCompare(b))) : x,
+    x && typeof x === 'object' && !Array.isArray(x)
+      ? Object.fromEntries(Object.entries(x as Record<string, unknown>).sort(([a], [b]) => a.localeCompare(b)))
+      : x,
   );
 }
 
@@ -73,9 +78,22 @@ export function itemDiff(before: CatalogueItem | null, after: CatalogueItem): Re
 export async function createItem(actor: CurrentUser, item: CatalogueItem): Promise<CatalogueEntry> {
   return db().transaction(async (t) => {
     const exists = await repo.findItemByCode(actor.organisationId, item.code, t);
-    if (exists) throw new ConflictError(`The catalogue already has an item ${item.code}`, [{ path: 'body.code', message: 'already in the catalogue' }]);
+    if (exists)
+      throw new ConflictError(`The catalogue already has an item ${item.code}`, [
+        { path: 'body.code', message: 'already in the catalogue' },
+      ]);
     const r = await repo.insertItem(actor.organisationId, item, t);
-    await recordActivity(actor, { entity: 'catalogue_item', entityId: r.id, action: 'created', summary: `Added ${item.code} to the catalogue`, diff: itemDiff(null, item) }, t);
+    await recordActivity(
+      actor,
+      {
+        entity: 'catalogue_item',
+        entityId: r.id,
+        action: 'created',
+        summary: `Added ${item.code} to the catalogue`,
+        diff: itemDiff(null, item),
+      },
+      t,
+    );
     return entry(r);
   });
 }
@@ -84,7 +102,9 @@ export async function updateItem(actor: CurrentUser, id: number, changes: ItemCh
   return db().transaction(async (t) => {
     const r = await requireItem(actor, id, t, true);
     if (r.version !== version) {
-      throw new ConflictError(`Someone else changed ${r.code} since you opened it: reload to see their change, then apply yours again`, { currentVersion: r.version });
+      throw new ConflictError(`Someone else changed ${r.code} since you opened it: reload to see their change, then apply yours again`, {
+        currentVersion: r.version,
+      });
     }
     const before = toItem(r);
     const after = validateItem({ ...before, ...changes, code: before.code });
@@ -94,7 +114,18 @@ export async function updateItem(actor: CurrentUser, id: number, changes: ItemCh
     if (count !== 1) throw new ConflictError(`Someone else changed ${r.code} since you opened it`);
     const what = Object.keys(diff).join(', ');
     const action = 'active' in diff && Object.keys(diff).length === 1 ? (after.active ? 'reactivated' : 'deactivated') : 'updated';
-    await recordActivity(actor, { entity: 'catalogue_item', entityId: id, action, summary: action === 'updated' ? `Changed ${r.code}: ${what}` : `${action === 'reactivated' ? 'Reactivated' : 'Deactivated'} ${r.code}`, diff }, t);
+    await recordActivity(
+      actor,
+      {
+        entity: 'catalogue_item',
+        entityId: id,
+        action,
+        summary:
+          action === 'updated' ? `Changed ${r.code}: ${what}` : `${action === 'reactivated' ? 'Reactivated' : 'Deactivated'} ${r.code}`,
+        diff,
+      },
+      t,
+    );
     return entry((await repo.itemById(id, t))!);
   });
 }
@@ -126,7 +157,12 @@ export class ImportRejected extends ValidationError {
   constructor(readonly rowErrors: ImportError[]) {
     super(
       `The file has ${rowErrors.length} problem${rowErrors.length === 1 ? '' : 's'}; nothing was imported`,
-      rowErrors.map((e) => ({ path: e.row > 0 ? `row ${e.row}${e.column ? `, ${e.column}` : ''}` : e.column || 'file', message: e.message, row: e.row, column: e.column })),
+      rowErrors.map((e) => ({
+        path: e.row > 0 ? `row ${e.row}${e.column ? `, ${e.column}` : ''}` : e.column || 'file',
+        message: e.message,
+        row: e.row,
+        column: e.column,
+      })),
     );
   }
 }
@@ -156,13 +192,33 @@ export async function importCatalogue(actor: CurrentUser, buffer: Buffer, kind: 
         continue;
       }
       await repo.writeItem(actor.organisationId, r.id, item, r.version + 1, t);
-      await recordActivity(actor, { entity: 'catalogue_item', entityId: r.id, action: 'imported', summary: `Import changed ${item.code}: ${Object.keys(diff).join(', ')}`, diff }, t);
+      await recordActivity(
+        actor,
+        {
+          entity: 'catalogue_item',
+          entityId: r.id,
+          action: 'imported',
+          summary: `Import changed ${item.code}: ${Object.keys(diff).join(', ')}`,
+          diff,
+        },
+        t,
+      );
       updated++;
     }
     if (fresh.length > 0) {
       const created = await repo.insertItems(actor.organisationId, fresh, t);
       for (const [i, r] of created.entries()) {
-        await recordActivity(actor, { entity: 'catalogue_item', entityId: r.id, action: 'imported', summary: `Import added ${fresh[i]!.code}`, diff: itemDiff(null, fresh[i]!) }, t);
+        await recordActivity(
+          actor,
+          {
+            entity: 'catalogue_item',
+            entityId: r.id,
+            action: 'imported',
+            summary: `Import added ${fresh[i]!.code}`,
+            diff: itemDiff(null, fresh[i]!),
+          },
+          t,
+        );
       }
     }
     return { created: fresh.length, updated, unchanged };
@@ -174,14 +230,29 @@ export async function importCatalogue(actor: CurrentUser, buffer: Buffer, kind: 
 
 export async function listLabourUnits(actor: CurrentUser): Promise<LabourUnitEntry[]> {
   const rows = await repo.labourRows(actor.organisationId);
-  return rows.map((r) => ({ key: r.key as LabourKey, description: r.label, hours: r.hours, per: r.per as LabourUnit['per'], version: r.version }));
+  return rows.map((r) => ({
+    key: r.key as LabourKey,
+    description: r.label,
+    hours: r.hours,
+    per: r.per as LabourUnit['per'],
+    version: r.version,
+  }));
 }
 
-export async function updateLabourUnit(actor: CurrentUser, key: LabourKey, changes: { hours?: number; description?: string }, version: number): Promise<LabourUnitEntry> {
+export async function updateLabourUnit(
+  actor: CurrentUser,
+  key: LabourKey,
+  changes: { hours?: number; description?: string },
+  version: number,
+): Promise<LabourUnitEntry> {
   return db().transaction(async (t) => {
     const r = await repo.findLabourUnitForUpdate(actor.organisationId, key, t);
     if (!r) throw new NotFoundError('Labour unit');
-    if (r.version !== version) throw new ConflictError(`Someone else changed the labour unit "${r.label}" since you opened it: reload, then apply your change again`, { currentVersion: r.version });
+    if (r.version !== version)
+      throw new ConflictError(
+        `Someone else changed the labour unit "${r.label}" since you opened it: reload, then apply your change again`,
+        { currentVersion: r.version },
+      );
     const diff: Record<string, [unknown, unknown]> = {};
     if (changes.hours !== undefined && changes.hours !== r.hours) diff.hours = [r.hours, changes.hours];
     if (changes.description !== undefined && changes.description !== r.label) diff.description = [r.label, changes.description];
@@ -189,10 +260,24 @@ export async function updateLabourUnit(actor: CurrentUser, key: LabourKey, chang
       await repo.writeLabourUnit(
         r.id,
         version,
-        { ...(changes.hours !== undefined ? { hours: changes.hours } : {}), ...(changes.description !== undefined ? { label: changes.description } : {}), version: version + 1 },
+        {
+          ...(changes.hours !== undefined ? { hours: changes.hours } : {}),
+          ...(changes.description !== undefined ? { label: changes.description } : {}),
+          version: version + 1,
+        },
         t,
       );
-      await recordActivity(actor, { entity: 'labour_unit', entityId: r.id, action: 'updated', summary: `Changed labour unit ${key}: ${Object.keys(diff).join(', ')}`, diff }, t);
+      await recordActivity(
+        actor,
+        {
+          entity: 'labour_unit',
+          entityId: r.id,
+          action: 'updated',
+          summary: `Changed labour unit ${key}: ${Object.keys(diff).join(', ')}`,
+          diff,
+        },
+        t,
+      );
     }
     const now = (await repo.labourUnitById(r.id, t))!;
     return { key: now.key as LabourKey, description: now.label, hours: now.hours, per: now.per as LabourUnit['per'], version: now.version };

@@ -91,10 +91,12 @@ export async function writeCatalogueXlsx(items: readonly CatalogueItem[], stream
   header.commit();
   for (const item of items) {
     const row = catalogueItemToRow(item);
-    const r = ws.addRow(CATALOGUE_COLUMNS.map((c) => {
-      const v = row[c.header];
-      return typeof v === 'string' ? xmlSafe(v) : (v ?? null);
-    }));
+    const r = ws.addRow(
+      CATALOGUE_COLUMNS.map((c) => {
+        const v = row[c.header];
+        return typeof v === 'string' ? xmlSafe(v) : (v ?? null);
+      }),
+    );
     r.getCell('unitCost').numFmt = '#,##0.00';
     r.commit();
   }
@@ -139,7 +141,8 @@ const fileError = (message: string): ImportResult => ({ rows: [], errors: [{ row
 /** Parse an uploaded catalogue file. Never throws for bad input: every problem comes back in `errors`. */
 export async function parseCatalogueFile(buffer: Buffer, kind: 'xlsx' | 'csv'): Promise<ImportResult> {
   if (!Buffer.isBuffer(buffer) || buffer.length === 0) return fileError('the file is empty');
-  if (buffer.length > IMPORT_LIMITS.maxFileBytes) return fileError(`the file is larger than ${IMPORT_LIMITS.maxFileBytes / 1024 / 1024} MB`);
+  if (buffer.length > IMPORT_LIMITS.maxFileBytes)
+    return fileError(`the file is larger than ${IMPORT_LIMITS.maxFileBytes / 1024 / 1024} MB`);
   const table: Table = kind === 'xlsx' ? await readXlsx(buffer) : readCsv(buffer);
   if (table.error) return fileError(table.error);
   return validateTable(table.cells, table.cellErrors ?? []);
@@ -163,12 +166,18 @@ function validateTable(cells: CellValue[][], cellErrors: NonNullable<Table['cell
   const seen = new Map<string, number>();
   headers.forEach((h, i) => {
     if (h === '') return;
-    if (!known.has(h)) errors.push({ row: 1, column: h, message: `unknown column "${h}" (expected columns: ${CATALOGUE_HEADERS.slice(0, 6).join(', ')} …)` });
+    if (!known.has(h))
+      errors.push({
+        row: 1,
+        column: h,
+        message: `unknown column "${h}" (expected columns: ${CATALOGUE_HEADERS.slice(0, 6).join(', ')} …)`,
+      });
     if (seen.has(h)) errors.push({ row: 1, column: h, message: `column "${h}" appears twice` });
     seen.set(h, i);
   });
   for (const col of CATALOGUE_COLUMNS) {
-    if (col.required && !seen.has(col.header)) errors.push({ row: 1, column: col.header, message: `missing required column "${col.header}"` });
+    if (col.required && !seen.has(col.header))
+      errors.push({ row: 1, column: col.header, message: `missing required column "${col.header}"` });
   }
   if (errors.length > 0) return { rows: [], errors };
   for (const e of cellErrors) errors.push({ row: e.r + 1, column: headers[e.c] || `column ${e.c + 1}`, message: e.message });
@@ -276,7 +285,8 @@ export function checkXlsxPackage(buf: Buffer): string | null {
     names.add(name);
     p += 46 + nameLen + extraLen + commentLen;
     total += size;
-    if (total > IMPORT_LIMITS.maxExpandedBytes) return `the workbook expands to more than ${IMPORT_LIMITS.maxExpandedBytes / 1024 / 1024} MB`;
+    if (total > IMPORT_LIMITS.maxExpandedBytes)
+      return `the workbook expands to more than ${IMPORT_LIMITS.maxExpandedBytes / 1024 / 1024} MB`;
     if (local + 30 > buf.length || buf.readUInt32LE(local) !== 0x04034b50) return 'not an .xlsx workbook (damaged zip entry)';
     const dataStart = local + 30 + buf.readUInt16LE(local + 26) + buf.readUInt16LE(local + 28);
     if (dataStart + compSize > buf.length) return 'not an .xlsx workbook (the zip package is truncated)';
@@ -326,7 +336,10 @@ async function readXlsx(buffer: Buffer): Promise<Table> {
       }),
     ]);
   } catch (e) {
-    return { cells: [], error: `the workbook could not be read (${e instanceof Error && e.message === 'timeout' ? 'it took too long' : 'it is damaged or not an .xlsx file'})` };
+    return {
+      cells: [],
+      error: `the workbook could not be read (${e instanceof Error && e.message === 'timeout' ? 'it took too long' : 'it is damaged or not an .xlsx file'})`,
+    };
   } finally {
     if (timer) clearTimeout(timer);
   }

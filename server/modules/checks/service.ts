@@ -36,7 +36,12 @@ export interface ChecksContext {
 }
 
 /** The panel's SCCR from a given bill of materials (the one a sign-off has just regenerated). */
-export async function panelSccrFor(organisationId: number, lines: readonly BomLine[], selections: readonly LoadSelection[], availableFaultKa: number | null): Promise<SccrResult> {
+export async function panelSccrFor(
+  organisationId: number,
+  lines: readonly BomLine[],
+  selections: readonly LoadSelection[],
+  availableFaultKa: number | null,
+): Promise<SccrResult> {
   const [catalogue, combinations] = await Promise.all([catalogueFor(organisationId), activeCombinations(organisationId)]);
   const byCode = new Map(catalogue.map((c) => [c.code, c]));
   return calculatePanelSccr(sccrInputFor(lines, byCode, selections, combinations, availableFaultKa).input);
@@ -76,7 +81,15 @@ export async function computeChecks(actor: CurrentUser, panelId: number): Promis
     combinations,
     shopName: shop.name,
   });
-  return { checks, selections: checkedSelections(motors).selections, rollup, panel, shop, lines: bom.lines, answers: motors.map((l) => l.answers as Record<string, unknown>) };
+  return {
+    checks,
+    selections: checkedSelections(motors).selections,
+    rollup,
+    panel,
+    shop,
+    lines: bom.lines,
+    answers: motors.map((l) => l.answers as Record<string, unknown>),
+  };
 }
 
 export async function panelChecks(actor: CurrentUser, panelId: number): Promise<PanelChecks> {

@@ -1,7 +1,14 @@
 import { z } from 'zod';
 import { defineRoute } from '../../http/route-table';
 import { sendAttachment } from '../../http/attachment';
-import { toCsv, TERMINAL_COLUMNS, terminalRowsFor, WIRE_COLUMNS, wireRowsFor, type DrawingsView } from '../../../shared/drawings/panel-drawings';
+import {
+  toCsv,
+  TERMINAL_COLUMNS,
+  terminalRowsFor,
+  WIRE_COLUMNS,
+  wireRowsFor,
+  type DrawingsView,
+} from '../../../shared/drawings/panel-drawings';
 import { panelDrawings, panelNameplateSvg, schematicSvg, supplySvg, wiringWorkbook } from './service';
 import type { Response } from 'express';
 
@@ -38,7 +45,15 @@ export const drawingRoutes = [
         bomTerminalBlocks: drawings.bomTerminalBlocks,
         terminals: drawings.terminals,
         wires: drawings.wires,
-        buckets: drawings.buckets.map((b) => ({ tag: b.tag, starter: b.starter, scheme: b.scheme, firstRung: b.firstRung, rungs: b.layout.rows, overload: b.overload, interlocked: b.interlocked })),
+        buckets: drawings.buckets.map((b) => ({
+          tag: b.tag,
+          starter: b.starter,
+          scheme: b.scheme,
+          firstRung: b.firstRung,
+          rungs: b.layout.rows,
+          overload: b.overload,
+          interlocked: b.interlocked,
+        })),
       };
     },
   }),
@@ -85,7 +100,12 @@ export const drawingRoutes = [
     params: PanelId,
     handler: async ({ user, params, res }) => {
       const { drawings, checks } = await panelDrawings(user, params.panelId);
-      return sendAttachment(res, `${base(checks.job.number, checks.panel.name)} terminals`, 'csv', toCsv(TERMINAL_COLUMNS, terminalRowsFor(drawings)));
+      return sendAttachment(
+        res,
+        `${base(checks.job.number, checks.panel.name)} terminals`,
+        'csv',
+        toCsv(TERMINAL_COLUMNS, terminalRowsFor(drawings)),
+      );
     },
   }),
   defineRoute({

@@ -4,7 +4,14 @@
 import ExcelJS from 'exceljs';
 import type { CurrentUser } from '../../../shared/schemas/auth';
 import { NotFoundError } from '../../../shared/errors';
-import { buildPanelDrawings, TERMINAL_COLUMNS, terminalRowsFor, WIRE_COLUMNS, wireRowsFor, type PanelDrawings } from '../../../shared/drawings/panel-drawings';
+import {
+  buildPanelDrawings,
+  TERMINAL_COLUMNS,
+  terminalRowsFor,
+  WIRE_COLUMNS,
+  wireRowsFor,
+  type PanelDrawings,
+} from '../../../shared/drawings/panel-drawings';
 import { bucketSheetSvg, nameplateSvg, schematicSheets, stackSheets, supplySheetSvg, terminalRefMap } from '../../../shared/drawings/svg';
 import type { PanelChecks } from '../../../shared/schemas/checks';
 import type { SubmittalDrawings } from '../../../shared/drawings/panel-drawings';
@@ -45,9 +52,15 @@ export function drawingsFrom(ctx: ChecksContext, opts: { shopName?: string } = {
   });
   const main = lines.find((l) => l.bucket === '(panel)' && (l.category === 'main-breaker' || l.category === 'main-disconnect'));
   const cpt = lines.find((l) => l.category === 'control-transformer');
-  if (checks.motorsWithErrors.length > 0) drawings.warnings.push(`Not drawn until their selection is fixed: ${checks.motorsWithErrors.join(', ')}.`);
+  if (checks.motorsWithErrors.length > 0)
+    drawings.warnings.push(`Not drawn until their selection is fixed: ${checks.motorsWithErrors.join(', ')}.`);
   if (checks.bom.note) drawings.warnings.push(checks.bom.note);
-  return { drawings, checks, mainText: main ? `${main.code ?? ''} ${main.description}`.trim().slice(0, 60) : 'main device (see the bill of materials)', cptText: cpt ? cpt.description.slice(0, 50) : 'control power transformer' };
+  return {
+    drawings,
+    checks,
+    mainText: main ? `${main.code ?? ''} ${main.description}`.trim().slice(0, 60) : 'main device (see the bill of materials)',
+    cptText: cpt ? cpt.description.slice(0, 50) : 'control power transformer',
+  };
 }
 
 /** All sheets of the schematic, or one bucket's (404 for a tag not on the panel). */
@@ -94,8 +107,12 @@ export async function wiringWorkbook(c: DrawingContext): Promise<Buffer> {
   const about = wb.addWorksheet('About');
   about.addRow([`Drawing ${c.drawings.drawingNumber}`]);
   about.addRow([c.drawings.colourPractice]);
-  about.addRow([`Terminal blocks in the bill of materials: ${c.drawings.bomTerminalBlocks}; terminals in the plan: ${c.drawings.terminals.length}.`]);
-  about.addRow(['Generated from the stored selections and the bill of materials; a qualified person verifies them before the panel is built.']);
+  about.addRow([
+    `Terminal blocks in the bill of materials: ${c.drawings.bomTerminalBlocks}; terminals in the plan: ${c.drawings.terminals.length}.`,
+  ]);
+  about.addRow([
+    'Generated from the stored selections and the bill of materials; a qualified person verifies them before the panel is built.',
+  ]);
   return Buffer.from(await wb.xlsx.writeBuffer());
 }
 

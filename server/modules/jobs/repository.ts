@@ -3,7 +3,12 @@ import { db } from '../../db/sequelize';
 import { Job } from '../../db/models/job';
 import type { JobSummary, JobValues } from '../../../shared/schemas/job';
 
-const SORT: Record<string, string> = { number: 'j.number asc', name: 'j.name asc', customer: 'j.customer asc', updatedAt: 'j.updated_at desc' };
+const SORT: Record<string, string> = {
+  number: 'j.number asc',
+  name: 'j.name asc',
+  customer: 'j.customer asc',
+  updatedAt: 'j.updated_at desc',
+};
 
 /** Jobs with their panel and motor counts, in one query. */
 export async function listJobs(organisationId: number, opts: { q?: string; archived: boolean; sort: string }): Promise<JobSummary[]> {
@@ -37,7 +42,13 @@ export async function createJob(organisationId: number, createdBy: number, value
   return Job.create({ ...values, organisationId, createdBy, archivedAt: null }, { transaction });
 }
 
-export async function updateJobVersioned(organisationId: number, id: number, version: number, values: Partial<JobValues> & { archivedAt?: Date | null }, transaction?: Transaction) {
+export async function updateJobVersioned(
+  organisationId: number,
+  id: number,
+  version: number,
+  values: Partial<JobValues> & { archivedAt?: Date | null },
+  transaction?: Transaction,
+) {
   const [count] = await Job.update({ ...values, version: version + 1 }, { where: { organisationId, id, version }, transaction });
   return count;
 }

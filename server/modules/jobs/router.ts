@@ -6,11 +6,31 @@ import { JobInputSchema, JobListQuerySchema } from '../../../shared/schemas/job'
 import * as service from './service';
 import { listActivity } from '../activity/service';
 
-
 export const jobRoutes = [
-  defineRoute({ method: 'get', path: '/api/jobs', access: ROLE_SETS.everyone, summary: 'Jobs list', query: JobListQuerySchema, handler: ({ user, query }) => service.listJobs(user, query) }),
-  defineRoute({ method: 'post', path: '/api/jobs', access: ROLE_SETS.design, summary: 'New job', body: JobInputSchema, handler: ({ user, body }) => service.createJob(user, body) }),
-  defineRoute({ method: 'get', path: '/api/jobs/:id', access: ROLE_SETS.everyone, summary: 'One job', params: IdParamSchema, handler: async ({ user, params }) => service.jobView(await service.getJob(user, params.id)) }),
+  defineRoute({
+    method: 'get',
+    path: '/api/jobs',
+    access: ROLE_SETS.everyone,
+    summary: 'Jobs list',
+    query: JobListQuerySchema,
+    handler: ({ user, query }) => service.listJobs(user, query),
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/api/jobs',
+    access: ROLE_SETS.design,
+    summary: 'New job',
+    body: JobInputSchema,
+    handler: ({ user, body }) => service.createJob(user, body),
+  }),
+  defineRoute({
+    method: 'get',
+    path: '/api/jobs/:id',
+    access: ROLE_SETS.everyone,
+    summary: 'One job',
+    params: IdParamSchema,
+    handler: async ({ user, params }) => service.jobView(await service.getJob(user, params.id)),
+  }),
   // PATCH /api/jobs/:id is in the panels module's routes: a change to the supply re-selects the job's panels.
   defineRoute({
     method: 'post',

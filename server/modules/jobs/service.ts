@@ -62,7 +62,13 @@ export async function createJob(actor: CurrentUser, values: JobValues) {
     throw new ValidationError(`Job number ${values.number} is already used`, [{ path: 'body.number', message: 'already used' }]);
   }
   const job = await repo.createJob(actor.organisationId, actor.id, values);
-  await recordActivity(actor, { entity: 'job', entityId: job.id, jobId: job.id, action: 'created', summary: `Created job ${job.number} ${job.name}` });
+  await recordActivity(actor, {
+    entity: 'job',
+    entityId: job.id,
+    jobId: job.id,
+    action: 'created',
+    summary: `Created job ${job.number} ${job.name}`,
+  });
   return jobView(job);
 }
 
@@ -89,8 +95,24 @@ export async function updateJob(
   const reselect = SELECTION_FIELDS.filter((f) => f in diff);
   await db().transaction(async (t) => {
     const count = await repo.updateJobVersioned(actor.organisationId, id, version, changes, t);
-    if (count === 0) throw new ConflictError('Someone else changed this job since you opened it: reload to see their change, then apply yours again');
-    await recordActivity(actor, { entity: 'job', entityId: id, jobId: id, action: 'updated', summary: `Changed job ${job.number}: ${Object.keys(diff).map((k) => JOB_FIELD_WORDS[k] ?? k).join(', ') || 'no fields'}`, diff }, t);
+    if (count === 0)
+      throw new ConflictError('Someone else changed this job since you opened it: reload to see their change, then apply yours again');
+    await recordActivity(
+      actor,
+      {
+        entity: 'job',
+        entityId: id,
+        jobId: id,
+        action: 'updated',
+        summary: `Changed job ${job.number}: ${
+          Object.keys(diff)
+            .map((k) => JOB_FIELD_WORDS[k] ?? k)
+            .join(', ') || 'no fields'
+        }`,
+        diff,
+      },
+      t,
+    );
     if (afterChange) await afterChange(reselect, t);
   });
   return jobView((await repo.findJob(actor.organisationId, id))!);
@@ -100,6 +122,12 @@ export async function setArchived(actor: CurrentUser, id: number, archived: bool
   const job = await getJob(actor, id);
   const count = await repo.updateJobVersioned(actor.organisationId, id, version, { archivedAt: archived ? new Date() : null });
   if (count === 0) throw new ConflictError('Someone else changed this job since you opened it: reload and try again');
-  await recordActivity(actor, { entity: 'job', entityId: id, jobId: id, action: archived ? 'archived' : 'restored', summary: `${archived ? 'Archived' : 'Restored'} job ${job.number}` });
+  await recordActivity(actor, {
+    entity: 'job',
+    entityId: id,
+    jobId: id,
+    action: archived ? 'archived' : 'restored',
+    summary: `${archived ? 'Archived' : 'Restored'} job ${job.number}`,
+  });
   return jobView((await repo.findJob(actor.organisationId, id))!);
 }

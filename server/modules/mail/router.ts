@@ -12,7 +12,14 @@ export const mailRoutes = [
     query: z.object({ limit: z.coerce.number().int().min(1).max(500).default(100) }),
     handler: async ({ query }) => {
       const rows = await latestMessages(query.limit);
-      return rows.map((m) => ({ id: m.id, to: m.toAddress, from: m.fromAddress, subject: m.subject, body: m.body, createdAt: m.createdAt }));
+      return rows.map((m) => ({
+        id: m.id,
+        to: m.toAddress,
+        from: m.fromAddress,
+        subject: m.subject,
+        body: m.body,
+        createdAt: m.createdAt,
+      }));
     },
   }),
 ];

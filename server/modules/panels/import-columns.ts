@@ -54,10 +54,16 @@ const COLUMN_TEXT: Record<string, ColumnText> = {
   reverseRotationHazard: { note: 'yes/no', example: 'no' },
   critical: { note: 'yes/no', example: 'no' },
   environment: { note: 'indoor-dry, indoor-dusty, outdoor, washdown, corrosive, class1-div1 …', example: 'indoor-dusty' },
-  scpdType: { note: 'inverse-time-breaker, instantaneous-trip-breaker, dual-element-fuse, non-time-delay-fuse', example: 'inverse-time-breaker' },
+  scpdType: {
+    note: 'inverse-time-breaker, instantaneous-trip-breaker, dual-element-fuse, non-time-delay-fuse',
+    example: 'inverse-time-breaker',
+  },
   cableLengthFt: { note: 'feet', example: 80 },
   tempRiseC: { note: 'marked temperature rise, °C (40 or less allows 125 % overload, 430.32)', example: '' },
-  lockedRotorWithstandS: { note: "locked-rotor withstand (hot safe stall) time, s, from the motor maker's data: limits the trip class", example: '' },
+  lockedRotorWithstandS: {
+    note: "locked-rotor withstand (hot safe stall) time, s, from the motor maker's data: limits the trip class",
+    example: '',
+  },
   energyEfficient: { note: 'yes/no; Design B energy-efficient (Table 430.52 instantaneous-trip 1100 %)', example: 'no' },
   poles: { note: 'even number (synchronous speed)', example: 4 },
   rotor: { note: 'squirrel-cage or wound-rotor', example: 'squirrel-cage' },
@@ -69,7 +75,11 @@ const COLUMN_TEXT: Record<string, ColumnText> = {
   driveInputAmps: { note: "the chosen drive's rated input current, A (430.122(A))", example: '' },
   'conductor.material': { header: 'conductorMaterial', note: 'cu or al (cu by default)', example: 'cu' },
   'conductor.tempRatingC': { header: 'conductorTempC', note: 'insulation rating 60, 75 or 90 (75 by default)', example: 75 },
-  'scpdOverride.maxPercent': { header: 'scpdOverridePercent', note: '430.52(C)(1) Exception No. 2 limit, % (only with a reason)', example: '' },
+  'scpdOverride.maxPercent': {
+    header: 'scpdOverridePercent',
+    note: '430.52(C)(1) Exception No. 2 limit, % (only with a reason)',
+    example: '',
+  },
   'scpdOverride.reason': { header: 'scpdOverrideReason', note: 'why the motor will not start at the normal limit', example: '' },
 };
 
@@ -78,7 +88,8 @@ type Leaf = z.ZodType;
 /** The schema under optional, default and nullable wrappers. */
 function bare(s: Leaf): Leaf {
   let t = s;
-  while (t instanceof z.ZodOptional || t instanceof z.ZodDefault || t instanceof z.ZodPrefault || t instanceof z.ZodNullable) t = t.unwrap() as Leaf;
+  while (t instanceof z.ZodOptional || t instanceof z.ZodDefault || t instanceof z.ZodPrefault || t instanceof z.ZodNullable)
+    t = t.unwrap() as Leaf;
   return t;
 }
 
@@ -86,14 +97,20 @@ function kindOf(s: Leaf): Column['kind'] {
   const t = bare(s);
   if (t instanceof z.ZodBoolean) return 'boolean';
   if (t instanceof z.ZodNumber) return t.format === 'safeint' || t.format === 'int32' ? 'integer' : 'number';
-  if (t instanceof z.ZodUnion && t.options.every((o) => o instanceof z.ZodLiteral && [...o.values].every((v) => Number.isInteger(v)))) return 'integer';
+  if (t instanceof z.ZodUnion && t.options.every((o) => o instanceof z.ZodLiteral && [...o.values].every((v) => Number.isInteger(v))))
+    return 'integer';
   return 'string';
 }
 
 /** The options of an enum or a union of literals, in words ("a, b or c"); '' for a free value. */
 function optionsOf(s: Leaf): string {
   const t = bare(s);
-  const values = t instanceof z.ZodEnum ? t.options : t instanceof z.ZodUnion ? t.options.flatMap((o) => (o instanceof z.ZodLiteral ? [...o.values] : [])) : [];
+  const values =
+    t instanceof z.ZodEnum
+      ? t.options
+      : t instanceof z.ZodUnion
+        ? t.options.flatMap((o) => (o instanceof z.ZodLiteral ? [...o.values] : []))
+        : [];
   if (values.length === 0) return kindOf(s) === 'boolean' ? 'yes/no' : '';
   const words = values.map(String);
   return words.length === 1 ? words[0]! : `${words.slice(0, -1).join(', ')} or ${words.at(-1)}`;

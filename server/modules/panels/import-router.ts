@@ -38,7 +38,8 @@ export const importRoutes = [
     access: ROLE_SETS.design,
     summary: 'Motor-list template (.xlsx)',
     params: PanelId,
-    handler: async ({ user, params, res }) => sendAttachment(res, 'panelwright-motor-list', 'xlsx', await importTemplate(user, params.panelId)),
+    handler: async ({ user, params, res }) =>
+      sendAttachment(res, 'panelwright-motor-list', 'xlsx', await importTemplate(user, params.panelId)),
   }),
   defineRoute({
     method: 'post',

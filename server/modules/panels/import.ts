@@ -63,7 +63,10 @@ async function buildTemplate(): Promise<Buffer> {
   ws.views = [{ state: 'frozen', ySplit: 1 }];
   ws.addRow(Object.fromEntries(IMPORT_COLUMNS.map((c) => [c.key, c.example])));
   const help = wb.addWorksheet('Columns');
-  help.columns = [{ header: 'column', width: 24 }, { header: 'meaning', width: 90 }];
+  help.columns = [
+    { header: 'column', width: 24 },
+    { header: 'meaning', width: 90 },
+  ];
   for (const c of IMPORT_COLUMNS) help.addRow([c.header, c.note]);
   return Buffer.from(await wb.xlsx.writeBuffer());
 }
@@ -97,7 +100,11 @@ async function readRows(buffer: Buffer, filename: string): Promise<string[][]> {
   return readSheetRows(buffer, kind, { maxRows: MAX_IMPORT_ROWS, what: 'motors' });
 }
 
-export async function previewImport(buffer: Buffer, filename: string, existingTags: string[] = []): Promise<{ rows: PreviewRow[]; ok: boolean; columns: string[] }> {
+export async function previewImport(
+  buffer: Buffer,
+  filename: string,
+  existingTags: string[] = [],
+): Promise<{ rows: PreviewRow[]; ok: boolean; columns: string[] }> {
   const raw = (await readRows(buffer, filename)).filter((r, i) => i === 0 || r.some((c) => c !== ''));
   if (raw.length < 2) throw new ValidationError('The file has no motor rows under the header', [{ path: 'file', message: 'no rows' }]);
   const header = raw[0].map((h) => h.trim());
@@ -106,7 +113,10 @@ export async function previewImport(buffer: Buffer, filename: string, existingTa
   if (unknown.length || missing.length) {
     throw new ValidationError(
       `The header row does not match the template${unknown.length ? `: unknown column${unknown.length > 1 ? 's' : ''} ${unknown.join(', ')}` : ''}${missing.length ? `; missing ${missing.join(', ')}` : ''}`,
-      [...unknown.map((u) => ({ path: `columns.${u}`, message: 'unknown column' })), ...missing.map((m) => ({ path: `columns.${m}`, message: 'missing column' }))],
+      [
+        ...unknown.map((u) => ({ path: `columns.${u}`, message: 'unknown column' })),
+        ...missing.map((m) => ({ path: `columns.${m}`, message: 'missing column' })),
+      ],
     );
   }
   const index = header.map((h) => IMPORT_COLUMNS.find((c) => c.header.toLowerCase() === h.toLowerCase()) ?? null);
@@ -129,7 +139,8 @@ export async function previewImport(buffer: Buffer, filename: string, existingTa
       else if (r.success) parsed = answers as LoadInput;
       else for (const iss of zodIssues(r.error.issues)) problems.push({ column: columnOf(iss.path) || 'row', message: iss.message });
     }
-    if (tag && seen.has(tag.toLowerCase())) problems.push({ column: 'tag', message: `tag ${tag} is already on the panel or earlier in the file` });
+    if (tag && seen.has(tag.toLowerCase()))
+      problems.push({ column: 'tag', message: `tag ${tag} is already on the panel or earlier in the file` });
     if (tag) seen.add(tag.toLowerCase());
     return { row: i + 2, tag, answers: problems.length ? null : parsed, problems };
   });
@@ -154,7 +165,18 @@ export async function commitImport(actor: CurrentUser, panelId: number, buffer: 
   const answers = preview.rows.map((r) => r.answers!);
   const count = await changePanel(actor, panelId, null, `imported ${answers.length} motors`, async (p, t) => {
     const n = await addLoads(actor, panelId, answers, t, p);
-    await recordActivity(actor, { entity: 'panel', entityId: p.id, jobId: p.jobId, panelId: p.id, action: 'imported', summary: `Imported ${n} motors from ${filename}` }, t);
+    await recordActivity(
+      actor,
+      {
+        entity: 'panel',
+        entityId: p.id,
+        jobId: p.jobId,
+        panelId: p.id,
+        action: 'imported',
+        summary: `Imported ${n} motors from ${filename}`,
+      },
+      t,
+    );
     return n;
   });
   return { imported: count };

@@ -13,7 +13,6 @@ import { requirePanel } from './service';
 import { CHECK_CAUTIONS } from '../../../shared/schemas/checks';
 import { SCPD_WORDS } from '../../../shared/calc/scpd';
 
-
 function cell(v: unknown): string | number | null {
   if (v === undefined || v === null) return null;
   if (typeof v === 'boolean') return v ? 'yes' : 'no';
@@ -83,11 +82,16 @@ export async function motorListExport(actor: CurrentUser, panelId: number) {
     const overrides = l.overrides ?? [];
     const s = applyOverrides(stored, overrides);
     const row = schedule.addRow(SCHEDULE.map(([, , pick]) => pick(s)));
-    if (overrides.length) row.getCell(1).note = `Overridden by the designer: ${overrides.map((o) => `${o.field} = ${o.value} (${o.justification})`).join('; ')}`;
+    if (overrides.length)
+      row.getCell(1).note =
+        `Overridden by the designer: ${overrides.map((o) => `${o.field} = ${o.value} (${o.justification})`).join('; ')}`;
   }
 
   const help = wb.addWorksheet('Columns');
-  help.columns = [{ header: 'column', width: 24 }, { header: 'meaning', width: 90 }];
+  help.columns = [
+    { header: 'column', width: 24 },
+    { header: 'meaning', width: 90 },
+  ];
   help.getRow(1).font = { bold: true };
   for (const c of IMPORT_COLUMNS) help.addRow([c.header, c.note]);
 
@@ -96,12 +100,25 @@ export async function motorListExport(actor: CurrentUser, panelId: number) {
   about.addRows([
     ['Job', `${p.job.number} ${p.job.name}`],
     ['Panel', p.name],
-    ['Supply', `${p.job.supplyVolts} V, ${p.job.supplyPhases}-phase, ${p.job.supplyHz} Hz; ${p.job.availableFaultKa} kA available; ambient ${p.job.ambientC} °C`],
+    [
+      'Supply',
+      `${p.job.supplyVolts} V, ${p.job.supplyPhases}-phase, ${p.job.supplyHz} Hz; ${p.job.availableFaultKa} kA available; ambient ${p.job.ambientC} °C`,
+    ],
     ['Code edition', `NEC ${p.job.codeEdition}`],
-    ['Terminations', p.terminationsListed75C === false ? 'not listed for 75 °C: 14–1 AWG and circuits of 100 A or less at 60 °C (NEC 110.14(C)(1)(a))' : p.terminationsListed75C ? 'listed for 75 °C (NEC 110.14(C)(1)(a)(3))' : 'not answered: taken as listed for 75 °C, flagged (NEC 110.14(C)(1))'],
+    [
+      'Terminations',
+      p.terminationsListed75C === false
+        ? 'not listed for 75 °C: 14–1 AWG and circuits of 100 A or less at 60 °C (NEC 110.14(C)(1)(a))'
+        : p.terminationsListed75C
+          ? 'listed for 75 °C (NEC 110.14(C)(1)(a)(3))'
+          : 'not answered: taken as listed for 75 °C, flagged (NEC 110.14(C)(1))',
+    ],
     ['Exported', `${new Date().toISOString().slice(0, 16).replace('T', ' ')} UTC`],
     ['Motors sheet', 'The import format: upload this workbook on another panel to add the same motors (tags must be new there).'],
-    ['Selections sheet', "The engine's selections with the designer's overrides written over them (a note on the tag names each override)."],
+    [
+      'Selections sheet',
+      "The engine's selections with the designer's overrides written over them (a note on the tag names each override).",
+    ],
     [],
     ...CHECK_CAUTIONS.map((c, i) => [i === 0 ? 'Cautions' : '', c]),
   ]);

@@ -21,7 +21,10 @@ function parseAnswers(raw: unknown, prefix = 'body.answers'): LoadInput {
     throw new ValidationError(`The motor's answers have ${issues.length} problem${issues.length === 1 ? '' : 's'}`, issues);
   }
   const refusal = flcRefusal(r.data); // a motor the engine cannot size is refused, not stored with zeros
-  if (refusal) throw new ValidationError(`${r.data.tag} cannot be sized: ${refusal.message}`, [{ path: `${prefix}.${refusal.path}`, message: refusal.message }]);
+  if (refusal)
+    throw new ValidationError(`${r.data.tag} cannot be sized: ${refusal.message}`, [
+      { path: `${prefix}.${refusal.path}`, message: refusal.message },
+    ]);
   return raw as LoadInput;
 }
 
@@ -33,15 +36,30 @@ async function tagTaken(panelId: number, tag: string, t: Transaction, exceptId?:
 export async function addLoad(actor: CurrentUser, panelId: number, answers: unknown, panelVersion: number | null) {
   const input = parseAnswers(answers);
   return changePanel(actor, panelId, panelVersion, `added ${input.tag}`, async (p, t) => {
-    if (await tagTaken(p.id, input.tag, t)) throw new ValidationError(`Tag ${input.tag} is already on this panel`, [{ path: 'body.answers.tag', message: 'already on this panel' }]);
+    if (await tagTaken(p.id, input.tag, t))
+      throw new ValidationError(`Tag ${input.tag} is already on this panel`, [
+        { path: 'body.answers.tag', message: 'already on this panel' },
+      ]);
     const selection = await selectOne(panelSupply(p), input);
     const position = await repo.lastLoadPosition(p.id, t);
     const l = await repo.createLoad(
-      { organisationId: actor.organisationId, panelId: p.id, tag: input.tag, position: position + 1, answers: input, selection: selection, overrides: [] },
+      {
+        organisationId: actor.organisationId,
+        panelId: p.id,
+        tag: input.tag,
+        position: position + 1,
+        answers: input,
+        selection: selection,
+        overrides: [],
+      },
       t,
     );
     await refreshRollup(p, t);
-    await recordActivity(actor, { entity: 'load', entityId: l.id, jobId: p.jobId, panelId: p.id, action: 'added', summary: `Added motor ${input.tag} to ${p.name}` }, t);
+    await recordActivity(
+      actor,
+      { entity: 'load', entityId: l.id, jobId: p.jobId, panelId: p.id, action: 'added', summary: `Added motor ${input.tag} to ${p.name}` },
+      t,
+    );
     return loadView(l);
   });
 }
@@ -52,9 +70,18 @@ export async function addLoads(actor: CurrentUser, panelId: number, answersList:
   let position = existing.reduce((m, l) => Math.max(m, l.position), 0);
   const out = await selectAll(panelSupply(p), answersList);
   const rows = answersList.map((a, i) => {
-    if (tags.has(a.tag.toLowerCase())) throw new ValidationError(`Tag ${a.tag} is already on this panel`, [{ path: `rows[${i}].tag`, message: 'already on this panel' }]);
+    if (tags.has(a.tag.toLowerCase()))
+      throw new ValidationError(`Tag ${a.tag} is already on this panel`, [{ path: `rows[${i}].tag`, message: 'already on this panel' }]);
     tags.add(a.tag.toLowerCase());
-    return { organisationId: actor.organisationId, panelId: p.id, tag: a.tag, position: ++position, answers: a, selection: out!.results[i], overrides: [] };
+    return {
+      organisationId: actor.organisationId,
+      panelId: p.id,
+      tag: a.tag,
+      position: ++position,
+      answers: a,
+      selection: out!.results[i],
+      overrides: [],
+    };
   });
   await repo.saveLoads(rows, t);
   await refreshRollup(p, t);
@@ -72,8 +99,14 @@ export async function updateLoad(actor: CurrentUser, loadId: number, answers: un
   const found = await requireLoad(actor, loadId);
   return changePanel(actor, found.panelId, null, `changed ${input.tag}`, async (p, t) => {
     const l = (await repo.findLoad(actor.organisationId, loadId, t))!;
-    if (l.version !== version) throw new ConflictError(`Someone else changed motor ${l.tag} since you opened it: reload to see their change, then apply yours again`);
-    if (input.tag !== l.tag && (await tagTaken(p.id, input.tag, t, l.id))) throw new ValidationError(`Tag ${input.tag} is already on this panel`, [{ path: 'body.answers.tag', message: 'already on this panel' }]);
+    if (l.version !== version)
+      throw new ConflictError(
+        `Someone else changed motor ${l.tag} since you opened it: reload to see their change, then apply yours again`,
+      );
+    if (input.tag !== l.tag && (await tagTaken(p.id, input.tag, t, l.id)))
+      throw new ValidationError(`Tag ${input.tag} is already on this panel`, [
+        { path: 'body.answers.tag', message: 'already on this panel' },
+      ]);
     const selection = await selectOne(panelSupply(p), input);
     const diff: Record<string, unknown> = {};
     for (const k of new Set([...Object.keys(l.answers), ...Object.keys(input)])) {
@@ -81,15 +114,22 @@ export async function updateLoad(actor: CurrentUser, loadId: number, answers: un
       const b = JSON.stringify((input as Record<string, unknown>)[k]);
       if (a !== b) diff[k] = { from: (l.answers as Record<string, unknown>)[k] ?? null, to: (input as Record<string, unknown>)[k] ?? null };
     }
-    const count = await repo.updateLoad(
-      l.id,
-      { tag: input.tag, answers: input, selection: selection, version: version + 1 },
-      t,
-      version,
-    );
+    const count = await repo.updateLoad(l.id, { tag: input.tag, answers: input, selection: selection, version: version + 1 }, t, version);
     if (count === 0) throw new ConflictError(`Someone else changed motor ${l.tag}: reload and apply your change again`);
     await refreshRollup(p, t);
-    await recordActivity(actor, { entity: 'load', entityId: l.id, jobId: p.jobId, panelId: p.id, action: 'changed', summary: `Changed motor ${input.tag}: ${Object.keys(diff).join(', ') || 'no answers'}`, diff }, t);
+    await recordActivity(
+      actor,
+      {
+        entity: 'load',
+        entityId: l.id,
+        jobId: p.jobId,
+        panelId: p.id,
+        action: 'changed',
+        summary: `Changed motor ${input.tag}: ${Object.keys(diff).join(', ') || 'no answers'}`,
+        diff,
+      },
+      t,
+    );
     return loadView((await repo.findLoad(actor.organisationId, loadId, t))!);
   });
 }
@@ -109,11 +149,28 @@ export async function deleteLoad(actor: CurrentUser, loadId: number) {
   await changePanel(actor, l.panelId, null, `removed ${l.tag}`, async (p, t) => {
     await repo.deleteLoad(l.id, t);
     await refreshRollup(p, t);
-    await recordActivity(actor, { entity: 'load', entityId: l.id, jobId: p.jobId, panelId: p.id, action: 'removed', summary: `Removed motor ${l.tag} from ${p.name}` }, t);
+    await recordActivity(
+      actor,
+      {
+        entity: 'load',
+        entityId: l.id,
+        jobId: p.jobId,
+        panelId: p.id,
+        action: 'removed',
+        summary: `Removed motor ${l.tag} from ${p.name}`,
+      },
+      t,
+    );
   });
 }
 
-export async function bulkEdit(actor: CurrentUser, panelId: number, loadIds: number[], changes: Record<string, unknown>, panelVersion: number) {
+export async function bulkEdit(
+  actor: CurrentUser,
+  panelId: number,
+  loadIds: number[],
+  changes: Record<string, unknown>,
+  panelVersion: number,
+) {
   return changePanel(actor, panelId, panelVersion, 'bulk edit', async (p, t) => {
     const loads = (await repo.loadsOf(p.id, t)).filter((l) => loadIds.includes(l.id));
     if (loads.length !== loadIds.length) throw new NotFoundError('One of the motors');
@@ -126,7 +183,19 @@ export async function bulkEdit(actor: CurrentUser, panelId: number, loadIds: num
       ['answers', 'selection', 'version', 'updatedAt'],
     );
     await refreshRollup(p, t);
-    await recordActivity(actor, { entity: 'panel', entityId: p.id, jobId: p.jobId, panelId: p.id, action: 'bulk-edit', summary: `Changed ${Object.keys(changes).join(', ')} on ${loads.length} motors`, diff: changes }, t);
+    await recordActivity(
+      actor,
+      {
+        entity: 'panel',
+        entityId: p.id,
+        jobId: p.jobId,
+        panelId: p.id,
+        action: 'bulk-edit',
+        summary: `Changed ${Object.keys(changes).join(', ')} on ${loads.length} motors`,
+        diff: changes,
+      },
+      t,
+    );
     return { updated: loads.length };
   });
 }
@@ -141,7 +210,8 @@ export async function setOverrides(actor: CurrentUser, loadId: number, overrides
     const fields = new Set<string>();
     const previous = new Map((l.overrides ?? []).map((o) => [o.field, o]));
     const stored: StoredOverride[] = overrides.map((o, i) => {
-      if (fields.has(o.field)) throw new ValidationError(`${o.field} is overridden twice`, [{ path: `body.overrides[${i}].field`, message: 'duplicate' }]);
+      if (fields.has(o.field))
+        throw new ValidationError(`${o.field} is overridden twice`, [{ path: `body.overrides[${i}].field`, message: 'duplicate' }]);
       fields.add(o.field);
       const warnings = checkOverride(sel, o, i);
       const [a, b] = o.field.split('.');
@@ -154,7 +224,15 @@ export async function setOverrides(actor: CurrentUser, loadId: number, overrides
     await repo.updateLoad(l.id, { overrides: stored, version: version + 1 }, t);
     await recordActivity(
       actor,
-      { entity: 'load', entityId: l.id, jobId: p.jobId, panelId: p.id, action: 'override', summary: `Overrides on ${l.tag}: ${stored.map((o) => `${o.field} = ${o.value}`).join('; ') || 'none'}`, diff: { overrides: stored } },
+      {
+        entity: 'load',
+        entityId: l.id,
+        jobId: p.jobId,
+        panelId: p.id,
+        action: 'override',
+        summary: `Overrides on ${l.tag}: ${stored.map((o) => `${o.field} = ${o.value}`).join('; ') || 'none'}`,
+        diff: { overrides: stored },
+      },
       t,
     );
     return loadView((await repo.findLoad(actor.organisationId, loadId, t))!);

@@ -40,7 +40,11 @@ export async function signOffQueue(organisationId: number, signedSince: Date): P
       limit 300`,
     { replacements: { organisationId, signedSince }, type: QueryTypes.SELECT },
   );
-  return rows.map(({ noteBody, noteAuthor, ...r }) => ({ ...r, since: new Date(r.since).toISOString(), note: noteBody === null ? null : { body: noteBody, author: noteAuthor } }));
+  return rows.map(({ noteBody, noteAuthor, ...r }) => ({
+    ...r,
+    since: new Date(r.since).toISOString(),
+    note: noteBody === null ? null : { body: noteBody, author: noteAuthor },
+  }));
 }
 
 /** The panel with its job, in one query (the job supplies the supply data). */
@@ -54,12 +58,23 @@ export async function findPanelWithJob(organisationId: number, id: number, trans
 }
 
 export async function loadsOf(panelId: number, transaction?: Transaction) {
-  return Load.findAll({ where: { panelId }, order: [['position', 'ASC'], ['id', 'ASC']], transaction });
+  return Load.findAll({
+    where: { panelId },
+    order: [
+      ['position', 'ASC'],
+      ['id', 'ASC'],
+    ],
+    transaction,
+  });
 }
 
 /** The panel's comments, oldest first, each with its author's name (null when the person is gone). */
 export async function commentsOf(panelId: number) {
-  const rows = await Comment.findAll({ where: { panelId }, include: [{ model: User, as: 'author', attributes: ['name'] }], order: [['id', 'ASC']] });
+  const rows = await Comment.findAll({
+    where: { panelId },
+    include: [{ model: User, as: 'author', attributes: ['name'] }],
+    order: [['id', 'ASC']],
+  });
   return rows.map((c) => Object.assign(c, { authorName: (c as Comment & { author?: User | null }).author?.name ?? null }));
 }
 
@@ -90,16 +105,25 @@ export async function findLoad(organisationId: number, id: number, transaction?:
   return Load.findOne({ where: { organisationId, id }, transaction });
 }
 
-export async function bumpPanel(organisationId: number, id: number, version: number, values: Record<string, unknown>, transaction?: Transaction) {
+export async function bumpPanel(
+  organisationId: number,
+  id: number,
+  version: number,
+  values: Record<string, unknown>,
+  transaction?: Transaction,
+) {
   const [count] = await Panel.update({ ...values, version: version + 1 }, { where: { organisationId, id, version }, transaction });
   return count;
 }
 
 export async function usersWithRole(organisationId: number, role: string) {
-  return db().query<{ email: string; name: string }>(`select email, name from users where organisation_id = :organisationId and active and :role = any(roles)`, {
-    replacements: { organisationId, role },
-    type: QueryTypes.SELECT,
-  });
+  return db().query<{ email: string; name: string }>(
+    `select email, name from users where organisation_id = :organisationId and active and :role = any(roles)`,
+    {
+      replacements: { organisationId, role },
+      type: QueryTypes.SELECT,
+    },
+  );
 }
 
 export async function createPanel(values: CreationAttributes<Panel>, transaction?: Transaction) {
@@ -126,7 +150,11 @@ export async function createLoad(values: CreationAttributes<Load>, transaction?:
 }
 
 /** New motors in one statement; with `updateOnDuplicate`, changed fields of existing motors in one statement. */
-export async function saveLoads(rows: Array<CreationAttributes<Load>>, transaction: Transaction, updateOnDuplicate?: Array<keyof CreationAttributes<Load>>) {
+export async function saveLoads(
+  rows: Array<CreationAttributes<Load>>,
+  transaction: Transaction,
+  updateOnDuplicate?: Array<keyof CreationAttributes<Load>>,
+) {
   await Load.bulkCreate(rows, { transaction, ...(updateOnDuplicate ? { updateOnDuplicate } : {}) });
 }
 

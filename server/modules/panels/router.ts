@@ -9,7 +9,6 @@ import * as service from './service';
 import * as motors from './motors';
 import * as ruleCheck from './rule-check';
 
-
 const PanelId = z.object({ panelId: idParamSchema });
 const LoadId = z.object({ loadId: idParamSchema });
 const LoadBody = z.object({ answers: z.record(z.string(), z.unknown()), version: versionSchema.optional() });
@@ -23,8 +22,23 @@ export const panelRoutes = [
     handler: ({ user }) => service.signOffQueue(user),
   }),
   // A job's change lives here, not in the jobs module: a change to its supply re-selects its panels.
-  defineRoute({ method: 'patch', path: '/api/jobs/:id', access: ROLE_SETS.design, summary: 'Change a job', params: IdParamSchema, body: JobUpdateSchema, handler: ({ user, params, body }) => service.changeJob(user, params.id, body) }),
-  defineRoute({ method: 'get', path: '/api/jobs/:id/panels', access: ROLE_SETS.everyone, summary: 'Panels of a job', params: IdParamSchema, handler: ({ user, params }) => service.listPanels(user, params.id) }),
+  defineRoute({
+    method: 'patch',
+    path: '/api/jobs/:id',
+    access: ROLE_SETS.design,
+    summary: 'Change a job',
+    params: IdParamSchema,
+    body: JobUpdateSchema,
+    handler: ({ user, params, body }) => service.changeJob(user, params.id, body),
+  }),
+  defineRoute({
+    method: 'get',
+    path: '/api/jobs/:id/panels',
+    access: ROLE_SETS.everyone,
+    summary: 'Panels of a job',
+    params: IdParamSchema,
+    handler: ({ user, params }) => service.listPanels(user, params.id),
+  }),
   defineRoute({
     method: 'post',
     path: '/api/jobs/:id/panels',
@@ -34,7 +48,13 @@ export const panelRoutes = [
     body: PanelInputSchema,
     handler: ({ user, params, body }) => service.createPanel(user, params.id, body),
   }),
-  defineRoute({ method: 'get', path: '/api/panels/:panelId', access: ROLE_SETS.everyone, summary: 'A panel with its motors, selections, comments and revisions', params: PanelId, handler: async ({ user, params, req, res }) => {
+  defineRoute({
+    method: 'get',
+    path: '/api/panels/:panelId',
+    access: ROLE_SETS.everyone,
+    summary: 'A panel with its motors, selections, comments and revisions',
+    params: PanelId,
+    handler: async ({ user, params, req, res }) => {
       const { json, gzip, key } = await service.panelDetailJson(user, params.panelId);
       res.setHeader('ETag', `W/"${key}"`);
       res.setHeader('Cache-Control', 'private, no-cache');
@@ -43,7 +63,8 @@ export const panelRoutes = [
       else if (req.acceptsEncodings('gzip')) res.type('application/json').setHeader('Content-Encoding', 'gzip').send(gzip);
       else res.type('application/json').send(json);
       return undefined;
-    } }),
+    },
+  }),
   defineRoute({
     method: 'patch',
     path: '/api/panels/:panelId',
@@ -54,12 +75,20 @@ export const panelRoutes = [
     handler: ({ user, params, body }) => {
       const { version, ...changes } = body;
       if (!user.roles.some((r) => r === 'admin' || r === 'designer')) {
-        for (const k of Object.keys(changes)) if (k !== 'markupPercent' && k !== 'labourRate') service.assertRole(user, 'admin', 'designer');
+        for (const k of Object.keys(changes))
+          if (k !== 'markupPercent' && k !== 'labourRate') service.assertRole(user, 'admin', 'designer');
       }
       return service.updatePanel(user, params.panelId, changes, version);
     },
   }),
-  defineRoute({ method: 'post', path: '/api/panels/:panelId/duplicate', access: ROLE_SETS.design, summary: 'Duplicate a panel with its motors', params: PanelId, handler: ({ user, params }) => service.duplicatePanel(user, params.panelId) }),
+  defineRoute({
+    method: 'post',
+    path: '/api/panels/:panelId/duplicate',
+    access: ROLE_SETS.design,
+    summary: 'Duplicate a panel with its motors',
+    params: PanelId,
+    handler: ({ user, params }) => service.duplicatePanel(user, params.panelId),
+  }),
   defineRoute({
     method: 'post',
     path: '/api/panels/:panelId/archive',
@@ -98,8 +127,22 @@ export const panelRoutes = [
     body: LoadBody.extend({ version: versionSchema }),
     handler: ({ user, params, body }) => motors.updateLoad(user, params.loadId, body.answers, body.version),
   }),
-  defineRoute({ method: 'post', path: '/api/loads/:loadId/copy', access: ROLE_SETS.design, summary: 'Copy a motor', params: LoadId, handler: ({ user, params }) => motors.copyLoad(user, params.loadId) }),
-  defineRoute({ method: 'delete', path: '/api/loads/:loadId', access: ROLE_SETS.design, summary: 'Remove a motor', params: LoadId, handler: ({ user, params }) => motors.deleteLoad(user, params.loadId) }),
+  defineRoute({
+    method: 'post',
+    path: '/api/loads/:loadId/copy',
+    access: ROLE_SETS.design,
+    summary: 'Copy a motor',
+    params: LoadId,
+    handler: ({ user, params }) => motors.copyLoad(user, params.loadId),
+  }),
+  defineRoute({
+    method: 'delete',
+    path: '/api/loads/:loadId',
+    access: ROLE_SETS.design,
+    summary: 'Remove a motor',
+    params: LoadId,
+    handler: ({ user, params }) => motors.deleteLoad(user, params.loadId),
+  }),
   defineRoute({
     method: 'put',
     path: '/api/loads/:loadId/overrides',

@@ -19,9 +19,15 @@ import { changePanel, requirePanel, reselectPanel } from './service';
 import type { Load } from '../../db/models/load';
 
 /** Each motor's selection under the current rules (or the reason its stored answers no longer pass them), and the panel roll-up when all pass. */
-async function currentSelections(job: Parameters<typeof selectAll>[0], loads: Load[]): Promise<{ results: Array<LoadSelection | string>; rollup: PanelRollup | null }> {
+async function currentSelections(
+  job: Parameters<typeof selectAll>[0],
+  loads: Load[],
+): Promise<{ results: Array<LoadSelection | string>; rollup: PanelRollup | null }> {
   try {
-    const out = await selectAll(job, loads.map((l) => l.answers as LoadInput));
+    const out = await selectAll(
+      job,
+      loads.map((l) => l.answers as LoadInput),
+    );
     return { results: out?.results ?? [], rollup: out?.panel ?? null };
   } catch (e) {
     if (!(e instanceof ValidationError)) throw e;
@@ -45,7 +51,11 @@ function feedWords(rollup: PanelRollup | null, tag: string): string {
   return f.source ? `${f.source.tag}, ${f.source.description}` : 'a source outside the panel';
 }
 
-async function differencesOf(job: Parameters<typeof selectAll>[0], loads: Load[], storedRollup: PanelRollup | null): Promise<RuleCheckBody['changed']> {
+async function differencesOf(
+  job: Parameters<typeof selectAll>[0],
+  loads: Load[],
+  storedRollup: PanelRollup | null,
+): Promise<RuleCheckBody['changed']> {
   const { results: now, rollup } = await currentSelections(job, loads);
   const changed: RuleCheckBody['changed'] = [];
   loads.forEach((l, i) => {
@@ -85,7 +95,9 @@ export async function ruleCheck(actor: CurrentUser, panelId: number): Promise<Ru
   const p = await requirePanel(actor, panelId);
   const loads = await repo.loadsOf(p.id);
   const digest = createHash('sha1')
-    .update(JSON.stringify([jobSupply(panelSupply(p)), p.job.codeEdition, p.rollup, loads.map((l) => [l.id, l.tag, l.answers, l.selection])]))
+    .update(
+      JSON.stringify([jobSupply(panelSupply(p)), p.job.codeEdition, p.rollup, loads.map((l) => [l.id, l.tag, l.answers, l.selection])]),
+    )
     .digest('hex');
   let hit = checked.get(p.id);
   if (!hit || hit.digest !== digest) {
@@ -114,7 +126,9 @@ export async function reselectUnderCurrentRules(actor: CurrentUser, panelId: num
         summary: changed.length
           ? `Selected ${loads.length} motors again under the current rules: ${changed.map((c) => `${c.tag} (${c.differences.map((d) => inSentence(d.label)).join(', ')})`).join('; ')}`
           : `Selected ${loads.length} motors again under the current rules: nothing changed`,
-        diff: Object.fromEntries(changed.map((c) => [c.tag, Object.fromEntries(c.differences.map((d) => [d.field, { from: d.from, to: d.to }]))])),
+        diff: Object.fromEntries(
+          changed.map((c) => [c.tag, Object.fromEntries(c.differences.map((d) => [d.field, { from: d.from, to: d.to }]))]),
+        ),
       },
       t,
     );

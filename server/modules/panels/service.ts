@@ -127,12 +127,42 @@ async function panelDetailOf(p: Panel & { job: Job }): Promise<PanelDetail> {
 }
 
 /** A new panel; without its own markup and labour rate it takes the shop's defaults (a panel keeps its own after that). */
-export async function createPanel(actor: CurrentUser, jobId: number, values: { name: string; description: string; mounting: string; markupPercent?: number; labourRate?: number; terminationsListed75C: boolean | null }) {
+export async function createPanel(
+  actor: CurrentUser,
+  jobId: number,
+  values: {
+    name: string;
+    description: string;
+    mounting: string;
+    markupPercent?: number;
+    labourRate?: number;
+    terminationsListed75C: boolean | null;
+  },
+) {
   const job = await getJob(actor, jobId);
   const shop = await shopSettingsOf(actor.organisationId);
-  const pricing = { markupPercent: values.markupPercent ?? shop.defaultMarkupPercent, labourRate: values.labourRate ?? shop.defaultLabourRate };
-  const p = await repo.createPanel({ ...values, ...pricing, organisationId: actor.organisationId, jobId: job.id, revisionNumber: null, archivedAt: null, rollup: null, submittedAt: null });
-  await recordActivity(actor, { entity: 'panel', entityId: p.id, jobId, panelId: p.id, action: 'created', summary: `Created panel ${p.name}` });
+  const pricing = {
+    markupPercent: values.markupPercent ?? shop.defaultMarkupPercent,
+    labourRate: values.labourRate ?? shop.defaultLabourRate,
+  };
+  const p = await repo.createPanel({
+    ...values,
+    ...pricing,
+    organisationId: actor.organisationId,
+    jobId: job.id,
+    revisionNumber: null,
+    archivedAt: null,
+    rollup: null,
+    submittedAt: null,
+  });
+  await recordActivity(actor, {
+    entity: 'panel',
+    entityId: p.id,
+    jobId,
+    panelId: p.id,
+    action: 'created',
+    summary: `Created panel ${p.name}`,
+  });
   return panelDetail(actor, p.id);
 }
 
@@ -153,14 +183,33 @@ async function changePanel<T>(
       throw new ConflictError(`Panel ${p.name} is in review: the engineer must return it before it can change`);
     }
     if (panelVersion !== null && panelVersion !== p.version) {
-      throw new ConflictError(`Someone else changed panel ${p.name} since you opened it: reload to see their change, then apply yours again`);
+      throw new ConflictError(
+        `Someone else changed panel ${p.name} since you opened it: reload to see their change, then apply yours again`,
+      );
     }
     if (p.status === 'signed_off') {
-      await recordActivity(actor, { entity: 'panel', entityId: p.id, jobId: p.jobId, panelId: p.id, action: 'reopened', summary: `Opened a new draft after R${p.revisionNumber} (${what})` }, t);
+      await recordActivity(
+        actor,
+        {
+          entity: 'panel',
+          entityId: p.id,
+          jobId: p.jobId,
+          panelId: p.id,
+          action: 'reopened',
+          summary: `Opened a new draft after R${p.revisionNumber} (${what})`,
+        },
+        t,
+      );
       p.status = 'draft';
     }
     const out = await fn(p, t);
-    await repo.bumpPanel(actor.organisationId, p.id, p.version, { status: p.status, ...(p.changed('rollup') ? { rollup: p.rollup } : {}) }, t);
+    await repo.bumpPanel(
+      actor.organisationId,
+      p.id,
+      p.version,
+      { status: p.status, ...(p.changed('rollup') ? { rollup: p.rollup } : {}) },
+      t,
+    );
     return out;
   });
 }
@@ -175,7 +224,18 @@ export async function openBomChange(actor: CurrentUser, p: Panel & { job: Job },
     throw new ConflictError(`Panel ${p.name} is in review: the engineer must return it before its bill of materials can change`);
   }
   if (p.status !== 'signed_off') return;
-  await recordActivity(actor, { entity: 'panel', entityId: p.id, jobId: p.jobId, panelId: p.id, action: 'reopened', summary: `Opened a new draft after R${p.revisionNumber} (${what})` }, t);
+  await recordActivity(
+    actor,
+    {
+      entity: 'panel',
+      entityId: p.id,
+      jobId: p.jobId,
+      panelId: p.id,
+      action: 'reopened',
+      summary: `Opened a new draft after R${p.revisionNumber} (${what})`,
+    },
+    t,
+  );
   const count = await repo.bumpPanel(actor.organisationId, p.id, p.version, { status: 'draft' }, t);
   if (count === 0) throw new ConflictError(`Someone else changed panel ${p.name}: reload and try again`);
   p.status = 'draft';
@@ -185,7 +245,11 @@ export async function openBomChange(actor: CurrentUser, p: Panel & { job: Job },
 /** Recomputes the panel roll-up from the motors' stored selections (the rules do not run again). */
 export async function refreshRollup(p: Panel & { job: Job }, t: Transaction) {
   const loads = (await repo.loadsOf(p.id, t)).filter((l) => l.selection);
-  const rollup = rollupOf(panelSupply(p), loads.map((l) => l.answers), loads.map((l) => l.selection!)); // filtered above
+  const rollup = rollupOf(
+    panelSupply(p),
+    loads.map((l) => l.answers),
+    loads.map((l) => l.selection!),
+  ); // filtered above
   p.rollup = rollup;
   p.changed('rollup', true);
 }
@@ -196,7 +260,10 @@ export async function refreshRollup(p: Panel & { job: Job }, t: Transaction) {
  */
 export async function reselectPanel(p: Panel & { job: Job }, t: Transaction) {
   const loads = await repo.loadsOf(p.id, t);
-  const out = await selectAll(panelSupply(p), loads.map((l) => l.answers as LoadInput));
+  const out = await selectAll(
+    panelSupply(p),
+    loads.map((l) => l.answers as LoadInput),
+  );
   if (out) {
     await repo.saveLoads(
       loads.map((l, i) => ({ ...l.get({ plain: true }), selection: out.results[i], version: l.version + 1 })),
@@ -204,18 +271,31 @@ export async function reselectPanel(p: Panel & { job: Job }, t: Transaction) {
       ['selection', 'version', 'updatedAt'],
     );
   }
-  p.rollup = out ? (out.panel) : null;
+  p.rollup = out ? out.panel : null;
   p.changed('rollup', true);
 }
 
 /** A change to the job's supply, ambient or code edition: every active panel's motors are selected again. */
 export async function reselectJobPanels(actor: CurrentUser, jobId: number, what: string, t: Transaction) {
   for (const p of await repo.jobPanelsForUpdate(actor.organisationId, jobId, t)) {
-    if (p.status === 'in_review') throw new ConflictError(`Panel ${p.name} is in review: the engineer must return it before the job's ${what} can change`);
+    if (p.status === 'in_review')
+      throw new ConflictError(`Panel ${p.name} is in review: the engineer must return it before the job's ${what} can change`);
     await reselectPanel(p, t);
     const reopened = p.status === 'signed_off';
     await repo.bumpPanel(actor.organisationId, p.id, p.version, { status: reopened ? 'draft' : p.status, rollup: p.rollup }, t);
-    if (reopened) await recordActivity(actor, { entity: 'panel', entityId: p.id, jobId, panelId: p.id, action: 'reopened', summary: `Opened a new draft after R${p.revisionNumber}: the job's ${what} changed` }, t);
+    if (reopened)
+      await recordActivity(
+        actor,
+        {
+          entity: 'panel',
+          entityId: p.id,
+          jobId,
+          panelId: p.id,
+          action: 'reopened',
+          summary: `Opened a new draft after R${p.revisionNumber}: the job's ${what} changed`,
+        },
+        t,
+      );
   }
 }
 
@@ -236,7 +316,19 @@ export async function updatePanel(actor: CurrentUser, panelId: number, changes: 
       p.terminationsListed75C = (changes.terminationsListed75C ?? null) as boolean | null;
       await reselectPanel(p, t);
     }
-    await recordActivity(actor, { entity: 'panel', entityId: p.id, jobId: p.jobId, panelId: p.id, action: 'updated', summary: `Changed panel ${p.name}: ${Object.keys(changes).join(', ')}`, diff: changes }, t);
+    await recordActivity(
+      actor,
+      {
+        entity: 'panel',
+        entityId: p.id,
+        jobId: p.jobId,
+        panelId: p.id,
+        action: 'updated',
+        summary: `Changed panel ${p.name}: ${Object.keys(changes).join(', ')}`,
+        diff: changes,
+      },
+      t,
+    );
   });
   return panelDetail(actor, panelId);
 }
@@ -263,10 +355,29 @@ export async function duplicatePanel(actor: CurrentUser, panelId: number) {
       t,
     );
     await repo.saveLoads(
-      loads.map((l) => ({ organisationId: actor.organisationId, panelId: p.id, tag: l.tag, position: l.position, answers: l.answers, selection: l.selection, overrides: l.overrides })),
+      loads.map((l) => ({
+        organisationId: actor.organisationId,
+        panelId: p.id,
+        tag: l.tag,
+        position: l.position,
+        answers: l.answers,
+        selection: l.selection,
+        overrides: l.overrides,
+      })),
       t,
     );
-    await recordActivity(actor, { entity: 'panel', entityId: p.id, jobId: src.jobId, panelId: p.id, action: 'duplicated', summary: `Duplicated panel ${src.name} with ${loads.length} motors` }, t);
+    await recordActivity(
+      actor,
+      {
+        entity: 'panel',
+        entityId: p.id,
+        jobId: src.jobId,
+        panelId: p.id,
+        action: 'duplicated',
+        summary: `Duplicated panel ${src.name} with ${loads.length} motors`,
+      },
+      t,
+    );
     return p.id;
   });
   return panelDetail(actor, id);
@@ -276,7 +387,14 @@ export async function archivePanel(actor: CurrentUser, panelId: number, archived
   const p = await requirePanel(actor, panelId);
   const count = await repo.bumpPanel(actor.organisationId, p.id, version, { archivedAt: archived ? new Date() : null });
   if (count === 0) throw new ConflictError(`Someone else changed panel ${p.name}: reload and try again`);
-  await recordActivity(actor, { entity: 'panel', entityId: p.id, jobId: p.jobId, panelId: p.id, action: archived ? 'archived' : 'restored', summary: `${archived ? 'Archived' : 'Restored'} panel ${p.name}` });
+  await recordActivity(actor, {
+    entity: 'panel',
+    entityId: p.id,
+    jobId: p.jobId,
+    panelId: p.id,
+    action: archived ? 'archived' : 'restored',
+    summary: `${archived ? 'Archived' : 'Restored'} panel ${p.name}`,
+  });
   return panelDetail(actor, panelId);
 }
 
@@ -284,11 +402,19 @@ export async function addComment(actor: CurrentUser, panelId: number, body: stri
   const p = await requirePanel(actor, panelId);
   if (loadId !== null) {
     const l = await repo.findLoad(actor.organisationId, loadId);
-    if (!l || l.panelId !== p.id) throw new ValidationError('That motor is not on this panel', [{ path: 'body.loadId', message: 'not on this panel' }]);
+    if (!l || l.panelId !== p.id)
+      throw new ValidationError('That motor is not on this panel', [{ path: 'body.loadId', message: 'not on this panel' }]);
   }
   const c = await repo.createComment({ organisationId: actor.organisationId, panelId: p.id, loadId, userId: actor.id, body });
   await repo.touchPanel(p.id);
-  await recordActivity(actor, { entity: 'comment', entityId: c.id, jobId: p.jobId, panelId: p.id, action: 'commented', summary: `Commented on ${p.name}: ${body.slice(0, 80)}` });
+  await recordActivity(actor, {
+    entity: 'comment',
+    entityId: c.id,
+    jobId: p.jobId,
+    panelId: p.id,
+    action: 'commented',
+    summary: `Commented on ${p.name}: ${body.slice(0, 80)}`,
+  });
   return { id: c.id, loadId, body, author: actor.name, at: c.createdAt.toISOString() } satisfies CommentView;
 }
 

@@ -60,7 +60,16 @@ export async function changeReportWorkbook(actor: CurrentUser, panelId: number, 
     ...r.bom.changed.map((e) => ['changed', e] as const),
   ];
   for (const [kind, e] of entries) {
-    const row = lines.addRow([kind, e.bucket, e.code ?? '', e.description, e.before?.quantity ?? 0, e.after?.quantity ?? 0, e.before?.extendedCost ?? 0, e.after?.extendedCost ?? 0]);
+    const row = lines.addRow([
+      kind,
+      e.bucket,
+      e.code ?? '',
+      e.description,
+      e.before?.quantity ?? 0,
+      e.after?.quantity ?? 0,
+      e.before?.extendedCost ?? 0,
+      e.after?.extendedCost ?? 0,
+    ]);
     row.getCell(9).value = { formula: `H${row.number}-G${row.number}`, result: e.costDelta };
     row.getCell(10).value = e.labourHoursDelta;
     for (const c of [7, 8, 9]) row.getCell(c).numFmt = MONEY;
@@ -75,7 +84,12 @@ export async function changeReportWorkbook(actor: CurrentUser, panelId: number, 
   }
 
   const dec = wb.addWorksheet('Decisions', { views: [{ state: 'frozen', ySplit: 1 }] });
-  dec.columns = [{ header: 'Motor', width: 12 }, { header: 'Decision', width: 30 }, { header: `R${from}`, width: 24 }, { header: `R${to}`, width: 24 }];
+  dec.columns = [
+    { header: 'Motor', width: 12 },
+    { header: 'Decision', width: 30 },
+    { header: `R${from}`, width: 24 },
+    { header: `R${to}`, width: 24 },
+  ];
   dec.getRow(1).font = { bold: true };
   for (const m of r.motors.decisions) for (const d of m.differences) dec.addRow([m.tag, d.label, d.from, d.to]);
 

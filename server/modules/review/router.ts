@@ -39,7 +39,8 @@ export const reviewRoutes = [
     params: PanelId,
     body: ReviewActionSchema,
     status: 200,
-    handler: ({ user, params, body }) => review.approvePanel(user, params.panelId, body.version, body.comment, { acknowledgeSccr: body.acknowledgeSccr }),
+    handler: ({ user, params, body }) =>
+      review.approvePanel(user, params.panelId, body.version, body.comment, { acknowledgeSccr: body.acknowledgeSccr }),
   }),
   defineRoute({
     method: 'get',

@@ -26,14 +26,32 @@ export async function submitForReview(actor: CurrentUser, panelId: number, versi
   const result = await db().transaction(async (t) => {
     const p = await requirePanel(actor, panelId, t, true);
     if (p.version !== version) throw new ConflictError(`Someone else changed panel ${p.name} since you opened it: reload and try again`);
-    if (!['draft', 'returned'].includes(p.status)) throw new ConflictError(`Panel ${p.name} is ${p.status.replace('_', ' ')}: only a draft or returned panel can be submitted`);
+    if (!['draft', 'returned'].includes(p.status))
+      throw new ConflictError(`Panel ${p.name} is ${p.status.replace('_', ' ')}: only a draft or returned panel can be submitted`);
     const loads = await repo.loadsOf(p.id, t);
-    if (loads.length === 0) throw new ValidationError('Add at least one motor before submitting', [{ path: 'loads', message: 'no motors' }]);
+    if (loads.length === 0)
+      throw new ValidationError('Add at least one motor before submitting', [{ path: 'loads', message: 'no motors' }]);
     const broken = loads.map(loadView).filter((l) => !l.selection || l.selection.errors.length > 0);
-    if (broken.length) throw new ValidationError(`Fix the motors with errors first: ${broken.map((l) => l.tag).join(', ')}`, broken.map((l) => ({ path: `loads.${l.tag}`, message: l.selection?.errors.join('; ') ?? 'no selection' })));
+    if (broken.length)
+      throw new ValidationError(
+        `Fix the motors with errors first: ${broken.map((l) => l.tag).join(', ')}`,
+        broken.map((l) => ({ path: `loads.${l.tag}`, message: l.selection?.errors.join('; ') ?? 'no selection' })),
+      );
     await repo.bumpPanel(actor.organisationId, p.id, p.version, { status: 'in_review', submittedAt: new Date() }, t);
-    if (comment) await repo.createComment({ organisationId: actor.organisationId, panelId: p.id, loadId: null, userId: actor.id, body: comment }, t);
-    await recordActivity(actor, { entity: 'panel', entityId: p.id, jobId: p.jobId, panelId: p.id, action: 'submitted', summary: `Submitted ${p.name} for sign-off (${loads.length} motors)` }, t);
+    if (comment)
+      await repo.createComment({ organisationId: actor.organisationId, panelId: p.id, loadId: null, userId: actor.id, body: comment }, t);
+    await recordActivity(
+      actor,
+      {
+        entity: 'panel',
+        entityId: p.id,
+        jobId: p.jobId,
+        panelId: p.id,
+        action: 'submitted',
+        summary: `Submitted ${p.name} for sign-off (${loads.length} motors)`,
+      },
+      t,
+    );
     return p;
   });
   const engineers = await repo.usersWithRole(actor.organisationId, 'engineer');
@@ -46,23 +64,53 @@ export async function submitForReview(actor: CurrentUser, panelId: number, versi
 }
 
 export async function returnPanel(actor: CurrentUser, panelId: number, version: number, comment: string) {
-  if (!comment) throw new ValidationError('Say what must change when returning a panel', [{ path: 'body.comment', message: 'required when returning' }]);
+  if (!comment)
+    throw new ValidationError('Say what must change when returning a panel', [
+      { path: 'body.comment', message: 'required when returning' },
+    ]);
   const p = await db().transaction(async (t) => {
     const p = await requirePanel(actor, panelId, t, true);
     if (p.version !== version) throw new ConflictError(`Someone else changed panel ${p.name} since you opened it: reload and try again`);
     if (p.status !== 'in_review') throw new ConflictError(`Panel ${p.name} is not in review`);
     await repo.bumpPanel(actor.organisationId, p.id, p.version, { status: 'returned' }, t);
-    await repo.createComment({ organisationId: actor.organisationId, panelId: p.id, loadId: null, userId: actor.id, body: `Returned: ${comment}` }, t);
-    await recordActivity(actor, { entity: 'panel', entityId: p.id, jobId: p.jobId, panelId: p.id, action: 'returned', summary: `Returned ${p.name}: ${comment.slice(0, 120)}` }, t);
+    await repo.createComment(
+      { organisationId: actor.organisationId, panelId: p.id, loadId: null, userId: actor.id, body: `Returned: ${comment}` },
+      t,
+    );
+    await recordActivity(
+      actor,
+      {
+        entity: 'panel',
+        entityId: p.id,
+        jobId: p.jobId,
+        panelId: p.id,
+        action: 'returned',
+        summary: `Returned ${p.name}: ${comment.slice(0, 120)}`,
+      },
+      t,
+    );
     return p;
   });
   const designers = await repo.usersWithRole(actor.organisationId, 'designer');
-  await sendMail(designers.map((d) => d.email), `Returned: ${p.job.number} ${p.name}`, `${actor.name} returned panel ${p.name}.\n\n${comment}\n\n${link(p.id, p.jobId)}\n`);
+  await sendMail(
+    designers.map((d) => d.email),
+    `Returned: ${p.job.number} ${p.name}`,
+    `${actor.name} returned panel ${p.name}.\n\n${comment}\n\n${link(p.id, p.jobId)}\n`,
+  );
   return panelDetail(actor, panelId);
 }
 
 /** What someone may do to a panel without becoming one of its authors: comment, review, archive, rebuild the bill of materials from the selections (the sign-off rebuilds it too). */
-const NOT_AUTHORING = new Set(['commented', 'returned', 'signed-off', 'self-sign-off', 'sign-off-refused', 'archived', 'restored', 'rebuilt']);
+const NOT_AUTHORING = new Set([
+  'commented',
+  'returned',
+  'signed-off',
+  'self-sign-off',
+  'sign-off-refused',
+  'archived',
+  'restored',
+  'rebuilt',
+]);
 /** Panel settings that price the work and do not change the design. */
 const PRICING_ONLY = new Set(['markupPercent', 'labourRate']);
 /** The job's answers the selections rest on; its name, customer or notes do not make a designer. */
@@ -135,61 +183,116 @@ export async function approvePanel(
   opts: { failAfterFreeze?: boolean; acknowledgeSccr?: boolean } = {},
 ) {
   const shop = await shopSettingsOf(actor.organisationId);
-  const p = await db().transaction(async (t) => {
-    const p = await requirePanel(actor, panelId, t, true);
-    if (p.version !== version) throw new ConflictError(`Someone else changed panel ${p.name} since you opened it: reload and try again`);
-    if (p.status !== 'in_review') throw new ConflictError(`Panel ${p.name} is not in review`);
-    const own = eligibility(p, await authoredBy(actor, p, t), shop.allowSelfSignOff);
-    if (own.reason) throw new SelfSignOffRefused(own.reason, p);
-    const lines = await regenerateBom(actor.organisationId, p, t);
-    const loads = (await repo.loadsOf(p.id, t)).map(loadView);
-    // NEC 409.22(A): a panel is not installed where the available fault current exceeds its SCCR. A
-    // sign-off below it (or with a rating the worksheet could not finish) needs the engineer's explicit
-    // acknowledgement and a written reason (a current-limiting feeder with let-through data the
-    // catalogue does not hold, a corrected fault study …); both are frozen with the revision.
-    const effective = loads.flatMap((l) => (l.effective && l.effective.errors.length === 0 ? [l.effective] : []));
-    const sccr = await panelSccrFor(actor.organisationId, lines, effective, p.job.availableFaultKa ?? null);
-    const short = sccr.verdict === 'below-available' || sccr.verdict === 'incomplete';
-    const finding = short
-      ? sccr.verdict === 'below-available'
-        ? `Panel SCCR ${sccr.panelSccrKa} kA is below the ${p.job.availableFaultKa} kA available at the site (NEC 409.22)`
-        : 'The panel SCCR could not be determined from the bill of materials (UL 508A SB4)'
-      : null;
-    if (finding && (!opts.acknowledgeSccr || comment.trim().length < MIN_JUSTIFICATION)) {
-      throw new ValidationError(`${finding}: acknowledge it and write why in the sign-off comment (at least ${MIN_JUSTIFICATION} characters) to sign off`, [
-        ...(opts.acknowledgeSccr ? [] : [{ path: 'body.acknowledgeSccr', message: 'acknowledge the short-circuit rating' }]),
-        ...(comment.trim().length < MIN_JUSTIFICATION ? [{ path: 'body.comment', message: `say why (at least ${MIN_JUSTIFICATION} characters)` }] : []),
-      ]);
-    }
-    const number = p.revisionNumber === null ? 0 : p.revisionNumber + 1;
-    const snapshot = {
-      panel: { name: p.name, mounting: p.mounting, markupPercent: p.markupPercent, labourRate: p.labourRate },
-      job: { number: p.job.number, supplyVolts: p.job.supplyVolts, supplyPhases: p.job.supplyPhases, supplyHz: p.job.supplyHz, availableFaultKa: p.job.availableFaultKa, ambientC: p.job.ambientC, codeEdition: p.job.codeEdition },
-      rollup: p.rollup,
-      loads,
-      bom: lines,
-      totals: computeTotals(lines, p.markupPercent, p.labourRate),
-      comment,
-      sccr: { panelSccrKa: sccr.panelSccrKa, availableFaultKa: p.job.availableFaultKa ?? null, verdict: sccr.verdict, acknowledged: finding ? { finding, by: actor.name, reason: comment } : null },
-    };
-    await repo.createRevision({ organisationId: actor.organisationId, panelId: p.id, number, snapshot, approvedBy: actor.id, approvedAt: new Date() }, t);
-    if (opts.failAfterFreeze) throw new Error('failure injected after the revision was written');
-    await repo.bumpPanel(actor.organisationId, p.id, p.version, { status: 'signed_off', revisionNumber: number, bomGeneratedAt: new Date() }, t);
-    await recordActivity(actor, { entity: 'panel', entityId: p.id, jobId: p.jobId, panelId: p.id, action: 'signed-off', summary: `Signed off ${p.name} as R${number}${finding ? ` acknowledging: ${finding}` : ''}${comment ? `: ${comment.slice(0, 100)}` : ''}` }, t);
-    if (own.selfReview) {
-      await recordActivity(
-        actor,
-        { entity: 'panel', entityId: p.id, jobId: p.jobId, panelId: p.id, action: 'self-sign-off', summary: `Signed off R${number} of ${p.name} after submitting or changing it (self sign-off allowed by the shop settings)`, diff: { own: own.actions } },
+  const p = await db()
+    .transaction(async (t) => {
+      const p = await requirePanel(actor, panelId, t, true);
+      if (p.version !== version) throw new ConflictError(`Someone else changed panel ${p.name} since you opened it: reload and try again`);
+      if (p.status !== 'in_review') throw new ConflictError(`Panel ${p.name} is not in review`);
+      const own = eligibility(p, await authoredBy(actor, p, t), shop.allowSelfSignOff);
+      if (own.reason) throw new SelfSignOffRefused(own.reason, p);
+      const lines = await regenerateBom(actor.organisationId, p, t);
+      const loads = (await repo.loadsOf(p.id, t)).map(loadView);
+      // NEC 409.22(A): a panel is not installed where the available fault current exceeds its SCCR. A
+      // sign-off below it (or with a rating the worksheet could not finish) needs the engineer's explicit
+      // acknowledgement and a written reason (a current-limiting feeder with let-through data the
+      // catalogue does not hold, a corrected fault study …); both are frozen with the revision.
+      const effective = loads.flatMap((l) => (l.effective && l.effective.errors.length === 0 ? [l.effective] : []));
+      const sccr = await panelSccrFor(actor.organisationId, lines, effective, p.job.availableFaultKa ?? null);
+      const short = sccr.verdict === 'below-available' || sccr.verdict === 'incomplete';
+      const finding = short
+        ? sccr.verdict === 'below-available'
+          ? `Panel SCCR ${sccr.panelSccrKa} kA is below the ${p.job.availableFaultKa} kA available at the site (NEC 409.22)`
+          : 'The panel SCCR could not be determined from the bill of materials (UL 508A SB4)'
+        : null;
+      if (finding && (!opts.acknowledgeSccr || comment.trim().length < MIN_JUSTIFICATION)) {
+        throw new ValidationError(
+          `${finding}: acknowledge it and write why in the sign-off comment (at least ${MIN_JUSTIFICATION} characters) to sign off`,
+          [
+            ...(opts.acknowledgeSccr ? [] : [{ path: 'body.acknowledgeSccr', message: 'acknowledge the short-circuit rating' }]),
+            ...(comment.trim().length < MIN_JUSTIFICATION
+              ? [{ path: 'body.comment', message: `say why (at least ${MIN_JUSTIFICATION} characters)` }]
+              : []),
+          ],
+        );
+      }
+      const number = p.revisionNumber === null ? 0 : p.revisionNumber + 1;
+      const snapshot = {
+        panel: { name: p.name, mounting: p.mounting, markupPercent: p.markupPercent, labourRate: p.labourRate },
+        job: {
+          number: p.job.number,
+          supplyVolts: p.job.supplyVolts,
+          supplyPhases: p.job.supplyPhases,
+          supplyHz: p.job.supplyHz,
+          availableFaultKa: p.job.availableFaultKa,
+          ambientC: p.job.ambientC,
+          codeEdition: p.job.codeEdition,
+        },
+        rollup: p.rollup,
+        loads,
+        bom: lines,
+        totals: computeTotals(lines, p.markupPercent, p.labourRate),
+        comment,
+        sccr: {
+          panelSccrKa: sccr.panelSccrKa,
+          availableFaultKa: p.job.availableFaultKa ?? null,
+          verdict: sccr.verdict,
+          acknowledged: finding ? { finding, by: actor.name, reason: comment } : null,
+        },
+      };
+      await repo.createRevision(
+        { organisationId: actor.organisationId, panelId: p.id, number, snapshot, approvedBy: actor.id, approvedAt: new Date() },
         t,
       );
-    }
-    return Object.assign(p, { revisionNumber: number });
-  }).catch(async (e: unknown) => {
-    if (e instanceof SelfSignOffRefused) {
-      await recordActivity(actor, { entity: 'panel', entityId: e.panel.id, jobId: e.panel.jobId, panelId: e.panel.id, action: 'sign-off-refused', summary: `Sign-off of ${e.panel.name} refused: ${actor.name} submitted or changed it ${sinceText(e.panel)}` });
-    }
-    throw e;
-  });
+      if (opts.failAfterFreeze) throw new Error('failure injected after the revision was written');
+      await repo.bumpPanel(
+        actor.organisationId,
+        p.id,
+        p.version,
+        { status: 'signed_off', revisionNumber: number, bomGeneratedAt: new Date() },
+        t,
+      );
+      await recordActivity(
+        actor,
+        {
+          entity: 'panel',
+          entityId: p.id,
+          jobId: p.jobId,
+          panelId: p.id,
+          action: 'signed-off',
+          summary: `Signed off ${p.name} as R${number}${finding ? ` acknowledging: ${finding}` : ''}${comment ? `: ${comment.slice(0, 100)}` : ''}`,
+        },
+        t,
+      );
+      if (own.selfReview) {
+        await recordActivity(
+          actor,
+          {
+            entity: 'panel',
+            entityId: p.id,
+            jobId: p.jobId,
+            panelId: p.id,
+            action: 'self-sign-off',
+            summary: `Signed off R${number} of ${p.name} after submitting or changing it (self sign-off allowed by the shop settings)`,
+            diff: { own: own.actions },
+          },
+          t,
+        );
+      }
+      return Object.assign(p, { revisionNumber: number });
+    })
+    .catch(async (e: unknown) => {
+      if (e instanceof SelfSignOffRefused) {
+        await recordActivity(actor, {
+          entity: 'panel',
+          entityId: e.panel.id,
+          jobId: e.panel.jobId,
+          panelId: e.panel.id,
+          action: 'sign-off-refused',
+          summary: `Sign-off of ${e.panel.name} refused: ${actor.name} submitted or changed it ${sinceText(e.panel)}`,
+        });
+      }
+      throw e;
+    });
   const designers = await repo.usersWithRole(actor.organisationId, 'designer');
   const estimators = await repo.usersWithRole(actor.organisationId, 'estimator');
   await sendMail(
@@ -233,7 +336,12 @@ export async function compareRevisions(actor: CurrentUser, panelId: number, a: n
     from: a,
     to: b,
     bom: diffBoms(la, lb),
-    totals: { from: ta, to: tb, sellDelta: Math.round((tb.sell - ta.sell) * 100) / 100, materialDelta: Math.round((tb.materialCost - ta.materialCost) * 100) / 100 },
+    totals: {
+      from: ta,
+      to: tb,
+      sellDelta: Math.round((tb.sell - ta.sell) * 100) / 100,
+      materialDelta: Math.round((tb.materialCost - ta.materialCost) * 100) / 100,
+    },
     motors: {
       added: [...loadsB.keys()].filter((k) => !loadsA.has(k)),
       removed: [...loadsA.keys()].filter((k) => !loadsB.has(k)),

@@ -7,7 +7,9 @@ import * as service from './service';
 
 const ALL = ['admin', 'designer', 'estimator', 'engineer'] as const;
 
-const multerLogo = multer({ storage: multer.memoryStorage(), limits: { fileSize: LOGO_MAX_BYTES, files: 1, fields: 2, parts: 3 } }).single('file');
+const multerLogo = multer({ storage: multer.memoryStorage(), limits: { fileSize: LOGO_MAX_BYTES, files: 1, fields: 2, parts: 3 } }).single(
+  'file',
+);
 
 /** The logo upload, with the size limit said in words. */
 const uploadLogo: RequestHandler = (req, res, next) =>
@@ -19,7 +21,13 @@ const uploadLogo: RequestHandler = (req, res, next) =>
   });
 
 export const settingsRoutes = [
-  defineRoute({ method: 'get', path: '/api/settings', access: ALL, summary: "The shop's settings: name, address, logo, pricing defaults, drawing numbers, sign-off rule", handler: ({ user }) => service.getSettings(user) }),
+  defineRoute({
+    method: 'get',
+    path: '/api/settings',
+    access: ALL,
+    summary: "The shop's settings: name, address, logo, pricing defaults, drawing numbers, sign-off rule",
+    handler: ({ user }) => service.getSettings(user),
+  }),
   defineRoute({
     method: 'put',
     path: '/api/settings',

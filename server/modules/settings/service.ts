@@ -47,7 +47,13 @@ export async function updateSettings(actor: CurrentUser, input: ShopSettingsUpda
   if (count === 0) throw new ConflictError(STALE);
   const changed = (Object.keys(values) as Array<keyof typeof values>).filter((k) => before[k] !== values[k]);
   const diff = Object.fromEntries(changed.map((k) => [k, { from: before[k], to: values[k] }]));
-  await recordActivity(actor, { entity: 'organisation', entityId: actor.organisationId, action: 'settings', summary: `Changed the shop settings: ${changed.join(', ') || 'nothing'}`, diff });
+  await recordActivity(actor, {
+    entity: 'organisation',
+    entityId: actor.organisationId,
+    action: 'settings',
+    summary: `Changed the shop settings: ${changed.join(', ') || 'nothing'}`,
+    diff,
+  });
   return shopSettingsOf(actor.organisationId);
 }
 
@@ -60,15 +66,26 @@ export function imageTypeOf(data: Buffer): 'image/png' | 'image/jpeg' | null {
 
 export async function putLogo(actor: CurrentUser, version: number, file: { buffer: Buffer; originalname: string } | undefined) {
   if (!file) throw new ValidationError('Choose a PNG or JPEG file for the logo', [{ path: 'file', message: 'no file' }]);
-  if (file.buffer.length > LOGO_MAX_BYTES) throw new ValidationError(`The logo is larger than ${LOGO_MAX_BYTES / 1024} KB: use a smaller image`, [{ path: 'file', message: 'too large' }]);
+  if (file.buffer.length > LOGO_MAX_BYTES)
+    throw new ValidationError(`The logo is larger than ${LOGO_MAX_BYTES / 1024} KB: use a smaller image`, [
+      { path: 'file', message: 'too large' },
+    ]);
   const type = imageTypeOf(file.buffer);
-  if (!type) throw new ValidationError(`${file.originalname || 'The file'} is not a PNG or JPEG image`, [{ path: 'file', message: 'PNG or JPEG only' }]);
+  if (!type)
+    throw new ValidationError(`${file.originalname || 'The file'} is not a PNG or JPEG image`, [
+      { path: 'file', message: 'PNG or JPEG only' },
+    ]);
   const o = await requireOrganisation(actor.organisationId);
   if (o.version !== version) throw new ConflictError(STALE);
   await fileStore().put(o.id, LOGO_KEY, type, file.buffer);
   const count = await repo.updateSettings(o.id, version, { logoKey: LOGO_KEY });
   if (count === 0) throw new ConflictError(STALE);
-  await recordActivity(actor, { entity: 'organisation', entityId: o.id, action: 'logo', summary: `Uploaded the shop logo (${type}, ${Math.ceil(file.buffer.length / 1024)} KB)` });
+  await recordActivity(actor, {
+    entity: 'organisation',
+    entityId: o.id,
+    action: 'logo',
+    summary: `Uploaded the shop logo (${type}, ${Math.ceil(file.buffer.length / 1024)} KB)`,
+  });
   return shopSettingsOf(o.id);
 }
 

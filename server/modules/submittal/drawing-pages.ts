@@ -8,23 +8,43 @@ import { pdfSafe } from './pdf-writer';
 export type { SubmittalDrawings };
 
 const MARGIN = 24;
-const safe = (s: string) => pdfSafe(s.replace(/ · /g, ', ').replace(/→/g, '->').replace(/↔/g, '<->').replace(/φ/g, 'ph').replace(/[✖⚠]/g, '!'));
+const safe = (s: string) =>
+  pdfSafe(s.replace(/ · /g, ', ').replace(/→/g, '->').replace(/↔/g, '<->').replace(/φ/g, 'ph').replace(/[✖⚠]/g, '!'));
 
 /** Adds the drawing pages to an open document; the caller's page style continues after them. */
-export function writeDrawingPages(doc: InstanceType<typeof PDFDocument>, d: SubmittalDrawings, fonts: { regular: string; bold: string }): void {
+export function writeDrawingPages(
+  doc: InstanceType<typeof PDFDocument>,
+  d: SubmittalDrawings,
+  fonts: { regular: string; bold: string },
+): void {
   const fontCallback = (_family: string, bold: boolean) => (bold ? fonts.bold : fonts.regular);
   const svgPage = (svg: string) => {
     doc.addPage({ size: 'LETTER', layout: 'landscape', margin: MARGIN });
     const w = doc.page.width - 2 * MARGIN;
     const h = doc.page.height - 2 * MARGIN;
-    SVGtoPDF(doc as never, safe(svg), MARGIN, MARGIN, { width: w, height: h, preserveAspectRatio: 'xMidYMid meet', fontCallback, warningCallback: () => undefined });
+    SVGtoPDF(doc as never, safe(svg), MARGIN, MARGIN, {
+      width: w,
+      height: h,
+      preserveAspectRatio: 'xMidYMid meet',
+      fontCallback,
+      warningCallback: () => undefined,
+    });
   };
   for (const s of d.sheets) svgPage(s);
 
   // Terminal plan: a table drawn with pdfkit
   doc.addPage({ size: 'LETTER', layout: 'landscape', margin: MARGIN });
   doc.font(fonts.bold).fontSize(14).fillColor('#1f2731').text(`Terminal plan - ${d.drawingNumber}`, MARGIN, MARGIN);
-  doc.font(fonts.regular).fontSize(8).fillColor('#55606c').text(safe(`${d.terminals.length} terminals: the ${d.bomTerminalBlocks} terminal blocks of the bill of materials. ${d.colourPractice}`), MARGIN, doc.y + 2, { width: doc.page.width - 2 * MARGIN });
+  doc
+    .font(fonts.regular)
+    .fontSize(8)
+    .fillColor('#55606c')
+    .text(
+      safe(`${d.terminals.length} terminals: the ${d.bomTerminalBlocks} terminal blocks of the bill of materials. ${d.colourPractice}`),
+      MARGIN,
+      doc.y + 2,
+      { width: doc.page.width - 2 * MARGIN },
+    );
   const cols: Array<[string, number, (t: TerminalRow) => string]> = [
     ['Terminal', 0.08, (t) => t.ref],
     ['Wire', 0.06, (t) => t.wire],
@@ -43,7 +63,12 @@ export function writeDrawingPages(doc: InstanceType<typeof PDFDocument>, d: Subm
       doc.text(h, x, y, { width: f * width - 4, lineBreak: false });
       x += f * width;
     }
-    doc.moveTo(MARGIN, y + 11).lineTo(MARGIN + width, y + 11).strokeColor('#a8652f').lineWidth(0.6).stroke();
+    doc
+      .moveTo(MARGIN, y + 11)
+      .lineTo(MARGIN + width, y + 11)
+      .strokeColor('#a8652f')
+      .lineWidth(0.6)
+      .stroke();
     doc.y = y + 14;
   };
   head();
@@ -68,8 +93,22 @@ export function writeDrawingPages(doc: InstanceType<typeof PDFDocument>, d: Subm
   if (d.nameplateSvg) {
     doc.addPage({ size: 'LETTER', layout: 'landscape', margin: MARGIN });
     doc.font(fonts.bold).fontSize(14).fillColor('#1f2731').text(`Panel marking - ${d.drawingNumber}`, MARGIN, MARGIN);
-    doc.font(fonts.regular).fontSize(8).fillColor('#55606c').text('Label to print (NEC 2023 409.110, UL 508A), from the panel checks. A qualified person verifies the values before the label is fixed.', MARGIN, doc.y + 2);
-    SVGtoPDF(doc as never, safe(d.nameplateSvg), MARGIN, doc.y + 12, { width: 480, height: 400, preserveAspectRatio: 'xMinYMin meet', fontCallback, warningCallback: () => undefined });
+    doc
+      .font(fonts.regular)
+      .fontSize(8)
+      .fillColor('#55606c')
+      .text(
+        'Label to print (NEC 2023 409.110, UL 508A), from the panel checks. A qualified person verifies the values before the label is fixed.',
+        MARGIN,
+        doc.y + 2,
+      );
+    SVGtoPDF(doc as never, safe(d.nameplateSvg), MARGIN, doc.y + 12, {
+      width: 480,
+      height: 400,
+      preserveAspectRatio: 'xMinYMin meet',
+      fontCallback,
+      warningCallback: () => undefined,
+    });
   }
   doc.addPage();
 }

@@ -19,15 +19,20 @@ export interface SubmittalData {
     codeEdition: string;
   };
   /** `revision` as the reader sees it ("R1", "Draft after R0"); `revisionCode` for the drawing number ("R1", or "D" for a draft) */
-  panel: { name: string; revision: string; revisionCode?: string; /** ISO date */ date: string; enclosureType: string };
+  panel: { name: string; revision: string; revisionCode?: string /** ISO date */; date: string; enclosureType: string };
   /** the shop that issues the submittal (shop settings) */
-  shop: { name: string; address?: string; /** PNG or JPEG */ logo?: Buffer | null; drawingNumberScheme: string };
+  shop: { name: string; address?: string /** PNG or JPEG */; logo?: Buffer | null; drawingNumberScheme: string };
   selections: LoadSelection[];
   rollup: PanelRollup;
   nameplate: NameplateResult;
   sccr: SccrResult;
   /** the signed-off revision this submittal shows, with the engineer's acknowledgement of a rating below the site's fault current */
-  signOff?: { revision: string; date: string; /** the engineer who signed */ by?: string | null; acknowledged: { finding: string; by: string; reason: string } | null };
+  signOff?: {
+    revision: string;
+    date: string /** the engineer who signed */;
+    by?: string | null;
+    acknowledged: { finding: string; by: string; reason: string } | null;
+  };
   heat: HeatResult;
   controlPower: ControlPowerResult;
   /** each control conductor against its protecting device (430.72(B)) */

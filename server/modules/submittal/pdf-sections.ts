@@ -47,7 +47,14 @@ export function coverPage(w: Writer, data: SubmittalData): void {
     ['Available fault current', data.job.availableFaultKa === null ? 'not given' : `${data.job.availableFaultKa} kA`],
     ['Ambient', `${data.job.ambientC} °C`],
     ['Code edition', data.job.codeEdition],
-    ...(data.signOff ? [['Signed off', `${data.signOff.revision} on ${data.signOff.date}${data.signOff.by ? ` by ${data.signOff.by}` : ''}`] as [string, string]] : []),
+    ...(data.signOff
+      ? [
+          ['Signed off', `${data.signOff.revision} on ${data.signOff.date}${data.signOff.by ? ` by ${data.signOff.by}` : ''}`] as [
+            string,
+            string,
+          ],
+        ]
+      : []),
   ]);
   w.sub('Cautions');
   for (const c of SUBMITTAL_CAUTIONS) w.para(`- ${c}`);
@@ -104,13 +111,16 @@ export function protectionSummary(w: Writer, data: SubmittalData): void {
           `${s.conductor.size} ${s.conductor.material}, ${s.conductor.ampacity} A (min ${fmt(s.conductor.minAmpacity)} A)${termination60Text(s) ? `; ${termination60Text(s)}` : ''}${motorLeadText(s) ? `; ${motorLeadText(s)}` : ''}${voltageDropText(s) ? `; ${voltageDropText(s)}` : ''}`,
           s.conductor.motorLeads ? `line side: ${s.conductor.basis}; ${s.conductor.motorLeads.basis}` : s.conductor.basis,
         ],
-        ...(s.unbalance
-          ? [['Voltage unbalance', unbalanceText(s.unbalance), s.unbalance.basis]]
-          : []),
-        ['Disconnect', `>= ${fmt(s.disconnect.minAmps)} A${s.disconnect.minHp !== null ? `, >= ${s.disconnect.minHp} hp` : ''}`, s.disconnect.basis],
+        ...(s.unbalance ? [['Voltage unbalance', unbalanceText(s.unbalance), s.unbalance.basis]] : []),
+        [
+          'Disconnect',
+          `>= ${fmt(s.disconnect.minAmps)} A${s.disconnect.minHp !== null ? `, >= ${s.disconnect.minHp} hp` : ''}`,
+          s.disconnect.basis,
+        ],
       ],
     );
-    for (const a of s.assumed) w.para(`Assumed input: ${fieldLabel(a.field) ?? a.field} = ${answerValueLabel(a.field, a.assumed)} (${a.note})`, 8);
+    for (const a of s.assumed)
+      w.para(`Assumed input: ${fieldLabel(a.field) ?? a.field} = ${answerValueLabel(a.field, a.assumed)} (${a.note})`, 8);
     for (const c of s.cautions) w.para(`Caution: ${c}`, 8);
   }
 }
@@ -125,7 +135,11 @@ export function oneLineDiagrams(w: Writer, data: SubmittalData): void {
 /** Nameplate and feeder. */
 export function nameplateAndFeeder(w: Writer, data: SubmittalData): void {
   w.heading('Panel nameplate and feeder');
-  w.table(['Marking', 'Value', 'Basis'], [0.25, 0.35, 0.4], data.nameplate.lines.map((l) => [l.label, l.value, l.basis]));
+  w.table(
+    ['Marking', 'Value', 'Basis'],
+    [0.25, 0.35, 0.4],
+    data.nameplate.lines.map((l) => [l.label, l.value, l.basis]),
+  );
   const f = data.nameplate.feeder;
   w.table(
     ['Item', 'Value', 'Basis'],
@@ -150,9 +164,27 @@ export function otherVoltages(w: Writer, data: SubmittalData): void {
         ['Item', 'Value', 'Basis'],
         [0.25, 0.35, 0.4],
         [
-          [src.tag, src.kind === 'transformer' ? `${src.kva} kVA ${src.primaryVolts}-${src.secondaryLabel} (load ${fmt(src.loadKva, 2)} kVA)` : `${src.secondaryLabel}, >= ${fmt(src.secondaryAmps, 2)} A`, src.basis],
-          ['Primary protection', `${src.primaryProtection.ratingAmps} A (limit ${fmt(src.primaryProtection.maxAmps, 2)} A)`, src.primaryProtection.basis],
-          ...(src.secondaryProtection ? [['Secondary protection', `${src.secondaryProtection.ratingAmps} A (limit ${fmt(src.secondaryProtection.maxAmps, 2)} A)`, src.secondaryProtection.basis]] : []),
+          [
+            src.tag,
+            src.kind === 'transformer'
+              ? `${src.kva} kVA ${src.primaryVolts}-${src.secondaryLabel} (load ${fmt(src.loadKva, 2)} kVA)`
+              : `${src.secondaryLabel}, >= ${fmt(src.secondaryAmps, 2)} A`,
+            src.basis,
+          ],
+          [
+            'Primary protection',
+            `${src.primaryProtection.ratingAmps} A (limit ${fmt(src.primaryProtection.maxAmps, 2)} A)`,
+            src.primaryProtection.basis,
+          ],
+          ...(src.secondaryProtection
+            ? [
+                [
+                  'Secondary protection',
+                  `${src.secondaryProtection.ratingAmps} A (limit ${fmt(src.secondaryProtection.maxAmps, 2)} A)`,
+                  src.secondaryProtection.basis,
+                ],
+              ]
+            : []),
         ],
       );
     }
@@ -192,7 +224,12 @@ export function sccrWorksheet(w: Writer, data: SubmittalData): void {
     w.table(
       ['Change', 'Resulting SCCR kA', 'Resolves', 'Cost difference'],
       [0.55, 0.15, 0.1, 0.2],
-      data.sccr.waysOut.map((o) => [o.description, fmt(o.resultingSccrKa, 2), o.resolves ? 'yes' : 'no', o.costDifference === null ? '-' : fmt(o.costDifference, 2)]),
+      data.sccr.waysOut.map((o) => [
+        o.description,
+        fmt(o.resultingSccrKa, 2),
+        o.resolves ? 'yes' : 'no',
+        o.costDifference === null ? '-' : fmt(o.costDifference, 2),
+      ]),
     );
   }
 }
@@ -219,9 +256,17 @@ export function heatCalculation(w: Writer, data: SubmittalData): void {
   for (const b of h.byBucket) {
     w.ensure(16);
     const y = doc.y;
-    doc.font(regular).fontSize(8).fillColor(SLATE).text(pdfSafe(b.bucketTag), MARGIN, y + 2, { width: 90 });
+    doc
+      .font(regular)
+      .fontSize(8)
+      .fillColor(SLATE)
+      .text(pdfSafe(b.bucketTag), MARGIN, y + 2, { width: 90 });
     doc.rect(MARGIN + 95, y, Math.max(1, (b.watts / maxW) * (w.width - 170)), 10).fill(COPPER);
-    doc.font(regular).fontSize(8).fillColor(SLATE).text(`${fmt(b.watts)} W`, MARGIN + w.width - 70, y + 2, { width: 70, align: 'right' });
+    doc
+      .font(regular)
+      .fontSize(8)
+      .fillColor(SLATE)
+      .text(`${fmt(b.watts)} W`, MARGIN + w.width - 70, y + 2, { width: 70, align: 'right' });
     doc.x = MARGIN;
     doc.y = y + 14;
   }
@@ -234,7 +279,12 @@ export function heatCalculation(w: Writer, data: SubmittalData): void {
     ...(h.cooling
       ? ([
           ['Excess heat', `${fmt(h.cooling.excessW)} W (${h.cooling.basis})`],
-          ['Filter fan', h.cooling.fan ? `${fmt(h.cooling.fan.cfm)} cfm (${fmt(h.cooling.fan.m3h)} m³/h); ${h.cooling.fan.basis}` : 'a fan cannot cool below the ambient'],
+          [
+            'Filter fan',
+            h.cooling.fan
+              ? `${fmt(h.cooling.fan.cfm)} cfm (${fmt(h.cooling.fan.m3h)} m³/h); ${h.cooling.fan.basis}`
+              : 'a fan cannot cool below the ambient',
+          ],
           ['Air conditioner', `${fmt(h.cooling.airConditionerW)} W`],
         ] as Array<[string, string]>)
       : []),
@@ -251,8 +301,14 @@ export function controlPower(w: Writer, data: SubmittalData): void {
     ['Inrush VA', fmt(cp.inrushVa)],
     ['Selection VA = sqrt(sealed² + inrush²)', fmt(cp.selectionVa)],
     ['Transformer size', `${cp.sizeVa} VA (inrush capacity ${cp.inrushCapacityVa} VA at 40 % PF: ${cp.inrushOk ? 'OK' : 'NOT OK'})`],
-    ['Primary protection', `${cp.primary.ratingAmps} A (${fmt(cp.primary.currentA, 3)} A x ${cp.primary.maxPercent} % = ${fmt(cp.primary.maxAmps, 3)} A) - ${cp.primary.basis}`],
-    ['Secondary protection', `${cp.secondary.ratingAmps} A (${fmt(cp.secondary.currentA, 3)} A x ${cp.secondary.maxPercent} % = ${fmt(cp.secondary.maxAmps, 3)} A) - ${cp.secondary.basis}`],
+    [
+      'Primary protection',
+      `${cp.primary.ratingAmps} A (${fmt(cp.primary.currentA, 3)} A x ${cp.primary.maxPercent} % = ${fmt(cp.primary.maxAmps, 3)} A) - ${cp.primary.basis}`,
+    ],
+    [
+      'Secondary protection',
+      `${cp.secondary.ratingAmps} A (${fmt(cp.secondary.currentA, 3)} A x ${cp.secondary.maxPercent} % = ${fmt(cp.secondary.maxAmps, 3)} A) - ${cp.secondary.basis}`,
+    ],
   ]);
   for (const n of [...cp.basis, ...cp.notes]) w.para(n, 8);
 }
@@ -265,7 +321,14 @@ export function controlConductors(w: Writer, data: SubmittalData): void {
     w.table(
       ['Bucket', 'Conductor', 'Protected by', 'Table 430.72(B)', 'Max (A)', 'Verdict'],
       [0.14, 0.14, 0.3, 0.16, 0.1, 0.16],
-      cc.rows.map((r) => [r.bucket, `${r.conductor} ${r.material === 'cu' ? 'Cu' : 'Al'}`, `${r.device.kind}${r.device.amps !== null ? ` ${r.device.amps} A` : ''}`, `column ${r.column}`, r.maxAmps === null ? '-' : String(r.maxAmps), r.ok === null ? 'not checked' : r.ok ? 'OK' : 'TOO SMALL']),
+      cc.rows.map((r) => [
+        r.bucket,
+        `${r.conductor} ${r.material === 'cu' ? 'Cu' : 'Al'}`,
+        `${r.device.kind}${r.device.amps !== null ? ` ${r.device.amps} A` : ''}`,
+        `column ${r.column}`,
+        r.maxAmps === null ? '-' : String(r.maxAmps),
+        r.ok === null ? 'not checked' : r.ok ? 'OK' : 'TOO SMALL',
+      ]),
     );
     for (const f of cc.findings) w.para(`- ${f}`, 9);
     w.para(cc.basis, 8);

@@ -47,7 +47,12 @@ export class Writer {
     this.doc.moveDown(0.6);
     this.doc.font(this.bold).fontSize(14).fillColor(SLATE).text(pdfSafe(t), MARGIN, this.doc.y);
     const y = this.doc.y + 2;
-    this.doc.moveTo(MARGIN, y).lineTo(MARGIN + this.width, y).lineWidth(1).strokeColor(COPPER).stroke();
+    this.doc
+      .moveTo(MARGIN, y)
+      .lineTo(MARGIN + this.width, y)
+      .lineWidth(1)
+      .strokeColor(COPPER)
+      .stroke();
     this.doc.moveDown(0.4);
   }
 
@@ -84,7 +89,12 @@ export class Writer {
         this.doc.text(pdfSafe(c), x + 3, y + 3, { width: widths[i] - 6 });
         x += widths[i];
       });
-      this.doc.moveTo(MARGIN, y + h).lineTo(MARGIN + this.width, y + h).lineWidth(0.4).strokeColor('#cbd5e1').stroke();
+      this.doc
+        .moveTo(MARGIN, y + h)
+        .lineTo(MARGIN + this.width, y + h)
+        .lineWidth(0.4)
+        .strokeColor('#cbd5e1')
+        .stroke();
       this.doc.x = MARGIN;
       this.doc.y = y + h;
     };
@@ -104,4 +114,3 @@ export function fitLine(doc: Doc, text: string, width: number): string {
   while (n > 0 && doc.widthOfString(`${t.slice(0, n).trimEnd()}…`) > width) n--;
   return `${t.slice(0, n).trimEnd()}…`;
 }
-

@@ -34,10 +34,13 @@ export const submittalRoutes = [
       const ctx = await computeChecks(user, params.panelId);
       const { checks, selections, rollup, panel, shop } = ctx;
       // a signed-off panel: its revision, and what the engineer acknowledged when signing (NEC 409.22)
-      const revision = panel.status === 'signed_off' && panel.revisionNumber !== null ? await getRevision(user, panel.id, panel.revisionNumber) : null;
-      const signer = revision ? (await revisionsOf(panel.id)).find((r) => r.number === revision.number)?.approvedBy ?? null : null;
+      const revision =
+        panel.status === 'signed_off' && panel.revisionNumber !== null ? await getRevision(user, panel.id, panel.revisionNumber) : null;
+      const signer = revision ? ((await revisionsOf(panel.id)).find((r) => r.number === revision.number)?.approvedBy ?? null) : null;
       const logo = shop.logo ? await logoOf(user.organisationId) : null;
-      const frozen = (revision?.snapshot as { sccr?: { acknowledged?: { finding: string; by: string; reason: string } | null } } | undefined)?.sccr;
+      const frozen = (
+        revision?.snapshot as { sccr?: { acknowledged?: { finding: string; by: string; reason: string } | null } } | undefined
+      )?.sccr;
       const missing = [
         selections.length === 0 ? 'the panel has no motors' : null,
         checks.heat.result ? null : checks.heat.reason,
@@ -69,7 +72,16 @@ export const submittalRoutes = [
         rollup,
         nameplate: checks.nameplate.result,
         sccr: checks.sccr,
-        ...(revision ? { signOff: { revision: `R${revision.number}`, date: new Date(revision.approvedAt).toISOString().slice(0, 10), by: signer, acknowledged: frozen?.acknowledged ?? null } } : {}),
+        ...(revision
+          ? {
+              signOff: {
+                revision: `R${revision.number}`,
+                date: new Date(revision.approvedAt).toISOString().slice(0, 10),
+                by: signer,
+                acknowledged: frozen?.acknowledged ?? null,
+              },
+            }
+          : {}),
         heat: checks.heat.result,
         controlPower: checks.controlPower.result,
         controlConductors: checks.controlConductors,

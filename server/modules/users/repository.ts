@@ -67,7 +67,14 @@ export async function listUsers(organisationId: number) {
   return rows.map(publicUser);
 }
 
-export async function createUser(values: { organisationId: number; email: string; name: string; roles: string[]; passwordHash?: string | null; inviteToken?: string | null }) {
+export async function createUser(values: {
+  organisationId: number;
+  email: string;
+  name: string;
+  roles: string[];
+  passwordHash?: string | null;
+  inviteToken?: string | null;
+}) {
   return User.create({
     organisationId: values.organisationId,
     email: values.email,
@@ -83,7 +90,12 @@ export async function findUserInOrganisation(organisationId: number, id: number)
   return User.findOne({ where: { organisationId, id } });
 }
 
-export async function updateUserVersioned(organisationId: number, id: number, version: number, values: Partial<{ name: string; roles: string[]; active: boolean }>) {
+export async function updateUserVersioned(
+  organisationId: number,
+  id: number,
+  version: number,
+  values: Partial<{ name: string; roles: string[]; active: boolean }>,
+) {
   const [count] = await User.update({ ...values, version: version + 1 }, { where: { organisationId, id, version } });
   forgetUser(id);
   return count;

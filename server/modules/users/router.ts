@@ -3,8 +3,21 @@ import { IdParamSchema, UserCreateSchema, UserUpdateSchema, ROLE_SETS } from '..
 import * as service from './service';
 
 export const userRoutes = [
-  defineRoute({ method: 'get', path: '/api/users', access: ROLE_SETS.admin, summary: 'People of the organisation', handler: ({ user }) => service.listUsers(user) }),
-  defineRoute({ method: 'post', path: '/api/users', access: ROLE_SETS.admin, summary: 'Invite a person', body: UserCreateSchema, handler: ({ user, body }) => service.inviteUser(user, body) }),
+  defineRoute({
+    method: 'get',
+    path: '/api/users',
+    access: ROLE_SETS.admin,
+    summary: 'People of the organisation',
+    handler: ({ user }) => service.listUsers(user),
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/api/users',
+    access: ROLE_SETS.admin,
+    summary: 'Invite a person',
+    body: UserCreateSchema,
+    handler: ({ user, body }) => service.inviteUser(user, body),
+  }),
   defineRoute({
     method: 'patch',
     path: '/api/users/:id',

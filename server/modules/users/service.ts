@@ -16,8 +16,19 @@ export async function inviteUser(actor: CurrentUser, input: UserCreate) {
     throw new ValidationError('That e-mail address already has an account', [{ path: 'body.email', message: 'already in use' }]);
   }
   const inviteToken = randomBytes(24).toString('base64url');
-  const user = await repo.createUser({ organisationId: actor.organisationId, email: input.email, name: input.name, roles: input.roles, inviteToken });
-  await recordActivity(actor, { entity: 'user', entityId: user.id, action: 'invited', summary: `Invited ${input.name} <${input.email}> as ${input.roles.join(', ')}` });
+  const user = await repo.createUser({
+    organisationId: actor.organisationId,
+    email: input.email,
+    name: input.name,
+    roles: input.roles,
+    inviteToken,
+  });
+  await recordActivity(actor, {
+    entity: 'user',
+    entityId: user.id,
+    action: 'invited',
+    summary: `Invited ${input.name} <${input.email}> as ${input.roles.join(', ')}`,
+  });
   await sendMail(
     [input.email],
     `You are invited to Panelwright by ${actor.organisationName}`,

@@ -47,7 +47,13 @@ function addContactors(ctx: BomContext, k: Bucket): number {
   const req = contactorRequirement(s, controlVolts);
   let contactor: CatalogueItem | null = null;
   if (req) contactor = lines.add(tag, req, count);
-  else lines.unmatched(tag, 'contactor', count, `Contactors: no NEMA size or IEC current decided for ${s.starter.type}; coil ${controlVolts} V`);
+  else
+    lines.unmatched(
+      tag,
+      'contactor',
+      count,
+      `Contactors: no NEMA size or IEC current decided for ${s.starter.type}; coil ${controlVolts} V`,
+    );
   if (contactor) {
     tally.sealedVa += count * (contactor.ratings.sealedVa ?? 0);
     tally.largestInrushVa = Math.max(tally.largestInrushVa, contactor.ratings.inrushVa ?? 0);
@@ -55,7 +61,12 @@ function addContactors(ctx: BomContext, k: Bucket): number {
   lines.add(tag, { category: 'aux-contact', contacts: '1NO1NC' }, count);
   if (count >= 2 && s.starter.type !== 'part-winding') {
     if (s.starter.nemaSize) lines.add(tag, { category: 'mechanical-interlock', kind: 'nema', nemaSize: s.starter.nemaSize }, 1);
-    else lines.add(tag, { category: 'mechanical-interlock', kind: 'iec', minAmps: contactor?.ratings.iecAc3Amps ?? s.starter.iecAmps ?? s.flcAmps }, 1);
+    else
+      lines.add(
+        tag,
+        { category: 'mechanical-interlock', kind: 'iec', minAmps: contactor?.ratings.iecAc3Amps ?? s.starter.iecAmps ?? s.flcAmps },
+        1,
+      );
   }
   return count * (contactor?.ratings.sealedVa ?? 0);
 }
@@ -66,14 +77,28 @@ function addElectronicController(ctx: BomContext, k: Bucket): boolean {
   const { s, tag, volts: v, minHp } = k;
   switch (s.starter.type) {
     case 'RVSS': {
-      const ss = lines.add(tag, { category: 'soft-starter', minAmps: s.softStarter?.minAmps ?? s.flcAmps, volts: v, ...(s.softStarter?.bypass ? { internalBypass: true } : {}) }, 1);
+      const ss = lines.add(
+        tag,
+        {
+          category: 'soft-starter',
+          minAmps: s.softStarter?.minAmps ?? s.flcAmps,
+          volts: v,
+          ...(s.softStarter?.bypass ? { internalBypass: true } : {}),
+        },
+        1,
+      );
       return ss?.ratings.builtInOverload === true;
     }
     case 'VFD': {
       const duty = s.vfd?.duty ?? 'normal';
       const amps = s.vfd?.minOutputAmps ?? s.flaAmps;
-      lines.add(tag, duty === 'heavy' ? { category: 'vfd', minHeavyDutyAmps: amps, volts: v } : { category: 'vfd', minNormalDutyAmps: amps, volts: v }, 1);
-      if (s.vfd && s.vfd.outputFilter !== 'none') lines.add(tag, { category: 'output-filter', kind: s.vfd.outputFilter, minAmps: amps, volts: v }, 1);
+      lines.add(
+        tag,
+        duty === 'heavy' ? { category: 'vfd', minHeavyDutyAmps: amps, volts: v } : { category: 'vfd', minNormalDutyAmps: amps, volts: v },
+        1,
+      );
+      if (s.vfd && s.vfd.outputFilter !== 'none')
+        lines.add(tag, { category: 'output-filter', kind: s.vfd.outputFilter, minAmps: amps, volts: v }, 1);
       return s.overload.providedByDrive;
     }
     case 'dc-drive':
@@ -94,7 +119,16 @@ function addElectronicController(ctx: BomContext, k: Bucket): boolean {
 function addOverloadRelays(ctx: BomContext, k: Bucket): void {
   const { s, tag } = k;
   const relay = relayOf(s);
-  ctx.lines.add(tag, { category: 'overload-relay', settingAmps: Math.min(relay.settingAmps, relay.maxAmps), tripClass: s.overload.tripClass, ...(s.relays.phaseLossByOverload ? { detectsPhaseLoss: true } : {}) }, relay.count);
+  ctx.lines.add(
+    tag,
+    {
+      category: 'overload-relay',
+      settingAmps: Math.min(relay.settingAmps, relay.maxAmps),
+      tripClass: s.overload.tripClass,
+      ...(s.relays.phaseLossByOverload ? { detectsPhaseLoss: true } : {}),
+    },
+    relay.count,
+  );
 }
 
 /** Fuses of the first class in the order the catalogue holds at the rating, with a fuse holder or (per bucket) a fused disconnect. */
@@ -103,15 +137,25 @@ function addBranchFuses(ctx: BomContext, k: Bucket): void {
   const { s, tag, volts: v, poles, hpVolts } = k;
   const rating = s.scpd.ratingAmps;
   const timeDelay = s.scpd.type === 'dual-element-fuse';
-  const fuseClass = fuseClasses.find((fc) => lines.find({ category: 'fuse', exactAmps: rating, fuseClass: fc, timeDelay, volts: v }) !== null);
+  const fuseClass = fuseClasses.find(
+    (fc) => lines.find({ category: 'fuse', exactAmps: rating, fuseClass: fc, timeDelay, volts: v }) !== null,
+  );
   if (!fuseClass) {
-    lines.addFirst(tag, fuseClasses.map((fc): Requirement => ({ category: 'fuse', exactAmps: rating, fuseClass: fc, timeDelay, volts: v })), poles);
+    lines.addFirst(
+      tag,
+      fuseClasses.map((fc): Requirement => ({ category: 'fuse', exactAmps: rating, fuseClass: fc, timeDelay, volts: v })),
+      poles,
+    );
     return;
   }
   lines.add(tag, { category: 'fuse', exactAmps: rating, fuseClass, timeDelay, volts: v }, poles);
   if (ctx.perBucketDisconnect) {
     const minHp = s.disconnect.minHp !== null && hpVolts ? { minHp: { volts: hpVolts, hp: s.disconnect.minHp } } : {};
-    lines.add(tag, { category: 'fused-disconnect', fuseClass, minAmps: Math.max(rating, s.disconnect.minAmps), minPoles: poles, volts: v, ...minHp }, 1);
+    lines.add(
+      tag,
+      { category: 'fused-disconnect', fuseClass, minAmps: Math.max(rating, s.disconnect.minAmps), minPoles: poles, volts: v, ...minHp },
+      1,
+    );
   } else {
     lines.add(tag, { category: 'fuse-holder', fuseClass, minAmps: rating, poles, volts: v }, 1);
   }
@@ -125,7 +169,11 @@ function addBranchProtection(ctx: BomContext, k: Bucket): void {
     ctx.lines.add(tag, { category: 'inverse-time-breaker', exactAmps: rating, poles, volts: v }, 1);
   } else if (s.scpd.type === 'instantaneous-trip-breaker') {
     // continuous rating ≥ 115 % of FLC where it is the disconnecting means (NEC 2023 430.110(A))
-    ctx.lines.add(tag, { category: 'motor-circuit-protector', minAmps: round2(s.flcAmps * 1.15), maxTripSettingAmps: rating, minPoles: poles, volts: v }, 1);
+    ctx.lines.add(
+      tag,
+      { category: 'motor-circuit-protector', minAmps: round2(s.flcAmps * 1.15), maxTripSettingAmps: rating, minPoles: poles, volts: v },
+      1,
+    );
   } else {
     addBranchFuses(ctx, k);
   }
@@ -137,13 +185,28 @@ function addProtectiveRelays(ctx: BomContext, k: Bucket): void {
   const { s, tag, volts: v, minHp } = k;
   const needLoss = s.relays.phaseLoss && !s.relays.phaseLossByOverload;
   if (needLoss || s.relays.phaseReversal) {
-    const relay = lines.add(tag, { category: 'phase-monitor-relay', volts: v, ...(needLoss ? { detectsPhaseLoss: true } : {}), ...(s.relays.phaseReversal ? { detectsPhaseReversal: true } : {}) }, 1);
+    const relay = lines.add(
+      tag,
+      {
+        category: 'phase-monitor-relay',
+        volts: v,
+        ...(needLoss ? { detectsPhaseLoss: true } : {}),
+        ...(s.relays.phaseReversal ? { detectsPhaseReversal: true } : {}),
+      },
+      1,
+    );
     tally.sealedVa += relay?.ratings.va ?? 0;
   }
   if (s.dc?.fieldLossProtection) lines.add(tag, { category: 'field-loss-relay', volts: v }, 1);
   if (s.dc?.dynamicBraking) {
     if (minHp) lines.add(tag, { category: 'braking-resistor', minHp, volts: v }, 1);
-    else lines.unmatched(tag, 'braking-resistor', 1, `Dynamic braking resistors: motor hp at a catalogued DC voltage (${HP_VOLTS.join(', ')} V) needed; have ${s.hp ?? '—'} hp at ${v} V`);
+    else
+      lines.unmatched(
+        tag,
+        'braking-resistor',
+        1,
+        `Dynamic braking resistors: motor hp at a catalogued DC voltage (${HP_VOLTS.join(', ')} V) needed; have ${s.hp ?? '—'} hp at ${v} V`,
+      );
   }
 }
 
@@ -152,16 +215,29 @@ function addTerminalsAndWire(ctx: BomContext, k: Bucket): number {
   const { lines, wireFtPerConductor: wireFt } = ctx;
   const { s, tag } = k;
   const t = s.starter.type;
-  const leads = (s.supply === 'ac3' ? 3 : 2) * (t === 'wye-delta' || t === 'part-winding' || t === 'two-speed' ? 2 : 1) + (s.dc && s.dc.field !== 'series' ? 2 : 0);
+  const leads =
+    (s.supply === 'ac3' ? 3 : 2) * (t === 'wye-delta' || t === 'part-winding' || t === 'two-speed' ? 2 : 1) +
+    (s.dc && s.dc.field !== 'series' ? 2 : 0);
   const cond = parseConductor(s.conductor.size);
   if (cond) {
     // one terminal and one run per conductor of each parallel set; each terminal carries its share
-    lines.add(tag, { category: 'terminal-block', kind: 'feed-through', wireSize: cond.size, minAmps: round2(s.conductor.minAmpacity / cond.sets) }, leads * cond.sets);
+    lines.add(
+      tag,
+      { category: 'terminal-block', kind: 'feed-through', wireSize: cond.size, minAmps: round2(s.conductor.minAmpacity / cond.sets) },
+      leads * cond.sets,
+    );
     lines.add(tag, { category: 'terminal-block', kind: 'ground', wireSize: cond.size }, 1);
-    if (s.conductor.material === 'cu') lines.add(tag, { category: 'wire', kind: 'power', wireSize: cond.size }, Math.ceil(leads * cond.sets * wireFt));
-    else lines.unmatched(tag, 'wire', Math.ceil(leads * cond.sets * wireFt), `Wire: aluminum ${cond.size} (the catalogue's wire is copper)`);
+    if (s.conductor.material === 'cu')
+      lines.add(tag, { category: 'wire', kind: 'power', wireSize: cond.size }, Math.ceil(leads * cond.sets * wireFt));
+    else
+      lines.unmatched(tag, 'wire', Math.ceil(leads * cond.sets * wireFt), `Wire: aluminum ${cond.size} (the catalogue's wire is copper)`);
   } else {
-    lines.unmatched(tag, 'terminal-block', leads + 1, `Terminal blocks: conductor size "${s.conductor.size}" is not a known AWG/kcmil size`);
+    lines.unmatched(
+      tag,
+      'terminal-block',
+      leads + 1,
+      `Terminal blocks: conductor size "${s.conductor.size}" is not a known AWG/kcmil size`,
+    );
     lines.unmatched(tag, 'wire', Math.ceil(leads * wireFt), `Wire: conductor size "${s.conductor.size}" is not a known AWG/kcmil size`);
   }
   const points = controlPoints(t);

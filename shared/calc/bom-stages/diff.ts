@@ -47,7 +47,10 @@ function collapse(lines: readonly BomLine[]): Map<string, { line: BomLine; side:
       e.side.labourHours = round4(e.side.labourHours + extendedLabourHours(l));
       e.side.unitCost = e.side.quantity > 0 ? round4(e.side.extendedCost / e.side.quantity) : l.unitCost;
     } else {
-      m.set(k, { line: l, side: { quantity: l.quantity, unitCost: l.unitCost, extendedCost: extendedCost(l), labourHours: extendedLabourHours(l) } });
+      m.set(k, {
+        line: l,
+        side: { quantity: l.quantity, unitCost: l.unitCost, extendedCost: extendedCost(l), labourHours: extendedLabourHours(l) },
+      });
     }
   }
   return m;

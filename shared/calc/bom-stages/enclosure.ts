@@ -2,7 +2,13 @@
 // (shared/standards/panel-layout.ts), and the enclosure chosen for them. The choice is in one function,
 // `chooseEnclosure`, so a layout drawn on the backplate can take its place.
 import { PANEL_BUCKET, type Requirement } from '../../schemas/catalogue';
-import { ENCLOSURE_DEPTH, LAYOUT_ALLOWANCE, PANEL_ITEMS_AREA_BY_MAIN_AMPS, stepValue, TERMINAL_AREA_MM2 } from '../../standards/panel-layout';
+import {
+  ENCLOSURE_DEPTH,
+  LAYOUT_ALLOWANCE,
+  PANEL_ITEMS_AREA_BY_MAIN_AMPS,
+  stepValue,
+  TERMINAL_AREA_MM2,
+} from '../../standards/panel-layout';
 import type { BomContext, PanelTally } from './context';
 import { describeRequirement } from './describe';
 import { usableAreaMm2 } from './match';
@@ -17,7 +23,8 @@ export interface EnclosureNeed {
 export function enclosureNeed(tally: PanelTally, mainAmps: number): EnclosureNeed {
   const panelItemsArea = stepValue(PANEL_ITEMS_AREA_BY_MAIN_AMPS, mainAmps);
   const requiredAreaMm2 = Math.round((tally.footprintMm2 + panelItemsArea + tally.terminalCount * TERMINAL_AREA_MM2) * LAYOUT_ALLOWANCE);
-  const minDepthMm = mainAmps > ENCLOSURE_DEPTH.largeMainAboveAmps ? Math.max(tally.minDepthMm, ENCLOSURE_DEPTH.largeMainMm) : tally.minDepthMm;
+  const minDepthMm =
+    mainAmps > ENCLOSURE_DEPTH.largeMainAboveAmps ? Math.max(tally.minDepthMm, ENCLOSURE_DEPTH.largeMainMm) : tally.minDepthMm;
   return { requiredAreaMm2, minDepthMm };
 }
 
@@ -40,5 +47,7 @@ export function chooseEnclosure(ctx: BomContext, need: EnclosureNeed, enclosureT
   }
   const sections = Math.ceil(need.requiredAreaMm2 / usableAreaMm2(largest));
   // a swap keeps the section count, so each section must hold its share of the area
-  lines.addItem(PANEL_BUCKET, largest, sections, [{ category: 'enclosure', nemaType, minDepthMm: need.minDepthMm, minUsableAreaMm2: Math.ceil(need.requiredAreaMm2 / sections) }]);
+  lines.addItem(PANEL_BUCKET, largest, sections, [
+    { category: 'enclosure', nemaType, minDepthMm: need.minDepthMm, minUsableAreaMm2: Math.ceil(need.requiredAreaMm2 / sections) },
+  ]);
 }

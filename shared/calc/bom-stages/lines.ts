@@ -1,6 +1,15 @@
 // The lines of a bill of materials: a matched line (the item's price, labour, heat and rating) or an
 // unmatched one stating what it needs, each with its labour, and the line builder the stages add to.
-import { CATEGORIES, CATEGORY_LABELS, type BomLine, type CatalogueItem, type Category, type LabourKey, type LabourUnit, type Requirement } from '../../schemas/catalogue';
+import {
+  CATEGORIES,
+  CATEGORY_LABELS,
+  type BomLine,
+  type CatalogueItem,
+  type Category,
+  type LabourKey,
+  type LabourUnit,
+  type Requirement,
+} from '../../schemas/catalogue';
 import { round4 } from '../round';
 import { describeRequirement } from './describe';
 import { selectItem, type CatalogueIndex } from './match';
@@ -29,7 +38,13 @@ export function swappedLine(line: BomLine, item: CatalogueItem, labour: LabourTa
   };
 }
 
-export function matchedLine(bucket: string, item: CatalogueItem, quantity: number, labour: LabourTable, requirement: Requirement[] | null): BomLine {
+export function matchedLine(
+  bucket: string,
+  item: CatalogueItem,
+  quantity: number,
+  labour: LabourTable,
+  requirement: Requirement[] | null,
+): BomLine {
   return {
     bucket,
     category: item.category,
@@ -49,7 +64,14 @@ export function matchedLine(bucket: string, item: CatalogueItem, quantity: numbe
   };
 }
 
-export function unmatchedLine(bucket: string, category: Category, quantity: number, needs: string, labour: LabourTable, requirement: Requirement[] | null): BomLine {
+export function unmatchedLine(
+  bucket: string,
+  category: Category,
+  quantity: number,
+  needs: string,
+  labour: LabourTable,
+  requirement: Requirement[] | null,
+): BomLine {
   return {
     bucket,
     category,
@@ -95,7 +117,11 @@ export class LineBuilder {
   add(bucket: string, req: Requirement, quantity: number): CatalogueItem | null {
     if (quantity <= 0) return null;
     const item = this.find(req);
-    this.lines.push(item ? matchedLine(bucket, item, quantity, this.labour, [req]) : unmatchedLine(bucket, req.category, quantity, describeRequirement(req), this.labour, [req]));
+    this.lines.push(
+      item
+        ? matchedLine(bucket, item, quantity, this.labour, [req])
+        : unmatchedLine(bucket, req.category, quantity, describeRequirement(req), this.labour, [req]),
+    );
     return item;
   }
 

@@ -7,7 +7,10 @@ type HpVolts = (typeof HP_VOLTS)[number];
 
 /** Normalise an enclosure type as written by people ("NEMA 4x", "Type 12") to the catalogue's ("4X", "12"). */
 export function normaliseEnclosureType(t: string): string {
-  return t.toUpperCase().replace(/NEMA|TYPE/g, '').replace(/\s+/g, '');
+  return t
+    .toUpperCase()
+    .replace(/NEMA|TYPE/g, '')
+    .replace(/\s+/g, '');
 }
 
 /** Normalise a conductor size ("10 AWG", "#1/0", "250 kcmil") to the catalogue's ("10", "1/0", "250"); null if unknown. */

@@ -24,13 +24,32 @@ export function addOtherSourceParts(ctx: BomContext, src: OtherSource, supply: P
   const poles = src.phases === 3 ? 3 : 2;
   const bucket = sourceBucket(src);
   if (src.kind === 'transformer') {
-    lines.add(bucket, { category: 'power-transformer', kind: src.phases === 3 ? 'three-phase' : 'single-phase', minVa: (src.kva ?? src.loadKva) * 1000, secondaryVolts: src.secondaryVolts, volts: supply.volts }, 1);
+    lines.add(
+      bucket,
+      {
+        category: 'power-transformer',
+        kind: src.phases === 3 ? 'three-phase' : 'single-phase',
+        minVa: (src.kva ?? src.loadKva) * 1000,
+        secondaryVolts: src.secondaryVolts,
+        volts: supply.volts,
+      },
+      1,
+    );
     lines.add(bucket, { category: 'inverse-time-breaker', exactAmps: src.primaryProtection.ratingAmps, poles, volts: supply.volts }, 1);
-    if (src.secondaryProtection) lines.add(bucket, { category: 'inverse-time-breaker', exactAmps: src.secondaryProtection.ratingAmps, poles, volts: src.secondaryVolts }, 1);
+    if (src.secondaryProtection)
+      lines.add(
+        bucket,
+        { category: 'inverse-time-breaker', exactAmps: src.secondaryProtection.ratingAmps, poles, volts: src.secondaryVolts },
+        1,
+      );
     tally.footprintMm2 += POWER_TRANSFORMER_AREA.baseMm2 + POWER_TRANSFORMER_AREA.perKvaMm2 * (src.kva ?? 0);
     tally.minDepthMm = Math.max(tally.minDepthMm, POWER_TRANSFORMER_AREA.minDepthMm);
   } else {
-    lines.add(bucket, { category: 'dc-power-supply', minAmps: src.secondaryAmps, secondaryVolts: src.secondaryVolts, volts: supply.volts }, 1);
+    lines.add(
+      bucket,
+      { category: 'dc-power-supply', minAmps: src.secondaryAmps, secondaryVolts: src.secondaryVolts, volts: supply.volts },
+      1,
+    );
     lines.add(bucket, { category: 'inverse-time-breaker', exactAmps: src.primaryProtection.ratingAmps, poles, volts: supply.volts }, 1);
     tally.footprintMm2 += DC_SUPPLY_AREA_MM2;
   }
@@ -41,7 +60,13 @@ export function addOtherSourceParts(ctx: BomContext, src: OtherSource, supply: P
  * The panel main, its distribution block (one branch connection per bucket) and the wire between them.
  * Returns the main's rating, A (0 where the panel has no main).
  */
-export function addMainParts(ctx: BomContext, feeder: PanelRollup['feeder'], supply: PanelSupply, main: 'breaker' | 'fused-disconnect', branches: number): number {
+export function addMainParts(
+  ctx: BomContext,
+  feeder: PanelRollup['feeder'],
+  supply: PanelSupply,
+  main: 'breaker' | 'fused-disconnect',
+  branches: number,
+): number {
   const { lines } = ctx;
   const P = PANEL_BUCKET;
   const panelPoles = supply.phases === 1 ? 2 : 3;
@@ -55,7 +80,11 @@ export function addMainParts(ctx: BomContext, feeder: PanelRollup['feeder'], sup
     const breaker = lines.add(P, { category: 'main-breaker', ...mainBounds, poles: panelPoles, volts: supply.volts, prefer: 'largest' }, 1);
     mainAmps = breaker?.ratings.amps ?? ocpdMax;
   } else {
-    const fuse = lines.add(P, { category: 'fuse', ...mainBounds, fuseClass: MAIN_FUSE_CLASS, timeDelay: true, volts: supply.volts, prefer: 'largest' }, panelPoles);
+    const fuse = lines.add(
+      P,
+      { category: 'fuse', ...mainBounds, fuseClass: MAIN_FUSE_CLASS, timeDelay: true, volts: supply.volts, prefer: 'largest' },
+      panelPoles,
+    );
     mainAmps = fuse?.ratings.amps ?? ocpdMax;
     lines.add(P, { category: 'main-disconnect', minAmps: mainAmps, fuseClass: MAIN_FUSE_CLASS, poles: panelPoles, volts: supply.volts }, 1);
   }
@@ -66,7 +95,13 @@ export function addMainParts(ctx: BomContext, feeder: PanelRollup['feeder'], sup
   // main to distribution block: one conductor per pole and parallel set, 4 ft each (common practice estimate)
   const perConductor = WIRE_ALLOWANCE_FT.mainToDistributionPerConductor;
   if (conductor) lines.add(P, { category: 'wire', kind: 'power', wireSize: conductor.size }, panelPoles * conductor.sets * perConductor);
-  else lines.unmatched(P, 'wire', panelPoles * perConductor, `Wire: feeder conductor size "${feeder.conductorSize}" is not a known AWG/kcmil size`);
+  else
+    lines.unmatched(
+      P,
+      'wire',
+      panelPoles * perConductor,
+      `Wire: feeder conductor size "${feeder.conductorSize}" is not a known AWG/kcmil size`,
+    );
   return mainAmps;
 }
 
@@ -97,16 +132,54 @@ export function addControlTransformer(ctx: BomContext, supplyVolts: number): Con
   const selectionVa = round2(Math.sqrt(sealedVa ** 2 + largestInrushVa ** 2));
   const power = { sealedVa: round2(sealedVa), largestInrushVa, selectionVa };
   if (sealedVa <= 0) return power;
-  const cpt = lines.add(P, { category: 'control-transformer', minVa: round2(sealedVa), minInrushVa: selectionVa, secondaryVolts: controlVolts, volts: supplyVolts }, 1);
+  const cpt = lines.add(
+    P,
+    {
+      category: 'control-transformer',
+      minVa: round2(sealedVa),
+      minInrushVa: selectionVa,
+      secondaryVolts: controlVolts,
+      volts: supplyVolts,
+    },
+    1,
+  );
   if (!cpt?.ratings.va) return power;
   const primaryAmps = cpt.ratings.va / supplyVolts;
   const secondaryAmps = cpt.ratings.va / controlVolts;
   // largest fuse not above the 450.3(B) limit that still carries the rated current
   const fuseReqs = (amps: number, primary: boolean): Requirement[] =>
-    CONTROL_TRANSFORMER_FUSE_CLASS_ORDER.map((fc) => ({ category: 'fuse', fuseClass: fc, timeDelay: true, minAmps: round2(amps), maxAmps: round2(transformerFuseLimitAmps(amps, primary)), volts: primary ? supplyVolts : controlVolts, prefer: 'largest' }));
+    CONTROL_TRANSFORMER_FUSE_CLASS_ORDER.map((fc) => ({
+      category: 'fuse',
+      fuseClass: fc,
+      timeDelay: true,
+      minAmps: round2(amps),
+      maxAmps: round2(transformerFuseLimitAmps(amps, primary)),
+      volts: primary ? supplyVolts : controlVolts,
+      prefer: 'largest',
+    }));
   const pf = lines.addFirst(P, fuseReqs(primaryAmps, true), 2);
-  lines.add(P, { category: 'fuse-holder', fuseClass: pf?.ratings.fuseClass ?? 'CC', poles: 2, minAmps: pf?.ratings.amps ?? primaryAmps, volts: supplyVolts }, 1);
+  lines.add(
+    P,
+    {
+      category: 'fuse-holder',
+      fuseClass: pf?.ratings.fuseClass ?? 'CC',
+      poles: 2,
+      minAmps: pf?.ratings.amps ?? primaryAmps,
+      volts: supplyVolts,
+    },
+    1,
+  );
   const sf = lines.addFirst(P, fuseReqs(secondaryAmps, false), 1);
-  lines.add(P, { category: 'fuse-holder', fuseClass: sf?.ratings.fuseClass ?? 'CC', poles: 1, minAmps: sf?.ratings.amps ?? secondaryAmps, volts: controlVolts }, 1);
+  lines.add(
+    P,
+    {
+      category: 'fuse-holder',
+      fuseClass: sf?.ratings.fuseClass ?? 'CC',
+      poles: 1,
+      minAmps: sf?.ratings.amps ?? secondaryAmps,
+      volts: controlVolts,
+    },
+    1,
+  );
   return power;
 }

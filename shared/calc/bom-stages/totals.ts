@@ -75,7 +75,17 @@ export function rollupByCode(lines: readonly BomLine[]): RollupLine[] {
     const key = l.code !== null ? `c|${l.code}|${l.unitCost}` : `u|${l.category}|${l.requiredRatings ?? l.description}|${l.unitCost}`;
     let g = groups.get(key);
     if (!g) {
-      g = { code: l.code, category: l.category, description: l.description, unit: l.unit, quantity: 0, unitCost: l.unitCost, extendedCost: 0, requiredRatings: l.code === null ? l.requiredRatings : null, buckets: [] };
+      g = {
+        code: l.code,
+        category: l.category,
+        description: l.description,
+        unit: l.unit,
+        quantity: 0,
+        unitCost: l.unitCost,
+        extendedCost: 0,
+        requiredRatings: l.code === null ? l.requiredRatings : null,
+        buckets: [],
+      };
       groups.set(key, g);
     }
     g.quantity = round4(g.quantity + l.quantity);

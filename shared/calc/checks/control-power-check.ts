@@ -34,9 +34,14 @@ export function controlLoads(lines: readonly BomLine[], byCode: ReadonlyMap<stri
   return { sealedVa: round2(sealedVa), largestInrushVa, coilsVa: round2(coils), lightsVa: round2(lights), relaysVa: round2(relays) };
 }
 
-export function controlPowerCheck(lines: readonly BomLine[], byCode: ReadonlyMap<string, CatalogueItem>, primaryVolts: number): ControlPowerCheck {
+export function controlPowerCheck(
+  lines: readonly BomLine[],
+  byCode: ReadonlyMap<string, CatalogueItem>,
+  primaryVolts: number,
+): ControlPowerCheck {
   const c = controlLoads(lines, byCode);
-  const basis = 'Sealed VA of contactor coils, pilot lights and relays from the catalogue; inrush of the largest coil (one coil pulls in at a time, common practice).';
+  const basis =
+    'Sealed VA of contactor coils, pilot lights and relays from the catalogue; inrush of the largest coil (one coil pulls in at a time, common practice).';
   const cptLine = lines.find((l) => l.category === 'control-transformer');
   const cptItem = cptLine?.code ? byCode.get(cptLine.code) : undefined;
   try {
@@ -51,7 +56,12 @@ export function controlPowerCheck(lines: readonly BomLine[], byCode: ReadonlyMap
       secondaryVolts: CONTROL_VOLTS,
     });
     const fitted = cptLine
-      ? { code: cptLine.code, description: cptLine.description, va: cptItem?.ratings.va ?? null, adequate: cptItem?.ratings.va ? cptItem.ratings.va >= result.sizeVa : null }
+      ? {
+          code: cptLine.code,
+          description: cptLine.description,
+          va: cptItem?.ratings.va ?? null,
+          adequate: cptItem?.ratings.va ? cptItem.ratings.va >= result.sizeVa : null,
+        }
       : null;
     return { result, fitted, basis, reason: c.sealedVa === 0 ? 'No control loads in the bill of materials.' : null };
   } catch (e) {

@@ -30,7 +30,11 @@ export function heatCheck(
   const enc = encLine?.code ? byCode.get(encLine.code) : undefined;
   const r = enc?.ratings;
   if (!encLine || !r?.heightMm || !r.widthMm || !r.depthMm) {
-    return { result: null, enclosure: null, reason: 'No enclosure with dimensions in the bill of materials: the heat load needs the enclosure’s height, width and depth.' };
+    return {
+      result: null,
+      enclosure: null,
+      reason: 'No enclosure with dimensions in the bill of materials: the heat load needs the enclosure’s height, width and depth.',
+    };
   }
   const sections = Math.max(1, Math.round(encLine.quantity));
   const sources: HeatSourceInput[] = [];
@@ -51,7 +55,15 @@ export function heatCheck(
       ...(atLoad && sel ? { loadAmps: sel.flaAmps, ...(ratedAmps ? { ratedAmps } : {}), bypassed: sel.softStarter?.bypass ?? false } : {}),
     });
   }
-  const enclosure = { code: encLine.code, description: encLine.description, heightMm: r.heightMm, widthMm: r.widthMm * sections, depthMm: r.depthMm, sections, mounting: m };
+  const enclosure = {
+    code: encLine.code,
+    description: encLine.description,
+    heightMm: r.heightMm,
+    widthMm: r.widthMm * sections,
+    depthMm: r.depthMm,
+    sections,
+    mounting: m,
+  };
   const result = calculateHeat({
     enclosure: { heightM: r.heightMm / 1000, widthM: (r.widthMm * sections) / 1000, depthM: r.depthMm / 1000, mounting: m },
     sources,

@@ -9,8 +9,18 @@ export interface NameplateSupply {
   supplyHz: number;
 }
 
-export function nameplateCheck(rollup: PanelRollup | null, job: NameplateSupply, sccrKa: number | null, enclosureType: string, shopName: string): NameplateCheck {
-  if (!rollup) return { result: null, reason: 'The panel has no roll-up yet: add a motor so the selection engine can total the full-load current and size the feeder.' };
+export function nameplateCheck(
+  rollup: PanelRollup | null,
+  job: NameplateSupply,
+  sccrKa: number | null,
+  enclosureType: string,
+  shopName: string,
+): NameplateCheck {
+  if (!rollup)
+    return {
+      result: null,
+      reason: 'The panel has no roll-up yet: add a motor so the selection engine can total the full-load current and size the feeder.',
+    };
   try {
     return {
       result: panelNameplate({

@@ -62,8 +62,11 @@ export function revisionText(p: { revisionNumber: number | null; status: string 
 }
 
 function bomNote(bom: ChecksBom): string | null {
-  if (bom.source === 'in-memory') return 'No bill of materials is stored yet: the checks use one built from the catalogue for this view (not saved).';
-  return bom.stale ? 'The motors, their overrides or the catalogue changed since the stored bill of materials was built: rebuild it for current checks.' : null;
+  if (bom.source === 'in-memory')
+    return 'No bill of materials is stored yet: the checks use one built from the catalogue for this view (not saved).';
+  return bom.stale
+    ? 'The motors, their overrides or the catalogue changed since the stored bill of materials was built: rebuild it for current checks.'
+    : null;
 }
 
 export function panelChecks(input: PanelChecksInput): PanelChecks {
@@ -94,7 +97,12 @@ export function panelChecks(input: PanelChecksInput): PanelChecks {
       ambientC: job.ambientC,
       codeEdition: job.codeEdition,
     },
-    bom: { source: bom.source, stale: bom.source === 'stored' && bom.stale, unmatchedLines: lines.filter((l) => l.status === 'unmatched').length, note: bomNote(bom) },
+    bom: {
+      source: bom.source,
+      stale: bom.source === 'stored' && bom.stale,
+      unmatchedLines: lines.filter((l) => l.status === 'unmatched').length,
+      note: bomNote(bom),
+    },
     motorsWithErrors,
     sccr,
     heat: heatCheck(lines, catalogue, bySel, panel.mounting, job.ambientC),

@@ -52,11 +52,21 @@ function waysOut(
       missing++;
       continue;
     }
-    const best = candidates.reduce((x, y) => (y.unitCost < x.unitCost || (y.unitCost === x.unitCost && (y.sccrKa ?? 0) > (x.sccrKa ?? 0)) ? y : x));
-    const line = lines.find((l) => l.code === row.code && (l.bucket === row.location || (row.location === 'feeder' && l.bucket === PANEL_BUCKET)));
+    const best = candidates.reduce((x, y) =>
+      y.unitCost < x.unitCost || (y.unitCost === x.unitCost && (y.sccrKa ?? 0) > (x.sccrKa ?? 0)) ? y : x,
+    );
+    const line = lines.find(
+      (l) => l.code === row.code && (l.bucket === row.location || (row.location === 'feeder' && l.bucket === PANEL_BUCKET)),
+    );
     const qty = row.qty;
     const costDifference = round2((best.unitCost - (line?.unitCost ?? current.unitCost)) * qty);
-    const by: SccrComponentInput = { code: best.code, category: row.category, description: best.description, sccrKa: best.sccrKa ?? 0, cost: best.unitCost };
+    const by: SccrComponentInput = {
+      code: best.code,
+      category: row.category,
+      description: best.description,
+      sccrKa: best.sccrKa ?? 0,
+      cost: best.unitCost,
+    };
     const after = calculatePanelSccr(replaceComponent(input, row.location, row.code, by));
     out.push({
       kind: 'higher-rated-component',
@@ -99,14 +109,37 @@ function currentLimitingFeeder(
   if (!mainLine || !rollup || rollup.feeder.ocpdMaxAmps <= 0) return null;
   const index = indexCatalogue(catalogue);
   const poles = supply.phases === 1 ? 2 : 3;
-  const fuse = selectItem(index, { category: 'fuse', maxAmps: rollup.feeder.ocpdMaxAmps, fuseClass: 'J', timeDelay: true, volts: supply.volts, prefer: 'largest' });
-  const sw = fuse ? selectItem(index, { category: 'main-disconnect', minAmps: fuse.ratings.amps, fuseClass: 'J', poles, volts: supply.volts }) : null;
+  const fuse = selectItem(index, {
+    category: 'fuse',
+    maxAmps: rollup.feeder.ocpdMaxAmps,
+    fuseClass: 'J',
+    timeDelay: true,
+    volts: supply.volts,
+    prefer: 'largest',
+  });
+  const sw = fuse
+    ? selectItem(index, { category: 'main-disconnect', minAmps: fuse.ratings.amps, fuseClass: 'J', poles, volts: supply.volts })
+    : null;
   if (!fuse || !sw) return null;
   const feeder = input.feeder.flatMap((c): SccrComponentInput[] =>
     c.code === mainLine.code
       ? [
-          { code: sw.code, category: 'disconnect-switch', description: sw.description, qty: 1, cost: sw.unitCost, ...(sw.sccrKa !== null ? { sccrKa: sw.sccrKa } : {}) },
-          { code: fuse.code, category: 'fuse', description: fuse.description, qty: poles, cost: fuse.unitCost, ...(fuse.sccrKa !== null ? { sccrKa: fuse.sccrKa } : {}) },
+          {
+            code: sw.code,
+            category: 'disconnect-switch',
+            description: sw.description,
+            qty: 1,
+            cost: sw.unitCost,
+            ...(sw.sccrKa !== null ? { sccrKa: sw.sccrKa } : {}),
+          },
+          {
+            code: fuse.code,
+            category: 'fuse',
+            description: fuse.description,
+            qty: poles,
+            cost: fuse.unitCost,
+            ...(fuse.sccrKa !== null ? { sccrKa: fuse.sccrKa } : {}),
+          },
         ]
       : [c],
   );
@@ -136,7 +169,13 @@ export interface SccrCheckInput {
 
 /** The panel's SCCR worksheet with its ways out and the components left out of it. */
 export function sccrCheck(input: SccrCheckInput): SccrCheck {
-  const { input: worksheet, parts } = sccrInputFor(input.lines, input.catalogue, input.selections, input.combinations, input.supply.availableFaultKa);
+  const { input: worksheet, parts } = sccrInputFor(
+    input.lines,
+    input.catalogue,
+    input.selections,
+    input.combinations,
+    input.supply.availableFaultKa,
+  );
   const base = calculatePanelSccr(worksheet);
   const bySel = new Map(input.selections.map((s) => [s.tag, s]));
   return {

@@ -38,7 +38,8 @@ export function sccrComponents(lines: readonly BomLine[], byCode: ReadonlyMap<st
     }
     const type = sccrTypeForCatalogueCategory(line.category);
     if (!type) continue;
-    const skip = (reason: string) => excluded.push({ location: where === PANEL_BUCKET ? 'feeder' : where, code: line.code, description: line.description, reason });
+    const skip = (reason: string) =>
+      excluded.push({ location: where === PANEL_BUCKET ? 'feeder' : where, code: line.code, description: line.description, reason });
     if (where === PANEL_BUCKET) {
       if (s.cptSeen && (type === 'fuse' || type === 'fuse-holder')) {
         const n = type === 'fuse' ? s.cptFuse++ : s.cptHolder++;
@@ -83,7 +84,12 @@ export function sccrInputFor(
 ) {
   const bySel = new Map(selections.map((s) => [s.tag, s]));
   const parts = sccrComponents(lines, byCode);
-  const buckets: SccrBucketInput[] = [...parts.buckets.entries()].map(([tag, components]) => ({ tag, hp: bySel.get(tag)?.hp ?? null, volts: bySel.get(tag)?.volts, components }));
+  const buckets: SccrBucketInput[] = [...parts.buckets.entries()].map(([tag, components]) => ({
+    tag,
+    hp: bySel.get(tag)?.hp ?? null,
+    volts: bySel.get(tag)?.volts,
+    components,
+  }));
   const feederHp = selections.reduce((s, x) => s + (x.hp ?? 0), 0);
   const input: SccrInput = { feeder: parts.feeder, feederHp: feederHp > 0 ? feederHp : null, buckets, combinations, availableFaultKa };
   return { input, parts };

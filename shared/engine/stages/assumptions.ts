@@ -24,20 +24,50 @@ export function assumptions(ctx: StageContext, raw: Record<string, unknown> | nu
   if (flc) {
     assumed.push(...flc.assumed);
     report.cautions.push(...flc.cautions);
-    report.trace.push({ ruleId: 'sizing.flc', decision: `flcAmps = ${flc.flcAmps}`, words: `Full-load current ${flc.flcAmps} A`, reason: `table full-load current (${flc.source}) sizes conductors, protection and disconnect`, basis: flc.basis });
+    report.trace.push({
+      ruleId: 'sizing.flc',
+      decision: `flcAmps = ${flc.flcAmps}`,
+      words: `Full-load current ${flc.flcAmps} A`,
+      reason: `table full-load current (${flc.source}) sizes conductors, protection and disconnect`,
+      basis: flc.basis,
+    });
   }
   const flaAmps = load.fla ?? flc?.flcAmps ?? null;
   const assume = (when: boolean, field: string, value: string, note: string) => {
     if (when) assumed.push({ field, assumed: value, note });
   };
   if (load.fla === undefined && flc) {
-    assumed.push({ field: 'fla', assumed: `${flc.flcAmps} A (table FLC)`, note: 'no nameplate FLA: the overload setting rests on the table current; set it from the nameplate (430.6(A)(2))' });
+    assumed.push({
+      field: 'fla',
+      assumed: `${flc.flcAmps} A (table FLC)`,
+      note: 'no nameplate FLA: the overload setting rests on the table current; set it from the nameplate (430.6(A)(2))',
+    });
   }
-  assume(raw !== null && raw.serviceFactor === undefined && load.tempRiseC === undefined, 'serviceFactor', '1.0', 'not given: overload limit 115 % of FLA (430.32(A)(1)), the lower setting');
-  assume(load.environment === undefined, 'environment', 'indoor-dusty', 'not given: NEMA Type 12, the usual industrial control panel enclosure');
+  assume(
+    raw !== null && raw.serviceFactor === undefined && load.tempRiseC === undefined,
+    'serviceFactor',
+    '1.0',
+    'not given: overload limit 115 % of FLA (430.32(A)(1)), the lower setting',
+  );
+  assume(
+    load.environment === undefined,
+    'environment',
+    'indoor-dusty',
+    'not given: NEMA Type 12, the usual industrial control panel enclosure',
+  );
   assume(ac && load.codeLetter === undefined, 'codeLetter', 'none', 'no code letter: locked-rotor current not computed (Table 430.7(B))');
-  assume(load.supply === 'dc' && load.dcField === undefined, 'dcField', 'shunt', 'not given: shunt field assumed, so field-loss protection is included');
-  assume(load.speedControl === 'variable' && load.torque === undefined, 'torque', 'constant', 'not given: constant torque assumed (heavy-duty drive rating)');
+  assume(
+    load.supply === 'dc' && load.dcField === undefined,
+    'dcField',
+    'shunt',
+    'not given: shunt field assumed, so field-loss protection is included',
+  );
+  assume(
+    load.speedControl === 'variable' && load.torque === undefined,
+    'torque',
+    'constant',
+    'not given: constant torque assumed (heavy-duty drive rating)',
+  );
   assume(
     load.supply === 'ac3' && load.speedControl === 'variable' && load.cableLengthFt === undefined,
     'cableLengthFt',

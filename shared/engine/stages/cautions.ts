@@ -18,10 +18,20 @@ export interface Cautions {
   control: string[];
 }
 
-export function cautions(load: Load, supply: Supply, starterType: StarterType, protection: ProtectionSizing, circuit: CircuitSizing, unbalance: UnbalanceResult | null): Cautions {
+export function cautions(
+  load: Load,
+  supply: Supply,
+  starterType: StarterType,
+  protection: ProtectionSizing,
+  circuit: CircuitSizing,
+  unbalance: UnbalanceResult | null,
+): Cautions {
   const out: Cautions = { protection: [], circuit: [], control: [] };
   const scpd = protection.scpd;
-  if (scpd?.exception === 'exception-2') out.protection.push(`Branch protection raised under ${scpd.basis}: only where the motor will not start at the normal limit; the engineer must confirm.`);
+  if (scpd?.exception === 'exception-2')
+    out.protection.push(
+      `Branch protection raised under ${scpd.basis}: only where the motor will not start at the normal limit; the engineer must confirm.`,
+    );
 
   const vd = circuit.voltageDrop;
   if (vd && vd.percent > vd.limitPercent) {
@@ -30,15 +40,21 @@ export function cautions(load: Load, supply: Supply, starterType: StarterType, p
     );
   }
   if (starterType === 'VFD' && load.driveInputAmps === undefined) {
-    out.circuit.push('Drive input conductors follow 430.122(A): 125 % of the drive rated input current — recheck once the drive is chosen.');
+    out.circuit.push(
+      'Drive input conductors follow 430.122(A): 125 % of the drive rated input current — recheck once the drive is chosen.',
+    );
   }
   const percent = supply.voltageUnbalancePercent;
   if (load.supply === 'ac3' && starterType === 'VFD' && percent > UNBALANCE_NO_DERATING_PERCENT) {
-    out.circuit.push(`Voltage unbalance ${percent} % at the site: the drive's input takes it (the motor sees balanced output); check the drive's limit for input unbalance and fit a line reactor where its instructions call for one (common practice).`);
+    out.circuit.push(
+      `Voltage unbalance ${percent} % at the site: the drive's input takes it (the motor sees balanced output); check the drive's limit for input unbalance and fit a line reactor where its instructions call for one (common practice).`,
+    );
   }
   if (unbalance) {
     if (unbalance.deratingFactor === null) {
-      out.circuit.push(`Voltage unbalance ${unbalance.percent} % at the site: operating a motor above 5 % unbalance is not recommended (NEMA MG 1 14.35); correct the supply first.`);
+      out.circuit.push(
+        `Voltage unbalance ${unbalance.percent} % at the site: operating a motor above 5 % unbalance is not recommended (NEMA MG 1 14.35); correct the supply first.`,
+      );
     } else if (unbalance.deratingFactor < 1) {
       out.circuit.push(
         `Voltage unbalance ${unbalance.percent} % at the site: the motor can deliver about ${unbalance.deratingFactor} × its rating${unbalance.deratedHp !== null ? ` = ${unbalance.deratedHp} hp` : ''} (NEMA MG 1 14.35); check the driven load against that.`,
@@ -46,7 +62,9 @@ export function cautions(load: Load, supply: Supply, starterType: StarterType, p
     }
   }
   if (load.controlScheme === 'two-wire') {
-    out.control.push('Two-wire control restarts the motor by itself when power returns: the engineer confirms an automatic restart is safe for this machine (NFPA 79 7.5, from memory).');
+    out.control.push(
+      'Two-wire control restarts the motor by itself when power returns: the engineer confirms an automatic restart is safe for this machine (NFPA 79 7.5, from memory).',
+    );
   }
   return out;
 }

@@ -20,7 +20,12 @@ function formatValue(v: unknown): string {
   return typeof v === 'string' ? v : JSON.stringify(v);
 }
 
-export function decide(ctx: StageContext, results: ReadonlyArray<RuleResult>, byId: ReadonlyMap<string, RuleFile>, sub: (text: string) => string): DecisionsStage {
+export function decide(
+  ctx: StageContext,
+  results: ReadonlyArray<RuleResult>,
+  byId: ReadonlyMap<string, RuleFile>,
+  sub: (text: string) => string,
+): DecisionsStage {
   const report = emptyReport();
   const fired = results
     .map((r) => byId.get(String(r.name)))
@@ -38,14 +43,17 @@ export function decide(ctx: StageContext, results: ReadonlyArray<RuleResult>, by
       if (!winner) decided.set(key, { value: v, rule });
       else if (winner.value !== v) {
         overridden.push(`${key} kept ${formatValue(winner.value)} from ${winner.rule.id}`);
-        if (winner.rule.priority === rule.priority) report.errors.push(`rules ${winner.rule.id} and ${rule.id} set ${key} differently at the same priority ${rule.priority}`);
+        if (winner.rule.priority === rule.priority)
+          report.errors.push(`rules ${winner.rule.id} and ${rule.id} set ${key} differently at the same priority ${rule.priority}`);
       }
     }
     let decision = p.decision;
     if (setText.length) decision += `: ${setText.join(', ')}`;
     if (overridden.length) decision += ` (overridden: ${overridden.join('; ')})`;
     // the same in words for people (shared/labels.ts): no decision key or value key
-    const setWords = Object.entries(p.set ?? {}).map(([k, v]) => `${DECISION_LABELS[k as DecisionKey]}: ${decisionValueLabel(k as DecisionKey, v) ?? String(v)}`);
+    const setWords = Object.entries(p.set ?? {}).map(
+      ([k, v]) => `${DECISION_LABELS[k as DecisionKey]}: ${decisionValueLabel(k as DecisionKey, v) ?? String(v)}`,
+    );
     const words = `${p.decision}${setWords.length ? ` (${setWords.join('; ')})` : ''}${overridden.length ? `; ${overridden.length === 1 ? 'one decision was' : `${overridden.length} decisions were`} kept from a rule of higher priority` : ''}`;
     report.trace.push({ ruleId: rule.id, decision, words, reason: sub(p.reason), basis: sub(p.basis) });
     if (p.caution) report.cautions.push(sub(p.caution));

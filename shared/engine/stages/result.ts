@@ -63,7 +63,14 @@ export function selectionOf(ctx: StageContext, s: Stages): LoadSelection {
       ...(p.relay ? { relay: p.relay } : {}),
     },
     scpd: scpd
-      ? { type: scpd.type, maxPercent: scpd.maxPercent, ratingAmps: scpd.ratingAmps, computedMaxAmps: scpd.computedMaxAmps, basis: scpd.basis, ...(p.perWinding ? { perWinding: p.perWinding } : {}) }
+      ? {
+          type: scpd.type,
+          maxPercent: scpd.maxPercent,
+          ratingAmps: scpd.ratingAmps,
+          computedMaxAmps: scpd.computedMaxAmps,
+          basis: scpd.basis,
+          ...(p.perWinding ? { perWinding: p.perWinding } : {}),
+        }
       : { type: load.scpdType, maxPercent: 0, ratingAmps: 0, computedMaxAmps: 0, basis: 'not determined' },
     conductor: cond
       ? {
@@ -73,20 +80,67 @@ export function selectionOf(ctx: StageContext, s: Stages): LoadSelection {
           tempRatingC: cond.tempRatingC,
           ampacity: cond.ampacity,
           basis: cond.basis,
-          ...(leads ? { motorLeads: { count: leads.count, share: leads.share, minAmpacity: leads.minAmpacity, size: leads.size, ampacity: leads.ampacity, basis: leads.basis } } : {}),
+          ...(leads
+            ? {
+                motorLeads: {
+                  count: leads.count,
+                  share: leads.share,
+                  minAmpacity: leads.minAmpacity,
+                  size: leads.size,
+                  ampacity: leads.ampacity,
+                  basis: leads.basis,
+                },
+              }
+            : {}),
           ...(c.voltageDrop ? { voltageDrop: c.voltageDrop } : {}),
-          ...(c.termination60C ? { termination60C: { size: c.termination60C.size, ampacity: c.termination60C.ampacity, minAmpacity: c.termination60C.minAmpacity, basis: c.termination60C.basis } } : {}),
+          ...(c.termination60C
+            ? {
+                termination60C: {
+                  size: c.termination60C.size,
+                  ampacity: c.termination60C.ampacity,
+                  minAmpacity: c.termination60C.minAmpacity,
+                  basis: c.termination60C.basis,
+                },
+              }
+            : {}),
         }
-      : { minAmpacity: 0, size: 'not determined', material: load.conductor.material, tempRatingC: load.conductor.tempRatingC, ampacity: 0, basis: 'not determined' },
+      : {
+          minAmpacity: 0,
+          size: 'not determined',
+          material: load.conductor.material,
+          tempRatingC: load.conductor.tempRatingC,
+          ampacity: 0,
+          basis: 'not determined',
+        },
     disconnect: c.disconnect ?? { minAmps: 0, minHp: null, basis: 'not determined' },
-    relays: { phaseLoss: decided('relays.phaseLoss'), phaseReversal: decided('relays.phaseReversal'), phaseLossByOverload: decided('relays.phaseLossByOverload') },
-    enclosure: { nemaType: d.decisions['enclosure.nemaType'] as string, ipCode: m.ipCode, flagForEngineer: decided('enclosure.flagForEngineer') },
+    relays: {
+      phaseLoss: decided('relays.phaseLoss'),
+      phaseReversal: decided('relays.phaseReversal'),
+      phaseLossByOverload: decided('relays.phaseLossByOverload'),
+    },
+    enclosure: {
+      nemaType: d.decisions['enclosure.nemaType'] as string,
+      ipCode: m.ipCode,
+      flagForEngineer: decided('enclosure.flagForEngineer'),
+    },
     vfd: m.vfd,
     softStarter: m.softStarter,
     dc: m.dc,
     controlScheme: load.controlScheme,
     unbalance: m.unbalance,
-    cautions: [...new Set([...a.cautions, ...d.cautions, ...starter.cautions, ...s.cautions.protection, ...p.cautions, ...c.cautions, ...s.cautions.circuit, ...m.cautions, ...s.cautions.control])],
+    cautions: [
+      ...new Set([
+        ...a.cautions,
+        ...d.cautions,
+        ...starter.cautions,
+        ...s.cautions.protection,
+        ...p.cautions,
+        ...c.cautions,
+        ...s.cautions.circuit,
+        ...m.cautions,
+        ...s.cautions.control,
+      ]),
+    ],
     assumed,
     trace: parts.flatMap((x) => x.trace),
     errors: parts.flatMap((x) => x.errors),

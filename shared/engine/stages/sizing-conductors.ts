@@ -25,7 +25,15 @@ export interface CircuitSizing extends StageReport {
 export function sizeCircuit(ctx: StageContext, a: Assumptions, starterType: StarterType, circuitAmps: number | null = null): CircuitSizing {
   const { load, supply, edition } = ctx;
   const report = emptyReport();
-  const none: CircuitSizing = { ...report, conductor: null, termination60C: null, assumed: [], leads: null, voltageDrop: null, disconnect: null };
+  const none: CircuitSizing = {
+    ...report,
+    conductor: null,
+    termination60C: null,
+    assumed: [],
+    leads: null,
+    voltageDrop: null,
+    disconnect: null,
+  };
   if (!a.flc) return none;
   const flcAmps = a.flc.flcAmps;
   const fla = a.flaAmps ?? 0;
@@ -35,7 +43,12 @@ export function sizeCircuit(ctx: StageContext, a: Assumptions, starterType: Star
 
   const listed = supply.terminationsListed75C !== false;
   const circuit = circuitAmps !== null && circuitAmps > 0 ? { circuitAmps } : {};
-  const cond = step(report, 'branch conductors', () => branchConductor({ flcAmps, material, tempRatingC, ambientC: supply.ambientC, driveInputAmps, terminationsListed75C: listed, ...circuit }, edition));
+  const cond = step(report, 'branch conductors', () =>
+    branchConductor(
+      { flcAmps, material, tempRatingC, ambientC: supply.ambientC, driveInputAmps, terminationsListed75C: listed, ...circuit },
+      edition,
+    ),
+  );
   let at60: CircuitSizing['termination60C'] = null;
   const assumed: AssumedInput[] = [];
   if (cond) {
@@ -44,11 +57,16 @@ export function sizeCircuit(ctx: StageContext, a: Assumptions, starterType: Star
       ruleId: 'sizing.conductor',
       decision: `conductor.size = ${cond.size} (${cond.ampacity} A >= ${cond.minAmpacity} A)`,
       words: `Conductors ${cond.size} (${cond.ampacity} A ≥ ${cond.minAmpacity} A)`,
-      reason: `smallest conductor whose allowable ampacity covers the minimum, at ${listed ? '75 °C terminations (the panel\'s equipment listed for 75 °C' + (supply.terminationsListed75C === undefined ? ', assumed' : '') + ')' : 'the termination column of 110.14(C)(1) (equipment not listed for 75 °C)'}`,
+      reason: `smallest conductor whose allowable ampacity covers the minimum, at ${listed ? "75 °C terminations (the panel's equipment listed for 75 °C" + (supply.terminationsListed75C === undefined ? ', assumed' : '') + ')' : 'the termination column of 110.14(C)(1) (equipment not listed for 75 °C)'}`,
       basis: cond.basis,
     });
     if (listed) {
-      const alt = step(report, 'branch conductors at 60 °C terminations', () => branchConductor({ flcAmps, material, tempRatingC, ambientC: supply.ambientC, driveInputAmps, terminationsListed75C: false, ...circuit }, edition));
+      const alt = step(report, 'branch conductors at 60 °C terminations', () =>
+        branchConductor(
+          { flcAmps, material, tempRatingC, ambientC: supply.ambientC, driveInputAmps, terminationsListed75C: false, ...circuit },
+          edition,
+        ),
+      );
       if (alt && alt.size !== cond.size) {
         at60 = alt;
         report.trace.push({
@@ -71,7 +89,14 @@ export function sizeCircuit(ctx: StageContext, a: Assumptions, starterType: Star
       }
     }
   }
-  const leads = cond ? step(report, 'motor-lead conductors', () => motorLeadConductors({ flcAmps, starterType, material, tempRatingC, ambientC: supply.ambientC, terminationsListed75C: listed, ...circuit }, edition)) : null;
+  const leads = cond
+    ? step(report, 'motor-lead conductors', () =>
+        motorLeadConductors(
+          { flcAmps, starterType, material, tempRatingC, ambientC: supply.ambientC, terminationsListed75C: listed, ...circuit },
+          edition,
+        ),
+      )
+    : null;
   if (leads) {
     report.cautions.push(...leads.cautions);
     report.trace.push({
@@ -88,7 +113,12 @@ export function sizeCircuit(ctx: StageContext, a: Assumptions, starterType: Star
   if (cond && lengthFt !== undefined && lengthFt > 0) {
     const conductor = leads ? leads.size : cond.size;
     const run = leads ? (starterType === 'wye-delta' ? 'delta-leads' : 'half-windings') : 'line';
-    voltageDrop = step(report, 'voltage drop', () => motorVoltageDrop({ amps: fla, ratedVolts: load.volts, threePhase: load.supply === 'ac3', lengthFt, conductor, material, circuit: run }, edition));
+    voltageDrop = step(report, 'voltage drop', () =>
+      motorVoltageDrop(
+        { amps: fla, ratedVolts: load.volts, threePhase: load.supply === 'ac3', lengthFt, conductor, material, circuit: run },
+        edition,
+      ),
+    );
     if (voltageDrop) {
       report.trace.push({
         ruleId: 'sizing.voltage-drop',
@@ -100,6 +130,13 @@ export function sizeCircuit(ctx: StageContext, a: Assumptions, starterType: Star
     }
   }
   const disc = step(report, 'disconnect', () => motorDisconnect({ flcAmps, hp: round2(a.hp), driveInputAmps }, edition));
-  if (disc) report.trace.push({ ruleId: 'sizing.disconnect', decision: `disconnect.minAmps = ${disc.minAmps}, minHp = ${disc.minHp}`, words: `Disconnect at least ${disc.minAmps} A${disc.minHp ? ` and ${disc.minHp} hp` : ''}`, reason: '115 % of the table FLC, horsepower rated', basis: disc.basis });
+  if (disc)
+    report.trace.push({
+      ruleId: 'sizing.disconnect',
+      decision: `disconnect.minAmps = ${disc.minAmps}, minHp = ${disc.minHp}`,
+      words: `Disconnect at least ${disc.minAmps} A${disc.minHp ? ` and ${disc.minHp} hp` : ''}`,
+      reason: '115 % of the table FLC, horsepower rated',
+      basis: disc.basis,
+    });
   return { ...report, conductor: cond, termination60C: at60, assumed, leads, voltageDrop, disconnect: disc };
 }

@@ -33,7 +33,12 @@ export function sizeMotor(ctx: StageContext, a: Assumptions, decisions: Decision
   let unbalance: UnbalanceResult | null = null;
   if (load.supply === 'ac3' && supply.voltageUnbalancePercent > 0 && starterType !== 'VFD') {
     const u = unbalanceDerating(supply.voltageUnbalancePercent);
-    unbalance = { percent: u.percent, deratingFactor: u.factor, deratedHp: u.factor !== null && hp > 0 ? round2(hp * u.factor) : null, basis: u.basis };
+    unbalance = {
+      percent: u.percent,
+      deratingFactor: u.factor,
+      deratedHp: u.factor !== null && hp > 0 ? round2(hp * u.factor) : null,
+      basis: u.basis,
+    };
     report.trace.push({
       ruleId: 'sizing.voltage-unbalance',
       decision: u.factor === null ? 'unbalance.deratingFactor = none (above 5 %)' : `unbalance.deratingFactor = ${u.factor}`,
@@ -46,8 +51,17 @@ export function sizeMotor(ctx: StageContext, a: Assumptions, decisions: Decision
   let lockedRotorAmps: LoadSelection['lockedRotorAmps'] = null;
   const codeLetter = load.codeLetter;
   if (ac && codeLetter !== undefined) {
-    lockedRotorAmps = step(report, 'locked-rotor current', () => lockedRotorCurrent({ codeLetter, hp, volts: load.volts, phases: ctx.phases }, edition));
-    if (lockedRotorAmps) report.trace.push({ ruleId: 'sizing.locked-rotor', decision: `lockedRotorAmps = ${lockedRotorAmps.min}–${lockedRotorAmps.max} A`, words: `Locked-rotor current ${lockedRotorAmps.min}–${lockedRotorAmps.max} A`, reason: 'code letter kVA/hp at rated voltage', basis: lockedRotorAmps.basis });
+    lockedRotorAmps = step(report, 'locked-rotor current', () =>
+      lockedRotorCurrent({ codeLetter, hp, volts: load.volts, phases: ctx.phases }, edition),
+    );
+    if (lockedRotorAmps)
+      report.trace.push({
+        ruleId: 'sizing.locked-rotor',
+        decision: `lockedRotorAmps = ${lockedRotorAmps.min}–${lockedRotorAmps.max} A`,
+        words: `Locked-rotor current ${lockedRotorAmps.min}–${lockedRotorAmps.max} A`,
+        reason: 'code letter kVA/hp at rated voltage',
+        basis: lockedRotorAmps.basis,
+      });
   }
   const syncRpm = ac && load.poles !== undefined ? synchronousRpm(load.hz, load.poles) : null;
 
@@ -64,14 +78,26 @@ export function sizeMotor(ctx: StageContext, a: Assumptions, decisions: Decision
       outputFilter: decisions['vfd.outputFilter'] ?? UNDECIDED['vfd.outputFilter'],
       basis: v.basis,
     };
-    report.trace.push({ ruleId: 'sizing.vfd', decision: `vfd.minOutputAmps = ${v.minOutputAmps} (${vfd.duty} duty)`, words: `Drive output at least ${v.minOutputAmps} A (${vfd.duty} duty)`, reason: 'drive output current at its duty rating covers the motor nameplate current', basis: v.basis });
+    report.trace.push({
+      ruleId: 'sizing.vfd',
+      decision: `vfd.minOutputAmps = ${v.minOutputAmps} (${vfd.duty} duty)`,
+      words: `Drive output at least ${v.minOutputAmps} A (${vfd.duty} duty)`,
+      reason: 'drive output current at its duty rating covers the motor nameplate current',
+      basis: v.basis,
+    });
   }
   let softStarter: LoadSelection['softStarter'] = null;
   if (starterType === 'RVSS') {
     const insideDelta = decisions['softStarter.insideDelta'] ?? UNDECIDED['softStarter.insideDelta'];
     const s = softStarterMinAmps(fla, insideDelta);
     softStarter = { minAmps: s.minAmps, insideDelta, bypass: decisions['softStarter.bypass'] ?? UNDECIDED['softStarter.bypass'] };
-    report.trace.push({ ruleId: 'sizing.soft-starter', decision: `softStarter.minAmps = ${s.minAmps}`, words: `Soft starter at least ${s.minAmps} A`, reason: insideDelta ? 'inside-delta connection' : 'in-line connection', basis: s.basis });
+    report.trace.push({
+      ruleId: 'sizing.soft-starter',
+      decision: `softStarter.minAmps = ${s.minAmps}`,
+      words: `Soft starter at least ${s.minAmps} A`,
+      reason: insideDelta ? 'inside-delta connection' : 'in-line connection',
+      basis: s.basis,
+    });
   }
   const dc: LoadSelection['dc'] =
     load.supply === 'dc'

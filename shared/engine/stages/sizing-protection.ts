@@ -19,18 +19,36 @@ export function sizeProtection(ctx: StageContext, a: Assumptions, starterType: S
   const report = emptyReport();
   const fla = a.flaAmps ?? 0;
   const flc = a.flc;
-  const ol = step(report, 'overload', () => overloadMaxSetting({ flaAmps: fla, serviceFactor: load.serviceFactor, tempRiseC: load.tempRiseC }, edition));
-  if (ol && flc) report.trace.push({ ruleId: 'sizing.overload', decision: `overload.maxSettingAmps = ${ol.maxSettingAmps} (${ol.maxPercent} % of ${fla} A)`, words: `Overload at most ${ol.maxSettingAmps} A (${ol.maxPercent} % of ${fla} A)`, reason: ol.why, basis: ol.basis });
+  const ol = step(report, 'overload', () =>
+    overloadMaxSetting({ flaAmps: fla, serviceFactor: load.serviceFactor, tempRiseC: load.tempRiseC }, edition),
+  );
+  if (ol && flc)
+    report.trace.push({
+      ruleId: 'sizing.overload',
+      decision: `overload.maxSettingAmps = ${ol.maxSettingAmps} (${ol.maxPercent} % of ${fla} A)`,
+      words: `Overload at most ${ol.maxSettingAmps} A (${ol.maxPercent} % of ${fla} A)`,
+      reason: ol.why,
+      basis: ol.basis,
+    });
   const relay = ol && flc ? overloadRelay({ flaAmps: fla, maxSettingAmps: ol.maxSettingAmps, starterType }, edition) : null;
   if (relay && relay.share !== 1) {
-    report.trace.push({ ruleId: 'sizing.overload-relay', decision: `overload.relay: ${relay.count} × set ${relay.settingAmps} A, ≤ ${relay.maxAmps} A`, words: `Overload relay${relay.count > 1 ? 's' : ''}: ${relay.count} × set ${relay.settingAmps} A, ≤ ${relay.maxAmps} A`, reason: relay.note ?? '', basis: relay.basis });
+    report.trace.push({
+      ruleId: 'sizing.overload-relay',
+      decision: `overload.relay: ${relay.count} × set ${relay.settingAmps} A, ≤ ${relay.maxAmps} A`,
+      words: `Overload relay${relay.count > 1 ? 's' : ''}: ${relay.count} × set ${relay.settingAmps} A, ≤ ${relay.maxAmps} A`,
+      reason: relay.note ?? '',
+      basis: relay.basis,
+    });
   }
   if (!flc) return { ...report, overload: ol, relay, scpd: null, perWinding: null };
 
   const flcAmps = flc.flcAmps;
   const motor = motorKind(load);
-  let scpd = step(report, 'branch protection', () => branchProtection({ flcAmps, type: load.scpdType, motor, override: load.scpdOverride }, edition));
-  if (!scpd && load.scpdOverride) scpd = step(report, 'branch protection', () => branchProtection({ flcAmps, type: load.scpdType, motor }, edition));
+  let scpd = step(report, 'branch protection', () =>
+    branchProtection({ flcAmps, type: load.scpdType, motor, override: load.scpdOverride }, edition),
+  );
+  if (!scpd && load.scpdOverride)
+    scpd = step(report, 'branch protection', () => branchProtection({ flcAmps, type: load.scpdType, motor }, edition));
   // Part-winding (NEC 430.4): one device for both windings under the exception (it must let the motor
   // start), and the alternative of a device on each half-winding at one-half the 430.52 value.
   let perWinding: PerWindingScpd | null = null;
@@ -50,7 +68,10 @@ export function sizeProtection(ctx: StageContext, a: Assumptions, starterType: S
     }
   }
   if (scpd) {
-    const why = { 'exception-1': 'the computed maximum is not a standard rating: next higher standard rating', 'exception-2': `explicit override: ${load.scpdOverride?.reason}` } as Record<string, string>;
+    const why = {
+      'exception-1': 'the computed maximum is not a standard rating: next higher standard rating',
+      'exception-2': `explicit override: ${load.scpdOverride?.reason}`,
+    } as Record<string, string>;
     report.trace.push({
       ruleId: 'sizing.scpd',
       decision: `scpd.ratingAmps = ${scpd.ratingAmps} (${scpd.type}, max ${scpd.maxPercent} % = ${scpd.computedMaxAmps} A)`,

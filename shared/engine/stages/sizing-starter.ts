@@ -25,10 +25,19 @@ export function sizeStarter(ctx: StageContext, a: Assumptions, decisions: Decisi
   const contactorAmps = iecMinOperationalCurrent(a.flc.flcAmps, a.flaAmps ?? 0);
   if (contactor.nemaSized) {
     try {
-      const n = nemaStarterSize({ hp: a.hp, phases: ctx.phases, volts: ctx.load.volts, duty: decisions['starter.nemaDuty'] ?? 'normal', amps: contactorAmps }, ctx.edition);
+      const n = nemaStarterSize(
+        { hp: a.hp, phases: ctx.phases, volts: ctx.load.volts, duty: decisions['starter.nemaDuty'] ?? 'normal', amps: contactorAmps },
+        ctx.edition,
+      );
       out.nemaSize = n.size;
       out.nemaBasis = n.basis;
-      report.trace.push({ ruleId: 'sizing.nema-size', decision: `starter.nemaSize = ${n.size}`, words: `NEMA size ${n.size}`, reason: `${n.ratedHp} hp rated at this voltage and duty, ${n.continuousAmps} A continuous`, basis: n.basis });
+      report.trace.push({
+        ruleId: 'sizing.nema-size',
+        decision: `starter.nemaSize = ${n.size}`,
+        words: `NEMA size ${n.size}`,
+        reason: `${n.ratedHp} hp rated at this voltage and duty, ${n.continuousAmps} A continuous`,
+        basis: n.basis,
+      });
     } catch (e) {
       if (!(e instanceof DomainError)) throw e;
       report.cautions.push(`No NEMA size: ${e.message}; select the contactor by its IEC rated operational current.`);
@@ -41,7 +50,10 @@ export function sizeStarter(ctx: StageContext, a: Assumptions, decisions: Decisi
     ruleId: 'sizing.iec-contactor',
     decision: `starter.iecAmps = ${out.iecAmps} (${out.iecCategory})`,
     words: `Contactor ${out.iecAmps} A (${out.iecCategory})`,
-    reason: share === 1 ? 'rated operational current in the category at least the motor current' : `each contactor carries ${share === 0.5 ? 'half' : '1/√3'} of the motor current`,
+    reason:
+      share === 1
+        ? 'rated operational current in the category at least the motor current'
+        : `each contactor carries ${share === 0.5 ? 'half' : '1/√3'} of the motor current`,
     basis: `${IEC_60947_4_1} utilisation categories${share === 1 ? '' : ' (common practice)'}`,
   });
   return out;

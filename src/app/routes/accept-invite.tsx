@@ -14,10 +14,17 @@ type Values = z.infer<typeof AcceptInviteSchema>;
 export function Component() {
   const { token = '' } = useParams();
   const accept = useMutation({ mutationFn: (v: Values) => post<{ email: string }>('/api/auth/accept-invite', v) });
-  const { register, handleSubmit, formState } = useForm<Values>({ resolver: zodResolver(AcceptInviteSchema), defaultValues: { token, password: '' } });
+  const { register, handleSubmit, formState } = useForm<Values>({
+    resolver: zodResolver(AcceptInviteSchema),
+    defaultValues: { token, password: '' },
+  });
   return (
     <div className="grid min-h-screen place-items-center bg-header px-4">
-      <form onSubmit={handleSubmit((v) => accept.mutate(v))} noValidate className="w-full max-w-sm space-y-4 rounded-md border-t-4 border-copper-500 bg-panel p-6">
+      <form
+        onSubmit={handleSubmit((v) => accept.mutate(v))}
+        noValidate
+        className="w-full max-w-sm space-y-4 rounded-md border-t-4 border-copper-500 bg-panel p-6"
+      >
         <h1 className="text-xl font-semibold">Set your password</h1>
         {accept.isSuccess ? (
           <p className="text-sm">
@@ -29,7 +36,11 @@ export function Component() {
         ) : (
           <>
             <input type="hidden" {...register('token')} />
-            <Field label="New password" hint="At least 12 characters, letters mixed with digits or symbols" error={formState.errors.password?.message}>
+            <Field
+              label="New password"
+              hint="At least 12 characters, letters mixed with digits or symbols"
+              error={formState.errors.password?.message}
+            >
               {(p) => <input {...p} {...register('password')} type="password" autoComplete="new-password" className={inputClass} />}
             </Field>
             {accept.error ? <ErrorNote error={accept.error} /> : null}

@@ -13,7 +13,10 @@ export function AppLayout() {
   const navigation = useNavigation();
   // panels waiting on this person: in review for an engineer, returned for a panel builder
   const queue = useQuery({ ...panelQueries.queue(), enabled: !!me });
-  const waiting = (queue.data ?? []).filter((p) => (p.status === 'in_review' && hasRole(me, ...ROLE_SETS.engineer)) || (p.status === 'returned' && hasRole(me, ...ROLE_SETS.design))).length;
+  const waiting = (queue.data ?? []).filter(
+    (p) =>
+      (p.status === 'in_review' && hasRole(me, ...ROLE_SETS.engineer)) || (p.status === 'returned' && hasRole(me, ...ROLE_SETS.design)),
+  ).length;
   const links: Array<{ to: string; label: string; show: boolean }> = [
     { to: '/jobs', label: 'Jobs', show: true },
     { to: '/catalogue', label: 'Catalogue', show: true },
@@ -45,7 +48,10 @@ export function AppLayout() {
                 >
                   {l.label}
                   {l.to === '/jobs' && waiting > 0 ? (
-                    <span className="ml-1.5 rounded-full bg-copper-600 px-1.5 py-0.5 text-xs font-bold text-white" title={`${waiting} panel${waiting === 1 ? '' : 's'} waiting for you`}>
+                    <span
+                      className="ml-1.5 rounded-full bg-copper-600 px-1.5 py-0.5 text-xs font-bold text-white"
+                      title={`${waiting} panel${waiting === 1 ? '' : 's'} waiting for you`}
+                    >
                       {waiting}
                       <span className="sr-only"> waiting for you</span>
                     </span>

@@ -28,25 +28,48 @@ export function Component() {
   const create = useCreateItem();
   const [panel, setPanel] = useState<'none' | 'add' | 'import'>('none');
   const [history, setHistory] = useState<CatalogueEntry | null>(null);
-  const onChange = useCallback((item: CatalogueEntry, changes: ItemChanges) => update.mutate({ id: item.id, version: item.version, changes }), [update.mutate]);
+  const onChange = useCallback(
+    (item: CatalogueEntry, changes: ItemChanges) => update.mutate({ id: item.id, version: item.version, changes }),
+    [update.mutate],
+  );
   const onHistory = useCallback((item: CatalogueEntry) => setHistory((h) => (h?.id === item.id ? null : item)), []);
   return (
     <div className="space-y-4">
       <PageHeader
         title="Catalogue"
-        subtitle={canEdit ? "The shop's parts, prices, labour adders and lead times. Click a number to change it." : "The shop's parts and prices (read only for your role)."}
+        subtitle={
+          canEdit
+            ? "The shop's parts, prices, labour adders and lead times. Click a number to change it."
+            : "The shop's parts and prices (read only for your role)."
+        }
         actions={
           <>
-            <a className="rounded border border-line bg-panel px-3 py-1.5 text-sm font-semibold hover:border-copper-500" href={CATALOGUE_EXPORT.xlsx} download>
+            <a
+              className="rounded border border-line bg-panel px-3 py-1.5 text-sm font-semibold hover:border-copper-500"
+              href={CATALOGUE_EXPORT.xlsx}
+              download
+            >
               Export .xlsx
             </a>
-            <a className="rounded border border-line bg-panel px-3 py-1.5 text-sm font-semibold hover:border-copper-500" href={CATALOGUE_EXPORT.csv} download>
+            <a
+              className="rounded border border-line bg-panel px-3 py-1.5 text-sm font-semibold hover:border-copper-500"
+              href={CATALOGUE_EXPORT.csv}
+              download
+            >
               Export .csv
             </a>
             {canEdit ? (
               <>
-                <Button variant="secondary" aria-expanded={panel === 'import'} onClick={() => setPanel(panel === 'import' ? 'none' : 'import')}>Import…</Button>
-                <Button aria-expanded={panel === 'add'} onClick={() => setPanel(panel === 'add' ? 'none' : 'add')}>+ Add item</Button>
+                <Button
+                  variant="secondary"
+                  aria-expanded={panel === 'import'}
+                  onClick={() => setPanel(panel === 'import' ? 'none' : 'import')}
+                >
+                  Import…
+                </Button>
+                <Button aria-expanded={panel === 'add'} onClick={() => setPanel(panel === 'add' ? 'none' : 'add')}>
+                  + Add item
+                </Button>
               </>
             ) : null}
           </>
@@ -60,15 +83,26 @@ export function Component() {
           onSubmit={(v) => create.mutate(v, { onSuccess: () => setPanel('none') })}
         />
       ) : null}
-      {create.isSuccess && panel === 'none' ? <p role="status" className="text-sm text-state-signed">✔ Added {create.data.code}.</p> : null}
+      {create.isSuccess && panel === 'none' ? (
+        <p role="status" className="text-sm text-state-signed">
+          ✔ Added {create.data.code}.
+        </p>
+      ) : null}
       {panel === 'import' && canEdit ? <ImportPanel /> : null}
       {update.error ? <ErrorNote error={update.error} /> : null}
       {history ? <ItemHistory item={history} onClose={() => setHistory(null)} /> : null}
-      {items.isPending ? <Loading what="Loading the catalogue" /> : items.isError ? <ErrorNote error={items.error} /> : (
+      {items.isPending ? (
+        <Loading what="Loading the catalogue" />
+      ) : items.isError ? (
+        <ErrorNote error={items.error} />
+      ) : (
         <CatalogueTable items={items.data} canEdit={canEdit} onChange={onChange} onHistory={onHistory} historyOf={history?.id ?? null} />
       )}
       <CombinationsSection canEdit={hasRole(me, ...ROLE_SETS.editCombinations)} />
-      <p className="text-xs text-ink-soft">Prices are the shop's own. A change here does not alter a bill of materials already priced: its lines keep the unit cost they were priced at until the estimator re-prices them.</p>
+      <p className="text-xs text-ink-soft">
+        Prices are the shop's own. A change here does not alter a bill of materials already priced: its lines keep the unit cost they were
+        priced at until the estimator re-prices them.
+      </p>
     </div>
   );
 }

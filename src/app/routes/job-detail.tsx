@@ -35,7 +35,13 @@ export function Component() {
           </>
         }
         subtitle={`${j.customer} · ${j.site}`}
-        actions={canEdit ? <Button variant="secondary" onClick={() => setEditing((e) => !e)}>{editing ? 'Close' : 'Edit job'}</Button> : null}
+        actions={
+          canEdit ? (
+            <Button variant="secondary" onClick={() => setEditing((e) => !e)}>
+              {editing ? 'Close' : 'Edit job'}
+            </Button>
+          ) : null
+        }
       />
       {editing ? (
         <div className="mb-6">
@@ -49,19 +55,43 @@ export function Component() {
         </div>
       ) : (
         <dl className="mb-6 grid grid-cols-2 gap-x-8 gap-y-2 rounded border border-line bg-panel p-4 text-sm sm:grid-cols-5">
-          <div><dt className="text-xs uppercase text-ink-soft">Supply</dt><dd className="font-semibold">{j.supplyVolts} V {j.supplyPhases}φ {j.supplyHz} Hz</dd></div>
-          <div><dt className="text-xs uppercase text-ink-soft">Available fault</dt><dd className="font-semibold">{j.availableFaultKa} kA</dd></div>
-          <div><dt className="text-xs uppercase text-ink-soft">Ambient</dt><dd className="font-semibold">{j.ambientC} °C</dd></div>
-          <div><dt className="text-xs uppercase text-ink-soft">Voltage unbalance</dt><dd className="font-semibold">{j.voltageUnbalancePercent ? `${j.voltageUnbalancePercent} %` : 'not given'}</dd></div>
-          <div><dt className="text-xs uppercase text-ink-soft">Code</dt><dd className="font-semibold">NEC {j.codeEdition}</dd></div>
-          <div><dt className="text-xs uppercase text-ink-soft">Notes</dt><dd>{j.notes || '—'}</dd></div>
+          <div>
+            <dt className="text-xs uppercase text-ink-soft">Supply</dt>
+            <dd className="font-semibold">
+              {j.supplyVolts} V {j.supplyPhases}φ {j.supplyHz} Hz
+            </dd>
+          </div>
+          <div>
+            <dt className="text-xs uppercase text-ink-soft">Available fault</dt>
+            <dd className="font-semibold">{j.availableFaultKa} kA</dd>
+          </div>
+          <div>
+            <dt className="text-xs uppercase text-ink-soft">Ambient</dt>
+            <dd className="font-semibold">{j.ambientC} °C</dd>
+          </div>
+          <div>
+            <dt className="text-xs uppercase text-ink-soft">Voltage unbalance</dt>
+            <dd className="font-semibold">{j.voltageUnbalancePercent ? `${j.voltageUnbalancePercent} %` : 'not given'}</dd>
+          </div>
+          <div>
+            <dt className="text-xs uppercase text-ink-soft">Code</dt>
+            <dd className="font-semibold">NEC {j.codeEdition}</dd>
+          </div>
+          <div>
+            <dt className="text-xs uppercase text-ink-soft">Notes</dt>
+            <dd>{j.notes || '—'}</dd>
+          </div>
         </dl>
       )}
       <JobPanels jobId={id} canEdit={canEdit} />
       <p className="mt-2 text-sm">
         Bill of materials of the whole job:{' '}
-        <a className="font-semibold text-copper-700 underline" href={`/api/jobs/${id}/bom.xlsx`}>⬇ .xlsx</a>{' '}
-        <a className="font-semibold text-copper-700 underline" href={`/api/jobs/${id}/bom.csv`}>⬇ .csv</a>
+        <a className="font-semibold text-copper-700 underline" href={`/api/jobs/${id}/bom.xlsx`}>
+          ⬇ .xlsx
+        </a>{' '}
+        <a className="font-semibold text-copper-700 underline" href={`/api/jobs/${id}/bom.csv`}>
+          ⬇ .csv
+        </a>
       </p>
       <section className="mt-8">
         <h2 className="mb-2 text-lg font-semibold">Activity</h2>

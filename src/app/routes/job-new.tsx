@@ -9,7 +9,12 @@ export function Component() {
   return (
     <div>
       <PageHeader title="New job" subtitle="The supply, fault current and ambient here drive every panel's checks" />
-      <JobForm submitLabel="Create job" pending={create.isPending} error={create.error} onSubmit={(v) => create.mutate(v, { onSuccess: (job) => navigate(`/jobs/${job.id}`) })} />
+      <JobForm
+        submitLabel="Create job"
+        pending={create.isPending}
+        error={create.error}
+        onSubmit={(v) => create.mutate(v, { onSuccess: (job) => navigate(`/jobs/${job.id}`) })}
+      />
     </div>
   );
 }

@@ -67,9 +67,20 @@ export function Component() {
           set('q', q.trim() || null);
         }}
       >
-        <input aria-label="Search jobs" placeholder="Search number, name, customer, site" value={q} onChange={(e) => setQ(e.target.value)} className={`${inputClass} max-w-xs`} />
+        <input
+          aria-label="Search jobs"
+          placeholder="Search number, name, customer, site"
+          value={q}
+          onChange={(e) => setQ(e.target.value)}
+          className={`${inputClass} max-w-xs`}
+        />
         <label className="flex items-center gap-1.5 text-sm">
-          <input type="checkbox" checked={filters.archived === 'true'} onChange={(e) => set('archived', e.target.checked ? 'true' : null)} /> Archived jobs
+          <input
+            type="checkbox"
+            checked={filters.archived === 'true'}
+            onChange={(e) => set('archived', e.target.checked ? 'true' : null)}
+          />{' '}
+          Archived jobs
         </label>
       </form>
       {jobs.isPending ? (
@@ -86,7 +97,11 @@ export function Component() {
             <thead className="border-b border-line bg-surface text-left text-xs uppercase tracking-wide text-ink-soft">
               <tr>
                 {COLUMNS.map((c) => (
-                  <th key={c.label} className={`px-3 py-2 font-semibold ${c.right ? 'text-right' : ''}`} aria-sort={c.key && filters.sort === c.key ? 'ascending' : undefined}>
+                  <th
+                    key={c.label}
+                    className={`px-3 py-2 font-semibold ${c.right ? 'text-right' : ''}`}
+                    aria-sort={c.key && filters.sort === c.key ? 'ascending' : undefined}
+                  >
                     {c.key ? (
                       <button type="button" className="uppercase hover:text-ink" onClick={() => set('sort', c.key ?? null)}>
                         {c.label}

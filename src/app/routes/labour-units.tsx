@@ -18,7 +18,10 @@ export function Component() {
   const { data: me } = useQuery(sessionQueries.me());
   const canEdit = hasRole(me, ...ROLE_SETS.estimate);
   const update = useUpdateLabourUnit();
-  const onChange = useCallback((u: LabourUnitEntry, hours: number) => update.mutate({ key: u.key, version: u.version, hours }), [update.mutate]);
+  const onChange = useCallback(
+    (u: LabourUnitEntry, hours: number) => update.mutate({ key: u.key, version: u.version, hours }),
+    [update.mutate],
+  );
   return (
     <div className="max-w-5xl space-y-4">
       <PageHeader
@@ -26,8 +29,18 @@ export function Component() {
         subtitle="Shop hours per device mounted, per termination, per door device, per drive … Bills of materials take their labour from these when they are built."
       />
       {update.error ? <ErrorNote error={update.error} /> : null}
-      {update.isSuccess ? <p role="status" className="text-sm text-state-signed">✔ Saved {update.data.key}: {update.data.hours} h. Rebuild a bill of materials to use it.</p> : null}
-      {units.isPending ? <Loading what="Loading labour units" /> : units.isError ? <ErrorNote error={units.error} /> : <LabourUnitsTable units={units.data} canEdit={canEdit} onChange={onChange} />}
+      {update.isSuccess ? (
+        <p role="status" className="text-sm text-state-signed">
+          ✔ Saved {update.data.key}: {update.data.hours} h. Rebuild a bill of materials to use it.
+        </p>
+      ) : null}
+      {units.isPending ? (
+        <Loading what="Loading labour units" />
+      ) : units.isError ? (
+        <ErrorNote error={units.error} />
+      ) : (
+        <LabourUnitsTable units={units.data} canEdit={canEdit} onChange={onChange} />
+      )}
     </div>
   );
 }

@@ -11,7 +11,10 @@ export function Component() {
   const navigate = useNavigate();
   const [params] = useSearchParams();
   const signIn = useSignIn();
-  const { register, handleSubmit, formState } = useForm<SignIn>({ resolver: zodResolver(SignInSchema), defaultValues: { email: '', password: '' } });
+  const { register, handleSubmit, formState } = useForm<SignIn>({
+    resolver: zodResolver(SignInSchema),
+    defaultValues: { email: '', password: '' },
+  });
   const onSubmit = handleSubmit((values) =>
     signIn.mutate(values, {
       onSuccess: () => {

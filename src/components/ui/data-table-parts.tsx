@@ -13,7 +13,15 @@ declare module '@tanstack/react-table' {
 export const isNumeric = <T,>(column: Column<T, unknown>): boolean => column.columnDef.meta?.numeric === true;
 
 /** A dense table in a bordered frame; the frame scrolls sideways unless `frameClassName` says otherwise. */
-export function DenseTable({ label, frameClassName = 'overflow-x-auto', children }: { label: string; frameClassName?: string; children: ReactNode }) {
+export function DenseTable({
+  label,
+  frameClassName = 'overflow-x-auto',
+  children,
+}: {
+  label: string;
+  frameClassName?: string;
+  children: ReactNode;
+}) {
   return (
     <div className={`${frameClassName} rounded border border-line bg-panel`}>
       <table className="dense w-full text-sm" aria-label={label}>
@@ -28,9 +36,16 @@ export function SortableHeader<T>({ header, sortable }: { header: Header<T, unkn
   const sorted = header.column.getIsSorted();
   const label = flexRender(header.column.columnDef.header, header.getContext());
   return (
-    <th className={`px-2 py-2 ${isNumeric(header.column) ? 'text-right' : ''}`} aria-sort={sorted ? (sorted === 'asc' ? 'ascending' : 'descending') : undefined}>
+    <th
+      className={`px-2 py-2 ${isNumeric(header.column) ? 'text-right' : ''}`}
+      aria-sort={sorted ? (sorted === 'asc' ? 'ascending' : 'descending') : undefined}
+    >
       {sortable ? (
-        <button type="button" className="inline-flex items-center gap-1 uppercase hover:text-ink" onClick={header.column.getToggleSortingHandler()}>
+        <button
+          type="button"
+          className="inline-flex items-center gap-1 uppercase hover:text-ink"
+          onClick={header.column.getToggleSortingHandler()}
+        >
           {label}
           <span aria-hidden>{sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : ''}</span>
         </button>
@@ -52,7 +67,9 @@ export function DataTableHead<T>({
   canSort?: (column: Column<T, unknown>) => boolean;
 }) {
   return (
-    <thead className={`${sticky ? 'sticky top-0 z-10 ' : ''}border-b border-line bg-surface text-left text-xs uppercase tracking-wide text-ink-soft`}>
+    <thead
+      className={`${sticky ? 'sticky top-0 z-10 ' : ''}border-b border-line bg-surface text-left text-xs uppercase tracking-wide text-ink-soft`}
+    >
       {table.getHeaderGroups().map((hg) => (
         <tr key={hg.id}>
           {hg.headers.map((h) => (
@@ -65,7 +82,17 @@ export function DataTableHead<T>({
 }
 
 /** A body cell showing the column's cell renderer, or `children` when given; `empty` leaves it blank. */
-export function DataCell<T>({ cell, className, empty = false, children }: { cell: Cell<T, unknown>; className: string; empty?: boolean; children?: ReactNode }) {
+export function DataCell<T>({
+  cell,
+  className,
+  empty = false,
+  children,
+}: {
+  cell: Cell<T, unknown>;
+  className: string;
+  empty?: boolean;
+  children?: ReactNode;
+}) {
   const content = empty ? null : children !== undefined ? children : flexRender(cell.column.columnDef.cell, cell.getContext());
   return <td className={`${className} ${isNumeric(cell.column) ? 'text-right tabular-nums' : ''}`}>{content}</td>;
 }

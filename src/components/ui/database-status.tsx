@@ -10,12 +10,22 @@ export function DatabaseStatus() {
   const cache = qc.getQueryCache();
   const unreachable = useSyncExternalStore(
     (notify) => cache.subscribe(notify),
-    () => cache.getAll().some((q) => isDatabaseUnavailable(q.state.fetchFailureReason) || (q.state.status === 'error' && isDatabaseUnavailable(q.state.error))),
+    () =>
+      cache
+        .getAll()
+        .some(
+          (q) => isDatabaseUnavailable(q.state.fetchFailureReason) || (q.state.status === 'error' && isDatabaseUnavailable(q.state.error)),
+        ),
   );
   if (!unreachable) return null;
   return (
-    <div role="status" aria-live="polite" className="sticky top-0 z-40 border-b border-state-review/40 bg-warn-bg px-4 py-2 text-center text-sm text-ink">
-      <strong>⚠ {DATABASE_UNREACHABLE}</strong> Nothing is lost: what you see is what was last saved. Changes cannot be saved until it is back.
+    <div
+      role="status"
+      aria-live="polite"
+      className="sticky top-0 z-40 border-b border-state-review/40 bg-warn-bg px-4 py-2 text-center text-sm text-ink"
+    >
+      <strong>⚠ {DATABASE_UNREACHABLE}</strong> Nothing is lost: what you see is what was last saved. Changes cannot be saved until it is
+      back.
     </div>
   );
 }

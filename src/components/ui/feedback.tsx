@@ -33,8 +33,8 @@ export function Caution({ compact = false }: { compact?: boolean }) {
   return (
     <aside className="rounded border border-state-review/40 bg-warn-bg px-3 py-2 text-xs text-ink" aria-label="Caution">
       <strong className="mr-1">⚠ Caution.</strong>
-      Results support, not replace, a qualified person's design; a qualified person verifies them. Local codes, the authority having jurisdiction, and the listing and
-      instructions of the equipment take precedence.
+      Results support, not replace, a qualified person's design; a qualified person verifies them. Local codes, the authority having
+      jurisdiction, and the listing and instructions of the equipment take precedence.
       {compact ? null : ' De-energise and lock out before work. Check motor rotation before coupling the load.'}
     </aside>
   );

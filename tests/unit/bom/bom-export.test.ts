@@ -2,23 +2,107 @@
 import { PassThrough } from 'node:stream';
 import ExcelJS from 'exceljs';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { bomCsv, sheetNames, writeBomCsv, writeBomWorkbook, type BomExportJob, type BomExportPanel } from '../../../server/modules/bom/export';
+import {
+  bomCsv,
+  sheetNames,
+  writeBomCsv,
+  writeBomWorkbook,
+  type BomExportJob,
+  type BomExportPanel,
+} from '../../../server/modules/bom/export';
 import { buildBom, computeTotals, rollupByCode } from '../../../shared/calc/bom';
 import type { BomLine } from '../../../shared/schemas/catalogue';
 import { makePanel, makeSelection, seedCatalogue, seedLabourUnits, SUPPLY_480 } from './fixtures';
 
-const job: BomExportJob = { number: 'J-2041', name: 'North basin pump station', customer: 'Eastfield Water Works (fictional)', revision: 'R1', markupPercent: 15, labourRatePerHour: 85 };
+const job: BomExportJob = {
+  number: 'J-2041',
+  name: 'North basin pump station',
+  customer: 'Eastfield Water Works (fictional)',
+  revision: 'R1',
+  markupPercent: 15,
+  labourRatePerHour: 85,
+};
 
 const evil: BomLine[] = [
-  { bucket: '(panel)', category: 'freight', code: null, description: '=HYPERLINK("http://example.invalid","x")', quantity: 1, unit: 'ea', unitCost: 150, unitLabourHours: 0, heatLossW: 0, sccrKa: null, status: 'manual', requiredRatings: null, source: 'manual', swapReason: null },
-  { bucket: '(panel)', category: 'other', code: null, description: '@SUM(A1:A2)', quantity: 2, unit: 'ea', unitCost: 10, unitLabourHours: 0.5, heatLossW: 0, sccrKa: null, status: 'manual', requiredRatings: null, source: 'manual', swapReason: null },
-  { bucket: '(panel)', category: 'spares', code: 'PW-FU-CC-TD-2A', description: '-spare fuses', quantity: 5, unit: 'ea', unitCost: 8.7, unitLabourHours: 0, heatLossW: 0, sccrKa: 200, status: 'matched', requiredRatings: null, source: 'swapped', swapReason: '+cmd|/c calc' },
-  { bucket: '(panel)', category: 'other', code: null, description: '\tTab start\r', quantity: 1, unit: 'ea', unitCost: 0, unitLabourHours: 0, heatLossW: 0, sccrKa: null, status: 'manual', requiredRatings: null, source: 'manual', swapReason: null },
+  {
+    bucket: '(panel)',
+    category: 'freight',
+    code: null,
+    description: '=HYPERLINK("http://example.invalid","x")',
+    quantity: 1,
+    unit: 'ea',
+    unitCost: 150,
+    unitLabourHours: 0,
+    heatLossW: 0,
+    sccrKa: null,
+    status: 'manual',
+    requiredRatings: null,
+    source: 'manual',
+    swapReason: null,
+  },
+  {
+    bucket: '(panel)',
+    category: 'other',
+    code: null,
+    description: '@SUM(A1:A2)',
+    quantity: 2,
+    unit: 'ea',
+    unitCost: 10,
+    unitLabourHours: 0.5,
+    heatLossW: 0,
+    sccrKa: null,
+    status: 'manual',
+    requiredRatings: null,
+    source: 'manual',
+    swapReason: null,
+  },
+  {
+    bucket: '(panel)',
+    category: 'spares',
+    code: 'PW-FU-CC-TD-2A',
+    description: '-spare fuses',
+    quantity: 5,
+    unit: 'ea',
+    unitCost: 8.7,
+    unitLabourHours: 0,
+    heatLossW: 0,
+    sccrKa: 200,
+    status: 'matched',
+    requiredRatings: null,
+    source: 'swapped',
+    swapReason: '+cmd|/c calc',
+  },
+  {
+    bucket: '(panel)',
+    category: 'other',
+    code: null,
+    description: '\tTab start\r',
+    quantity: 1,
+    unit: 'ea',
+    unitCost: 0,
+    unitLabourHours: 0,
+    heatLossW: 0,
+    sccrKa: null,
+    status: 'manual',
+    requiredRatings: null,
+    source: 'manual',
+    swapReason: null,
+  },
 ];
 
 function panels(): BomExportPanel[] {
-  const common = { panel: makePanel(), supply: SUPPLY_480, enclosureType: '12', catalogue: seedCatalogue(), labourUnits: seedLabourUnits() };
-  const a = buildBom({ panelName: 'MCC-1', selections: [makeSelection(), makeSelection({ tag: 'M-102', starter: { nemaSize: '7' } })], ...common });
+  const common = {
+    panel: makePanel(),
+    supply: SUPPLY_480,
+    enclosureType: '12',
+    catalogue: seedCatalogue(),
+    labourUnits: seedLabourUnits(),
+  };
+  const a = buildBom({
+    panelName: 'MCC-1',
+    selections: [makeSelection(), makeSelection({ tag: 'M-102', starter: { nemaSize: '7' } })],
+    ...common,
+  });
   const b = buildBom({ panelName: 'MCC-2', selections: [makeSelection({ tag: 'M-201', starter: { type: 'FVR' } })], ...common });
   return [
     { name: 'MCC-1', lines: [...a.lines, ...evil] },
@@ -63,7 +147,22 @@ describe('writeBomWorkbook', () => {
     const ws = wb.getWorksheet('MCC-1')!;
     expect(ws.views[0]).toMatchObject({ state: 'frozen', ySplit: 4 });
     // biome-ignore lint/suspicious/noSparseArray: exceljs numbers the cells of a row from 1, so slot 0 is empty
-    expect(ws.getRow(4).values).toEqual([, 'Bucket', 'Category', 'Code', 'Description', 'Qty', 'Unit', 'Unit cost', 'Extended cost', 'Labour h / unit', 'Labour h', 'Status', 'Source', 'Needs / reason']);
+    expect(ws.getRow(4).values).toEqual([
+      ,
+      'Bucket',
+      'Category',
+      'Code',
+      'Description',
+      'Qty',
+      'Unit',
+      'Unit cost',
+      'Extended cost',
+      'Labour h / unit',
+      'Labour h',
+      'Status',
+      'Source',
+      'Needs / reason',
+    ]);
     expect(ws.getCell('A5').value).toBe('Bucket M-101');
     expect(ws.getCell('C6').value).toBe('PW-CN-N1-120');
     expect(ws.getCell('E6').value).toBe(1);
@@ -110,7 +209,7 @@ describe('writeBomWorkbook', () => {
     expect(ws.getCell(`M${r}`).value).toBe('Contactors: NEMA size 7; coil 120 V; rated for 460 V');
   });
 
-  it('summary rows point at each panel\'s totals; job totals are SUMs', () => {
+  it("summary rows point at each panel's totals; job totals are SUMs", () => {
     const ws = wb.getWorksheet('Summary')!;
     expect(ws.views[0]).toMatchObject({ state: 'frozen', ySplit: 5 });
     expect(ws.getCell('B3').value).toBe(85);
@@ -164,7 +263,13 @@ describe('writeBomWorkbook', () => {
 
 describe('sheetNames', () => {
   it('sanitises, truncates to 31 characters and de-duplicates', () => {
-    expect(sheetNames(['MCC/1', 'MCC:1', 'summary', 'A'.repeat(40), "'quoted'"])).toEqual(['MCC-1', 'MCC-1 (2)', 'summary (2)', 'A'.repeat(31), 'quoted']);
+    expect(sheetNames(['MCC/1', 'MCC:1', 'summary', 'A'.repeat(40), "'quoted'"])).toEqual([
+      'MCC-1',
+      'MCC-1 (2)',
+      'summary (2)',
+      'A'.repeat(31),
+      'quoted',
+    ]);
   });
 });
 

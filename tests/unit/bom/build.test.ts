@@ -94,19 +94,32 @@ describe('starter types', () => {
     expect(l.find((x) => x.category === 'vfd')!.unitLabourHours).toBeCloseTo(3.46, 10);
   });
   it('VFD without the drive overload gets an overload relay', () => {
-    const s = makeSelection({ tag: 'M-4', starter: { type: 'VFD', nemaSize: null }, vfd: { duty: 'normal', minOutputAmps: 14, inverterDutyMotor: false, outputFilter: 'none', basis: '' } });
+    const s = makeSelection({
+      tag: 'M-4',
+      starter: { type: 'VFD', nemaSize: null },
+      vfd: { duty: 'normal', minOutputAmps: 14, inverterDutyMotor: false, outputFilter: 'none', basis: '' },
+    });
     const l = bom([s]).lines.filter((x) => x.bucket === 'M-4');
     expect(l.filter((x) => x.category === 'overload-relay').map((x) => x.code)).toEqual(['PW-OT-18A-C20']);
     expect(l.filter((x) => x.category === 'vfd').map((x) => x.code)).toEqual(['PW-VF-4-14A']);
   });
   it('RVSS with bypass: soft starter with internal bypass and built-in overload, no relay', () => {
-    const s = makeSelection({ tag: 'M-5', starter: { type: 'RVSS', nemaSize: null }, softStarter: { minAmps: 14, insideDelta: false, bypass: true } });
+    const s = makeSelection({
+      tag: 'M-5',
+      starter: { type: 'RVSS', nemaSize: null },
+      softStarter: { minAmps: 14, insideDelta: false, bypass: true },
+    });
     const l = bom([s]).lines.filter((x) => x.bucket === 'M-5');
     expect(l.filter((x) => x.category === 'soft-starter').map((x) => x.code)).toEqual(['PW-SS-B-017']);
     expect(l.some((x) => x.category === 'overload-relay')).toBe(false);
   });
   it('wye-delta: three contactors, interlock, overload at FLA/√3, six motor leads', () => {
-    const s = makeSelection({ tag: 'M-6', flaAmps: 27, overload: { maxSettingAmps: 33.75 }, starter: { type: 'wye-delta', nemaSize: '2' } });
+    const s = makeSelection({
+      tag: 'M-6',
+      flaAmps: 27,
+      overload: { maxSettingAmps: 33.75 },
+      starter: { type: 'wye-delta', nemaSize: '2' },
+    });
     const l = bom([s]).lines.filter((x) => x.bucket === 'M-6');
     expect(l.find((x) => x.category === 'contactor')!.quantity).toBe(3);
     expect(l.find((x) => x.category === 'mechanical-interlock')!.code).toBe('PW-MI-N2');
@@ -122,8 +135,15 @@ describe('starter types', () => {
   });
   it('DC drive with field-loss protection and dynamic braking', () => {
     const s = makeSelection({
-      tag: 'D-1', supply: 'dc', hp: 10, volts: 240, tableVolts: 240, flcAmps: 38, flaAmps: 38,
-      starter: { type: 'dc-drive', nemaSize: null }, conductor: { size: '8 AWG', minAmpacity: 47.5 },
+      tag: 'D-1',
+      supply: 'dc',
+      hp: 10,
+      volts: 240,
+      tableVolts: 240,
+      flcAmps: 38,
+      flaAmps: 38,
+      starter: { type: 'dc-drive', nemaSize: null },
+      conductor: { size: '8 AWG', minAmpacity: 47.5 },
       dc: { fieldLossProtection: true, dynamicBraking: true, field: 'shunt' },
       scpd: { ratingAmps: 60 },
     });
@@ -140,15 +160,24 @@ describe('starter types', () => {
 describe('protection variants', () => {
   it('dual-element fuses: three class J time-delay fuses and a 3-pole holder', () => {
     const l = bom([makeSelection({ scpd: { type: 'dual-element-fuse', ratingAmps: 25 } })]).lines;
-    expect(codes(l, 'M-101').filter((c) => c.startsWith('PW-F'))).toEqual(['PW-FU-J-TD-025 x3', 'PW-FH-J-3P-030 x1', 'PW-FU-CC-TD-2A x1', 'PW-FH-CC-1P-030 x1']);
+    expect(codes(l, 'M-101').filter((c) => c.startsWith('PW-F'))).toEqual([
+      'PW-FU-J-TD-025 x3',
+      'PW-FH-J-3P-030 x1',
+      'PW-FU-CC-TD-2A x1',
+      'PW-FH-CC-1P-030 x1',
+    ]);
   });
   it('per-bucket disconnect with fuses: a fused disconnect instead of the holder', () => {
-    const l = bom([makeSelection({ scpd: { type: 'dual-element-fuse', ratingAmps: 25 } })], { options: { bucketDisconnect: 'per-bucket' } }).lines;
+    const l = bom([makeSelection({ scpd: { type: 'dual-element-fuse', ratingAmps: 25 } })], {
+      options: { bucketDisconnect: 'per-bucket' },
+    }).lines;
     expect(l.some((x) => x.code === 'PW-FD-J-030')).toBe(true);
     expect(l.some((x) => x.code === 'PW-FH-J-3P-030')).toBe(false);
   });
   it('fuse class preference is followed', () => {
-    const l = bom([makeSelection({ scpd: { type: 'dual-element-fuse', ratingAmps: 25 } })], { options: { fuseClasses: ['RK5', 'J'] } }).lines;
+    const l = bom([makeSelection({ scpd: { type: 'dual-element-fuse', ratingAmps: 25 } })], {
+      options: { fuseClasses: ['RK5', 'J'] },
+    }).lines;
     expect(l.some((x) => x.code === 'PW-FU-RK5-TD-025')).toBe(true);
   });
   it('instantaneous-trip breaker: continuous ≥ 115 % FLC (NEC 2023 430.110(A)), trip settable within the limit', () => {
@@ -217,7 +246,14 @@ describe('panel items', () => {
   });
   it('a panel too big for one section becomes a lineup of the largest section', () => {
     const many = Array.from({ length: 40 }, (_, i) =>
-      makeSelection({ tag: `V-${i}`, starter: { type: 'VFD', nemaSize: null }, overload: { providedByDrive: true }, vfd: { duty: 'normal', minOutputAmps: 150, inverterDutyMotor: true, outputFilter: 'none', basis: '' }, scpd: { ratingAmps: 250 }, conductor: { size: '3/0', minAmpacity: 190 } }),
+      makeSelection({
+        tag: `V-${i}`,
+        starter: { type: 'VFD', nemaSize: null },
+        overload: { providedByDrive: true },
+        vfd: { duty: 'normal', minOutputAmps: 150, inverterDutyMotor: true, outputFilter: 'none', basis: '' },
+        scpd: { ratingAmps: 250 },
+        conductor: { size: '3/0', minAmpacity: 190 },
+      }),
     );
     const big = bom(many, { panel: makePanel({ ocpdMaxAmps: 800, minAmpacity: 700, conductorSize: '500 kcmil' }, 6000) });
     const enc = big.lines.find((l) => l.category === 'enclosure')!;
@@ -230,7 +266,9 @@ describe('panel items', () => {
     expect(l.find((x) => x.category === 'enclosure')!.code).toMatch(/^PW-EN-4X-/);
   });
   it('fused main: class J time-delay fuses at the largest rating not above the maximum, and a main disconnect', () => {
-    const l = bom(sels, { panel: makePanel({ ocpdMaxAmps: 70 }, 28), options: { main: 'fused-disconnect' } }).lines.filter((x) => x.bucket === PANEL_BUCKET);
+    const l = bom(sels, { panel: makePanel({ ocpdMaxAmps: 70 }, 28), options: { main: 'fused-disconnect' } }).lines.filter(
+      (x) => x.bucket === PANEL_BUCKET,
+    );
     expect(l.find((x) => x.category === 'fuse' && x.code?.startsWith('PW-FU-J'))!.code).toBe('PW-FU-J-TD-070');
     expect(l.find((x) => x.category === 'main-disconnect')!.code).toBe('PW-MD-J-3P-100');
   });
@@ -244,7 +282,12 @@ describe('cooling (panel-check step): the one heat model of shared/calc/heat.ts,
   const enclosure = { heightM: 1.2, widthM: 0.8, depthM: 0.3, mounting: 'wall-mounted' as const };
   const index = indexCatalogue(seedCatalogue());
   const heat = (heatLossW: number, ambientC: number) =>
-    calculateHeat({ enclosure, sources: [{ bucketTag: null, code: 'LOAD', description: 'panel losses', category: 'contactor', heatLossW }], ambientC, internalLimitC: 40 });
+    calculateHeat({
+      enclosure,
+      sources: [{ bucketTag: null, code: 'LOAD', description: 'panel losses', category: 'contactor', heatLossW }],
+      ambientC,
+      internalLimitC: 40,
+    });
   it('no cooling while the surface sheds the heat', () => {
     // A = 1.4·0.8·0.3 + 0.9·1.2·0.8 + 0.5·1.2·0.8 + 2 × 0.9·1.2·0.3 = 2.328 m² (IEC TR 60890, from memory); 5.5 × 2.328 × 10 K = 128.04 W
     const r = heat(100, 30);

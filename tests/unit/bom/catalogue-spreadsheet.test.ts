@@ -21,14 +21,49 @@ const tricky: CatalogueItem[] = [
     unitCost: 10,
     leadTimeDays: 1,
   }),
-  item({ code: 'PW-TEST-002', description: '-20 °C rated, "quoted", with comma', category: 'aux-contact', ratings: { contacts: '1NO' }, unitCost: 1.5, leadTimeDays: 0, active: false }),
-  item({ code: 'PW-TEST-003', description: '@SUM(1,2)\tand a tab', category: 'aux-contact', ratings: { contacts: '1NC' }, unitCost: 0, leadTimeDays: 2 }),
-  item({ code: 'PW-TEST-004', description: '+1 line\nsecond line', category: 'aux-contact', ratings: { contacts: '1NO1NC' }, unitCost: 3, leadTimeDays: 2, sccrKa: 5 }),
+  item({
+    code: 'PW-TEST-002',
+    description: '-20 °C rated, "quoted", with comma',
+    category: 'aux-contact',
+    ratings: { contacts: '1NO' },
+    unitCost: 1.5,
+    leadTimeDays: 0,
+    active: false,
+  }),
+  item({
+    code: 'PW-TEST-003',
+    description: '@SUM(1,2)\tand a tab',
+    category: 'aux-contact',
+    ratings: { contacts: '1NC' },
+    unitCost: 0,
+    leadTimeDays: 2,
+  }),
+  item({
+    code: 'PW-TEST-004',
+    description: '+1 line\nsecond line',
+    category: 'aux-contact',
+    ratings: { contacts: '1NO1NC' },
+    unitCost: 3,
+    leadTimeDays: 2,
+    sccrKa: 5,
+  }),
 ];
 
 const csvOf = (rows: Array<Array<string | number>>) => Buffer.from(rows.map((r) => r.join(',')).join('\n'));
 const validCsvRow = (code: string, unitCost: string | number = 9): Array<string | number> => {
-  const row: Record<string, string | number> = { code, description: 'Auxiliary contact block', category: 'aux-contact', unit: 'ea', active: 'true', unitCost, labourHours: 0, terminations: 2, leadTimeDays: 2, heatLossW: 0, contacts: '1NO' };
+  const row: Record<string, string | number> = {
+    code,
+    description: 'Auxiliary contact block',
+    category: 'aux-contact',
+    unit: 'ea',
+    active: 'true',
+    unitCost,
+    labourHours: 0,
+    terminations: 2,
+    leadTimeDays: 2,
+    heatLossW: 0,
+    contacts: '1NO',
+  };
   return CATALOGUE_HEADERS.map((h) => row[h] ?? '');
 };
 
@@ -67,7 +102,10 @@ describe('round trip', () => {
 
 describe('bad import files give clear errors and no rows', () => {
   it('an empty file', async () => {
-    expect(await parseCatalogueFile(Buffer.alloc(0), 'csv')).toEqual({ rows: [], errors: [{ row: 0, column: '', message: 'the file is empty' }] });
+    expect(await parseCatalogueFile(Buffer.alloc(0), 'csv')).toEqual({
+      rows: [],
+      errors: [{ row: 0, column: '', message: 'the file is empty' }],
+    });
     expect((await parseCatalogueFile(Buffer.alloc(0), 'xlsx')).errors[0]!.message).toBe('the file is empty');
     expect((await parseCatalogueFile(Buffer.from('\n\n  \n'), 'csv')).errors[0]!.message).toMatch(/no header row/);
   });
@@ -108,7 +146,10 @@ describe('bad import files give clear errors and no rows', () => {
   });
 
   it('duplicate codes', async () => {
-    const r = await parseCatalogueFile(csvOf([CATALOGUE_HEADERS, validCsvRow('PW-AX-5'), validCsvRow('PW-AX-4'), validCsvRow('PW-AX-5')]), 'csv');
+    const r = await parseCatalogueFile(
+      csvOf([CATALOGUE_HEADERS, validCsvRow('PW-AX-5'), validCsvRow('PW-AX-4'), validCsvRow('PW-AX-5')]),
+      'csv',
+    );
     expect(r.errors).toEqual([{ row: 4, column: 'code', message: 'duplicate code PW-AX-5 (first on row 2)' }]);
   });
 
@@ -128,9 +169,7 @@ describe('bad import files give clear errors and no rows', () => {
     ws.addRow(validCsvRow('PW-AX-2'));
     const buf = Buffer.from(await wb.xlsx.writeBuffer());
     const r = await parseCatalogueFile(buf, 'xlsx');
-    expect(r.errors).toEqual([
-      { row: 2, column: 'unitCost', message: '"abc" is not a number' },
-    ]);
+    expect(r.errors).toEqual([{ row: 2, column: 'unitCost', message: '"abc" is not a number' }]);
     // the first good PW-AX-2 is on row 3; nothing is written while errors exist
     expect(r.rows.map((i) => i.code)).toEqual(['PW-AX-2']);
   });
@@ -192,7 +231,11 @@ describe('zip bomb and size limits', () => {
   });
 
   it('too many parts', () => {
-    const parts = Array.from({ length: IMPORT_LIMITS.maxZipEntries + 1 }, (_, i) => ({ name: `p${i}`, data: Buffer.from('a'), stored: true }));
+    const parts = Array.from({ length: IMPORT_LIMITS.maxZipEntries + 1 }, (_, i) => ({
+      name: `p${i}`,
+      data: Buffer.from('a'),
+      stored: true,
+    }));
     expect(checkXlsxPackage(makeZip(parts))).toMatch(/too many parts/);
   });
 

@@ -4,5 +4,17 @@ import { sourceLoss } from '../../../shared/calc/heat';
 import type { BomLine } from '../../../shared/schemas/catalogue';
 
 export function linesHeatLossW(lines: readonly BomLine[]): number {
-  return lines.reduce((sum, l) => sum + sourceLoss({ bucketTag: l.bucket, code: l.code ?? '', description: l.description, category: l.category, qty: l.quantity, heatLossW: l.heatLossW }).watts, 0);
+  return lines.reduce(
+    (sum, l) =>
+      sum +
+      sourceLoss({
+        bucketTag: l.bucket,
+        code: l.code ?? '',
+        description: l.description,
+        category: l.category,
+        qty: l.quantity,
+        heatLossW: l.heatLossW,
+      }).watts,
+    0,
+  );
 }

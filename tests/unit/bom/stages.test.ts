@@ -7,13 +7,28 @@ import { CONTACTOR_AREA_BY_AMPS, stepValue } from '../../../shared/standards/pan
 
 describe('control scheme (common practice, catalog/README.md)', () => {
   it('door devices per starter type', () => {
-    expect(pilotScheme('FVNR')).toEqual([['start', 1], ['stop', 1], ['run-light', 1]]);
-    expect(pilotScheme('FVR')).toEqual([['forward', 1], ['reverse', 1], ['stop', 1], ['run-light', 2]]);
-    expect(pilotScheme('VFD')).toEqual([['hand-off-auto', 1], ['run-light', 1], ['fault-light', 1]]);
+    expect(pilotScheme('FVNR')).toEqual([
+      ['start', 1],
+      ['stop', 1],
+      ['run-light', 1],
+    ]);
+    expect(pilotScheme('FVR')).toEqual([
+      ['forward', 1],
+      ['reverse', 1],
+      ['stop', 1],
+      ['run-light', 2],
+    ]);
+    expect(pilotScheme('VFD')).toEqual([
+      ['hand-off-auto', 1],
+      ['run-light', 1],
+      ['fault-light', 1],
+    ]);
   });
   it('control points 4 / 6 / 8 and contactors per starter type', () => {
     expect([controlPoints('FVNR'), controlPoints('two-speed'), controlPoints('dc-drive')]).toEqual([4, 6, 8]);
-    expect([contactorCount('FVNR'), contactorCount('part-winding'), contactorCount('wye-delta'), contactorCount('VFD')]).toEqual([1, 2, 3, 0]);
+    expect([contactorCount('FVNR'), contactorCount('part-winding'), contactorCount('wye-delta'), contactorCount('VFD')]).toEqual([
+      1, 2, 3, 0,
+    ]);
   });
   it('control fuse: 250 % of the sealed current, at least 2 A', () => {
     expect(controlFuseAmps(120, 120)).toBe(2.5); // 2.5 × 120 VA / 120 V

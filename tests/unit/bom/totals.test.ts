@@ -25,8 +25,26 @@ const lines: BomLine[] = [
   line({ quantity: 3, unitCost: 19.99, unitLabourHours: 0.73 }),
   line({ category: 'fuse', code: 'PW-FU-J-TD-030', quantity: 2, unitCost: 0.335, unitLabourHours: 0.05 }),
   line({ bucket: 'M-2', category: 'wire', code: 'PW-WR-14-BK', unit: 'ft', quantity: 40, unitCost: 0.09, unitLabourHours: 0.004 }),
-  line({ bucket: 'M-2', category: 'contactor', code: null, status: 'unmatched', requiredRatings: 'Contactors: NEMA size 7', quantity: 1, unitCost: 0, unitLabourHours: 0.25 }),
-  line({ bucket: '(panel)', category: 'freight', code: null, status: 'manual', source: 'manual', description: 'Freight', quantity: 1, unitCost: 150 }),
+  line({
+    bucket: 'M-2',
+    category: 'contactor',
+    code: null,
+    status: 'unmatched',
+    requiredRatings: 'Contactors: NEMA size 7',
+    quantity: 1,
+    unitCost: 0,
+    unitLabourHours: 0.25,
+  }),
+  line({
+    bucket: '(panel)',
+    category: 'freight',
+    code: null,
+    status: 'manual',
+    source: 'manual',
+    description: 'Freight',
+    quantity: 1,
+    unitCost: 150,
+  }),
 ];
 
 describe('computeTotals', () => {
@@ -71,8 +89,22 @@ describe('rollupByCode', () => {
       line({ bucket: 'M-1', quantity: 1, unitCost: 96 }),
       line({ bucket: 'M-2', quantity: 2, unitCost: 96 }),
       line({ bucket: 'M-3', quantity: 1, unitCost: 99 }),
-      line({ bucket: 'M-3', category: 'contactor', code: null, status: 'unmatched', requiredRatings: 'Contactors: NEMA size 7', quantity: 1 }),
-      line({ bucket: 'M-4', category: 'contactor', code: null, status: 'unmatched', requiredRatings: 'Contactors: NEMA size 7', quantity: 2 }),
+      line({
+        bucket: 'M-3',
+        category: 'contactor',
+        code: null,
+        status: 'unmatched',
+        requiredRatings: 'Contactors: NEMA size 7',
+        quantity: 1,
+      }),
+      line({
+        bucket: 'M-4',
+        category: 'contactor',
+        code: null,
+        status: 'unmatched',
+        requiredRatings: 'Contactors: NEMA size 7',
+        quantity: 2,
+      }),
     ]);
     expect(r.map((g) => [g.code, g.quantity, g.unitCost, g.extendedCost, g.buckets.join(' ')])).toEqual([
       ['PW-CN-N1-120', 3, 96, 288, 'M-1 M-2'],

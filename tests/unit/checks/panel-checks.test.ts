@@ -8,7 +8,19 @@ import { pumpFvnr, selection } from '../panel/fixtures';
 function input(patch: Partial<PanelChecksInput> = {}): PanelChecksInput {
   return {
     panel: { id: 1, name: 'MCP-1', mounting: 'wall-mounted', revisionNumber: null, status: 'draft' },
-    job: { id: 2, number: 'J-1', name: 'Test', customer: '', site: '', supplyVolts: 480, supplyPhases: 3, supplyHz: 60, availableFaultKa: 10, ambientC: 35, codeEdition: '2023' },
+    job: {
+      id: 2,
+      number: 'J-1',
+      name: 'Test',
+      customer: '',
+      site: '',
+      supplyVolts: 480,
+      supplyPhases: 3,
+      supplyHz: 60,
+      availableFaultKa: 10,
+      ambientC: 35,
+      codeEdition: '2023',
+    },
     motors: [{ id: 10, tag: pumpFvnr.tag, answers: { tag: pumpFvnr.tag }, effective: pumpFvnr }],
     rollup: null,
     bom: { lines: [], source: 'stored', stale: false, enclosureType: '12' },

@@ -7,7 +7,15 @@ import { createSelector } from '../../../shared/engine/selector';
 import { loadRuleFiles } from '../../../server/engine/rule-files';
 import { buildBom } from '../../../shared/calc/bom';
 import { motorConnectionCard } from '../../../shared/calc/checks/connection-card';
-import { buildPanelDrawings, drawingNumber, terminalRowsFor, toCsv, TERMINAL_COLUMNS, wireNumberUse, type PanelDrawings } from '../../../shared/drawings/panel-drawings';
+import {
+  buildPanelDrawings,
+  drawingNumber,
+  terminalRowsFor,
+  toCsv,
+  TERMINAL_COLUMNS,
+  wireNumberUse,
+  type PanelDrawings,
+} from '../../../shared/drawings/panel-drawings';
 import { railPaths, type PlacedElement } from '../../../shared/drawings/ladder';
 import { bucketSheetSvg, nameplateSvg, schematicSheets } from '../../../shared/drawings/svg';
 import type { LoadInput } from '../../../shared/schemas/load';
@@ -24,12 +32,50 @@ const MOTORS: LoadInput[] = [
   { tag: 'C-2', supply: 'ac3', hp: 2, volts: 460, reversing: true, jogging: true },
   { tag: 'C-3', supply: 'ac3', hp: 5, volts: 460, reversing: true, controlScheme: 'two-wire' },
   { tag: 'C-4', supply: 'ac3', hp: 5, volts: 460, reversing: true, controlScheme: 'hand-off-auto' },
-  { tag: 'K-1', supply: 'ac3', hp: 60, volts: 460, leads: 6, connection: 'delta', startingLimit: 'reduced-inrush', starterPreference: 'wye-delta', reverseRotationHazard: true },
-  { tag: 'K-2', supply: 'ac3', hp: 60, volts: 460, leads: 6, connection: 'delta', startingLimit: 'reduced-inrush', starterPreference: 'wye-delta', controlScheme: 'two-wire' },
-  { tag: 'F-1', supply: 'ac3', hp: 25, volts: 230, leads: 9, connection: 'wye', startingLimit: 'reduced-inrush', starterPreference: 'part-winding' },
+  {
+    tag: 'K-1',
+    supply: 'ac3',
+    hp: 60,
+    volts: 460,
+    leads: 6,
+    connection: 'delta',
+    startingLimit: 'reduced-inrush',
+    starterPreference: 'wye-delta',
+    reverseRotationHazard: true,
+  },
+  {
+    tag: 'K-2',
+    supply: 'ac3',
+    hp: 60,
+    volts: 460,
+    leads: 6,
+    connection: 'delta',
+    startingLimit: 'reduced-inrush',
+    starterPreference: 'wye-delta',
+    controlScheme: 'two-wire',
+  },
+  {
+    tag: 'F-1',
+    supply: 'ac3',
+    hp: 25,
+    volts: 230,
+    leads: 9,
+    connection: 'wye',
+    startingLimit: 'reduced-inrush',
+    starterPreference: 'part-winding',
+  },
   { tag: 'S-1', supply: 'ac3', hp: 150, volts: 460, fla: 172, startingLimit: 'reduced-inrush', critical: true },
   { tag: 'V-1', supply: 'ac3', hp: 40, volts: 460, speedControl: 'variable', turndown: 4, torque: 'variable' },
-  { tag: 'V-2', supply: 'ac3', hp: 40, volts: 460, speedControl: 'variable', turndown: 4, torque: 'variable', controlScheme: 'hand-off-auto' },
+  {
+    tag: 'V-2',
+    supply: 'ac3',
+    hp: 40,
+    volts: 460,
+    speedControl: 'variable',
+    turndown: 4,
+    torque: 'variable',
+    controlScheme: 'hand-off-auto',
+  },
   { tag: 'T-1', supply: 'ac3', hp: 10, volts: 460, twoSpeed: true },
   { tag: 'M-1', supply: 'ac1', hp: 0.5, volts: 115, singlePhaseType: 'capacitor-start' },
   { tag: 'H-1', supply: 'dc', hp: 5, volts: 240, dcField: 'compound', reversing: true, quickStop: true },
@@ -47,7 +93,15 @@ beforeAll(async () => {
   const out = await selector.selectPanel({ supply: SUPPLY, loads: MOTORS });
   const ok = out.results.filter((r) => r.errors.length === 0);
   expect(ok.map((s) => s.tag)).toEqual(MOTORS.map((m) => m.tag));
-  const bom = buildBom({ panelName: 'T', selections: ok, panel: out.panel, supply: SUPPLY, enclosureType: '12', catalogue: seedCatalogue(), labourUnits: seedLabourUnits() });
+  const bom = buildBom({
+    panelName: 'T',
+    selections: ok,
+    panel: out.panel,
+    supply: SUPPLY,
+    enclosureType: '12',
+    catalogue: seedCatalogue(),
+    labourUnits: seedLabourUnits(),
+  });
   bomTerminals = bom.lines.filter((l) => l.category === 'terminal-block').reduce((n, l) => n + l.quantity, 0);
   d = buildPanelDrawings({
     jobNumber: 'J-1',
@@ -68,7 +122,15 @@ beforeAll(async () => {
 describe('control schematics', () => {
   it('draws the starter each selection decided (engine decisions for these answers)', () => {
     const starters = Object.fromEntries(d.buckets.map((b) => [b.tag, b.starter]));
-    expect(starters).toMatchObject({ 'P-1': 'Full-voltage non-reversing', 'C-1': 'Full-voltage reversing', 'K-1': 'Wye-delta, open transition', 'F-1': 'Part-winding', 'S-1': 'Solid-state reduced-voltage (soft starter)', 'V-1': 'Adjustable-speed drive', 'T-1': 'Two-speed' });
+    expect(starters).toMatchObject({
+      'P-1': 'Full-voltage non-reversing',
+      'C-1': 'Full-voltage reversing',
+      'K-1': 'Wye-delta, open transition',
+      'F-1': 'Part-winding',
+      'S-1': 'Solid-state reduced-voltage (soft starter)',
+      'V-1': 'Adjustable-speed drive',
+      'T-1': 'Two-speed',
+    });
   });
 
   it('gives every node one wire number, unique on the panel (X2, the grounded rail, is one node for all)', () => {
@@ -89,10 +151,17 @@ describe('control schematics', () => {
       const b = bucket(tag);
       expect(b.interlocked.length, tag).toBe(1);
       for (const [a, z] of b.interlocked) {
-        for (const [coil, other] of [[a, z], [z, a]] as const) {
+        for (const [coil, other] of [
+          [a, z],
+          [z, a],
+        ] as const) {
           const paths = pathsThrough(b, coil);
           expect(paths.length, `${tag} ${coil}`).toBeGreaterThan(0);
-          for (const p of paths) expect(p.some((e) => e.el.kind === 'contact' && e.el.device === other && (e.el.contact === 'nc' || e.el.contact === 'nc-to')), `${tag}: ${coil} through ${other} NC`).toBe(true);
+          for (const p of paths)
+            expect(
+              p.some((e) => e.el.kind === 'contact' && e.el.device === other && (e.el.contact === 'nc' || e.el.contact === 'nc-to')),
+              `${tag}: ${coil} through ${other} NC`,
+            ).toBe(true);
           checked.push(`${tag}:${coil}`);
         }
       }
@@ -107,7 +176,11 @@ describe('control schematics', () => {
         if (!p.some((e) => e.el.kind === 'coil')) continue;
         coils++;
         if (b.overload === 'drive') continue;
-        const trip = p.some((e) => e.el.kind === 'overload' || (b.overload === 'starter' && e.el.kind === 'contact' && (e.el.label === 'OL TRIP' || e.el.label === 'FAULT')));
+        const trip = p.some(
+          (e) =>
+            e.el.kind === 'overload' ||
+            (b.overload === 'starter' && e.el.kind === 'contact' && (e.el.label === 'OL TRIP' || e.el.label === 'FAULT')),
+        );
         expect(trip, `${b.tag}: ${p.map((e) => ('device' in e.el ? e.el.device : e.el.kind)).join(' → ')}`).toBe(true);
       }
     }
@@ -121,7 +194,8 @@ describe('control schematics', () => {
   it('puts the phase monitor relay’s contact in series with every coil where the selection has one', () => {
     const b = bucket('C-1');
     expect(b.devices.some((x) => x.tag.endsWith('PMR'))).toBe(true);
-    for (const p of railPaths(b.layout).filter((p) => p.some((e) => e.el.kind === 'coil'))) expect(p.some((e) => e.el.kind === 'contact' && e.el.device.endsWith('PMR'))).toBe(true);
+    for (const p of railPaths(b.layout).filter((p) => p.some((e) => e.el.kind === 'coil')))
+      expect(p.some((e) => e.el.kind === 'contact' && e.el.device.endsWith('PMR'))).toBe(true);
   });
 
   it('draws the control scheme answered: seal-in around START, a maintained remote contact, or a hand-off-auto selector', () => {
@@ -135,7 +209,12 @@ describe('control schematics', () => {
     expect(two.some((p) => p.some((e) => e.el.kind === 'push'))).toBe(false);
     expect(bucket('P-2').notes.join(' ')).toMatch(/restarts/);
     const hoa = coilPaths('P-3');
-    expect(hoa.map((p) => p.find((e) => e.el.kind === 'selector')?.el).map((e) => (e as { position: string }).position).sort()).toEqual(['A', 'H']);
+    expect(
+      hoa
+        .map((p) => p.find((e) => e.el.kind === 'selector')?.el)
+        .map((e) => (e as { position: string }).position)
+        .sort(),
+    ).toEqual(['A', 'H']);
   });
 
   it('cross-references each contact to its coil’s rung and each coil to its contacts', () => {
@@ -195,13 +274,36 @@ describe('terminal plan and wire list', () => {
 
 describe('panel marking', () => {
   it('prints the nameplate values (NEC 2023 409.110) with the shop name given, else a placeholder', () => {
-    const np = panelNameplate({ rollup: { feeder: { minAmpacity: 100, conductorSize: '3 AWG', ocpdMaxAmps: 150, basis: '' }, totalFlcAmps: 77, largestMotorTag: 'P-1' }, supply: { volts: 480, phases: 3, hz: 60 }, sccrKa: 10, enclosureType: '12' });
+    const np = panelNameplate({
+      rollup: {
+        feeder: { minAmpacity: 100, conductorSize: '3 AWG', ocpdMaxAmps: 150, basis: '' },
+        totalFlcAmps: 77,
+        largestMotorTag: 'P-1',
+      },
+      supply: { volts: 480, phases: 3, hz: 60 },
+      sccrKa: 10,
+      enclosureType: '12',
+    });
     const svg = nameplateSvg(np, { drawingNumber: 'J-1-MCC-E', fullLoadWorking: '' });
     expect(svg).toContain('77 A');
     expect(svg).toContain('10 kA rms symmetrical, 480 V');
     expect(svg).toContain('[Shop name]');
-    expect(nameplateSvg(np, { shopName: 'Northfield Panel Works', drawingNumber: 'J-1-MCC-E', fullLoadWorking: '' })).toContain('Northfield Panel Works');
-    const none = nameplateSvg(panelNameplate({ rollup: { feeder: { minAmpacity: 100, conductorSize: '3 AWG', ocpdMaxAmps: 150, basis: '' }, totalFlcAmps: 77, largestMotorTag: 'P-1' }, supply: { volts: 480, phases: 3, hz: 60 }, sccrKa: null, enclosureType: '12' }), { drawingNumber: 'x', fullLoadWorking: '' });
+    expect(nameplateSvg(np, { shopName: 'Northfield Panel Works', drawingNumber: 'J-1-MCC-E', fullLoadWorking: '' })).toContain(
+      'Northfield Panel Works',
+    );
+    const none = nameplateSvg(
+      panelNameplate({
+        rollup: {
+          feeder: { minAmpacity: 100, conductorSize: '3 AWG', ocpdMaxAmps: 150, basis: '' },
+          totalFlcAmps: 77,
+          largestMotorTag: 'P-1',
+        },
+        supply: { volts: 480, phases: 3, hz: 60 },
+        sccrKa: null,
+        enclosureType: '12',
+      }),
+      { drawingNumber: 'x', fullLoadWorking: '' },
+    );
     expect(none).toContain('NOT ESTABLISHED');
   });
 });

@@ -23,9 +23,24 @@ describe('npm run -s select -- FILE.json', () => {
     expect(stderr).toBe('');
     expect(code).toBe(0);
     const out = JSON.parse(stdout);
-    expect(out.results.map((r: { tag: string }) => r.tag)).toEqual(['P-101', 'CV-201', 'F-301', 'C-401', 'AG-501', 'SP-601', 'HS-701', 'W-801']);
+    expect(out.results.map((r: { tag: string }) => r.tag)).toEqual([
+      'P-101',
+      'CV-201',
+      'F-301',
+      'C-401',
+      'AG-501',
+      'SP-601',
+      'HS-701',
+      'W-801',
+    ]);
     const [p101, cv201, f301, c401, ag501, sp601, hs701, w801] = out.results;
-    expect(p101).toMatchObject({ flcAmps: 34, scpd: { ratingAmps: 90 }, conductor: { size: '8 AWG' }, overload: { maxSettingAmps: 38.75 }, relays: { phaseLoss: true } }); // NEC 2023 Tables 430.250, 430.52, 310.16
+    expect(p101).toMatchObject({
+      flcAmps: 34,
+      scpd: { ratingAmps: 90 },
+      conductor: { size: '8 AWG' },
+      overload: { maxSettingAmps: 38.75 },
+      relays: { phaseLoss: true },
+    }); // NEC 2023 Tables 430.250, 430.52, 310.16
     expect(cv201.starter).toMatchObject({ type: 'FVR', reversingContactors: true, interlock: true, iecCategory: 'AC-4' });
     expect(cv201.enclosure).toMatchObject({ nemaType: '4X', ipCode: 'IP66' });
     expect(f301.starter.type).toBe('VFD');
@@ -41,7 +56,11 @@ describe('npm run -s select -- FILE.json', () => {
     // 430.24, 430.62(A): 317 A of motors on the 480 V bus, plus the primary currents of the panel's sources for
     // SP-601 (T1, 5 kVA 480-240/120 V: 10.42 A), HS-701 (DC1: 16.13 A estimated) and W-801 (T2, 9 kVA 480-240 V: 10.83 A)
     expect(out.panel.feeder).toMatchObject({ minAmpacity: 354.38, conductorSize: '500 kcmil', ocpdMaxAmps: 500 }); // 500 kcmil Cu 75 °C = 380 A, NEC 2023 Table 310.16
-    expect(out.panel.otherSources.map((s: { tag: string; kva: number | null }) => [s.tag, s.kva])).toEqual([['T1', 5], ['DC1', null], ['T2', 9]]);
+    expect(out.panel.otherSources.map((s: { tag: string; kva: number | null }) => [s.tag, s.kva])).toEqual([
+      ['T1', 5],
+      ['DC1', null],
+      ['T2', 9],
+    ]);
     for (const r of out.results) expect(r.errors).toEqual([]);
   }, 60_000);
 
@@ -83,12 +102,16 @@ describe('npm run -s select -- FILE.json', () => {
     expect(r.code).toBe(2);
     const { errors, results } = JSON.parse(r.stdout);
     expect(results).toBeUndefined();
-    expect(errors).toEqual([{ path: 'loads[0].volts', message: expect.stringMatching(/rated 400 V: no full-load current table covers it/) }]);
+    expect(errors).toEqual([
+      { path: 'loads[0].volts', message: expect.stringMatching(/rated 400 V: no full-load current table covers it/) },
+    ]);
   }, 60_000);
 
   it('with a nameplate FLA the nameplate governs, said in flcSource and cautioned; exit 0', async () => {
     // on a 400 V 50 Hz supply: the motor is on the panel's own bus (on a 480 V panel it would need a 400 V source, which exits 3)
-    const r = await run(inputFile({ supply: { ...supply, volts: 400, hz: 50 }, loads: [{ tag: 'M-400', supply: 'ac3', hp: 10, volts: 400, fla: 15.5 }] }));
+    const r = await run(
+      inputFile({ supply: { ...supply, volts: 400, hz: 50 }, loads: [{ tag: 'M-400', supply: 'ac3', hp: 10, volts: 400, fla: 15.5 }] }),
+    );
     expect(r.code).toBe(0);
     const [m] = JSON.parse(r.stdout).results;
     expect(m.flcAmps).toBe(15.5); // NEC 2023 430.6(A)(1): nameplate current where the tables do not apply
@@ -97,7 +120,9 @@ describe('npm run -s select -- FILE.json', () => {
   }, 60_000);
 
   it('a result with errors exits 3 with the results and the errors listed (a three-phase motor on a single-phase supply)', async () => {
-    const r = await run(inputFile({ supply: { ...supply, volts: 240, phases: 1 }, loads: [{ tag: 'M-3P', supply: 'ac3', hp: 5, volts: 230 }] }));
+    const r = await run(
+      inputFile({ supply: { ...supply, volts: 240, phases: 1 }, loads: [{ tag: 'M-3P', supply: 'ac3', hp: 5, volts: 230 }] }),
+    );
     expect(r.code).toBe(3);
     const out = JSON.parse(r.stdout);
     expect(out.results).toHaveLength(1);

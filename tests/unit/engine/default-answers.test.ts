@@ -53,17 +53,33 @@ describe('one default for an unknown service factor', () => {
     for (const key of ['supply', 'volts', 'hp', 'kw']) expect(start[key], key).toBeUndefined();
     // the rest is the schema's own defaults, nothing of the wizard's own
     expect(start).toEqual({ tag: '', ...loadDefaults() });
-    expect(loadDefaults()).toMatchObject({ hz: 60, duty: 'continuous', speedControl: 'fixed', scpdType: 'inverse-time-breaker', conductor: { material: 'cu', tempRatingC: 75 } });
+    expect(loadDefaults()).toMatchObject({
+      hz: 60,
+      duty: 'continuous',
+      speedControl: 'fixed',
+      scpdType: 'inverse-time-breaker',
+      conductor: { material: 'cu', tempRatingC: 75 },
+    });
   });
 
   it('wizard, import and CLI: overload limit 115 % of FLA with service factor 1.0 assumed', async () => {
     const [wizard, imported, cli] = await Promise.all([viaWizard(), viaImport(), viaCli()]);
-    for (const [how, s] of [['wizard', wizard], ['import', imported], ['cli', cli]] as const) {
+    for (const [how, s] of [
+      ['wizard', wizard],
+      ['import', imported],
+      ['cli', cli],
+    ] as const) {
       // NEC 2023 430.32(A)(1): service factor below 1.15 and no marked rise of 40 °C or less: 115 % of FLA
       expect(s.overload.maxPercent, how).toBe(115);
       expect(s.overload.maxSettingAmps, how).toBeCloseTo(31 * 1.15, 2); // 35.65 A
-      expect(s.assumed.map((a) => a.field), how).toContain('serviceFactor');
-      expect(s.assumed.map((a) => a.field), how).toContain('environment');
+      expect(
+        s.assumed.map((a) => a.field),
+        how,
+      ).toContain('serviceFactor');
+      expect(
+        s.assumed.map((a) => a.field),
+        how,
+      ).toContain('environment');
     }
     expect(wizard.overload).toEqual(imported.overload);
     expect(cli.overload).toEqual(imported.overload);

@@ -31,19 +31,28 @@ const PERMISSIVE = [
 
 describe('hazardous-location rules never invite a lesser starter enclosure (NEC 2023 501.115, 502.115)', () => {
   it('finds the four hazardous-location rules of rules/enclosure', () => {
-    expect(hazardousRules.map((r) => r.id).sort()).toEqual(['enclosure-class1-div1', 'enclosure-class1-div2', 'enclosure-class2-div1', 'enclosure-class2-div2']);
+    expect(hazardousRules.map((r) => r.id).sort()).toEqual([
+      'enclosure-class1-div1',
+      'enclosure-class1-div2',
+      'enclosure-class2-div1',
+      'enclosure-class2-div2',
+    ]);
   });
 
-  it.each(hazardousRules.map((r) => [r.id, r] as const))('%s: reason has no permissive wording, and the engineer is flagged', (_id, rule) => {
-    const p = rule.event.params;
-    for (const re of PERMISSIVE) expect(p.reason, `${rule.id} reason matches ${re}`).not.toMatch(re);
-    expect(p.decision).not.toMatch(/general[- ]purpose/i);
-    expect(p.set?.['enclosure.flagForEngineer']).toBe(true);
-    expect(p.caution).toMatch(/engineer to decide and sign/);
-  });
+  it.each(hazardousRules.map((r) => [r.id, r] as const))(
+    '%s: reason has no permissive wording, and the engineer is flagged',
+    (_id, rule) => {
+      const p = rule.event.params;
+      for (const re of PERMISSIVE) expect(p.reason, `${rule.id} reason matches ${re}`).not.toMatch(re);
+      expect(p.decision).not.toMatch(/general[- ]purpose/i);
+      expect(p.set?.['enclosure.flagForEngineer']).toBe(true);
+      expect(p.caution).toMatch(/engineer to decide and sign/);
+    },
+  );
 
   it('the PERMISSIVE check catches the old Class I, Division 2 wording', () => {
-    const old = 'Class I, Division 2: Type 7 is acceptable, but NEC Article 501 also permits purged, non-incendive or general-purpose enclosures for non-arcing devices — the engineer decides.';
+    const old =
+      'Class I, Division 2: Type 7 is acceptable, but NEC Article 501 also permits purged, non-incendive or general-purpose enclosures for non-arcing devices — the engineer decides.';
     expect(PERMISSIVE.some((re) => re.test(old))).toBe(true);
   });
 

@@ -7,7 +7,10 @@ import { motor, selector, supply480 } from './selector-setup';
 describe('applyOverrides', () => {
   it('writes the overridden values over the engine result and leaves the rest alone', async () => {
     const sel = await selector.selectLoad(motor({ hp: 25, volts: 460, fla: 31, serviceFactor: 1.15 }), supply480);
-    const eff = applyOverrides(sel, [{ field: 'overload.tripClass', value: '20' }, { field: 'enclosure.nemaType', value: '4X' }]);
+    const eff = applyOverrides(sel, [
+      { field: 'overload.tripClass', value: '20' },
+      { field: 'enclosure.nemaType', value: '4X' },
+    ]);
     expect(eff.overload.tripClass).toBe(20);
     expect(eff.enclosure.nemaType).toBe('4X');
     expect(eff.scpd).toEqual(sel.scpd);
@@ -15,7 +18,10 @@ describe('applyOverrides', () => {
   });
 
   it('moves the overload relay with a starter type changed to wye-delta: FLA/√3 in the delta windings (common practice)', async () => {
-    const sel = await selector.selectLoad(motor({ hp: 25, volts: 460, fla: 31, serviceFactor: 1.15, leads: 6, connection: 'delta' }), supply480);
+    const sel = await selector.selectLoad(
+      motor({ hp: 25, volts: 460, fla: 31, serviceFactor: 1.15, leads: 6, connection: 'delta' }),
+      supply480,
+    );
     expect(sel.starter.type).toBe('FVNR');
     expect(relayWiringText(sel)).toBeNull();
     const eff = applyOverrides(sel, [{ field: 'starter.type', value: 'wye-delta' }]);
@@ -26,15 +32,36 @@ describe('applyOverrides', () => {
   });
 
   it('works the relay out the same way for a selection stored before the relay was recorded', async () => {
-    const sel = await selector.selectLoad(motor({ hp: 100, volts: 460, fla: 118, serviceFactor: 1.15, leads: 6, connection: 'delta', startingLimit: 'reduced-inrush', starterPreference: 'wye-delta' }), supply480);
+    const sel = await selector.selectLoad(
+      motor({
+        hp: 100,
+        volts: 460,
+        fla: 118,
+        serviceFactor: 1.15,
+        leads: 6,
+        connection: 'delta',
+        startingLimit: 'reduced-inrush',
+        starterPreference: 'wye-delta',
+      }),
+      supply480,
+    );
     const stored = { ...sel, overload: { ...sel.overload, relay: undefined } };
     expect(relayOf(stored)).toEqual(sel.overload.relay);
     expect(relayWiringText(stored)).toBe('1 relay in the delta windings: set 68.13 A, max 85.16 A each');
   });
 
-  it('drops the motor-lead conductors and per-winding devices sized for the engine\'s part-winding starter when another starter is fitted', async () => {
+  it("drops the motor-lead conductors and per-winding devices sized for the engine's part-winding starter when another starter is fitted", async () => {
     const sel = await selector.selectLoad(
-      motor({ hp: 25, volts: 230, fla: 60, serviceFactor: 1.0, leads: 9, connection: 'wye', startingLimit: 'reduced-inrush', starterPreference: 'part-winding' }),
+      motor({
+        hp: 25,
+        volts: 230,
+        fla: 60,
+        serviceFactor: 1.0,
+        leads: 9,
+        connection: 'wye',
+        startingLimit: 'reduced-inrush',
+        starterPreference: 'part-winding',
+      }),
       { ...supply480, volts: 240 },
     );
     expect(sel.conductor.motorLeads).toBeDefined();

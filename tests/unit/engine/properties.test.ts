@@ -30,20 +30,33 @@ const dc = fc.record({
   dcField: fc.constantFrom('shunt' as const, 'series' as const, 'compound' as const),
 });
 const common = fc.record({
-  scpdType: fc.constantFrom('inverse-time-breaker' as const, 'instantaneous-trip-breaker' as const, 'dual-element-fuse' as const, 'non-time-delay-fuse' as const),
-  conductor: fc.record({ material: fc.constantFrom('cu' as const, 'al' as const), tempRatingC: fc.constantFrom(60 as const, 75 as const, 90 as const) }),
+  scpdType: fc.constantFrom(
+    'inverse-time-breaker' as const,
+    'instantaneous-trip-breaker' as const,
+    'dual-element-fuse' as const,
+    'non-time-delay-fuse' as const,
+  ),
+  conductor: fc.record({
+    material: fc.constantFrom('cu' as const, 'al' as const),
+    tempRatingC: fc.constantFrom(60 as const, 75 as const, 90 as const),
+  }),
   reversing: fc.boolean(),
   jogging: fc.boolean(),
   critical: fc.boolean(),
   inertia: fc.constantFrom('normal' as const, 'high' as const, 'very-high' as const),
-  environment: fc.option(fc.constantFrom('indoor-dry' as const, 'outdoor' as const, 'washdown' as const, 'class1-div1' as const, 'class2-div2' as const), { nil: undefined }),
+  environment: fc.option(
+    fc.constantFrom('indoor-dry' as const, 'outdoor' as const, 'washdown' as const, 'class1-div1' as const, 'class2-div2' as const),
+    { nil: undefined },
+  ),
 });
 const loadArb = fc.tuple(fc.oneof(ac3, ac1, dc), common).map(([k, c]) => {
   const l = { tag: 'PT', ...k, ...c } as Record<string, unknown>;
   if (l.energyEfficient === false) delete l.design;
   return l as LoadInput;
 });
-const supplyArb = fc.record({ ambientC: fc.integer({ min: 10, max: 50 }) }).map((s): SupplyInput => ({ volts: 480, phases: 3, hz: 60, availableFaultKa: 35, ambientC: s.ambientC }));
+const supplyArb = fc
+  .record({ ambientC: fc.integer({ min: 10, max: 50 }) })
+  .map((s): SupplyInput => ({ volts: 480, phases: 3, hz: 60, availableFaultKa: 35, ambientC: s.ambientC }));
 
 describe('properties of every selection', () => {
   it('the branch device never exceeds what NEC 2023 430.52 with Exception 1 permits', async () => {

@@ -10,7 +10,15 @@ const good = {
   name: 'Pumps in this shop get Class 20',
   priority: 90,
   conditions: { all: [{ fact: 'hp', operator: 'greaterThanInclusive', value: 20 }] },
-  event: { type: 'decision', params: { decision: 'Overload trip class 20', reason: 'shop standard for large pumps', basis: 'common practice', set: { 'overload.tripClass': 20 } } },
+  event: {
+    type: 'decision',
+    params: {
+      decision: 'Overload trip class 20',
+      reason: 'shop standard for large pumps',
+      basis: 'common practice',
+      set: { 'overload.tripClass': 20 },
+    },
+  },
 };
 
 function refusal(content: unknown, file = 'rules/overload-class/pump-always-class-20.json'): string {
@@ -25,19 +33,55 @@ function refusal(content: unknown, file = 'rules/overload-class/pump-always-clas
 
 describe('malformed rule files are refused with their name and the problem', () => {
   it.each([
-    ['unknown fact', { ...good, conditions: { all: [{ fact: 'horsepower', operator: 'greaterThan', value: 20 }] } }, /unknown fact "horsepower"/],
-    ['unknown operator', { ...good, conditions: { all: [{ fact: 'hp', operator: 'biggerThan', value: 20 }] } }, /unknown operator "biggerThan"/],
-    ['impossible fact value', { ...good, conditions: { all: [{ fact: 'supply', operator: 'equal', value: 'ac4' }] } }, /"ac4" is not a possible value of fact "supply"/],
-    ['numeric operator on text', { ...good, conditions: { all: [{ fact: 'hp', operator: 'greaterThan', value: '20' }] } }, /needs a number value/],
-    ['unknown decision', { ...good, event: { ...good.event, params: { ...good.event.params, set: { 'overload.class': 20 } } } }, /unknown decision "overload.class"/],
-    ['bad decision value', { ...good, event: { ...good.event, params: { ...good.event.params, set: { 'overload.tripClass': 15 } } } }, /15 is not a valid value for "overload.tripClass"/],
-    ['missing basis', { ...good, event: { ...good.event, params: { decision: 'x', reason: 'y', set: { 'overload.tripClass': 20 } } } }, /event\.params\.basis/],
+    [
+      'unknown fact',
+      { ...good, conditions: { all: [{ fact: 'horsepower', operator: 'greaterThan', value: 20 }] } },
+      /unknown fact "horsepower"/,
+    ],
+    [
+      'unknown operator',
+      { ...good, conditions: { all: [{ fact: 'hp', operator: 'biggerThan', value: 20 }] } },
+      /unknown operator "biggerThan"/,
+    ],
+    [
+      'impossible fact value',
+      { ...good, conditions: { all: [{ fact: 'supply', operator: 'equal', value: 'ac4' }] } },
+      /"ac4" is not a possible value of fact "supply"/,
+    ],
+    [
+      'numeric operator on text',
+      { ...good, conditions: { all: [{ fact: 'hp', operator: 'greaterThan', value: '20' }] } },
+      /needs a number value/,
+    ],
+    [
+      'unknown decision',
+      { ...good, event: { ...good.event, params: { ...good.event.params, set: { 'overload.class': 20 } } } },
+      /unknown decision "overload.class"/,
+    ],
+    [
+      'bad decision value',
+      { ...good, event: { ...good.event, params: { ...good.event.params, set: { 'overload.tripClass': 15 } } } },
+      /15 is not a valid value for "overload.tripClass"/,
+    ],
+    [
+      'missing basis',
+      { ...good, event: { ...good.event, params: { decision: 'x', reason: 'y', set: { 'overload.tripClass': 20 } } } },
+      /event\.params\.basis/,
+    ],
     ['missing priority', { ...good, priority: undefined }, /priority/],
     ['id not matching the file name', { ...good, id: 'other-name' }, /must match the file name/],
     ['empty all', { ...good, conditions: { all: [] } }, /non-empty array/],
-    ['no top-level all/any/not', { ...good, conditions: { fact: 'hp', operator: 'equal', value: 1 } }, /exactly one of "all", "any" or "not"/],
+    [
+      'no top-level all/any/not',
+      { ...good, conditions: { fact: 'hp', operator: 'equal', value: 1 } },
+      /exactly one of "all", "any" or "not"/,
+    ],
     ['unknown key', { ...good, weight: 3 }, /Unrecognized key/],
-    ['nothing to do', { ...good, event: { type: 'decision', params: { decision: 'x', reason: 'y', basis: 'common practice' } } }, /at least one of "set", "caution" or "error"/],
+    [
+      'nothing to do',
+      { ...good, event: { type: 'decision', params: { decision: 'x', reason: 'y', basis: 'common practice' } } },
+      /at least one of "set", "caution" or "error"/,
+    ],
   ])('%s', (_label, content, problem) => {
     const msg = refusal(content);
     expect(msg.startsWith('rules/overload-class/pump-always-class-20.json: ')).toBe(true);
@@ -46,7 +90,9 @@ describe('malformed rule files are refused with their name and the problem', () 
   it('a duplicate id in another folder is refused', () => {
     const dup = ruleFiles.find((f) => f.file.endsWith('/fvr-reversing.json'));
     expect(dup).toBeDefined();
-    expect(() => createSelector([...ruleFiles, { file: 'rules/extra/fvr-reversing.json', content: dup?.content }])).toThrow(/duplicate rule id "fvr-reversing"/);
+    expect(() => createSelector([...ruleFiles, { file: 'rules/extra/fvr-reversing.json', content: dup?.content }])).toThrow(
+      /duplicate rule id "fvr-reversing"/,
+    );
   });
   it('the error carries the file and problem as details', () => {
     try {
@@ -82,7 +128,15 @@ describe('an added rule file changes outcomes with no code change', () => {
           name: 'Outdoor panels get a space heater',
           priority: 5,
           conditions: { all: [{ fact: 'environment', operator: 'equal', value: 'outdoor' }] },
-          event: { type: 'decision', params: { decision: 'Space heater', reason: 'condensation', basis: 'common practice', caution: 'Add a thermostat-controlled space heater (NEC {edition} review).' } },
+          event: {
+            type: 'decision',
+            params: {
+              decision: 'Space heater',
+              reason: 'condensation',
+              basis: 'common practice',
+              caution: 'Add a thermostat-controlled space heater (NEC {edition} review).',
+            },
+          },
         },
       },
     ]);
@@ -99,7 +153,10 @@ describe('an added rule file changes outcomes with no code change', () => {
           name: 'Oil mist areas',
           priority: 10,
           conditions: { all: [{ fact: 'environment', operator: 'equal', value: 'indoor-dusty' }] },
-          event: { type: 'decision', params: { decision: 'Type 13', reason: 'oil mist', basis: 'NEMA 250 Type 13', set: { 'enclosure.nemaType': '13' } } },
+          event: {
+            type: 'decision',
+            params: { decision: 'Type 13', reason: 'oil mist', basis: 'NEMA 250 Type 13', set: { 'enclosure.nemaType': '13' } },
+          },
         },
       },
     ]);

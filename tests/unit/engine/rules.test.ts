@@ -46,7 +46,14 @@ describe('starter type', () => {
     expect(r.cautions.some((c) => c.startsWith('Inside-delta was asked for'))).toBe(true);
   });
   it('wye-delta needs a six-lead motor wound to run in delta (common practice; NEC 2023 430.22(C))', async () => {
-    const ok = await sel({ startingLimit: 'reduced-inrush', starterPreference: 'wye-delta', leads: 6, connection: 'delta', hp: 100, fla: 118 });
+    const ok = await sel({
+      startingLimit: 'reduced-inrush',
+      starterPreference: 'wye-delta',
+      leads: 6,
+      connection: 'delta',
+      hp: 100,
+      fla: 118,
+    });
     expect(ok.starter.type).toBe('wye-delta');
     expect(ok.starter.iecAmps).toBeCloseTo(124 / Math.sqrt(3), 1); // each contactor carries FLC/√3
     expect(ok.cautions.some((c) => c.includes('430.22(C)'))).toBe(true);
@@ -56,10 +63,24 @@ describe('starter type', () => {
     expect(wye.errors).toEqual([]);
   });
   it('part-winding for a nine-lead motor at its low voltage; refused at 460 V', async () => {
-    const ok = await sel({ startingLimit: 'reduced-inrush', starterPreference: 'part-winding', leads: 9, connection: 'wye', volts: 230, hp: 25 });
+    const ok = await sel({
+      startingLimit: 'reduced-inrush',
+      starterPreference: 'part-winding',
+      leads: 9,
+      connection: 'wye',
+      volts: 230,
+      hp: 25,
+    });
     expect(ok.starter.type).toBe('part-winding');
     expect(ok.cautions.some((c) => c.includes('430.4'))).toBe(true);
-    const no = await sel({ startingLimit: 'reduced-inrush', starterPreference: 'part-winding', leads: 9, connection: 'wye', volts: 460, hp: 25 });
+    const no = await sel({
+      startingLimit: 'reduced-inrush',
+      starterPreference: 'part-winding',
+      leads: 9,
+      connection: 'wye',
+      volts: 460,
+      hp: 25,
+    });
     expect(no.starter.type).toBe('RVSS');
   });
   it('two-speed motor -> two-speed starter; VFD still wins over it by priority', async () => {

@@ -11,7 +11,19 @@ describe('selectionDifferences', () => {
   });
 
   it('names each changed decision with the stored and the current value; reasoning texts alone do not count', async () => {
-    const now = await selector.selectLoad(motor({ hp: 100, volts: 460, fla: 118, serviceFactor: 1.15, leads: 6, connection: 'delta', startingLimit: 'reduced-inrush', starterPreference: 'wye-delta' }), supply480);
+    const now = await selector.selectLoad(
+      motor({
+        hp: 100,
+        volts: 460,
+        fla: 118,
+        serviceFactor: 1.15,
+        leads: 6,
+        connection: 'delta',
+        startingLimit: 'reduced-inrush',
+        starterPreference: 'wye-delta',
+      }),
+      supply480,
+    );
     const stored = structuredClone(now);
     // as an earlier release would have stored it: no motor-lead conductors, no relay recorded, class 30
     delete stored.conductor.motorLeads;
@@ -30,11 +42,19 @@ describe('selectionDifferences', () => {
   });
 
   it('counts cautions as one decision and quotes the new wording', async () => {
-    const now = await selector.selectLoad(motor({ hp: 25, volts: 460, fla: 31, serviceFactor: 1.15, reverseRotationHazard: true }), supply480);
+    const now = await selector.selectLoad(
+      motor({ hp: 25, volts: 460, fla: 31, serviceFactor: 1.15, reverseRotationHazard: true }),
+      supply480,
+    );
     expect(now.cautions.length).toBeGreaterThan(0);
     const stored = { ...now, cautions: now.cautions.map((c, i) => (i === 0 ? `${c} (old)` : c)) };
     const [d] = selectionDifferences(stored, now);
-    expect(d).toEqual({ field: 'cautions', label: 'Cautions', from: String(now.cautions.length), to: `${now.cautions.length} (1 reworded): “${now.cautions[0]}”` });
+    expect(d).toEqual({
+      field: 'cautions',
+      label: 'Cautions',
+      from: String(now.cautions.length),
+      to: `${now.cautions.length} (1 reworded): “${now.cautions[0]}”`,
+    });
     const fewer = { ...now, cautions: now.cautions.slice(1) };
     expect(selectionDifferences(fewer, now)[0].to).toBe(`${now.cautions.length} (1 new or reworded): “${now.cautions[0]}”`);
   });

@@ -104,12 +104,40 @@ describe('branch short-circuit and ground-fault protection (NEC 2023 430.52, Tab
     expect(r2020.basis).toMatch(/^NEC 2020 /);
   });
   it('Exception 2 override: 34 A x 400 % = 136 A -> 125 A (in no case exceeding), and refused above 400 %', () => {
-    const r = branchProtection({ flcAmps: 34, type: 'inverse-time-breaker', motor: 'squirrel-cage', override: { maxPercent: 400, reason: 'high-inertia fan trips on start' } }, '2023');
+    const r = branchProtection(
+      {
+        flcAmps: 34,
+        type: 'inverse-time-breaker',
+        motor: 'squirrel-cage',
+        override: { maxPercent: 400, reason: 'high-inertia fan trips on start' },
+      },
+      '2023',
+    );
     expect(r.ratingAmps).toBe(125);
     expect(r.exception).toBe('exception-2');
     expect(r.basis).toMatch(/430\.52\(C\)\(1\) Exception No\. 2/);
-    expect(() => branchProtection({ flcAmps: 34, type: 'inverse-time-breaker', motor: 'squirrel-cage', override: { maxPercent: 401, reason: 'too much protection headroom' } }, '2023')).toThrow(ValidationError);
-    expect(() => branchProtection({ flcAmps: 124, type: 'inverse-time-breaker', motor: 'squirrel-cage', override: { maxPercent: 350, reason: 'above 100 A FLC the limit is 300 %' } }, '2023')).toThrow(ValidationError);
+    expect(() =>
+      branchProtection(
+        {
+          flcAmps: 34,
+          type: 'inverse-time-breaker',
+          motor: 'squirrel-cage',
+          override: { maxPercent: 401, reason: 'too much protection headroom' },
+        },
+        '2023',
+      ),
+    ).toThrow(ValidationError);
+    expect(() =>
+      branchProtection(
+        {
+          flcAmps: 124,
+          type: 'inverse-time-breaker',
+          motor: 'squirrel-cage',
+          override: { maxPercent: 350, reason: 'above 100 A FLC the limit is 300 %' },
+        },
+        '2023',
+      ),
+    ).toThrow(ValidationError);
   });
 });
 
@@ -145,7 +173,11 @@ describe('conductors (NEC 2023 430.22, Table 310.16, Table 310.15(B)(1)(1), 110.
 
 describe('disconnect, locked rotor, synchronous speed, NEMA size, soft starter', () => {
   it('disconnect 115 % of FLC and motor hp (NEC 2023 430.110(A), 430.109(A))', () => {
-    expect(motorDisconnect({ flcAmps: 34, hp: 25 }, '2023')).toEqual({ minAmps: 39.1, minHp: 25, basis: 'NEC 2023 430.110(A), 430.109(A)' });
+    expect(motorDisconnect({ flcAmps: 34, hp: 25 }, '2023')).toEqual({
+      minAmps: 39.1,
+      minHp: 25,
+      basis: 'NEC 2023 430.110(A), 430.109(A)',
+    });
     expect(motorDisconnect({ flcAmps: 96, hp: 75, driveInputAmps: 100 }, '2023').minAmps).toBe(115);
   });
   it('25 hp code G at 460 V: 5.6–6.29 kVA/hp -> 175.7–197.4 A (NEC 2023 Table 430.7(B))', () => {
@@ -159,7 +191,11 @@ describe('disconnect, locked rotor, synchronous speed, NEMA size, soft starter',
     expect(r.max).toBe(86.9);
   });
   it.each([
-    [60, 4, 1800], [60, 2, 3600], [50, 2, 3000], [50, 6, 1000], [60, 8, 900],
+    [60, 4, 1800],
+    [60, 2, 3600],
+    [50, 2, 3000],
+    [50, 6, 1000],
+    [60, 8, 900],
   ])('%s Hz, %s poles -> %s r/min (n = 120 f / p)', (hz, p, n) => {
     expect(synchronousRpm(hz, p)).toBe(n);
   });

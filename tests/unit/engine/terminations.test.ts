@@ -34,7 +34,7 @@ describe('the termination column (110.14(C)(1))', () => {
   });
 });
 
-describe('motor branch conductors with the panel\'s termination answer', () => {
+describe("motor branch conductors with the panel's termination answer", () => {
   it('10 hp, 460 V: 14 A × 1.25 = 17.5 A; 14 AWG at 75 °C (20 A), and 12 AWG beside it at 60 °C (14 AWG is 15 A there)', async () => {
     const r = await selector.selectLoad(motor({ hp: 10, volts: 460 }), supply480);
     expect(r.flcAmps).toBe(14); // NEC 2023 Table 430.250

@@ -6,7 +6,10 @@ import { motor, selector, selector2020, supply240, supply480 } from './selector-
 
 describe('worked branch circuits (NEC 2023)', () => {
   it('25 hp, 460 V, three-phase, SF 1.15, nameplate 31 A, inverse-time breaker', async () => {
-    const r = await selector.selectLoad(motor({ tag: 'P-101', hp: 25, volts: 460, fla: 31, serviceFactor: 1.15, codeLetter: 'G', poles: 4 }), supply480);
+    const r = await selector.selectLoad(
+      motor({ tag: 'P-101', hp: 25, volts: 460, fla: 31, serviceFactor: 1.15, codeLetter: 'G', poles: 4 }),
+      supply480,
+    );
     expect(r.flcAmps).toBe(34); // NEC 2023 Table 430.250
     expect(r.tableVolts).toBe(460);
     expect(r.conductor.minAmpacity).toBe(42.5); // 430.22: 125 % x 34
@@ -29,7 +32,10 @@ describe('worked branch circuits (NEC 2023)', () => {
   });
 
   it('10 hp, 230 V, three-phase, SF 1.0, nameplate 27 A, dual-element fuses', async () => {
-    const r = await selector.selectLoad(motor({ hp: 10, volts: 230, fla: 27, serviceFactor: 1.0, scpdType: 'dual-element-fuse', codeLetter: 'H' }), supply240);
+    const r = await selector.selectLoad(
+      motor({ hp: 10, volts: 230, fla: 27, serviceFactor: 1.0, scpdType: 'dual-element-fuse', codeLetter: 'H' }),
+      supply240,
+    );
     expect(r.flcAmps).toBe(28); // NEC 2023 Table 430.250
     expect(r.conductor.size).toBe('10 AWG'); // 35 A needed, Table 310.16 10 AWG Cu 75 °C = 35 A
     expect(r.scpd.computedMaxAmps).toBe(49); // 175 % x 28
@@ -42,7 +48,10 @@ describe('worked branch circuits (NEC 2023)', () => {
   });
 
   it('1 hp, 115 V, single-phase: 16 A, 14 AWG, 40 A inverse-time breaker (240.4(G) -> Article 430)', async () => {
-    const r = await selector.selectLoad(motor({ supply: 'ac1', hp: 1, volts: 115, fla: 14.2, serviceFactor: 1.25, singlePhaseType: 'capacitor-start' }), supply240);
+    const r = await selector.selectLoad(
+      motor({ supply: 'ac1', hp: 1, volts: 115, fla: 14.2, serviceFactor: 1.25, singlePhaseType: 'capacitor-start' }),
+      supply240,
+    );
     expect(r.flcAmps).toBe(16); // NEC 2023 Table 430.248
     expect(r.conductor.size).toBe('14 AWG'); // 20 A at 75 °C, Table 310.16
     expect(r.scpd.ratingAmps).toBe(40); // 250 % x 16 = 40, a standard rating
@@ -73,7 +82,10 @@ describe('worked branch circuits (NEC 2023)', () => {
   });
 
   it('15 hp, 208 V Design B energy-efficient, instantaneous trip: 46.2 A x 1100 % = 508.2 A', async () => {
-    const r = await selector.selectLoad(motor({ hp: 15, volts: 208, design: 'B', energyEfficient: true, scpdType: 'instantaneous-trip-breaker' }), { ...supply240, volts: 208 });
+    const r = await selector.selectLoad(
+      motor({ hp: 15, volts: 208, design: 'B', energyEfficient: true, scpdType: 'instantaneous-trip-breaker' }),
+      { ...supply240, volts: 208 },
+    );
     expect(r.flcAmps).toBe(46.2); // NEC 2023 Table 430.250
     expect(r.scpd.maxPercent).toBe(1100); // Table 430.52
     expect(r.scpd.ratingAmps).toBe(508.2);
@@ -115,7 +127,12 @@ describe('worked branch circuits (NEC 2023)', () => {
     );
     expect(bad).toBeInstanceOf(ValidationError);
     expect((bad as ValidationError).details).toEqual([{ path: 'volts', message: expect.stringMatching(/Table 430\.250: 400 V/) }]); // NEC 2023 Table 430.250 has no 400 V column
-    const panel = await selector.selectPanel({ supply: supply480, loads: [motor({ hp: 10 }), motor({ tag: 'M-2', hp: 10, volts: 400 }), motor({ tag: 'M-3', hp: 600 })] }).catch((e: unknown) => e);
+    const panel = await selector
+      .selectPanel({
+        supply: supply480,
+        loads: [motor({ hp: 10 }), motor({ tag: 'M-2', hp: 10, volts: 400 }), motor({ tag: 'M-3', hp: 600 })],
+      })
+      .catch((e: unknown) => e);
     expect((panel as ValidationError).details.map((d) => d.path)).toEqual(['loads[1].volts', 'loads[2].hp']); // 600 hp: above the 500 hp row of Table 430.250
     const ok = await selector.selectLoad(motor({ hp: 10, volts: 400, fla: 15.5 }), supply480);
     expect(ok.errors).toEqual([]);
@@ -139,7 +156,10 @@ describe('worked branch circuits (NEC 2023)', () => {
   it('invalid input throws ValidationError with field paths', async () => {
     await expect(selector.selectLoad({ tag: 'X', supply: 'ac3', volts: 460 } as never, supply480)).rejects.toThrow(ValidationError);
     try {
-      await selector.selectPanel({ supply: supply480, loads: [motor({}), { tag: 'Y', supply: 'ac1', hp: 1, volts: 115, dcField: 'shunt' } as never] });
+      await selector.selectPanel({
+        supply: supply480,
+        loads: [motor({}), { tag: 'Y', supply: 'ac1', hp: 1, volts: 115, dcField: 'shunt' } as never],
+      });
       expect.unreachable();
     } catch (e) {
       expect((e as ValidationError).details).toContainEqual({ path: 'loads[1].dcField', message: 'A DC field applies to DC motors only' });
@@ -185,7 +205,20 @@ describe('panel roll-up through selectPanel (NEC 2023 430.24, 430.62(A))', () =>
 describe('the overload relay as wired', () => {
   it('wye-delta: one relay in the delta windings, set at FLA/√3 with the 430.32 limit scaled alike (common practice)', async () => {
     // 100 hp 460 V six-lead delta-run motor, nameplate 118 A, SF 1.15
-    const r = await selector.selectLoad(motor({ tag: 'C-401', hp: 100, volts: 460, fla: 118, serviceFactor: 1.15, leads: 6, connection: 'delta', startingLimit: 'reduced-inrush', starterPreference: 'wye-delta' }), supply480);
+    const r = await selector.selectLoad(
+      motor({
+        tag: 'C-401',
+        hp: 100,
+        volts: 460,
+        fla: 118,
+        serviceFactor: 1.15,
+        leads: 6,
+        connection: 'delta',
+        startingLimit: 'reduced-inrush',
+        starterPreference: 'wye-delta',
+      }),
+      supply480,
+    );
     expect(r.starter.type).toBe('wye-delta');
     expect(r.overload.maxSettingAmps).toBe(147.5); // NEC 2023 430.32(A)(1): 125 % × 118 A
     // phase current in a delta winding = line current / √3: 118 / 1.732 = 68.13 A; 147.5 / 1.732 = 85.16 A
@@ -197,7 +230,20 @@ describe('the overload relay as wired', () => {
 
   it('part-winding: a relay per half-winding with one-half the trip current (NEC 2023 430.4)', async () => {
     // 25 hp 230 V nine-lead wye motor started part-winding, nameplate 60 A, SF 1.0
-    const r = await selector.selectLoad(motor({ tag: 'F-3', hp: 25, volts: 230, fla: 60, serviceFactor: 1.0, leads: 9, connection: 'wye', startingLimit: 'reduced-inrush', starterPreference: 'part-winding' }), supply240);
+    const r = await selector.selectLoad(
+      motor({
+        tag: 'F-3',
+        hp: 25,
+        volts: 230,
+        fla: 60,
+        serviceFactor: 1.0,
+        leads: 9,
+        connection: 'wye',
+        startingLimit: 'reduced-inrush',
+        starterPreference: 'part-winding',
+      }),
+      supply240,
+    );
     expect(r.starter.type).toBe('part-winding');
     expect(r.overload.maxSettingAmps).toBe(69); // 430.32(A)(1): 115 % × 60 A
     expect(r.overload.relay).toMatchObject({ share: 0.5, count: 2, settingAmps: 30, maxAmps: 34.5, basis: 'NEC 2023 430.4' });
@@ -213,7 +259,20 @@ describe('wye-delta and part-winding branches: conductors to the motor and per-w
   // Clause texts of 430.4 and 430.22(C)/(D) written from memory; "based on 58 % / 50 % of FLC" read as
   // that share in place of the FLC in the 125 % rule of 430.22 (a reading, marked so in the product).
   it('wye-delta 100 hp 460 V: line conductors on 125 % of FLC, six motor leads on 125 % of 58 % of FLC (NEC 2023 430.22(C))', async () => {
-    const r = await selector.selectLoad(motor({ tag: 'C-401', hp: 100, volts: 460, fla: 118, serviceFactor: 1.15, leads: 6, connection: 'delta', startingLimit: 'reduced-inrush', starterPreference: 'wye-delta' }), supply480);
+    const r = await selector.selectLoad(
+      motor({
+        tag: 'C-401',
+        hp: 100,
+        volts: 460,
+        fla: 118,
+        serviceFactor: 1.15,
+        leads: 6,
+        connection: 'delta',
+        startingLimit: 'reduced-inrush',
+        starterPreference: 'wye-delta',
+      }),
+      supply480,
+    );
     expect(r.flcAmps).toBe(124); // Table 430.250: 100 hp, 460 V
     expect(r.conductor).toMatchObject({ minAmpacity: 155, size: '2/0 AWG', ampacity: 175 }); // 1.25 × 124; Table 310.16 Cu 75 °C: 1/0 = 150 A, 2/0 = 175 A
     // 124 × 0.58 × 1.25 = 89.9 A; Table 310.16 Cu 75 °C: 4 AWG = 85 A, 3 AWG = 100 A
@@ -224,7 +283,20 @@ describe('wye-delta and part-winding branches: conductors to the motor and per-w
   });
 
   it('part-winding 25 hp 230 V, inverse-time breaker: one breaker for both windings (430.4 Exception) or one per half-winding at 125 % of FLC (NEC 2023 430.4)', async () => {
-    const r = await selector.selectLoad(motor({ tag: 'F-3', hp: 25, volts: 230, fla: 60, serviceFactor: 1.0, leads: 9, connection: 'wye', startingLimit: 'reduced-inrush', starterPreference: 'part-winding' }), supply240);
+    const r = await selector.selectLoad(
+      motor({
+        tag: 'F-3',
+        hp: 25,
+        volts: 230,
+        fla: 60,
+        serviceFactor: 1.0,
+        leads: 9,
+        connection: 'wye',
+        startingLimit: 'reduced-inrush',
+        starterPreference: 'part-winding',
+      }),
+      supply240,
+    );
     expect(r.flcAmps).toBe(68); // Table 430.250: 25 hp, 230 V
     expect(r.scpd).toMatchObject({ type: 'inverse-time-breaker', maxPercent: 250, computedMaxAmps: 170, ratingAmps: 175 }); // Table 430.52 250 %, Table 240.6(A) next higher
     expect(r.scpd.basis).toMatch(/430\.4 Exception/);
@@ -237,7 +309,21 @@ describe('wye-delta and part-winding branches: conductors to the motor and per-w
   });
 
   it('part-winding with dual-element fuses: one set for both windings at most 150 % of FLC, at or below it (NEC 2023 430.4 Exception)', async () => {
-    const r = await selector.selectLoad(motor({ tag: 'F-4', hp: 25, volts: 230, fla: 60, serviceFactor: 1.0, leads: 9, connection: 'wye', startingLimit: 'reduced-inrush', starterPreference: 'part-winding', scpdType: 'dual-element-fuse' }), supply240);
+    const r = await selector.selectLoad(
+      motor({
+        tag: 'F-4',
+        hp: 25,
+        volts: 230,
+        fla: 60,
+        serviceFactor: 1.0,
+        leads: 9,
+        connection: 'wye',
+        startingLimit: 'reduced-inrush',
+        starterPreference: 'part-winding',
+        scpdType: 'dual-element-fuse',
+      }),
+      supply240,
+    );
     // 150 % × 68 = 102 A -> 100 A (not the 175 % of Table 430.52, which would give 119 A -> 125 A)
     expect(r.scpd).toMatchObject({ type: 'dual-element-fuse', maxPercent: 150, computedMaxAmps: 102, ratingAmps: 100 });
     // per half-winding: one-half of 175 % = 87.5 % × 68 = 59.5 A -> 60 A
@@ -253,7 +339,10 @@ describe('wye-delta and part-winding branches: conductors to the motor and per-w
 
 describe('a three-phase motor on an unbalanced supply (NEMA MG 1 14.35)', () => {
   it('3 % unbalance: derated to 0.88 × 25 hp = 22 hp, with a phase-loss / unbalance relay (common practice) and a caution', async () => {
-    const r = await selector.selectLoad(motor({ hp: 25, volts: 460, fla: 31, serviceFactor: 1.15 }), { ...supply480, voltageUnbalancePercent: 3 });
+    const r = await selector.selectLoad(motor({ hp: 25, volts: 460, fla: 31, serviceFactor: 1.15 }), {
+      ...supply480,
+      voltageUnbalancePercent: 3,
+    });
     expect(r.unbalance).toEqual({ percent: 3, deratingFactor: 0.88, deratedHp: 22, basis: expect.stringMatching(/NEMA MG 1 14\.35/) });
     expect(r.relays.phaseLoss).toBe(true);
     expect(r.cautions.some((c) => c.includes('about 0.88 × its rating = 22 hp'))).toBe(true);
@@ -263,7 +352,10 @@ describe('a three-phase motor on an unbalanced supply (NEMA MG 1 14.35)', () => 
   });
 
   it('0.8 % unbalance: shown, no derating, no relay added for it', async () => {
-    const r = await selector.selectLoad(motor({ hp: 25, volts: 460, fla: 31, serviceFactor: 1.15 }), { ...supply480, voltageUnbalancePercent: 0.8 });
+    const r = await selector.selectLoad(motor({ hp: 25, volts: 460, fla: 31, serviceFactor: 1.15 }), {
+      ...supply480,
+      voltageUnbalancePercent: 0.8,
+    });
     expect(r.unbalance).toMatchObject({ percent: 0.8, deratingFactor: 1, deratedHp: 25 });
     expect(r.relays.phaseLoss).toBe(false);
     expect(r.cautions.some((c) => c.includes('unbalance'))).toBe(false);
@@ -276,7 +368,10 @@ describe('a three-phase motor on an unbalanced supply (NEMA MG 1 14.35)', () => 
   });
 
   it('behind a drive the motor sees balanced output: no derating, the drive input takes it (common practice)', async () => {
-    const r = await selector.selectLoad(motor({ hp: 25, volts: 460, fla: 31, speedControl: 'variable' }), { ...supply480, voltageUnbalancePercent: 3 });
+    const r = await selector.selectLoad(motor({ hp: 25, volts: 460, fla: 31, speedControl: 'variable' }), {
+      ...supply480,
+      voltageUnbalancePercent: 3,
+    });
     expect(r.starter.type).toBe('VFD');
     expect(r.unbalance).toBeNull();
     expect(r.relays.phaseLoss).toBe(false); // the drive's own input phase-loss trip serves
@@ -289,10 +384,11 @@ describe('a three-phase motor on an unbalanced supply (NEMA MG 1 14.35)', () => 
   });
 });
 
-describe('the trip class against the motor\'s locked-rotor withstand time', () => {
+describe("the trip class against the motor's locked-rotor withstand time", () => {
   // A class N relay trips within N s at 600 % of its setting (NEMA ICS 2, IEC 60947-4-1; from memory):
   // the class must stay within the motor's locked-rotor (hot safe stall) withstand time (docs/domain/motor-branch.md, overload protection).
-  const fan = (over: Record<string, unknown>) => motor({ tag: 'F-9', hp: 75, volts: 460, fla: 90, serviceFactor: 1.15, inertia: 'very-high', ...over });
+  const fan = (over: Record<string, unknown>) =>
+    motor({ tag: 'F-9', hp: 75, volts: 460, fla: 90, serviceFactor: 1.15, inertia: 'very-high', ...over });
 
   it('keeps class 30 for a very high inertia load when the motor withstands 30 s or more', async () => {
     expect((await selector.selectLoad(fan({}), supply480)).overload.tripClass).toBe(30);
@@ -329,16 +425,39 @@ describe('running voltage drop over the cable (NEC Chapter 9 Table 8 resistance 
     const near = await selector.selectLoad(motor({ hp: 25, volts: 460, fla: 31, serviceFactor: 1.15, cableLengthFt: 300 }), supply480);
     expect(near.conductor.size).toBe('8 AWG');
     // √3 × 31 A × 0.764 Ω/kft × 0.300 kft = 12.31 V; of the 480 V system: 2.56 %
-    expect(near.conductor.voltageDrop).toMatchObject({ lengthFt: 300, amps: 31, volts: 12.31, percent: 2.56, systemVolts: 480, sizeWithinLimit: null });
+    expect(near.conductor.voltageDrop).toMatchObject({
+      lengthFt: 300,
+      amps: 31,
+      volts: 12.31,
+      percent: 2.56,
+      systemVolts: 480,
+      sizeWithinLimit: null,
+    });
     expect(near.cautions.some((c) => c.startsWith('Running voltage drop'))).toBe(false);
     const far = await selector.selectLoad(motor({ hp: 25, volts: 460, fla: 31, serviceFactor: 1.15, cableLengthFt: 500 }), supply480);
     // 20.51 V = 4.27 %; 6 AWG (0.491 Ω/kft) gives 13.18 V = 2.75 %
     expect(far.conductor.voltageDrop).toMatchObject({ volts: 20.51, percent: 4.27, sizeWithinLimit: '6 AWG' });
-    expect(far.cautions).toContain('Running voltage drop 4.27 % over 500 ft is above 3 % (common practice): 6 AWG keeps it within; check the drop at starting too.');
+    expect(far.cautions).toContain(
+      'Running voltage drop 4.27 % over 500 ft is above 3 % (common practice): 6 AWG keeps it within; check the drop at starting too.',
+    );
   });
 
   it('part-winding: the two halves run in parallel, I/2 each, on the motor leads', async () => {
-    const r = await selector.selectLoad(motor({ tag: 'F-3', hp: 25, volts: 230, fla: 60, serviceFactor: 1.0, leads: 9, connection: 'wye', startingLimit: 'reduced-inrush', starterPreference: 'part-winding', cableLengthFt: 200 }), supply240);
+    const r = await selector.selectLoad(
+      motor({
+        tag: 'F-3',
+        hp: 25,
+        volts: 230,
+        fla: 60,
+        serviceFactor: 1.0,
+        leads: 9,
+        connection: 'wye',
+        startingLimit: 'reduced-inrush',
+        starterPreference: 'part-winding',
+        cableLengthFt: 200,
+      }),
+      supply240,
+    );
     expect(r.conductor.motorLeads!.size).toBe('8 AWG');
     // √3 × 30 A × 0.764 Ω/kft × 0.200 kft = 7.94 V; of 240 V: 3.31 %; 6 AWG: 5.10 V = 2.13 %
     expect(r.conductor.voltageDrop).toMatchObject({ volts: 7.94, percent: 3.31, systemVolts: 240, sizeWithinLimit: '6 AWG' });

@@ -8,11 +8,29 @@ describe('three-phase nine-lead (NEMA MG 1 markings, DOMAIN §6)', () => {
     // wye low V: L1=T1,T7 · L2=T2,T8 · L3=T3,T9 · join T4-T5-T6
     ['wye', 'low', { L1: ['T1', 'T7'], L2: ['T2', 'T8'], L3: ['T3', 'T9'] }, [['T4', 'T5', 'T6']]],
     // wye high V: L1=T1 · L2=T2 · L3=T3 · join T4-T7, T5-T8, T6-T9
-    ['wye', 'high', { L1: ['T1'], L2: ['T2'], L3: ['T3'] }, [['T4', 'T7'], ['T5', 'T8'], ['T6', 'T9']]],
+    [
+      'wye',
+      'high',
+      { L1: ['T1'], L2: ['T2'], L3: ['T3'] },
+      [
+        ['T4', 'T7'],
+        ['T5', 'T8'],
+        ['T6', 'T9'],
+      ],
+    ],
     // delta low V: L1=T1,T6,T7 · L2=T2,T4,T8 · L3=T3,T5,T9
     ['delta', 'low', { L1: ['T1', 'T6', 'T7'], L2: ['T2', 'T4', 'T8'], L3: ['T3', 'T5', 'T9'] }, []],
     // delta high V: L1=T1 · L2=T2 · L3=T3 · join T4-T7, T5-T8, T6-T9
-    ['delta', 'high', { L1: ['T1'], L2: ['T2'], L3: ['T3'] }, [['T4', 'T7'], ['T5', 'T8'], ['T6', 'T9']]],
+    [
+      'delta',
+      'high',
+      { L1: ['T1'], L2: ['T2'], L3: ['T3'] },
+      [
+        ['T4', 'T7'],
+        ['T5', 'T8'],
+        ['T6', 'T9'],
+      ],
+    ],
   ] as const;
   it.each(cases)('%s, %s voltage', (winding, voltage, lines, joined) => {
     const card = connectionCard({ motor: 'three-phase', leads: 9, winding, voltage });
@@ -45,7 +63,12 @@ describe('three-phase six-lead wye-delta and twelve-lead (NEMA MG 1, from memory
   });
   it('twelve-lead wye high V (series): join T4-T7, T5-T8, T6-T9 and T10-T11-T12', () => {
     const s = connectionCard({ motor: 'three-phase', leads: 12, winding: 'wye', voltage: 'high' }).steps[0];
-    expect(s.joined).toEqual([['T4', 'T7'], ['T5', 'T8'], ['T6', 'T9'], ['T10', 'T11', 'T12']]);
+    expect(s.joined).toEqual([
+      ['T4', 'T7'],
+      ['T5', 'T8'],
+      ['T6', 'T9'],
+      ['T10', 'T11', 'T12'],
+    ]);
   });
   it('part-winding on a nine-lead wye at low voltage: first winding T1-T3, second adds T7-T9', () => {
     const c = connectionCard({ motor: 'three-phase', leads: 9, winding: 'wye', voltage: 'low', method: 'part-winding' });

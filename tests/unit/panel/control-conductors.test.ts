@@ -36,7 +36,11 @@ describe('Table 430.72(B) (NEC 2023, from memory)', () => {
 
 describe('a control conductor against its upstream device (430.72(B))', () => {
   it('16 AWG Cu beyond the enclosure behind a 10 A fuse is within column C (10 A); behind 15 A it is a finding', () => {
-    expect(checkControlConductor({ size: '16', material: 'cu', column: 'C', deviceAmps: 10 })).toMatchObject({ ok: true, maxAmps: 10, finding: null });
+    expect(checkControlConductor({ size: '16', material: 'cu', column: 'C', deviceAmps: 10 })).toMatchObject({
+      ok: true,
+      maxAmps: 10,
+      finding: null,
+    });
     const bad = checkControlConductor({ size: '16', material: 'cu', column: 'C', deviceAmps: 15 });
     expect(bad.ok).toBe(false);
     expect(bad.finding).toMatch(/16 AWG Cu behind a 15 A device: column C.*at most 10 A/);
@@ -51,7 +55,15 @@ describe('every control conductor of the bill of materials', () => {
   const catalogue = seedCatalogue();
   const byCode = new Map(catalogue.map((c) => [c.code, c]));
   const sel = makeSelection({ tag: 'P-1' });
-  const bom = buildBom({ panelName: 'MCC-1', selections: [sel], panel: makePanel(), supply: SUPPLY_480, enclosureType: '12', catalogue, labourUnits: seedLabourUnits() });
+  const bom = buildBom({
+    panelName: 'MCC-1',
+    selections: [sel],
+    panel: makePanel(),
+    supply: SUPPLY_480,
+    enclosureType: '12',
+    catalogue,
+    labourUnits: seedLabourUnits(),
+  });
 
   it("checks the bucket's 14 AWG control wire against its own control fuse (column A, separate protection)", () => {
     const r = controlConductorChecks(bom.lines, byCode, [sel]);
@@ -66,8 +78,10 @@ describe('every control conductor of the bill of materials', () => {
     const fuse15 = catalogue.find((c) => c.category === 'fuse' && c.ratings.amps === 15 && c.ratings.fuseClass === 'CC')!;
     expect(wire16 && fuse15).toBeTruthy();
     const lines = bom.lines.map((l) => {
-      if (l.bucket === 'P-1' && l.category === 'wire' && l.code && byCode.get(l.code)?.ratings.kind === 'control') return { ...l, code: wire16.code, description: wire16.description };
-      if (l.bucket === 'P-1' && l.category === 'fuse' && l.quantity === 1) return { ...l, code: fuse15.code, description: fuse15.description };
+      if (l.bucket === 'P-1' && l.category === 'wire' && l.code && byCode.get(l.code)?.ratings.kind === 'control')
+        return { ...l, code: wire16.code, description: wire16.description };
+      if (l.bucket === 'P-1' && l.category === 'fuse' && l.quantity === 1)
+        return { ...l, code: fuse15.code, description: fuse15.description };
       return l;
     });
     const r = controlConductorChecks(lines, byCode, [sel]);

@@ -98,7 +98,11 @@ describe('transformer protection, NEC 2023 430.72(C) and 450.3(B)', () => {
     expect(s.ratingAmps).toBe(35);
   });
   it('the transformer chosen carries its protection', () => {
-    const r = sizeControlTransformer({ loads: [{ description: 'x', kind: 'other', sealedVa: 400 }], primaryVolts: 480, secondaryVolts: 120 });
+    const r = sizeControlTransformer({
+      loads: [{ description: 'x', kind: 'other', sealedVa: 400 }],
+      primaryVolts: 480,
+      secondaryVolts: 120,
+    });
     expect(r.sizeVa).toBe(500);
     expect(r.primary.ratingAmps).toBe(5);
     expect(r.secondary.ratingAmps).toBe(6.25);

@@ -38,7 +38,14 @@ export const conveyorFvr = selection({
   starter: { type: 'FVR', nemaSize: '2', iecAmps: 40, reversingContactors: true, interlock: true, basis: 'NEMA ICS 2 size 2' },
   overload: { maxSettingAmps: 38.75, tripClass: 20, basis: 'NEC 2023 430.32(A)(1): 125 % of FLA 31 A' },
   scpd: { type: 'inverse-time-breaker', maxPercent: 250, ratingAmps: 90, computedMaxAmps: 85, basis: 'NEC 2023 Table 430.52: 250 %' },
-  conductor: { minAmpacity: 42.5, size: '8 AWG', material: 'cu', tempRatingC: 75, ampacity: 50, basis: 'NEC 2023 430.22, Table 310.16 75 °C' },
+  conductor: {
+    minAmpacity: 42.5,
+    size: '8 AWG',
+    material: 'cu',
+    tempRatingC: 75,
+    ampacity: 50,
+    basis: 'NEC 2023 430.22, Table 310.16 75 °C',
+  },
   disconnect: { minAmps: 39.1, minHp: 25, basis: 'NEC 2023 430.109, 430.110(A)' },
   relays: { phaseReversal: true, phaseLoss: true, phaseLossByOverload: true },
 });
@@ -53,7 +60,14 @@ export const blowerVfd = selection({
   starter: { type: 'VFD', nemaSize: null, iecCategory: null, iecAmps: null, basis: 'variable speed required' },
   overload: { providedByDrive: true, maxSettingAmps: 31.25, tripClass: 10, basis: 'NEC 2023 430.124' },
   scpd: { type: 'non-time-delay-fuse', maxPercent: 300, ratingAmps: 80, computedMaxAmps: 81, basis: 'per the drive listing, NEC 430.130' },
-  conductor: { minAmpacity: 33.75, size: '10 AWG', material: 'cu', tempRatingC: 75, ampacity: 35, basis: 'NEC 2023 430.22, Table 310.16 75 °C' },
+  conductor: {
+    minAmpacity: 33.75,
+    size: '10 AWG',
+    material: 'cu',
+    tempRatingC: 75,
+    ampacity: 35,
+    basis: 'NEC 2023 430.22, Table 310.16 75 °C',
+  },
   disconnect: { minAmps: 31.05, minHp: 20, basis: 'NEC 2023 430.109, 430.110(A)' },
   vfd: { duty: 'normal', minOutputAmps: 27, inverterDutyMotor: true, outputFilter: 'dv-dt', basis: 'common practice' },
 });

@@ -1,6 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { calculateHeat, effectiveCoolingSurface, sourceLoss, type EnclosureMounting, type HeatSourceInput } from '../../../shared/calc/heat';
+import {
+  calculateHeat,
+  effectiveCoolingSurface,
+  sourceLoss,
+  type EnclosureMounting,
+  type HeatSourceInput,
+} from '../../../shared/calc/heat';
 
 // IEC TR 60890 simplified method. Surface factors b (from memory): top exposed 1.4, top covered 0.7,
 // exposed side faces 0.9, covered side faces 0.5, floor 0. Summed by face they give the closed forms
@@ -25,7 +31,13 @@ describe('effective cooling surface Ae (IEC TR 60890)', () => {
   });
   it('middle of a row, wall-mounted, top covered: 1.4·W·H + 0.7·W·D + D·H', () => {
     // 1.4·0.8·2.0 = 2.24; 0.7·0.8·0.6 = 0.336; 0.6·2.0 = 1.2 -> 3.776 m²
-    const { aeM2 } = effectiveCoolingSurface({ heightM: 2, widthM: 0.8, depthM: 0.6, mounting: 'row-middle-wall-mounted', topCovered: true });
+    const { aeM2 } = effectiveCoolingSurface({
+      heightM: 2,
+      widthM: 0.8,
+      depthM: 0.6,
+      mounting: 'row-middle-wall-mounted',
+      topCovered: true,
+    });
     expect(aeM2).toBeCloseTo(3.776, 6);
   });
   it('every mounting matches its closed form for any size', () => {
@@ -113,6 +125,9 @@ describe('temperature rise and cooling (IEC TR 60890 simplified method)', () => 
   it('drive and soft starter losses at their load (common practice)', () => {
     expect(sourceLoss({ bucketTag: 'x', code: 'V', description: '', category: 'vfd', throughputKw: 15 }).watts).toBeCloseTo(450, 6); // 3 % of 15 kW
     expect(sourceLoss({ bucketTag: 'x', code: 'S', description: '', category: 'soft-starter', loadAmps: 34 }).watts).toBe(102); // 3 W/A × 34 A
-    expect(sourceLoss({ bucketTag: 'x', code: 'S', description: '', category: 'soft-starter', loadAmps: 34, bypassed: true, heatLossW: 8 }).watts).toBe(8);
+    expect(
+      sourceLoss({ bucketTag: 'x', code: 'S', description: '', category: 'soft-starter', loadAmps: 34, bypassed: true, heatLossW: 8 })
+        .watts,
+    ).toBe(8);
   });
 });

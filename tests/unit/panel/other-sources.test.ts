@@ -58,10 +58,16 @@ describe('NEC 2023 Table 450.3(B) (transformers 1000 V and less)', () => {
 
   it('small transformers take the small-current rows and the 1, 3, 6 A fuse ratings', () => {
     // 1 kVA at 480 V: 2.08 A primary, 167 % = 3.48 A → 3 A fuse (NEC 2023 Table 450.3(B), Table 240.6(A))
-    const one = transformerProtection({ primaryAmps: ratedAmps(1, 480, 1), secondaryAmps: ratedAmps(1, 240, 1), method: 'primary-only' }, '2023');
+    const one = transformerProtection(
+      { primaryAmps: ratedAmps(1, 480, 1), secondaryAmps: ratedAmps(1, 240, 1), method: 'primary-only' },
+      '2023',
+    );
     expect(one.primary).toMatchObject({ percent: 167, ratingAmps: 3, family: 'fuse' });
     // 0.5 kVA at 480 V: 1.04 A primary, 300 % = 3.12 A → 3 A fuse
-    const half = transformerProtection({ primaryAmps: ratedAmps(0.5, 480, 1), secondaryAmps: ratedAmps(0.5, 240, 1), method: 'primary-only' }, '2023');
+    const half = transformerProtection(
+      { primaryAmps: ratedAmps(0.5, 480, 1), secondaryAmps: ratedAmps(0.5, 240, 1), method: 'primary-only' },
+      '2023',
+    );
     expect(half.primary).toMatchObject({ percent: 300, ratingAmps: 3 });
     // 1 kVA secondary 4.17 A < 9 A: 167 % = 6.96 A → 6 A fuse
     const oneBoth = transformerProtection({ primaryAmps: ratedAmps(1, 480, 1), secondaryAmps: ratedAmps(1, 240, 1) }, '2023');
@@ -72,14 +78,30 @@ describe('NEC 2023 Table 450.3(B) (transformers 1000 V and less)', () => {
 describe('transformer kVA from its motors (430.24 counting, standard kVA ratings)', () => {
   it('two 1.5 hp 230 V single-phase motors: (125 % × 10 A + 10 A) × 240 V = 5.4 kVA → 7.5 kVA', () => {
     // FLC 10 A each: NEC 2023 Table 430.248, 1½ hp 230 V
-    const k = transformerKva({ phases: 1, secondaryVolts: 240, splitPhase: true, loads: [{ amps: 10, circuitVolts: 240 }, { amps: 10, circuitVolts: 240 }] });
+    const k = transformerKva({
+      phases: 1,
+      secondaryVolts: 240,
+      splitPhase: true,
+      loads: [
+        { amps: 10, circuitVolts: 240 },
+        { amps: 10, circuitVolts: 240 },
+      ],
+    });
     expect(k.loadAmps).toBe(22.5);
     expect(k.loadKva).toBe(5.4);
     expect(k.kva).toBe(7.5); // next standard single-phase rating above 5 kVA (from memory)
   });
   it('two 1 hp 115 V motors go on the two halves of a 240/120 V secondary', () => {
     // 16 A each, NEC 2023 Table 430.248; one per half: 16 A + 25 % × 16 A = 20 A × 240 V = 4.8 kVA → 5 kVA
-    const k = transformerKva({ phases: 1, secondaryVolts: 240, splitPhase: true, loads: [{ amps: 16, circuitVolts: 120 }, { amps: 16, circuitVolts: 120 }] });
+    const k = transformerKva({
+      phases: 1,
+      secondaryVolts: 240,
+      splitPhase: true,
+      loads: [
+        { amps: 16, circuitVolts: 120 },
+        { amps: 16, circuitVolts: 120 },
+      ],
+    });
     expect(k.loadAmps).toBe(20);
     expect(k.kva).toBe(5);
   });
@@ -151,12 +173,18 @@ describe('the roll-up counts the sources (selectPanel, NEC 2023)', () => {
     expect(np.fullLoadAmps).toBe(14);
   });
   it('a source never takes a motor’s tag', async () => {
-    const out = await selector.selectPanel({ supply: supply480, loads: [motor({ tag: 'T1', hp: 10, volts: 460 }), motor({ tag: 'F-1', supply: 'ac1', hp: 1.5, volts: 230 })] });
+    const out = await selector.selectPanel({
+      supply: supply480,
+      loads: [motor({ tag: 'T1', hp: 10, volts: 460 }), motor({ tag: 'F-1', supply: 'ac1', hp: 1.5, volts: 230 })],
+    });
     expect(out.panel.otherSources?.map((s) => s.tag)).toEqual(['T2']);
   });
   it('a 5 hp 240 V DC motor gets a DC supply: 125 % × 20 A = 25 A at 240 V', async () => {
     // 20 A: NEC 2023 Table 430.247, 5 hp 240 V
-    const out = await selector.selectPanel({ supply: supply480, loads: [motor({ tag: 'H-1', supply: 'dc', hp: 5, volts: 240, dcField: 'shunt' })] });
+    const out = await selector.selectPanel({
+      supply: supply480,
+      loads: [motor({ tag: 'H-1', supply: 'dc', hp: 5, volts: 240, dcField: 'shunt' })],
+    });
     const [dc] = out.panel.otherSources ?? [];
     expect(dc).toMatchObject({ kind: 'dc-supply', tag: 'DC1', secondaryVolts: 240, secondaryAmps: 25, loadKva: 6 });
     // input ≈ 6 kW / 0.85 / (√3 × 480 V) = 8.49 A (common practice estimate)
@@ -170,9 +198,22 @@ describe('the bill of materials carries the sources (seed catalogue)', () => {
   it('T1: the 7.5 kVA 480-240/120 V transformer, its 35 A primary and 40 A secondary breakers; its losses in the heat load', async () => {
     const out = await selector.selectPanel({
       supply: supply480,
-      loads: [motor({ tag: 'P-1', hp: 10, volts: 460 }), motor({ tag: 'F-1', supply: 'ac1', hp: 1.5, volts: 230 }), motor({ tag: 'F-2', supply: 'ac1', hp: 1.5, volts: 230 }), motor({ tag: 'H-1', supply: 'dc', hp: 5, volts: 240, dcField: 'shunt' })],
+      loads: [
+        motor({ tag: 'P-1', hp: 10, volts: 460 }),
+        motor({ tag: 'F-1', supply: 'ac1', hp: 1.5, volts: 230 }),
+        motor({ tag: 'F-2', supply: 'ac1', hp: 1.5, volts: 230 }),
+        motor({ tag: 'H-1', supply: 'dc', hp: 5, volts: 240, dcField: 'shunt' }),
+      ],
     });
-    const bom = buildBom({ panelName: 'T', selections: out.results, panel: out.panel, supply: { volts: 480, phases: 3, hz: 60 }, enclosureType: '12', catalogue: seedCatalogue(), labourUnits: seedLabourUnits() });
+    const bom = buildBom({
+      panelName: 'T',
+      selections: out.results,
+      panel: out.panel,
+      supply: { volts: 480, phases: 3, hz: 60 },
+      enclosureType: '12',
+      catalogue: seedCatalogue(),
+      labourUnits: seedLabourUnits(),
+    });
     const t1 = bom.lines.filter((l) => l.bucket === 'T1 transformer');
     expect(t1.map((l) => [l.category, l.code])).toEqual([
       ['power-transformer', 'PW-XF-1-7A5K-240'], // smallest single-phase 240/120 V unit ≥ 7.5 kVA
@@ -191,7 +232,13 @@ describe('the bill of materials carries the sources (seed catalogue)', () => {
 
 describe('the one-line of a motor at another voltage', () => {
   it('starts at the feeder bus, through T1 and its breakers, to the T1 secondary bus — not a "feeder bus 230 V"', async () => {
-    const out = await selector.selectPanel({ supply: supply480, loads: [motor({ tag: 'F-1', supply: 'ac1', hp: 1.5, volts: 230 }), motor({ tag: 'F-2', supply: 'ac1', hp: 1.5, volts: 230, fedFrom: 'external' })] });
+    const out = await selector.selectPanel({
+      supply: supply480,
+      loads: [
+        motor({ tag: 'F-1', supply: 'ac1', hp: 1.5, volts: 230 }),
+        motor({ tag: 'F-2', supply: 'ac1', hp: 1.5, volts: 230, fedFrom: 'external' }),
+      ],
+    });
     const f1 = out.results[0]!;
     const els = oneLineElements(f1, motorFeed(out.panel, 'F-1'));
     expect(els.slice(0, 5).map((e) => [e.kind, e.label])).toEqual([

@@ -8,7 +8,13 @@ function parseToUnicode(cmap: string): Map<number, string> {
   for (let m = re.exec(cmap); m; m = re.exec(cmap)) {
     const start = parseInt(m[1], 16);
     const entries = [...m[3].matchAll(/<([0-9a-fA-F ]*)>/g)].map((e) =>
-      String.fromCharCode(...e[1].trim().split(/\s+/).filter(Boolean).map((h) => parseInt(h, 16))),
+      String.fromCharCode(
+        ...e[1]
+          .trim()
+          .split(/\s+/)
+          .filter(Boolean)
+          .map((h) => parseInt(h, 16)),
+      ),
     );
     entries.forEach((s, i) => {
       map.set(start + i, s);

@@ -1,17 +1,29 @@
 import { describe, expect, it } from 'vitest';
 import { assumedSccr, findCombination, raiseByCurrentLimitingFeeder } from '../../../shared/standards/ul508a-sb4';
-import { calculatePanelSccr, sccrTypeForCatalogueCategory, type SccrBucketInput, type SccrComponentInput, type SccrInput } from '../../../shared/calc/sccr';
+import {
+  calculatePanelSccr,
+  sccrTypeForCatalogueCategory,
+  type SccrBucketInput,
+  type SccrComponentInput,
+  type SccrInput,
+} from '../../../shared/calc/sccr';
 
 // Assumed ratings: UL 508A Table SB4.1 (from memory) — motor controllers by hp, terminal and distribution blocks,
 // supplementary protectors, circuit breakers.
 describe('UL 508A Table SB4.1 assumed ratings (from memory)', () => {
   const hpCases: Array<[number, number]> = [
-    [0.5, 5], [50, 5], // 0–50 hp: 5 kA
-    [51, 10], [200, 10], // 51–200 hp: 10 kA
-    [201, 18], [400, 18], // 201–400 hp: 18 kA
-    [401, 30], [600, 30], // 401–600 hp: 30 kA
-    [601, 42], [900, 42], // 601–900 hp: 42 kA
-    [901, 85], [1500, 85], // 901–1500 hp: 85 kA
+    [0.5, 5],
+    [50, 5], // 0–50 hp: 5 kA
+    [51, 10],
+    [200, 10], // 51–200 hp: 10 kA
+    [201, 18],
+    [400, 18], // 201–400 hp: 18 kA
+    [401, 30],
+    [600, 30], // 401–600 hp: 30 kA
+    [601, 42],
+    [900, 42], // 601–900 hp: 42 kA
+    [901, 85],
+    [1500, 85], // 901–1500 hp: 85 kA
   ];
   it.each(hpCases)('motor controller %s hp -> %s kA', (hp, ka) => {
     expect(assumedSccr('contactor', hp)?.ka).toBe(ka);
@@ -106,11 +118,7 @@ describe('panel SCCR, weakest link (UL 508A SB4)', () => {
       tag: 'P-101',
       hp: 10,
       volts: 480,
-      components: [
-        { code: 'CB-25', category: 'circuit-breaker', description: 'breaker', sccrKa: 65 },
-        contactor('C-09'),
-        ol('OL-1'),
-      ],
+      components: [{ code: 'CB-25', category: 'circuit-breaker', description: 'breaker', sccrKa: 65 }, contactor('C-09'), ol('OL-1')],
     };
     const combo = { id: 'TC-7', componentCodes: ['CB-25', 'C-09', 'OL-1'], ratingKa: 65, maxVolts: 480, source: 'maker combination table' };
     const without = calculatePanelSccr({ feeder: [], buckets: [bucket], availableFaultKa: 42 });

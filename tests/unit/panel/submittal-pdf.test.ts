@@ -19,7 +19,15 @@ function data(): SubmittalData {
     availableFaultKa: 22,
   });
   return {
-    job: { number: 'J-2041', name: 'Clarifier upgrade', customer: 'Cedar Flats water works', site: 'Plant 2', availableFaultKa: 22, ambientC: 30, codeEdition: 'NEC 2023' },
+    job: {
+      number: 'J-2041',
+      name: 'Clarifier upgrade',
+      customer: 'Cedar Flats water works',
+      site: 'Plant 2',
+      availableFaultKa: 22,
+      ambientC: 30,
+      codeEdition: 'NEC 2023',
+    },
     panel: { name: 'MCP-1', revision: 'R1', date: '2025-03-14', enclosureType: '12' },
     shop: { name: 'Cedar Flats Panel Works', address: '12 Foundry Lane, Cedar Flats', drawingNumberScheme: '{job}-{panel}-{sheet:2}' },
     selections: [pumpFvnr, conveyorFvr, blowerVfd],
@@ -38,7 +46,13 @@ function data(): SubmittalData {
       primaryVolts: 480,
       secondaryVolts: 120,
     }),
-    nameplate: panelNameplate({ rollup, supply: { volts: 480, phases: 3, hz: 60 }, sccrKa: sccr.panelSccrKa, enclosureType: '12', shopName: 'Cedar Flats Panel Works' }),
+    nameplate: panelNameplate({
+      rollup,
+      supply: { volts: 480, phases: 3, hz: 60 },
+      sccrKa: sccr.panelSccrKa,
+      enclosureType: '12',
+      shopName: 'Cedar Flats Panel Works',
+    }),
     connectionCards: [
       { tag: 'P-101', card: connectionCard({ motor: 'three-phase', leads: 9, winding: 'wye', voltage: 'high' }) },
       { tag: 'DC-1', card: connectionCard({ motor: 'dc', field: 'series' }) },
@@ -108,22 +122,52 @@ describe('PDF submittal', () => {
       flcAmps: 77,
       flaAmps: 70,
       starter: { type: 'wye-delta', nemaSize: null },
-      overload: { maxSettingAmps: 87.5, maxPercent: 125, relay: { share: 1 / Math.sqrt(3), count: 1, settingAmps: 40.41, maxAmps: 50.52, note: null, basis: 'NEC 2023 430.32(A)(1) limit x 1/sqrt(3); relay position: common practice' } },
-      unbalance: { percent: 1.96, deratingFactor: 0.952, deratedHp: 57.12, basis: 'NEMA MG 1 14.35, Figure 14-1 (curve values from memory)' },
+      overload: {
+        maxSettingAmps: 87.5,
+        maxPercent: 125,
+        relay: {
+          share: 1 / Math.sqrt(3),
+          count: 1,
+          settingAmps: 40.41,
+          maxAmps: 50.52,
+          note: null,
+          basis: 'NEC 2023 430.32(A)(1) limit x 1/sqrt(3); relay position: common practice',
+        },
+      },
+      unbalance: {
+        percent: 1.96,
+        deratingFactor: 0.952,
+        deratedHp: 57.12,
+        basis: 'NEMA MG 1 14.35, Figure 14-1 (curve values from memory)',
+      },
     });
     const { buf } = await render({ compress: false }, { ...data(), selections: [blower] });
     const text = extractPdfText(buf);
-    for (const s of ['1 relay in the delta windings: set 40.41 A, max 50.52 A each', 'Voltage unbalance', '1.96 %: derate to 0.952 × rating = 57.12 hp', 'NEMA MG 1 14.35']) {
+    for (const s of [
+      '1 relay in the delta windings: set 40.41 A, max 50.52 A each',
+      'Voltage unbalance',
+      '1.96 %: derate to 0.952 × rating = 57.12 hp',
+      'NEMA MG 1 14.35',
+    ]) {
       expect(text, s).toContain(s);
     }
     expect(text).not.toContain('?');
   });
 
   it('states a sign-off that acknowledged a rating below the site fault current (NEC 409.22), and says nothing of one for a draft', async () => {
-    const acknowledged = { finding: 'Panel SCCR 5 kA is below the 22 kA available at the site (NEC 409.22)', by: 'Ines Markham', reason: 'Class J fuses upstream per the fault study' };
+    const acknowledged = {
+      finding: 'Panel SCCR 5 kA is below the 22 kA available at the site (NEC 409.22)',
+      by: 'Ines Markham',
+      reason: 'Class J fuses upstream per the fault study',
+    };
     const { buf } = await render({ compress: false }, { ...data(), signOff: { revision: 'R1', date: '2025-03-20', acknowledged } });
     const text = extractPdfText(buf);
-    for (const s of ['Signed off', 'R1 on 2025-03-20', 'Signed off R1 with this rating. Finding: Panel SCCR 5 kA is below the 22 kA available at the site (NEC 409.22).', 'Reason given by Ines Markham: Class J fuses upstream per the fault study']) {
+    for (const s of [
+      'Signed off',
+      'R1 on 2025-03-20',
+      'Signed off R1 with this rating. Finding: Panel SCCR 5 kA is below the 22 kA available at the site (NEC 409.22).',
+      'Reason given by Ines Markham: Class J fuses upstream per the fault study',
+    ]) {
       expect(text, s).toContain(s);
     }
     const draft = extractPdfText((await render({ compress: false })).buf);
@@ -146,14 +190,25 @@ describe('PDF submittal', () => {
     expect(text).not.toContain(`Page ${pages + 1} of`);
     expect(text.split('Not signed off').length - 1).toBe(pages);
     expect(text).not.toContain('[Shop name]');
-    const signed = extractPdfText((await render({ compress: false, font: 'helvetica' }, { ...data(), signOff: { revision: 'R1', date: '2025-03-20', by: 'Ines Markham', acknowledged: null } })).buf);
+    const signed = extractPdfText(
+      (
+        await render(
+          { compress: false, font: 'helvetica' },
+          { ...data(), signOff: { revision: 'R1', date: '2025-03-20', by: 'Ines Markham', acknowledged: null } },
+        )
+      ).buf,
+    );
     expect(signed).toContain('R1 on 2025-03-20 by Ines Markham');
     expect(signed.split('Ines Markham').length - 1).toBeGreaterThanOrEqual(pages);
     expect(signed).not.toContain('Not signed off');
   });
 
   it('numbers the drawings by the shop scheme with the revision', async () => {
-    const d = { ...data(), panel: { ...data().panel, revisionCode: 'R3' }, shop: { ...data().shop, drawingNumberScheme: 'CF/{job}/{rev}/{sheet:3}' } };
+    const d = {
+      ...data(),
+      panel: { ...data().panel, revisionCode: 'R3' },
+      shop: { ...data().shop, drawingNumberScheme: 'CF/{job}/{rev}/{sheet:3}' },
+    };
     const text = extractPdfText((await render({ compress: false, font: 'helvetica' }, d)).buf);
     expect(text).toContain('CF/J-2041/R3/001');
     expect(text).toContain('CF/J-2041/R3/002');
@@ -164,7 +219,16 @@ describe('PDF submittal', () => {
     const text = extractPdfText(buf);
     expect(text).not.toContain('->');
     // the labels of the on-screen one-line, beside the symbols (P-101: 25 A dual-element fuses, FVNR size 1)
-    for (const s of ['Feeder bus', 'Disconnect', '25 A dual-element fuses', 'Contactor, NEMA size 1', 'Reversing contactors', 'Variable-frequency drive', 'Overload, class']) expect(text, s).toContain(s);
+    for (const s of [
+      'Feeder bus',
+      'Disconnect',
+      '25 A dual-element fuses',
+      'Contactor, NEMA size 1',
+      'Reversing contactors',
+      'Variable-frequency drive',
+      'Overload, class',
+    ])
+      expect(text, s).toContain(s);
     // each motor is a circle: four Bézier curves in the content (tables and the title block draw none)
     const curves = (buf.toString('latin1').match(/ c\n/g) ?? []).length;
     expect(curves).toBeGreaterThanOrEqual(4 * data().selections.length);
@@ -180,7 +244,10 @@ describe('PDF submittal', () => {
     expect((buf.toString('latin1').match(/\/I1 Do/g) ?? []).length).toBe(pageCount(buf));
     expect(buf.toString('latin1')).not.toContain('/I2 Do');
     // an unreadable logo leaves the name alone instead of failing the submittal
-    const broken = await render({ compress: false, font: 'helvetica' }, { ...data(), shop: { ...data().shop, logo: Buffer.from('not an image') } });
+    const broken = await render(
+      { compress: false, font: 'helvetica' },
+      { ...data(), shop: { ...data().shop, logo: Buffer.from('not an image') } },
+    );
     expect(extractPdfText(broken.buf)).toContain('Cedar Flats Panel Works');
   });
 
@@ -197,13 +264,38 @@ describe('PDF submittal: motors at another voltage', () => {
       ...rollup,
       otherSources: [
         {
-          kind: 'transformer', tag: 'T1', description: '7.5 kVA transformer 480-240/120 V single-phase', phases: 1, primaryVolts: 480, secondaryVolts: 240, secondaryLabel: '240/120 V single-phase',
-          loadKva: 5.4, kva: 7.5, secondaryAmps: 31.25, primaryAmps: 15.63,
+          kind: 'transformer',
+          tag: 'T1',
+          description: '7.5 kVA transformer 480-240/120 V single-phase',
+          phases: 1,
+          primaryVolts: 480,
+          secondaryVolts: 240,
+          secondaryLabel: '240/120 V single-phase',
+          loadKva: 5.4,
+          kva: 7.5,
+          secondaryAmps: 31.25,
+          primaryAmps: 15.63,
           // NEC 2023 Table 450.3(B): 250 % × 15.63 A → 35 A; 125 % × 31.25 A → 40 A (Note 1)
-          primaryProtection: { method: 'primary-and-secondary', percent: 250, maxAmps: 39.08, ratingAmps: 35, basis: 'NEC 2023 Table 450.3(B) primary' },
-          secondaryProtection: { method: 'primary-and-secondary', percent: 125, maxAmps: 39.06, ratingAmps: 40, basis: 'NEC 2023 Table 450.3(B) secondary' },
-          motors: [{ tag: 'F-1', supply: 'ac1', volts: 230, amps: 10, circuitVolts: 240 }, { tag: 'F-2', supply: 'ac1', volts: 230, amps: 10, circuitVolts: 240 }],
-          basis: 'NEC 2023 430.24', notes: [],
+          primaryProtection: {
+            method: 'primary-and-secondary',
+            percent: 250,
+            maxAmps: 39.08,
+            ratingAmps: 35,
+            basis: 'NEC 2023 Table 450.3(B) primary',
+          },
+          secondaryProtection: {
+            method: 'primary-and-secondary',
+            percent: 125,
+            maxAmps: 39.06,
+            ratingAmps: 40,
+            basis: 'NEC 2023 Table 450.3(B) secondary',
+          },
+          motors: [
+            { tag: 'F-1', supply: 'ac1', volts: 230, amps: 10, circuitVolts: 240 },
+            { tag: 'F-2', supply: 'ac1', volts: 230, amps: 10, circuitVolts: 240 },
+          ],
+          basis: 'NEC 2023 430.24',
+          notes: [],
         },
       ],
       externalMotors: [{ tag: 'S-9', supply: 'ac1', volts: 115, needs: '240/120 V single-phase (a transformer)' }],
@@ -212,7 +304,9 @@ describe('PDF submittal: motors at another voltage', () => {
     const { buf } = await render({ compress: false, font: 'helvetica' }, d);
     const text = extractPdfText(buf).replace(/\s+/g, ' ');
     expect(text).toContain('Motors at another voltage');
-    expect(text).toContain('T1: F-1 (230 V single-phase), F-2 (230 V single-phase) fed from a 7.5 kVA 480-240/120 V single-phase transformer in the panel');
+    expect(text).toContain(
+      'T1: F-1 (230 V single-phase), F-2 (230 V single-phase) fed from a 7.5 kVA 480-240/120 V single-phase transformer in the panel',
+    );
     expect(text).toMatch(/S-9 \(115 V single-phase\) needs 240\/120 V single-phase \(a transformer\): fed from a source outside the panel/);
   });
 });
@@ -225,8 +319,26 @@ describe('PDF submittal drawing pages', () => {
     const { seedCatalogue, seedLabourUnits } = await import('../bom/fixtures');
     const d0 = data();
     const supply = { volts: 480, phases: 3, hz: 60 };
-    const bom = buildBom({ panelName: 'MCP-1', selections: d0.selections, panel: d0.rollup, supply, enclosureType: '12', catalogue: seedCatalogue(), labourUnits: seedLabourUnits() });
-    const dr = buildPanelDrawings({ jobNumber: 'J-2041', jobName: 'Clarifier upgrade', panelName: 'MCP-1', revision: 'R1', date: '2025-03-14', supply, controlVolts: 120, bom: bom.lines, buckets: d0.selections.map((s) => ({ selection: s, card: null, jogging: false })) });
+    const bom = buildBom({
+      panelName: 'MCP-1',
+      selections: d0.selections,
+      panel: d0.rollup,
+      supply,
+      enclosureType: '12',
+      catalogue: seedCatalogue(),
+      labourUnits: seedLabourUnits(),
+    });
+    const dr = buildPanelDrawings({
+      jobNumber: 'J-2041',
+      jobName: 'Clarifier upgrade',
+      panelName: 'MCP-1',
+      revision: 'R1',
+      date: '2025-03-14',
+      supply,
+      controlVolts: 120,
+      bom: bom.lines,
+      buckets: d0.selections.map((s) => ({ selection: s, card: null, jogging: false })),
+    });
     const drawings = {
       drawingNumber: dr.drawingNumber,
       sheets: [supplySheetSvg(dr, 'main', 'cpt'), ...schematicSheets(dr)],
@@ -241,7 +353,8 @@ describe('PDF submittal drawing pages', () => {
     // supply sheet + one per motor, at least one terminal-plan page, the marking page
     expect(pages(withDrawings.buf) - pages(without.buf)).toBeGreaterThanOrEqual(drawings.sheets.length + 2);
     const text = extractPdfText(withDrawings.buf);
-    for (const s of [`Terminal plan - ${dr.drawingNumber}`, `Panel marking - ${dr.drawingNumber}`, `${dr.terminals[0]!.ref}`, 'Cautions']) expect(text, s).toContain(s);
+    for (const s of [`Terminal plan - ${dr.drawingNumber}`, `Panel marking - ${dr.drawingNumber}`, `${dr.terminals[0]!.ref}`, 'Cautions'])
+      expect(text, s).toContain(s);
     expect(dr.terminals.length).toBe(dr.bomTerminalBlocks);
   });
 });

@@ -22,16 +22,30 @@ describe('motor-list columns derived from LoadFieldsSchema', () => {
   it('keeps the words of the columns (headers of nested answers, notes, examples) and none for a missing answer', () => {
     expect(STALE_COLUMN_TEXT).toEqual([]);
     expect(IMPORT_COLUMNS[0]).toEqual({ header: 'tag', key: 'tag', kind: 'string', note: 'unique on the panel', example: 'P-201' });
-    expect(IMPORT_COLUMNS.find((c) => c.header === 'conductorTempC')).toMatchObject({ kind: 'integer', path: ['conductor', 'tempRatingC'], example: 75 });
+    expect(IMPORT_COLUMNS.find((c) => c.header === 'conductorTempC')).toMatchObject({
+      kind: 'integer',
+      path: ['conductor', 'tempRatingC'],
+      example: 75,
+    });
   });
 
   it('reads each kind from the schema: literal unions and .int() are whole numbers, booleans yes/no', () => {
     const kind = (h: string) => IMPORT_COLUMNS.find((c) => c.header === h)?.kind;
-    expect([kind('hz'), kind('leads'), kind('poles'), kind('hp'), kind('reversing'), kind('supply')]).toEqual(['integer', 'integer', 'integer', 'number', 'boolean', 'string']);
+    expect([kind('hz'), kind('leads'), kind('poles'), kind('hp'), kind('reversing'), kind('supply')]).toEqual([
+      'integer',
+      'integer',
+      'integer',
+      'number',
+      'boolean',
+      'string',
+    ]);
   });
 
   it('gives a new answer its column after the others, its options as the note', () => {
-    const extended = LoadFieldsSchema.extend({ feedPoint: z.enum(['mcc-1', 'mcc-2']).optional(), spare: z.object({ count: z.number().int() }).optional() });
+    const extended = LoadFieldsSchema.extend({
+      feedPoint: z.enum(['mcc-1', 'mcc-2']).optional(),
+      spare: z.object({ count: z.number().int() }).optional(),
+    });
     const cols = columnsOf(extended);
     expect(cols.slice(0, IMPORT_COLUMNS.length)).toEqual(IMPORT_COLUMNS);
     expect(cols.slice(IMPORT_COLUMNS.length)).toEqual([

@@ -25,7 +25,11 @@ function crossImports(): Array<[string, string, string]> {
 
 describe('server module order (server/modules/order.json)', () => {
   it('places every module folder in exactly one layer', () => {
-    const folders = fs.readdirSync(MODULES, { withFileTypes: true }).filter((d) => d.isDirectory()).map((d) => d.name).sort();
+    const folders = fs
+      .readdirSync(MODULES, { withFileTypes: true })
+      .filter((d) => d.isDirectory())
+      .map((d) => d.name)
+      .sort();
     const listed = order.layers.flat();
     expect(new Set(listed).size).toBe(listed.length);
     expect([...listed].sort()).toEqual(folders);

@@ -46,7 +46,16 @@ describe('NEC 2023 Table 430.250 (three-phase FLC)', () => {
   });
 
   it.each([
-    [110, 115], [120, 115], [200, 200], [208, 208], [220, 230], [240, 230], [440, 460], [480, 460], [550, 575], [600, 575],
+    [110, 115],
+    [120, 115],
+    [200, 200],
+    [208, 208],
+    [220, 230],
+    [240, 230],
+    [440, 460],
+    [480, 460],
+    [550, 575],
+    [600, 575],
   ] as const)('system %s V maps to the %s V column (NEC 2023 Table 430.250 heading)', (v, col) => {
     expect(column430250(v)).toBe(col);
   });
@@ -97,8 +106,15 @@ describe('NEC 2023 Table 430.247 (DC FLC)', () => {
 
 describe('NEC 2023 Table 430.7(B) (code letters)', () => {
   it.each([
-    ['A', 0, 3.14], ['B', 3.15, 3.54], ['F', 5.0, 5.59], ['G', 5.6, 6.29], ['H', 6.3, 7.09], ['J', 7.1, 7.99],
-    ['L', 9.0, 9.99], ['P', 12.5, 13.99], ['U', 20.0, 22.39],
+    ['A', 0, 3.14],
+    ['B', 3.15, 3.54],
+    ['F', 5.0, 5.59],
+    ['G', 5.6, 6.29],
+    ['H', 6.3, 7.09],
+    ['J', 7.1, 7.99],
+    ['L', 9.0, 9.99],
+    ['P', 12.5, 13.99],
+    ['U', 20.0, 22.39],
   ] as const)('letter %s = %s–%s kVA/hp (NEC 2023 Table 430.7(B))', (l, min, max) => {
     expect(lockedRotorKvaPerHp(l)).toEqual({ min, max });
   });
@@ -145,12 +161,25 @@ describe('NEC Table 240.6(A) (standard ratings)', () => {
     expect(standardRatings('2023', 'breaker')).not.toContain(601);
   });
   it.each([
-    [85, 90], [90, 90], [90.01, 100], [100.5, 110], [111, 125], [126, 150], [451, 500], [501, 600], [801, 1000], [5001, 6000],
+    [85, 90],
+    [90, 90],
+    [90.01, 100],
+    [100.5, 110],
+    [111, 125],
+    [126, 150],
+    [451, 500],
+    [501, 600],
+    [801, 1000],
+    [5001, 6000],
   ])('next higher standard of %s A is %s A (NEC 2023 Table 240.6(A))', (a, r) => {
     expect(nextHigherStandard(a, '2023', 'breaker')).toBe(r);
   });
   it.each([
-    [111.6, 110], [110, 110], [512, 500], [9.9, null], [6500, 6000],
+    [111.6, 110],
+    [110, 110],
+    [512, 500],
+    [9.9, null],
+    [6500, 6000],
   ])('next lower standard breaker rating of %s A is %s A (NEC 2023 Table 240.6(A))', (a, r) => {
     if (r === null) expect(() => nextLowerStandard(a, '2023', 'breaker')).toThrow(OutsideTableError);
     else expect(nextLowerStandard(a, '2023', 'breaker')).toBe(r);
@@ -166,12 +195,26 @@ describe('NEC Table 240.6(A) (standard ratings)', () => {
 
 describe('NEC 2023 Table 310.16 (ampacity) and 240.4(D)', () => {
   it.each([
-    ['14 AWG', 'cu', 60, 15], ['14 AWG', 'cu', 75, 20], ['14 AWG', 'cu', 90, 25],
-    ['12 AWG', 'cu', 75, 25], ['10 AWG', 'cu', 75, 35], ['8 AWG', 'cu', 75, 50], ['6 AWG', 'cu', 75, 65],
-    ['4 AWG', 'cu', 75, 85], ['1/0 AWG', 'cu', 75, 150], ['4/0 AWG', 'cu', 75, 230], ['250 kcmil', 'cu', 75, 255],
-    ['350 kcmil', 'cu', 90, 350], ['500 kcmil', 'cu', 75, 380], ['1000 kcmil', 'cu', 90, 615],
-    ['12 AWG', 'al', 75, 20], ['8 AWG', 'al', 75, 40], ['2 AWG', 'al', 75, 90], ['4/0 AWG', 'al', 75, 180],
-    ['500 kcmil', 'al', 75, 310], ['1000 kcmil', 'al', 60, 375],
+    ['14 AWG', 'cu', 60, 15],
+    ['14 AWG', 'cu', 75, 20],
+    ['14 AWG', 'cu', 90, 25],
+    ['12 AWG', 'cu', 75, 25],
+    ['10 AWG', 'cu', 75, 35],
+    ['8 AWG', 'cu', 75, 50],
+    ['6 AWG', 'cu', 75, 65],
+    ['4 AWG', 'cu', 75, 85],
+    ['1/0 AWG', 'cu', 75, 150],
+    ['4/0 AWG', 'cu', 75, 230],
+    ['250 kcmil', 'cu', 75, 255],
+    ['350 kcmil', 'cu', 90, 350],
+    ['500 kcmil', 'cu', 75, 380],
+    ['1000 kcmil', 'cu', 90, 615],
+    ['12 AWG', 'al', 75, 20],
+    ['8 AWG', 'al', 75, 40],
+    ['2 AWG', 'al', 75, 90],
+    ['4/0 AWG', 'al', 75, 180],
+    ['500 kcmil', 'al', 75, 310],
+    ['1000 kcmil', 'al', 60, 375],
   ] as const)('%s %s %s °C = %s A (NEC 2023 Table 310.16)', (size, m, t, a) => {
     expect(ampacity310_16(size, m, t)).toBe(a);
   });
@@ -183,7 +226,12 @@ describe('NEC 2023 Table 310.16 (ampacity) and 240.4(D)', () => {
     expect(sizesFor('cu').at(-1)).toBe('1000 kcmil');
   });
   it.each([
-    ['14 AWG', 'cu', 15], ['12 AWG', 'cu', 20], ['10 AWG', 'cu', 30], ['12 AWG', 'al', 15], ['10 AWG', 'al', 25], ['8 AWG', 'cu', null],
+    ['14 AWG', 'cu', 15],
+    ['12 AWG', 'cu', 20],
+    ['10 AWG', 'cu', 30],
+    ['12 AWG', 'al', 15],
+    ['10 AWG', 'al', 25],
+    ['8 AWG', 'cu', null],
   ] as const)('240.4(D) limit for %s %s is %s A (NEC 2023 240.4(D))', (size, m, a) => {
     expect(smallConductorOcpdLimit(size, m)).toBe(a);
   });
@@ -191,7 +239,16 @@ describe('NEC 2023 Table 310.16 (ampacity) and 240.4(D)', () => {
 
 describe('NEC 2023 Table 310.15(B)(1)(1) (ambient correction)', () => {
   it.each([
-    [30, 75, 1.0], [26, 75, 1.0], [31, 75, 0.94], [35, 90, 0.96], [40, 75, 0.88], [40, 90, 0.91], [45, 60, 0.71], [50, 75, 0.75], [10, 60, 1.29], [85, 90, 0.29],
+    [30, 75, 1.0],
+    [26, 75, 1.0],
+    [31, 75, 0.94],
+    [35, 90, 0.96],
+    [40, 75, 0.88],
+    [40, 90, 0.91],
+    [45, 60, 0.71],
+    [50, 75, 0.75],
+    [10, 60, 1.29],
+    [85, 90, 0.29],
   ] as const)('%s °C ambient, %s °C conductor: %s (NEC 2023 Table 310.15(B)(1)(1))', (amb, t, f) => {
     expect(ambientCorrectionFactor(amb, t)).toBe(f);
   });
@@ -244,7 +301,13 @@ describe('NEMA ICS 2 starter sizes (from memory)', () => {
 
 describe('NEMA 250 types with approximate IP codes (from memory of the NEMA comparison)', () => {
   it.each([
-    ['1', 'IP10'], ['3R', 'IP14'], ['4', 'IP66'], ['4X', 'IP66'], ['12', 'IP52'], ['6P', 'IP68'], ['13', 'IP54'],
+    ['1', 'IP10'],
+    ['3R', 'IP14'],
+    ['4', 'IP66'],
+    ['4X', 'IP66'],
+    ['12', 'IP52'],
+    ['6P', 'IP68'],
+    ['13', 'IP54'],
   ] as const)('Type %s ~ %s', (t, ip) => {
     expect(enclosureType(t).ipCode).toBe(ip);
   });

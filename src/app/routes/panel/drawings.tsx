@@ -11,7 +11,11 @@ import { Caution, Empty, ErrorNote, Loading } from '../../../components/ui/feedb
 
 export async function loader({ params }: LoaderFunctionArgs) {
   const id = Number(params.panelId);
-  await Promise.all([queryClient.ensureQueryData(panelQueries.detail(id)), queryClient.prefetchQuery(checkQueries.panel(id)), queryClient.prefetchQuery(drawingQueries.panel(id))]);
+  await Promise.all([
+    queryClient.ensureQueryData(panelQueries.detail(id)),
+    queryClient.prefetchQuery(checkQueries.panel(id)),
+    queryClient.prefetchQuery(drawingQueries.panel(id)),
+  ]);
   return null;
 }
 
@@ -28,7 +32,10 @@ export function Component() {
   return (
     <div className="space-y-4">
       <div className="flex flex-wrap items-center justify-between gap-3">
-        <p className="text-sm text-ink-soft">Control schematic per bucket, terminal plan, wire list and panel marking, generated from the stored selections and the bill of materials; one-line and lead connection of each motor (NEMA MG 1 lead markings).</p>
+        <p className="text-sm text-ink-soft">
+          Control schematic per bucket, terminal plan, wire list and panel marking, generated from the stored selections and the bill of
+          materials; one-line and lead connection of each motor (NEMA MG 1 lead markings).
+        </p>
         {p.loads.length > 0 ? (
           <a
             href={submittalPdfUrl(id)}

@@ -36,8 +36,14 @@ export function Component() {
   return (
     <div>
       <nav aria-label="Breadcrumb" className="mb-1 text-sm text-ink-soft">
-        <Link to="/jobs" className="hover:underline">Jobs</Link> ›{' '}
-        <Link to={`/jobs/${jobId}`} className="hover:underline">{p.job.number} {p.job.name}</Link> › {p.name}
+        <Link to="/jobs" className="hover:underline">
+          Jobs
+        </Link>{' '}
+        ›{' '}
+        <Link to={`/jobs/${jobId}`} className="hover:underline">
+          {p.job.number} {p.job.name}
+        </Link>{' '}
+        › {p.name}
       </nav>
       <div className="mb-3 flex flex-wrap items-center gap-3">
         <h1 className="text-2xl font-semibold tracking-tight">{p.name}</h1>
@@ -51,7 +57,11 @@ export function Component() {
             `NEC ${p.job.codeEdition}`,
           ].join(' · ')}
         </span>
-        {errors > 0 ? <span className="rounded bg-bad-bg px-2 py-0.5 text-xs font-semibold text-state-returned">✖ {errors} motor{errors > 1 ? 's' : ''} need fixing</span> : null}
+        {errors > 0 ? (
+          <span className="rounded bg-bad-bg px-2 py-0.5 text-xs font-semibold text-state-returned">
+            ✖ {errors} motor{errors > 1 ? 's' : ''} need fixing
+          </span>
+        ) : null}
         {hasRole(me, ...ROLE_SETS.design) ? (
           <span className="ml-auto flex gap-2">
             <Button variant="secondary" disabled={duplicate.isPending} waitsFor="Duplicating…" onClick={() => duplicate.mutate()}>
@@ -77,7 +87,9 @@ export function Component() {
           <NavLink
             key={s.to}
             to={s.to}
-            className={({ isActive }) => `-mb-px border-b-2 px-3 py-2 text-sm font-semibold ${isActive ? 'border-copper-500 text-ink' : 'border-transparent text-ink-soft hover:text-ink'}`}
+            className={({ isActive }) =>
+              `-mb-px border-b-2 px-3 py-2 text-sm font-semibold ${isActive ? 'border-copper-500 text-ink' : 'border-transparent text-ink-soft hover:text-ink'}`
+            }
           >
             {s.label}
           </NavLink>

@@ -25,7 +25,9 @@ export function Component() {
   const navigate = useNavigate();
   const qc = useQueryClient();
   const [file, setFile] = useState<File | null>(null);
-  const preview = useMutation({ mutationFn: (f: File) => upload<{ rows: PreviewRow[]; ok: boolean }>(`/api/panels/${panelId}/import/preview`, f) });
+  const preview = useMutation({
+    mutationFn: (f: File) => upload<{ rows: PreviewRow[]; ok: boolean }>(`/api/panels/${panelId}/import/preview`, f),
+  });
   const commit = useMutation({
     mutationFn: (f: File) => upload<{ imported: number }>(`/api/panels/${panelId}/import/commit`, f),
     onSuccess: async () => {
@@ -40,7 +42,11 @@ export function Component() {
       <h2 className="text-lg font-semibold">Import a motor list</h2>
       <ol className="list-decimal space-y-1 pl-5 text-sm">
         <li>
-          <a className="font-semibold text-copper-700 underline" href={`/api/panels/${panelId}/import/template`}>Download the template (.xlsx)</a> — one row per motor; the second sheet explains every column. CSV with the same header row works too, and so does a motor list exported from another panel (its first sheet is this format).
+          <a className="font-semibold text-copper-700 underline" href={`/api/panels/${panelId}/import/template`}>
+            Download the template (.xlsx)
+          </a>{' '}
+          — one row per motor; the second sheet explains every column. CSV with the same header row works too, and so does a motor list
+          exported from another panel (its first sheet is this format).
         </li>
         <li>Upload it for a preview: each row's problems are shown and nothing is saved.</li>
         <li>Import: all rows go in together, or none.</li>
@@ -60,7 +66,17 @@ export function Component() {
         />
         <Button
           disabled={!file || !preview.data?.ok || commit.isPending}
-          waitsFor={!file ? 'Choose a motor list (.xlsx or .csv) first.' : preview.isPending ? 'Checking the rows…' : commit.isPending ? null : !preview.data?.ok ? 'Fix the rows with problems in the file first: nothing is imported until every row is good.' : null}
+          waitsFor={
+            !file
+              ? 'Choose a motor list (.xlsx or .csv) first.'
+              : preview.isPending
+                ? 'Checking the rows…'
+                : commit.isPending
+                  ? null
+                  : !preview.data?.ok
+                    ? 'Fix the rows with problems in the file first: nothing is imported until every row is good.'
+                    : null
+          }
           onClick={() => file && commit.mutate(file)}
         >
           {commit.isPending ? 'Importing…' : `Import ${rows.length || ''} motors`}
@@ -71,11 +87,19 @@ export function Component() {
       {rows.length ? (
         <>
           <p className={`text-sm font-semibold ${bad ? 'text-state-returned' : 'text-state-signed'}`}>
-            {bad ? `✖ ${bad} of ${rows.length} rows have problems: fix them in the file and upload again.` : `✔ ${rows.length} rows are ready to import.`}
+            {bad
+              ? `✖ ${bad} of ${rows.length} rows have problems: fix them in the file and upload again.`
+              : `✔ ${rows.length} rows are ready to import.`}
           </p>
           <table className="dense w-full text-sm" aria-label="Import preview">
             <thead className="text-left text-xs uppercase text-ink-soft">
-              <tr><th className="py-1">Row</th><th>Tag</th><th>hp / kW</th><th>V</th><th>Problems</th></tr>
+              <tr>
+                <th className="py-1">Row</th>
+                <th>Tag</th>
+                <th>hp / kW</th>
+                <th>V</th>
+                <th>Problems</th>
+              </tr>
             </thead>
             <tbody>
               {rows.map((r) => (
@@ -84,7 +108,11 @@ export function Component() {
                   <td className="font-semibold">{r.tag || '—'}</td>
                   <td>{String(r.answers?.hp ?? r.answers?.kw ?? '')}</td>
                   <td>{String(r.answers?.volts ?? '')}</td>
-                  <td className="text-state-returned">{r.problems.map((p) => `${fieldLabel(p.column) ?? p.column} (column ${p.column}): ${p.message}`).join('; ') || <span className="text-state-signed">✔ ok</span>}</td>
+                  <td className="text-state-returned">
+                    {r.problems.map((p) => `${fieldLabel(p.column) ?? p.column} (column ${p.column}): ${p.message}`).join('; ') || (
+                      <span className="text-state-signed">✔ ok</span>
+                    )}
+                  </td>
                 </tr>
               ))}
             </tbody>

@@ -21,8 +21,44 @@ import type { CodeEdition } from '../../../../shared/standards/code-edition';
 
 const STEPS = ['Nameplate', 'Duty', 'Site & hazards', 'Protection'] as const;
 const STEP_FIELDS: Record<(typeof STEPS)[number], string[]> = {
-  Nameplate: ['tag', 'description', 'supply', 'hp', 'kw', 'volts', 'hz', 'fla', 'serviceFactor', 'tempRiseC', 'lockedRotorWithstandS', 'codeLetter', 'design', 'energyEfficient', 'poles', 'rotor', 'singlePhaseType', 'dcField', 'leads', 'connection'],
-  Duty: ['duty', 'jogging', 'plugging', 'reversing', 'speedControl', 'turndown', 'torque', 'startingLimit', 'starterPreference', 'insideDelta', 'inertia', 'twoSpeed', 'quickStop', 'controlScheme'],
+  Nameplate: [
+    'tag',
+    'description',
+    'supply',
+    'hp',
+    'kw',
+    'volts',
+    'hz',
+    'fla',
+    'serviceFactor',
+    'tempRiseC',
+    'lockedRotorWithstandS',
+    'codeLetter',
+    'design',
+    'energyEfficient',
+    'poles',
+    'rotor',
+    'singlePhaseType',
+    'dcField',
+    'leads',
+    'connection',
+  ],
+  Duty: [
+    'duty',
+    'jogging',
+    'plugging',
+    'reversing',
+    'speedControl',
+    'turndown',
+    'torque',
+    'startingLimit',
+    'starterPreference',
+    'insideDelta',
+    'inertia',
+    'twoSpeed',
+    'quickStop',
+    'controlScheme',
+  ],
   'Site & hazards': ['environment', 'reverseRotationHazard', 'critical', 'cableLengthFt', 'fedFrom'],
   Protection: ['scpdType', 'conductor'],
 };
@@ -142,27 +178,109 @@ export function Component() {
         <div className="grid grid-cols-2 gap-4 p-4 md:grid-cols-3">
           {stepName === 'Nameplate' ? (
             <>
-              <Field label="Tag" error={e.tag?.message} hint="Unique on this panel, e.g. P-101">{(a) => <input {...a} {...register('tag')} className={inputClass} autoFocus />}</Field>
-              <div className="col-span-2"><Field label="Description" error={e.description?.message}>{(a) => <input {...a} {...register('description', opt)} className={inputClass} />}</Field></div>
-              <SelectField label="Supply" error={e.supply?.message} field={register('supply', opt)} notGiven="Choose the supply" options={[['ac3', 'Three-phase AC'], ['ac1', 'Single-phase AC'], ['dc', 'DC']]} />
-              <Field label="Horsepower" unit="hp" error={e.hp?.message} hint="Or give kW instead">{(a) => <input {...a} {...register('hp', optNum)} inputMode="decimal" className={inputClass} />}</Field>
-              <Field label="Kilowatts" unit="kW" error={e.kw?.message}>{(a) => <input {...a} {...register('kw', optNum)} inputMode="decimal" className={inputClass} />}</Field>
-              <Field label="Rated voltage" unit="V" error={e.volts?.message} hint="From the nameplate, e.g. 460">{(a) => <input {...a} {...register('volts', num)} inputMode="numeric" className={inputClass} />}</Field>
-              <SelectField label="Frequency" unit="Hz" error={e.hz?.message} field={register('hz', num)} options={[[60, '60'], [50, '50']]} />
-              <Field label="Nameplate FLA" unit="A" error={e.fla?.message} hint="Sizes the overload (430.6(A)(2))">{(a) => <input {...a} {...register('fla', optNum)} inputMode="decimal" className={inputClass} />}</Field>
-              <Field label="Service factor" error={e.serviceFactor?.message} hint="From the nameplate; empty: 1.0 assumed (115 % overload)">{(a) => <input {...a} {...register('serviceFactor', optNum)} inputMode="decimal" className={inputClass} />}</Field>
-              <Field label="Temperature rise" unit="°C" error={e.tempRiseC?.message}>{(a) => <input {...a} {...register('tempRiseC', optNum)} inputMode="decimal" className={inputClass} />}</Field>
-              <Field label="Locked-rotor withstand" unit="s" hint="hot safe stall time, motor maker's data" error={e.lockedRotorWithstandS?.message}>{(a) => <input {...a} {...register('lockedRotorWithstandS', optNum)} inputMode="decimal" className={inputClass} />}</Field>
+              <Field label="Tag" error={e.tag?.message} hint="Unique on this panel, e.g. P-101">
+                {(a) => <input {...a} {...register('tag')} className={inputClass} autoFocus />}
+              </Field>
+              <div className="col-span-2">
+                <Field label="Description" error={e.description?.message}>
+                  {(a) => <input {...a} {...register('description', opt)} className={inputClass} />}
+                </Field>
+              </div>
+              <SelectField
+                label="Supply"
+                error={e.supply?.message}
+                field={register('supply', opt)}
+                notGiven="Choose the supply"
+                options={[
+                  ['ac3', 'Three-phase AC'],
+                  ['ac1', 'Single-phase AC'],
+                  ['dc', 'DC'],
+                ]}
+              />
+              <Field label="Horsepower" unit="hp" error={e.hp?.message} hint="Or give kW instead">
+                {(a) => <input {...a} {...register('hp', optNum)} inputMode="decimal" className={inputClass} />}
+              </Field>
+              <Field label="Kilowatts" unit="kW" error={e.kw?.message}>
+                {(a) => <input {...a} {...register('kw', optNum)} inputMode="decimal" className={inputClass} />}
+              </Field>
+              <Field label="Rated voltage" unit="V" error={e.volts?.message} hint="From the nameplate, e.g. 460">
+                {(a) => <input {...a} {...register('volts', num)} inputMode="numeric" className={inputClass} />}
+              </Field>
+              <SelectField
+                label="Frequency"
+                unit="Hz"
+                error={e.hz?.message}
+                field={register('hz', num)}
+                options={[
+                  [60, '60'],
+                  [50, '50'],
+                ]}
+              />
+              <Field label="Nameplate FLA" unit="A" error={e.fla?.message} hint="Sizes the overload (430.6(A)(2))">
+                {(a) => <input {...a} {...register('fla', optNum)} inputMode="decimal" className={inputClass} />}
+              </Field>
+              <Field label="Service factor" error={e.serviceFactor?.message} hint="From the nameplate; empty: 1.0 assumed (115 % overload)">
+                {(a) => <input {...a} {...register('serviceFactor', optNum)} inputMode="decimal" className={inputClass} />}
+              </Field>
+              <Field label="Temperature rise" unit="°C" error={e.tempRiseC?.message}>
+                {(a) => <input {...a} {...register('tempRiseC', optNum)} inputMode="decimal" className={inputClass} />}
+              </Field>
+              <Field
+                label="Locked-rotor withstand"
+                unit="s"
+                hint="hot safe stall time, motor maker's data"
+                error={e.lockedRotorWithstandS?.message}
+              >
+                {(a) => <input {...a} {...register('lockedRotorWithstandS', optNum)} inputMode="decimal" className={inputClass} />}
+              </Field>
               {supplyKind !== 'dc' ? (
-                <SelectField label="NEMA code letter" error={e.codeLetter?.message} hint="Locked-rotor kVA/hp, Table 430.7(B)" field={register('codeLetter', opt)} notGiven="Not known" options={CODE_LETTERS} />
+                <SelectField
+                  label="NEMA code letter"
+                  error={e.codeLetter?.message}
+                  hint="Locked-rotor kVA/hp, Table 430.7(B)"
+                  field={register('codeLetter', opt)}
+                  notGiven="Not known"
+                  options={CODE_LETTERS}
+                />
               ) : null}
               {supplyKind === 'ac3' ? (
                 <>
-                  <SelectField label="NEMA design" error={e.design?.message} field={register('design', opt)} notGiven="Not known" options={DESIGNS} />
-                  <SelectField label="Rotor" error={e.rotor?.message} field={register('rotor')} options={[['squirrel-cage', 'Squirrel cage'], ['wound-rotor', 'Wound rotor']]} />
-                  <SelectField label="Leads" error={e.leads?.message} field={register('leads', optNum)} notGiven="Not known" options={LEADS} />
-                  <SelectField label="Winding connection" error={e.connection?.message} field={register('connection', opt)} notGiven="Not known" options={[['wye', 'Wye (star)'], ['delta', 'Delta']]} />
-                  <label className="flex items-center gap-2 self-end text-sm"><input type="checkbox" {...register('energyEfficient')} /> Energy-efficient Design B</label>
+                  <SelectField
+                    label="NEMA design"
+                    error={e.design?.message}
+                    field={register('design', opt)}
+                    notGiven="Not known"
+                    options={DESIGNS}
+                  />
+                  <SelectField
+                    label="Rotor"
+                    error={e.rotor?.message}
+                    field={register('rotor')}
+                    options={[
+                      ['squirrel-cage', 'Squirrel cage'],
+                      ['wound-rotor', 'Wound rotor'],
+                    ]}
+                  />
+                  <SelectField
+                    label="Leads"
+                    error={e.leads?.message}
+                    field={register('leads', optNum)}
+                    notGiven="Not known"
+                    options={LEADS}
+                  />
+                  <SelectField
+                    label="Winding connection"
+                    error={e.connection?.message}
+                    field={register('connection', opt)}
+                    notGiven="Not known"
+                    options={[
+                      ['wye', 'Wye (star)'],
+                      ['delta', 'Delta'],
+                    ]}
+                  />
+                  <label className="flex items-center gap-2 self-end text-sm">
+                    <input type="checkbox" {...register('energyEfficient')} /> Energy-efficient Design B
+                  </label>
                 </>
               ) : null}
               {supplyKind === 'ac1' ? (
@@ -171,34 +289,75 @@ export function Component() {
                   error={e.singlePhaseType?.message}
                   field={register('singlePhaseType', opt)}
                   notGiven="Not known"
-                  options={[['split-phase', 'Split-phase'], ['capacitor-start', 'Capacitor-start'], ['psc', 'Permanent-split capacitor'], ['two-value-capacitor', 'Two-value capacitor']]}
+                  options={[
+                    ['split-phase', 'Split-phase'],
+                    ['capacitor-start', 'Capacitor-start'],
+                    ['psc', 'Permanent-split capacitor'],
+                    ['two-value-capacitor', 'Two-value capacitor'],
+                  ]}
                 />
               ) : null}
               {supplyKind === 'dc' ? (
-                <SelectField label="DC field" error={e.dcField?.message} field={register('dcField', opt)} notGiven="Not known" options={[['shunt', 'Shunt'], ['series', 'Series'], ['compound', 'Compound']]} />
+                <SelectField
+                  label="DC field"
+                  error={e.dcField?.message}
+                  field={register('dcField', opt)}
+                  notGiven="Not known"
+                  options={[
+                    ['shunt', 'Shunt'],
+                    ['series', 'Series'],
+                    ['compound', 'Compound'],
+                  ]}
+                />
               ) : null}
-              <Field label="Poles" error={e.poles?.message}>{(a) => <input {...a} {...register('poles', optNum)} inputMode="numeric" className={inputClass} />}</Field>
+              <Field label="Poles" error={e.poles?.message}>
+                {(a) => <input {...a} {...register('poles', optNum)} inputMode="numeric" className={inputClass} />}
+              </Field>
             </>
           ) : null}
           {stepName === 'Duty' ? (
             <>
-              <SelectField label="Duty" error={e.duty?.message} field={register('duty')} options={[['continuous', 'Continuous'], ['intermittent', 'Intermittent']]} />
-              <SelectField label="Speed" error={e.speedControl?.message} field={register('speedControl')} options={[['fixed', 'Fixed speed'], ['variable', 'Variable speed']]} />
+              <SelectField
+                label="Duty"
+                error={e.duty?.message}
+                field={register('duty')}
+                options={[
+                  ['continuous', 'Continuous'],
+                  ['intermittent', 'Intermittent'],
+                ]}
+              />
+              <SelectField
+                label="Speed"
+                error={e.speedControl?.message}
+                field={register('speedControl')}
+                options={[
+                  ['fixed', 'Fixed speed'],
+                  ['variable', 'Variable speed'],
+                ]}
+              />
               <SelectField
                 label="Starting"
                 error={e.startingLimit?.message}
                 field={register('startingLimit')}
-                options={[['none', 'Full-voltage starting allowed'], ['reduced-inrush', 'Inrush must be limited']]}
+                options={[
+                  ['none', 'Full-voltage starting allowed'],
+                  ['reduced-inrush', 'Inrush must be limited'],
+                ]}
               />
               {variable ? (
                 <>
-                  <Field label="Turndown" unit="ratio, e.g. 10 for 10:1" error={e.turndown?.message}>{(a) => <input {...a} {...register('turndown', optNum)} inputMode="decimal" className={inputClass} />}</Field>
+                  <Field label="Turndown" unit="ratio, e.g. 10 for 10:1" error={e.turndown?.message}>
+                    {(a) => <input {...a} {...register('turndown', optNum)} inputMode="decimal" className={inputClass} />}
+                  </Field>
                   <SelectField
                     label="Load torque"
                     error={e.torque?.message}
                     field={register('torque', opt)}
                     notGiven="Not known"
-                    options={[['variable', 'Variable torque (fans, pumps)'], ['constant', 'Constant torque (conveyors, mixers)']]}
+                    options={[
+                      ['variable', 'Variable torque (fans, pumps)'],
+                      ['constant', 'Constant torque (conveyors, mixers)'],
+                    ]}
                   />
                 </>
               ) : null}
@@ -208,7 +367,11 @@ export function Component() {
                   error={e.starterPreference?.message}
                   field={register('starterPreference', opt)}
                   notGiven="Let the rules choose"
-                  options={[['rvss', 'Solid-state soft starter'], ['wye-delta', 'Wye-delta (six-lead delta motor)'], ['part-winding', 'Part-winding']]}
+                  options={[
+                    ['rvss', 'Solid-state soft starter'],
+                    ['wye-delta', 'Wye-delta (six-lead delta motor)'],
+                    ['part-winding', 'Part-winding'],
+                  ]}
                 />
               ) : null}
               <SelectField
@@ -216,23 +379,47 @@ export function Component() {
                 error={e.inertia?.message}
                 hint="Decides the overload trip class"
                 field={register('inertia')}
-                options={[['normal', 'Normal'], ['high', 'High'], ['very-high', 'Very high (large fans, centrifuges)']]}
+                options={[
+                  ['normal', 'Normal'],
+                  ['high', 'High'],
+                  ['very-high', 'Very high (large fans, centrifuges)'],
+                ]}
               />
               <SelectField
                 label="Control scheme"
                 error={e.controlScheme?.message}
                 hint="Drawn on the control schematic; two-wire restarts by itself after a power loss"
                 field={register('controlScheme')}
-                options={[['three-wire', 'Three-wire: stop/start with seal-in'], ['two-wire', 'Two-wire: maintained contact from a remote controller'], ['hand-off-auto', 'Hand-off-auto selector']]}
+                options={[
+                  ['three-wire', 'Three-wire: stop/start with seal-in'],
+                  ['two-wire', 'Two-wire: maintained contact from a remote controller'],
+                  ['hand-off-auto', 'Hand-off-auto selector'],
+                ]}
               />
               <fieldset className="col-span-full flex flex-wrap gap-5 text-sm">
                 <legend className="mb-1 text-xs font-semibold uppercase text-ink-soft">Operation</legend>
-                <label className="flex items-center gap-2"><input type="checkbox" {...register('reversing')} /> Runs in both directions</label>
-                <label className="flex items-center gap-2"><input type="checkbox" {...register('jogging')} /> Jogging</label>
-                <label className="flex items-center gap-2"><input type="checkbox" {...register('plugging')} /> Plugging</label>
-                <label className="flex items-center gap-2"><input type="checkbox" {...register('twoSpeed')} /> Two-speed motor</label>
-                {supplyKind === 'dc' ? <label className="flex items-center gap-2"><input type="checkbox" {...register('quickStop')} /> Quick stops (dynamic braking)</label> : null}
-                {supplyKind === 'ac3' ? <label className="flex items-center gap-2"><input type="checkbox" {...register('insideDelta')} /> Soft starter inside the delta</label> : null}
+                <label className="flex items-center gap-2">
+                  <input type="checkbox" {...register('reversing')} /> Runs in both directions
+                </label>
+                <label className="flex items-center gap-2">
+                  <input type="checkbox" {...register('jogging')} /> Jogging
+                </label>
+                <label className="flex items-center gap-2">
+                  <input type="checkbox" {...register('plugging')} /> Plugging
+                </label>
+                <label className="flex items-center gap-2">
+                  <input type="checkbox" {...register('twoSpeed')} /> Two-speed motor
+                </label>
+                {supplyKind === 'dc' ? (
+                  <label className="flex items-center gap-2">
+                    <input type="checkbox" {...register('quickStop')} /> Quick stops (dynamic braking)
+                  </label>
+                ) : null}
+                {supplyKind === 'ac3' ? (
+                  <label className="flex items-center gap-2">
+                    <input type="checkbox" {...register('insideDelta')} /> Soft starter inside the delta
+                  </label>
+                ) : null}
               </fieldset>
             </>
           ) : null}
@@ -248,7 +435,14 @@ export function Component() {
                   options={Object.entries(ENVIRONMENT_LABELS)}
                 />
               </div>
-              <Field label="Cable length to the motor" unit="ft" error={e.cableLengthFt?.message} hint="Long drive leads need an output filter">{(a) => <input {...a} {...register('cableLengthFt', optNum)} inputMode="decimal" className={inputClass} />}</Field>
+              <Field
+                label="Cable length to the motor"
+                unit="ft"
+                error={e.cableLengthFt?.message}
+                hint="Long drive leads need an output filter"
+              >
+                {(a) => <input {...a} {...register('cableLengthFt', optNum)} inputMode="decimal" className={inputClass} />}
+              </Field>
               {needsOtherSource(values, p.job.supplyVolts) ? (
                 <div className="col-span-2">
                   <SelectField
@@ -256,14 +450,22 @@ export function Component() {
                     error={e.fedFrom?.message}
                     hint={`Rated ${String(values.volts ?? '')} V${supplyKind === 'dc' ? ' DC' : ''} on a ${p.job.supplyVolts} V supply: the panel carries a transformer or DC supply for it (sized, protected per NEC 450.3(B), in the bill of materials and the feeder), or it is fed from outside the panel and left out of the feeder`}
                     field={register('fedFrom', opt)}
-                    options={[['panel', 'A transformer or DC supply in this panel'], ['external', 'A source outside the panel']]}
+                    options={[
+                      ['panel', 'A transformer or DC supply in this panel'],
+                      ['external', 'A source outside the panel'],
+                    ]}
                   />
                 </div>
               ) : null}
               <fieldset className="col-span-full space-y-2 text-sm">
                 <legend className="mb-1 text-xs font-semibold uppercase text-ink-soft">Hazards</legend>
-                <label className="flex items-center gap-2"><input type="checkbox" {...register('reverseRotationHazard')} /> Running backwards would damage the machine or hurt someone (screw compressor, hoist, one-way coupling)</label>
-                <label className="flex items-center gap-2"><input type="checkbox" {...register('critical')} /> Critical load: loss of a phase must trip and alarm</label>
+                <label className="flex items-center gap-2">
+                  <input type="checkbox" {...register('reverseRotationHazard')} /> Running backwards would damage the machine or hurt
+                  someone (screw compressor, hoist, one-way coupling)
+                </label>
+                <label className="flex items-center gap-2">
+                  <input type="checkbox" {...register('critical')} /> Critical load: loss of a phase must trip and alarm
+                </label>
               </fieldset>
             </>
           ) : null}
@@ -280,26 +482,49 @@ export function Component() {
                   ['non-time-delay-fuse', 'Non-time-delay fuse'],
                 ]}
               />
-              <SelectField label="Conductor material" field={register('conductor.material')} options={[['cu', 'Copper'], ['al', 'Aluminium']]} />
+              <SelectField
+                label="Conductor material"
+                field={register('conductor.material')}
+                options={[
+                  ['cu', 'Copper'],
+                  ['al', 'Aluminium'],
+                ]}
+              />
               <SelectField
                 label="Termination temperature"
                 unit="°C"
                 hint="75 °C is usual for starter terminals (110.14(C))"
                 field={register('conductor.tempRatingC', num)}
-                options={[[75, '75'], [60, '60'], [90, '90']]}
+                options={[
+                  [75, '75'],
+                  [60, '60'],
+                  [90, '90'],
+                ]}
               />
             </>
           ) : null}
         </div>
         <div className="flex items-center gap-2 border-t border-line px-4 py-3">
-          <Button variant="secondary" disabled={step === 0} onClick={() => setStep((s) => s - 1)}>‹ Back</Button>
-          {step < STEPS.length - 1 ? <Button type="submit" variant="secondary" data-action="next">Next ›</Button> : null}
+          <Button variant="secondary" disabled={step === 0} onClick={() => setStep((s) => s - 1)}>
+            ‹ Back
+          </Button>
+          {step < STEPS.length - 1 ? (
+            <Button type="submit" variant="secondary" data-action="next">
+              Next ›
+            </Button>
+          ) : null}
           <Button type="submit" data-action="save" className="ml-auto" disabled={save.isPending}>
             {save.isPending ? 'Saving…' : existing ? 'Save motor' : 'Add motor'}
           </Button>
-          <Button variant="ghost" onClick={() => navigate(`/jobs/${jobId}/panels/${panelId}/motors`)}>Cancel</Button>
+          <Button variant="ghost" onClick={() => navigate(`/jobs/${jobId}/panels/${panelId}/motors`)}>
+            Cancel
+          </Button>
         </div>
-        {save.error && !(save.error instanceof ApiError && save.error.fieldIssues.length) ? <div className="px-4 pb-3"><ErrorNote error={save.error} /></div> : null}
+        {save.error && !(save.error instanceof ApiError && save.error.fieldIssues.length) ? (
+          <div className="px-4 pb-3">
+            <ErrorNote error={save.error} />
+          </div>
+        ) : null}
       </form>
       <aside className="space-y-3" aria-label="Selection preview">
         <div className="rounded border border-line bg-panel p-4">

@@ -45,7 +45,14 @@ export function Component() {
           <h2 className="mb-2 text-lg font-semibold">Overrides</h2>
           <table className="dense w-full text-sm">
             <thead className="text-left text-xs uppercase text-ink-soft">
-              <tr><th className="py-1">Motor</th><th>Decision</th><th>Engine</th><th>Override</th><th>Justification</th><th>Warnings</th></tr>
+              <tr>
+                <th className="py-1">Motor</th>
+                <th>Decision</th>
+                <th>Engine</th>
+                <th>Override</th>
+                <th>Justification</th>
+                <th>Warnings</th>
+              </tr>
             </thead>
             <tbody>
               {overrides.map((o) => (
@@ -54,7 +61,9 @@ export function Component() {
                   <td>{OVERRIDE_FIELDS[o.field]}</td>
                   <td>{selectionValueLabel(o.field, o.was)}</td>
                   <td className="font-semibold">{selectionValueLabel(o.field, o.value)}</td>
-                  <td>“{o.justification}” — {o.by}</td>
+                  <td>
+                    “{o.justification}” — {o.by}
+                  </td>
                   <td className="text-xs text-state-review">{o.warnings.join(' ') || '—'}</td>
                 </tr>
               ))}
@@ -64,15 +73,30 @@ export function Component() {
       ) : null}
       <section aria-label="Protection by motor" className="grid gap-4 xl:grid-cols-2">
         {p.loads.map((l) => (
-          <article key={l.id} className={`rounded border bg-panel p-4 ${l.overrides.length ? 'border-copper-500/60' : 'border-line'}`} aria-label={`Motor ${l.tag}`}>
+          <article
+            key={l.id}
+            className={`rounded border bg-panel p-4 ${l.overrides.length ? 'border-copper-500/60' : 'border-line'}`}
+            aria-label={`Motor ${l.tag}`}
+          >
             <h3 className="mb-2 flex items-baseline gap-2 text-base font-semibold">
-              {l.tag} <span className="text-sm font-normal text-ink-soft">{String(l.answers.description ?? '')} · {(l.effective ?? l.selection)?.hp ?? '?'} hp {String(l.answers.volts)} V</span>
+              {l.tag}{' '}
+              <span className="text-sm font-normal text-ink-soft">
+                {String(l.answers.description ?? '')} · {(l.effective ?? l.selection)?.hp ?? '?'} hp {String(l.answers.volts)} V
+              </span>
             </h3>
-            {(l.effective ?? l.selection) ? <SelectionSummary selection={(l.effective ?? l.selection)!} overridden={l.overrides.map((o) => o.field)} /> : <p className="text-sm text-state-returned">✖ No selection</p>}
+            {(l.effective ?? l.selection) ? (
+              <SelectionSummary selection={(l.effective ?? l.selection)!} overridden={l.overrides.map((o) => o.field)} />
+            ) : (
+              <p className="text-sm text-state-returned">✖ No selection</p>
+            )}
             <div className="mt-3 border-t border-line pt-2">
-              {p.comments.filter((c) => c.loadId === l.id).map((c) => (
-                <p key={c.id} className="text-sm"><strong>{c.author}:</strong> {c.body}</p>
-              ))}
+              {p.comments
+                .filter((c) => c.loadId === l.id)
+                .map((c) => (
+                  <p key={c.id} className="text-sm">
+                    <strong>{c.author}:</strong> {c.body}
+                  </p>
+                ))}
               <form
                 className="mt-1 flex gap-2"
                 onSubmit={(e) => {
@@ -81,8 +105,16 @@ export function Component() {
                   if (body) comment.mutate({ body, loadId: l.id }, { onSuccess: () => setDrafts((d) => ({ ...d, [l.id]: '' })) });
                 }}
               >
-                <input aria-label={`Comment on ${l.tag}`} className={inputClass} placeholder={`Comment on ${l.tag}`} value={drafts[l.id] ?? ''} onChange={(e) => setDrafts((d) => ({ ...d, [l.id]: e.target.value }))} />
-                <Button type="submit" variant="secondary" disabled={comment.isPending} waitsFor="Saving…">Comment</Button>
+                <input
+                  aria-label={`Comment on ${l.tag}`}
+                  className={inputClass}
+                  placeholder={`Comment on ${l.tag}`}
+                  value={drafts[l.id] ?? ''}
+                  onChange={(e) => setDrafts((d) => ({ ...d, [l.id]: e.target.value }))}
+                />
+                <Button type="submit" variant="secondary" disabled={comment.isPending} waitsFor="Saving…">
+                  Comment
+                </Button>
               </form>
             </div>
           </article>

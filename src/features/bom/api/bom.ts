@@ -33,9 +33,13 @@ export interface ManualLineInput {
 // Keys start with 'bom' so that a panel change (which invalidates ['bom']) refreshes them too.
 export const bomQueries = {
   all: () => ['bom'] as const,
-  panel: (panelId: number) => queryOptions({ queryKey: [...bomQueries.all(), 'panel', panelId], queryFn: () => get<StoredBom>(`/api/panels/${panelId}/bom`) }),
+  panel: (panelId: number) =>
+    queryOptions({ queryKey: [...bomQueries.all(), 'panel', panelId], queryFn: () => get<StoredBom>(`/api/panels/${panelId}/bom`) }),
   alternatives: (panelId: number, lineId: number) =>
-    queryOptions({ queryKey: [...bomQueries.all(), 'panel', panelId, 'alternatives', lineId], queryFn: () => get<SwapCandidate[]>(`/api/panels/${panelId}/bom/lines/${lineId}/alternatives`) }),
+    queryOptions({
+      queryKey: [...bomQueries.all(), 'panel', panelId, 'alternatives', lineId],
+      queryFn: () => get<SwapCandidate[]>(`/api/panels/${panelId}/bom/lines/${lineId}/alternatives`),
+    }),
 };
 
 export const bomDownloads = {
@@ -61,7 +65,10 @@ export function useRebuildBom(panelId: number) {
 
 export function useAddManualLine(panelId: number) {
   const invalidate = useInvalidateBom(panelId);
-  return useMutation({ mutationFn: (v: ManualLineInput) => post<StoredLine>(`/api/panels/${panelId}/bom/lines`, v), onSuccess: invalidate });
+  return useMutation({
+    mutationFn: (v: ManualLineInput) => post<StoredLine>(`/api/panels/${panelId}/bom/lines`, v),
+    onSuccess: invalidate,
+  });
 }
 
 export function useUpdateLine(panelId: number) {

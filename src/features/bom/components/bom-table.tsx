@@ -27,9 +27,23 @@ function Status({ line }: { line: StoredLine }) {
       </span>
     );
   }
-  if (line.source === 'swapped') return <span className="whitespace-nowrap text-xs font-semibold text-copper-700"><span aria-hidden>⇄</span> Swapped</span>;
-  if (line.source === 'manual') return <span className="whitespace-nowrap text-xs font-semibold text-state-draft"><span aria-hidden>✎</span> Manual</span>;
-  return <span className="whitespace-nowrap text-xs text-state-signed"><span aria-hidden>✔</span> Matched</span>;
+  if (line.source === 'swapped')
+    return (
+      <span className="whitespace-nowrap text-xs font-semibold text-copper-700">
+        <span aria-hidden>⇄</span> Swapped
+      </span>
+    );
+  if (line.source === 'manual')
+    return (
+      <span className="whitespace-nowrap text-xs font-semibold text-state-draft">
+        <span aria-hidden>✎</span> Manual
+      </span>
+    );
+  return (
+    <span className="whitespace-nowrap text-xs text-state-signed">
+      <span aria-hidden>✔</span> Matched
+    </span>
+  );
 }
 
 export interface LineActions {
@@ -65,7 +79,19 @@ export const lineKey = (bucket: string, code: string | null) => `${bucket}|${cod
  * The bill of materials grouped by bucket (or category), with group subtotals and the panel's totals in the footer.
  * `highlight` (bucket|code, see lineKey) marks the lines another section points at and scrolls to the first.
  */
-export function BomTable({ lines, totals, actions, groupBy, highlight = null }: { lines: StoredLine[]; totals: BomTotals; actions: LineActions; groupBy: 'bucket' | 'category'; highlight?: string | null }) {
+export function BomTable({
+  lines,
+  totals,
+  actions,
+  groupBy,
+  highlight = null,
+}: {
+  lines: StoredLine[];
+  totals: BomTotals;
+  actions: LineActions;
+  groupBy: 'bucket' | 'category';
+  highlight?: string | null;
+}) {
   const [sorting, setSorting] = useState<SortingState>([]);
   const firstMarked = useRef<HTMLTableRowElement | null>(null);
   // scroll again whenever another section points at another line
@@ -80,7 +106,10 @@ export function BomTable({ lines, totals, actions, groupBy, highlight = null }: 
     () => [
       col.accessor('bucket', { header: 'Bucket', cell: (c) => c.getValue(), sortingFn: 'alphanumeric' }),
       col.accessor('category', { header: 'Category', cell: (c) => categoryLabel(c.getValue()) }),
-      col.accessor('code', { header: 'Code', cell: (c) => (c.getValue() ? <span className="font-semibold">{c.getValue()}</span> : <span className="text-ink-soft">—</span>) }),
+      col.accessor('code', {
+        header: 'Code',
+        cell: (c) => (c.getValue() ? <span className="font-semibold">{c.getValue()}</span> : <span className="text-ink-soft">—</span>),
+      }),
       col.accessor('description', {
         header: 'Description',
         cell: (c) => {
@@ -102,7 +131,12 @@ export function BomTable({ lines, totals, actions, groupBy, highlight = null }: 
       col.accessor('quantity', {
         header: 'Qty',
         meta: { numeric: true },
-        cell: (c) => (c.row.original.source === 'manual' && actions.onQuantity ? <QuantityInput line={c.row.original} onSave={(q) => actions.onQuantity!(c.row.original, q)} /> : qty(c.getValue())),
+        cell: (c) =>
+          c.row.original.source === 'manual' && actions.onQuantity ? (
+            <QuantityInput line={c.row.original} onSave={(q) => actions.onQuantity!(c.row.original, q)} />
+          ) : (
+            qty(c.getValue())
+          ),
       }),
       col.accessor('unit', { header: 'Unit' }),
       col.accessor('unitCost', { header: 'Unit cost ($)', meta: { numeric: true }, cell: (c) => money(c.getValue()) }),
@@ -131,12 +165,20 @@ export function BomTable({ lines, totals, actions, groupBy, highlight = null }: 
                 return (
                   <span className="flex justify-end gap-2 whitespace-nowrap">
                     {l.source !== 'manual' && actions.onSwap ? (
-                      <button type="button" className="text-xs font-semibold text-copper-700 hover:underline" onClick={() => actions.onSwap!(l)}>
+                      <button
+                        type="button"
+                        className="text-xs font-semibold text-copper-700 hover:underline"
+                        onClick={() => actions.onSwap!(l)}
+                      >
                         {l.status === 'unmatched' ? 'Choose part' : 'Swap'}
                       </button>
                     ) : null}
                     {l.source === 'manual' && actions.onRemove ? (
-                      <button type="button" className="text-xs font-semibold text-state-returned hover:underline" onClick={() => actions.onRemove!(l)}>
+                      <button
+                        type="button"
+                        className="text-xs font-semibold text-state-returned hover:underline"
+                        onClick={() => actions.onRemove!(l)}
+                      >
                         Remove
                       </button>
                     ) : null}
@@ -186,14 +228,18 @@ export function BomTable({ lines, totals, actions, groupBy, highlight = null }: 
               <tr key={row.id} className="border-y border-line bg-copper-50/70" aria-label={`Subtotal ${key}`}>
                 <td colSpan={span} className="px-2 py-1.5 font-semibold">
                   {groupBy === 'bucket' ? bucketLabel(key) : categoryLabel(key as StoredLine['category'])}
-                  <span className="ml-2 font-normal text-ink-soft">{row.subRows.length} line{row.subRows.length === 1 ? '' : 's'} · subtotal</span>
+                  <span className="ml-2 font-normal text-ink-soft">
+                    {row.subRows.length} line{row.subRows.length === 1 ? '' : 's'} · subtotal
+                  </span>
                   {unmatched ? <span className="ml-2 text-xs font-semibold text-state-returned">✖ {unmatched} unmatched</span> : null}
                 </td>
                 {leafColumns.slice(span).map((c) => {
                   const cell = row.getAllCells().find((x) => x.column.id === c.id)!;
                   return (
                     <DataCell key={c.id} cell={cell} className="px-2 py-1.5">
-                      {cell.getIsAggregated() && (c.id === 'extended' || c.id === 'labour') ? flexRender(c.columnDef.aggregatedCell ?? c.columnDef.cell, cell.getContext()) : null}
+                      {cell.getIsAggregated() && (c.id === 'extended' || c.id === 'labour')
+                        ? flexRender(c.columnDef.aggregatedCell ?? c.columnDef.cell, cell.getContext())
+                        : null}
                     </DataCell>
                   );
                 })}
@@ -221,8 +267,12 @@ export function BomTable({ lines, totals, actions, groupBy, highlight = null }: 
       <tfoot className="border-t-2 border-ink/30 bg-surface" aria-label="Totals">
         {footer.map(([label, middle, right], i) => (
           <tr key={label} className={i === footer.length - 1 ? 'text-base font-bold' : 'font-semibold'}>
-            <th scope="row" colSpan={span - 2} className="px-2 py-1 text-right">{label}</th>
-            <td colSpan={2} className="px-2 py-1 text-right text-xs font-normal text-ink-soft">{middle && i > 0 ? middle : ''}</td>
+            <th scope="row" colSpan={span - 2} className="px-2 py-1 text-right">
+              {label}
+            </th>
+            <td colSpan={2} className="px-2 py-1 text-right text-xs font-normal text-ink-soft">
+              {middle && i > 0 ? middle : ''}
+            </td>
             <td className="px-2 py-1 text-right tabular-nums">{i === 0 ? middle : right}</td>
             <td className="px-2 py-1" />
             <td className="px-2 py-1 text-right tabular-nums">{i === 0 ? hours(totals.labourHours) : ''}</td>

@@ -5,5 +5,7 @@ export const hours = (n: number) => n.toLocaleString('en-US', { minimumFractionD
 export const qty = (n: number) => n.toLocaleString('en-US', { maximumFractionDigits: 2 });
 
 const MANUAL_LABELS: Record<string, string> = { freight: 'Freight', engineering: 'Engineering', spares: 'Spares', other: 'Other' };
-export const categoryLabel = (c: BomCategory) => (c in CATEGORY_LABELS ? CATEGORY_LABELS[c as keyof typeof CATEGORY_LABELS] : (MANUAL_LABELS[c] ?? c));
-export const bucketLabel = (b: string) => (b === PANEL_BUCKET ? 'Panel items' : isSourceBucket(b) ? `${b} (motors at another voltage)` : `Motor ${b}`);
+export const categoryLabel = (c: BomCategory) =>
+  c in CATEGORY_LABELS ? CATEGORY_LABELS[c as keyof typeof CATEGORY_LABELS] : (MANUAL_LABELS[c] ?? c);
+export const bucketLabel = (b: string) =>
+  b === PANEL_BUCKET ? 'Panel items' : isSourceBucket(b) ? `${b} (motors at another voltage)` : `Motor ${b}`;

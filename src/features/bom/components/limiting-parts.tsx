@@ -26,7 +26,11 @@ export function LimitingParts({ rows }: { rows: SccrRow[] }) {
         return (
           <span key={`${r.location}|${r.code}`}>
             {i > 0 ? (i === shown.length - 1 && unique.length === shown.length ? ' and ' : ', ') : null}
-            <Link relative="path" to={lineLink(bucket, r.code.startsWith('(') ? null : r.code)} className="font-semibold text-copper-700 underline">
+            <Link
+              relative="path"
+              to={lineLink(bucket, r.code.startsWith('(') ? null : r.code)}
+              className="font-semibold text-copper-700 underline"
+            >
               {r.code}
             </Link>{' '}
             ({r.location === 'feeder' ? 'feeder' : r.location}, {r.ratingKa ?? '—'} kA)

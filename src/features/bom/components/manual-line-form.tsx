@@ -7,8 +7,27 @@ import type { ManualLineInput } from '../api/bom';
 import { bucketLabel, categoryLabel } from './format';
 
 /** Freight, engineering hours, spares …: a line the rebuild keeps. */
-export function ManualLineForm({ buckets, onSubmit, pending, error, onCancel }: { buckets: string[]; onSubmit: (v: ManualLineInput) => void; pending: boolean; error: unknown; onCancel: () => void }) {
-  const [v, setV] = useState({ category: 'freight' as ManualLineInput['category'], bucket: PANEL_BUCKET, description: '', quantity: '1', unitCost: '0', unitLabourHours: '0' });
+export function ManualLineForm({
+  buckets,
+  onSubmit,
+  pending,
+  error,
+  onCancel,
+}: {
+  buckets: string[];
+  onSubmit: (v: ManualLineInput) => void;
+  pending: boolean;
+  error: unknown;
+  onCancel: () => void;
+}) {
+  const [v, setV] = useState({
+    category: 'freight' as ManualLineInput['category'],
+    bucket: PANEL_BUCKET,
+    description: '',
+    quantity: '1',
+    unitCost: '0',
+    unitLabourHours: '0',
+  });
   const [problem, setProblem] = useState<string | null>(null);
   const submit = (e: FormEvent) => {
     e.preventDefault();
@@ -22,30 +41,57 @@ export function ManualLineForm({ buckets, onSubmit, pending, error, onCancel }: 
   };
   const set = (k: keyof typeof v) => (e: { target: { value: string } }) => setV({ ...v, [k]: e.target.value });
   return (
-    <form onSubmit={submit} noValidate aria-label="Add a manual line" className="grid grid-cols-6 items-end gap-3 rounded border border-line bg-panel p-4">
+    <form
+      onSubmit={submit}
+      noValidate
+      aria-label="Add a manual line"
+      className="grid grid-cols-6 items-end gap-3 rounded border border-line bg-panel p-4"
+    >
       <Field label="Kind">
         {(p) => (
           <select {...p} value={v.category} onChange={set('category')} className={inputClass}>
-            {MANUAL_CATEGORIES.map((c) => <option key={c} value={c}>{categoryLabel(c)}</option>)}
+            {MANUAL_CATEGORIES.map((c) => (
+              <option key={c} value={c}>
+                {categoryLabel(c)}
+              </option>
+            ))}
           </select>
         )}
       </Field>
       <Field label="Bucket">
         {(p) => (
           <select {...p} value={v.bucket} onChange={set('bucket')} className={inputClass}>
-            {[PANEL_BUCKET, ...buckets.filter((b) => b !== PANEL_BUCKET)].map((b) => <option key={b} value={b}>{bucketLabel(b)}</option>)}
+            {[PANEL_BUCKET, ...buckets.filter((b) => b !== PANEL_BUCKET)].map((b) => (
+              <option key={b} value={b}>
+                {bucketLabel(b)}
+              </option>
+            ))}
           </select>
         )}
       </Field>
       <div className="col-span-2">
-        <Field label="Description" error={problem ?? undefined}>{(p) => <input {...p} value={v.description} onChange={set('description')} placeholder="e.g. Freight to site" className={inputClass} />}</Field>
+        <Field label="Description" error={problem ?? undefined}>
+          {(p) => (
+            <input {...p} value={v.description} onChange={set('description')} placeholder="e.g. Freight to site" className={inputClass} />
+          )}
+        </Field>
       </div>
-      <Field label="Quantity">{(p) => <input {...p} value={v.quantity} onChange={set('quantity')} inputMode="decimal" className={inputClass} />}</Field>
-      <Field label="Unit cost" unit="$">{(p) => <input {...p} value={v.unitCost} onChange={set('unitCost')} inputMode="decimal" className={inputClass} />}</Field>
-      <Field label="Labour per unit" unit="h">{(p) => <input {...p} value={v.unitLabourHours} onChange={set('unitLabourHours')} inputMode="decimal" className={inputClass} />}</Field>
+      <Field label="Quantity">
+        {(p) => <input {...p} value={v.quantity} onChange={set('quantity')} inputMode="decimal" className={inputClass} />}
+      </Field>
+      <Field label="Unit cost" unit="$">
+        {(p) => <input {...p} value={v.unitCost} onChange={set('unitCost')} inputMode="decimal" className={inputClass} />}
+      </Field>
+      <Field label="Labour per unit" unit="h">
+        {(p) => <input {...p} value={v.unitLabourHours} onChange={set('unitLabourHours')} inputMode="decimal" className={inputClass} />}
+      </Field>
       <div className="col-span-5 flex gap-2">
-        <Button type="submit" disabled={pending} waitsFor="Saving…">Add line</Button>
-        <Button variant="ghost" onClick={onCancel}>Cancel</Button>
+        <Button type="submit" disabled={pending} waitsFor="Saving…">
+          Add line
+        </Button>
+        <Button variant="ghost" onClick={onCancel}>
+          Cancel
+        </Button>
         {error ? <ErrorNote error={error} /> : null}
       </div>
     </form>

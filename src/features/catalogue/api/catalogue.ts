@@ -20,8 +20,12 @@ export const catalogueQueries = {
       queryFn: () => get<CatalogueEntry[]>(`/api/catalogue/items${qs({ category: f.category, q: f.q, active: f.active })}`),
     }),
   history: (itemId: number) =>
-    queryOptions({ queryKey: [...catalogueQueries.all(), 'history', itemId], queryFn: () => get<HistoryEntry[]>(`/api/catalogue/items/${itemId}/history`) }),
-  labourUnits: () => queryOptions({ queryKey: [...catalogueQueries.all(), 'labour-units'], queryFn: () => get<LabourUnitEntry[]>('/api/labour-units') }),
+    queryOptions({
+      queryKey: [...catalogueQueries.all(), 'history', itemId],
+      queryFn: () => get<HistoryEntry[]>(`/api/catalogue/items/${itemId}/history`),
+    }),
+  labourUnits: () =>
+    queryOptions({ queryKey: [...catalogueQueries.all(), 'labour-units'], queryFn: () => get<LabourUnitEntry[]>('/api/labour-units') }),
 };
 
 export const CATALOGUE_EXPORT = { xlsx: '/api/catalogue.xlsx', csv: '/api/catalogue.csv' } as const;
@@ -39,7 +43,8 @@ export function useCreateItem() {
 export function useUpdateItem() {
   const invalidate = useInvalidateCatalogue();
   return useMutation({
-    mutationFn: (v: { id: number; version: number; changes: ItemChanges }) => patch<CatalogueEntry>(`/api/catalogue/items/${v.id}`, { ...v.changes, version: v.version }),
+    mutationFn: (v: { id: number; version: number; changes: ItemChanges }) =>
+      patch<CatalogueEntry>(`/api/catalogue/items/${v.id}`, { ...v.changes, version: v.version }),
     onSettled: invalidate,
   });
 }
@@ -72,7 +77,11 @@ export function useUpdateLabourUnit() {
 
 // ---- tested combination ratings (UL 508A SB4) ----------------------------------------------------
 export const combinationQueries = {
-  list: () => queryOptions({ queryKey: [...catalogueQueries.all(), 'combinations'], queryFn: () => get<CombinationView[]>('/api/catalogue/combinations') }),
+  list: () =>
+    queryOptions({
+      queryKey: [...catalogueQueries.all(), 'combinations'],
+      queryFn: () => get<CombinationView[]>('/api/catalogue/combinations'),
+    }),
 };
 
 /** A combination changes the SCCR worksheet of every panel using its parts: the panels' checks are stale too. */
@@ -83,13 +92,17 @@ function useInvalidateCombinations() {
 
 export function useCreateCombination() {
   const invalidate = useInvalidateCombinations();
-  return useMutation({ mutationFn: (v: CombinationInput) => post<CombinationView>('/api/catalogue/combinations', v), onSuccess: invalidate });
+  return useMutation({
+    mutationFn: (v: CombinationInput) => post<CombinationView>('/api/catalogue/combinations', v),
+    onSuccess: invalidate,
+  });
 }
 
 export function useUpdateCombination() {
   const invalidate = useInvalidateCombinations();
   return useMutation({
-    mutationFn: (v: { id: number; version: number; active: boolean }) => patch<CombinationView>(`/api/catalogue/combinations/${v.id}`, { active: v.active, version: v.version }),
+    mutationFn: (v: { id: number; version: number; active: boolean }) =>
+      patch<CombinationView>(`/api/catalogue/combinations/${v.id}`, { active: v.active, version: v.version }),
     onSettled: invalidate,
   });
 }
@@ -97,7 +110,8 @@ export function useUpdateCombination() {
 export function useImportCombinations() {
   const invalidate = useInvalidateCombinations();
   return useMutation({
-    mutationFn: (file: File) => uploadFile<{ created: number; changed: number; unchanged: number }>('/api/catalogue/combinations/import', file),
+    mutationFn: (file: File) =>
+      uploadFile<{ created: number; changed: number; unchanged: number }>('/api/catalogue/combinations/import', file),
     onSuccess: invalidate,
   });
 }

@@ -23,7 +23,10 @@ const num = (v: unknown) => (v === '' || v === null || v === undefined ? undefin
 const numOrNull = (v: unknown) => (v === '' || v === null || v === undefined ? null : Number(v));
 const list = (v: unknown, asNumber: boolean) => {
   if (typeof v !== 'string' || v.trim() === '') return undefined;
-  const parts = v.split('/').map((s) => s.trim()).filter(Boolean);
+  const parts = v
+    .split('/')
+    .map((s) => s.trim())
+    .filter(Boolean);
   return asNumber ? parts.map(Number) : parts;
 };
 
@@ -34,16 +37,36 @@ function withoutEmptyHp(v: FormIn): FormIn {
   const given = Object.fromEntries(Object.entries(hp).filter(([, n]) => n !== undefined && !Number.isNaN(n)));
   return { ...v, ratings: { ...v.ratings, hpByVolts: Object.keys(given).length ? given : undefined } };
 }
-const itemResolver: Resolver<FormIn, unknown, FormOut> = (values, ctx, opts) => zodResolver(CatalogueItemSchema)(withoutEmptyHp(values), ctx, opts);
+const itemResolver: Resolver<FormIn, unknown, FormOut> = (values, ctx, opts) =>
+  zodResolver(CatalogueItemSchema)(withoutEmptyHp(values), ctx, opts);
 
 const KIND_OF = new Map(CATALOGUE_COLUMNS.flatMap((c) => ('rating' in c.target ? [[c.target.rating, c.kind] as const] : [])));
 
 /** Add one catalogue item: the common fields, then the ratings the chosen category must carry. */
-export function AddItemForm({ onSubmit, pending, error, onCancel }: { onSubmit: (v: FormOut) => void; pending: boolean; error: unknown; onCancel: () => void }) {
+export function AddItemForm({
+  onSubmit,
+  pending,
+  error,
+  onCancel,
+}: {
+  onSubmit: (v: FormOut) => void;
+  pending: boolean;
+  error: unknown;
+  onCancel: () => void;
+}) {
   const { register, handleSubmit, formState, control, setError } = useForm<FormIn, unknown, FormOut>({
     resolver: itemResolver,
     shouldUnregister: true,
-    defaultValues: { category: 'contactor', unit: 'ea', active: true, sccrKa: null, heatLossW: 0, labourHours: 0, terminations: 0, ratings: {} },
+    defaultValues: {
+      category: 'contactor',
+      unit: 'ea',
+      active: true,
+      sccrKa: null,
+      heatLossW: 0,
+      labourHours: 0,
+      terminations: 0,
+      ratings: {},
+    },
   });
   const category = useWatch({ control, name: 'category' }) as Category;
   if (error instanceof ApiError) {
@@ -56,25 +79,42 @@ export function AddItemForm({ onSubmit, pending, error, onCancel }: { onSubmit: 
   const re = (e.ratings ?? {}) as Record<string, { message?: string } | undefined>;
   const needed = REQUIRED_RATINGS[category] ?? [];
   return (
-    <form onSubmit={handleSubmit(onSubmit)} noValidate aria-label="Add catalogue item" className="space-y-4 rounded border border-line bg-panel p-4">
+    <form
+      onSubmit={handleSubmit(onSubmit)}
+      noValidate
+      aria-label="Add catalogue item"
+      className="space-y-4 rounded border border-line bg-panel p-4"
+    >
       <h2 className="text-lg font-semibold">Add an item</h2>
       <div className="grid grid-cols-4 gap-3">
-        <Field label="Code" error={e.code?.message} hint="Upper-case letters, digits, hyphens">{(p) => <input {...p} {...register('code')} className={inputClass} />}</Field>
+        <Field label="Code" error={e.code?.message} hint="Upper-case letters, digits, hyphens">
+          {(p) => <input {...p} {...register('code')} className={inputClass} />}
+        </Field>
         <div className="col-span-2">
-          <Field label="Description" error={e.description?.message}>{(p) => <input {...p} {...register('description')} className={inputClass} />}</Field>
+          <Field label="Description" error={e.description?.message}>
+            {(p) => <input {...p} {...register('description')} className={inputClass} />}
+          </Field>
         </div>
         <Field label="Category" error={e.category?.message}>
           {(p) => (
             <select {...p} {...register('category')} className={inputClass}>
               {CATEGORIES.map((c) => (
-                <option key={c.id} value={c.id}>{c.label}</option>
+                <option key={c.id} value={c.id}>
+                  {c.label}
+                </option>
               ))}
             </select>
           )}
         </Field>
-        <Field label="Unit cost" unit="$" error={e.unitCost?.message}>{(p) => <input {...p} {...register('unitCost', { setValueAs: num })} inputMode="decimal" className={inputClass} />}</Field>
-        <Field label="Labour adder" unit="h" error={e.labourHours?.message}>{(p) => <input {...p} {...register('labourHours', { setValueAs: num })} inputMode="decimal" className={inputClass} />}</Field>
-        <Field label="Lead time" unit="days" error={e.leadTimeDays?.message}>{(p) => <input {...p} {...register('leadTimeDays', { setValueAs: num })} inputMode="numeric" className={inputClass} />}</Field>
+        <Field label="Unit cost" unit="$" error={e.unitCost?.message}>
+          {(p) => <input {...p} {...register('unitCost', { setValueAs: num })} inputMode="decimal" className={inputClass} />}
+        </Field>
+        <Field label="Labour adder" unit="h" error={e.labourHours?.message}>
+          {(p) => <input {...p} {...register('labourHours', { setValueAs: num })} inputMode="decimal" className={inputClass} />}
+        </Field>
+        <Field label="Lead time" unit="days" error={e.leadTimeDays?.message}>
+          {(p) => <input {...p} {...register('leadTimeDays', { setValueAs: num })} inputMode="numeric" className={inputClass} />}
+        </Field>
         <Field label="Unit" error={e.unit?.message}>
           {(p) => (
             <select {...p} {...register('unit')} className={inputClass}>
@@ -83,9 +123,15 @@ export function AddItemForm({ onSubmit, pending, error, onCancel }: { onSubmit: 
             </select>
           )}
         </Field>
-        <Field label="Heat loss" unit="W" error={e.heatLossW?.message}>{(p) => <input {...p} {...register('heatLossW', { setValueAs: num })} inputMode="decimal" className={inputClass} />}</Field>
-        <Field label="SCCR" unit="kA" error={e.sccrKa?.message} hint="Empty where none applies">{(p) => <input {...p} {...register('sccrKa', { setValueAs: numOrNull })} inputMode="decimal" className={inputClass} />}</Field>
-        <Field label="Terminations" error={e.terminations?.message}>{(p) => <input {...p} {...register('terminations', { setValueAs: num })} inputMode="numeric" className={inputClass} />}</Field>
+        <Field label="Heat loss" unit="W" error={e.heatLossW?.message}>
+          {(p) => <input {...p} {...register('heatLossW', { setValueAs: num })} inputMode="decimal" className={inputClass} />}
+        </Field>
+        <Field label="SCCR" unit="kA" error={e.sccrKa?.message} hint="Empty where none applies">
+          {(p) => <input {...p} {...register('sccrKa', { setValueAs: numOrNull })} inputMode="decimal" className={inputClass} />}
+        </Field>
+        <Field label="Terminations" error={e.terminations?.message}>
+          {(p) => <input {...p} {...register('terminations', { setValueAs: num })} inputMode="numeric" className={inputClass} />}
+        </Field>
         <label className="flex items-center gap-2 pt-5 text-sm">
           <input type="checkbox" {...register('active')} /> Active
         </label>
@@ -97,7 +143,14 @@ export function AddItemForm({ onSubmit, pending, error, onCancel }: { onSubmit: 
             if (key === 'hpByVolts') {
               return (['230', '460', '575'] as const).map((v) => (
                 <Field key={`hp${v}`} label={`hp at ${v} V`} error={re.hpByVolts?.message}>
-                  {(p) => <input {...p} {...register(`ratings.hpByVolts.${v}` as const, { setValueAs: num })} inputMode="decimal" className={inputClass} />}
+                  {(p) => (
+                    <input
+                      {...p}
+                      {...register(`ratings.hpByVolts.${v}` as const, { setValueAs: num })}
+                      inputMode="decimal"
+                      className={inputClass}
+                    />
+                  )}
                 </Field>
               ));
             }
@@ -111,13 +164,27 @@ export function AddItemForm({ onSubmit, pending, error, onCancel }: { onSubmit: 
               );
             }
             return (
-              <Field key={key} label={RATING_LABELS[key]} unit={RATING_UNITS[key]} error={re[key]?.message} hint={kind.endsWith('List') ? 'values separated by /' : undefined}>
+              <Field
+                key={key}
+                label={RATING_LABELS[key]}
+                unit={RATING_UNITS[key]}
+                error={re[key]?.message}
+                hint={kind.endsWith('List') ? 'values separated by /' : undefined}
+              >
                 {(p) => (
                   <input
                     {...p}
                     {...register(name as 'ratings.kind', {
                       setValueAs: (v: unknown) =>
-                        kind === 'number' || kind === 'integer' ? num(v) : kind === 'numberList' ? list(v, true) : kind === 'stringList' ? list(v, false) : v === '' ? undefined : v,
+                        kind === 'number' || kind === 'integer'
+                          ? num(v)
+                          : kind === 'numberList'
+                            ? list(v, true)
+                            : kind === 'stringList'
+                              ? list(v, false)
+                              : v === ''
+                                ? undefined
+                                : v,
                     })}
                     className={inputClass}
                   />
@@ -126,12 +193,18 @@ export function AddItemForm({ onSubmit, pending, error, onCancel }: { onSubmit: 
             );
           })}
         </div>
-        <p className="mt-2 text-xs text-ink-soft">Other ratings (and horsepower at {HP_VOLTS.length} voltages) can be given through the spreadsheet import.</p>
+        <p className="mt-2 text-xs text-ink-soft">
+          Other ratings (and horsepower at {HP_VOLTS.length} voltages) can be given through the spreadsheet import.
+        </p>
       </fieldset>
       {error && !(error instanceof ApiError && error.fieldIssues.length) ? <ErrorNote error={error} /> : null}
       <div className="flex gap-2">
-        <Button type="submit" disabled={pending}>Add item</Button>
-        <Button variant="ghost" onClick={onCancel}>Cancel</Button>
+        <Button type="submit" disabled={pending}>
+          Add item
+        </Button>
+        <Button variant="ghost" onClick={onCancel}>
+          Cancel
+        </Button>
       </div>
     </form>
   );

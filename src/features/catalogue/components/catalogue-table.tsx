@@ -11,7 +11,14 @@ import {
   type GroupingState,
   type SortingState,
 } from '@tanstack/react-table';
-import { CATEGORY_IDS, CATEGORY_LABELS, type CatalogueEntry, type Category, type ItemChanges, type Ratings } from '../../../../shared/schemas/catalogue';
+import {
+  CATEGORY_IDS,
+  CATEGORY_LABELS,
+  type CatalogueEntry,
+  type Category,
+  type ItemChanges,
+  type Ratings,
+} from '../../../../shared/schemas/catalogue';
 import { EditableNumber } from './editable-cell';
 import { formatAmount as money } from '../../../../shared/format/money';
 import { ratingValueLabel } from '../../../../shared/labels';
@@ -30,7 +37,12 @@ export function ratingsSummary(r: Ratings): string {
   if (r.fuseClass) p.push(`class ${r.fuseClass}`);
   if (r.va) p.push(`${r.va} VA`);
   if (r.kaic) p.push(`${r.kaic} kA IC`);
-  if (r.hpByVolts) p.push(Object.entries(r.hpByVolts).map(([v, hp]) => `${hp} hp@${v}`).join(' '));
+  if (r.hpByVolts)
+    p.push(
+      Object.entries(r.hpByVolts)
+        .map(([v, hp]) => `${hp} hp@${v}`)
+        .join(' '),
+    );
   if (r.wireSize) p.push(`${r.wireSize} AWG/kcmil`);
   if (r.nemaType) p.push(`Type ${r.nemaType}`);
   if (r.heightMm) p.push(`${r.heightMm}×${r.widthMm}×${r.depthMm} mm`);
@@ -57,7 +69,13 @@ export function CatalogueTable({
 }) {
   const [sorting, setSorting] = useState<SortingState>([]);
   // the catalogue's own category order, then code: the order groups and rows show in until a column is sorted
-  const data = useMemo(() => [...items].sort((a, b) => (CATEGORY_ORDER.get(a.category) ?? 99) - (CATEGORY_ORDER.get(b.category) ?? 99) || a.code.localeCompare(b.code)), [items]);
+  const data = useMemo(
+    () =>
+      [...items].sort(
+        (a, b) => (CATEGORY_ORDER.get(a.category) ?? 99) - (CATEGORY_ORDER.get(b.category) ?? 99) || a.code.localeCompare(b.code),
+      ),
+    [items],
+  );
   const [text, setText] = useState('');
   const [category, setCategory] = useState<Category | ''>('');
   const [grouped, setGrouped] = useState(true);
@@ -82,7 +100,12 @@ export function CatalogueTable({
         meta: { numeric: true },
         cell: (c) =>
           canEdit ? (
-            <EditableNumber label={`Unit cost of ${c.row.original.code}`} value={c.getValue()} format={money} onSave={(n) => onChange(c.row.original, { unitCost: n })} />
+            <EditableNumber
+              label={`Unit cost of ${c.row.original.code}`}
+              value={c.getValue()}
+              format={money}
+              onSave={(n) => onChange(c.row.original, { unitCost: n })}
+            />
           ) : (
             money(c.getValue())
           ),
@@ -91,14 +114,27 @@ export function CatalogueTable({
         header: 'Labour adder (h)',
         meta: { numeric: true },
         cell: (c) =>
-          canEdit ? <EditableNumber label={`Labour adder of ${c.row.original.code}`} value={c.getValue()} onSave={(n) => onChange(c.row.original, { labourHours: n })} /> : c.getValue(),
+          canEdit ? (
+            <EditableNumber
+              label={`Labour adder of ${c.row.original.code}`}
+              value={c.getValue()}
+              onSave={(n) => onChange(c.row.original, { labourHours: n })}
+            />
+          ) : (
+            c.getValue()
+          ),
       }),
       col.accessor('leadTimeDays', {
         header: 'Lead time (d)',
         meta: { numeric: true },
         cell: (c) =>
           canEdit ? (
-            <EditableNumber label={`Lead time of ${c.row.original.code}`} integer value={c.getValue()} onSave={(n) => onChange(c.row.original, { leadTimeDays: n })} />
+            <EditableNumber
+              label={`Lead time of ${c.row.original.code}`}
+              integer
+              value={c.getValue()}
+              onSave={(n) => onChange(c.row.original, { leadTimeDays: n })}
+            />
           ) : (
             c.getValue()
           ),
@@ -108,7 +144,12 @@ export function CatalogueTable({
         cell: (c) =>
           canEdit ? (
             <label className="inline-flex items-center gap-1 text-xs">
-              <input type="checkbox" checked={c.getValue()} onChange={(e) => onChange(c.row.original, { active: e.target.checked })} aria-label={`${c.row.original.code} active`} />
+              <input
+                type="checkbox"
+                checked={c.getValue()}
+                onChange={(e) => onChange(c.row.original, { active: e.target.checked })}
+                aria-label={`${c.row.original.code} active`}
+              />
               {c.getValue() ? 'active' : <span className="font-semibold text-state-returned">✖ inactive</span>}
             </label>
           ) : c.getValue() ? (
@@ -162,14 +203,25 @@ export function CatalogueTable({
       <div className="flex flex-wrap items-end gap-3" role="search" aria-label="Filter the catalogue">
         <label className="flex flex-col gap-1 text-xs font-semibold uppercase tracking-wide text-ink-soft">
           Code or description
-          <input value={text} onChange={(e) => setText(e.target.value)} placeholder="e.g. contactor 460" className="w-64 rounded border border-line bg-panel px-2 py-1.5 text-sm font-normal normal-case text-ink" />
+          <input
+            value={text}
+            onChange={(e) => setText(e.target.value)}
+            placeholder="e.g. contactor 460"
+            className="w-64 rounded border border-line bg-panel px-2 py-1.5 text-sm font-normal normal-case text-ink"
+          />
         </label>
         <label className="flex flex-col gap-1 text-xs font-semibold uppercase tracking-wide text-ink-soft">
           Category
-          <select value={category} onChange={(e) => setCategory(e.target.value as Category | '')} className="w-72 rounded border border-line bg-panel px-2 py-1.5 text-sm font-normal normal-case text-ink">
+          <select
+            value={category}
+            onChange={(e) => setCategory(e.target.value as Category | '')}
+            className="w-72 rounded border border-line bg-panel px-2 py-1.5 text-sm font-normal normal-case text-ink"
+          >
             <option value="">All categories</option>
             {Object.entries(CATEGORY_LABELS).map(([id, label]) => (
-              <option key={id} value={id}>{label}</option>
+              <option key={id} value={id}>
+                {label}
+              </option>
             ))}
           </select>
         </label>
@@ -178,11 +230,17 @@ export function CatalogueTable({
         </label>
         {grouped && !text && !category ? (
           <span className="flex gap-2 pb-1.5 text-sm">
-            <button type="button" className="text-copper-700 hover:underline" onClick={() => setExpanded(true)}>Expand all</button>
-            <button type="button" className="text-copper-700 hover:underline" onClick={() => setExpanded({})}>Collapse all</button>
+            <button type="button" className="text-copper-700 hover:underline" onClick={() => setExpanded(true)}>
+              Expand all
+            </button>
+            <button type="button" className="text-copper-700 hover:underline" onClick={() => setExpanded({})}>
+              Collapse all
+            </button>
           </span>
         ) : null}
-        <span className="ml-auto pb-1.5 text-sm text-ink-soft" aria-live="polite">{leafCount} item{leafCount === 1 ? '' : 's'}</span>
+        <span className="ml-auto pb-1.5 text-sm text-ink-soft" aria-live="polite">
+          {leafCount} item{leafCount === 1 ? '' : 's'}
+        </span>
       </div>
       <DenseTable label="Catalogue" frameClassName="max-h-[70vh] overflow-auto">
         <DataTableHead table={table} sticky />
@@ -191,7 +249,12 @@ export function CatalogueTable({
             row.getIsGrouped() ? (
               <tr key={row.id} className="border-b border-line bg-copper-50/60">
                 <td colSpan={row.getVisibleCells().length} className="px-2 py-1.5">
-                  <button type="button" className="inline-flex items-center gap-2 font-semibold" aria-expanded={row.getIsExpanded()} onClick={row.getToggleExpandedHandler()}>
+                  <button
+                    type="button"
+                    className="inline-flex items-center gap-2 font-semibold"
+                    aria-expanded={row.getIsExpanded()}
+                    onClick={row.getToggleExpandedHandler()}
+                  >
                     <span aria-hidden>{row.getIsExpanded() ? '▾' : '▸'}</span>
                     {CATEGORY_LABELS[row.getValue('category') as Category]}
                     <span className="font-normal text-ink-soft">({row.subRows.length})</span>
@@ -199,9 +262,17 @@ export function CatalogueTable({
                 </td>
               </tr>
             ) : (
-              <tr key={row.id} className={`border-b border-line/60 last:border-0 ${row.original.active ? 'hover:bg-copper-50' : 'text-ink-soft'}`}>
+              <tr
+                key={row.id}
+                className={`border-b border-line/60 last:border-0 ${row.original.active ? 'hover:bg-copper-50' : 'text-ink-soft'}`}
+              >
                 {row.getVisibleCells().map((cell) => (
-                  <DataCell key={cell.id} cell={cell} className={`px-2 py-1 ${cell.column.id === 'ratings' ? 'text-xs text-ink-soft' : ''}`} empty={cell.getIsPlaceholder()} />
+                  <DataCell
+                    key={cell.id}
+                    cell={cell}
+                    className={`px-2 py-1 ${cell.column.id === 'ratings' ? 'text-xs text-ink-soft' : ''}`}
+                    empty={cell.getIsPlaceholder()}
+                  />
                 ))}
               </tr>
             ),

@@ -20,15 +20,28 @@ const FormSchema = z.object({
 type FormIn = z.input<typeof FormSchema>;
 type FormOut = z.output<typeof FormSchema>;
 
-const splitParts = (s: string) => s.split(/[\s,+;]+/).map((p) => p.trim().toUpperCase()).filter(Boolean);
+const splitParts = (s: string) =>
+  s
+    .split(/[\s,+;]+/)
+    .map((p) => p.trim().toUpperCase())
+    .filter(Boolean);
 
 function AddCombinationForm({ onDone }: { onDone: () => void }) {
   const create = useCreateCombination();
-  const { register, handleSubmit, formState, setError } = useForm<FormIn, unknown, FormOut>({ resolver: zodResolver(FormSchema), defaultValues: { maxVolts: '480' } });
+  const { register, handleSubmit, formState, setError } = useForm<FormIn, unknown, FormOut>({
+    resolver: zodResolver(FormSchema),
+    defaultValues: { maxVolts: '480' },
+  });
   const e = formState.errors;
   const submit = (v: FormOut) =>
     create.mutate(
-      { ref: v.ref, componentCodes: splitParts(v.parts), ratingKa: v.ratingKa, maxVolts: v.maxVolts ? Number(v.maxVolts) : null, source: v.source },
+      {
+        ref: v.ref,
+        componentCodes: splitParts(v.parts),
+        ratingKa: v.ratingKa,
+        maxVolts: v.maxVolts ? Number(v.maxVolts) : null,
+        source: v.source,
+      },
       {
         onSuccess: onDone,
         onError: (err) => {
@@ -41,19 +54,42 @@ function AddCombinationForm({ onDone }: { onDone: () => void }) {
       },
     );
   return (
-    <form onSubmit={handleSubmit(submit)} noValidate className="grid grid-cols-2 gap-3 rounded border border-line bg-panel p-4 lg:grid-cols-[1fr_2fr_0.6fr_0.6fr]" aria-label="Add a tested combination">
-      <Field label="Reference" error={e.ref?.message} hint="e.g. the maker's table row">{(p) => <input {...p} {...register('ref')} className={inputClass} />}</Field>
-      <Field label="Parts" error={e.parts?.message} hint="Catalogue codes of the bucket, e.g. breaker, contactor, overload relay">{(p) => <input {...p} {...register('parts')} className={inputClass} />}</Field>
-      <Field label="Rating" unit="kA" error={e.ratingKa?.message}>{(p) => <input {...p} {...register('ratingKa')} inputMode="decimal" className={inputClass} />}</Field>
-      <Field label="Up to" unit="V" error={e.maxVolts?.message}>{(p) => <input {...p} {...register('maxVolts')} inputMode="numeric" className={inputClass} />}</Field>
+    <form
+      onSubmit={handleSubmit(submit)}
+      noValidate
+      className="grid grid-cols-2 gap-3 rounded border border-line bg-panel p-4 lg:grid-cols-[1fr_2fr_0.6fr_0.6fr]"
+      aria-label="Add a tested combination"
+    >
+      <Field label="Reference" error={e.ref?.message} hint="e.g. the maker's table row">
+        {(p) => <input {...p} {...register('ref')} className={inputClass} />}
+      </Field>
+      <Field label="Parts" error={e.parts?.message} hint="Catalogue codes of the bucket, e.g. breaker, contactor, overload relay">
+        {(p) => <input {...p} {...register('parts')} className={inputClass} />}
+      </Field>
+      <Field label="Rating" unit="kA" error={e.ratingKa?.message}>
+        {(p) => <input {...p} {...register('ratingKa')} inputMode="decimal" className={inputClass} />}
+      </Field>
+      <Field label="Up to" unit="V" error={e.maxVolts?.message}>
+        {(p) => <input {...p} {...register('maxVolts')} inputMode="numeric" className={inputClass} />}
+      </Field>
       <div className="col-span-2 lg:col-span-3">
-        <Field label="Source" error={e.source?.message} hint="The listing or the maker's published combination table">{(p) => <input {...p} {...register('source')} className={inputClass} />}</Field>
+        <Field label="Source" error={e.source?.message} hint="The listing or the maker's published combination table">
+          {(p) => <input {...p} {...register('source')} className={inputClass} />}
+        </Field>
       </div>
       <div className="flex items-end gap-2">
-        <Button type="submit" disabled={create.isPending}>{create.isPending ? 'Saving…' : 'Add combination'}</Button>
-        <Button type="button" variant="secondary" onClick={onDone}>Cancel</Button>
+        <Button type="submit" disabled={create.isPending}>
+          {create.isPending ? 'Saving…' : 'Add combination'}
+        </Button>
+        <Button type="button" variant="secondary" onClick={onDone}>
+          Cancel
+        </Button>
       </div>
-      {create.error && !(create.error instanceof ApiError && create.error.fieldIssues.length) ? <div className="col-span-full"><ErrorNote error={create.error} /></div> : null}
+      {create.error && !(create.error instanceof ApiError && create.error.fieldIssues.length) ? (
+        <div className="col-span-full">
+          <ErrorNote error={create.error} />
+        </div>
+      ) : null}
     </form>
   );
 }
@@ -68,13 +104,21 @@ export function CombinationsSection({ canEdit }: { canEdit: boolean }) {
     <section className="space-y-3" aria-labelledby="combinations-title">
       <div className="flex flex-wrap items-end justify-between gap-2">
         <div>
-          <h2 id="combinations-title" className="text-lg font-semibold">Tested combination ratings</h2>
+          <h2 id="combinations-title" className="text-lg font-semibold">
+            Tested combination ratings
+          </h2>
           <p className="text-sm text-ink-soft">
-            Parts of one bucket tested together to a short-circuit current rating (UL 508A SB4). When every part of a combination is in a bucket, the SCCR worksheet takes its rating for them. A combination is never rated above the interrupting rating of its own protective device.
+            Parts of one bucket tested together to a short-circuit current rating (UL 508A SB4). When every part of a combination is in a
+            bucket, the SCCR worksheet takes its rating for them. A combination is never rated above the interrupting rating of its own
+            protective device.
           </p>
         </div>
         <div className="flex flex-wrap items-center gap-2">
-          <a href="/api/catalogue/combinations.csv" className="rounded border border-line bg-panel px-3 py-1.5 text-sm font-semibold hover:border-copper-500" download>
+          <a
+            href="/api/catalogue/combinations.csv"
+            className="rounded border border-line bg-panel px-3 py-1.5 text-sm font-semibold hover:border-copper-500"
+            download
+          >
             Download table (.csv)
           </a>
           {canEdit ? (
@@ -98,13 +142,18 @@ export function CombinationsSection({ canEdit }: { canEdit: boolean }) {
       </div>
       {importing.isSuccess ? (
         <p className="text-sm" role="status">
-          ✔ Imported: {importing.data.created} new, {importing.data.changed} changed, {importing.data.unchanged} unchanged. Columns: ref, parts (joined by +), ratingKa, maxVolts, source, active.
+          ✔ Imported: {importing.data.created} new, {importing.data.changed} changed, {importing.data.unchanged} unchanged. Columns: ref,
+          parts (joined by +), ratingKa, maxVolts, source, active.
         </p>
       ) : null}
       {importing.error ? <ErrorNote error={importing.error} /> : null}
       {adding ? <AddCombinationForm onDone={() => setAdding(false)} /> : null}
       {update.error ? <ErrorNote error={update.error} /> : null}
-      {list.isPending ? <Loading what="Loading the combinations" /> : list.isError ? <ErrorNote error={list.error} /> : list.data.length === 0 ? (
+      {list.isPending ? (
+        <Loading what="Loading the combinations" />
+      ) : list.isError ? (
+        <ErrorNote error={list.error} />
+      ) : list.data.length === 0 ? (
         <p className="text-sm text-ink-soft">None yet.</p>
       ) : (
         <table className="w-full border-collapse rounded border border-line bg-panel text-sm" aria-label="Tested combination ratings">
@@ -129,7 +178,12 @@ export function CombinationsSection({ canEdit }: { canEdit: boolean }) {
                 <td className="px-2 py-1.5">
                   {c.active ? '✔ in use' : '○ set aside'}
                   {canEdit ? (
-                    <button type="button" className="ml-2 text-xs font-semibold text-copper-700 hover:underline" disabled={update.isPending} onClick={() => update.mutate({ id: c.id, version: c.version, active: !c.active })}>
+                    <button
+                      type="button"
+                      className="ml-2 text-xs font-semibold text-copper-700 hover:underline"
+                      disabled={update.isPending}
+                      onClick={() => update.mutate({ id: c.id, version: c.version, active: !c.active })}
+                    >
                       {c.active ? 'Set aside' : 'Use again'}
                     </button>
                   ) : null}

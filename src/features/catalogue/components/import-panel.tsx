@@ -19,8 +19,8 @@ export function ImportPanel() {
     <section aria-label="Import catalogue" className="space-y-3 rounded border border-line bg-panel p-4">
       <h2 className="text-lg font-semibold">Import a catalogue file</h2>
       <p className="text-sm text-ink-soft">
-        Use the columns of the exported file. Items are matched by code: a known code is updated, a new one added, and items the file does not name stay as they are.
-        Either every row is good and all go in, or nothing changes.
+        Use the columns of the exported file. Items are matched by code: a known code is updated, a new one added, and items the file does
+        not name stay as they are. Either every row is good and all go in, or nothing changes.
       </p>
       <input
         type="file"
@@ -34,7 +34,11 @@ export function ImportPanel() {
           e.target.value = '';
         }}
       />
-      {imp.isPending ? <p role="status" className="text-sm">Checking {name}…</p> : null}
+      {imp.isPending ? (
+        <p role="status" className="text-sm">
+          Checking {name}…
+        </p>
+      ) : null}
       {imp.isSuccess ? (
         <p role="status" className="text-sm text-state-signed">
           ✔ {name}: {imp.data.created} added, {imp.data.updated} changed, {imp.data.unchanged} unchanged.

@@ -13,9 +13,15 @@ export function ItemHistory({ item, onClose }: { item: CatalogueEntry; onClose: 
     <section aria-label={`History of ${item.code}`} className="rounded border border-line bg-panel p-4">
       <div className="mb-2 flex items-center justify-between">
         <h2 className="text-lg font-semibold">History of {item.code}</h2>
-        <button type="button" className="text-sm text-ink-soft hover:text-ink" onClick={onClose}>Close</button>
+        <button type="button" className="text-sm text-ink-soft hover:text-ink" onClick={onClose}>
+          Close
+        </button>
       </div>
-      {q.isPending ? <Loading what="Loading history" /> : q.isError ? <ErrorNote error={q.error} /> : q.data.length === 0 ? (
+      {q.isPending ? (
+        <Loading what="Loading history" />
+      ) : q.isError ? (
+        <ErrorNote error={q.error} />
+      ) : q.data.length === 0 ? (
         <p className="text-sm text-ink-soft">No changes recorded since the catalogue was loaded.</p>
       ) : (
         <ol className="space-y-2 text-sm">

@@ -7,7 +7,15 @@ import { DataCell, DataTableHead, DenseTable } from '../../../components/ui/data
 const col = createColumnHelper<LabourUnitEntry>();
 const PER: Record<LabourUnitEntry['per'], string> = { each: 'each', termination: 'per termination', foot: 'per foot' };
 
-export function LabourUnitsTable({ units, canEdit, onChange }: { units: LabourUnitEntry[]; canEdit: boolean; onChange: (u: LabourUnitEntry, hours: number) => void }) {
+export function LabourUnitsTable({
+  units,
+  canEdit,
+  onChange,
+}: {
+  units: LabourUnitEntry[];
+  canEdit: boolean;
+  onChange: (u: LabourUnitEntry, hours: number) => void;
+}) {
   const columns = useMemo(
     () => [
       col.accessor('key', { header: 'Unit', cell: (c) => <span className="font-semibold">{c.getValue()}</span> }),
@@ -17,9 +25,23 @@ export function LabourUnitsTable({ units, canEdit, onChange }: { units: LabourUn
         header: 'Hours (h)',
         meta: { numeric: true },
         cell: (c) =>
-          canEdit ? <EditableNumber label={`Hours for ${c.row.original.key}`} value={c.getValue()} format={(n) => n.toFixed(3)} onSave={(n) => onChange(c.row.original, n)} /> : c.getValue().toFixed(3),
+          canEdit ? (
+            <EditableNumber
+              label={`Hours for ${c.row.original.key}`}
+              value={c.getValue()}
+              format={(n) => n.toFixed(3)}
+              onSave={(n) => onChange(c.row.original, n)}
+            />
+          ) : (
+            c.getValue().toFixed(3)
+          ),
       }),
-      col.accessor((u) => u.hours * 60, { id: 'minutes', header: 'Minutes (min)', meta: { numeric: true }, cell: (c) => c.getValue().toFixed(1) }),
+      col.accessor((u) => u.hours * 60, {
+        id: 'minutes',
+        header: 'Minutes (min)',
+        meta: { numeric: true },
+        cell: (c) => c.getValue().toFixed(1),
+      }),
     ],
     [canEdit, onChange],
   );

@@ -10,8 +10,16 @@ export function ControlConductorsSection({ cc }: { cc: PanelChecks['controlCondu
   return (
     <section aria-labelledby="checks-control-conductors" className="rounded border border-line bg-panel p-4">
       <div className="mb-3 flex flex-wrap items-baseline justify-between gap-2">
-        <h2 id="checks-control-conductors" className="text-lg font-semibold">Control-circuit conductors</h2>
-        {cc.rows.length ? <Verdict ok={bad === 0} okText="every control conductor within Table 430.72(B)" badText={`${bad} control conductor${bad === 1 ? '' : 's'} too small for the upstream device`} /> : null}
+        <h2 id="checks-control-conductors" className="text-lg font-semibold">
+          Control-circuit conductors
+        </h2>
+        {cc.rows.length ? (
+          <Verdict
+            ok={bad === 0}
+            okText="every control conductor within Table 430.72(B)"
+            badText={`${bad} control conductor${bad === 1 ? '' : 's'} too small for the upstream device`}
+          />
+        ) : null}
       </div>
       {cc.rows.length === 0 ? (
         <p className="text-sm">No control wiring in the bill of materials.</p>
@@ -31,11 +39,20 @@ export function ControlConductorsSection({ cc }: { cc: PanelChecks['controlCondu
             {cc.rows.map((r, i) => (
               <tr key={`${r.bucket}-${i}`} className="border-t border-line/60">
                 <td className={`${td} font-semibold`}>{r.bucket}</td>
-                <td className={td}>{r.conductor} {r.material === 'cu' ? 'Cu' : 'Al'}</td>
-                <td className={td}>{r.device.kind}{r.device.amps !== null ? ` ${r.device.amps} A` : ''} <span className="text-ink-soft">{r.device.description}</span></td>
-                <td className={td} title={r.basis}>column {r.column}</td>
+                <td className={td}>
+                  {r.conductor} {r.material === 'cu' ? 'Cu' : 'Al'}
+                </td>
+                <td className={td}>
+                  {r.device.kind}
+                  {r.device.amps !== null ? ` ${r.device.amps} A` : ''} <span className="text-ink-soft">{r.device.description}</span>
+                </td>
+                <td className={td} title={r.basis}>
+                  column {r.column}
+                </td>
                 <td className={`${td} text-right`}>{r.maxAmps ?? '—'}</td>
-                <td className={td}>{r.ok === null ? '◔ not checked' : r.ok ? '✔ OK' : <span className="font-semibold text-state-returned">✖ too small</span>}</td>
+                <td className={td}>
+                  {r.ok === null ? '◔ not checked' : r.ok ? '✔ OK' : <span className="font-semibold text-state-returned">✖ too small</span>}
+                </td>
               </tr>
             ))}
           </tbody>
@@ -43,10 +60,15 @@ export function ControlConductorsSection({ cc }: { cc: PanelChecks['controlCondu
       )}
       {cc.findings.length ? (
         <ul className="mt-2 list-disc pl-5 text-sm">
-          {cc.findings.map((f) => <li key={f}>{f}</li>)}
+          {cc.findings.map((f) => (
+            <li key={f}>{f}</li>
+          ))}
         </ul>
       ) : null}
-      <p className="mt-2 text-xs text-ink-soft">Basis: {cc.basis}. Column A: separate protection; B: within the enclosure; C: extending beyond it, both protected by the branch device.</p>
+      <p className="mt-2 text-xs text-ink-soft">
+        Basis: {cc.basis}. Column A: separate protection; B: within the enclosure; C: extending beyond it, both protected by the branch
+        device.
+      </p>
     </section>
   );
 }

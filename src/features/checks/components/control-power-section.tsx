@@ -27,7 +27,11 @@ export function ControlPowerSection({ cp }: { cp: Checks['controlPower'] }) {
     );
   }
   return (
-    <Section title="Control power transformer" id="checks-cpt" aside={<Verdict ok={r.inrushOk} okText={`${r.sizeVa} VA carries the inrush`} badText={`${r.sizeVa} VA does not carry the inrush`} />}>
+    <Section
+      title="Control power transformer"
+      id="checks-cpt"
+      aside={<Verdict ok={r.inrushOk} okText={`${r.sizeVa} VA carries the inrush`} badText={`${r.sizeVa} VA does not carry the inrush`} />}
+    >
       <div className="grid gap-6 md:grid-cols-[auto_1fr]">
         <Figures
           rows={[
@@ -59,7 +63,11 @@ export function ControlPowerSection({ cp }: { cp: Checks['controlPower'] }) {
           {cp.fitted ? (
             <p className="mt-2 text-sm">
               In the bill of materials: {cp.fitted.code} ({cp.fitted.va === null ? 'size unknown' : `${cp.fitted.va} VA`}){' '}
-              {cp.fitted.adequate === null ? null : cp.fitted.adequate ? <strong className="text-state-signed">✔ large enough</strong> : <strong className="text-state-returned">✖ smaller than {r.sizeVa} VA</strong>}
+              {cp.fitted.adequate === null ? null : cp.fitted.adequate ? (
+                <strong className="text-state-signed">✔ large enough</strong>
+              ) : (
+                <strong className="text-state-returned">✖ smaller than {r.sizeVa} VA</strong>
+              )}
             </p>
           ) : null}
         </div>

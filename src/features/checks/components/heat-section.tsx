@@ -12,7 +12,14 @@ function HeatChart({ byBucket }: { byBucket: Array<{ bucketTag: string; watts: n
   const height = rows.length * rowH + 8;
   const width = labelW + barW + 70;
   return (
-    <svg role="img" aria-label={`Heat by bucket: ${rows.map((r) => `${r.bucketTag} ${fmt(r.watts)} W`).join(', ')}`} viewBox={`0 0 ${width} ${height}`} width={width} height={height} className="max-w-full">
+    <svg
+      role="img"
+      aria-label={`Heat by bucket: ${rows.map((r) => `${r.bucketTag} ${fmt(r.watts)} W`).join(', ')}`}
+      viewBox={`0 0 ${width} ${height}`}
+      width={width}
+      height={height}
+      className="max-w-full"
+    >
       {rows.map((r, i) => {
         const y = i * rowH + 4;
         const w = Math.max(1, (r.watts / max) * barW);
@@ -46,12 +53,19 @@ export function HeatSection({ heat }: { heat: Checks['heat'] }) {
     <Section
       title="Heat load"
       id="checks-heat"
-      aside={<Verdict ok={!r.exceeded} okText={`Inside ${fmt(r.internalTempC)} °C ≤ limit ${r.internalLimitC} °C`} badText={`Inside ${fmt(r.internalTempC)} °C exceeds the ${r.internalLimitC} °C limit`} />}
+      aside={
+        <Verdict
+          ok={!r.exceeded}
+          okText={`Inside ${fmt(r.internalTempC)} °C ≤ limit ${r.internalLimitC} °C`}
+          badText={`Inside ${fmt(r.internalTempC)} °C exceeds the ${r.internalLimitC} °C limit`}
+        />
+      }
     >
       <div className="grid gap-6 md:grid-cols-2">
         <div>
           <p className="mb-2 text-sm text-ink-soft">
-            {e.code} · {fmt(e.heightMm, 0)} × {fmt(e.widthMm, 0)} × {fmt(e.depthMm, 0)} mm (H × W × D){e.sections > 1 ? `, ${e.sections} sections` : ''} · {e.mounting.replace(/-/g, ' ')}
+            {e.code} · {fmt(e.heightMm, 0)} × {fmt(e.widthMm, 0)} × {fmt(e.depthMm, 0)} mm (H × W × D)
+            {e.sections > 1 ? `, ${e.sections} sections` : ''} · {e.mounting.replace(/-/g, ' ')}
           </p>
           <Figures
             rows={[
@@ -70,7 +84,8 @@ export function HeatSection({ heat }: { heat: Checks['heat'] }) {
               <strong>⚠ Cooling needed:</strong> remove {fmt(r.cooling.excessW)} W.{' '}
               {r.cooling.fan ? (
                 <>
-                  Filter fan ≥ {fmt(r.cooling.fan.cfm)} cfm ({fmt(r.cooling.fan.m3h)} m³/h), or an air conditioner ≥ {fmt(r.cooling.airConditionerW)} W.
+                  Filter fan ≥ {fmt(r.cooling.fan.cfm)} cfm ({fmt(r.cooling.fan.m3h)} m³/h), or an air conditioner ≥{' '}
+                  {fmt(r.cooling.airConditionerW)} W.
                 </>
               ) : (
                 <>Air conditioner ≥ {fmt(r.cooling.airConditionerW)} W.</>

@@ -40,7 +40,11 @@ export function NameplateSection({ np }: { np: Checks['nameplate'] }) {
     >
       <style>{PRINT_CSS}</style>
       <div className="grid gap-6 md:grid-cols-[auto_1fr]">
-        <div className="pw-nameplate w-[22rem] self-start rounded border-2 border-ink bg-white p-3 font-dense text-ink" role="group" aria-label="Nameplate label preview">
+        <div
+          className="pw-nameplate w-[22rem] self-start rounded border-2 border-ink bg-white p-3 font-dense text-ink"
+          role="group"
+          aria-label="Nameplate label preview"
+        >
           <p className="border-b border-ink pb-1 text-center text-sm font-bold tracking-widest">{r.label[0]}</p>
           <dl className="mt-2 grid grid-cols-[auto_1fr] gap-x-3 gap-y-0.5 text-sm">
             {r.lines.map((l) => (

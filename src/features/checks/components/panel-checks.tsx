@@ -19,7 +19,12 @@ export function PanelChecks({ panelId }: { panelId: number }) {
       {c.bom.note || c.motorsWithErrors.length > 0 || c.bom.unmatchedLines > 0 ? (
         <div className="rounded border border-state-review/40 bg-warn-bg px-3 py-2 text-sm">
           {c.bom.note ? <p>⚠ {c.bom.note}</p> : null}
-          {c.bom.unmatchedLines > 0 ? <p>⚠ {c.bom.unmatchedLines} bill-of-materials line{c.bom.unmatchedLines > 1 ? 's have' : ' has'} no catalogue part: ratings and losses of those lines are assumed or missing.</p> : null}
+          {c.bom.unmatchedLines > 0 ? (
+            <p>
+              ⚠ {c.bom.unmatchedLines} bill-of-materials line{c.bom.unmatchedLines > 1 ? 's have' : ' has'} no catalogue part: ratings and
+              losses of those lines are assumed or missing.
+            </p>
+          ) : null}
           {c.motorsWithErrors.length > 0 ? <p>✖ Left out until fixed: {c.motorsWithErrors.join(', ')}</p> : null}
         </div>
       ) : null}

@@ -18,9 +18,19 @@ function SccrVerdict({ sccr }: { sccr: Checks['sccr'] }) {
     case 'adequate':
       return <Verdict ok okText={`Panel SCCR ${fmt(sccr.panelSccrKa)} kA ≥ available ${fmt(sccr.availableFaultKa)} kA`} badText="" />;
     case 'below-available':
-      return <Verdict ok={false} okText="" badText={`Panel SCCR ${fmt(sccr.panelSccrKa)} kA is below the available ${fmt(sccr.availableFaultKa)} kA`} />;
+      return (
+        <Verdict
+          ok={false}
+          okText=""
+          badText={`Panel SCCR ${fmt(sccr.panelSccrKa)} kA is below the available ${fmt(sccr.availableFaultKa)} kA`}
+        />
+      );
     case 'no-available-fault-current':
-      return <span className="text-sm font-semibold text-state-review">⚠ Panel SCCR {fmt(sccr.panelSccrKa)} kA; the job has no available fault current to compare</span>;
+      return (
+        <span className="text-sm font-semibold text-state-review">
+          ⚠ Panel SCCR {fmt(sccr.panelSccrKa)} kA; the job has no available fault current to compare
+        </span>
+      );
     default:
       return <span className="text-sm font-semibold text-state-returned">✖ Panel SCCR not established: a component has no rating</span>;
   }
@@ -32,7 +42,12 @@ function WayOut({ w }: { w: SccrWayOut }) {
       <span className="min-w-0 flex-1 text-sm">{w.description}</span>
       {w.resultingSccrKa !== null ? (
         <span className="text-xs whitespace-nowrap">
-          Panel then {fmt(w.resultingSccrKa)} kA · {w.resolves ? <strong className="text-state-signed">✔ resolves</strong> : <strong className="text-state-review">⚠ not enough on its own</strong>}
+          Panel then {fmt(w.resultingSccrKa)} kA ·{' '}
+          {w.resolves ? (
+            <strong className="text-state-signed">✔ resolves</strong>
+          ) : (
+            <strong className="text-state-review">⚠ not enough on its own</strong>
+          )}
         </span>
       ) : null}
       <span className="w-28 text-right font-dense text-sm tabular-nums whitespace-nowrap" title="Cost difference at catalogue prices">
@@ -51,7 +66,8 @@ export function SccrSection({ sccr }: { sccr: Checks['sccr'] }) {
         Every power-circuit component with its rating and where the rating comes from. The panel is rated at its weakest component
         {sccr.limiting.length > 0 ? (
           <>
-            : <strong className="text-ink">{[...new Set(sccr.limiting.map((r) => `${r.location} ${r.code}`))].join(', ')}</strong> at {fmt(sccr.panelSccrKa)} kA
+            : <strong className="text-ink">{[...new Set(sccr.limiting.map((r) => `${r.location} ${r.code}`))].join(', ')}</strong> at{' '}
+            {fmt(sccr.panelSccrKa)} kA
           </>
         ) : null}
         .
@@ -83,7 +99,9 @@ export function SccrSection({ sccr }: { sccr: Checks['sccr'] }) {
                 <td className={`${td} text-right`}>{fmt(r.qty, 2)}</td>
                 <td className={`${td} text-right`}>
                   {fmt(r.ratingKa)}
-                  {r.unraisedKa !== undefined ? <span className="block text-xs font-normal text-ink-soft">was {fmt(r.unraisedKa)}</span> : null}
+                  {r.unraisedKa !== undefined ? (
+                    <span className="block text-xs font-normal text-ink-soft">was {fmt(r.unraisedKa)}</span>
+                  ) : null}
                 </td>
                 <td className={td}>{SOURCE_WORDS[r.source]}</td>
                 <td className={`${td} max-w-72 text-xs font-normal text-ink-soft`}>{r.basis}</td>
@@ -112,7 +130,17 @@ export function SccrSection({ sccr }: { sccr: Checks['sccr'] }) {
       {sccr.verdict === 'below-available' ? (
         <div className="mt-3">
           <h3 className="text-sm font-semibold">Ways out (cost difference at catalogue prices)</h3>
-          {costed.length > 0 ? <ul className="mt-1">{costed.map((w, i) => <WayOut key={i} w={w} />)}</ul> : <p className="text-sm text-ink-soft">No drop-in part in the catalogue raises a weak component to the available fault current.</p>}
+          {costed.length > 0 ? (
+            <ul className="mt-1">
+              {costed.map((w, i) => (
+                <WayOut key={i} w={w} />
+              ))}
+            </ul>
+          ) : (
+            <p className="text-sm text-ink-soft">
+              No drop-in part in the catalogue raises a weak component to the available fault current.
+            </p>
+          )}
           {advice.length > 0 ? (
             <ul className="mt-1 list-disc pl-5 text-sm">
               {advice.map((w) => (

@@ -2,7 +2,9 @@
 import type { ReactNode } from 'react';
 
 export const fmt = (x: number | null | undefined, d = 1): string =>
-  x === null || x === undefined || !Number.isFinite(x) ? '—' : (Math.round(x * 10 ** d) / 10 ** d).toLocaleString('en-US', { maximumFractionDigits: d });
+  x === null || x === undefined || !Number.isFinite(x)
+    ? '—'
+    : (Math.round(x * 10 ** d) / 10 ** d).toLocaleString('en-US', { maximumFractionDigits: d });
 
 export const th = 'px-2 py-1.5 font-semibold';
 export const td = 'px-2 py-1.5 align-top';

@@ -23,8 +23,12 @@ export const drawingQueries = {
   all: (panelId: number) => ['panels', 'detail', panelId, 'drawings'] as const,
   panel: (panelId: number) => queryOptions({ queryKey: drawingQueries.all(panelId), queryFn: () => get<DrawingsView>(base(panelId)) }),
   schematic: (panelId: number, tag: string) =>
-    queryOptions({ queryKey: [...drawingQueries.all(panelId), 'schematic', tag], queryFn: () => svgText(`${base(panelId)}/schematic.svg?tag=${encodeURIComponent(tag)}`) }),
-  nameplate: (panelId: number) => queryOptions({ queryKey: [...drawingQueries.all(panelId), 'nameplate'], queryFn: () => svgText(`${base(panelId)}/nameplate.svg`) }),
+    queryOptions({
+      queryKey: [...drawingQueries.all(panelId), 'schematic', tag],
+      queryFn: () => svgText(`${base(panelId)}/schematic.svg?tag=${encodeURIComponent(tag)}`),
+    }),
+  nameplate: (panelId: number) =>
+    queryOptions({ queryKey: [...drawingQueries.all(panelId), 'nameplate'], queryFn: () => svgText(`${base(panelId)}/nameplate.svg`) }),
 };
 
 export const drawingUrls = (panelId: number) => ({

@@ -7,10 +7,22 @@ import { ConnectionCardDrawing } from './connection-card';
 
 const ROTATION = 'Check rotation before coupling the load.';
 
-export function Bucket({ load, card, feed }: { load: LoadView; card: PanelChecks['connectionCards'][number] | undefined; feed: MotorFeed }) {
+export function Bucket({
+  load,
+  card,
+  feed,
+}: {
+  load: LoadView;
+  card: PanelChecks['connectionCards'][number] | undefined;
+  feed: MotorFeed;
+}) {
   const s = load.effective ?? load.selection;
   const answers = load.answers as { description?: string; hp?: number; kw?: number; volts?: number; supply?: string };
-  const rating = [answers.hp !== undefined ? `${answers.hp} hp` : answers.kw !== undefined ? `${answers.kw} kW` : null, answers.volts !== undefined ? `${answers.volts} V` : null, answers.supply === 'dc' ? 'DC' : answers.supply === 'ac1' ? '1φ' : '3φ']
+  const rating = [
+    answers.hp !== undefined ? `${answers.hp} hp` : answers.kw !== undefined ? `${answers.kw} kW` : null,
+    answers.volts !== undefined ? `${answers.volts} V` : null,
+    answers.supply === 'dc' ? 'DC' : answers.supply === 'ac1' ? '1φ' : '3φ',
+  ]
     .filter(Boolean)
     .join(' · ');
   return (
@@ -28,7 +40,9 @@ export function Bucket({ load, card, feed }: { load: LoadView; card: PanelChecks
           {s && s.errors.length === 0 ? (
             <OneLine selection={s} feed={feed} />
           ) : (
-            <p className="text-sm text-state-returned">✖ No one-line until the motor’s selection is fixed{s ? `: ${s.errors.join('; ')}` : ''}.</p>
+            <p className="text-sm text-state-returned">
+              ✖ No one-line until the motor’s selection is fixed{s ? `: ${s.errors.join('; ')}` : ''}.
+            </p>
           )}
         </div>
         <div>
@@ -51,7 +65,11 @@ export function Bucket({ load, card, feed }: { load: LoadView; card: PanelChecks
                   ))}
                 </ul>
               ) : null}
-              {card.card.notes.length > 0 ? <p className="mt-1 text-xs text-ink-soft">{card.card.notes.join(' ')} ({card.card.basis})</p> : null}
+              {card.card.notes.length > 0 ? (
+                <p className="mt-1 text-xs text-ink-soft">
+                  {card.card.notes.join(' ')} ({card.card.basis})
+                </p>
+              ) : null}
             </>
           ) : (
             <p className="text-sm">⚠ {card?.reason ?? 'No connection card for this motor.'}</p>
@@ -64,4 +82,3 @@ export function Bucket({ load, card, feed }: { load: LoadView; card: PanelChecks
     </article>
   );
 }
-

@@ -92,14 +92,22 @@ export function ConnectionCardDrawing({ card, width = 420 }: ConnectionCardProps
   const height = y + textLines.length * 16 + 12;
   const titleId = `connection-card-${card.title.replace(/[^a-z0-9]+/gi, '-').toLowerCase()}`;
   const summary = placed
-    .map(({ s }) =>
-      `${s.label}: ${LINE_ORDER.filter((l) => s.lineGroups[l])
-        .map((l) => `${l}=${s.lineGroups[l]!.join(',')}`)
-        .join(' ')}${s.joined.length ? `; join ${s.joined.map((g) => g.join('-')).join(', ')}` : ''}`,
+    .map(
+      ({ s }) =>
+        `${s.label}: ${LINE_ORDER.filter((l) => s.lineGroups[l])
+          .map((l) => `${l}=${s.lineGroups[l]!.join(',')}`)
+          .join(' ')}${s.joined.length ? `; join ${s.joined.map((g) => g.join('-')).join(', ')}` : ''}`,
     )
     .join('. ');
   return (
-    <svg role="img" aria-labelledby={titleId} viewBox={`0 0 ${width} ${height}`} width={width} height={height} xmlns="http://www.w3.org/2000/svg">
+    <svg
+      role="img"
+      aria-labelledby={titleId}
+      viewBox={`0 0 ${width} ${height}`}
+      width={width}
+      height={height}
+      xmlns="http://www.w3.org/2000/svg"
+    >
       <title id={titleId}>{`${card.title}. ${summary}`}</title>
       <rect x={1} y={1} width={width - 2} height={height - 2} fill="#fff" stroke={SLATE} rx={4} />
       <text x={12} y={20} fontSize={13} fontWeight={700} fill={SLATE} fontFamily={FONT}>

@@ -92,8 +92,12 @@ function ElementSymbol({ e, y }: { e: OneLineElement; y: number }) {
           <line x1={X} y1={y} x2={X} y2={mid - 16} />
           <rect x={X - 24} y={mid - 16} width={48} height={32} fill="#fff" />
           <line x1={X - 24} y1={mid + 16} x2={X + 24} y2={mid - 16} strokeWidth={1} />
-          <text x={X - 12} y={mid - 3} fontSize={9} textAnchor="middle" fill={COPPER} stroke="none" fontFamily={FONT}>AC</text>
-          <text x={X + 12} y={mid + 11} fontSize={9} textAnchor="middle" fill={COPPER} stroke="none" fontFamily={FONT}>DC</text>
+          <text x={X - 12} y={mid - 3} fontSize={9} textAnchor="middle" fill={COPPER} stroke="none" fontFamily={FONT}>
+            AC
+          </text>
+          <text x={X + 12} y={mid + 11} fontSize={9} textAnchor="middle" fill={COPPER} stroke="none" fontFamily={FONT}>
+            DC
+          </text>
           <line x1={X} y1={mid + 16} x2={X} y2={y + STEP} />
         </g>
       );

@@ -2,6 +2,15 @@
 // so it scales with the page and its text can be found.
 export function SheetView({ svg, label }: { svg: string; label: string }) {
   const body = svg.replace(/^<\?xml[^>]*>\s*/, '').replace(/ width="\d+" height="\d+"/, ' width="100%" height="auto"');
-  // biome-ignore lint/security/noDangerouslySetInnerHtml: the markup is our own generated SVG with every text escaped (shared/drawings/svg.ts)
-  return <div role="img" aria-label={label} className="w-full overflow-x-auto rounded border border-line bg-white" dangerouslySetInnerHTML={{ __html: body }} />;
+  // the markup is our own generated SVG with every text escaped (shared/drawings/svg.ts)
+  const html = { __html: body };
+  return (
+    <div
+      role="img"
+      aria-label={label}
+      className="w-full overflow-x-auto rounded border border-line bg-white"
+      // biome-ignore lint/security/noDangerouslySetInnerHtml: our own generated SVG, every text escaped (shared/drawings/svg.ts)
+      dangerouslySetInnerHTML={html}
+    />
+  );
 }

@@ -12,7 +12,10 @@ function SvgSheet({ panelId, sheet }: { panelId: number; sheet: SheetRef }) {
     sheet.kind === 'nameplate'
       ? drawingQueries.nameplate(panelId)
       : sheet.kind === 'supply'
-        ? { ...drawingQueries.schematic(panelId, '(supply)'), queryFn: () => fetch(`${drawingUrls(panelId).schematic}?sheet=supply`, { credentials: 'same-origin' }).then((r) => r.text()) }
+        ? {
+            ...drawingQueries.schematic(panelId, '(supply)'),
+            queryFn: () => fetch(`${drawingUrls(panelId).schematic}?sheet=supply`, { credentials: 'same-origin' }).then((r) => r.text()),
+          }
         : drawingQueries.schematic(panelId, sheet.tag ?? ''),
   );
   if (q.isPending) return <Loading what={`Drawing ${sheet.title}`} />;
@@ -20,7 +23,12 @@ function SvgSheet({ panelId, sheet }: { panelId: number; sheet: SheetRef }) {
   return (
     <div className={sheet.kind === 'nameplate' ? 'max-w-xl' : ''}>
       <SheetView svg={q.data} label={`${sheet.number} ${sheet.title}`} />
-      {sheet.kind === 'nameplate' ? <p className="mt-2 text-xs text-ink-soft">Print at 100 % for a 5 × 3 in label. The values come from the panel checks; a qualified person verifies them before the label is fixed.</p> : null}
+      {sheet.kind === 'nameplate' ? (
+        <p className="mt-2 text-xs text-ink-soft">
+          Print at 100 % for a 5 × 3 in label. The values come from the panel checks; a qualified person verifies them before the label is
+          fixed.
+        </p>
+      ) : null}
     </div>
   );
 }
@@ -38,11 +46,21 @@ export function Sheets({ panelId, view }: { panelId: number; view: DrawingsView 
         </h2>
         <span className="text-xs text-ink-soft">{view.standard}</span>
         <nav aria-label="Drawing downloads" className="ml-auto flex flex-wrap gap-3 text-sm font-semibold text-copper-700">
-          <a href={urls.schematic} download>⤓ Schematics (.svg)</a>
-          <a href={urls.wiring} download>⤓ Terminal plan and wire list (.xlsx)</a>
-          <a href={urls.terminals} download>⤓ Terminals (.csv)</a>
-          <a href={urls.wires} download>⤓ Wires (.csv)</a>
-          <a href={urls.nameplate} download>⤓ Nameplate (.svg)</a>
+          <a href={urls.schematic} download>
+            ⤓ Schematics (.svg)
+          </a>
+          <a href={urls.wiring} download>
+            ⤓ Terminal plan and wire list (.xlsx)
+          </a>
+          <a href={urls.terminals} download>
+            ⤓ Terminals (.csv)
+          </a>
+          <a href={urls.wires} download>
+            ⤓ Wires (.csv)
+          </a>
+          <a href={urls.nameplate} download>
+            ⤓ Nameplate (.svg)
+          </a>
         </nav>
       </header>
       {view.warnings.length > 0 ? (
@@ -74,13 +92,16 @@ export function Sheets({ panelId, view }: { panelId: number; view: DrawingsView 
           {sheet?.kind === 'terminals' ? (
             <>
               <p className="mb-2 text-sm">
-                {view.terminals.length} terminals, the {view.bomTerminalBlocks} terminal blocks of the bill of materials. {view.colourPractice}
+                {view.terminals.length} terminals, the {view.bomTerminalBlocks} terminal blocks of the bill of materials.{' '}
+                {view.colourPractice}
               </p>
               <TerminalPlan rows={view.terminals} />
             </>
           ) : sheet?.kind === 'wires' ? (
             <>
-              <p className="mb-2 text-sm">{view.wires.length} wires. {view.colourPractice}</p>
+              <p className="mb-2 text-sm">
+                {view.wires.length} wires. {view.colourPractice}
+              </p>
               <div className="max-h-[32rem] overflow-auto rounded border border-line">
                 <table className="w-full text-sm">
                   <thead className="sticky top-0 bg-surface text-left text-xs uppercase text-ink-soft">
@@ -116,4 +137,3 @@ export function Sheets({ panelId, view }: { panelId: number; view: DrawingsView 
     </section>
   );
 }
-

@@ -1,6 +1,13 @@
 import type { TerminalRow } from '../../../../shared/drawings/panel-drawings';
 
-const GROUP: Record<string, string> = { motor: 'Motor lead', ground: 'Ground', remote: 'Remote device', plc: 'Plant control', supply: 'Supply', spare: 'Spare' };
+const GROUP: Record<string, string> = {
+  motor: 'Motor lead',
+  ground: 'Ground',
+  remote: 'Remote device',
+  plc: 'Plant control',
+  supply: 'Supply',
+  spare: 'Spare',
+};
 
 export function TerminalPlan({ rows }: { rows: TerminalRow[] }) {
   return (

@@ -27,7 +27,11 @@ export const jobQueries = {
   list: (filters: JobListFilters) =>
     queryOptions({ queryKey: [...jobQueries.lists(), filters], queryFn: () => get<JobSummary[]>(`/api/jobs${qs({ ...filters })}`) }),
   detail: (id: number) => queryOptions({ queryKey: [...jobQueries.all(), 'detail', id], queryFn: () => get<JobDetail>(`/api/jobs/${id}`) }),
-  activity: (id: number) => queryOptions({ queryKey: [...jobQueries.all(), 'detail', id, 'activity'], queryFn: () => get<ActivityEntry[]>(`/api/jobs/${id}/activity`) }),
+  activity: (id: number) =>
+    queryOptions({
+      queryKey: [...jobQueries.all(), 'detail', id, 'activity'],
+      queryFn: () => get<ActivityEntry[]>(`/api/jobs/${id}/activity`),
+    }),
 };
 
 export function useCreateJob() {

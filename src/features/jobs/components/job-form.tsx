@@ -12,10 +12,34 @@ import { ApiError } from '../../../lib/api-client';
 type FormIn = z.input<typeof JobInputSchema>;
 type FormOut = z.output<typeof JobInputSchema>;
 
-export function JobForm({ initial, onSubmit, pending, error, submitLabel }: { initial?: Partial<JobInput>; onSubmit: (v: FormOut) => void; pending: boolean; error: unknown; submitLabel: string }) {
+export function JobForm({
+  initial,
+  onSubmit,
+  pending,
+  error,
+  submitLabel,
+}: {
+  initial?: Partial<JobInput>;
+  onSubmit: (v: FormOut) => void;
+  pending: boolean;
+  error: unknown;
+  submitLabel: string;
+}) {
   const { register, handleSubmit, formState, setError, setValue } = useForm<FormIn, unknown, FormOut>({
     resolver: zodResolver(JobInputSchema),
-    defaultValues: { supplyVolts: 480, supplyPhases: 3, supplyHz: 60, availableFaultKa: 22, ambientC: 30, voltageUnbalancePercent: 0, codeEdition: '2023', customer: '', site: '', notes: '', ...initial },
+    defaultValues: {
+      supplyVolts: 480,
+      supplyPhases: 3,
+      supplyHz: 60,
+      availableFaultKa: 22,
+      ambientC: 30,
+      voltageUnbalancePercent: 0,
+      codeEdition: '2023',
+      customer: '',
+      site: '',
+      notes: '',
+      ...initial,
+    },
   });
   if (error instanceof ApiError) {
     for (const i of error.fieldIssues) {
@@ -26,11 +50,21 @@ export function JobForm({ initial, onSubmit, pending, error, submitLabel }: { in
   const e = formState.errors;
   return (
     <form onSubmit={handleSubmit(onSubmit)} noValidate className="grid max-w-3xl grid-cols-2 gap-4 rounded border border-line bg-panel p-5">
-      <Field label="Job number" error={e.number?.message}>{(p) => <input {...p} {...register('number')} className={inputClass} />}</Field>
-      <Field label="Name" error={e.name?.message}>{(p) => <input {...p} {...register('name')} className={inputClass} />}</Field>
-      <Field label="Customer" error={e.customer?.message}>{(p) => <input {...p} {...register('customer')} className={inputClass} />}</Field>
-      <Field label="Site" error={e.site?.message}>{(p) => <input {...p} {...register('site')} className={inputClass} />}</Field>
-      <Field label="Supply voltage" unit="V" error={e.supplyVolts?.message}>{(p) => <input {...p} {...register('supplyVolts')} inputMode="numeric" className={inputClass} />}</Field>
+      <Field label="Job number" error={e.number?.message}>
+        {(p) => <input {...p} {...register('number')} className={inputClass} />}
+      </Field>
+      <Field label="Name" error={e.name?.message}>
+        {(p) => <input {...p} {...register('name')} className={inputClass} />}
+      </Field>
+      <Field label="Customer" error={e.customer?.message}>
+        {(p) => <input {...p} {...register('customer')} className={inputClass} />}
+      </Field>
+      <Field label="Site" error={e.site?.message}>
+        {(p) => <input {...p} {...register('site')} className={inputClass} />}
+      </Field>
+      <Field label="Supply voltage" unit="V" error={e.supplyVolts?.message}>
+        {(p) => <input {...p} {...register('supplyVolts')} inputMode="numeric" className={inputClass} />}
+      </Field>
       <div className="grid grid-cols-2 gap-3">
         <Field label="Phases" error={e.supplyPhases?.message}>
           {(p) => (
@@ -49,11 +83,23 @@ export function JobForm({ initial, onSubmit, pending, error, submitLabel }: { in
           )}
         </Field>
       </div>
-      <Field label="Available fault current at the panel" unit="kA" hint="From the utility or the short-circuit study (NEC 409.22)" error={e.availableFaultKa?.message}>
+      <Field
+        label="Available fault current at the panel"
+        unit="kA"
+        hint="From the utility or the short-circuit study (NEC 409.22)"
+        error={e.availableFaultKa?.message}
+      >
         {(p) => <input {...p} {...register('availableFaultKa')} inputMode="decimal" className={inputClass} />}
       </Field>
-      <Field label="Ambient temperature" unit="°C" error={e.ambientC?.message}>{(p) => <input {...p} {...register('ambientC')} inputMode="decimal" className={inputClass} />}</Field>
-      <Field label="Voltage unbalance" unit="%" hint="Measured at the site; 0 when not known. Above 1 % the motors are derated (NEMA MG 1 14.35)" error={e.voltageUnbalancePercent?.message}>
+      <Field label="Ambient temperature" unit="°C" error={e.ambientC?.message}>
+        {(p) => <input {...p} {...register('ambientC')} inputMode="decimal" className={inputClass} />}
+      </Field>
+      <Field
+        label="Voltage unbalance"
+        unit="%"
+        hint="Measured at the site; 0 when not known. Above 1 % the motors are derated (NEMA MG 1 14.35)"
+        error={e.voltageUnbalancePercent?.message}
+      >
         {(p) => <input {...p} {...register('voltageUnbalancePercent')} inputMode="decimal" className={inputClass} />}
       </Field>
       <UnbalanceFromVoltages onUse={(pct) => setValue('voltageUnbalancePercent', pct, { shouldDirty: true, shouldValidate: true })} />
@@ -69,7 +115,9 @@ export function JobForm({ initial, onSubmit, pending, error, submitLabel }: { in
         )}
       </Field>
       <div className="col-span-2">
-        <Field label="Notes" error={e.notes?.message}>{(p) => <textarea {...p} {...register('notes')} rows={3} className={inputClass} />}</Field>
+        <Field label="Notes" error={e.notes?.message}>
+          {(p) => <textarea {...p} {...register('notes')} rows={3} className={inputClass} />}
+        </Field>
       </div>
       {error && !(error instanceof ApiError && error.fieldIssues.length) ? (
         <div className="col-span-2">

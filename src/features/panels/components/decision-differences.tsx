@@ -1,7 +1,19 @@
 import type { SelectionDifference } from '../../../../shared/calc/selection-diff';
 
 /** Motor by motor, the decisions that differ between two selections: "Motor · Decision · before · after". */
-export function DecisionDifferences({ motors, before, after, label, className = 'text-sm' }: { motors: ReadonlyArray<{ tag: string; differences: SelectionDifference[] }>; before: string; after: string; label: string; className?: string }) {
+export function DecisionDifferences({
+  motors,
+  before,
+  after,
+  label,
+  className = 'text-sm',
+}: {
+  motors: ReadonlyArray<{ tag: string; differences: SelectionDifference[] }>;
+  before: string;
+  after: string;
+  label: string;
+  className?: string;
+}) {
   return (
     <table className={`dense w-full ${className}`} aria-label={label}>
       <thead className="text-left text-xs uppercase text-ink-soft">

@@ -24,7 +24,13 @@ export function JobPanels({ jobId, canEdit }: { jobId: number; canEdit: boolean 
               if (name.trim()) create.mutate({ name: name.trim() }, { onSuccess: () => setName('') });
             }}
           >
-            <input aria-label="New panel name" placeholder="New panel name, e.g. MCC-2" value={name} onChange={(e) => setName(e.target.value)} className={`${inputClass} w-64`} />
+            <input
+              aria-label="New panel name"
+              placeholder="New panel name, e.g. MCC-2"
+              value={name}
+              onChange={(e) => setName(e.target.value)}
+              className={`${inputClass} w-64`}
+            />
             <Button type="submit" disabled={create.isPending || !name.trim()}>
               + Add panel
             </Button>
@@ -37,7 +43,9 @@ export function JobPanels({ jobId, canEdit }: { jobId: number; canEdit: boolean 
       ) : panels.isError ? (
         <ErrorNote error={panels.error} />
       ) : panels.data.length === 0 ? (
-        <Empty title="No panels yet">{canEdit ? 'Add the first panel (one enclosure or lineup) above.' : 'A panel builder adds panels.'}</Empty>
+        <Empty title="No panels yet">
+          {canEdit ? 'Add the first panel (one enclosure or lineup) above.' : 'A panel builder adds panels.'}
+        </Empty>
       ) : (
         <table className="dense w-full rounded border border-line bg-panel text-sm" aria-label="Panels">
           <thead className="border-b border-line bg-surface text-left text-xs uppercase tracking-wide text-ink-soft">

@@ -45,45 +45,124 @@ export function SelectionSummary({ selection, overridden = [] }: { selection: Lo
   // part-winding starter); the trip then falls within the 430.32 limit (common practice; the maker's instructions govern)
   const relay = relayOf(s);
   const wiring = s.overload.providedByDrive ? null : (relayWiringText(s) ?? `dial at ${relay.settingAmps} A (nameplate FLA)`);
-  const mark = (field: string) => (overridden.includes(field) ? <span className="ml-1 rounded bg-copper-100 px-1 text-[10px] font-bold text-copper-700" title="Overridden by the designer">OVERRIDE</span> : null);
+  const mark = (field: string) =>
+    overridden.includes(field) ? (
+      <span className="ml-1 rounded bg-copper-100 px-1 text-[10px] font-bold text-copper-700" title="Overridden by the designer">
+        OVERRIDE
+      </span>
+    ) : null;
   const rows: Array<[string, React.ReactNode, string]> = [
     ['Full-load current (table)', `${s.flcAmps} A`, s.flcSource],
-    ['Starter', <>{starterLabel(s)}{mark('starter.type')}{mark('starter.nemaSize')}{s.starter.reversingContactors ? ' · reversing pair, mech. + elec. interlock' : ''}</>, s.starter.basis],
+    [
+      'Starter',
+      <>
+        {starterLabel(s)}
+        {mark('starter.type')}
+        {mark('starter.nemaSize')}
+        {s.starter.reversingContactors ? ' · reversing pair, mech. + elec. interlock' : ''}
+      </>,
+      s.starter.basis,
+    ],
     [
       'Overload',
       <>
-        {s.overload.providedByDrive ? 'by the drive' : `≤ ${s.overload.maxSettingAmps} A (${s.overload.maxPercent} %)`}, class {s.overload.tripClass}
+        {s.overload.providedByDrive ? 'by the drive' : `≤ ${s.overload.maxSettingAmps} A (${s.overload.maxPercent} %)`}, class{' '}
+        {s.overload.tripClass}
         {mark('overload.tripClass')}
-        {wiring ? <span className="block text-ink-soft" data-testid="overload-relay">{wiring}</span> : null}
+        {wiring ? (
+          <span className="block text-ink-soft" data-testid="overload-relay">
+            {wiring}
+          </span>
+        ) : null}
       </>,
-      wiring ? `${s.overload.basis}; dial: ${relay.share === 1 ? 'common practice' : relay.basis}, the relay maker's instructions govern` : s.overload.basis,
+      wiring
+        ? `${s.overload.basis}; dial: ${relay.share === 1 ? 'common practice' : relay.basis}, the relay maker's instructions govern`
+        : s.overload.basis,
     ],
     [
       'Branch protection',
       <>
-        {scpdLabel(s.scpd.type)} {s.scpd.ratingAmps} A{mark('scpd.ratingAmps')}{mark('scpd.type')} <span className="text-ink-soft">(max {s.scpd.maxPercent} % = {s.scpd.computedMaxAmps} A)</span>
-        {perWindingText(s) ? <span className="block text-ink-soft" data-testid="scpd-per-winding">{perWindingText(s)}</span> : null}
+        {scpdLabel(s.scpd.type)} {s.scpd.ratingAmps} A{mark('scpd.ratingAmps')}
+        {mark('scpd.type')}{' '}
+        <span className="text-ink-soft">
+          (max {s.scpd.maxPercent} % = {s.scpd.computedMaxAmps} A)
+        </span>
+        {perWindingText(s) ? (
+          <span className="block text-ink-soft" data-testid="scpd-per-winding">
+            {perWindingText(s)}
+          </span>
+        ) : null}
       </>,
       s.scpd.perWinding ? `${s.scpd.basis}; per half-winding: ${s.scpd.perWinding.basis}` : s.scpd.basis,
     ],
     [
       'Conductors',
       <>
-        {s.conductor.size} {s.conductor.material === 'cu' ? 'Cu' : 'Al'} {s.conductor.tempRatingC} °C ({s.conductor.ampacity} A ≥ {s.conductor.minAmpacity} A){mark('conductor.size')}
-        {termination60Text(s) ? <span className="block text-state-review" data-testid="termination-60c">◔ {termination60Text(s)}: the engineer decides which holds</span> : null}
-        {motorLeadText(s) ? <span className="block text-ink-soft" data-testid="motor-leads">{motorLeadText(s)}</span> : null}
-        {voltageDropText(s) ? <span className="block text-ink-soft" data-testid="voltage-drop">{voltageDropText(s)}</span> : null}
+        {s.conductor.size} {s.conductor.material === 'cu' ? 'Cu' : 'Al'} {s.conductor.tempRatingC} °C ({s.conductor.ampacity} A ≥{' '}
+        {s.conductor.minAmpacity} A){mark('conductor.size')}
+        {termination60Text(s) ? (
+          <span className="block text-state-review" data-testid="termination-60c">
+            ◔ {termination60Text(s)}: the engineer decides which holds
+          </span>
+        ) : null}
+        {motorLeadText(s) ? (
+          <span className="block text-ink-soft" data-testid="motor-leads">
+            {motorLeadText(s)}
+          </span>
+        ) : null}
+        {voltageDropText(s) ? (
+          <span className="block text-ink-soft" data-testid="voltage-drop">
+            {voltageDropText(s)}
+          </span>
+        ) : null}
       </>,
-      [s.conductor.motorLeads ? `line side: ${s.conductor.basis}; ${s.conductor.motorLeads.basis}` : s.conductor.basis, s.conductor.termination60C ? `at 60 °C terminations: ${s.conductor.termination60C.basis}` : null, s.conductor.voltageDrop ? `voltage drop: ${s.conductor.voltageDrop.basis}` : null].filter(Boolean).join('; '),
+      [
+        s.conductor.motorLeads ? `line side: ${s.conductor.basis}; ${s.conductor.motorLeads.basis}` : s.conductor.basis,
+        s.conductor.termination60C ? `at 60 °C terminations: ${s.conductor.termination60C.basis}` : null,
+        s.conductor.voltageDrop ? `voltage drop: ${s.conductor.voltageDrop.basis}` : null,
+      ]
+        .filter(Boolean)
+        .join('; '),
     ],
     ['Disconnect', `≥ ${s.disconnect.minAmps} A${s.disconnect.minHp ? `, ≥ ${s.disconnect.minHp} hp` : ''}`, s.disconnect.basis],
-    ['Relays', <>{relayLabel(s)}{mark('relays.phaseLoss')}{mark('relays.phaseReversal')}</>, 'common practice'],
-    ['Enclosure', <>NEMA Type {s.enclosure.nemaType} <span className="text-ink-soft">(≈ {s.enclosure.ipCode}, one-way comparison)</span>{mark('enclosure.nemaType')}{s.enclosure.flagForEngineer ? ' ⚑ engineer to confirm' : ''}</>, 'NEMA 250'],
+    [
+      'Relays',
+      <>
+        {relayLabel(s)}
+        {mark('relays.phaseLoss')}
+        {mark('relays.phaseReversal')}
+      </>,
+      'common practice',
+    ],
+    [
+      'Enclosure',
+      <>
+        NEMA Type {s.enclosure.nemaType} <span className="text-ink-soft">(≈ {s.enclosure.ipCode}, one-way comparison)</span>
+        {mark('enclosure.nemaType')}
+        {s.enclosure.flagForEngineer ? ' ⚑ engineer to confirm' : ''}
+      </>,
+      'NEMA 250',
+    ],
   ];
   if (s.unbalance) rows.push(['Voltage unbalance', unbalanceText(s.unbalance), s.unbalance.basis]);
-  if (s.vfd) rows.push(['Drive', `≥ ${s.vfd.minOutputAmps} A ${decisionValueLabel('vfd.duty', s.vfd.duty)?.toLowerCase()}${s.vfd.inverterDutyMotor ? ' · inverter-duty motor' : ''}${s.vfd.outputFilter !== 'none' ? ` · ${decisionValueLabel('vfd.outputFilter', s.vfd.outputFilter)}` : ''}`, s.vfd.basis]);
-  if (s.softStarter) rows.push(['Soft starter', `≥ ${s.softStarter.minAmps} A${s.softStarter.insideDelta ? ' inside delta' : ''}${s.softStarter.bypass ? ' · bypass contactor' : ''}`, 'common practice']);
-  if (s.dc) rows.push(['DC', `${answerValueLabel('dcField', s.dc.field)} field${s.dc.fieldLossProtection ? ' · field-loss protection' : ''}${s.dc.dynamicBraking ? ' · dynamic braking' : ''}`, 'common practice']);
+  if (s.vfd)
+    rows.push([
+      'Drive',
+      `≥ ${s.vfd.minOutputAmps} A ${decisionValueLabel('vfd.duty', s.vfd.duty)?.toLowerCase()}${s.vfd.inverterDutyMotor ? ' · inverter-duty motor' : ''}${s.vfd.outputFilter !== 'none' ? ` · ${decisionValueLabel('vfd.outputFilter', s.vfd.outputFilter)}` : ''}`,
+      s.vfd.basis,
+    ]);
+  if (s.softStarter)
+    rows.push([
+      'Soft starter',
+      `≥ ${s.softStarter.minAmps} A${s.softStarter.insideDelta ? ' inside delta' : ''}${s.softStarter.bypass ? ' · bypass contactor' : ''}`,
+      'common practice',
+    ]);
+  if (s.dc)
+    rows.push([
+      'DC',
+      `${answerValueLabel('dcField', s.dc.field)} field${s.dc.fieldLossProtection ? ' · field-loss protection' : ''}${s.dc.dynamicBraking ? ' · dynamic braking' : ''}`,
+      'common practice',
+    ]);
   return (
     <div className="space-y-3">
       {s.errors.length ? (
@@ -97,7 +176,9 @@ export function SelectionSummary({ selection, overridden = [] }: { selection: Lo
         <tbody>
           {rows.map(([k, v, basis]) => (
             <tr key={k} className="border-b border-line/60 align-top">
-              <th scope="row" className="w-36 py-1.5 pr-2 text-left text-xs font-semibold uppercase text-ink-soft">{k}</th>
+              <th scope="row" className="w-36 py-1.5 pr-2 text-left text-xs font-semibold uppercase text-ink-soft">
+                {k}
+              </th>
               <td className="py-1.5">
                 <div className="font-semibold">{v}</div>
                 <div className="text-xs text-ink-soft">{basis}</div>
@@ -121,7 +202,9 @@ export function SelectionSummary({ selection, overridden = [] }: { selection: Lo
       {s.cautions.length ? (
         <ul className="space-y-1 text-xs">
           {s.cautions.map((c) => (
-            <li key={c} className="rounded bg-warn-bg px-2 py-1">⚠ {c}</li>
+            <li key={c} className="rounded bg-warn-bg px-2 py-1">
+              ⚠ {c}
+            </li>
           ))}
         </ul>
       ) : null}
@@ -130,7 +213,10 @@ export function SelectionSummary({ selection, overridden = [] }: { selection: Lo
         <ol className="mt-1 space-y-1">
           {s.trace.map((t, i) => (
             <li key={`${t.ruleId}-${i}`} className="border-l-2 border-copper-100 pl-2">
-              <span className="font-semibold">{t.words ?? t.decision}</span> — {t.reason} <span className="text-ink-soft" title={`rule ${t.ruleId}`}>[{t.basis}]</span>
+              <span className="font-semibold">{t.words ?? t.decision}</span> — {t.reason}{' '}
+              <span className="text-ink-soft" title={`rule ${t.ruleId}`}>
+                [{t.basis}]
+              </span>
             </li>
           ))}
         </ol>

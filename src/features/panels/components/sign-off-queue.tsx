@@ -22,7 +22,13 @@ const LISTS: Record<'in_review' | 'returned' | 'signed_off', List> = {
 /** The lists in the order that puts the person's own work first. */
 function order(me: CurrentUser | null | undefined): Array<List & { mine: boolean }> {
   const roles = me?.roles ?? [];
-  const first = roles.includes('engineer') ? 'in_review' : roles.includes('designer') || roles.includes('admin') ? 'returned' : roles.includes('estimator') ? 'signed_off' : null;
+  const first = roles.includes('engineer')
+    ? 'in_review'
+    : roles.includes('designer') || roles.includes('admin')
+      ? 'returned'
+      : roles.includes('estimator')
+        ? 'signed_off'
+        : null;
   const keys = (['in_review', 'returned', 'signed_off'] as const).slice().sort((a, b) => Number(b === first) - Number(a === first));
   return keys.map((k) => ({ ...LISTS[k], mine: k === first }));
 }
@@ -40,7 +46,12 @@ export function SignOffQueue({ me }: { me: CurrentUser | null | undefined }) {
         // oldest wait first, except signed off: newest first
         const shown = (list.state === 'signed_off' ? [...items].reverse() : items).slice(0, SHOWN);
         return (
-          <div key={list.state} role="group" aria-label={list.title} className={`rounded border bg-panel p-3 ${list.mine && items.length ? 'border-copper-500/60' : 'border-line'}`}>
+          <div
+            key={list.state}
+            role="group"
+            aria-label={list.title}
+            className={`rounded border bg-panel p-3 ${list.mine && items.length ? 'border-copper-500/60' : 'border-line'}`}
+          >
             <h2 className="mb-1 flex items-baseline gap-2 text-xs font-semibold uppercase tracking-wide text-ink-soft">
               {list.title} <span className="text-ink">({items.length})</span>
               {list.mine ? <span className="ml-auto normal-case tracking-normal text-copper-700">your next work</span> : null}
@@ -73,7 +84,8 @@ function QueueItem({ p, section }: { p: QueuePanel; section: string }) {
         {p.status === 'signed_off' && p.revisionNumber !== null ? <span className="text-xs font-semibold">R{p.revisionNumber}</span> : null}
       </div>
       <p className="text-xs text-ink-soft">
-        {p.motorCount} motor{p.motorCount === 1 ? '' : 's'} · {p.status === 'in_review' ? 'submitted' : 'since'} {new Date(p.since).toLocaleDateString()}
+        {p.motorCount} motor{p.motorCount === 1 ? '' : 's'} · {p.status === 'in_review' ? 'submitted' : 'since'}{' '}
+        {new Date(p.since).toLocaleDateString()}
         {p.note ? (
           <span className="block truncate" title={p.note.body}>
             “{p.note.body}”{p.note.author ? ` — ${p.note.author}` : ''}

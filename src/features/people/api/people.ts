@@ -30,13 +30,17 @@ export const peopleQueries = {
 
 export function useInvite() {
   const qc = useQueryClient();
-  return useMutation({ mutationFn: (v: UserCreate) => post<Person & { inviteLink: string }>('/api/users', v), onSuccess: () => qc.invalidateQueries({ queryKey: peopleQueries.all() }) });
+  return useMutation({
+    mutationFn: (v: UserCreate) => post<Person & { inviteLink: string }>('/api/users', v),
+    onSuccess: () => qc.invalidateQueries({ queryKey: peopleQueries.all() }),
+  });
 }
 
 export function useUpdatePerson() {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (v: { id: number; version: number; roles?: Role[]; active?: boolean }) => patch<Person>(`/api/users/${v.id}`, { version: v.version, roles: v.roles, active: v.active }),
+    mutationFn: (v: { id: number; version: number; roles?: Role[]; active?: boolean }) =>
+      patch<Person>(`/api/users/${v.id}`, { version: v.version, roles: v.roles, active: v.active }),
     onSuccess: () => qc.invalidateQueries({ queryKey: peopleQueries.all() }),
   });
 }

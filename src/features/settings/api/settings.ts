@@ -27,6 +27,9 @@ export function useLogo() {
     },
     onSuccess: done,
   });
-  const remove = useMutation({ mutationFn: (version: number) => api<ShopSettings>('DELETE', '/api/settings/logo', { version }), onSuccess: done });
+  const remove = useMutation({
+    mutationFn: (version: number) => api<ShopSettings>('DELETE', '/api/settings/logo', { version }),
+    onSuccess: done,
+  });
   return { upload, remove };
 }
