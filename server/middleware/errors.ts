@@ -46,15 +46,13 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
     return;
   }
   if (e?.code && String(e.code).startsWith('LIMIT_')) {
-    res
-      .status(400)
-      .json({
-        error: {
-          code: 'validation_failed',
-          message: e.message ?? 'Upload refused',
-          details: [{ path: 'file', message: e.message ?? 'Upload refused' }],
-        },
-      });
+    res.status(400).json({
+      error: {
+        code: 'validation_failed',
+        message: e.message ?? 'Upload refused',
+        details: [{ path: 'file', message: e.message ?? 'Upload refused' }],
+      },
+    });
     return;
   }
   if (typeof e?.status === 'number' && e.status >= 400 && e.status < 500) {
@@ -64,15 +62,13 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   if (isDatabaseUnavailable(err)) {
     console.warn(`[database] ${req.method} ${req.path}: unreachable (${err instanceof Error ? err.message : String(err)})`);
     res.setHeader('Retry-After', String(DATABASE_RETRY_AFTER_S));
-    res
-      .status(503)
-      .json({
-        error: {
-          code: 'database_unavailable',
-          message: DATABASE_UNAVAILABLE_MESSAGE,
-          details: { retryAfterSeconds: DATABASE_RETRY_AFTER_S },
-        },
-      });
+    res.status(503).json({
+      error: {
+        code: 'database_unavailable',
+        message: DATABASE_UNAVAILABLE_MESSAGE,
+        details: { retryAfterSeconds: DATABASE_RETRY_AFTER_S },
+      },
+    });
     return;
   }
   console.error(`[error] ${req.method} ${req.path}:`, err instanceof Error ? err.message : err);
