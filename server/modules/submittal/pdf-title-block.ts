@@ -105,8 +105,17 @@ export function titleBlock(
 /** The logo read once (pdfkit embeds an opened image once however many pages show it); null when unreadable. */
 export function openLogo(doc: Doc, logo: Buffer): unknown {
   try {
-    return (doc as unknown as { openImage(src: Buffer): unknown }).openImage(logo);
+    return doc.openImage(logo);
   } catch {
     return null;
+  }
+}
+
+declare global {
+  namespace PDFKit {
+    interface PDFDocument {
+      /** pdfkit's own (untyped in @types/pdfkit): reads an image once, to be placed on many pages */
+      openImage(src: Buffer): unknown;
+    }
   }
 }

@@ -26,4 +26,5 @@ export function cleanAnswers(v: Record<string, unknown>): Record<string, unknown
  * parsed ones: a default the schema fills in (service factor 1.0) is then not stored as if the user
  * had said so, and the engine flags it, as it does for an imported motor.
  */
+// cast: with `raw: true` the resolver hands back the input type, which @hookform/resolvers types as the schema's output
 export const motorResolver = zodResolver(LoadSchema, undefined, { raw: true }) as unknown as Resolver<LoadInput>;
