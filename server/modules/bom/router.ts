@@ -8,6 +8,7 @@ import { BomCategorySchema, PartCodeSchema, UnitSchema } from '../../../shared/s
 import { requirePanel } from '../panels/service';
 import { writeBomCsv, writeBomWorkbook, type BomExportJob, type BomExportPanel } from './export';
 import * as service from './service';
+import * as exportData from './export-data';
 
 const PanelId = z.object({ panelId: idParamSchema });
 const LineId = PanelId.extend({ lineId: idParamSchema });
@@ -110,7 +111,7 @@ export const bomRoutes = [
     access: ROLE_SETS.everyone,
     summary: "A panel's bill of materials as .xlsx (streamed)",
     params: PanelId,
-    handler: async ({ user, params, res }) => stream(res, await service.panelExport(user, params.panelId), 'xlsx'),
+    handler: async ({ user, params, res }) => stream(res, await exportData.panelExport(user, params.panelId), 'xlsx'),
   }),
   defineRoute({
     method: 'get',
@@ -118,7 +119,7 @@ export const bomRoutes = [
     access: ROLE_SETS.everyone,
     summary: "A panel's bill of materials as .csv",
     params: PanelId,
-    handler: async ({ user, params, res }) => stream(res, await service.panelExport(user, params.panelId), 'csv'),
+    handler: async ({ user, params, res }) => stream(res, await exportData.panelExport(user, params.panelId), 'csv'),
   }),
   defineRoute({
     method: 'get',
@@ -126,7 +127,7 @@ export const bomRoutes = [
     access: ROLE_SETS.everyone,
     summary: "A job's bill of materials (every panel not archived) as .xlsx (streamed)",
     params: IdParamSchema,
-    handler: async ({ user, params, res }) => stream(res, await service.jobExport(user, params.id), 'xlsx'),
+    handler: async ({ user, params, res }) => stream(res, await exportData.jobExport(user, params.id), 'xlsx'),
   }),
   defineRoute({
     method: 'get',
@@ -134,6 +135,6 @@ export const bomRoutes = [
     access: ROLE_SETS.everyone,
     summary: "A job's bill of materials as .csv",
     params: IdParamSchema,
-    handler: async ({ user, params, res }) => stream(res, await service.jobExport(user, params.id), 'csv'),
+    handler: async ({ user, params, res }) => stream(res, await exportData.jobExport(user, params.id), 'csv'),
   }),
 ];

@@ -15,15 +15,12 @@ import {
   type Requirement,
 } from '../../../shared/schemas/catalogue';
 import { NotFoundError, ValidationError, zodIssues } from '../../../shared/errors';
-import type { BomExportJob, BomExportPanel } from './export';
-import { getJob } from '../jobs/service';
 import type { LoadSelection, PanelRollup } from '../../../shared/schemas/selection';
 import { buildBom, computeTotals, lineServes, lineShortfalls, swappedLine, unitLabourHours } from '../../../shared/calc/bom';
 import { recordActivity } from '../activity/service';
 import { catalogueFor, labourUnitsFor } from '../catalogue/repository';
 import { loadsOf } from '../panels/repository';
 import { loadView, openBomChange, requirePanel } from '../panels/service';
-import { shopSettingsOf } from '../settings/service';
 
 /** Most protective enclosure type among the buckets (common practice: one enclosure serves the worst environment). */
 const STRINGENCY = ['1', '12', '3R', '4', '4X', '9', '7'];
@@ -487,51 +484,4 @@ export async function swapCandidates(actor: CurrentUser, panelId: number, lineId
     .filter((i) => i.active && i.code !== line.code && lineShortfalls(i, requirement, who).length === 0)
     .sort((a, b) => a.unitCost - b.unitCost || a.code.localeCompare(b.code))
     .map((i) => ({ code: i.code, description: i.description, unitCost: i.unitCost, leadTimeDays: i.leadTimeDays, ratings: i.ratings }));
-}
-
-// ---------------------------------------------------------------------------------------------
-// Export
-
-export async function panelExport(
-  actor: CurrentUser,
-  panelId: number,
-): Promise<{ job: BomExportJob; panels: BomExportPanel[]; fileBase: string }> {
-  const panel = await requirePanel(actor, panelId);
-  const rows = await repo.bomRowsFor(actor.organisationId, panel.id);
-  return {
-    job: {
-      number: panel.job.number,
-      name: panel.job.name,
-      customer: panel.job.customer || undefined,
-      markupPercent: panel.markupPercent,
-      labourRatePerHour: panel.labourRate,
-    },
-    panels: [{ name: panel.name, lines: rows.map((r) => r.line) }],
-    fileBase: `${panel.job.number}-${panel.name}-bom`,
-  };
-}
-
-/** Every panel of the job that is not archived. The summary's rate and markup are the first panel's (each panel's own are on the page), the shop's defaults for a job with no panel. */
-export async function jobExport(
-  actor: CurrentUser,
-  jobId: number,
-): Promise<{ job: BomExportJob; panels: BomExportPanel[]; fileBase: string }> {
-  const job = await getJob(actor, jobId);
-  const panels = await repo.jobPanels(actor.organisationId, job.id);
-  const rows = await repo.bomRowsFor(
-    actor.organisationId,
-    panels.map((p) => p.id),
-  );
-  const shop = panels.length ? null : await shopSettingsOf(actor.organisationId);
-  return {
-    job: {
-      number: job.number,
-      name: job.name,
-      customer: job.customer || undefined,
-      markupPercent: panels[0]?.markupPercent ?? shop!.defaultMarkupPercent,
-      labourRatePerHour: panels[0]?.labourRate ?? shop!.defaultLabourRate,
-    },
-    panels: panels.map((p) => ({ name: p.name, lines: rows.filter((r) => r.panelId === p.id).map((r) => r.line) })),
-    fileBase: `${job.number}-bom`,
-  };
 }
