@@ -9,6 +9,7 @@ import { requirePanel } from '../panels/service';
 import { writeBomCsv, writeBomWorkbook, type BomExportJob, type BomExportPanel } from './export';
 import * as service from './service';
 import * as exportData from './export-data';
+import * as swaps from './swaps';
 
 const PanelId = z.object({ panelId: idParamSchema });
 const LineId = PanelId.extend({ lineId: idParamSchema });
@@ -84,7 +85,7 @@ export const bomRoutes = [
     summary: 'Change a manual line, or swap a line for an equivalent catalogue item with a reason',
     params: LineId,
     body: LinePatchBody,
-    handler: ({ user, params, body }) => service.updateLine(user, params.panelId, params.lineId, body),
+    handler: ({ user, params, body }) => swaps.updateLine(user, params.panelId, params.lineId, body),
   }),
   defineRoute({
     method: 'delete',
@@ -103,7 +104,7 @@ export const bomRoutes = [
     access: ROLE_SETS.everyone,
     summary: 'Active catalogue items of the same category a line may be swapped for',
     params: LineId,
-    handler: ({ user, params }) => service.swapCandidates(user, params.panelId, params.lineId),
+    handler: ({ user, params }) => swaps.swapCandidates(user, params.panelId, params.lineId),
   }),
   defineRoute({
     method: 'get',
