@@ -9,6 +9,7 @@ import { requirePanel } from '../panels/service';
 import { writeBomCsv, writeBomWorkbook, type BomExportJob, type BomExportPanel } from './export';
 import * as service from './service';
 import * as exportData from './export-data';
+import * as lines from './lines';
 import * as swaps from './swaps';
 
 const PanelId = z.object({ panelId: idParamSchema });
@@ -54,7 +55,7 @@ export const bomRoutes = [
     access: ROLE_SETS.everyone,
     summary: "A panel's bill of materials with totals and the stale flag",
     params: PanelId,
-    handler: async ({ user, params }) => service.storedBom(user, await requirePanel(user, params.panelId)),
+    handler: async ({ user, params }) => lines.storedBom(user, await requirePanel(user, params.panelId)),
   }),
   defineRoute({
     method: 'post',
@@ -66,7 +67,7 @@ export const bomRoutes = [
     status: 200,
     handler: async ({ user, params, body }) => {
       await service.rebuild(user, await requirePanel(user, params.panelId), { reprice: body.reprice });
-      return service.storedBom(user, await requirePanel(user, params.panelId));
+      return lines.storedBom(user, await requirePanel(user, params.panelId));
     },
   }),
   defineRoute({
@@ -76,7 +77,7 @@ export const bomRoutes = [
     summary: 'Add a manual line (freight, engineering hours, spares …)',
     params: PanelId,
     body: ManualLineBody,
-    handler: ({ user, params, body }) => service.addManualLine(user, params.panelId, body),
+    handler: ({ user, params, body }) => lines.addManualLine(user, params.panelId, body),
   }),
   defineRoute({
     method: 'patch',
@@ -94,7 +95,7 @@ export const bomRoutes = [
     summary: 'Remove a manual line',
     params: LineId,
     handler: async ({ user, params }) => {
-      await service.deleteLine(user, params.panelId, params.lineId);
+      await lines.deleteLine(user, params.panelId, params.lineId);
       return undefined;
     },
   }),

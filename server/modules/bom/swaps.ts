@@ -11,7 +11,8 @@ import { lineServes, lineShortfalls, swappedLine } from '../../../shared/calc/bo
 import { recordActivity } from '../activity/service';
 import { catalogueFor, labourUnitsFor } from '../catalogue/repository';
 import { openBomChange, requirePanel } from '../panels/service';
-import { buildLines, checkLine, lockedPanel, ordinalKeys, requireLine } from './service';
+import { buildLines, lockedPanel, ordinalKeys } from './service';
+import { checkLine, requireLine } from './lines';
 
 export interface LineChanges {
   quantity?: number;
