@@ -8,6 +8,9 @@ import { BomCategorySchema, PartCodeSchema, UnitSchema } from '../../../shared/s
 import { requirePanel } from '../panels/service';
 import { writeBomCsv, writeBomWorkbook, type BomExportJob, type BomExportPanel } from './export';
 import * as service from './service';
+import * as exportData from './export-data';
+import * as lines from './lines';
+import * as swaps from './swaps';
 
 const PanelId = z.object({ panelId: idParamSchema });
 const LineId = PanelId.extend({ lineId: idParamSchema });
@@ -52,7 +55,7 @@ export const bomRoutes = [
     access: ROLE_SETS.everyone,
     summary: "A panel's bill of materials with totals and the stale flag",
     params: PanelId,
-    handler: async ({ user, params }) => service.storedBom(user, await requirePanel(user, params.panelId)),
+    handler: async ({ user, params }) => lines.storedBom(user, await requirePanel(user, params.panelId)),
   }),
   defineRoute({
     method: 'post',
@@ -64,7 +67,7 @@ export const bomRoutes = [
     status: 200,
     handler: async ({ user, params, body }) => {
       await service.rebuild(user, await requirePanel(user, params.panelId), { reprice: body.reprice });
-      return service.storedBom(user, await requirePanel(user, params.panelId));
+      return lines.storedBom(user, await requirePanel(user, params.panelId));
     },
   }),
   defineRoute({
@@ -74,7 +77,7 @@ export const bomRoutes = [
     summary: 'Add a manual line (freight, engineering hours, spares …)',
     params: PanelId,
     body: ManualLineBody,
-    handler: ({ user, params, body }) => service.addManualLine(user, params.panelId, body),
+    handler: ({ user, params, body }) => lines.addManualLine(user, params.panelId, body),
   }),
   defineRoute({
     method: 'patch',
@@ -83,7 +86,7 @@ export const bomRoutes = [
     summary: 'Change a manual line, or swap a line for an equivalent catalogue item with a reason',
     params: LineId,
     body: LinePatchBody,
-    handler: ({ user, params, body }) => service.updateLine(user, params.panelId, params.lineId, body),
+    handler: ({ user, params, body }) => swaps.updateLine(user, params.panelId, params.lineId, body),
   }),
   defineRoute({
     method: 'delete',
@@ -92,7 +95,7 @@ export const bomRoutes = [
     summary: 'Remove a manual line',
     params: LineId,
     handler: async ({ user, params }) => {
-      await service.deleteLine(user, params.panelId, params.lineId);
+      await lines.deleteLine(user, params.panelId, params.lineId);
       return undefined;
     },
   }),
@@ -102,7 +105,7 @@ export const bomRoutes = [
     access: ROLE_SETS.everyone,
     summary: 'Active catalogue items of the same category a line may be swapped for',
     params: LineId,
-    handler: ({ user, params }) => service.swapCandidates(user, params.panelId, params.lineId),
+    handler: ({ user, params }) => swaps.swapCandidates(user, params.panelId, params.lineId),
   }),
   defineRoute({
     method: 'get',
@@ -110,7 +113,7 @@ export const bomRoutes = [
     access: ROLE_SETS.everyone,
     summary: "A panel's bill of materials as .xlsx (streamed)",
     params: PanelId,
-    handler: async ({ user, params, res }) => stream(res, await service.panelExport(user, params.panelId), 'xlsx'),
+    handler: async ({ user, params, res }) => stream(res, await exportData.panelExport(user, params.panelId), 'xlsx'),
   }),
   defineRoute({
     method: 'get',
@@ -118,7 +121,7 @@ export const bomRoutes = [
     access: ROLE_SETS.everyone,
     summary: "A panel's bill of materials as .csv",
     params: PanelId,
-    handler: async ({ user, params, res }) => stream(res, await service.panelExport(user, params.panelId), 'csv'),
+    handler: async ({ user, params, res }) => stream(res, await exportData.panelExport(user, params.panelId), 'csv'),
   }),
   defineRoute({
     method: 'get',
@@ -126,7 +129,7 @@ export const bomRoutes = [
     access: ROLE_SETS.everyone,
     summary: "A job's bill of materials (every panel not archived) as .xlsx (streamed)",
     params: IdParamSchema,
-    handler: async ({ user, params, res }) => stream(res, await service.jobExport(user, params.id), 'xlsx'),
+    handler: async ({ user, params, res }) => stream(res, await exportData.jobExport(user, params.id), 'xlsx'),
   }),
   defineRoute({
     method: 'get',
@@ -134,6 +137,6 @@ export const bomRoutes = [
     access: ROLE_SETS.everyone,
     summary: "A job's bill of materials as .csv",
     params: IdParamSchema,
-    handler: async ({ user, params, res }) => stream(res, await service.jobExport(user, params.id), 'csv'),
+    handler: async ({ user, params, res }) => stream(res, await exportData.jobExport(user, params.id), 'csv'),
   }),
 ];

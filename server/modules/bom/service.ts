@@ -6,24 +6,13 @@ import type { Panel } from '../../db/models/panel';
 import * as repo from './repository';
 import type { Job } from '../../db/models/job';
 import type { CurrentUser } from '../../../shared/schemas/auth';
-import {
-  BomLineSchema,
-  PANEL_BUCKET,
-  type BomLine,
-  type BomTotals,
-  type CatalogueItem,
-  type Requirement,
-} from '../../../shared/schemas/catalogue';
-import { NotFoundError, ValidationError, zodIssues } from '../../../shared/errors';
-import type { BomExportJob, BomExportPanel } from './export';
-import { getJob } from '../jobs/service';
+import type { BomLine } from '../../../shared/schemas/catalogue';
 import type { LoadSelection, PanelRollup } from '../../../shared/schemas/selection';
-import { buildBom, computeTotals, lineServes, lineShortfalls, swappedLine, unitLabourHours } from '../../../shared/calc/bom';
+import { buildBom, lineServes, lineShortfalls, swappedLine } from '../../../shared/calc/bom';
 import { recordActivity } from '../activity/service';
 import { catalogueFor, labourUnitsFor } from '../catalogue/repository';
 import { loadsOf } from '../panels/repository';
 import { loadView, openBomChange, requirePanel } from '../panels/service';
-import { shopSettingsOf } from '../settings/service';
 
 /** Most protective enclosure type among the buckets (common practice: one enclosure serves the worst environment). */
 const STRINGENCY = ['1', '12', '3R', '4', '4X', '9', '7'];
@@ -39,14 +28,6 @@ export function panelEnclosureType(selections: readonly LoadSelection[]): string
   return best;
 }
 
-export interface StoredBom {
-  lines: Array<BomLine & { id: number; position: number }>;
-  totals: BomTotals;
-  generatedAt: string | null;
-  stale: boolean;
-  enclosureType: string;
-}
-
 export async function effectiveSelections(panelId: number, t?: Transaction): Promise<LoadSelection[]> {
   const loads = await loadsOf(panelId, t);
   return loads.map(loadView).flatMap((l) => (l.effective ? [l.effective] : []));
@@ -60,7 +41,7 @@ export interface RegenerateOptions {
 }
 
 /** Key of a line for "the same line after a rebuild": bucket, category and its order among them. */
-function ordinalKeys(lines: readonly BomLine[]): string[] {
+export function ordinalKeys(lines: readonly BomLine[]): string[] {
   const seen = new Map<string, number>();
   return lines.map((l) => {
     const k = `${l.bucket}\u0000${l.category}`;
@@ -75,7 +56,7 @@ function ordinalKeys(lines: readonly BomLine[]): string[] {
  * to the same line (bucket, category and order), manual lines kept; a line whose part stays keeps its frozen unit cost.
  */
 /** The automatic lines the matcher picks today, with the catalogue and labour units it used (nothing written). */
-async function buildLines(organisationId: number, panel: Panel & { job: Job }, t?: Transaction) {
+export async function buildLines(organisationId: number, panel: Panel & { job: Job }, t?: Transaction) {
   // one after the other: the three share the transaction's single connection
   const selections = await effectiveSelections(panel.id, t);
   const catalogue = await catalogueFor(organisationId, t);
@@ -156,24 +137,10 @@ export async function regenerateBom(organisationId: number, panel: Panel & { job
 }
 
 /** What decides a stored bill of materials: its automatic lines' parts and quantities (prices excluded: they stay frozen). */
-function designSignature(lines: readonly BomLine[]): string {
+export function designSignature(lines: readonly BomLine[]): string {
   return JSON.stringify(
     lines.filter((l) => l.source !== 'manual').map((l) => [l.bucket, l.category, l.code, l.quantity, l.status, l.requiredRatings]),
   );
-}
-
-export async function storedBom(actor: CurrentUser, panel: Panel & { job: Job }): Promise<StoredBom> {
-  const rows = await repo.bomRowsFor(actor.organisationId, panel.id);
-  const lines = rows.map((r) => ({ ...r.line, id: r.id, position: r.position }));
-  // Stale when a rebuild now would give other parts or quantities (motors, overrides or the catalogue changed).
-  const plan = panel.bomGeneratedAt ? await planBom(actor.organisationId, panel, lines) : null;
-  return {
-    lines,
-    totals: computeTotals(lines, panel.markupPercent, panel.labourRate),
-    generatedAt: panel.bomGeneratedAt ? panel.bomGeneratedAt.toISOString() : null,
-    stale: !plan || designSignature(plan) !== designSignature(lines),
-    enclosureType: panelEnclosureType(await effectiveSelections(panel.id)),
-  };
 }
 
 /** The one bill of materials of a panel for the checks and the submittal (nothing written). */
@@ -230,308 +197,6 @@ export async function rebuild(actor: CurrentUser, panelRef: Panel & { job: Job }
   });
 }
 
-// ---------------------------------------------------------------------------------------------
-// The estimator's changes to single lines
-
-export interface ManualLineInput {
-  bucket?: string;
-  category: BomLine['category'];
-  code?: string | null;
-  description?: string;
-  quantity: number;
-  unit?: BomLine['unit'];
-  unitCost?: number;
-  unitLabourHours?: number;
-}
-
-async function lockedPanel(actor: CurrentUser, panelId: number, t: Transaction) {
+export async function lockedPanel(actor: CurrentUser, panelId: number, t: Transaction) {
   return requirePanel(actor, panelId, t, true);
-}
-
-async function requireLine(panelId: number, lineId: number, t: Transaction) {
-  const r = await repo.findBomLine(panelId, lineId, t);
-  if (!r) throw new NotFoundError('Bill-of-materials line');
-  return r;
-}
-
-function checkLine(line: BomLine): BomLine {
-  const r = BomLineSchema.safeParse(line);
-  if (!r.success) {
-    const issues = zodIssues(r.error.issues).map((i) => ({ ...i, path: `body.${i.path}` }));
-    throw new ValidationError(
-      `The line has ${issues.length} problem${issues.length === 1 ? '' : 's'}: ${issues.map((i) => `${i.path} ${i.message}`).join('; ')}`,
-      issues,
-    );
-  }
-  return r.data;
-}
-
-/** Freight, engineering hours, spares …: a line kept through every rebuild; with a code, the part's price and labour are the defaults. */
-export async function addManualLine(actor: CurrentUser, panelId: number, input: ManualLineInput) {
-  return db().transaction(async (t) => {
-    const panel = await lockedPanel(actor, panelId, t);
-    await openBomChange(actor, panel, t, 'a manual line was added to the bill of materials');
-    let item: CatalogueItem | undefined;
-    if (input.code) {
-      item = (await catalogueFor(actor.organisationId, t)).find((c) => c.code === input.code);
-      if (!item)
-        throw new ValidationError(`There is no catalogue item ${input.code}`, [{ path: 'body.code', message: 'not in the catalogue' }]);
-    }
-    const labour = new Map((await labourUnitsFor(actor.organisationId, t)).map((u) => [u.key, u]));
-    const description = input.description?.trim() || item?.description;
-    if (!description)
-      throw new ValidationError('Describe the line', [{ path: 'body.description', message: 'required without a part code' }]);
-    const line = checkLine({
-      bucket: input.bucket?.trim() || PANEL_BUCKET,
-      category: input.category,
-      code: item?.code ?? null,
-      description,
-      quantity: input.quantity,
-      unit: input.unit ?? item?.unit ?? 'ea',
-      unitCost: input.unitCost ?? item?.unitCost ?? 0,
-      unitLabourHours: input.unitLabourHours ?? (item ? unitLabourHours(item.category, item, labour) : 0),
-      heatLossW: item?.heatLossW ?? 0,
-      sccrKa: item?.sccrKa ?? null,
-      status: 'manual',
-      requiredRatings: null,
-      source: 'manual',
-      swapReason: null,
-      requirement: null,
-    });
-    const row = await repo.appendBomLine(actor.organisationId, panel.id, line, t);
-    await recordActivity(
-      actor,
-      {
-        entity: 'bom',
-        entityId: panel.id,
-        jobId: panel.jobId,
-        panelId: panel.id,
-        action: 'line-added',
-        summary: `Added ${line.quantity} ${line.unit} "${line.description}" to ${panel.name}`,
-        diff: { line },
-      },
-      t,
-    );
-    return { ...line, id: row.id, position: row.position };
-  });
-}
-
-export interface LineChanges {
-  quantity?: number;
-  description?: string;
-  unitCost?: number;
-  unitLabourHours?: number;
-  /** swap for this catalogue item (one meeting the line's requirement), with a reason */
-  swapCode?: string;
-  swapReason?: string;
-}
-
-/**
- * What a line's part must meet: the requirement the matcher kept on the line; for a line stored before
- * lines kept it, the one today's build gives the same line (bucket, category and order). Null when the
- * line's need is not one the catalogue can be searched for.
- */
-async function requirementOf(
-  organisationId: number,
-  panel: Panel & { job: Job },
-  lineId: number,
-  line: BomLine,
-  t?: Transaction,
-): Promise<Requirement[] | null> {
-  if (line.requirement !== undefined) return line.requirement;
-  const rows = await repo.bomRowsOf(panel.id, t);
-  const auto = rows.filter((r) => r.line.source !== 'manual');
-  const key = ordinalKeys(auto.map((r) => r.line))[auto.findIndex((r) => r.id === lineId)];
-  const { built } = await buildLines(organisationId, panel, t);
-  const builtKeys = ordinalKeys(built.lines);
-  return built.lines[builtKeys.indexOf(key ?? '')]?.requirement ?? null;
-}
-
-/**
- * Change one line. A manual line takes any change. An automatic line's quantity follows the design,
- * so it may only be swapped, with a reason, for an active item that meets the line's requirement (the
- * one the matcher used); the swapped line takes the new item's price, every other line keeps its frozen
- * unit cost. On a signed-off panel the change opens a new draft; in review it is refused.
- */
-export async function updateLine(actor: CurrentUser, panelId: number, lineId: number, changes: LineChanges) {
-  return db().transaction(async (t) => {
-    const panel = await lockedPanel(actor, panelId, t);
-    const row = await requireLine(panel.id, lineId, t);
-    const before = row.line;
-    await openBomChange(
-      actor,
-      panel,
-      t,
-      changes.swapCode !== undefined
-        ? `${before.code ?? 'a line'} on ${before.bucket} was swapped in the bill of materials`
-        : 'a line of the bill of materials was changed',
-    );
-    let after: BomLine = { ...before };
-    if (changes.swapCode !== undefined) {
-      const reason = changes.swapReason?.trim();
-      if (!reason)
-        throw new ValidationError('Give the reason for the swap', [{ path: 'body.swapReason', message: 'a swap needs a reason' }]);
-      if (before.source === 'manual')
-        throw new ValidationError('A manual line is changed directly, not swapped', [
-          { path: 'body.swapCode', message: 'not for a manual line' },
-        ]);
-      const item = (await catalogueFor(actor.organisationId, t)).find((c) => c.code === changes.swapCode);
-      if (!item)
-        throw new ValidationError(`There is no catalogue item ${changes.swapCode}`, [
-          { path: 'body.swapCode', message: 'not in the catalogue' },
-        ]);
-      if (!item.active) throw new ValidationError(`${item.code} is deactivated`, [{ path: 'body.swapCode', message: 'deactivated item' }]);
-      if (item.category !== before.category) {
-        throw new ValidationError(`${item.code} is not an equivalent: it is not in the line's category`, [
-          { path: 'body.swapCode', message: `must be a ${before.category}` },
-        ]);
-      }
-      const requirement = await requirementOf(actor.organisationId, panel, row.id, before, t);
-      const who = lineServes(before.bucket);
-      if (!requirement) {
-        throw new ValidationError(
-          `What ${who} needs here (${before.requiredRatings ?? before.description}) cannot be checked against the catalogue: add a manual line for the part instead`,
-          [{ path: 'body.swapCode', message: 'no requirement to check a part against' }],
-        );
-      }
-      const lacks = lineShortfalls(item, requirement, who);
-      if (lacks.length > 0) {
-        throw new ValidationError(`${item.code} does not meet what ${who} needs: ${lacks.join('; ')}`, [
-          { path: 'body.swapCode', message: lacks.join('; ') },
-        ]);
-      }
-      const labour = new Map((await labourUnitsFor(actor.organisationId, t)).map((u) => [u.key, u]));
-      after = swappedLine(after, item, labour, reason);
-    }
-    const direct = (['quantity', 'description', 'unitCost', 'unitLabourHours'] as const).filter((k) => changes[k] !== undefined);
-    if (direct.length > 0) {
-      if (before.source !== 'manual') {
-        throw new ValidationError(
-          'The quantity and price of an automatic line follow the design and the catalogue: swap the part, or add a manual line',
-          [{ path: `body.${direct[0]}`, message: 'only manual lines are edited directly' }],
-        );
-      }
-      after = { ...after, ...Object.fromEntries(direct.map((k) => [k, changes[k]])) };
-    }
-    if (changes.swapCode === undefined && direct.length === 0)
-      throw new ValidationError('Nothing to change', [{ path: 'body', message: 'give a quantity or a part to swap to' }]);
-    after = checkLine(after);
-    await repo.updateBomLine(row.id, after, t);
-    const diff = Object.fromEntries(
-      Object.keys(after)
-        .filter((k) => JSON.stringify(after[k as keyof BomLine]) !== JSON.stringify(before[k as keyof BomLine]))
-        .map((k) => [k, [before[k as keyof BomLine], after[k as keyof BomLine]]]),
-    );
-    const summary =
-      changes.swapCode !== undefined
-        ? `Swapped ${before.code ?? 'an unmatched line'} for ${after.code} in ${before.bucket} of ${panel.name}: ${after.swapReason}`
-        : `Changed "${after.description}" in ${panel.name}: ${direct.join(', ')}`;
-    await recordActivity(
-      actor,
-      {
-        entity: 'bom',
-        entityId: panel.id,
-        jobId: panel.jobId,
-        panelId: panel.id,
-        action: changes.swapCode !== undefined ? 'line-swapped' : 'line-changed',
-        summary,
-        diff,
-      },
-      t,
-    );
-    return { ...after, id: row.id, position: row.position };
-  });
-}
-
-export async function deleteLine(actor: CurrentUser, panelId: number, lineId: number) {
-  await db().transaction(async (t) => {
-    const panel = await lockedPanel(actor, panelId, t);
-    const row = await requireLine(panel.id, lineId, t);
-    const line = row.line;
-    if (line.source !== 'manual')
-      throw new ValidationError('Only manual lines are removed; the rebuild decides the automatic ones', [
-        { path: 'lineId', message: 'not a manual line' },
-      ]);
-    await openBomChange(actor, panel, t, 'a manual line was removed from the bill of materials');
-    await repo.deleteBomLine(row.id, t);
-    await recordActivity(
-      actor,
-      {
-        entity: 'bom',
-        entityId: panel.id,
-        jobId: panel.jobId,
-        panelId: panel.id,
-        action: 'line-removed',
-        summary: `Removed "${line.description}" from ${panel.name}`,
-        diff: { line },
-      },
-      t,
-    );
-  });
-}
-
-/**
- * Active catalogue items a line may be swapped for: those that meet the line's requirement (the one the
- * matcher used), cheapest first. None for a manual line, or a line whose need the catalogue cannot be searched for.
- */
-export async function swapCandidates(actor: CurrentUser, panelId: number, lineId: number) {
-  const panel = await requirePanel(actor, panelId);
-  const row = await db().transaction((t) => requireLine(panel.id, lineId, t));
-  const line = row.line;
-  if (line.source === 'manual') return [];
-  const requirement = await requirementOf(actor.organisationId, panel, row.id, line);
-  if (!requirement) return [];
-  const who = lineServes(line.bucket);
-  const items = await catalogueFor(actor.organisationId);
-  return items
-    .filter((i) => i.active && i.code !== line.code && lineShortfalls(i, requirement, who).length === 0)
-    .sort((a, b) => a.unitCost - b.unitCost || a.code.localeCompare(b.code))
-    .map((i) => ({ code: i.code, description: i.description, unitCost: i.unitCost, leadTimeDays: i.leadTimeDays, ratings: i.ratings }));
-}
-
-// ---------------------------------------------------------------------------------------------
-// Export
-
-export async function panelExport(
-  actor: CurrentUser,
-  panelId: number,
-): Promise<{ job: BomExportJob; panels: BomExportPanel[]; fileBase: string }> {
-  const panel = await requirePanel(actor, panelId);
-  const rows = await repo.bomRowsFor(actor.organisationId, panel.id);
-  return {
-    job: {
-      number: panel.job.number,
-      name: panel.job.name,
-      customer: panel.job.customer || undefined,
-      markupPercent: panel.markupPercent,
-      labourRatePerHour: panel.labourRate,
-    },
-    panels: [{ name: panel.name, lines: rows.map((r) => r.line) }],
-    fileBase: `${panel.job.number}-${panel.name}-bom`,
-  };
-}
-
-/** Every panel of the job that is not archived. The summary's rate and markup are the first panel's (each panel's own are on the page), the shop's defaults for a job with no panel. */
-export async function jobExport(
-  actor: CurrentUser,
-  jobId: number,
-): Promise<{ job: BomExportJob; panels: BomExportPanel[]; fileBase: string }> {
-  const job = await getJob(actor, jobId);
-  const panels = await repo.jobPanels(actor.organisationId, job.id);
-  const rows = await repo.bomRowsFor(
-    actor.organisationId,
-    panels.map((p) => p.id),
-  );
-  const shop = panels.length ? null : await shopSettingsOf(actor.organisationId);
-  return {
-    job: {
-      number: job.number,
-      name: job.name,
-      customer: job.customer || undefined,
-      markupPercent: panels[0]?.markupPercent ?? shop!.defaultMarkupPercent,
-      labourRatePerHour: panels[0]?.labourRate ?? shop!.defaultLabourRate,
-    },
-    panels: panels.map((p) => ({ name: p.name, lines: rows.filter((r) => r.panelId === p.id).map((r) => r.line) })),
-    fileBase: `${job.number}-bom`,
-  };
 }

@@ -12,7 +12,8 @@ import { panelSupply, selectAll, selectOne } from '../selection/service';
 import { recordActivity } from '../activity/service';
 import type { Panel } from '../../db/models/panel';
 import type { Job } from '../../db/models/job';
-import { changePanel, loadView, refreshRollup } from './service';
+import { changePanel, loadView } from './service';
+import { refreshRollup } from './reselection';
 
 function parseAnswers(raw: unknown, prefix = 'body.answers'): LoadInput {
   const r = LoadSchema.safeParse(raw);

@@ -6,6 +6,7 @@ import { BulkEditSchema, CommentInputSchema, PanelInputSchema, PanelUpdateSchema
 import { JobUpdateSchema } from '../../../shared/schemas/job';
 import { OverridesPutSchema } from '../../../shared/schemas/override';
 import * as service from './service';
+import * as jobReselection from './job-reselection';
 import * as motors from './motors';
 import * as ruleCheck from './rule-check';
 
@@ -29,7 +30,7 @@ export const panelRoutes = [
     summary: 'Change a job',
     params: IdParamSchema,
     body: JobUpdateSchema,
-    handler: ({ user, params, body }) => service.changeJob(user, params.id, body),
+    handler: ({ user, params, body }) => jobReselection.changeJob(user, params.id, body),
   }),
   defineRoute({
     method: 'get',

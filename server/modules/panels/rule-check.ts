@@ -15,7 +15,8 @@ import { recordActivity } from '../activity/service';
 import * as repo from './repository';
 import { panelSupply, selectAll, selectOne } from '../selection/service';
 import { ValidationError } from '../../../shared/errors';
-import { changePanel, requirePanel, reselectPanel } from './service';
+import { changePanel, requirePanel } from './service';
+import { reselectPanel } from './reselection';
 import type { Load } from '../../db/models/load';
 
 /** Each motor's selection under the current rules (or the reason its stored answers no longer pass them), and the panel roll-up when all pass. */

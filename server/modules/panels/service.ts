@@ -4,19 +4,17 @@ import { db } from '../../db/sequelize';
 import { changeFeed } from '../../db/change-feed';
 import type { CurrentUser } from '../../../shared/schemas/auth';
 import type { CommentView, LoadView, PanelDetail, PanelState } from '../../../shared/schemas/panel';
-import type { LoadInput } from '../../../shared/schemas/load';
 import type { LoadSelection, PanelRollup } from '../../../shared/schemas/selection';
 import { applyOverrides } from '../../../shared/calc/overrides';
 import { ConflictError, ForbiddenError, NotFoundError, ValidationError } from '../../../shared/errors';
 import * as repo from './repository';
-import { panelSupply, rollupOf, selectAll } from '../selection/service';
 import { recordActivity } from '../activity/service';
-import { getJob, jobView, updateJob } from '../jobs/service';
-import type { JobValues } from '../../../shared/schemas/job';
+import { getJob, jobView } from '../jobs/service';
 import { shopSettingsOf } from '../settings/service';
 import type { Panel } from '../../db/models/panel';
 import type { Load } from '../../db/models/load';
 import type { Job } from '../../db/models/job';
+import { reselectPanel } from './reselection';
 
 const EDITABLE: PanelState[] = ['draft', 'returned', 'signed_off'];
 
@@ -240,70 +238,6 @@ export async function openBomChange(actor: CurrentUser, p: Panel & { job: Job },
   if (count === 0) throw new ConflictError(`Someone else changed panel ${p.name}: reload and try again`);
   p.status = 'draft';
   p.version += 1;
-}
-
-/** Recomputes the panel roll-up from the motors' stored selections (the rules do not run again). */
-export async function refreshRollup(p: Panel & { job: Job }, t: Transaction) {
-  const loads = (await repo.loadsOf(p.id, t)).filter((l) => l.selection);
-  const rollup = rollupOf(
-    panelSupply(p),
-    loads.map((l) => l.answers),
-    loads.map((l) => l.selection!),
-  ); // filtered above
-  p.rollup = rollup;
-  p.changed('rollup', true);
-}
-
-/**
- * Runs the rules again for every motor of a panel (the job's supply, ambient or code edition changed)
- * and stores the new selections and roll-up, in the caller's transaction.
- */
-export async function reselectPanel(p: Panel & { job: Job }, t: Transaction) {
-  const loads = await repo.loadsOf(p.id, t);
-  const out = await selectAll(
-    panelSupply(p),
-    loads.map((l) => l.answers as LoadInput),
-  );
-  if (out) {
-    await repo.saveLoads(
-      loads.map((l, i) => ({ ...l.get({ plain: true }), selection: out.results[i], version: l.version + 1 })),
-      t,
-      ['selection', 'version', 'updatedAt'],
-    );
-  }
-  p.rollup = out ? out.panel : null;
-  p.changed('rollup', true);
-}
-
-/** A change to the job's supply, ambient or code edition: every active panel's motors are selected again. */
-export async function reselectJobPanels(actor: CurrentUser, jobId: number, what: string, t: Transaction) {
-  for (const p of await repo.jobPanelsForUpdate(actor.organisationId, jobId, t)) {
-    if (p.status === 'in_review')
-      throw new ConflictError(`Panel ${p.name} is in review: the engineer must return it before the job's ${what} can change`);
-    await reselectPanel(p, t);
-    const reopened = p.status === 'signed_off';
-    await repo.bumpPanel(actor.organisationId, p.id, p.version, { status: reopened ? 'draft' : p.status, rollup: p.rollup }, t);
-    if (reopened)
-      await recordActivity(
-        actor,
-        {
-          entity: 'panel',
-          entityId: p.id,
-          jobId,
-          panelId: p.id,
-          action: 'reopened',
-          summary: `Opened a new draft after R${p.revisionNumber}: the job's ${what} changed`,
-        },
-        t,
-      );
-  }
-}
-
-/** A job's change; a change to its supply (or anything else the selections depend on) re-selects its panels. */
-export async function changeJob(actor: CurrentUser, jobId: number, input: Partial<JobValues> & { version: number }) {
-  return updateJob(actor, jobId, input, async (fields, t) => {
-    if (fields.length) await reselectJobPanels(actor, jobId, fields.join(', '), t);
-  });
 }
 
 export { changePanel };
