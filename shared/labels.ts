@@ -6,7 +6,6 @@
 // Trade terms stay as the trade writes them (FVNR, FVR, RVSS, VFD, AC-3, NEMA Type 4X …).
 
 import type { LoadInput } from './schemas/load';
-import type { Ratings } from './schemas/catalogue';
 import type { DecisionKey } from './engine/decisions';
 import type { STARTER_TYPES } from './engine/decisions';
 
@@ -71,81 +70,9 @@ const NESTED_ANSWER_LABELS: Record<string, string> = {
   scpdOverrideReason: 'Override reason',
 };
 
-/** Every rating a catalogue item may carry (shared/schemas/catalogue.ts RatingsSchema). */
-export const RATING_LABELS: Record<keyof Ratings, string> = {
-  volts: 'Rated voltage',
-  voltsMin: 'Lowest rated voltage',
-  poles: 'Poles',
-  coilVolts: 'Coil voltage',
-  nemaSize: 'NEMA size',
-  amps: 'Rated current',
-  iecAc3Amps: 'IEC AC-3 current',
-  iecAc4Amps: 'IEC AC-4 current',
-  hpByVolts: 'Horsepower by voltage',
-  settingMinAmps: 'Setting range from',
-  settingMaxAmps: 'Setting range to',
-  tripClasses: 'Trip classes',
-  electronic: 'Electronic',
-  detectsPhaseLoss: 'Detects phase loss',
-  detectsPhaseReversal: 'Detects phase reversal',
-  detectsImbalance: 'Detects imbalance',
-  fuseClass: 'Fuse class',
-  timeDelay: 'Time delay',
-  kaic: 'Interrupting rating',
-  va: 'Power rating',
-  sealedVa: 'Sealed coil power',
-  inrushVa: 'Inrush power',
-  secondaryVolts: 'Secondary voltage',
-  normalDutyAmps: 'Normal-duty current',
-  heavyDutyAmps: 'Heavy-duty current',
-  inputAmps: 'Input current',
-  wireSize: 'Wire size',
-  wireMin: 'Smallest wire',
-  wireMax: 'Largest wire',
-  nemaType: 'NEMA type',
-  nemaTypes: 'NEMA types kept',
-  heightMm: 'Height',
-  widthMm: 'Width',
-  depthMm: 'Depth',
-  cfm: 'Air flow',
-  coolingW: 'Cooling capacity',
-  outputs: 'Outputs per pole',
-  kind: 'Kind',
-  function: 'Function',
-  contacts: 'Contacts',
-  color: 'Colour',
-  ohms: 'Resistance',
-  watts: 'Power',
-  internalBypass: 'Internal bypass',
-  builtInOverload: 'Built-in overload',
-};
+import { RATING_LABELS, RATING_UNITS } from './schemas/catalogue-items';
 
-/** Units of the ratings, for a field's label ("Coil voltage (V)"). */
-export const RATING_UNITS: Partial<Record<keyof Ratings, string>> = {
-  volts: 'V',
-  voltsMin: 'V',
-  coilVolts: 'V',
-  amps: 'A',
-  iecAc3Amps: 'A',
-  iecAc4Amps: 'A',
-  settingMinAmps: 'A',
-  settingMaxAmps: 'A',
-  kaic: 'kA',
-  va: 'VA',
-  sealedVa: 'VA',
-  inrushVa: 'VA',
-  secondaryVolts: 'V',
-  normalDutyAmps: 'A',
-  heavyDutyAmps: 'A',
-  inputAmps: 'A',
-  heightMm: 'mm',
-  widthMm: 'mm',
-  depthMm: 'mm',
-  cfm: 'cfm',
-  coolingW: 'W',
-  ohms: 'Ω',
-  watts: 'W',
-};
+export { RATING_LABELS, RATING_UNITS };
 
 /** Fields of the other forms (catalogue item, job, panel, people, combinations), for error sentences. */
 const FORM_FIELD_LABELS: Record<string, string> = {

@@ -2,7 +2,6 @@
 // Pure zod; the same schemas validate the seed files, the REST bodies and the spreadsheet import.
 import { z } from 'zod';
 import { countSchema } from './bounds';
-import { RATING_LABELS } from '../labels';
 
 export const CATEGORIES = [
   { id: 'contactor', label: 'Contactors', labourKey: 'device-mount' },
@@ -282,3 +281,79 @@ export const LabourUnitsFileSchema = z.array(LabourUnitSchema).superRefine((unit
     seen.add(u.key);
   });
 });
+
+/** Every rating a catalogue item may carry (shared/schemas/catalogue.ts RatingsSchema). */
+export const RATING_LABELS: Record<keyof Ratings, string> = {
+  volts: 'Rated voltage',
+  voltsMin: 'Lowest rated voltage',
+  poles: 'Poles',
+  coilVolts: 'Coil voltage',
+  nemaSize: 'NEMA size',
+  amps: 'Rated current',
+  iecAc3Amps: 'IEC AC-3 current',
+  iecAc4Amps: 'IEC AC-4 current',
+  hpByVolts: 'Horsepower by voltage',
+  settingMinAmps: 'Setting range from',
+  settingMaxAmps: 'Setting range to',
+  tripClasses: 'Trip classes',
+  electronic: 'Electronic',
+  detectsPhaseLoss: 'Detects phase loss',
+  detectsPhaseReversal: 'Detects phase reversal',
+  detectsImbalance: 'Detects imbalance',
+  fuseClass: 'Fuse class',
+  timeDelay: 'Time delay',
+  kaic: 'Interrupting rating',
+  va: 'Power rating',
+  sealedVa: 'Sealed coil power',
+  inrushVa: 'Inrush power',
+  secondaryVolts: 'Secondary voltage',
+  normalDutyAmps: 'Normal-duty current',
+  heavyDutyAmps: 'Heavy-duty current',
+  inputAmps: 'Input current',
+  wireSize: 'Wire size',
+  wireMin: 'Smallest wire',
+  wireMax: 'Largest wire',
+  nemaType: 'NEMA type',
+  nemaTypes: 'NEMA types kept',
+  heightMm: 'Height',
+  widthMm: 'Width',
+  depthMm: 'Depth',
+  cfm: 'Air flow',
+  coolingW: 'Cooling capacity',
+  outputs: 'Outputs per pole',
+  kind: 'Kind',
+  function: 'Function',
+  contacts: 'Contacts',
+  color: 'Colour',
+  ohms: 'Resistance',
+  watts: 'Power',
+  internalBypass: 'Internal bypass',
+  builtInOverload: 'Built-in overload',
+};
+
+/** Units of the ratings, for a field's label ("Coil voltage (V)"). */
+export const RATING_UNITS: Partial<Record<keyof Ratings, string>> = {
+  volts: 'V',
+  voltsMin: 'V',
+  coilVolts: 'V',
+  amps: 'A',
+  iecAc3Amps: 'A',
+  iecAc4Amps: 'A',
+  settingMinAmps: 'A',
+  settingMaxAmps: 'A',
+  kaic: 'kA',
+  va: 'VA',
+  sealedVa: 'VA',
+  inrushVa: 'VA',
+  secondaryVolts: 'V',
+  normalDutyAmps: 'A',
+  heavyDutyAmps: 'A',
+  inputAmps: 'A',
+  heightMm: 'mm',
+  widthMm: 'mm',
+  depthMm: 'mm',
+  cfm: 'cfm',
+  coolingW: 'W',
+  ohms: 'Ω',
+  watts: 'W',
+};
