@@ -66,34 +66,7 @@ export function ladderKit(input: BucketInput): LadderKit {
   const ol = (n: Net[]) => (OL ? [...n, OL] : n);
   const cmdLabel = scheme === 'three-wire' ? 'START' : scheme === 'two-wire' ? 'Remote run (maintained)' : 'Auto run (maintained)';
 
-  /** the command for one coil (or one direction): start with seal-in, maintained remote contact, or HOA */
-  const command = (coil: string, startLabel: string, pb: string, remoteLabel: string): Net => {
-    if (scheme === 'two-wire') return field(remoteLabel, true);
-    const start = el({ kind: 'push', device: dev(d(pb), `${startLabel} push-button`), contact: 'no', label: startLabel });
-    const seal = el({ kind: 'contact', device: coil, contact: 'no', label: 'SEAL' });
-    if (scheme === 'hand-off-auto') {
-      const hand = el({ kind: 'selector', device: dev(d('SS'), 'Hand-off-auto selector'), position: 'H', label: 'HAND' });
-      const auto = ser(el({ kind: 'selector', device: d('SS'), position: 'A', label: 'AUTO' }), field(remoteLabel, true));
-      const twoDirections = t === 'FVR' || t === 'two-speed';
-      return par(twoDirections ? ser(hand, par(start, seal)) : hand, auto);
-    }
-    if (input.jogging) {
-      const jog = dev(
-        d(pb === 'PB3' ? 'PB8' : 'PB9'),
-        `Jog ${startLabel === 'START' ? '' : `${startLabel.toLowerCase()} `}push-button (one NO, one NC)`,
-      );
-      if (!notes.some((x) => x.startsWith('Jog')))
-        notes.push(
-          'Jog: the jog push-button’s NC contact opens the seal-in while its NO contact runs the coil; add the jog push-buttons to the bill of materials (it does not list them).',
-        );
-      return par(
-        start,
-        ser(seal, el({ kind: 'push', device: jog, contact: 'nc', label: 'JOG' })),
-        el({ kind: 'push', device: jog, contact: 'no', label: 'JOG' }),
-      );
-    }
-    return par(start, seal);
-  };
+  const command = commandOf(input, scheme, d, dev, field, notes);
   const head = (): Net[] => [
     ...prefix,
     ...(scheme === 'three-wire'
@@ -188,4 +161,43 @@ function protectionContacts(
     );
   if (fieldLoss) prefix.push(el({ kind: 'contact', device: dev(d('FL'), 'Field-loss relay'), contact: 'no', label: 'FIELD' }));
   return { OL, prefix };
+}
+
+/** the command for one coil (or one direction): start with seal-in, maintained remote contact, or HOA */
+function commandOf(
+  input: BucketInput,
+  scheme: ControlScheme,
+  d: (name: string) => string,
+  dev: (tag: string, description: string) => string,
+  field: (label: string, maintained?: boolean) => Net,
+  notes: string[],
+): LadderKit['command'] {
+  const t = input.selection.starter.type;
+  return (coil: string, startLabel: string, pb: string, remoteLabel: string): Net => {
+    if (scheme === 'two-wire') return field(remoteLabel, true);
+    const start = el({ kind: 'push', device: dev(d(pb), `${startLabel} push-button`), contact: 'no', label: startLabel });
+    const seal = el({ kind: 'contact', device: coil, contact: 'no', label: 'SEAL' });
+    if (scheme === 'hand-off-auto') {
+      const hand = el({ kind: 'selector', device: dev(d('SS'), 'Hand-off-auto selector'), position: 'H', label: 'HAND' });
+      const auto = ser(el({ kind: 'selector', device: d('SS'), position: 'A', label: 'AUTO' }), field(remoteLabel, true));
+      const twoDirections = t === 'FVR' || t === 'two-speed';
+      return par(twoDirections ? ser(hand, par(start, seal)) : hand, auto);
+    }
+    if (input.jogging) {
+      const jog = dev(
+        d(pb === 'PB3' ? 'PB8' : 'PB9'),
+        `Jog ${startLabel === 'START' ? '' : `${startLabel.toLowerCase()} `}push-button (one NO, one NC)`,
+      );
+      if (!notes.some((x) => x.startsWith('Jog')))
+        notes.push(
+          'Jog: the jog push-button’s NC contact opens the seal-in while its NO contact runs the coil; add the jog push-buttons to the bill of materials (it does not list them).',
+        );
+      return par(
+        start,
+        ser(seal, el({ kind: 'push', device: jog, contact: 'nc', label: 'JOG' })),
+        el({ kind: 'push', device: jog, contact: 'no', label: 'JOG' }),
+      );
+    }
+    return par(start, seal);
+  };
 }
