@@ -14,6 +14,7 @@ import { motorConnectionCard } from '../shared/calc/checks/connection-card';
 import { buildPanelDrawings, terminalRowsFor, toCsv, TERMINAL_COLUMNS, WIRE_COLUMNS, wireRowsFor } from '../shared/drawings/panel-drawings';
 import { bucketSheetSvg, schematicSheets, supplySheetSvg, terminalRefMap } from '../shared/drawings/svg';
 import { BOM_MIX, median, motorLoads, timeRuns } from './bench-data';
+import { DEMO_MOTORS } from '../server/db/seeders/demo-panels';
 
 const MOTORS = 200;
 const PANELS = 4;
@@ -70,95 +71,9 @@ function draw(p: Awaited<ReturnType<typeof panelsOf>>[number]) {
   return { d, bytes: sheets.reduce((n, s) => n + s.length, 0) + supply.length + csv.length };
 }
 
+/** The demo panel's motors (less the twin of P-101) and two more starter kinds the sheets must draw. */
 const DEMO: LoadInput[] = [
-  {
-    tag: 'P-101',
-    description: 'Raw water pump 1',
-    supply: 'ac3',
-    hp: 150,
-    volts: 460,
-    fla: 172,
-    serviceFactor: 1.15,
-    codeLetter: 'G',
-    design: 'B',
-    startingLimit: 'reduced-inrush',
-    critical: true,
-    environment: 'indoor-dusty',
-    inertia: 'normal',
-  },
-  {
-    tag: 'P-110',
-    description: 'Wash water pump (variable flow)',
-    supply: 'ac3',
-    hp: 40,
-    volts: 460,
-    fla: 48,
-    serviceFactor: 1.15,
-    speedControl: 'variable',
-    turndown: 4,
-    torque: 'variable',
-    environment: 'indoor-dusty',
-    cableLengthFt: 180,
-  },
-  {
-    tag: 'C-201',
-    description: 'Screenings conveyor',
-    supply: 'ac3',
-    hp: 7.5,
-    volts: 460,
-    fla: 10.2,
-    serviceFactor: 1.15,
-    reversing: true,
-    reverseRotationHazard: true,
-    environment: 'washdown',
-  },
-  {
-    tag: 'K-301',
-    description: 'Blower, screw compressor',
-    supply: 'ac3',
-    hp: 60,
-    volts: 460,
-    fla: 70,
-    serviceFactor: 1.15,
-    reverseRotationHazard: true,
-    inertia: 'high',
-    leads: 6,
-    connection: 'delta',
-    startingLimit: 'reduced-inrush',
-    starterPreference: 'wye-delta',
-    environment: 'indoor-dusty',
-  },
-  {
-    tag: 'M-401',
-    description: 'Sampling pump',
-    supply: 'ac1',
-    hp: 0.5,
-    volts: 115,
-    singlePhaseType: 'capacitor-start',
-    environment: 'indoor-dry',
-  },
-  {
-    tag: 'V-501',
-    description: 'Sluice gate actuator',
-    supply: 'ac3',
-    hp: 2,
-    volts: 460,
-    reversing: true,
-    duty: 'intermittent',
-    jogging: true,
-    environment: 'outdoor',
-  },
-  {
-    tag: 'H-601',
-    description: 'Chemical room hoist (DC)',
-    supply: 'dc',
-    hp: 5,
-    volts: 240,
-    dcField: 'compound',
-    reversing: true,
-    quickStop: true,
-    environment: 'corrosive',
-  },
+  ...DEMO_MOTORS.filter((m) => m.tag !== 'P-102'),
   {
     tag: 'F-701',
     description: 'Supply fan',
