@@ -23,6 +23,9 @@ export interface PanelDrawingInput {
   bom: readonly BomLine[];
   /** the shop's name for the title block (a placeholder until it is set) */
   shopName?: string;
+  /** the shop's drawing-number scheme (shop settings, e.g. `{job}-{panel}-{sheet:2}`) and the revision's code
+   *  ("R1", or "D" for a draft): the sheets then carry the same numbers as the submittal's pages do */
+  numberScheme?: { scheme: string; revisionCode: string };
 }
 
 export interface TerminalRow {

@@ -27,6 +27,7 @@ export {
   type TerminalRow,
   type WireRow,
 } from './panel-drawings-model';
+import { drawingNumber as schemeNumber } from '../schemas/settings';
 export { TERMINAL_COLUMNS, terminalRowsFor, toCsv, WIRE_COLUMNS, wireRowsFor } from './drawing-tables';
 export { wireNumberUse } from './wire-list';
 
@@ -49,7 +50,13 @@ export function buildPanelDrawings(input: PanelDrawingInput): PanelDrawings {
     list.push(l);
     byBucket.set(l.bucket, list);
   }
-  const number = drawingNumber(input.jobNumber, input.panelName);
+  const scheme = input.numberScheme;
+  const parts = (sheet: number) => ({ job: input.jobNumber, panel: input.panelName, rev: scheme?.revisionCode ?? 'D', sheet });
+  // the set's number: the scheme without its sheet part ("{job}-{panel}-{sheet:2}" → "J-2041-MCC-1")
+  const number = scheme
+    ? schemeNumber(scheme.scheme.replace(/[-_./ ]?\{sheet(:\d)?\}/, ''), parts(1))
+    : drawingNumber(input.jobNumber, input.panelName);
+  const sheetNumber = (n: number) => (scheme ? schemeNumber(scheme.scheme, parts(n)) : `${number}-${String(n).padStart(2, '0')}`);
   const buckets: BucketSchematic[] = [];
   let rung = 1;
   input.buckets.forEach((bi, i) => {
@@ -66,8 +73,8 @@ export function buildPanelDrawings(input: PanelDrawingInput): PanelDrawings {
 
   // ------------------------------------------------------------ wire list
   const wires: WireRow[] = [];
-  const sheetOf = (i: number) => `${number}-${String(i + 2).padStart(2, '0')}`;
-  const supplySheet = `${number}-01`;
+  const sheetOf = (i: number) => sheetNumber(i + 2);
+  const supplySheet = sheetNumber(1);
   wires.push(...supplyWires(input.supply.phases, supplySheet));
   buckets.forEach((sch, i) => {
     const sheet = sheetOf(i);
@@ -83,9 +90,9 @@ export function buildPanelDrawings(input: PanelDrawingInput): PanelDrawings {
       kind: 'schematic' as const,
       tag: b.tag,
     })),
-    { number: `${number}-${String(buckets.length + 2).padStart(2, '0')}`, title: 'Terminal plan', kind: 'terminals' },
-    { number: `${number}-${String(buckets.length + 3).padStart(2, '0')}`, title: 'Wire list', kind: 'wires' },
-    { number: `${number}-${String(buckets.length + 4).padStart(2, '0')}`, title: 'Panel marking (nameplate)', kind: 'nameplate' },
+    { number: sheetNumber(buckets.length + 2), title: 'Terminal plan', kind: 'terminals' },
+    { number: sheetNumber(buckets.length + 3), title: 'Wire list', kind: 'wires' },
+    { number: sheetNumber(buckets.length + 4), title: 'Panel marking (nameplate)', kind: 'nameplate' },
   ];
   return {
     drawingNumber: number,

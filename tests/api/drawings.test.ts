@@ -97,6 +97,22 @@ describe('panel drawings', () => {
     expect(d.sheets.length).toBe(8 + 4);
   });
 
+  it('numbers every sheet by the shop’s drawing-number scheme, as the submittal numbers its pages', async () => {
+    const shop = (await engineer.agent.get('/api/settings').expect(200)).body as { drawingNumberScheme: string };
+    const d = (await engineer.agent.get(`/api/panels/${panelId}/drawings`).expect(200)).body as {
+      drawingNumber: string;
+      sheets: Array<{ number: string }>;
+    };
+    // the demo shop keeps the default scheme {job}-{panel}-{sheet:2}; the demo panel is a draft (D)
+    expect(shop.drawingNumberScheme).toBe('{job}-{panel}-{sheet:2}');
+    expect(d.sheets.map((s) => s.number)).toEqual(d.sheets.map((_, i) => `J-2041-MCC-1-Pump-hall-${String(i + 1).padStart(2, '0')}`));
+    expect(d.drawingNumber).toBe('J-2041-MCC-1-Pump-hall');
+    const svg = (
+      await engineer.agent.get(`/api/panels/${panelId}/drawings/nameplate.svg`).buffer(true).parse(binary).expect(200)
+    ).body.toString('utf8');
+    expect(svg).toContain('class="np-wiring-diagram">J-2041-MCC-1-Pump-hall<');
+  });
+
   it('prints the nameplate with the checks’ full-load current and SCCR (NEC 2023 409.110)', async () => {
     const checks = (await engineer.agent.get(`/api/panels/${panelId}/checks`).expect(200)).body as {
       nameplate: { result: { fullLoadAmps: number; lines: Array<{ label: string; value: string }> } };

@@ -49,6 +49,11 @@ export function drawingsFrom(ctx: ChecksContext, opts: { shopName?: string } = {
     bom: lines,
     // the shop's name: a parameter until the shop's settings carry it (the drawings print a placeholder)
     ...(opts.shopName?.trim() ? { shopName: opts.shopName.trim() } : {}),
+    // the sheets numbered by the shop's scheme, as the submittal's pages are
+    numberScheme: {
+      scheme: ctx.shop.drawingNumberScheme,
+      revisionCode: ctx.panel.status === 'signed_off' && ctx.panel.revisionNumber !== null ? `R${ctx.panel.revisionNumber}` : 'D',
+    },
   });
   const main = lines.find((l) => l.bucket === '(panel)' && (l.category === 'main-breaker' || l.category === 'main-disconnect'));
   const cpt = lines.find((l) => l.category === 'control-transformer');
