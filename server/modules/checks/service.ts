@@ -20,7 +20,6 @@ import type { Panel } from '../../db/models/panel';
 import type { Job } from '../../db/models/job';
 
 // the motor list and the change report show the same cautions (they import them from here)
-export { CHECK_CAUTIONS } from '../../../shared/calc/checks/cautions';
 
 export interface ChecksContext {
   checks: PanelChecks;

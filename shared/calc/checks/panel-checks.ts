@@ -10,7 +10,7 @@ import type { LoadSelection, PanelRollup } from '../../schemas/selection';
 import { controlConductorChecks } from '../control-conductors';
 import { sourcesSummary } from '../other-sources';
 import type { SccrInput } from '../sccr';
-import { CHECK_CAUTIONS } from './cautions';
+import { CHECK_CAUTIONS } from '../../schemas/checks';
 import { motorConnectionCard } from './connection-card';
 import { controlPowerCheck } from './control-power-check';
 import { heatCheck } from './heat-check';
