@@ -2,12 +2,11 @@
 // the reason, an instantaneous-trip branch counted at the feeder device type's Table 430.52 percent.
 
 import { feederRollup, type FeederBranch } from '../calc/feeder';
-import { otherSources } from '../calc/other-sources';
+import { otherSources, sourceNeed } from '../calc/other-sources';
 import { branchProtection, motorKind } from '../calc/scpd';
 import type { Load, Supply } from '../schemas/load';
 import type { LoadSelection, SelectionOutput } from '../schemas/selection';
 import type { CodeEdition } from '../standards/code-edition';
-import { nominalSystemVolts } from '../standards/nominal-system-voltages';
 
 export function panelRollupOf(
   supply: Supply,
@@ -18,7 +17,6 @@ export function panelRollupOf(
   const notes: string[] = [];
   const errors: string[] = [];
   const branches: FeederBranch[] = [];
-  const supplySystem = nominalSystemVolts(supply.volts);
   const feederFamily = supply.feeder.ocpdType === 'inverse-time-breaker' ? 'breaker' : 'fuse';
   results.forEach((r, i) => {
     const load = loads[i] as Load;
@@ -26,12 +24,12 @@ export function panelRollupOf(
       errors.push(`${r.tag}: left out of the feeder roll-up (its selection has errors)`);
       return;
     }
-    if (load.supply === 'dc') return; // fed from a DC supply or its drive: shared/calc/other-sources
     if (load.supply === 'ac3' && supply.phases === 1) {
       errors.push(`${r.tag}: a three-phase motor cannot be fed from a single-phase supply`);
       return;
     }
-    if (load.volts !== supply.volts && (nominalSystemVolts(load.volts) === null || nominalSystemVolts(load.volts) !== supplySystem)) return; // shared/calc/other-sources
+    // a motor at another voltage (or DC) is fed through another source, counted by otherSources below
+    if (sourceNeed(load, r, supply).on !== 'bus') return;
     let deviceAmps = r.scpd.ratingAmps;
     if (r.scpd.type === 'instantaneous-trip-breaker') {
       // 430.62(A): an instantaneous-trip branch counts at the Table 430.52 % of the feeder device type
