@@ -12,28 +12,30 @@ import '../../shared/plain-messages';
 
 type CliError = { path: string; message: string };
 
-function finish(code: number, body: unknown): never {
+/** Prints the answer and sets the exit status; the process ends once stdout has drained (a process.exit()
+ *  here would cut the output to a pipe at 64 KiB). */
+function finish(code: number, body: unknown): void {
+  process.exitCode = code;
   process.stdout.write(`${JSON.stringify(body, null, 2)}\n`);
-  process.exit(code);
 }
 
 async function main(argv: string[]): Promise<void> {
   const file = argv[0];
   if (!file || argv.length > 1) {
-    finish(2, { errors: [{ path: '', message: 'usage: npm run -s select -- FILE.json' }] satisfies CliError[] });
+    return finish(2, { errors: [{ path: '', message: 'usage: npm run -s select -- FILE.json' }] satisfies CliError[] });
   }
   let text: string;
   try {
     text = readFileSync(file, 'utf8');
   } catch (e) {
     const code = (e as NodeJS.ErrnoException).code;
-    finish(2, { errors: [{ path: '', message: `cannot read ${file}${code ? ` (${code})` : ''}` }] });
+    return finish(2, { errors: [{ path: '', message: `cannot read ${file}${code ? ` (${code})` : ''}` }] });
   }
   let input: unknown;
   try {
     input = JSON.parse(text);
   } catch (e) {
-    finish(2, { errors: [{ path: '', message: `${file} is not valid JSON: ${(e as Error).message}` }] });
+    return finish(2, { errors: [{ path: '', message: `${file} is not valid JSON: ${(e as Error).message}` }] });
   }
   try {
     const out = await getSelector().selectPanel(input as never);
@@ -41,16 +43,16 @@ async function main(argv: string[]): Promise<void> {
       ...out.results.flatMap((r, i) => r.errors.map((message) => ({ path: `loads[${i}]`, message: `${r.tag}: ${message}` }))),
       ...(out.panel.errors ?? []).map((message) => ({ path: 'panel', message })),
     ];
-    finish(errors.length ? 3 : 0, {
+    return finish(errors.length ? 3 : 0, {
       results: out.results,
       panel: out.panel,
       codeEdition: out.codeEdition,
       ...(errors.length ? { errors } : {}),
     });
   } catch (e) {
-    if (e instanceof ValidationError) finish(2, { errors: e.details });
-    if (e instanceof DomainError) finish(1, { errors: [{ path: '', message: e.message, code: e.code }] });
-    finish(1, { errors: [{ path: '', message: `internal error: ${(e as Error)?.message ?? String(e)}` }] });
+    if (e instanceof ValidationError) return finish(2, { errors: e.details });
+    if (e instanceof DomainError) return finish(1, { errors: [{ path: '', message: e.message, code: e.code }] });
+    return finish(1, { errors: [{ path: '', message: `internal error: ${(e as Error)?.message ?? String(e)}` }] });
   }
 }
 

@@ -18,6 +18,20 @@ function run(...args: string[]): Promise<{ code: number; stdout: string; stderr:
 }
 
 describe('npm run -s select -- FILE.json', () => {
+  it('writes its whole answer into a slow pipe (more than 64 KiB) before it exits', async () => {
+    // the sample's answer (8 motors) is about 88 kB; `sleep 1` holds the pipe's reader back so the writer must wait for it
+    const out = await new Promise<{ stdout: string }>((resolve) => {
+      execFile(
+        'sh',
+        ['-c', 'npx tsx server/cli/select.ts tests/fixtures/select-sample.json | (sleep 1; cat)'],
+        { cwd: root, timeout: 60_000, maxBuffer: 8 * 1024 * 1024 },
+        (_err, stdout) => resolve({ stdout }),
+      );
+    });
+    expect(out.stdout.length).toBeGreaterThan(65_536);
+    expect(JSON.parse(out.stdout).results).toHaveLength(8);
+  }, 60_000);
+
   it('prints one result per load in input order and the panel roll-up', async () => {
     const { code, stdout, stderr } = await run('tests/fixtures/select-sample.json');
     expect(stderr).toBe('');
