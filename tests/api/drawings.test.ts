@@ -111,6 +111,13 @@ describe('panel drawings', () => {
       await engineer.agent.get(`/api/panels/${panelId}/drawings/nameplate.svg`).buffer(true).parse(binary).expect(200)
     ).body.toString('utf8');
     expect(svg).toContain('class="np-wiring-diagram">J-2041-MCC-1-Pump-hall<');
+    // every sheet's title block names the shop from its settings, never a placeholder
+    const name = ((await engineer.agent.get('/api/settings').expect(200)).body as { name: string }).name;
+    const sheets = (
+      await engineer.agent.get(`/api/panels/${panelId}/drawings/schematic.svg`).buffer(true).parse(binary).expect(200)
+    ).body.toString('utf8');
+    expect(sheets).toContain(name.replace(/&/g, '&amp;'));
+    expect(sheets).not.toContain('[Shop name]');
   });
 
   it('prints the nameplate with the checks’ full-load current and SCCR (NEC 2023 409.110)', async () => {

@@ -25,12 +25,12 @@ export interface DrawingContext {
   cptText: string;
 }
 
-export async function panelDrawings(actor: CurrentUser, panelId: number, opts: { shopName?: string } = {}): Promise<DrawingContext> {
-  return drawingsFrom(await computeChecks(actor, panelId), opts);
+export async function panelDrawings(actor: CurrentUser, panelId: number): Promise<DrawingContext> {
+  return drawingsFrom(await computeChecks(actor, panelId));
 }
 
 /** The drawings from a panel-checks context already computed (the submittal reuses its own). */
-export function drawingsFrom(ctx: ChecksContext, opts: { shopName?: string } = {}): DrawingContext {
+export function drawingsFrom(ctx: ChecksContext): DrawingContext {
   const { checks, selections, lines } = ctx;
   const byTag = new Map(selections.map((s) => [s.tag, s]));
   const answersByTag = new Map(ctx.answers.map((a) => [String(a.tag ?? ''), a]));
@@ -47,8 +47,8 @@ export function drawingsFrom(ctx: ChecksContext, opts: { shopName?: string } = {
     controlVolts: CONTROL_VOLTS,
     buckets,
     bom: lines,
-    // the shop's name: a parameter until the shop's settings carry it (the drawings print a placeholder)
-    ...(opts.shopName?.trim() ? { shopName: opts.shopName.trim() } : {}),
+    // the shop's name in every sheet's title block (shop settings)
+    shopName: ctx.shop.name,
     // the sheets numbered by the shop's scheme, as the submittal's pages are
     numberScheme: {
       scheme: ctx.shop.drawingNumberScheme,
@@ -81,10 +81,11 @@ export function supplySvg(c: DrawingContext): string {
   return `<?xml version="1.0" encoding="UTF-8"?>\n${supplySheetSvg(c.drawings, c.mainText, c.cptText)}`;
 }
 
-export function panelNameplateSvg(c: DrawingContext, shopName?: string): string {
+/** The panel marking; its manufacturer line is the shop's name, as the checks' nameplate gives it. */
+export function panelNameplateSvg(c: DrawingContext): string {
   const np = c.checks.nameplate.result;
   if (!np) throw new NotFoundError(c.checks.nameplate.reason ?? 'No nameplate for this panel yet');
-  return `<?xml version="1.0" encoding="UTF-8"?>\n${nameplateSvg(np, { ...(shopName ? { shopName } : {}), drawingNumber: c.drawings.drawingNumber, fullLoadWorking: fullLoadWorking(c.checks) })}`;
+  return `<?xml version="1.0" encoding="UTF-8"?>\n${nameplateSvg(np, { drawingNumber: c.drawings.drawingNumber, fullLoadWorking: fullLoadWorking(c.checks) })}`;
 }
 
 /** The 409.110(2) full-load current with its working. */
