@@ -84,19 +84,7 @@ export function panelChecks(input: PanelChecksInput): PanelChecks {
   });
   return {
     panel: { id: panel.id, name: panel.name, mounting: panel.mounting, enclosureType, revision: revisionText(panel) },
-    job: {
-      id: job.id,
-      number: job.number,
-      name: job.name,
-      customer: job.customer,
-      site: job.site,
-      supplyVolts: job.supplyVolts,
-      supplyPhases: job.supplyPhases,
-      supplyHz: job.supplyHz,
-      availableFaultKa: job.availableFaultKa,
-      ambientC: job.ambientC,
-      codeEdition: job.codeEdition,
-    },
+    job,
     bom: {
       source: bom.source,
       stale: bom.source === 'stored' && bom.stale,
