@@ -37,11 +37,13 @@ export function drawingsFrom(ctx: ChecksContext): DrawingContext {
   const buckets = checks.connectionCards
     .filter((c) => byTag.has(c.tag))
     .map((c) => ({ selection: byTag.get(c.tag)!, card: c.card, jogging: answersByTag.get(c.tag)?.jogging === true }));
+  // the revision as the sheets' title block and drawing numbers carry it: R1 when signed off, else a draft (D)
+  const revisionCode = ctx.panel.status === 'signed_off' && ctx.panel.revisionNumber !== null ? `R${ctx.panel.revisionNumber}` : 'D';
   const drawings = buildPanelDrawings({
     jobNumber: checks.job.number,
     jobName: checks.job.name,
     panelName: checks.panel.name,
-    revision: checks.panel.revision,
+    revision: revisionCode === 'D' ? 'Draft' : revisionCode,
     date: new Date().toISOString().slice(0, 10),
     supply: { volts: checks.job.supplyVolts, phases: checks.job.supplyPhases, hz: checks.job.supplyHz },
     controlVolts: CONTROL_VOLTS,
@@ -50,10 +52,7 @@ export function drawingsFrom(ctx: ChecksContext): DrawingContext {
     // the shop's name in every sheet's title block (shop settings)
     shopName: ctx.shop.name,
     // the sheets numbered by the shop's scheme, as the submittal's pages are
-    numberScheme: {
-      scheme: ctx.shop.drawingNumberScheme,
-      revisionCode: ctx.panel.status === 'signed_off' && ctx.panel.revisionNumber !== null ? `R${ctx.panel.revisionNumber}` : 'D',
-    },
+    numberScheme: { scheme: ctx.shop.drawingNumberScheme, revisionCode },
   });
   const main = lines.find((l) => l.bucket === '(panel)' && (l.category === 'main-breaker' || l.category === 'main-disconnect'));
   const cpt = lines.find((l) => l.category === 'control-transformer');
