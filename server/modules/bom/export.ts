@@ -1,11 +1,11 @@
-// Bill-of-materials export: a formatted .xlsx (streamed with exceljs' WorkbookWriter) and CSV.
+// Bill-of-materials export: a formatted .xlsx, streamed with exceljs' WorkbookWriter (the CSV is export-csv.ts).
 // The workbook keeps real formulas for extended costs and totals so the estimator can go on working in it;
 // every text is written as a string cell (never a formula), and control characters XML cannot carry are dropped.
 import type { Writable } from 'node:stream';
 import ExcelJS from 'exceljs';
 import { CATEGORY_LABELS, type BomCategory, type BomLine } from '../../../shared/schemas/catalogue';
 import { computeTotals, extendedCost, extendedLabourHours, rollupByCode } from '../../../shared/calc/bom';
-import { csvField, xmlSafe } from '../catalogue/spreadsheet';
+import { xmlSafe } from '../catalogue/spreadsheet';
 
 export interface BomExportJob {
   number: string;
@@ -126,14 +126,41 @@ const PANEL_COLUMNS: Array<{ header: string; width: number }> = [
  * "Summary" (a row per panel pointing at its totals, job totals, labour rate and markup to edit),
  * one sheet per panel grouped by bucket with subtotals, and "Roll-up by part" for purchasing.
  */
+type Workbook = InstanceType<typeof ExcelJS.stream.xlsx.WorkbookWriter>;
+
+/** The job title every sheet carries. */
+const jobTitle = (job: BomExportJob): string => `Job ${job.number} — ${job.name}${job.revision ? ` — ${job.revision}` : ''}`;
+
+/** Cells of the summary that the panel sheets refer to. */
+const RATE = '$B$3';
+const MARKUP = '$D$3';
+
+/**
+ * Write a job's (or one panel's) bill of materials as .xlsx to `stream`:
+ * "Summary" (a row per panel pointing at its totals, job totals, labour rate and markup to edit),
+ * one sheet per panel grouped by bucket with subtotals, and "Roll-up by part" for purchasing.
+ */
 export async function writeBomWorkbook(job: BomExportJob, panels: readonly BomExportPanel[], stream: Writable): Promise<void> {
   const wb = new ExcelJS.stream.xlsx.WorkbookWriter({ stream, useStyles: true, useSharedStrings: false });
   wb.creator = 'Panelwright';
   const names = sheetNames(panels.map((p) => p.name));
   const layouts = panels.map((p, i) => layoutPanel(names[i]!, p.lines));
-  const title = `Job ${job.number} — ${job.name}${job.revision ? ` — ${job.revision}` : ''}`;
+  const jobLines = panels.flatMap((p) => p.lines);
+  writeSummarySheet(wb, job, panels, layouts, jobLines);
+  panels.forEach((p, i) => writePanelSheet(wb, job, p, layouts[i]!));
+  writeRollupSheet(wb, job, jobLines);
+  await wb.commit();
+}
 
-  // ---------------- Summary
+/** "Summary": a row per panel pointing at its sheet's totals, the job total, and the rate and markup to edit. */
+function writeSummarySheet(
+  wb: Workbook,
+  job: BomExportJob,
+  panels: readonly BomExportPanel[],
+  layouts: readonly PanelLayout[],
+  jobLines: readonly BomLine[],
+): void {
+  const title = jobTitle(job);
   const sum = wb.addWorksheet(SUMMARY, { views: [{ state: 'frozen', ySplit: 5 }] });
   sum.columns = [{ width: 30 }, { width: 14 }, { width: 12 }, { width: 14 }, { width: 14 }, { width: 14 }, { width: 14 }, { width: 12 }];
   const t1 = sum.addRow([text(`Bill of materials — ${title}`)]);
@@ -148,14 +175,10 @@ export async function writeBomWorkbook(job: BomExportJob, panels: readonly BomEx
   const sh = sum.addRow(['Panel', 'Material', 'Labour h', 'Labour cost', 'Cost', 'Markup', 'Sell', 'Unmatched']);
   sh.font = { bold: true };
   sh.commit();
-  const RATE = '$B$3';
-  const MARKUP = '$D$3';
   const firstPanelRow = 6;
-  const jobLines: BomLine[] = [];
   panels.forEach((p, i) => {
     const L = layouts[i]!;
     const t = computeTotals(p.lines, job.markupPercent, job.labourRatePerHour);
-    jobLines.push(...p.lines);
     const r = sum.addRow([text(p.name)]);
     r.getCell(2).value = { formula: ref(L.sheet, `H${L.materialRow}`), result: t.materialCost };
     r.getCell(3).value = { formula: ref(L.sheet, `H${L.hoursRow}`), result: t.labourHours };
@@ -190,87 +213,91 @@ export async function writeBomWorkbook(job: BomExportJob, panels: readonly BomEx
     ])
     .commit();
   sum.commit();
+}
 
-  // ---------------- Panels
-  panels.forEach((p, i) => {
-    const L = layouts[i]!;
-    const t = computeTotals(p.lines, job.markupPercent, job.labourRatePerHour);
-    const ws = wb.addWorksheet(L.sheet, { views: [{ state: 'frozen', ySplit: PANEL_HEADER_ROW }] });
-    ws.columns = PANEL_COLUMNS.map((c) => ({ width: c.width }));
-    const h1 = ws.addRow([text(`${p.name} — bill of materials`)]);
-    h1.font = { bold: true, size: 13 };
-    h1.commit();
-    const h2 = ws.addRow(['Labour rate per hour', null, 'Markup %', null, text(title)]);
-    h2.getCell(2).value = { formula: ref(SUMMARY, RATE), result: job.labourRatePerHour };
-    h2.getCell(2).numFmt = MONEY;
-    h2.getCell(4).value = { formula: ref(SUMMARY, MARKUP), result: job.markupPercent };
-    h2.getCell(4).numFmt = PERCENT;
-    h2.commit();
-    ws.addRow([]).commit();
-    const hr = ws.addRow(PANEL_COLUMNS.map((c) => c.header));
-    hr.font = { bold: true };
-    hr.border = { bottom: { style: 'thin' } };
-    hr.commit();
-    for (const g of L.groups) {
-      const gh = ws.addRow([text(g.bucket === '(panel)' ? 'Panel items' : `Bucket ${g.bucket}`)]);
-      gh.font = { bold: true };
-      gh.commit();
-      let r = g.firstRow;
-      for (const l of g.lines) {
-        const row = ws.addRow([
-          text(l.bucket),
-          text(categoryLabel(l.category)),
-          l.code ? text(l.code) : null,
-          text(l.description),
-          l.quantity,
-          l.unit,
-          l.unitCost,
-          { formula: `ROUND(E${r}*G${r},2)`, result: extendedCost(l) },
-          l.unitLabourHours,
-          { formula: `ROUND(E${r}*I${r},4)`, result: extendedLabourHours(l) },
-          l.status,
-          l.source,
-          text(l.status === 'unmatched' ? l.requiredRatings : l.source === 'swapped' ? l.swapReason : l.requiredRatings),
-        ]);
-        row.getCell(5).numFmt = l.unit === 'ft' || Number.isInteger(l.quantity) ? QTY : '#,##0.00';
-        row.getCell(7).numFmt = MONEY;
-        row.getCell(8).numFmt = MONEY;
-        row.getCell(9).numFmt = '0.000';
-        row.getCell(10).numFmt = HOURS;
-        if (l.status === 'unmatched') row.getCell(11).font = { bold: true };
-        row.commit();
-        r++;
-      }
-      const st = ws.addRow([null, null, null, text(`Subtotal ${g.bucket === '(panel)' ? 'panel items' : g.bucket}`)]);
-      const gt = computeTotals(g.lines, 0, 0);
-      st.getCell(8).value = { formula: `SUBTOTAL(9,H${g.firstRow}:H${g.lastRow})`, result: gt.materialCost };
-      st.getCell(10).value = { formula: `SUBTOTAL(9,J${g.firstRow}:J${g.lastRow})`, result: gt.labourHours };
-      st.getCell(8).numFmt = MONEY;
-      st.getCell(10).numFmt = HOURS;
-      st.font = { italic: true };
-      st.commit();
-    }
-    ws.addRow([]).commit();
-    const range = (col: string) => `${col}${L.firstRow}:${col}${L.lastRow}`;
-    const totalRows: Array<[string, ExcelJS.CellFormulaValue, string]> = [
-      ['Material', { formula: `SUBTOTAL(9,${range('H')})`, result: t.materialCost }, MONEY],
-      ['Labour hours', { formula: `SUBTOTAL(9,${range('J')})`, result: t.labourHours }, HOURS],
-      ['Labour cost', { formula: `ROUND(H${L.hoursRow}*$B$2,2)`, result: t.labourCost }, MONEY],
-      ['Cost (material + labour)', { formula: `H${L.materialRow}+H${L.labourCostRow}`, result: t.cost }, MONEY],
-      ['Markup', { formula: `ROUND(H${L.costRow}*$D$2/100,2)`, result: t.markup }, MONEY],
-      ['Sell', { formula: `H${L.costRow}+H${L.markupRow}`, result: t.sell }, MONEY],
-    ];
-    for (const [label, f, fmt] of totalRows) {
-      const row = ws.addRow([null, null, null, label]);
-      row.getCell(8).value = f;
-      row.getCell(8).numFmt = fmt;
-      row.font = { bold: true };
+/** One panel's sheet: its lines grouped by bucket with subtotals, then the panel's totals as formulas. */
+function writePanelSheet(wb: Workbook, job: BomExportJob, p: BomExportPanel, L: PanelLayout): void {
+  const title = jobTitle(job);
+  const t = computeTotals(p.lines, job.markupPercent, job.labourRatePerHour);
+  const ws = wb.addWorksheet(L.sheet, { views: [{ state: 'frozen', ySplit: PANEL_HEADER_ROW }] });
+  ws.columns = PANEL_COLUMNS.map((c) => ({ width: c.width }));
+  const h1 = ws.addRow([text(`${p.name} — bill of materials`)]);
+  h1.font = { bold: true, size: 13 };
+  h1.commit();
+  const h2 = ws.addRow(['Labour rate per hour', null, 'Markup %', null, text(title)]);
+  h2.getCell(2).value = { formula: ref(SUMMARY, RATE), result: job.labourRatePerHour };
+  h2.getCell(2).numFmt = MONEY;
+  h2.getCell(4).value = { formula: ref(SUMMARY, MARKUP), result: job.markupPercent };
+  h2.getCell(4).numFmt = PERCENT;
+  h2.commit();
+  ws.addRow([]).commit();
+  const hr = ws.addRow(PANEL_COLUMNS.map((c) => c.header));
+  hr.font = { bold: true };
+  hr.border = { bottom: { style: 'thin' } };
+  hr.commit();
+  for (const g of L.groups) {
+    const gh = ws.addRow([text(g.bucket === '(panel)' ? 'Panel items' : `Bucket ${g.bucket}`)]);
+    gh.font = { bold: true };
+    gh.commit();
+    let r = g.firstRow;
+    for (const l of g.lines) {
+      const row = ws.addRow([
+        text(l.bucket),
+        text(categoryLabel(l.category)),
+        l.code ? text(l.code) : null,
+        text(l.description),
+        l.quantity,
+        l.unit,
+        l.unitCost,
+        { formula: `ROUND(E${r}*G${r},2)`, result: extendedCost(l) },
+        l.unitLabourHours,
+        { formula: `ROUND(E${r}*I${r},4)`, result: extendedLabourHours(l) },
+        l.status,
+        l.source,
+        text(l.status === 'unmatched' ? l.requiredRatings : l.source === 'swapped' ? l.swapReason : l.requiredRatings),
+      ]);
+      row.getCell(5).numFmt = l.unit === 'ft' || Number.isInteger(l.quantity) ? QTY : '#,##0.00';
+      row.getCell(7).numFmt = MONEY;
+      row.getCell(8).numFmt = MONEY;
+      row.getCell(9).numFmt = '0.000';
+      row.getCell(10).numFmt = HOURS;
+      if (l.status === 'unmatched') row.getCell(11).font = { bold: true };
       row.commit();
+      r++;
     }
-    ws.commit();
-  });
+    const st = ws.addRow([null, null, null, text(`Subtotal ${g.bucket === '(panel)' ? 'panel items' : g.bucket}`)]);
+    const gt = computeTotals(g.lines, 0, 0);
+    st.getCell(8).value = { formula: `SUBTOTAL(9,H${g.firstRow}:H${g.lastRow})`, result: gt.materialCost };
+    st.getCell(10).value = { formula: `SUBTOTAL(9,J${g.firstRow}:J${g.lastRow})`, result: gt.labourHours };
+    st.getCell(8).numFmt = MONEY;
+    st.getCell(10).numFmt = HOURS;
+    st.font = { italic: true };
+    st.commit();
+  }
+  ws.addRow([]).commit();
+  const range = (col: string) => `${col}${L.firstRow}:${col}${L.lastRow}`;
+  const totalRows: Array<[string, ExcelJS.CellFormulaValue, string]> = [
+    ['Material', { formula: `SUBTOTAL(9,${range('H')})`, result: t.materialCost }, MONEY],
+    ['Labour hours', { formula: `SUBTOTAL(9,${range('J')})`, result: t.labourHours }, HOURS],
+    ['Labour cost', { formula: `ROUND(H${L.hoursRow}*$B$2,2)`, result: t.labourCost }, MONEY],
+    ['Cost (material + labour)', { formula: `H${L.materialRow}+H${L.labourCostRow}`, result: t.cost }, MONEY],
+    ['Markup', { formula: `ROUND(H${L.costRow}*$D$2/100,2)`, result: t.markup }, MONEY],
+    ['Sell', { formula: `H${L.costRow}+H${L.markupRow}`, result: t.sell }, MONEY],
+  ];
+  for (const [label, f, fmt] of totalRows) {
+    const row = ws.addRow([null, null, null, label]);
+    row.getCell(8).value = f;
+    row.getCell(8).numFmt = fmt;
+    row.font = { bold: true };
+    row.commit();
+  }
+  ws.commit();
+}
 
-  // ---------------- Roll-up by part code
+/** "Roll-up by part": one row per part code over the whole job, for purchasing. */
+function writeRollupSheet(wb: Workbook, job: BomExportJob, jobLines: readonly BomLine[]): void {
+  const title = jobTitle(job);
+  const jt = computeTotals(jobLines, job.markupPercent, job.labourRatePerHour);
   const ru = wb.addWorksheet(ROLLUP, { views: [{ state: 'frozen', ySplit: 3 }] });
   ru.columns = [
     { width: 20 },
@@ -316,62 +343,4 @@ export async function writeBomWorkbook(job: BomExportJob, panels: readonly BomEx
   rt.font = { bold: true };
   rt.commit();
   ru.commit();
-
-  await wb.commit();
-}
-
-export const BOM_CSV_HEADERS = [
-  'panel',
-  'bucket',
-  'category',
-  'code',
-  'description',
-  'quantity',
-  'unit',
-  'unitCost',
-  'extendedCost',
-  'unitLabourHours',
-  'labourHours',
-  'status',
-  'source',
-  'requiredRatings',
-  'swapReason',
-];
-
-/** The bill of materials as CSV text: one row per line, every text neutralised against formula injection. */
-export function bomCsv(panels: readonly BomExportPanel[]): string {
-  const out = [BOM_CSV_HEADERS.join(',')];
-  for (const p of panels) {
-    for (const l of p.lines) {
-      out.push(
-        [
-          csvField(p.name),
-          csvField(l.bucket),
-          csvField(l.category),
-          csvField(l.code),
-          csvField(l.description),
-          csvField(l.quantity),
-          csvField(l.unit),
-          csvField(l.unitCost),
-          csvField(extendedCost(l)),
-          csvField(l.unitLabourHours),
-          csvField(extendedLabourHours(l)),
-          csvField(l.status),
-          csvField(l.source),
-          csvField(l.requiredRatings),
-          csvField(l.swapReason),
-        ].join(','),
-      );
-    }
-  }
-  return `${out.join('\r\n')}\r\n`;
-}
-
-/** Stream the CSV; resolves once it is written. */
-export async function writeBomCsv(_job: BomExportJob, panels: readonly BomExportPanel[], stream: Writable): Promise<void> {
-  const body = `\uFEFF${bomCsv(panels)}`;
-  await new Promise<void>((resolve, reject) => {
-    stream.once('error', reject);
-    stream.end(body, () => resolve());
-  });
 }

@@ -2,14 +2,8 @@
 import { PassThrough } from 'node:stream';
 import ExcelJS from 'exceljs';
 import { beforeAll, describe, expect, it } from 'vitest';
-import {
-  bomCsv,
-  sheetNames,
-  writeBomCsv,
-  writeBomWorkbook,
-  type BomExportJob,
-  type BomExportPanel,
-} from '../../../server/modules/bom/export';
+import { sheetNames, writeBomWorkbook, type BomExportJob, type BomExportPanel } from '../../../server/modules/bom/export';
+import { bomCsv, writeBomCsv } from '../../../server/modules/bom/export-csv';
 import { buildBom, computeTotals, rollupByCode } from '../../../shared/calc/bom';
 import type { BomLine } from '../../../shared/schemas/catalogue';
 import { makePanel, makeSelection, seedCatalogue, seedLabourUnits, SUPPLY_480 } from './fixtures';
