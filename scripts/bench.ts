@@ -173,7 +173,7 @@ async function main() {
   const drawings = tsx('bench-drawings.ts');
 
   console.log('(c, d) database, server and load …');
-  const { ensureCluster, createDatabase, dropDatabase, serverUrl } = await import('./postgres');
+  const { acquireCluster, releaseCluster, createDatabase, dropDatabase, serverUrl } = await import('./postgres');
   const { prepareDatabase } = await import('../server/boot');
   const { closeDatabase } = await import('../server/db/sequelize');
   const { Organisation } = await import('../server/db/models/organisation');
@@ -187,7 +187,8 @@ async function main() {
   const { findUserById } = await import('../server/modules/users/repository');
 
   process.env.PW_QUIET = '1';
-  const admin = await ensureCluster();
+  // a cluster the bench had to start is stopped when it is done, as npm test does (PW_KEEP_DB=1 keeps it)
+  const admin = await acquireCluster();
   const name = `pw_bench_${process.pid}`;
   await createDatabase(admin, name, { dropFirst: true });
   const url = serverUrl(name);
@@ -370,6 +371,7 @@ async function main() {
     }
     await closeDatabase();
     await dropDatabase(admin, name).catch(() => undefined);
+    releaseCluster();
   }
 }
 
