@@ -10,7 +10,7 @@ import { FACT_NAMES, FACT_SCHEMAS, type FactName, type Facts } from '../../../sh
 import { validateRuleFiles, type RuleFile } from '../../../shared/engine/rule-file';
 import { ruleSets, type RuleRunner } from '../../../shared/engine/rule-sets';
 import { createSelector } from '../../../shared/engine/selector';
-import type { LoadInput, SelectionInput, SupplyInput } from '../../../shared/schemas/load';
+import { ENVIRONMENTS, SCPD_TYPES, type LoadInput, type SelectionInput, type SupplyInput } from '../../../shared/schemas/load';
 import { ENGINE_MIX, motorLoads } from '../../../scripts/bench-data';
 import { ruleFiles, selector } from './selector-setup';
 
@@ -123,26 +123,8 @@ describe('rule sets against a run of every rule', () => {
     reverseRotationHazard: fc.boolean(),
     duty: fc.constantFrom('continuous' as const, 'intermittent' as const),
     inertia: fc.constantFrom('normal' as const, 'high' as const, 'very-high' as const),
-    environment: fc.option(
-      fc.constantFrom(
-        'indoor-dry',
-        'indoor-dusty',
-        'outdoor',
-        'washdown',
-        'corrosive',
-        'class1-div1',
-        'class1-div2',
-        'class2-div1',
-        'class2-div2',
-      ) as fc.Arbitrary<NonNullable<LoadInput['environment']>>,
-      { nil: undefined },
-    ),
-    scpdType: fc.constantFrom(
-      'inverse-time-breaker' as const,
-      'instantaneous-trip-breaker' as const,
-      'dual-element-fuse' as const,
-      'non-time-delay-fuse' as const,
-    ),
+    environment: fc.option(fc.constantFrom(...ENVIRONMENTS), { nil: undefined }),
+    scpdType: fc.constantFrom(...SCPD_TYPES),
     conductor: fc.record({
       material: fc.constantFrom('cu' as const, 'al' as const),
       tempRatingC: fc.constantFrom(60 as const, 75 as const, 90 as const),
