@@ -4,7 +4,7 @@
 // files; Babel strips the types (`.dependency-cruiser.babel.json`) and acorn reads what is left. @swc/core is
 // installed only because dependency-cruiser scans .ts/.tsx files when a TypeScript-capable parser is present.
 // Babel drops `import type` lines, so these rules see the imports that run; type-only imports across a
-// boundary are caught by Biome's noRestrictedImports (biome.json).
+// boundary are caught by Biome's noRestrictedImports (biome.jsonc), type-only cycles by tests/unit/import-cycles.test.ts.
 
 /**
  * Server modules depend one way, down the layers of server/modules/order.json (lowest first): a module

@@ -23,7 +23,7 @@ import type { LoadSelection, SelectionOutput } from '../schemas/selection';
 import { DEFAULT_CODE_EDITION, type CodeEdition } from '../standards/code-edition';
 import { buildFacts } from './facts';
 import { validateRuleFiles, type RuleFile } from './rule-file';
-import { ruleSets } from './rule-sets';
+import { ruleSets, type RuleRunner } from './rule-sets';
 import { panelRollupOf } from './rollup';
 import { assumptions } from './stages/assumptions';
 import { cautions } from './stages/cautions';
@@ -53,6 +53,8 @@ export interface StageProfile {
 export interface SelectorOptions {
   codeEdition?: CodeEdition;
   profile?: StageProfile;
+  /** how the rules are run for each motor; by default only the rule sets its answers can fire (rule-sets.ts) */
+  ruleRunner?: (rules: ReadonlyArray<RuleFile>) => RuleRunner;
 }
 
 export interface Selector {
@@ -100,7 +102,7 @@ export function createSelector(ruleFiles: ReadonlyArray<RuleFileInput>, options:
   const edition = options.codeEdition ?? DEFAULT_CODE_EDITION;
   const rules = validateRuleFiles(ruleFiles);
   const byId = new Map<string, RuleFile>(rules.map((r) => [r.id, r]));
-  const sets = ruleSets(rules);
+  const sets = (options.ruleRunner ?? ruleSets)(rules);
   const sub = (text: string) => text.replace(/\{edition\}/g, edition);
   const profile = options.profile;
   /** runs one stage, timed when a profile is given */

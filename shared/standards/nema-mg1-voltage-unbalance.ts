@@ -10,6 +10,9 @@ import { round2, roundHalfUp } from '../calc/round';
 /** Up to this unbalance, %, the figure asks no derating; above it a drive's input is checked too (common practice). */
 export const UNBALANCE_NO_DERATING_PERCENT = 1;
 
+/** Above this unbalance, %, the figure ends: operation is not recommended and no factor is given. */
+export const UNBALANCE_MAX_PERCENT = 5;
+
 export const UNBALANCE_BASIS = 'NEMA MG 1 14.35, Figure 14-1 (curve values from memory)';
 
 /** Percent voltage unbalance of three measured line-to-line voltages (NEMA MG 1 14.36), two decimals. */
@@ -39,7 +42,7 @@ export interface UnbalanceDerating {
 /** The derating factor for a percent voltage unbalance; null beyond the figure's 5 %. */
 export function unbalanceDerating(percent: number): UnbalanceDerating {
   if (!(percent >= 0)) throw new RangeError('percent unbalance must be 0 or more');
-  if (percent > 5) return { percent, factor: null, basis: UNBALANCE_BASIS };
+  if (percent > UNBALANCE_MAX_PERCENT) return { percent, factor: null, basis: UNBALANCE_BASIS };
   for (let i = 1; i < CURVE.length; i++) {
     const [x1, y1] = CURVE[i]!;
     const [x0, y0] = CURVE[i - 1]!;
@@ -48,11 +51,11 @@ export function unbalanceDerating(percent: number): UnbalanceDerating {
       return { percent, factor: roundHalfUp(f, 3), basis: UNBALANCE_BASIS };
     }
   }
-  return { percent, factor: 0.75, basis: UNBALANCE_BASIS };
+  return { percent, factor: CURVE[CURVE.length - 1]![1], basis: UNBALANCE_BASIS };
 }
 
 /** A motor's unbalance result in words, for the protection card and the submittal. */
 export function unbalanceText(u: { percent: number; deratingFactor: number | null; deratedHp: number | null }): string {
-  if (u.deratingFactor === null) return `${u.percent} %: above 5 %, operation not recommended`;
+  if (u.deratingFactor === null) return `${u.percent} %: above ${UNBALANCE_MAX_PERCENT} %, operation not recommended`;
   return `${u.percent} %: derate to ${u.deratingFactor} × rating${u.deratedHp !== null ? ` = ${u.deratedHp} hp` : ''}`;
 }

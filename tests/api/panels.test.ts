@@ -440,6 +440,37 @@ describe('job changes that the selections depend on', () => {
     ]);
     expect(p.loads.map((l: { version: number }) => l.version)).toEqual([1, 1, 0]);
   });
+
+  it('files each motor and panel change in the history under the panel and its job', async () => {
+    const designer = await signInAs('designer');
+    const { job, panel } = await newPanel(designer);
+    const added = (
+      await send(designer, 'post', `/api/panels/${panel.id}/loads`, { answers: { tag: 'H-1', supply: 'ac3', hp: 5, volts: 460 } }).expect(
+        201,
+      )
+    ).body;
+    await send(designer, 'put', `/api/loads/${added.id}`, {
+      answers: { tag: 'H-1', supply: 'ac3', hp: 7.5, volts: 460 },
+      version: added.version,
+    }).expect(200);
+    const copy = (await send(designer, 'post', `/api/loads/${added.id}/copy`).expect(201)).body;
+    await send(designer, 'delete', `/api/loads/${copy.id}`).expect(204);
+    const twin = (await send(designer, 'post', `/api/panels/${panel.id}/duplicate`).expect(201)).body;
+    const log = (await designer.agent.get(`/api/jobs/${job.id}/activity`).expect(200)).body as Array<{
+      entity: string;
+      action: string;
+      panelId: number | null;
+      summary: string;
+    }>;
+    const onPanel = (id: number) =>
+      log
+        .filter((a) => a.panelId === id)
+        .map((a) => `${a.entity} ${a.action}`)
+        .sort();
+    expect(onPanel(panel.id)).toEqual(['load added', 'load added', 'load changed', 'load removed', 'panel created'].sort());
+    expect(onPanel(twin.id)).toEqual(['panel duplicated']);
+    expect(log.find((a) => a.action === 'changed' && a.entity === 'load')?.summary).toBe('Changed motor H-1: hp');
+  });
 });
 
 describe("the panel page's data", () => {

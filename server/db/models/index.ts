@@ -49,6 +49,8 @@ export function initModels(sequelize: Sequelize) {
     StoredFileRow,
   ] as Array<{ belongsTo: typeof Job.belongsTo }>;
   for (const m of scoped) m.belongsTo.call(m as typeof Job, Organisation, { foreignKey: 'organisationId' });
+  // A model's class imports only the models its foreign keys point to (load -> panel -> job), so the
+  // models import one way; the has-many sides exist here, for queries, and are not declared on the parent.
   Job.hasMany(Panel, { foreignKey: 'jobId', as: 'panels' });
   Panel.belongsTo(Job, { foreignKey: 'jobId', as: 'job' });
   Panel.hasMany(Load, { foreignKey: 'panelId', as: 'loads' });

@@ -5,11 +5,9 @@ import {
   type ForeignKey,
   type InferAttributes,
   type InferCreationAttributes,
-  type NonAttribute,
   type Sequelize,
 } from 'sequelize';
 import type { Organisation } from './organisation';
-import type { Panel } from './panel';
 
 export class Job extends Model<InferAttributes<Job>, InferCreationAttributes<Job>> {
   declare id: CreationOptional<number>;
@@ -31,7 +29,6 @@ export class Job extends Model<InferAttributes<Job>, InferCreationAttributes<Job
   declare version: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
-  declare panels?: NonAttribute<Panel[]>;
 
   static initModel(sequelize: Sequelize) {
     Job.init(

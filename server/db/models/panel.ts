@@ -10,7 +10,6 @@ import {
 } from 'sequelize';
 import type { Organisation } from './organisation';
 import type { Job } from './job';
-import type { Load } from './load';
 import type { PanelState } from '../../../shared/schemas/panel';
 import type { PanelRollup } from '../../../shared/schemas/selection';
 
@@ -35,7 +34,6 @@ export class Panel extends Model<InferAttributes<Panel>, InferCreationAttributes
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
   declare job?: NonAttribute<Job>;
-  declare loads?: NonAttribute<Load[]>;
 
   static initModel(sequelize: Sequelize) {
     Panel.init(

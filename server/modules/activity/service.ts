@@ -29,6 +29,16 @@ export async function recordActivity(actor: CurrentUser, a: ActivityInput, trans
   );
 }
 
+/** An entry in a panel's history: the job and the panel it is filed under are the panel's own. */
+export async function recordPanelActivity(
+  actor: CurrentUser,
+  panel: { id: number; jobId: number },
+  entry: Omit<ActivityInput, 'jobId' | 'panelId'>,
+  transaction?: Transaction,
+) {
+  await recordActivity(actor, { ...entry, jobId: panel.jobId, panelId: panel.id }, transaction);
+}
+
 export async function listActivity(actor: CurrentUser, where: { jobId?: number; entity?: string }, limit = 200) {
   const rows = await activityRows(
     {

@@ -8,7 +8,7 @@ import type { CurrentUser } from '../../../shared/schemas/auth';
 import { BomLineSchema, PANEL_BUCKET, type BomLine, type BomTotals, type CatalogueItem } from '../../../shared/schemas/catalogue';
 import { NotFoundError, ValidationError, zodIssues } from '../../../shared/errors';
 import { computeTotals, unitLabourHours } from '../../../shared/calc/bom';
-import { recordActivity } from '../activity/service';
+import { recordPanelActivity } from '../activity/service';
 import { catalogueFor, labourUnitsFor } from '../catalogue/repository';
 import { openBomChange } from '../panels/service';
 import { designSignature, effectiveSelections, lockedPanel, panelEnclosureType, planBom } from './service';
@@ -101,13 +101,12 @@ export async function addManualLine(actor: CurrentUser, panelId: number, input: 
       requirement: null,
     });
     const row = await repo.appendBomLine(actor.organisationId, panel.id, line, t);
-    await recordActivity(
+    await recordPanelActivity(
       actor,
+      panel,
       {
         entity: 'bom',
         entityId: panel.id,
-        jobId: panel.jobId,
-        panelId: panel.id,
         action: 'line-added',
         summary: `Added ${line.quantity} ${line.unit} "${line.description}" to ${panel.name}`,
         diff: { line },
@@ -129,13 +128,12 @@ export async function deleteLine(actor: CurrentUser, panelId: number, lineId: nu
       ]);
     await openBomChange(actor, panel, t, 'a manual line was removed from the bill of materials');
     await repo.deleteBomLine(row.id, t);
-    await recordActivity(
+    await recordPanelActivity(
       actor,
+      panel,
       {
         entity: 'bom',
         entityId: panel.id,
-        jobId: panel.jobId,
-        panelId: panel.id,
         action: 'line-removed',
         summary: `Removed "${line.description}" from ${panel.name}`,
         diff: { line },

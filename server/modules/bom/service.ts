@@ -9,7 +9,7 @@ import type { CurrentUser } from '../../../shared/schemas/auth';
 import type { BomLine } from '../../../shared/schemas/catalogue';
 import type { LoadSelection, PanelRollup } from '../../../shared/schemas/selection';
 import { buildBom, lineServes, lineShortfalls, swappedLine } from '../../../shared/calc/bom';
-import { recordActivity } from '../activity/service';
+import { recordPanelActivity } from '../activity/service';
 import { catalogueFor, labourUnitsFor } from '../catalogue/repository';
 import { loadsOf } from '../panels/repository';
 import { loadView, openBomChange, requirePanel } from '../panels/service';
@@ -182,13 +182,12 @@ export async function rebuild(actor: CurrentUser, panelRef: Panel & { job: Job }
     });
     if (designSignature(before) !== designSignature(lines))
       await openBomChange(actor, panel, t, 'the bill of materials was rebuilt with other parts');
-    await recordActivity(
+    await recordPanelActivity(
       actor,
+      panel,
       {
         entity: 'bom',
         entityId: panel.id,
-        jobId: panel.jobId,
-        panelId: panel.id,
         action: 'rebuilt',
         summary: `Rebuilt the bill of materials of ${panel.name}${opts.reprice ? " at today's catalogue prices" : ''}${dropped.length ? `; dropped the swap${dropped.length === 1 ? '' : 's'} that no longer fit: ${dropped.join('; ')}` : ''}`,
       },

@@ -8,7 +8,7 @@ import type { CurrentUser } from '../../../shared/schemas/auth';
 import type { BomLine, Requirement } from '../../../shared/schemas/catalogue';
 import { ValidationError } from '../../../shared/errors';
 import { lineServes, lineShortfalls, swappedLine } from '../../../shared/calc/bom';
-import { recordActivity } from '../activity/service';
+import { recordPanelActivity } from '../activity/service';
 import { catalogueFor, labourUnitsFor } from '../catalogue/repository';
 import { openBomChange, requirePanel } from '../panels/service';
 import { buildLines, lockedPanel, ordinalKeys } from './service';
@@ -124,13 +124,12 @@ export async function updateLine(actor: CurrentUser, panelId: number, lineId: nu
       changes.swapCode !== undefined
         ? `Swapped ${before.code ?? 'an unmatched line'} for ${after.code} in ${before.bucket} of ${panel.name}: ${after.swapReason}`
         : `Changed "${after.description}" in ${panel.name}: ${direct.join(', ')}`;
-    await recordActivity(
+    await recordPanelActivity(
       actor,
+      panel,
       {
         entity: 'bom',
         entityId: panel.id,
-        jobId: panel.jobId,
-        panelId: panel.id,
         action: changes.swapCode !== undefined ? 'line-swapped' : 'line-changed',
         summary,
         diff,

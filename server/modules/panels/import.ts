@@ -9,7 +9,7 @@ import { ValidationError, zodIssues } from '../../../shared/errors';
 import '../../../shared/plain-messages';
 import { changePanel, requirePanel } from './service';
 import { addLoads } from './motors';
-import { recordActivity } from '../activity/service';
+import { recordPanelActivity } from '../activity/service';
 import { loadsOf } from './repository';
 import { UnsupportedFile, readSheetRows } from '../../http/sheet-rows';
 import { IMPORT_COLUMNS, type Column } from './import-columns';
@@ -165,13 +165,12 @@ export async function commitImport(actor: CurrentUser, panelId: number, buffer: 
   const answers = preview.rows.map((r) => r.answers!);
   const count = await changePanel(actor, panelId, null, `imported ${answers.length} motors`, async (p, t) => {
     const n = await addLoads(actor, panelId, answers, t, p);
-    await recordActivity(
+    await recordPanelActivity(
       actor,
+      p,
       {
         entity: 'panel',
         entityId: p.id,
-        jobId: p.jobId,
-        panelId: p.id,
         action: 'imported',
         summary: `Imported ${n} motors from ${filename}`,
       },

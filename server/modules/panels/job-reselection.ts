@@ -4,7 +4,7 @@ import type { CurrentUser } from '../../../shared/schemas/auth';
 import type { JobValues } from '../../../shared/schemas/job';
 import { ConflictError } from '../../../shared/errors';
 import * as repo from './repository';
-import { recordActivity } from '../activity/service';
+import { recordPanelActivity } from '../activity/service';
 import { updateJob } from '../jobs/service';
 import { reselectPanel } from './reselection';
 
@@ -17,13 +17,12 @@ export async function reselectJobPanels(actor: CurrentUser, jobId: number, what:
     const reopened = p.status === 'signed_off';
     await repo.bumpPanel(actor.organisationId, p.id, p.version, { status: reopened ? 'draft' : p.status, rollup: p.rollup }, t);
     if (reopened)
-      await recordActivity(
+      await recordPanelActivity(
         actor,
+        p,
         {
           entity: 'panel',
           entityId: p.id,
-          jobId,
-          panelId: p.id,
           action: 'reopened',
           summary: `Opened a new draft after R${p.revisionNumber}: the job's ${what} changed`,
         },

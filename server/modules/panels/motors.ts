@@ -9,7 +9,7 @@ import { checkOverride } from '../../../shared/calc/overrides';
 import { ConflictError, NotFoundError, ValidationError, zodIssues } from '../../../shared/errors';
 import * as repo from './repository';
 import { panelSupply, selectAll, selectOne } from '../selection/service';
-import { recordActivity } from '../activity/service';
+import { recordPanelActivity } from '../activity/service';
 import type { Panel } from '../../db/models/panel';
 import type { Job } from '../../db/models/job';
 import { changePanel, loadView } from './service';
@@ -56,9 +56,10 @@ export async function addLoad(actor: CurrentUser, panelId: number, answers: unkn
       t,
     );
     await refreshRollup(p, t);
-    await recordActivity(
+    await recordPanelActivity(
       actor,
-      { entity: 'load', entityId: l.id, jobId: p.jobId, panelId: p.id, action: 'added', summary: `Added motor ${input.tag} to ${p.name}` },
+      p,
+      { entity: 'load', entityId: l.id, action: 'added', summary: `Added motor ${input.tag} to ${p.name}` },
       t,
     );
     return loadView(l);
@@ -118,13 +119,12 @@ export async function updateLoad(actor: CurrentUser, loadId: number, answers: un
     const count = await repo.updateLoad(l.id, { tag: input.tag, answers: input, selection: selection, version: version + 1 }, t, version);
     if (count === 0) throw new ConflictError(`Someone else changed motor ${l.tag}: reload and apply your change again`);
     await refreshRollup(p, t);
-    await recordActivity(
+    await recordPanelActivity(
       actor,
+      p,
       {
         entity: 'load',
         entityId: l.id,
-        jobId: p.jobId,
-        panelId: p.id,
         action: 'changed',
         summary: `Changed motor ${input.tag}: ${Object.keys(diff).join(', ') || 'no answers'}`,
         diff,
@@ -150,13 +150,12 @@ export async function deleteLoad(actor: CurrentUser, loadId: number) {
   await changePanel(actor, l.panelId, null, `removed ${l.tag}`, async (p, t) => {
     await repo.deleteLoad(l.id, t);
     await refreshRollup(p, t);
-    await recordActivity(
+    await recordPanelActivity(
       actor,
+      p,
       {
         entity: 'load',
         entityId: l.id,
-        jobId: p.jobId,
-        panelId: p.id,
         action: 'removed',
         summary: `Removed motor ${l.tag} from ${p.name}`,
       },
@@ -184,13 +183,12 @@ export async function bulkEdit(
       ['answers', 'selection', 'version', 'updatedAt'],
     );
     await refreshRollup(p, t);
-    await recordActivity(
+    await recordPanelActivity(
       actor,
+      p,
       {
         entity: 'panel',
         entityId: p.id,
-        jobId: p.jobId,
-        panelId: p.id,
         action: 'bulk-edit',
         summary: `Changed ${Object.keys(changes).join(', ')} on ${loads.length} motors`,
         diff: changes,
@@ -223,13 +221,12 @@ export async function setOverrides(actor: CurrentUser, loadId: number, overrides
       return { ...o, was, warnings, by: same ? prev.by : actor.name, at: same ? prev.at : new Date().toISOString() };
     });
     await repo.updateLoad(l.id, { overrides: stored, version: version + 1 }, t);
-    await recordActivity(
+    await recordPanelActivity(
       actor,
+      p,
       {
         entity: 'load',
         entityId: l.id,
-        jobId: p.jobId,
-        panelId: p.id,
         action: 'override',
         summary: `Overrides on ${l.tag}: ${stored.map((o) => `${o.field} = ${o.value}`).join('; ') || 'none'}`,
         diff: { overrides: stored },

@@ -11,7 +11,7 @@ import type { LoadSelection, PanelRollup } from '../../../shared/schemas/selecti
 import { motorFeed } from '../../../shared/calc/other-sources';
 import type { RuleCheckBody } from '../../../shared/schemas/panel';
 import { selectionDifferences } from '../../../shared/calc/selection-diff';
-import { recordActivity } from '../activity/service';
+import { recordPanelActivity } from '../activity/service';
 import * as repo from './repository';
 import { panelSupply, selectAll, selectOne } from '../selection/service';
 import { ValidationError } from '../../../shared/errors';
@@ -116,13 +116,12 @@ export async function reselectUnderCurrentRules(actor: CurrentUser, panelId: num
     const loads = await repo.loadsOf(p.id, t);
     const changed = await differencesOf(panelSupply(p), loads, (p.rollup ?? null) as PanelRollup | null);
     await reselectPanel(p, t);
-    await recordActivity(
+    await recordPanelActivity(
       actor,
+      p,
       {
         entity: 'panel',
         entityId: p.id,
-        jobId: p.jobId,
-        panelId: p.id,
         action: 'reselected',
         summary: changed.length
           ? `Selected ${loads.length} motors again under the current rules: ${changed.map((c) => `${c.tag} (${c.differences.map((d) => inSentence(d.label)).join(', ')})`).join('; ')}`

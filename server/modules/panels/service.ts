@@ -8,7 +8,7 @@ import type { LoadSelection, PanelRollup } from '../../../shared/schemas/selecti
 import { applyOverrides } from '../../../shared/calc/overrides';
 import { ConflictError, ForbiddenError, NotFoundError, ValidationError } from '../../../shared/errors';
 import * as repo from './repository';
-import { recordActivity } from '../activity/service';
+import { recordPanelActivity } from '../activity/service';
 import { getJob, jobView } from '../jobs/service';
 import { shopSettingsOf } from '../settings/service';
 import type { Panel } from '../../db/models/panel';
@@ -153,11 +153,9 @@ export async function createPanel(
     rollup: null,
     submittedAt: null,
   });
-  await recordActivity(actor, {
+  await recordPanelActivity(actor, p, {
     entity: 'panel',
     entityId: p.id,
-    jobId,
-    panelId: p.id,
     action: 'created',
     summary: `Created panel ${p.name}`,
   });
@@ -186,18 +184,7 @@ async function changePanel<T>(
       );
     }
     if (p.status === 'signed_off') {
-      await recordActivity(
-        actor,
-        {
-          entity: 'panel',
-          entityId: p.id,
-          jobId: p.jobId,
-          panelId: p.id,
-          action: 'reopened',
-          summary: `Opened a new draft after R${p.revisionNumber} (${what})`,
-        },
-        t,
-      );
+      await recordReopened(actor, p, what, t);
       p.status = 'draft';
     }
     const out = await fn(p, t);
@@ -212,6 +199,16 @@ async function changePanel<T>(
   });
 }
 
+/** A signed-off panel that changes opens a new draft: the history says after which revision, and why. */
+async function recordReopened(actor: CurrentUser, p: Panel, what: string, t: Transaction) {
+  await recordPanelActivity(
+    actor,
+    p,
+    { entity: 'panel', entityId: p.id, action: 'reopened', summary: `Opened a new draft after R${p.revisionNumber} (${what})` },
+    t,
+  );
+}
+
 /**
  * Opens a change to a panel's bill of materials inside the caller's transaction (the panel row locked):
  * refuses while the panel is in review, as a motor edit does, and turns a signed-off panel into a new
@@ -222,18 +219,7 @@ export async function openBomChange(actor: CurrentUser, p: Panel & { job: Job },
     throw new ConflictError(`Panel ${p.name} is in review: the engineer must return it before its bill of materials can change`);
   }
   if (p.status !== 'signed_off') return;
-  await recordActivity(
-    actor,
-    {
-      entity: 'panel',
-      entityId: p.id,
-      jobId: p.jobId,
-      panelId: p.id,
-      action: 'reopened',
-      summary: `Opened a new draft after R${p.revisionNumber} (${what})`,
-    },
-    t,
-  );
+  await recordReopened(actor, p, what, t);
   const count = await repo.bumpPanel(actor.organisationId, p.id, p.version, { status: 'draft' }, t);
   if (count === 0) throw new ConflictError(`Someone else changed panel ${p.name}: reload and try again`);
   p.status = 'draft';
@@ -250,13 +236,12 @@ export async function updatePanel(actor: CurrentUser, panelId: number, changes: 
       p.terminationsListed75C = (changes.terminationsListed75C ?? null) as boolean | null;
       await reselectPanel(p, t);
     }
-    await recordActivity(
+    await recordPanelActivity(
       actor,
+      p,
       {
         entity: 'panel',
         entityId: p.id,
-        jobId: p.jobId,
-        panelId: p.id,
         action: 'updated',
         summary: `Changed panel ${p.name}: ${Object.keys(changes).join(', ')}`,
         diff: changes,
@@ -300,13 +285,12 @@ export async function duplicatePanel(actor: CurrentUser, panelId: number) {
       })),
       t,
     );
-    await recordActivity(
+    await recordPanelActivity(
       actor,
+      p,
       {
         entity: 'panel',
         entityId: p.id,
-        jobId: src.jobId,
-        panelId: p.id,
         action: 'duplicated',
         summary: `Duplicated panel ${src.name} with ${loads.length} motors`,
       },
@@ -321,11 +305,9 @@ export async function archivePanel(actor: CurrentUser, panelId: number, archived
   const p = await requirePanel(actor, panelId);
   const count = await repo.bumpPanel(actor.organisationId, p.id, version, { archivedAt: archived ? new Date() : null });
   if (count === 0) throw new ConflictError(`Someone else changed panel ${p.name}: reload and try again`);
-  await recordActivity(actor, {
+  await recordPanelActivity(actor, p, {
     entity: 'panel',
     entityId: p.id,
-    jobId: p.jobId,
-    panelId: p.id,
     action: archived ? 'archived' : 'restored',
     summary: `${archived ? 'Archived' : 'Restored'} panel ${p.name}`,
   });
@@ -341,11 +323,9 @@ export async function addComment(actor: CurrentUser, panelId: number, body: stri
   }
   const c = await repo.createComment({ organisationId: actor.organisationId, panelId: p.id, loadId, userId: actor.id, body });
   await repo.touchPanel(p.id);
-  await recordActivity(actor, {
+  await recordPanelActivity(actor, p, {
     entity: 'comment',
     entityId: c.id,
-    jobId: p.jobId,
-    panelId: p.id,
     action: 'commented',
     summary: `Commented on ${p.name}: ${body.slice(0, 80)}`,
   });

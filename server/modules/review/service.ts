@@ -9,7 +9,7 @@ import type { LoadSelection } from '../../../shared/schemas/selection';
 import { ConflictError, ForbiddenError, NotFoundError, ValidationError } from '../../../shared/errors';
 import * as repo from '../panels/repository';
 import { loadView, panelDetail, requirePanel } from '../panels/service';
-import { panelActionsBy, recordActivity } from '../activity/service';
+import { panelActionsBy, recordPanelActivity } from '../activity/service';
 import { shopSettingsOf } from '../settings/service';
 import type { Transaction } from 'sequelize';
 import type { Panel } from '../../db/models/panel';
@@ -40,13 +40,12 @@ export async function submitForReview(actor: CurrentUser, panelId: number, versi
     await repo.bumpPanel(actor.organisationId, p.id, p.version, { status: 'in_review', submittedAt: new Date() }, t);
     if (comment)
       await repo.createComment({ organisationId: actor.organisationId, panelId: p.id, loadId: null, userId: actor.id, body: comment }, t);
-    await recordActivity(
+    await recordPanelActivity(
       actor,
+      p,
       {
         entity: 'panel',
         entityId: p.id,
-        jobId: p.jobId,
-        panelId: p.id,
         action: 'submitted',
         summary: `Submitted ${p.name} for sign-off (${loads.length} motors)`,
       },
@@ -77,13 +76,12 @@ export async function returnPanel(actor: CurrentUser, panelId: number, version: 
       { organisationId: actor.organisationId, panelId: p.id, loadId: null, userId: actor.id, body: `Returned: ${comment}` },
       t,
     );
-    await recordActivity(
+    await recordPanelActivity(
       actor,
+      p,
       {
         entity: 'panel',
         entityId: p.id,
-        jobId: p.jobId,
-        panelId: p.id,
         action: 'returned',
         summary: `Returned ${p.name}: ${comment.slice(0, 120)}`,
       },
@@ -251,26 +249,24 @@ export async function approvePanel(
         { status: 'signed_off', revisionNumber: number, bomGeneratedAt: new Date() },
         t,
       );
-      await recordActivity(
+      await recordPanelActivity(
         actor,
+        p,
         {
           entity: 'panel',
           entityId: p.id,
-          jobId: p.jobId,
-          panelId: p.id,
           action: 'signed-off',
           summary: `Signed off ${p.name} as R${number}${finding ? ` acknowledging: ${finding}` : ''}${comment ? `: ${comment.slice(0, 100)}` : ''}`,
         },
         t,
       );
       if (own.selfReview) {
-        await recordActivity(
+        await recordPanelActivity(
           actor,
+          p,
           {
             entity: 'panel',
             entityId: p.id,
-            jobId: p.jobId,
-            panelId: p.id,
             action: 'self-sign-off',
             summary: `Signed off R${number} of ${p.name} after submitting or changing it (self sign-off allowed by the shop settings)`,
             diff: { own: own.actions },
@@ -282,11 +278,9 @@ export async function approvePanel(
     })
     .catch(async (e: unknown) => {
       if (e instanceof SelfSignOffRefused) {
-        await recordActivity(actor, {
+        await recordPanelActivity(actor, e.panel, {
           entity: 'panel',
           entityId: e.panel.id,
-          jobId: e.panel.jobId,
-          panelId: e.panel.id,
           action: 'sign-off-refused',
           summary: `Sign-off of ${e.panel.name} refused: ${actor.name} submitted or changed it ${sinceText(e.panel)}`,
         });

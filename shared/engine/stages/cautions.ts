@@ -5,7 +5,7 @@
 
 import type { Load, Supply } from '../../schemas/load';
 import type { StarterType, UnbalanceResult } from '../../schemas/selection';
-import { UNBALANCE_NO_DERATING_PERCENT } from '../../standards/nema-mg1-voltage-unbalance';
+import { UNBALANCE_MAX_PERCENT, UNBALANCE_NO_DERATING_PERCENT } from '../../standards/nema-mg1-voltage-unbalance';
 import type { CircuitSizing } from './sizing-conductors';
 import type { ProtectionSizing } from './sizing-protection';
 
@@ -53,7 +53,7 @@ export function cautions(
   if (unbalance) {
     if (unbalance.deratingFactor === null) {
       out.circuit.push(
-        `Voltage unbalance ${unbalance.percent} % at the site: operating a motor above 5 % unbalance is not recommended (NEMA MG 1 14.35); correct the supply first.`,
+        `Voltage unbalance ${unbalance.percent} % at the site: operating a motor above ${UNBALANCE_MAX_PERCENT} % unbalance is not recommended (NEMA MG 1 14.35); correct the supply first.`,
       );
     } else if (unbalance.deratingFactor < 1) {
       out.circuit.push(

@@ -6,6 +6,7 @@
 import { branchConductor, motorLeadConductors } from '../../calc/conductor';
 import { motorDisconnect } from '../../calc/disconnect';
 import { motorVoltageDrop, type VoltageDropResult } from '../../calc/voltage-drop';
+import { DISCONNECT_PERCENT_OF_FLC } from '../../standards/nec-430-110-disconnect';
 import type { AssumedInput, StarterType } from '../../schemas/selection';
 import type { Assumptions } from './assumptions';
 import { emptyReport, round2, step, type StageContext, type StageReport } from './stage';
@@ -135,7 +136,7 @@ export function sizeCircuit(ctx: StageContext, a: Assumptions, starterType: Star
       ruleId: 'sizing.disconnect',
       decision: `disconnect.minAmps = ${disc.minAmps}, minHp = ${disc.minHp}`,
       words: `Disconnect at least ${disc.minAmps} A${disc.minHp ? ` and ${disc.minHp} hp` : ''}`,
-      reason: '115 % of the table FLC, horsepower rated',
+      reason: `${DISCONNECT_PERCENT_OF_FLC} % of the table FLC, horsepower rated`,
       basis: disc.basis,
     });
   return { ...report, conductor: cond, termination60C: at60, assumed, leads, voltageDrop, disconnect: disc };

@@ -7,7 +7,7 @@ import { lockedRotorCurrent } from '../../calc/locked-rotor';
 import { synchronousRpm } from '../../calc/synchronous-speed';
 import type { LoadSelection, StarterType, UnbalanceResult } from '../../schemas/selection';
 import { enclosureType } from '../../standards/nema-250-enclosure-types';
-import { unbalanceDerating } from '../../standards/nema-mg1-voltage-unbalance';
+import { UNBALANCE_MAX_PERCENT, unbalanceDerating } from '../../standards/nema-mg1-voltage-unbalance';
 import { UNDECIDED, type Decisions } from '../decisions';
 import type { Assumptions } from './assumptions';
 import { emptyReport, round2, step, type StageContext, type StageReport } from './stage';
@@ -41,8 +41,10 @@ export function sizeMotor(ctx: StageContext, a: Assumptions, decisions: Decision
     };
     report.trace.push({
       ruleId: 'sizing.voltage-unbalance',
-      decision: u.factor === null ? 'unbalance.deratingFactor = none (above 5 %)' : `unbalance.deratingFactor = ${u.factor}`,
-      words: u.factor === null ? 'No unbalance derating factor (above 5 %)' : `Unbalance derating factor ${u.factor}`,
+      decision:
+        u.factor === null ? `unbalance.deratingFactor = none (above ${UNBALANCE_MAX_PERCENT} %)` : `unbalance.deratingFactor = ${u.factor}`,
+      words:
+        u.factor === null ? `No unbalance derating factor (above ${UNBALANCE_MAX_PERCENT} %)` : `Unbalance derating factor ${u.factor}`,
       reason: `${u.percent} % voltage unbalance at the site`,
       basis: u.basis,
     });
