@@ -35,13 +35,13 @@ const ON_PLATE: ReadonlySet<Category> = new Set<Category>([
  * contactor, fuses in their holder or switch), on the door (pilot devices, cooling), or not a mounted part.
  */
 export const NOT_ON_PLATE: Readonly<Partial<Record<Category, string>>> = {
-  'mechanical-interlock': 'fitted between its contactors',
-  'aux-contact': 'fitted to its contactor',
-  fuse: 'fitted in its holder or switch',
+  'mechanical-interlock': 'fitted between the contactors they interlock',
+  'aux-contact': 'fitted to their contactor',
+  fuse: 'in their holder or switch',
   'pilot-device': 'on the door',
-  cooling: 'on the door or side wall',
-  wire: 'run in the duct',
-  enclosure: 'holds the backplate',
+  cooling: 'on the door or a side wall',
+  wire: 'in the duct',
+  enclosure: 'around the backplate',
 };
 
 /** Tag prefix of a part on the layout, by category (the bucket number goes before it). */
@@ -189,7 +189,8 @@ export function layoutUnits(lines: readonly BomLine[], itemOf: (code: string) =>
       seen.set(p, n);
       return (counts.get(p) ?? 0) > 1 ? `${prefix}${p}${n}` : `${prefix}${p}`;
     };
-    const stripTag = `${prefix}TB`;
+    // the bucket's terminal strip, named as the schematic and the terminal plan name it (TB1, TB2 …)
+    const stripTag = `TB${bucket === PANEL_BUCKET ? 0 : bucketNumber}`;
     let terminalNumber = 0;
     const contactorUnits: LayoutUnit[] = [];
     for (const l of own) {
