@@ -71,6 +71,13 @@ describe('catalogue dimensions', () => {
       clearanceAboveMm: 175,
       clearanceBelowMm: drive.clearanceBelowMm,
     });
+    // a blank cell takes the figure away
+    row[header!.indexOf('clearanceAboveMm')] = '';
+    const cleared = [header!, row].map((r) => r.map(cell).join(',')).join('\r\n');
+    expect((await upload(estimator, 'drive.csv', cleared).expect(200)).body).toEqual({ created: 0, updated: 1, unchanged: 0 });
+    const after = (await estimator.agent.get(`/api/catalogue/items/${drive.id}`).expect(200)).body as Entry;
+    expect(after.clearanceAboveMm).toBeUndefined();
+    expect(after.clearanceBelowMm).toBe(drive.clearanceBelowMm);
   });
 
   it('edits an item’s dimensions like any other field, refusing a negative one or a width without height and depth', async () => {
