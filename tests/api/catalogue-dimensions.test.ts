@@ -3,6 +3,7 @@
 import { describe, expect, it } from 'vitest';
 import { parse } from 'csv-parse/sync';
 import { send, signInAs, type Session } from '../setup/api';
+import { seedCatalogue } from '../unit/bom/fixtures';
 
 const uniq = () => Date.now().toString(36).toUpperCase() + Math.floor(Math.random() * 1e4);
 
@@ -48,7 +49,9 @@ describe('catalogue dimensions', () => {
     const estimator = await signInAs('estimator');
     const items = await allItems(estimator);
     // every seed item but wire carries its outline (catalog/README.md: typical sizes, written from memory)
-    const seed = items.filter((i) => String(i.code).startsWith('PW-') && !String(i.code).startsWith('PW-TEST'));
+    const seedCodes = new Set(seedCatalogue().map((i) => i.code));
+    const seed = items.filter((i) => seedCodes.has(i.code));
+    expect(seed.length).toBe(seedCodes.size);
     expect(seed.filter((i) => i.category !== 'wire' && !(Number(i.outlineWidthMm) > 0)).map((i) => i.code)).toEqual([]);
     const drive = seed.find((i) => i.category === 'vfd')!;
     expect(drive).toMatchObject({ clearanceAboveMm: expect.any(Number), clearanceBelowMm: expect.any(Number) });
@@ -59,6 +62,7 @@ describe('catalogue dimensions', () => {
     const row = rows.find((r) => r[header!.indexOf('code')] === drive.code)!;
     expect(Number(row[header!.indexOf('outlineWidthMm')])).toBe(drive.outlineWidthMm);
     expect(Number(row[header!.indexOf('clearanceBelowMm')])).toBe(drive.clearanceBelowMm);
+    const original = [...row];
     row[header!.indexOf('outlineWidthMm')] = String(Number(drive.outlineWidthMm) + 11);
     row[header!.indexOf('clearanceAboveMm')] = '175';
     const cell = (v: string) => (/[",\r\n]/.test(v) ? `"${v.replace(/"/g, '""')}"` : v);
@@ -78,6 +82,13 @@ describe('catalogue dimensions', () => {
     const after = (await estimator.agent.get(`/api/catalogue/items/${drive.id}`).expect(200)).body as Entry;
     expect(after.clearanceAboveMm).toBeUndefined();
     expect(after.clearanceBelowMm).toBe(drive.clearanceBelowMm);
+    // the seed drive back as it was, for the tests that lay panels out after this one
+    const restore = [header!, original].map((r) => r.map(cell).join(',')).join('\r\n');
+    await upload(estimator, 'drive.csv', restore).expect(200);
+    expect((await estimator.agent.get(`/api/catalogue/items/${drive.id}`).expect(200)).body).toMatchObject({
+      outlineWidthMm: drive.outlineWidthMm,
+      clearanceAboveMm: drive.clearanceAboveMm,
+    });
   });
 
   it('edits an item’s dimensions like any other field, refusing a negative one or a width without height and depth', async () => {
