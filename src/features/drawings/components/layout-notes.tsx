@@ -15,7 +15,9 @@ export function LayoutNotes({ layout }: { layout: DrawingsView['layout'] }) {
       </p>
       {layout.unplaced.length > 0 ? (
         <div role="alert" className="rounded border border-state-review/40 bg-warn-bg px-3 py-2">
-          <p className="font-semibold">⚠ {layout.unplaced.length} parts not placed</p>
+          <p className="font-semibold">
+            ⚠ {layout.unplaced.length} {layout.unplaced.length === 1 ? 'part' : 'parts'} not placed
+          </p>
           <ul className="mt-1 list-disc pl-5">
             {layout.unplaced.map((u) => (
               <li key={`${u.bucket}-${u.tag}`}>
