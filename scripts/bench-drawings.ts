@@ -1,5 +1,5 @@
 // Benchmark: the drawings of a 200-motor job (four panels: every bucket's schematic sheet, the supply sheet,
-// terminal plan, wire list and nameplate), and one bucket's SVG. Figures, not a timed test. Targets:
+// the backplate layout, terminal plan, wire list and nameplate), the layouts alone, and one bucket's SVG. Figures, not a timed test. Targets:
 // the whole job < 1 s, one bucket's SVG < 20 ms.
 //   npm run -s bench:drawings            (PW_DRAWINGS_OUT=dir also writes the demo panel's sheets there)
 import fs from 'node:fs';
@@ -13,6 +13,8 @@ import { loadRuleFiles } from '../server/engine/rule-files';
 import { motorConnectionCard } from '../shared/calc/checks/connection-card';
 import { buildPanelDrawings, terminalRowsFor, toCsv, TERMINAL_COLUMNS, WIRE_COLUMNS, wireRowsFor } from '../shared/drawings/panel-drawings';
 import { bucketSheetSvg, schematicSheets, supplySheetSvg, terminalRefMap } from '../shared/drawings/svg';
+import { backplateLayout } from '../shared/calc/layout/backplate';
+import { layoutSheetSvg } from '../shared/drawings/svg-layout';
 import { BOM_MIX, median, motorLoads, timeRuns } from './bench-data';
 import { DEMO_MOTORS } from '../server/db/seeders/demo-panels';
 
@@ -20,6 +22,8 @@ const MOTORS = 200;
 const PANELS = 4;
 const dir = path.resolve(import.meta.dirname, '../catalog');
 const catalogue = readSeedCatalogue(dir);
+const byCode = new Map(catalogue.map((i) => [i.code, i]));
+const itemOf = (code: string) => byCode.get(code);
 const labourUnits = LabourUnitsFileSchema.parse(JSON.parse(fs.readFileSync(path.join(dir, 'labour-units.json'), 'utf8')));
 
 async function panelsOf(input: SelectionInput, panels: number) {
@@ -64,11 +68,13 @@ function draw(p: Awaited<ReturnType<typeof panelsOf>>[number]) {
     controlVolts: 120,
     buckets: p.buckets,
     bom: p.bom,
+    layout: backplateLayout(p.bom, itemOf),
   });
   const sheets = schematicSheets(d);
   const supply = supplySheetSvg(d, '400 A', '1000 VA');
+  const layout = layoutSheetSvg(d, d.sheets.find((s) => s.kind === 'layout')!);
   const csv = toCsv(TERMINAL_COLUMNS, terminalRowsFor(d)) + toCsv(WIRE_COLUMNS, wireRowsFor(d));
-  return { d, bytes: sheets.reduce((n, s) => n + s.length, 0) + supply.length + csv.length };
+  return { d, bytes: sheets.reduce((n, s) => n + s.length, 0) + supply.length + layout.length + csv.length };
 }
 
 /** The demo panel's motors (less the twin of P-101) and two more starter kinds the sheets must draw. */
@@ -98,6 +104,7 @@ async function main(): Promise<void> {
     const refs = terminalRefMap(d);
     for (const b of d.buckets) fs.writeFileSync(path.join(out, `${b.tag}.svg`), bucketSheetSvg(d, b.tag, refs));
     fs.writeFileSync(path.join(out, 'supply.svg'), supplySheetSvg(d, '400 A breaker', '1500 VA'));
+    fs.writeFileSync(path.join(out, 'layout.svg'), layoutSheetSvg(d, d.sheets.find((s) => s.kind === 'layout')!));
     fs.writeFileSync(path.join(out, 'terminals.csv'), toCsv(TERMINAL_COLUMNS, terminalRowsFor(d)));
     fs.writeFileSync(path.join(out, 'wires.csv'), toCsv(WIRE_COLUMNS, wireRowsFor(d)));
     console.log(`wrote ${d.buckets.length} sheets to ${out}; warnings: ${d.warnings.join(' | ') || 'none'}`);
@@ -117,10 +124,21 @@ async function main(): Promise<void> {
     const one = draw({ ...oneBucket }).d;
     return bucketSheetSvg(one, b0.selection.tag, terminalRefMap(one));
   });
+  // the backplate layouts alone: every panel's parts placed on its enclosure and drawn
+  let parts = 0;
+  const layouts = await timeRuns(20, () => {
+    parts = 0;
+    for (const p of panels) {
+      const d = draw({ ...p, buckets: [] }).d;
+      parts += d.layout?.placedCount ?? 0;
+      layoutSheetSvg(d, d.sheets.find((s) => s.kind === 'layout')!);
+    }
+  });
   const sheets = panels.reduce((n, p) => n + p.buckets.length, 0);
   console.log(
-    `drawings, ${MOTORS}-motor job (${PANELS} panels, ${sheets} schematic sheets + supply, terminal plan and wire list, ${(bytes / 1e6).toFixed(1)} MB): median ${median(job).toFixed(0)} ms (target < 1000 ms)`,
+    `drawings, ${MOTORS}-motor job (${PANELS} panels, ${sheets} schematic sheets + supply, backplate layout, terminal plan and wire list, ${(bytes / 1e6).toFixed(1)} MB): median ${median(job).toFixed(0)} ms (target < 1000 ms)`,
   );
+  console.log(`backplate layouts, ${PANELS} panels (${parts} parts placed and drawn): median ${median(layouts).toFixed(1)} ms`);
   console.log(
     `one bucket's schematic SVG (built from its selection and BOM lines): median ${median(bucket).toFixed(2)} ms (target < 20 ms)`,
   );

@@ -2,7 +2,8 @@
 // Rule: for every need, the smallest adequate ACTIVE catalogue item meeting every required rating;
 // where nothing fits, an unmatched line stating the ratings it needs — never a guess.
 // Pure TypeScript: no Node or DOM imports. The stages live in shared/calc/bom-stages/:
-//   match (the requirement check) → control scheme → bucket parts → panel parts → enclosure → totals; diff.
+//   match (the requirement check) → control scheme → bucket parts → panel parts → enclosure (by the backplate
+//   layout of shared/calc/layout) → totals; diff.
 import type { BomLine, BomTotals, CatalogueItem, LabourUnit } from '../schemas/catalogue';
 import type { LoadSelection, PanelRollup } from '../schemas/selection';
 import { BRANCH_FUSE_CLASS_ORDER, type BranchFuseClass } from '../standards/fuse-classes';
@@ -10,7 +11,7 @@ import { controlWireSize } from '../standards/control-schemes';
 import { ENCLOSURE_DEPTH, WIRE_ALLOWANCE_FT } from '../standards/panel-layout';
 import { addBucketParts } from './bom-stages/bucket-parts';
 import type { BomContext } from './bom-stages/context';
-import { chooseEnclosure, enclosureNeed, type EnclosureNeed } from './bom-stages/enclosure';
+import { chooseEnclosure, depthByKindMm, type EnclosureNeed } from './bom-stages/enclosure';
 import { LineBuilder } from './bom-stages/lines';
 import { indexCatalogue } from './bom-stages/match';
 import { addControlTransformer, addMainParts, addOtherSourceParts, type ControlPower } from './bom-stages/panel-parts';
@@ -19,7 +20,6 @@ import { computeTotals } from './bom-stages/totals';
 export type { Requirement } from '../schemas/catalogue';
 export { describeRequirement } from './bom-stages/describe';
 export { type BomDiff, type DiffEntry, type DiffSide, diffBoms } from './bom-stages/diff';
-export { LAYOUT_ALLOWANCE } from '../standards/panel-layout';
 export { controlPoints, pilotScheme } from './bom-stages/control-scheme';
 export { type LabourTable, swappedLine, unitLabourHours } from './bom-stages/lines';
 export {
@@ -69,7 +69,7 @@ export interface BuildBomResult {
   totals: BomTotals;
   /** control power in the panel (for the transformer and its check) */
   control: ControlPower;
-  /** enclosure sizing inputs */
+  /** what the enclosure was chosen by: the layout's area, the depth, the sections */
   enclosure: EnclosureNeed;
 }
 
@@ -86,7 +86,7 @@ function bomContext(input: BuildBomInput): BomContext {
     wireFtPerConductor: opts.wireFtPerConductor ?? WIRE_ALLOWANCE_FT.perMotorLeadConductor,
     controlWireFtPerBucket: opts.controlWireFtPerBucket ?? WIRE_ALLOWANCE_FT.controlPerBucket,
     controlWire: { category: 'wire', kind: 'control', wireSize: controlWireSize(controlVolts) },
-    tally: { sealedVa: 0, largestInrushVa: 0, footprintMm2: 0, terminalCount: 0, minDepthMm: ENCLOSURE_DEPTH.minMm },
+    tally: { sealedVa: 0, largestInrushVa: 0, minDepthMm: ENCLOSURE_DEPTH.minMm },
   };
 }
 
@@ -101,8 +101,9 @@ export function buildBom(input: BuildBomInput): BuildBomResult {
       ? addMainParts(ctx, input.panel.feeder, input.supply, input.options?.main ?? 'breaker', input.selections.length + sources.length)
       : 0;
   const control = addControlTransformer(ctx, input.supply.volts);
-  const enclosure = enclosureNeed(ctx.tally, mainAmps);
-  if (hasMotors) chooseEnclosure(ctx, enclosure, input.enclosureType);
+  const enclosure: EnclosureNeed = hasMotors
+    ? chooseEnclosure(ctx, mainAmps, input.enclosureType)
+    : { requiredAreaMm2: 0, minDepthMm: depthByKindMm(ctx.tally, mainAmps), sections: 0 };
   const lines = ctx.lines.lines;
   return { lines, totals: computeTotals(lines, input.markupPercent ?? 0, input.labourRatePerHour ?? 0), control, enclosure };
 }

@@ -1,6 +1,8 @@
 // The drawings of one panel as data: its input, the terminal plan and wire list rows, the sheet list, and
 // the views the API and the submittal take from them. Pure TypeScript.
 import type { BomLine } from '../schemas/catalogue';
+import type { BackplateLayout } from '../calc/layout/backplate';
+import type { UnplacedPart } from '../calc/layout/layout-units';
 import type { LoadSelection } from '../schemas/selection';
 import type { ConnectionCard } from '../calc/connections';
 import type { BucketSchematic, FieldPoint } from './schematic-model';
@@ -26,6 +28,8 @@ export interface PanelDrawingInput {
   /** the shop's drawing-number scheme (shop settings, e.g. `{job}-{panel}-{sheet:2}`) and the revision's code
    *  ("R1", or "D" for a draft): the sheets then carry the same numbers as the submittal's pages do */
   numberScheme?: { scheme: string; revisionCode: string };
+  /** the backplate layout of the bill of materials (shared/calc/layout/backplate.ts); absent: not drawn */
+  layout?: BackplateLayout | null;
 }
 
 export interface TerminalRow {
@@ -59,7 +63,7 @@ export interface WireRow {
 export interface SheetRef {
   number: string;
   title: string;
-  kind: 'supply' | 'schematic' | 'terminals' | 'wires' | 'nameplate';
+  kind: 'supply' | 'schematic' | 'layout' | 'terminals' | 'wires' | 'nameplate';
   tag?: string;
 }
 
@@ -77,6 +81,15 @@ export interface PanelDrawings {
   standard: string;
   /** terminal blocks in the bill of materials (sum of quantities) */
   bomTerminalBlocks: number;
+  layout: BackplateLayout | null;
+}
+
+/** What the drawings page shows of the backplate layout beside its sheet. */
+export interface LayoutSummary {
+  enclosure: { code: string; description: string; heightMm: number; widthMm: number; depthMm: number } | null;
+  sections: number;
+  placedCount: number;
+  unplaced: UnplacedPart[];
 }
 
 export const SYMBOL_STANDARD = 'Symbols: IEEE 315 / NEMA ICS 19 (ladder diagram, US practice)';
@@ -92,6 +105,7 @@ export interface DrawingsView {
   bomTerminalBlocks: number;
   terminals: TerminalRow[];
   wires: WireRow[];
+  layout: LayoutSummary | null;
   buckets: Array<{
     tag: string;
     starter: string;
@@ -108,6 +122,8 @@ export interface SubmittalDrawings {
   drawingNumber: string;
   /** SVG sheets in order: supply, then one per bucket */
   sheets: string[];
+  /** the backplate layout sheet (null where the panel has no layout to draw) */
+  layoutSvg?: string | null;
   terminals: TerminalRow[];
   bomTerminalBlocks: number;
   colourPractice: string;

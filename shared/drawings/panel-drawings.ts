@@ -18,6 +18,7 @@ import { bucketControlWires, bucketPowerWires, supplyWires } from './wire-list';
 export {
   type DrawingBucketInput,
   type DrawingsView,
+  type LayoutSummary,
   type PanelDrawingInput,
   type PanelDrawings,
   SHOP_FALLBACK,
@@ -90,9 +91,10 @@ export function buildPanelDrawings(input: PanelDrawingInput): PanelDrawings {
       kind: 'schematic' as const,
       tag: b.tag,
     })),
-    { number: sheetNumber(buckets.length + 2), title: 'Terminal plan', kind: 'terminals' },
-    { number: sheetNumber(buckets.length + 3), title: 'Wire list', kind: 'wires' },
-    { number: sheetNumber(buckets.length + 4), title: 'Panel marking (nameplate)', kind: 'nameplate' },
+    { number: sheetNumber(buckets.length + 2), title: 'Backplate layout', kind: 'layout' },
+    { number: sheetNumber(buckets.length + 3), title: 'Terminal plan', kind: 'terminals' },
+    { number: sheetNumber(buckets.length + 4), title: 'Wire list', kind: 'wires' },
+    { number: sheetNumber(buckets.length + 5), title: 'Panel marking (nameplate)', kind: 'nameplate' },
   ];
   return {
     drawingNumber: number,
@@ -113,5 +115,6 @@ export function buildPanelDrawings(input: PanelDrawingInput): PanelDrawings {
     colourPractice: COLOUR_PRACTICE,
     standard: SYMBOL_STANDARD,
     bomTerminalBlocks,
+    layout: input.layout ?? null,
   };
 }

@@ -209,6 +209,16 @@ export const CatalogueItemBaseSchema = z
     category: CategorySchema,
     unit: UnitSchema.default('ea'),
     ratings: RatingsSchema,
+    /**
+     * outside dimensions as mounted, mm: across the backplate, up it, and off it (for an enclosure, its own
+     * size); absent where not given (wire). The backplate layout places each part by them.
+     */
+    outlineWidthMm: positive.nullish(),
+    outlineHeightMm: positive.nullish(),
+    outlineDepthMm: positive.nullish(),
+    /** free space a drive or soft starter needs above and below it for its cooling air, mm (its instructions give it) */
+    clearanceAboveMm: nonNegative.nullish(),
+    clearanceBelowMm: nonNegative.nullish(),
     /** short-circuit current rating, kA (invented demo values, not listings); null where none applies */
     sccrKa: positive.nullable().default(null),
     /** heat loss per unit at rated load, W */
@@ -239,6 +249,10 @@ export const CatalogueItemSchema = CatalogueItemBaseSchema.superRefine((item, ct
   }
   if (r.voltsMin !== undefined && r.volts !== undefined && r.voltsMin > r.volts) {
     ctx.addIssue({ code: 'custom', path: ['ratings', 'voltsMin'], message: 'voltsMin is above volts' });
+  }
+  const outline = [item.outlineWidthMm, item.outlineHeightMm, item.outlineDepthMm];
+  if (outline.some((v) => v != null) && outline.some((v) => v == null)) {
+    ctx.addIssue({ code: 'custom', path: ['outlineWidthMm'], message: 'give the width, height and depth together, or none of them' });
   }
   if (r.wireMin && r.wireMax && WIRE_SIZES.indexOf(r.wireMin) > WIRE_SIZES.indexOf(r.wireMax)) {
     ctx.addIssue({ code: 'custom', path: ['ratings', 'wireMin'], message: 'wireMin is larger than wireMax' });

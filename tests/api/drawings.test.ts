@@ -3,6 +3,11 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import ExcelJS from 'exceljs';
 import { signInAs, testApp, type DemoRole, type Session } from '../setup/api';
+import { Organisation } from '../../server/db/models/organisation';
+import { Job } from '../../server/db/models/job';
+import { Panel } from '../../server/db/models/panel';
+import { NOT_ON_PLATE } from '../../shared/calc/layout/layout-units';
+import { CATEGORY_IDS, type Category } from '../../shared/schemas/catalogue';
 
 async function demoPanelId(s: Session): Promise<number> {
   const jobs = (await s.agent.get('/api/jobs?q=J-2041').expect(200)).body as Array<{ id: number; number: string }>;
@@ -94,7 +99,8 @@ describe('panel drawings', () => {
     expect(wb.getWorksheet('Terminals')!.rowCount - 1).toBe(blocks);
     const wires = (await engineer.agent.get(`/api/panels/${panelId}/drawings/wires.csv`).expect(200)).text;
     expect(wb.getWorksheet('Wires')!.rowCount).toBe(csvRows(wires).length);
-    expect(d.sheets.length).toBe(8 + 4);
+    // supply, eight schematics, backplate layout, terminal plan, wire list, nameplate
+    expect(d.sheets.length).toBe(1 + 8 + 4);
   });
 
   it('numbers every sheet by the shop’s drawing-number scheme, as the submittal numbers its pages', async () => {
@@ -137,5 +143,59 @@ describe('panel drawings', () => {
     const shop = (await engineer.agent.get('/api/settings').expect(200)).body as { name: string };
     expect(svg).toContain(`class="np-manufacturer">${shop.name}<`);
     expect(svg).not.toContain('[Shop name]');
+  });
+
+  it('draws the backplate layout for every role, in the enclosure of the bill of materials and of the heat check', async () => {
+    const base = `/api/panels/${panelId}/drawings`;
+    for (const role of ['admin', 'designer', 'estimator', 'engineer'] as DemoRole[]) {
+      const s = role === 'engineer' ? engineer : await signInAs(role);
+      const res = await s.agent.get(`${base}/layout.svg`).buffer(true).parse(binary).expect(200);
+      expect(res.headers['content-type']).toMatch(/^image\/svg\+xml/);
+      expect(res.body.toString('utf8')).toContain('Backplate layout');
+    }
+    const svg = (await engineer.agent.get(`${base}/layout.svg`).buffer(true).parse(binary).expect(200)).body.toString('utf8');
+    const bom = (await engineer.agent.get(`/api/panels/${panelId}/bom`).expect(200)).body as {
+      lines: Array<{ category: string; code: string | null; quantity: number }>;
+    };
+    const checks = (await engineer.agent.get(`/api/panels/${panelId}/checks`).expect(200)).body as {
+      heat: { enclosure: { code: string; sections: number } | null };
+    };
+    const view = (await engineer.agent.get(base).expect(200)).body as {
+      layout: { enclosure: { code: string } | null; sections: number; placedCount: number; unplaced: Array<{ tag: string }> };
+    };
+    const enc = bom.lines.find((l) => l.category === 'enclosure' && l.code)!;
+    // one enclosure: the bill of materials' line, the heat check's and the layout's
+    expect(view.layout.enclosure?.code).toBe(enc.code);
+    expect(checks.heat.enclosure?.code).toBe(enc.code);
+    expect(view.layout.sections).toBe(enc.quantity);
+    expect(checks.heat.enclosure?.sections).toBe(enc.quantity);
+    expect(svg).toContain(enc.code!);
+    expect(svg).toMatch(/Scale 1:\d+/);
+    // every mounted part of the bill of materials is drawn on the plate or named as not placed
+    const mounted = new Set(CATEGORY_IDS.filter((c: Category) => !(c in NOT_ON_PLATE)));
+    const parts = bom.lines.filter((l) => mounted.has(l.category as Category)).reduce((n, l) => n + Math.ceil(l.quantity), 0);
+    const drawn = (svg.match(/class="pw-part"/g) ?? []).length;
+    expect(drawn).toBe(view.layout.placedCount);
+    expect(drawn + view.layout.unplaced.length).toBe(parts);
+    expect(drawn).toBeGreaterThan(0);
+  });
+
+  it('answers 404 for another shop’s panel layout', async () => {
+    const stamp = Date.now().toString(36);
+    const org = await Organisation.create({ name: `Larkspur Switchgear ${stamp} (fictional)` });
+    const job = await Job.create({ organisationId: org.id, number: 'J-9', name: 'Not ours', archivedAt: null, createdBy: null });
+    const panel = await Panel.create({
+      organisationId: org.id,
+      jobId: job.id,
+      name: 'Their MCC',
+      revisionNumber: null,
+      archivedAt: null,
+      rollup: null,
+      submittedAt: null,
+    });
+    for (const role of ['admin', 'designer', 'estimator', 'engineer'] as DemoRole[]) {
+      const s = role === 'engineer' ? engineer : await signInAs(role);
+      await s.agent.get(`/api/panels/${panel.id}/drawings/layout.svg`).expect(404);
+    }
   });
 });

@@ -153,6 +153,15 @@ describe('drawings in the browser', () => {
       expect(await sheet.getByText('IEEE 315 / NEMA ICS 19', { exact: false }).count()).toBeGreaterThan(0);
       await screenshot(page, `drawings-${tag}`);
     }
+    // the backplate layout to scale, in the enclosure of the bill of materials
+    await list.getByRole('button', { name: /Backplate layout/ }).click();
+    const layout = page.getByRole('img', { name: /Backplate layout/ });
+    await layout.waitFor();
+    expect(await layout.locator('rect.pw-part').count()).toBeGreaterThan(20);
+    expect(await layout.locator('rect.pw-duct').count()).toBeGreaterThan(2);
+    expect(await layout.getByText(/^Scale 1:\d+/).count()).toBe(1);
+    await page.getByText(/parts laid out in PW-EN-/).waitFor();
+    await screenshot(page, 'drawings-layout');
     await list.getByRole('button', { name: /Terminal plan/ }).click();
     await page.getByText(/terminals, the \d+ terminal blocks of the bill of materials/).waitFor();
     await list.getByRole('button', { name: /Panel marking/ }).click();

@@ -89,25 +89,26 @@ describe('estimator in the browser', () => {
     const table = page.getByRole('table', { name: 'Bill of materials' });
     await table.waitFor();
 
-    // the panel's enclosure: larger enclosures of its NEMA type fit, smaller ones and other types do not
+    // the panel's enclosure: the backplate layout chose it, and a swap must keep the type, the depth and the plate
+    // area the layout's fullest section takes; only enclosures meeting all three are offered
     const bom = (await (await page.request.get(`${baseUrl()}/api/panels/${panelId}/bom`)).json()) as {
       lines: Array<{
         id: number;
         bucket: string;
         category: string;
         code: string | null;
-        requirement: Array<{ nemaType: string; minUsableAreaMm2: number; minDepthMm: number }>;
+        requirement: Array<{
+          nemaType: string;
+          minUsableAreaMm2: number;
+          minDepthMm: number;
+          minAmps: number;
+          poles: number;
+          volts: number;
+        }>;
       }>;
     };
     const enc = bom.lines.find((l) => l.category === 'enclosure' && l.code)!;
     const need = enc.requirement[0]!;
-    await table.getByRole('row').filter({ hasText: enc.code! }).getByRole('button', { name: 'Swap' }).click();
-    const form = page.getByRole('form', { name: 'Swap a part' });
-    await form.getByTestId('swap-needs').getByText(`NEMA Type ${need.nemaType}`).waitFor();
-    const select = form.getByLabel(/^Part \(\d+ that meets? it/);
-    await select.waitFor();
-    const offered = (await select.locator('option').allTextContents()).filter((t) => t !== 'Choose…').map((t) => t.split(' — ')[0]!);
-    expect(offered.length).toBeGreaterThan(0);
     const all = (await (await page.request.get(`${baseUrl()}/api/catalogue/items?category=enclosure`)).json()) as Array<{
       code: string;
       active: boolean;
@@ -119,14 +120,51 @@ describe('estimator in the browser', () => {
       i.ratings.nemaType === need.nemaType &&
       i.ratings.depthMm >= need.minDepthMm &&
       (i.ratings.heightMm - 150) * (i.ratings.widthMm - 100) >= need.minUsableAreaMm2;
+    const others = all
+      .filter((i) => fits(i) && i.code !== enc.code)
+      .map((i) => i.code)
+      .sort();
+    // the catalogue does hold enclosures that would not do (so a list is a choice, not the whole category)
+    expect(all.filter((i) => i.active && !fits(i)).length).toBeGreaterThan(0);
+    await table.getByRole('row').filter({ hasText: enc.code! }).getByRole('button', { name: 'Swap' }).click();
+    const form = page.getByRole('form', { name: 'Swap a part' });
+    await form.getByTestId('swap-needs').getByText(`NEMA Type ${need.nemaType}`).waitFor();
+    if (others.length === 0) await form.getByTestId('swap-none').waitFor();
+    else {
+      const offered = (
+        await form
+          .getByLabel(/^Part \(\d+ that meets? it/)
+          .locator('option')
+          .allTextContents()
+      )
+        .filter((t) => t !== 'Choose…')
+        .map((t) => t.split(' — ')[0]!);
+      expect(offered.sort()).toEqual(others);
+    }
+    await form.getByRole('button', { name: 'Cancel' }).click();
+
+    // the distribution block: larger blocks of its poles and voltage are offered, smaller ones and others not
+    const pdb = bom.lines.find((l) => l.category === 'power-distribution-block' && l.code)!;
+    const pdbNeed = pdb.requirement[0]!;
+    const blocks = (await (await page.request.get(`${baseUrl()}/api/catalogue/items?category=power-distribution-block`)).json()) as Array<{
+      code: string;
+      active: boolean;
+      ratings: { amps: number; poles: number; volts: number };
+    }>;
+    const holds = (i: (typeof blocks)[number]) =>
+      i.active && i.ratings.amps >= pdbNeed.minAmps && i.ratings.poles === pdbNeed.poles && i.ratings.volts >= pdbNeed.volts;
+    await table.getByRole('row').filter({ hasText: pdb.code! }).getByRole('button', { name: 'Swap' }).click();
+    const select = form.getByLabel(/^Part \(\d+ that meets? it/);
+    await select.waitFor();
+    const offered = (await select.locator('option').allTextContents()).filter((t) => t !== 'Choose…').map((t) => t.split(' — ')[0]!);
+    expect(offered.length).toBeGreaterThan(0);
     expect(offered.sort()).toEqual(
-      all
-        .filter((i) => fits(i) && i.code !== enc.code)
+      blocks
+        .filter((i) => holds(i) && i.code !== pdb.code)
         .map((i) => i.code)
         .sort(),
     );
-    // and the catalogue does hold enclosures that would not do (so the list is a choice, not the whole category)
-    expect(all.filter((i) => i.active && !fits(i)).length).toBeGreaterThan(0);
+    expect(blocks.filter((i) => i.active && !holds(i)).length).toBeGreaterThan(0);
     await screenshot(page, 'bom-swap-fitting');
     await form.getByRole('button', { name: 'Cancel' }).click();
 

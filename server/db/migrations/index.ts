@@ -8,6 +8,7 @@ import * as m0006 from './0006-voltage-unbalance';
 import * as m0007 from './0007-combination-ratings';
 import * as m0008 from './0008-shop-settings';
 import * as m0009 from './0009-panel-terminations-75c';
+import * as m0010 from './0010-catalogue-dimensions';
 
 export const migrations = [
   ['0001-foundation', m0001],
@@ -19,4 +20,5 @@ export const migrations = [
   ['0007-combination-ratings', m0007],
   ['0008-shop-settings', m0008],
   ['0009-panel-terminations-75c', m0009],
+  ['0010-catalogue-dimensions', m0010],
 ] as const;

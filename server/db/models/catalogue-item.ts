@@ -17,6 +17,11 @@ export class CatalogueItem extends Model<InferAttributes<CatalogueItem>, InferCr
   declare description: string;
   declare ratings: Record<string, unknown>;
   declare sccrKa: number | null;
+  declare outlineWidthMm: CreationOptional<number | null>;
+  declare outlineHeightMm: CreationOptional<number | null>;
+  declare outlineDepthMm: CreationOptional<number | null>;
+  declare clearanceAboveMm: CreationOptional<number | null>;
+  declare clearanceBelowMm: CreationOptional<number | null>;
   declare heatLossW: CreationOptional<number>;
   declare unitCost: number;
   declare labourHours: CreationOptional<number>;
@@ -37,6 +42,11 @@ export class CatalogueItem extends Model<InferAttributes<CatalogueItem>, InferCr
         description: { type: DataTypes.STRING(300), allowNull: false },
         ratings: { type: DataTypes.JSONB, allowNull: false, defaultValue: {} },
         sccrKa: { type: DataTypes.DOUBLE, allowNull: true },
+        outlineWidthMm: { type: DataTypes.DOUBLE, allowNull: true },
+        outlineHeightMm: { type: DataTypes.DOUBLE, allowNull: true },
+        outlineDepthMm: { type: DataTypes.DOUBLE, allowNull: true },
+        clearanceAboveMm: { type: DataTypes.DOUBLE, allowNull: true },
+        clearanceBelowMm: { type: DataTypes.DOUBLE, allowNull: true },
         heatLossW: { type: DataTypes.DOUBLE, allowNull: false, defaultValue: 0 },
         unitCost: { type: DataTypes.DOUBLE, allowNull: false },
         labourHours: { type: DataTypes.DOUBLE, allowNull: false, defaultValue: 0 },

@@ -5,6 +5,18 @@ import { LabourUnit as LabourRow } from '../../db/models/labour-unit';
 import { CombinationRatingRow } from '../../db/models/combination-rating';
 import type { CatalogueItem, LabourUnit } from '../../../shared/schemas/catalogue';
 
+const OUTLINE_FIELDS = ['outlineWidthMm', 'outlineHeightMm', 'outlineDepthMm', 'clearanceAboveMm', 'clearanceBelowMm'] as const;
+
+/** The dimensions a row holds, each left out where the column is null (as the schema reads an item without them). */
+function outlineOf(r: CatalogueRow): Partial<Record<(typeof OUTLINE_FIELDS)[number], number>> {
+  const out: Partial<Record<(typeof OUTLINE_FIELDS)[number], number>> = {};
+  for (const key of OUTLINE_FIELDS) {
+    const v = r[key];
+    if (v !== null && v !== undefined) out[key] = v;
+  }
+  return out;
+}
+
 export function toItem(r: CatalogueRow): CatalogueItem {
   return {
     code: r.code,
@@ -12,6 +24,7 @@ export function toItem(r: CatalogueRow): CatalogueItem {
     category: r.category as CatalogueItem['category'],
     unit: r.unit as CatalogueItem['unit'],
     ratings: r.ratings as CatalogueItem['ratings'],
+    ...outlineOf(r),
     sccrKa: r.sccrKa,
     heatLossW: r.heatLossW,
     unitCost: r.unitCost,
@@ -30,6 +43,11 @@ export function fromItem(organisationId: number, i: CatalogueItem) {
     category: i.category,
     unit: i.unit,
     ratings: i.ratings as Record<string, unknown>,
+    outlineWidthMm: i.outlineWidthMm ?? null,
+    outlineHeightMm: i.outlineHeightMm ?? null,
+    outlineDepthMm: i.outlineDepthMm ?? null,
+    clearanceAboveMm: i.clearanceAboveMm ?? null,
+    clearanceBelowMm: i.clearanceBelowMm ?? null,
     sccrKa: i.sccrKa,
     heatLossW: i.heatLossW,
     unitCost: i.unitCost,

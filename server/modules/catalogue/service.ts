@@ -66,7 +66,9 @@ function canonical(v: unknown): string {
 /** Fields that differ between two items: { field: [before, after] } (ratings compared as a whole). */
 export function itemDiff(before: CatalogueItem | null, after: CatalogueItem): Record<string, [unknown, unknown]> {
   const out: Record<string, [unknown, unknown]> = {};
-  for (const k of Object.keys(after) as Array<keyof CatalogueItem>) {
+  // every field either side holds: a dimension the new version leaves out is a change too
+  const keys = new Set([...Object.keys(before ?? {}), ...Object.keys(after)]) as Set<keyof CatalogueItem>;
+  for (const k of keys) {
     const a = before ? before[k] : null;
     const b = after[k];
     if (canonical(a ?? null) !== canonical(b ?? null)) out[k] = [a ?? null, b];

@@ -3,7 +3,7 @@
 // none stored the lines its rebuild would store, built in memory: never written here), and the pure
 // calculation of shared/calc/checks. Four or five queries whatever the motor count.
 import type { CurrentUser } from '../../../shared/schemas/auth';
-import type { BomLine } from '../../../shared/schemas/catalogue';
+import type { BomLine, CatalogueItem } from '../../../shared/schemas/catalogue';
 import type { PanelChecks } from '../../../shared/schemas/checks';
 import type { LoadSelection, PanelRollup } from '../../../shared/schemas/selection';
 import type { ShopSettings } from '../../../shared/schemas/settings';
@@ -32,6 +32,8 @@ export interface ChecksContext {
   lines: BomLine[];
   /** each motor's answers, in the panel's order */
   answers: Array<Record<string, unknown>>;
+  /** the organisation's catalogue by code (what the checks and the backplate layout read the parts from) */
+  catalogue: ReadonlyMap<string, CatalogueItem>;
 }
 
 /** The panel's SCCR from a given bill of materials (the one a sign-off has just regenerated). */
@@ -58,6 +60,7 @@ export async function computeChecks(actor: CurrentUser, panelId: number): Promis
   ]);
   const motors = loads.map(loadView);
   const rollup = (panel.rollup ?? null) as PanelRollup | null;
+  const byCode = new Map(catalogue.map((c) => [c.code, c]));
   const checks = calculateChecks({
     panel: { id: panel.id, name: panel.name, mounting: panel.mounting, revisionNumber: panel.revisionNumber, status: panel.status },
     job: {
@@ -76,7 +79,7 @@ export async function computeChecks(actor: CurrentUser, panelId: number): Promis
     motors,
     rollup,
     bom: { ...bom, enclosureType: panelEnclosureType(motors.flatMap((m) => (m.effective ? [m.effective] : []))) },
-    catalogue: new Map(catalogue.map((c) => [c.code, c])),
+    catalogue: byCode,
     combinations,
     shopName: shop.name,
   });
@@ -88,6 +91,7 @@ export async function computeChecks(actor: CurrentUser, panelId: number): Promis
     shop,
     lines: bom.lines,
     answers: motors.map((l) => l.answers as Record<string, unknown>),
+    catalogue: byCode,
   };
 }
 

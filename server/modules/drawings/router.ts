@@ -9,7 +9,7 @@ import {
   wireRowsFor,
   type DrawingsView,
 } from '../../../shared/drawings/panel-drawings';
-import { panelDrawings, panelNameplateSvg, schematicSvg, supplySvg, wiringWorkbook } from './service';
+import { layoutSvg, panelDrawings, panelNameplateSvg, schematicSvg, supplySvg, wiringWorkbook } from './service';
 import type { Response } from 'express';
 
 const ALL = ['admin', 'designer', 'estimator', 'engineer'] as const;
@@ -45,6 +45,14 @@ export const drawingRoutes = [
         bomTerminalBlocks: drawings.bomTerminalBlocks,
         terminals: drawings.terminals,
         wires: drawings.wires,
+        layout: drawings.layout
+          ? {
+              enclosure: drawings.layout.enclosure,
+              sections: drawings.layout.sections,
+              placedCount: drawings.layout.placedCount,
+              unplaced: drawings.layout.unplaced,
+            }
+          : null,
         buckets: drawings.buckets.map((b) => ({
           tag: b.tag,
           starter: b.starter,
@@ -68,6 +76,17 @@ export const drawingRoutes = [
       const c = await panelDrawings(user, params.panelId);
       const svg = query.sheet === 'supply' ? supplySvg(c) : schematicSvg(c, query.tag);
       return sendSvg(res, svg, `${c.drawings.drawingNumber}${query.tag ? `-${query.tag}` : query.sheet ? '-supply' : ''}-schematic.svg`);
+    },
+  }),
+  defineRoute({
+    method: 'get',
+    path: '/api/panels/:panelId/drawings/layout.svg',
+    access: ALL,
+    summary: 'The backplate layout, to scale, as SVG',
+    params: PanelId,
+    handler: async ({ user, params, res }) => {
+      const c = await panelDrawings(user, params.panelId);
+      return sendSvg(res, layoutSvg(c), `${c.drawings.drawingNumber}-layout.svg`);
     },
   }),
   defineRoute({

@@ -17,6 +17,8 @@ import type { PanelChecks } from '../../../shared/schemas/checks';
 import type { SubmittalDrawings } from '../../../shared/drawings/panel-drawings';
 import { computeChecks, type ChecksContext } from '../checks/service';
 import { CONTROL_VOLTS } from '../../../shared/calc/checks/control-power-check';
+import { backplateLayout } from '../../../shared/calc/layout/backplate';
+import { layoutSheetSvg } from '../../../shared/drawings/svg-layout';
 
 export interface DrawingContext {
   drawings: PanelDrawings;
@@ -53,6 +55,8 @@ export function drawingsFrom(ctx: ChecksContext): DrawingContext {
     shopName: ctx.shop.name,
     // the sheets numbered by the shop's scheme, as the submittal's pages are
     numberScheme: { scheme: ctx.shop.drawingNumberScheme, revisionCode },
+    // the parts of the bill of materials on the enclosure its enclosure line names (the heat check's enclosure)
+    layout: backplateLayout(lines, (code) => ctx.catalogue.get(code)),
   });
   const main = lines.find((l) => l.bucket === '(panel)' && (l.category === 'main-breaker' || l.category === 'main-disconnect'));
   const cpt = lines.find((l) => l.category === 'control-transformer');
@@ -74,6 +78,12 @@ export function schematicSvg(c: DrawingContext, tag?: string): string {
     return `<?xml version="1.0" encoding="UTF-8"?>\n${bucketSheetSvg(c.drawings, tag, terminalRefMap(c.drawings))}`;
   }
   return stackSheets([supplySheetSvg(c.drawings, c.mainText, c.cptText), ...schematicSheets(c.drawings)]);
+}
+
+/** The backplate layout sheet, drawn to scale. */
+export function layoutSvg(c: DrawingContext): string {
+  const ref = c.drawings.sheets.find((s) => s.kind === 'layout')!;
+  return `<?xml version="1.0" encoding="UTF-8"?>\n${layoutSheetSvg(c.drawings, ref)}`;
 }
 
 export function supplySvg(c: DrawingContext): string {
@@ -121,11 +131,12 @@ export async function wiringWorkbook(c: DrawingContext): Promise<Buffer> {
   return Buffer.from(await wb.xlsx.writeBuffer());
 }
 
-/** The submittal's drawing pages: supply and schematic sheets, terminal plan, panel marking. */
+/** The submittal's drawing pages: supply and schematic sheets, backplate layout, terminal plan, panel marking. */
 export function submittalDrawings(c: DrawingContext): SubmittalDrawings {
   return {
     drawingNumber: c.drawings.drawingNumber,
     sheets: [supplySheetSvg(c.drawings, c.mainText, c.cptText), ...schematicSheets(c.drawings)],
+    layoutSvg: layoutSheetSvg(c.drawings, c.drawings.sheets.find((s) => s.kind === 'layout')!),
     terminals: c.drawings.terminals,
     bomTerminalBlocks: c.drawings.bomTerminalBlocks,
     colourPractice: c.drawings.colourPractice,

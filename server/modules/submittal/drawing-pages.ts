@@ -1,5 +1,5 @@
-// The submittal's drawing pages: every schematic sheet (the supply sheet first), the terminal plan and the
-// panel marking, drawn into the PDF from the same SVG the Drawings section shows (svg-to-pdfkit), landscape.
+// The submittal's drawing pages: every schematic sheet (the supply sheet first), the backplate layout, the
+// terminal plan and the panel marking, drawn into the PDF from the same SVG the Drawings section shows (svg-to-pdfkit), landscape.
 import SVGtoPDF from 'svg-to-pdfkit';
 import type PDFDocument from 'pdfkit';
 import type { SubmittalDrawings, TerminalRow } from '../../../shared/drawings/panel-drawings';
@@ -31,6 +31,7 @@ export function writeDrawingPages(
     });
   };
   for (const s of d.sheets) svgPage(s);
+  if (d.layoutSvg) svgPage(d.layoutSvg);
 
   // Terminal plan: a table drawn with pdfkit
   doc.addPage({ size: 'LETTER', layout: 'landscape', margin: MARGIN });

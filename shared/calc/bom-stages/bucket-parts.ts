@@ -7,7 +7,7 @@ import { relayOf } from '../overload';
 import { round2 } from '../round';
 import type { BomContext } from './context';
 import { addControlParts, contactorCount, controlPoints } from './control-scheme';
-import { bucketFootprintMm2, bucketMinDepthMm } from './footprint';
+import { bucketMinDepthMm } from './footprint';
 import { hpColumn, parseConductor } from './normalise';
 
 /** What the stages of one bucket share: the selection, its tag, voltage, poles and horsepower requirement. */
@@ -210,8 +210,8 @@ function addProtectiveRelays(ctx: BomContext, k: Bucket): void {
   }
 }
 
-/** Motor-lead and control terminals and wire. Returns the terminals added. */
-function addTerminalsAndWire(ctx: BomContext, k: Bucket): number {
+/** Motor-lead and control terminals and wire. */
+function addTerminalsAndWire(ctx: BomContext, k: Bucket): void {
   const { lines, wireFtPerConductor: wireFt } = ctx;
   const { s, tag } = k;
   const t = s.starter.type;
@@ -243,14 +243,12 @@ function addTerminalsAndWire(ctx: BomContext, k: Bucket): number {
   const points = controlPoints(t);
   lines.add(tag, { category: 'terminal-block', kind: 'feed-through', wireSize: ctx.controlWire.wireSize! }, points);
   lines.add(tag, ctx.controlWire, ctx.controlWireFtPerBucket);
-  return leads + 1 + points;
 }
 
 /** Every part of one motor's bucket, in the order the bill of materials lists them; the panel's tally grows with it. */
 export function addBucketParts(ctx: BomContext, s: LoadSelection): void {
   const k = bucketOf(s);
   const { tally } = ctx;
-  tally.footprintMm2 += bucketFootprintMm2(s);
   tally.minDepthMm = Math.max(tally.minDepthMm, bucketMinDepthMm(s));
   const coilsVa = addContactors(ctx, k);
   const overloadBuiltIn = addElectronicController(ctx, k);
@@ -258,5 +256,5 @@ export function addBucketParts(ctx: BomContext, s: LoadSelection): void {
   addBranchProtection(ctx, k);
   addProtectiveRelays(ctx, k);
   addControlParts(ctx, k.tag, s.starter.type, coilsVa, s.controlScheme);
-  tally.terminalCount += addTerminalsAndWire(ctx, k);
+  addTerminalsAndWire(ctx, k);
 }

@@ -1,5 +1,5 @@
 // What every stage of the bill of materials shares: the line builder, the options in force, and the
-// panel's running tally (control power, back-panel footprint, terminals, depth) the panel stages size from.
+// panel's running tally (control power and the depth the devices need) the panel stages size from.
 import type { Requirement } from '../../schemas/catalogue';
 import type { BranchFuseClass } from '../../standards/fuse-classes';
 import type { LineBuilder } from './lines';
@@ -9,9 +9,6 @@ export interface PanelTally {
   sealedVa: number;
   /** the largest contactor coil inrush, VA */
   largestInrushVa: number;
-  /** back-panel footprint of the devices, mm² */
-  footprintMm2: number;
-  terminalCount: number;
   minDepthMm: number;
 }
 

@@ -1,53 +1,62 @@
-// Stage 5 of the bill of materials, the enclosure: the back-panel area and depth the panel's contents need
-// (shared/standards/panel-layout.ts), and the enclosure chosen for them. The choice is in one function,
-// `chooseEnclosure`, so a layout drawn on the backplate can take its place.
-import { PANEL_BUCKET, type Requirement } from '../../schemas/catalogue';
-import {
-  ENCLOSURE_DEPTH,
-  LAYOUT_ALLOWANCE,
-  PANEL_ITEMS_AREA_BY_MAIN_AMPS,
-  stepValue,
-  TERMINAL_AREA_MM2,
-} from '../../standards/panel-layout';
+// Stage 5 of the bill of materials, the enclosure: chosen by laying the panel's parts out on its backplate
+// (shared/calc/layout). The choice is made here and nowhere else; the layout drawing and the heat check read
+// the enclosure line it writes, so all three name the same enclosure.
+import { PANEL_BUCKET, type CatalogueItem, type Requirement } from '../../schemas/catalogue';
+import { ENCLOSURE_DEPTH } from '../../standards/panel-layout';
+import { depthNeedMm, holdsAll, plateOf } from '../layout/backplate';
+import { placeUnits, type Placement } from '../layout/layout-place';
+import { layoutUnits } from '../layout/layout-units';
 import type { BomContext, PanelTally } from './context';
 import { describeRequirement } from './describe';
-import { usableAreaMm2 } from './match';
+import { satisfies } from './match';
 import { normaliseEnclosureType } from './normalise';
 
 export interface EnclosureNeed {
+  /** the backplate area the layout takes in its fullest section (plate width × height used), mm² */
   requiredAreaMm2: number;
   minDepthMm: number;
+  /** sections of the chosen enclosure (0 where none was chosen) */
+  sections: number;
 }
 
-/** The back-panel area (devices, panel items and terminals, × the layout allowance) and depth the contents need. */
-export function enclosureNeed(tally: PanelTally, mainAmps: number): EnclosureNeed {
-  const panelItemsArea = stepValue(PANEL_ITEMS_AREA_BY_MAIN_AMPS, mainAmps);
-  const requiredAreaMm2 = Math.round((tally.footprintMm2 + panelItemsArea + tally.terminalCount * TERMINAL_AREA_MM2) * LAYOUT_ALLOWANCE);
-  const minDepthMm =
-    mainAmps > ENCLOSURE_DEPTH.largeMainAboveAmps ? Math.max(tally.minDepthMm, ENCLOSURE_DEPTH.largeMainMm) : tally.minDepthMm;
-  return { requiredAreaMm2, minDepthMm };
+/** The depth the devices' kinds ask (a main above 400 A: 400 mm; common practice), before their catalogue depths. */
+export function depthByKindMm(tally: PanelTally, mainAmps: number): number {
+  return mainAmps > ENCLOSURE_DEPTH.largeMainAboveAmps ? Math.max(tally.minDepthMm, ENCLOSURE_DEPTH.largeMainMm) : tally.minDepthMm;
 }
+
+const areaOf = (p: Placement) => Math.round(p.plate.widthMm * p.usedHeightMm);
 
 /**
- * The enclosure for the need: the smallest of the type with the area and depth; else a lineup of the
- * largest section of the type that has the depth; else an unmatched line stating what it needs.
+ * The enclosure: the smallest of the type, deep enough, whose backplate holds the whole layout; else a
+ * lineup of as many sections of the largest deep-enough enclosure of the type as the layout fills (a part
+ * too large even for it stays off the plate, named on the layout); else an unmatched line stating the need.
  */
-export function chooseEnclosure(ctx: BomContext, need: EnclosureNeed, enclosureType: string): void {
+export function chooseEnclosure(ctx: BomContext, mainAmps: number, enclosureType: string): EnclosureNeed {
   const { lines } = ctx;
+  const byCode = new Map<string, CatalogueItem>();
+  for (const list of lines.index.values()) for (const item of list) byCode.set(item.code, item);
+  const { units } = layoutUnits(lines.lines, (code) => byCode.get(code));
+  const minDepthMm = Math.max(depthByKindMm(ctx.tally, mainAmps), depthNeedMm(units));
   const nemaType = normaliseEnclosureType(enclosureType);
-  const encReq: Requirement = { category: 'enclosure', nemaType, minUsableAreaMm2: need.requiredAreaMm2, minDepthMm: need.minDepthMm };
-  if (lines.find(encReq)) {
-    lines.add(PANEL_BUCKET, encReq, 1);
-    return;
+  const base: Requirement = { category: 'enclosure', nemaType, minDepthMm };
+  const candidates = (lines.index.get('enclosure') ?? []).filter((e) => satisfies(e, base) && plateOf(e));
+  for (const enc of candidates) {
+    const placement = placeUnits(units, plateOf(enc)!, 1);
+    if (!holdsAll(placement)) continue;
+    const requiredAreaMm2 = areaOf(placement);
+    lines.addItem(PANEL_BUCKET, enc, 1, [{ ...base, minUsableAreaMm2: requiredAreaMm2 }]);
+    return { requiredAreaMm2, minDepthMm, sections: 1 };
   }
-  const largest = lines.find({ category: 'enclosure', nemaType, minDepthMm: need.minDepthMm, prefer: 'largest' });
-  if (!largest || usableAreaMm2(largest) <= 0) {
-    lines.unmatched(PANEL_BUCKET, 'enclosure', 1, describeRequirement(encReq));
-    return;
+  const largest = lines.find({ ...base, prefer: 'largest' });
+  const plate = largest ? plateOf(largest) : null;
+  if (!largest || !plate) {
+    lines.unmatched(PANEL_BUCKET, 'enclosure', 1, describeRequirement(base));
+    return { requiredAreaMm2: 0, minDepthMm, sections: 0 };
   }
-  const sections = Math.ceil(need.requiredAreaMm2 / usableAreaMm2(largest));
-  // a swap keeps the section count, so each section must hold its share of the area
-  lines.addItem(PANEL_BUCKET, largest, sections, [
-    { category: 'enclosure', nemaType, minDepthMm: need.minDepthMm, minUsableAreaMm2: Math.ceil(need.requiredAreaMm2 / sections) },
-  ]);
+  const placement = placeUnits(units, plate);
+  const sections = Math.max(1, placement.sections);
+  const requiredAreaMm2 = areaOf(placement);
+  // a swap keeps the section count, so each section must hold the fullest section's share
+  lines.addItem(PANEL_BUCKET, largest, sections, [{ ...base, minUsableAreaMm2: requiredAreaMm2 }]);
+  return { requiredAreaMm2, minDepthMm, sections };
 }

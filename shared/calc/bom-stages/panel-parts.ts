@@ -4,7 +4,7 @@
 import { PANEL_BUCKET, type Requirement } from '../../schemas/catalogue';
 import type { OtherSource, PanelRollup } from '../../schemas/selection';
 import { CONTROL_TRANSFORMER_FUSE_CLASS_ORDER, MAIN_FUSE_CLASS } from '../../standards/fuse-classes';
-import { DC_SUPPLY_AREA_MM2, POWER_TRANSFORMER_AREA, WIRE_ALLOWANCE_FT } from '../../standards/panel-layout';
+import { POWER_TRANSFORMER_DEPTH, WIRE_ALLOWANCE_FT } from '../../standards/panel-layout';
 import { sourceBucket } from '../other-sources';
 import { round2 } from '../round';
 import type { BomContext } from './context';
@@ -42,8 +42,7 @@ export function addOtherSourceParts(ctx: BomContext, src: OtherSource, supply: P
         { category: 'inverse-time-breaker', exactAmps: src.secondaryProtection.ratingAmps, poles, volts: src.secondaryVolts },
         1,
       );
-    tally.footprintMm2 += POWER_TRANSFORMER_AREA.baseMm2 + POWER_TRANSFORMER_AREA.perKvaMm2 * (src.kva ?? 0);
-    tally.minDepthMm = Math.max(tally.minDepthMm, POWER_TRANSFORMER_AREA.minDepthMm);
+    tally.minDepthMm = Math.max(tally.minDepthMm, POWER_TRANSFORMER_DEPTH.minDepthMm);
   } else {
     lines.add(
       bucket,
@@ -51,9 +50,7 @@ export function addOtherSourceParts(ctx: BomContext, src: OtherSource, supply: P
       1,
     );
     lines.add(bucket, { category: 'inverse-time-breaker', exactAmps: src.primaryProtection.ratingAmps, poles, volts: supply.volts }, 1);
-    tally.footprintMm2 += DC_SUPPLY_AREA_MM2;
   }
-  tally.terminalCount += poles * 2 + 1;
 }
 
 /**

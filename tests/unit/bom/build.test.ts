@@ -3,6 +3,9 @@ import { describe, expect, it } from 'vitest';
 import { buildBom, indexCatalogue, selectItem, type BuildBomInput } from '../../../shared/calc/bom';
 import { calculateHeat } from '../../../shared/calc/heat';
 import { linesHeatLossW } from './heat-of-lines';
+import { backplateLayout } from '../../../shared/calc/layout/backplate';
+import { placeUnits } from '../../../shared/calc/layout/layout-place';
+import { layoutUnits } from '../../../shared/calc/layout/layout-units';
 import { BomLineSchema, PANEL_BUCKET, type BomLine } from '../../../shared/schemas/catalogue';
 import type { LoadSelection } from '../../../shared/schemas/selection';
 import { makePanel, makeSelection, seedCatalogue, seedLabourUnits, SUPPLY_480 } from './fixtures';
@@ -19,6 +22,8 @@ function bom(selections: LoadSelection[], over: Partial<BuildBomInput> = {}) {
     ...over,
   });
 }
+const byCode = new Map(seedCatalogue().map((i) => [i.code, i]));
+const itemOf = (code: string) => byCode.get(code);
 const codes = (lines: BomLine[], bucket: string) =>
   lines.filter((l) => l.bucket === bucket).map((l) => `${l.code ?? `UNMATCHED:${l.category}`} x${l.quantity}`);
 
@@ -238,13 +243,21 @@ describe('panel items', () => {
     const fuses = panel.filter((l) => l.category === 'fuse').map((l) => `${l.code} x${l.quantity}`);
     expect(fuses).toEqual(['PW-FU-CC-TD-0A5 x2', 'PW-FU-CC-TD-1A x1']);
   });
-  it('enclosure of the decided type sized by the footprint rule (common practice)', () => {
-    // footprint 2 × (90×250 + 100×150) + panel 0.12 m² + 16 terminals × 960 mm², × 1.6 = 336 576 mm²
-    expect(r.enclosure.requiredAreaMm2).toBe(336576);
-    // 800 × 600 gives (800−150)(600−100) = 325 000 mm² < 336 576 → 1000 × 800 (595 000 mm²)
+  it('enclosure of the decided type chosen by the backplate layout (common practice spacing, shared/standards/panel-layout.ts)', () => {
+    // 1000 × 800 plate 700 × 850 (less 150 / 100 mm), 60 mm duct: rows 85–255 (main, block, CPT, fuse holders,
+    // 1M with its overload 170 mm, 1CB), 365–535 (the rest of both buckets), terminals 645–690; last duct ends at 775
+    expect(r.enclosure.requiredAreaMm2).toBe(700 * 775);
+    // 800 × 600 (plate 500 × 650, 40 mm duct, 370 mm between the side ducts): rows of 165 and 170 mm and the
+    // terminal row, 40 + (25 + 165 + 25 + 40) + (25 + 170 + 25 + 40) + (25 + 45 + 25 + 40) = 690 mm > 650 → next size up
+    const smaller = placeUnits(layoutUnits(r.lines, itemOf).units, { widthMm: 500, heightMm: 650 }, 1);
+    expect(smaller.usedHeightMm).toBe(555); // the two rows of parts fit; the terminal row's 135 mm does not
+    expect(smaller.overflow.map((u) => u.tag)).toHaveLength(16); // both buckets' 8 terminals (3 leads, ground, 4 control)
     expect(panel.find((l) => l.category === 'enclosure')!.code).toBe('PW-EN-12-100X80X30');
+    const layout = backplateLayout(r.lines, itemOf);
+    expect(layout.enclosure?.code).toBe('PW-EN-12-100X80X30');
+    expect(layout.unplaced).toEqual([]);
   });
-  it('a panel too big for one section becomes a lineup of the largest section', () => {
+  it('a panel too big for one section becomes a lineup of the largest section, as many as the layout fills', () => {
     const many = Array.from({ length: 40 }, (_, i) =>
       makeSelection({
         tag: `V-${i}`,
@@ -258,8 +271,12 @@ describe('panel items', () => {
     const big = bom(many, { panel: makePanel({ ocpdMaxAmps: 800, minAmpacity: 700, conductorSize: '500 kcmil' }, 6000) });
     const enc = big.lines.find((l) => l.category === 'enclosure')!;
     expect(enc.code).toBe('PW-EN-12-200X120X60');
-    expect(enc.quantity).toBe(Math.ceil(big.enclosure.requiredAreaMm2 / ((2000 - 150) * (1200 - 100))));
+    const layout = backplateLayout(big.lines, itemOf);
+    // the 156 A drives (300 × 700 mm with 150 mm above and below) take a 1000 mm row each; two buckets a row
+    expect(enc.quantity).toBe(layout.sections);
     expect(enc.quantity).toBeGreaterThan(1);
+    expect(layout.unplaced).toEqual([]);
+    expect(big.enclosure.sections).toBe(enc.quantity);
   });
   it('enclosure type written as people write it ("NEMA 4x") is understood', () => {
     const l = bom([makeSelection()], { enclosureType: 'NEMA 4x' }).lines;

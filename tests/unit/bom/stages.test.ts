@@ -1,9 +1,9 @@
-// The bill of materials' stages on their own: the control scheme and the enclosure need, from the
+// The bill of materials' stages on their own: the control scheme and the enclosure depth, from the
 // common-practice tables of shared/standards (listed in catalog/README.md).
 import { describe, expect, it } from 'vitest';
 import { contactorCount, controlFuseAmps, controlPoints, pilotScheme } from '../../../shared/calc/bom-stages/control-scheme';
-import { enclosureNeed } from '../../../shared/calc/bom-stages/enclosure';
-import { CONTACTOR_AREA_BY_AMPS, stepValue } from '../../../shared/standards/panel-layout';
+import { depthByKindMm } from '../../../shared/calc/bom-stages/enclosure';
+import { ENCLOSURE_DEPTH, stepValue } from '../../../shared/standards/panel-layout';
 
 describe('control scheme (common practice, catalog/README.md)', () => {
   it('door devices per starter type', () => {
@@ -37,18 +37,16 @@ describe('control scheme (common practice, catalog/README.md)', () => {
   });
 });
 
-describe('enclosure need (common practice estimate, catalog/README.md)', () => {
+describe('enclosure depth by the kind of devices (common practice estimate, catalog/README.md)', () => {
   it('a step table takes the first row whose limit the value does not exceed', () => {
-    expect(stepValue(CONTACTOR_AREA_BY_AMPS, 32)).toBe(90 * 250);
-    expect(stepValue(CONTACTOR_AREA_BY_AMPS, 32.01)).toBe(110 * 300);
-    expect(stepValue(CONTACTOR_AREA_BY_AMPS, 5000)).toBe(400 * 800);
+    expect(stepValue(ENCLOSURE_DEPTH.electronicByAmps, 30)).toBe(250);
+    expect(stepValue(ENCLOSURE_DEPTH.electronicByAmps, 30.01)).toBe(300);
+    expect(stepValue(ENCLOSURE_DEPTH.electronicByAmps, 5000)).toBe(400);
   });
-  it('(devices + panel items + 12 × 80 mm per terminal) × 1.6; a main above 400 A wants 400 mm of depth', () => {
-    const tally = { sealedVa: 0, largestInrushVa: 0, footprintMm2: 100_000, terminalCount: 10, minDepthMm: 250 };
-    // (100 000 + 120 000 for a ≤ 100 A main + 10 × 960) × 1.6 = 367 360 mm²
-    expect(enclosureNeed(tally, 100)).toEqual({ requiredAreaMm2: 367_360, minDepthMm: 250 });
-    // > 400 A: 0.45 m² of panel items and at least 400 mm deep
-    expect(enclosureNeed(tally, 800)).toEqual({ requiredAreaMm2: Math.round((100_000 + 450_000 + 9_600) * 1.6), minDepthMm: 400 });
-    expect(enclosureNeed(tally, 0).requiredAreaMm2).toBe(Math.round((100_000 + 9_600) * 1.6));
+  it('a main above 400 A wants 400 mm of depth; else the devices decide', () => {
+    const tally = { sealedVa: 0, largestInrushVa: 0, minDepthMm: 250 };
+    expect(depthByKindMm(tally, 100)).toBe(250);
+    expect(depthByKindMm(tally, 400)).toBe(250);
+    expect(depthByKindMm(tally, 800)).toBe(400);
   });
 });

@@ -8,6 +8,8 @@ import { panelNameplate } from '../../../shared/calc/nameplate';
 import { connectionCard } from '../../../shared/calc/connections';
 import { blowerVfd, conveyorFvr, pumpFvnr, rollup, selection } from './fixtures';
 import { extractPdfText } from './pdf-text';
+import { backplateLayout } from '../../../shared/calc/layout/backplate';
+import { layoutSheetSvg } from '../../../shared/drawings/svg-layout';
 
 function data(): SubmittalData {
   const sccr = calculatePanelSccr({
@@ -312,7 +314,7 @@ describe('PDF submittal: motors at another voltage', () => {
 });
 
 describe('PDF submittal drawing pages', () => {
-  it('adds a page per schematic sheet, the terminal plan and the panel marking', async () => {
+  it('adds a page per schematic sheet, the backplate layout, the terminal plan and the panel marking', async () => {
     const { buildBom } = await import('../../../shared/calc/bom');
     const { buildPanelDrawings } = await import('../../../shared/drawings/panel-drawings');
     const { nameplateSvg, schematicSheets, supplySheetSvg } = await import('../../../shared/drawings/svg');
@@ -328,6 +330,7 @@ describe('PDF submittal drawing pages', () => {
       catalogue: seedCatalogue(),
       labourUnits: seedLabourUnits(),
     });
+    const byCode = new Map(seedCatalogue().map((i) => [i.code, i]));
     const dr = buildPanelDrawings({
       jobNumber: 'J-2041',
       jobName: 'Clarifier upgrade',
@@ -338,6 +341,7 @@ describe('PDF submittal drawing pages', () => {
       controlVolts: 120,
       bom: bom.lines,
       buckets: d0.selections.map((s) => ({ selection: s, card: null, jogging: false })),
+      layout: backplateLayout(bom.lines, (code) => byCode.get(code)),
     });
     const drawings = {
       drawingNumber: dr.drawingNumber,
@@ -346,13 +350,21 @@ describe('PDF submittal drawing pages', () => {
       bomTerminalBlocks: dr.bomTerminalBlocks,
       colourPractice: dr.colourPractice,
       nameplateSvg: nameplateSvg(d0.nameplate, { drawingNumber: dr.drawingNumber, fullLoadWorking: '' }),
+      layoutSvg: layoutSheetSvg(dr, dr.sheets.find((s) => s.kind === 'layout')!),
     };
     const pages = (b: Buffer) => (b.toString('latin1').match(/\/Type \/Page\b/g) ?? []).length;
     const without = await render({ compress: false });
     const withDrawings = await render({ compress: false }, { ...d0, drawings });
     // supply sheet + one per motor, at least one terminal-plan page, the marking page
     expect(pages(withDrawings.buf) - pages(without.buf)).toBeGreaterThanOrEqual(drawings.sheets.length + 2);
+    // the backplate layout is one page of its own
+    const withoutLayout = await render({ compress: false }, { ...d0, drawings: { ...drawings, layoutSvg: null } });
+    expect(pages(withDrawings.buf) - pages(withoutLayout.buf)).toBe(1);
     const text = extractPdfText(withDrawings.buf);
+    const enclosure = bom.lines.find((l) => l.category === 'enclosure')!.code!;
+    // the SVG sheets' text comes out letter by letter: compare without the spaces
+    const squashed = text.replace(/\s+/g, '');
+    for (const s of ['Backplatelayout', enclosure, 'Scale1:']) expect(squashed, s).toContain(s);
     for (const s of [`Terminal plan - ${dr.drawingNumber}`, `Panel marking - ${dr.drawingNumber}`, `${dr.terminals[0]!.ref}`, 'Cautions'])
       expect(text, s).toContain(s);
     expect(dr.terminals.length).toBe(dr.bomTerminalBlocks);

@@ -17,6 +17,15 @@ import { ErrorNote } from '../../../components/ui/feedback';
 import { ApiError } from '../../../lib/api-client';
 
 type FormIn = z.input<typeof CatalogueItemSchema>;
+
+/** The outline and clearances, as the backplate layout reads them (clearances: drives and soft starters). */
+const OUTLINE_FIELDS = [
+  ['outlineWidthMm', 'Width'],
+  ['outlineHeightMm', 'Height'],
+  ['outlineDepthMm', 'Depth'],
+  ['clearanceAboveMm', 'Clearance above'],
+  ['clearanceBelowMm', 'Clearance below'],
+] as const;
 type FormOut = z.output<typeof CatalogueItemSchema>;
 
 const num = (v: unknown) => (v === '' || v === null || v === undefined ? undefined : Number(v));
@@ -129,6 +138,11 @@ export function AddItemForm({
         <Field label="SCCR" unit="kA" error={e.sccrKa?.message} hint="Empty where none applies">
           {(p) => <input {...p} {...register('sccrKa', { setValueAs: numOrNull })} inputMode="decimal" className={inputClass} />}
         </Field>
+        {OUTLINE_FIELDS.map(([key, label]) => (
+          <Field key={key} label={label} unit="mm" error={e[key]?.message} hint="The layout places the part by it">
+            {(p) => <input {...p} {...register(key, { setValueAs: num })} inputMode="decimal" className={inputClass} />}
+          </Field>
+        ))}
         <Field label="Terminations" error={e.terminations?.message}>
           {(p) => <input {...p} {...register('terminations', { setValueAs: num })} inputMode="numeric" className={inputClass} />}
         </Field>

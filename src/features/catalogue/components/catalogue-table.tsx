@@ -19,6 +19,7 @@ import {
   type ItemChanges,
   type Ratings,
 } from '../../../../shared/schemas/catalogue';
+import { OutlineCell } from './outline-cell';
 import { EditableNumber } from './editable-cell';
 import { formatAmount as money } from '../../../../shared/format/money';
 import { ratingValueLabel } from '../../../../shared/labels';
@@ -95,6 +96,12 @@ export function CatalogueTable({
       col.accessor((i) => ratingsSummary(i.ratings), { id: 'ratings', header: 'Ratings', enableSorting: false }),
       col.accessor('sccrKa', { header: 'SCCR (kA)', meta: { numeric: true }, cell: (c) => c.getValue() ?? '—' }),
       col.accessor('heatLossW', { header: 'Heat (W)', meta: { numeric: true } }),
+      col.display({
+        id: 'outline',
+        header: 'Size W × H × D (mm)',
+        meta: { numeric: true },
+        cell: (c) => <OutlineCell item={c.row.original} canEdit={canEdit} onChange={onChange} />,
+      }),
       col.accessor('unitCost', {
         header: 'Unit cost ($)',
         meta: { numeric: true },

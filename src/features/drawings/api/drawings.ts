@@ -27,6 +27,8 @@ export const drawingQueries = {
       queryKey: [...drawingQueries.all(panelId), 'schematic', tag],
       queryFn: () => svgText(`${base(panelId)}/schematic.svg?tag=${encodeURIComponent(tag)}`),
     }),
+  layout: (panelId: number) =>
+    queryOptions({ queryKey: [...drawingQueries.all(panelId), 'layout'], queryFn: () => svgText(`${base(panelId)}/layout.svg`) }),
   nameplate: (panelId: number) =>
     queryOptions({ queryKey: [...drawingQueries.all(panelId), 'nameplate'], queryFn: () => svgText(`${base(panelId)}/nameplate.svg`) }),
 };
@@ -34,6 +36,7 @@ export const drawingQueries = {
 export const drawingUrls = (panelId: number) => ({
   schematic: `${base(panelId)}/schematic.svg`,
   nameplate: `${base(panelId)}/nameplate.svg`,
+  layout: `${base(panelId)}/layout.svg`,
   wires: `${base(panelId)}/wires.csv`,
   terminals: `${base(panelId)}/terminals.csv`,
   wiring: `${base(panelId)}/wiring.xlsx`,

@@ -6,17 +6,20 @@ import { SheetView } from './sheet-view';
 import type { DrawingsView, SheetRef } from '../../../../shared/drawings/panel-drawings';
 import { ErrorNote, Loading } from '../../../components/ui/feedback';
 import { TerminalPlan } from './terminal-plan';
+import { LayoutNotes } from './layout-notes';
 
-function SvgSheet({ panelId, sheet }: { panelId: number; sheet: SheetRef }) {
+function SvgSheet({ panelId, sheet, layout }: { panelId: number; sheet: SheetRef; layout: DrawingsView['layout'] }) {
   const q = useQuery(
     sheet.kind === 'nameplate'
       ? drawingQueries.nameplate(panelId)
-      : sheet.kind === 'supply'
-        ? {
-            ...drawingQueries.schematic(panelId, '(supply)'),
-            queryFn: () => fetch(`${drawingUrls(panelId).schematic}?sheet=supply`, { credentials: 'same-origin' }).then((r) => r.text()),
-          }
-        : drawingQueries.schematic(panelId, sheet.tag ?? ''),
+      : sheet.kind === 'layout'
+        ? drawingQueries.layout(panelId)
+        : sheet.kind === 'supply'
+          ? {
+              ...drawingQueries.schematic(panelId, '(supply)'),
+              queryFn: () => fetch(`${drawingUrls(panelId).schematic}?sheet=supply`, { credentials: 'same-origin' }).then((r) => r.text()),
+            }
+          : drawingQueries.schematic(panelId, sheet.tag ?? ''),
   );
   if (q.isPending) return <Loading what={`Drawing ${sheet.title}`} />;
   if (q.isError) return <ErrorNote error={q.error} />;
@@ -29,6 +32,7 @@ function SvgSheet({ panelId, sheet }: { panelId: number; sheet: SheetRef }) {
           fixed.
         </p>
       ) : null}
+      {sheet.kind === 'layout' ? <LayoutNotes layout={layout} /> : null}
     </div>
   );
 }
@@ -57,6 +61,9 @@ export function Sheets({ panelId, view }: { panelId: number; view: DrawingsView 
           </a>
           <a href={urls.wires} download>
             ⤓ Wires (.csv)
+          </a>
+          <a href={urls.layout} download>
+            ⤓ Backplate layout (.svg)
           </a>
           <a href={urls.nameplate} download>
             ⤓ Nameplate (.svg)
@@ -130,7 +137,7 @@ export function Sheets({ panelId, view }: { panelId: number; view: DrawingsView 
               </div>
             </>
           ) : sheet ? (
-            <SvgSheet key={sheet.number} panelId={panelId} sheet={sheet} />
+            <SvgSheet key={sheet.number} panelId={panelId} sheet={sheet} layout={view.layout} />
           ) : null}
         </div>
       </div>
