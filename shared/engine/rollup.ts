@@ -84,5 +84,6 @@ export function panelRollupOf(
     externalMotors: os.externalMotors,
     otherLoadsAmps: f.otherLoadsAmps,
     ...(shared.drives.length > 0 ? { sharedDrives: shared.drives } : {}),
+    ...(shared.errors.length > 0 ? { sharedDriveErrors: shared.errors } : {}),
   };
 }

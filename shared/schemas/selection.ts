@@ -197,6 +197,8 @@ export interface PanelRollup {
   otherLoadsAmps?: number;
   /** drives that feed several motors (shared/calc/shared-drives); absent or empty: every drive feeds one motor */
   sharedDrives?: SharedDrive[];
+  /** motors that name a shared drive and could not join it, or drives whose motors disagree, in words */
+  sharedDriveErrors?: string[];
 }
 
 /** A motor on a shared drive: its own overload relay, output contactor and conductors. */
