@@ -93,6 +93,14 @@ describe('three conveyor motors on one drive', () => {
     expect(checks.sharedDrives.drives[0].cautions.join(' ')).toMatch(/Starting a motor onto a running drive output/);
     expect(checks.cautions.join(' ')).toMatch(/qualified person/);
 
+    // the schematic draws each motor's output contactor interlocked with the drive
+    const dr = (await engineer.agent.get(`/api/panels/${panel.id}/drawings`).expect(200)).body;
+    const starters = dr.buckets.map((b: { tag: string; starter: string }) => [b.tag, b.starter]);
+    expect(starters).toContainEqual(['CV-2', 'Output contactor on shared drive VFD-1']);
+    expect(starters).toContainEqual(['P-4', 'Full-voltage non-reversing']);
+    const svg = await engineer.agent.get(`/api/panels/${panel.id}/drawings/schematic.svg`).buffer(true).parse(binary).expect(200);
+    expect((svg.body as Buffer).toString('utf8')).toContain('VFD-1');
+
     const pdf = await engineer.agent.get(`/api/panels/${panel.id}/submittal.pdf`).buffer(true).parse(binary).expect(200);
     expect((pdf.body as Buffer).subarray(0, 5).toString('latin1')).toBe('%PDF-');
     expect(job.id).toBeGreaterThan(0);
