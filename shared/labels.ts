@@ -55,6 +55,7 @@ export const ANSWER_LABELS: Record<keyof LoadInput, string> = {
   insideDelta: 'Soft starter inside the delta',
   quickStop: 'Quick stops',
   driveInputAmps: 'Drive input current',
+  sharedDrive: 'Shared drive',
   scpdOverride: 'Protective-device limit override',
 };
 

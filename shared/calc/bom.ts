@@ -15,6 +15,7 @@ import { chooseEnclosure, depthByKindMm, type EnclosureNeed } from './bom-stages
 import { LineBuilder } from './bom-stages/lines';
 import { indexCatalogue } from './bom-stages/match';
 import { addControlTransformer, addMainParts, addOtherSourceParts, type ControlPower } from './bom-stages/panel-parts';
+import { addSharedDriveParts } from './bom-stages/shared-drive-parts';
 import { computeTotals } from './bom-stages/totals';
 
 export type { Requirement } from '../schemas/catalogue';
@@ -92,13 +93,23 @@ function bomContext(input: BuildBomInput): BomContext {
 
 export function buildBom(input: BuildBomInput): BuildBomResult {
   const ctx = bomContext(input);
-  for (const s of input.selections) addBucketParts(ctx, s);
+  // a drive feeding several motors: one bucket for the drive, one per motor for its output contactor and overload
+  const drives = (input.panel.sharedDrives ?? []).filter((d) => d.motors.every((m) => input.selections.some((s) => s.tag === m.tag)));
+  const onDrive = new Set(drives.flatMap((d) => d.motors.map((m) => m.tag)));
+  for (const s of input.selections) if (!onDrive.has(s.tag)) addBucketParts(ctx, s);
+  for (const d of drives) addSharedDriveParts(ctx, d, input.selections);
   const sources = input.panel.otherSources ?? [];
   for (const src of sources) addOtherSourceParts(ctx, src, input.supply);
   const hasMotors = input.selections.length > 0;
   const mainAmps =
     hasMotors && input.panel.feeder.ocpdMaxAmps > 0
-      ? addMainParts(ctx, input.panel.feeder, input.supply, input.options?.main ?? 'breaker', input.selections.length + sources.length)
+      ? addMainParts(
+          ctx,
+          input.panel.feeder,
+          input.supply,
+          input.options?.main ?? 'breaker',
+          input.selections.length + drives.length + sources.length,
+        )
       : 0;
   const control = addControlTransformer(ctx, input.supply.volts);
   const enclosure: EnclosureNeed = hasMotors

@@ -11,6 +11,8 @@ export interface DrawingBucketInput {
   selection: LoadSelection;
   card: ConnectionCard | null;
   jogging: boolean;
+  /** the tag of the shared drive that feeds the motor (absent: its own controller) */
+  sharedDrive?: string;
 }
 
 export interface PanelDrawingInput {

@@ -62,7 +62,14 @@ export function buildPanelDrawings(input: PanelDrawingInput): PanelDrawings {
   let rung = 1;
   input.buckets.forEach((bi, i) => {
     const sch = buildBucketSchematic(
-      { index: i + 1, selection: bi.selection, bom: byBucket.get(bi.selection.tag) ?? [], card: bi.card, jogging: bi.jogging },
+      {
+        index: i + 1,
+        selection: bi.selection,
+        bom: byBucket.get(bi.selection.tag) ?? [],
+        card: bi.card,
+        jogging: bi.jogging,
+        ...(bi.sharedDrive ? { sharedDrive: bi.sharedDrive } : {}),
+      },
       rung,
     );
     rung = Math.ceil((rung + sch.layout.rows) / 10) * 10 + 1;

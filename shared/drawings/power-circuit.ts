@@ -19,6 +19,8 @@ interface PowerKit {
   terms: (marks: string[]) => PowerBand;
   /** the motor lead marks, from the connection card where there is one */
   leadNames: () => string[];
+  /** the shared drive that feeds the motor through its output contactor */
+  sharedDrive?: string;
 }
 
 type PowerPath = Pick<PowerCircuit, 'split' | 'tail' | 'motorLeads'>;
@@ -43,7 +45,8 @@ export function powerCircuit(
   const n = t === 'dc-drive' ? 3 : lines.length;
   const inLines = t === 'dc-drive' ? ['1L1', '1L2', '1L3'] : lines;
   const wires = (k = n) => Array.from({ length: k }, nextWire);
-  const head = protectionBands(input, d, dev, poles, wires);
+  // a motor on a shared drive has no protective device of its own: the drive's input device protects the circuit
+  const head = input.sharedDrive ? [] : protectionBands(input, d, dev, poles, wires);
   if (hasLine(input.bom, 'phase-monitor-relay')) head.push({ kind: 'pmr', device: d('PMR'), label: 'monitors', wires: [] });
   const ol = (name = 'OL'): PowerBand => ({ kind: 'ol', device: d(name), label: `class ${s.overload.tripClass}`, wires: wires() });
   const contactor = (name: string, label: string): PowerBand => ({ kind: 'contactor', device: d(name), label, wires: wires() });
@@ -60,6 +63,7 @@ export function powerCircuit(
     contactor,
     terms,
     leadNames: () => leadNamesOf(input),
+    ...(input.sharedDrive ? { sharedDrive: input.sharedDrive } : {}),
   };
   const path = starterPower(kit);
   const motorLeads = dcMotorCircuit(kit, path);
@@ -235,6 +239,17 @@ function electronicPower(k: PowerKit): PowerPath {
       tail.push(terms(motorLeads));
       return { split, tail, motorLeads };
     case 'VFD':
+      if (k.sharedDrive) {
+        // the shared drive's output, then this motor's output contactor and its own overload relay
+        tail = [
+          { kind: 'vfd', device: k.sharedDrive, label: 'shared drive output U V W', wires: wires(), marks: ['U', 'V', 'W'] },
+          k.contactor('M', 'M'),
+          ...(relay ? [ol()] : []),
+        ];
+        motorLeads = leadNames();
+        tail.push(terms(motorLeads));
+        return { split, tail, motorLeads };
+      }
       tail = [{ kind: 'vfd', device: d('VFD'), label: 'L1 L2 L3 → U V W', wires: wires(), marks: ['U', 'V', 'W'] }];
       if (s.vfd && s.vfd.outputFilter !== 'none')
         tail.push({

@@ -15,6 +15,8 @@ export interface BucketInput {
   bom: readonly BomLine[];
   card: ConnectionCard | null;
   jogging: boolean;
+  /** the tag of the shared drive that feeds the motor through its output contactor (absent: its own controller) */
+  sharedDrive?: string;
 }
 
 /** One phase or pole of the power circuit between two devices. */

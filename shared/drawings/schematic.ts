@@ -9,6 +9,7 @@ import { ladderKit, type LadderKit } from './ladder-kit';
 import { fvnrLadder } from './ladder-contactor';
 import { dcStarterLadder } from './ladder-dc';
 import { controllerLadder } from './ladder-drive';
+import { sharedDriveMemberLadder } from './ladder-shared-drive';
 import { partWindingLadder, partWindingOverloads, wyeDeltaLadder } from './ladder-reduced-voltage';
 import { reversingLadder } from './ladder-reversing';
 import { powerCircuit } from './power-circuit';
@@ -31,6 +32,7 @@ export {
 
 /** the control circuits of the bucket's starter family; returns the starter's name on the drawing */
 function starterLadder(k: LadderKit): string {
+  if (k.input.sharedDrive && k.t === 'VFD') return sharedDriveMemberLadder(k, k.input.sharedDrive);
   switch (k.t) {
     case 'FVNR':
       return fvnrLadder(k);

@@ -4,6 +4,7 @@
 import { feederRollup, type FeederBranch } from '../calc/feeder';
 import { otherSources, sourceNeed } from '../calc/other-sources';
 import { branchProtection, motorKind } from '../calc/scpd';
+import { sharedDrives } from '../calc/shared-drives';
 import type { Load, Supply } from '../schemas/load';
 import type { LoadSelection, SelectionOutput } from '../schemas/selection';
 import type { CodeEdition } from '../standards/code-edition';
@@ -18,6 +19,24 @@ export function panelRollupOf(
   const errors: string[] = [];
   const branches: FeederBranch[] = [];
   const feederFamily = supply.feeder.ocpdType === 'inverse-time-breaker' ? 'breaker' : 'fuse';
+  // a drive feeding several motors is one branch of the feeder: its input current and its input device (430.122, 430.130)
+  const shared = sharedDrives(
+    results.map((r, i) => ({ load: loads[i] as Load, selection: r, onBus: sourceNeed(loads[i] as Load, r, supply).on === 'bus' })),
+    { ambientC: supply.ambientC, terminationsListed75C: supply.terminationsListed75C !== false },
+    edition,
+  );
+  for (const d of shared.drives) {
+    const p = d.input.protection;
+    let deviceAmps = p.ratingAmps;
+    if (p.type === 'instantaneous-trip-breaker') {
+      const motor = motorKind(loads[results.findIndex((r) => r.tag === d.motors[0]?.tag)] as Load);
+      deviceAmps = branchProtection({ flcAmps: d.input.amps, type: supply.feeder.ocpdType, motor }, edition).ratingAmps;
+    }
+    branches.push({ tag: d.tag, flcAmps: d.input.amps, branchDeviceAmps: deviceAmps });
+    notes.push(
+      `${d.tag}: one drive for ${d.motors.map((m) => m.tag).join(', ')}, counted once in the feeder at ${d.input.amps} A with its ${deviceAmps} A input device (430.122, 430.130, 430.24)`,
+    );
+  }
   results.forEach((r, i) => {
     const load = loads[i] as Load;
     if (r.flcAmps <= 0 || r.scpd.ratingAmps <= 0) {
@@ -30,6 +49,7 @@ export function panelRollupOf(
     }
     // a motor at another voltage (or DC) is fed through another source, counted by otherSources below
     if (sourceNeed(load, r, supply).on !== 'bus') return;
+    if (shared.memberTags.has(r.tag)) return;
     let deviceAmps = r.scpd.ratingAmps;
     if (r.scpd.type === 'instantaneous-trip-breaker') {
       // 430.62(A): an instantaneous-trip branch counts at the Table 430.52 % of the feeder device type
@@ -58,10 +78,12 @@ export function panelRollupOf(
     feeder: f.feeder,
     totalFlcAmps: f.totalFlcAmps,
     largestMotorTag: f.largestMotorTag,
-    notes: [...notes, ...os.notes, ...f.notes],
-    errors: [...errors, ...os.errors, ...f.errors],
+    notes: [...notes, ...shared.notes, ...os.notes, ...f.notes],
+    errors: [...errors, ...shared.errors, ...os.errors, ...f.errors],
     otherSources: os.sources,
     externalMotors: os.externalMotors,
     otherLoadsAmps: f.otherLoadsAmps,
+    ...(shared.drives.length > 0 ? { sharedDrives: shared.drives } : {}),
+    ...(shared.errors.length > 0 ? { sharedDriveErrors: shared.errors } : {}),
   };
 }

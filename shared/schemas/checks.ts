@@ -7,6 +7,7 @@ import type { NameplateResult } from '../calc/nameplate';
 import type { ConnectionCard } from '../calc/connections';
 import type { SourcesSummary } from '../calc/other-sources';
 import type { ControlConductorCheck } from '../calc/control-conductors';
+import type { SharedDrive } from './selection';
 
 export interface ExcludedComponent {
   location: string;
@@ -81,10 +82,19 @@ export interface PanelChecks {
   nameplate: NameplateCheck;
   /** motors at another voltage than the supply: the transformers and DC supplies in the panel, and the motors fed from outside it */
   otherSources: SourcesSummary;
+  /** drives feeding several motors: the drive for the sum, each motor's overload, contactor and conductors (absent in checks made before) */
+  sharedDrives?: SharedDriveCheck;
   /** every control conductor against its protecting device (430.72(A), (B), Table 430.72(B)) */
   controlConductors: ControlConductorCheck;
   connectionCards: MotorConnectionCard[];
   cautions: string[];
+}
+
+/** The panel's shared drives with their sums and cautions, a line in words for each, and what kept a motor off its drive. */
+export interface SharedDriveCheck {
+  drives: SharedDrive[];
+  lines: string[];
+  errors: string[];
 }
 
 /** The cautions every check result carries (the checks page, the submittal, the motor list, the change report). */

@@ -117,6 +117,8 @@ const LoadObject = z
       .default('three-wire'),
     /** rated input current of the chosen drive, for its input conductors (430.122(A)) */
     driveInputAmps: positive('driveInputAmps').max(5000).optional(),
+    /** the tag of a drive this motor shares with other motors of the panel (e.g. "VFD-1"); absent: its own drive */
+    sharedDrive: z.string().trim().min(1, 'Give the shared drive a tag, or leave it empty').max(40).optional(),
     /** 430.52(C)(1) Exception 2: a higher protective-device limit, only with a reason */
     scpdOverride: z
       .object({
@@ -151,7 +153,9 @@ function crossCheck(l: LoadShape, ctx: z.RefinementCtx): void {
   if (l.speedControl !== 'variable') {
     if (l.turndown !== undefined) issue('turndown', 'Turndown applies only to variable speed');
     if (l.torque !== undefined) issue('torque', 'Load torque applies only to variable speed');
+    if (l.sharedDrive !== undefined) issue('sharedDrive', 'A shared drive applies only to motors with variable speed');
   }
+  if (l.supply === 'dc' && l.sharedDrive !== undefined) issue('sharedDrive', 'A shared drive applies to AC motors only');
   if (l.leads === 3 && l.connection !== undefined && l.insideDelta) issue('insideDelta', 'Inside-delta needs a six- or twelve-lead motor');
   if (l.rotor === 'wound-rotor' && l.starterPreference !== undefined)
     issue('starterPreference', 'A reduced-voltage method applies to squirrel-cage motors');

@@ -195,6 +195,45 @@ export interface PanelRollup {
   externalMotors?: ExternalMotor[];
   /** the other sources' primary (input) currents counted in the feeder and the 409.110 full-load current, A */
   otherLoadsAmps?: number;
+  /** drives that feed several motors (shared/calc/shared-drives); absent or empty: every drive feeds one motor */
+  sharedDrives?: SharedDrive[];
+  /** motors that name a shared drive and could not join it, or drives whose motors disagree, in words */
+  sharedDriveErrors?: string[];
+}
+
+/** A motor on a shared drive: its own overload relay, output contactor and conductors. */
+export interface SharedDriveMotor {
+  tag: string;
+  /** table full-load current (430.6(A)(1)): conductors and protection */
+  flcAmps: number;
+  /** nameplate FLA (the table FLC where none was given): the drive's output and the overload setting */
+  flaAmps: number;
+  overload: { settingAmps: number; maxSettingAmps: number; maxPercent: number; tripClass: 10 | 20 | 30; basis: string };
+  outputContactor: { minAc3Amps: number; basis: string };
+  conductor: { minAmpacity: number; size: string; ampacity: number; material: 'cu' | 'al'; tempRatingC: 60 | 75 | 90; basis: string };
+}
+
+/** One drive feeding several motors at one voltage, sized for their sum. */
+export interface SharedDrive {
+  tag: string;
+  supply: 'ac3' | 'ac1';
+  volts: number;
+  motors: SharedDriveMotor[];
+  sumFlcAmps: number;
+  sumFlaAmps: number;
+  output: { duty: 'normal' | 'heavy'; minOutputAmps: number; outputFilter: 'none' | 'dv-dt' | 'sine-wave'; basis: string };
+  /** the drive's input branch circuit (430.122(A), 430.130) */
+  input: {
+    /** the drive's rated input current as given on its motors' answers; null when none was given */
+    ratedInputAmps: number | null;
+    /** the current the input circuit and the feeder count: the rated input current, at least the sum of the table FLCs */
+    amps: number;
+    conductor: { minAmpacity: number; size: string; ampacity: number; basis: string };
+    protection: { type: ScpdType; maxPercent: number; computedMaxAmps: number; ratingAmps: number; basis: string };
+  };
+  /** the conductors from the drive's output terminals to the motors' taps */
+  outputConductor: { minAmpacity: number; size: string; ampacity: number; basis: string };
+  cautions: string[];
 }
 
 /** A motor fed from one of the panel's other sources. */

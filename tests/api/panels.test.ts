@@ -678,6 +678,7 @@ describe('the motor list as a workbook', () => {
       turndown: 10,
       torque: 'constant',
       driveInputAmps: 30,
+      sharedDrive: 'VFD-1',
       cableLengthFt: 150,
       environment: 'washdown',
     },

@@ -101,3 +101,28 @@ describe('motor wizard', () => {
     expect(screen.getByRole('textbox', { name: /^Tag/ }).getAttribute('aria-invalid')).toBe('true');
   });
 });
+
+describe('motor wizard: a motor on a shared drive', () => {
+  it('asks for the shared drive only at variable speed and sends its tag with the answers', async () => {
+    let sent: { answers: Record<string, unknown> } | null = null;
+    server.use(
+      http.post(`/api/panels/${PANEL.id}/loads`, async ({ request }) => {
+        sent = (await request.json()) as { answers: Record<string, unknown> };
+        return HttpResponse.json(
+          { id: 502, tag: 'P-101', position: 1, answers: sent.answers, selection: null, effective: null, overrides: [], version: 0 },
+          { status: 201 },
+        );
+      }),
+    );
+    openWizard();
+    await answerTenHorsepower();
+    fireEvent.click(screen.getByRole('button', { name: /2\. Duty/ }));
+    const speed = await screen.findByRole('combobox', { name: /^Speed/ });
+    expect(screen.queryByRole('textbox', { name: /^Shared drive/ })).toBeNull();
+    fireEvent.change(speed, { target: { value: 'variable' } });
+    fireEvent.change(await screen.findByRole('textbox', { name: /^Shared drive/ }), { target: { value: 'VFD-1' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Add motor' }));
+    await waitFor(() => expect(sent).not.toBeNull(), { timeout: 10_000 });
+    expect(sent).toMatchObject({ answers: { tag: 'P-101', speedControl: 'variable', sharedDrive: 'VFD-1' } });
+  });
+});

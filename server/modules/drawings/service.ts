@@ -38,7 +38,15 @@ export function drawingsFrom(ctx: ChecksContext): DrawingContext {
   const answersByTag = new Map(ctx.answers.map((a) => [String(a.tag ?? ''), a]));
   const buckets = checks.connectionCards
     .filter((c) => byTag.has(c.tag))
-    .map((c) => ({ selection: byTag.get(c.tag)!, card: c.card, jogging: answersByTag.get(c.tag)?.jogging === true }));
+    .map((c) => {
+      const drive = ctx.checks.sharedDrives?.drives.find((d) => d.motors.some((m) => m.tag === c.tag));
+      return {
+        selection: byTag.get(c.tag)!,
+        card: c.card,
+        jogging: answersByTag.get(c.tag)?.jogging === true,
+        ...(drive ? { sharedDrive: drive.tag } : {}),
+      };
+    });
   // the revision as the sheets' title block and drawing numbers carry it: R1 when signed off, else a draft (D)
   const revisionCode = ctx.panel.status === 'signed_off' && ctx.panel.revisionNumber !== null ? `R${ctx.panel.revisionNumber}` : 'D';
   const drawings = buildPanelDrawings({

@@ -73,6 +73,7 @@ const COLUMN_TEXT: Record<string, ColumnText> = {
   insideDelta: { note: 'yes/no; soft starter inside the delta', example: 'no' },
   quickStop: { note: 'yes/no; DC quick stops (dynamic braking)', example: 'no' },
   driveInputAmps: { note: "the chosen drive's rated input current, A (430.122(A))", example: '' },
+  sharedDrive: { note: 'tag of a drive shared with other variable-speed motors at the same voltage, e.g. VFD-1', example: '' },
   'conductor.material': { header: 'conductorMaterial', note: 'cu or al (cu by default)', example: 'cu' },
   'conductor.tempRatingC': { header: 'conductorTempC', note: 'insulation rating 60, 75 or 90 (75 by default)', example: 75 },
   'scpdOverride.maxPercent': {

@@ -2,6 +2,8 @@
 // at the top, labels to the right.
 import type { LoadSelection } from '../../../shared/schemas/selection';
 import { oneLineElements, type MotorFeed, type OneLineElement } from '../../../shared/calc/one-line';
+import { sharedDriveOneLine } from '../../../shared/calc/shared-drive-one-line';
+import type { SharedDrive } from '../../../shared/schemas/selection';
 import { COPPER, MARGIN, SLATE, fitLine, pdfSafe, type Doc, type Writer } from './pdf-writer';
 
 const STEP = 36;
@@ -151,12 +153,16 @@ function drawSymbol(doc: Doc, e: OneLineElement, x: number, y: number, bold: str
   doc.restore();
 }
 
-export const oneLineHeight = (s: LoadSelection, feed: MotorFeed = null) => oneLineElements(s, feed).length * STEP + 8;
+const elementsOf = (s: LoadSelection, feed: MotorFeed, drive: SharedDrive | null) =>
+  drive ? sharedDriveOneLine(s, drive) : oneLineElements(s, feed);
+
+export const oneLineHeight = (s: LoadSelection, feed: MotorFeed = null, drive: SharedDrive | null = null) =>
+  elementsOf(s, feed, drive).length * STEP + 8;
 
 /** A bucket's one-line drawn with lines and symbols, supply at the top, labels to the right. */
-export function drawOneLine(w: Writer, s: LoadSelection, feed: MotorFeed): void {
-  const elements = oneLineElements(s, feed);
-  const height = oneLineHeight(s, feed);
+export function drawOneLine(w: Writer, s: LoadSelection, feed: MotorFeed, drive: SharedDrive | null = null): void {
+  const elements = elementsOf(s, feed, drive);
+  const height = oneLineHeight(s, feed, drive);
   w.ensure(height + 24);
   w.sub(s.tag);
   const doc = w.doc;

@@ -2,6 +2,7 @@
 // one-lines (drawn), nameplate and feeder, SCCR worksheet, heat calculation, control power, motor
 // connection cards and the cautions; every page carries the title block (titleBlock) with its
 // drawing number and "Page n of N".
+import { sharedDrivesSection } from './pdf-shared-drives';
 import { createRequire } from 'node:module';
 import fs from 'node:fs';
 import PDFDocument from 'pdfkit';
@@ -76,6 +77,7 @@ export function writeSubmittalPdf(
   oneLineDiagrams(w, data);
   nameplateAndFeeder(w, data);
   otherVoltages(w, data);
+  sharedDrivesSection(w, data);
   sccrWorksheet(w, data);
   heatCalculation(w, data);
   controlPower(w, data);

@@ -11,7 +11,7 @@ import { bucketMinDepthMm } from './footprint';
 import { hpColumn, parseConductor } from './normalise';
 
 /** What the stages of one bucket share: the selection, its tag, voltage, poles and horsepower requirement. */
-interface Bucket {
+export interface Bucket {
   s: LoadSelection;
   tag: string;
   volts: number;
@@ -20,7 +20,7 @@ interface Bucket {
   minHp: { volts: NonNullable<ReturnType<typeof hpColumn>>; hp: number } | undefined;
 }
 
-function bucketOf(s: LoadSelection): Bucket {
+export function bucketOf(s: LoadSelection): Bucket {
   const volts = s.volts;
   const poles = s.supply === 'ac3' ? 3 : s.supply === 'ac1' && volts <= 120 ? 1 : 2;
   const hpVolts = hpColumn(s.tableVolts ?? s.volts);
@@ -39,7 +39,7 @@ function contactorRequirement(s: LoadSelection, controlVolts: number): Requireme
 }
 
 /** Contactors, their auxiliary contacts and (two or more, not part-winding) the mechanical interlock. Returns the coils' sealed VA. */
-function addContactors(ctx: BomContext, k: Bucket): number {
+export function addContactors(ctx: BomContext, k: Bucket): number {
   const { lines, controlVolts, tally } = ctx;
   const { s, tag } = k;
   const count = contactorCount(s.starter.type);
@@ -72,7 +72,7 @@ function addContactors(ctx: BomContext, k: Bucket): number {
 }
 
 /** A soft starter, drive (with its output filter) or DC starter. Returns whether it carries the motor's overload protection. */
-function addElectronicController(ctx: BomContext, k: Bucket): boolean {
+export function addElectronicController(ctx: BomContext, k: Bucket): boolean {
   const { lines } = ctx;
   const { s, tag, volts: v, minHp } = k;
   switch (s.starter.type) {
@@ -116,7 +116,7 @@ function addElectronicController(ctx: BomContext, k: Bucket): boolean {
  * Overload relay(s): dial set at the current the relay carries (the selection's overload.relay: wye-delta
  * FLA/√3 in the delta windings, common practice; part-winding FLA/2 per half-winding, NEC 430.4).
  */
-function addOverloadRelays(ctx: BomContext, k: Bucket): void {
+export function addOverloadRelays(ctx: BomContext, k: Bucket): void {
   const { s, tag } = k;
   const relay = relayOf(s);
   ctx.lines.add(
@@ -162,7 +162,7 @@ function addBranchFuses(ctx: BomContext, k: Bucket): void {
 }
 
 /** Branch short-circuit and ground-fault protection: the breaker, motor-circuit protector or fuses the selection sized. */
-function addBranchProtection(ctx: BomContext, k: Bucket): void {
+export function addBranchProtection(ctx: BomContext, k: Bucket): void {
   const { s, tag, volts: v, poles } = k;
   const rating = s.scpd.ratingAmps;
   if (s.scpd.type === 'inverse-time-breaker') {
@@ -180,7 +180,7 @@ function addBranchProtection(ctx: BomContext, k: Bucket): void {
 }
 
 /** Protective relays: phase loss and reversal (46/47), DC field loss, dynamic braking resistors. */
-function addProtectiveRelays(ctx: BomContext, k: Bucket): void {
+export function addProtectiveRelays(ctx: BomContext, k: Bucket): void {
   const { lines, tally } = ctx;
   const { s, tag, volts: v, minHp } = k;
   const needLoss = s.relays.phaseLoss && !s.relays.phaseLossByOverload;
@@ -211,7 +211,7 @@ function addProtectiveRelays(ctx: BomContext, k: Bucket): void {
 }
 
 /** Motor-lead and control terminals and wire. */
-function addTerminalsAndWire(ctx: BomContext, k: Bucket): void {
+export function addTerminalsAndWire(ctx: BomContext, k: Bucket): void {
   const { lines, wireFtPerConductor: wireFt } = ctx;
   const { s, tag } = k;
   const t = s.starter.type;

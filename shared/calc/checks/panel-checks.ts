@@ -16,6 +16,7 @@ import { controlPowerCheck } from './control-power-check';
 import { heatCheck } from './heat-check';
 import { nameplateCheck } from './nameplate-check';
 import { sccrCheck } from './sccr-check';
+import { sharedDriveCheck } from './shared-drive-check';
 
 /** A motor of the panel: its answers and its effective selection (null before one is made). */
 export interface CheckedMotor {
@@ -98,6 +99,7 @@ export function panelChecks(input: PanelChecksInput): PanelChecks {
     controlConductors: controlConductorChecks(lines, catalogue, selections),
     nameplate: nameplateCheck(rollup, job, sccr.panelSccrKa, enclosureType, input.shopName),
     otherSources: sourcesSummary(rollup),
+    sharedDrives: sharedDriveCheck(rollup),
     connectionCards: input.motors.map((m) => motorConnectionCard(m.id, m.answers, m.effective)),
     cautions: CHECK_CAUTIONS,
   };

@@ -11,6 +11,7 @@ import { inputClass } from '../../../components/ui/field';
 import { ENVIRONMENT_LABELS } from '../../../features/panels/components/answer-labels';
 import { sourcesSummary } from '../../../../shared/calc/other-sources';
 import { ROLE_SETS } from '../../../../shared/schemas/auth';
+import { SharedDriveNote } from '../../../features/panels/components/shared-drive-note';
 
 export function Component() {
   const panelId = Number(useParams().panelId);
@@ -84,6 +85,7 @@ export function Component() {
           </p>
         </div>
       ) : null}
+      <SharedDriveNote rollup={p.rollup} />
       {p.rollup?.errors?.length ? (
         <div className="rounded border border-state-returned/40 bg-bad-bg px-3 py-2 text-sm" role="alert">
           {p.rollup.errors.map((e) => (

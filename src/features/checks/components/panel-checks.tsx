@@ -7,6 +7,7 @@ import { HeatSection } from './heat-section';
 import { NameplateSection } from './nameplate-section';
 import { OtherSourcesSection } from './other-sources-section';
 import { SccrSection } from './sccr-section';
+import { SharedDrivesSection } from './shared-drives-section';
 
 /** The engineer's panel checks: SCCR worksheet, heat load, control power transformer, nameplate and feeder. */
 export function PanelChecks({ panelId }: { panelId: number }) {
@@ -32,6 +33,7 @@ export function PanelChecks({ panelId }: { panelId: number }) {
       <HeatSection heat={c.heat} />
       <ControlPowerSection cp={c.controlPower} />
       <OtherSourcesSection os={c.otherSources} />
+      <SharedDrivesSection sd={c.sharedDrives} />
       {c.controlConductors ? <ControlConductorsSection cc={c.controlConductors} /> : null}
       <NameplateSection np={c.nameplate} />
       <Caution />

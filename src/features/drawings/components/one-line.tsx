@@ -1,5 +1,7 @@
 import type { LoadSelection } from '../../../../shared/schemas/selection';
 import { oneLineElements, type MotorFeed, type OneLineElement } from '../../../../shared/calc/one-line';
+import { sharedDriveOneLine } from '../../../../shared/calc/shared-drive-one-line';
+import type { SharedDrive } from '../../../../shared/schemas/selection';
 
 export { oneLineElements };
 export type { MotorFeed };
@@ -130,12 +132,14 @@ export interface OneLineProps {
   selection: LoadSelection;
   /** what the bucket is fed from (motorFeed of the panel roll-up); null: the feeder bus */
   feed?: MotorFeed;
+  /** the shared drive that feeds the motor (the drive, its output, the motor's contactor and overload) */
+  drive?: SharedDrive | null;
   width?: number;
 }
 
 /** One-line diagram of a bucket as SVG. */
-export function OneLine({ selection, feed = null, width = 420 }: OneLineProps) {
-  const elements = oneLineElements(selection, feed);
+export function OneLine({ selection, feed = null, drive = null, width = 420 }: OneLineProps) {
+  const elements = drive ? sharedDriveOneLine(selection, drive) : oneLineElements(selection, feed);
   const height = elements.length * STEP + 10;
   const titleId = `one-line-${selection.tag}`;
   return (

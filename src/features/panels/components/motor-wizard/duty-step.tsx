@@ -49,6 +49,17 @@ export function DutyStep({ register, errors: e, values }: StepProps) {
               ['constant', 'Constant torque (conveyors, mixers)'],
             ]}
           />
+          <Field
+            label="Shared drive"
+            unit="tag, e.g. VFD-1"
+            hint="Leave empty for a drive of its own; motors naming one tag share one drive sized for their sum"
+            error={e.sharedDrive?.message}
+          >
+            {(a) => <input {...a} {...register('sharedDrive', opt)} className={inputClass} />}
+          </Field>
+          <Field label="Drive rated input current" unit="A, from the chosen drive" error={e.driveInputAmps?.message}>
+            {(a) => <input {...a} {...register('driveInputAmps', optNum)} inputMode="decimal" className={inputClass} />}
+          </Field>
         </>
       ) : null}
       {values.startingLimit === 'reduced-inrush' && supplyKind === 'ac3' ? (

@@ -36,6 +36,8 @@ export const STEP_FIELDS: Record<StepName, string[]> = {
     'speedControl',
     'turndown',
     'torque',
+    'sharedDrive',
+    'driveInputAmps',
     'startingLimit',
     'starterPreference',
     'insideDelta',
