@@ -56,6 +56,8 @@ export const ANSWER_LABELS: Record<keyof LoadInput, string> = {
   quickStop: 'Quick stops',
   driveInputAmps: 'Drive input current',
   scpdOverride: 'Protective-device limit override',
+  branchGroup: 'Branch-circuit group',
+  groupListedMaxAmps: 'Group-installation listing, largest device',
 };
 
 /** Nested answers and the motor-list import's own column names. */

@@ -117,6 +117,11 @@ const LoadObject = z
       .default('three-wire'),
     /** rated input current of the chosen drive, for its input conductors (430.122(A)) */
     driveInputAmps: positive('driveInputAmps').max(5000).optional(),
+    /** several motors on one branch circuit (430.53): the group's tag, shared by its motors (absent: its own branch circuit) */
+    branchGroup: z.string().trim().min(1, 'Give the group a tag, e.g. G-1').max(20).optional(),
+    /** the largest fuse or inverse-time breaker marked on this motor's controller and overload relay where both are
+     *  listed for group installation (430.53(C)(1)(a), (2)(a)); absent: not listed for group installation */
+    groupListedMaxAmps: positive('groupListedMaxAmps').max(6000).optional(),
     /** 430.52(C)(1) Exception 2: a higher protective-device limit, only with a reason */
     scpdOverride: z
       .object({

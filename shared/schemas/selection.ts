@@ -87,6 +87,7 @@ export interface MotorLeadConductors {
 }
 
 import type { VoltageDropResult } from '../calc/voltage-drop';
+import type { GroupCircuit } from './group-circuit';
 
 export interface LoadSelection {
   tag: string;
@@ -195,6 +196,8 @@ export interface PanelRollup {
   externalMotors?: ExternalMotor[];
   /** the other sources' primary (input) currents counted in the feeder and the 409.110 full-load current, A */
   otherLoadsAmps?: number;
+  /** motors on one branch circuit (430.53), by group tag (absent: none grouped) */
+  groups?: GroupCircuit[];
 }
 
 /** A motor fed from one of the panel's other sources. */
