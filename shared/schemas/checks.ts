@@ -7,6 +7,7 @@ import type { NameplateResult } from '../calc/nameplate';
 import type { ConnectionCard } from '../calc/connections';
 import type { SourcesSummary } from '../calc/other-sources';
 import type { ControlConductorCheck } from '../calc/control-conductors';
+import type { GroupCircuit } from './group-circuit';
 
 export interface ExcludedComponent {
   location: string;
@@ -57,6 +58,13 @@ export interface MotorConnectionCard {
   reason: string | null;
 }
 
+/** Motors on one branch circuit (430.53): the groups and the findings on them. */
+export interface GroupCircuitCheck {
+  groups: GroupCircuit[];
+  findings: string[];
+  basis: string;
+}
+
 export interface PanelChecks {
   panel: { id: number; name: string; mounting: string; enclosureType: string; revision: string };
   job: {
@@ -83,6 +91,8 @@ export interface PanelChecks {
   otherSources: SourcesSummary;
   /** every control conductor against its protecting device (430.72(A), (B), Table 430.72(B)) */
   controlConductors: ControlConductorCheck;
+  /** motors on one branch circuit (430.53); absent in answers built before it existed */
+  groupCircuits?: GroupCircuitCheck;
   connectionCards: MotorConnectionCard[];
   cautions: string[];
 }
