@@ -236,6 +236,11 @@ export function groupCircuit(group: string, ms: readonly GroupMember[], opts: Gr
   };
 }
 
+/** The allowed group whose device serves the motor (430.53); null: the motor is on its own branch circuit. */
+export function motorGroup(rollup: { groups?: GroupCircuit[] } | null | undefined, tag: string): GroupCircuit | null {
+  return (rollup?.groups ?? []).find((g) => g.device !== null && g.motors.includes(tag)) ?? null;
+}
+
 /** Every group of the panel's motors (those whose answers name a branch-circuit group). */
 export function groupCircuits(members: readonly GroupMember[], opts: GroupOptions, edition: CodeEdition): GroupCircuit[] {
   return [...membersByGroup(members)].map(([g, ms]) => groupCircuit(g, ms, opts, edition));

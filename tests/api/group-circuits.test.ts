@@ -14,11 +14,12 @@ const MOTORS = [
   { tag: 'P-1', supply: 'ac3', hp: 5, volts: 460, environment: 'indoor-dry' },
 ];
 
-const binary = (res: NodeJS.ReadableStream, cb: (e: Error | null, b: Buffer) => void) => {
+function binary(res: unknown, cb: (err: Error | null, body: Buffer) => void) {
+  const r = res as NodeJS.ReadableStream;
   const chunks: Buffer[] = [];
-  res.on('data', (c: Buffer) => chunks.push(c));
-  res.on('end', () => cb(null, Buffer.concat(chunks)));
-};
+  r.on('data', (c: Buffer) => chunks.push(c));
+  r.on('end', () => cb(null, Buffer.concat(chunks)));
+}
 
 describe('a group of motors on one branch circuit', () => {
   it('430.53(C): one 50 A group breaker in the bill of materials, the path in the checks, the group carried by the motor list', async () => {
@@ -78,8 +79,10 @@ describe('a group of motors on one branch circuit', () => {
     const job = (await send(designer, 'post', '/api/jobs', { number: uniq(), name: 'Conveyor line', availableFaultKa: 22 }).expect(201))
       .body;
     const panel = (await send(designer, 'post', `/api/jobs/${job.id}/panels`, { name: 'CV-MCC' }).expect(201)).body;
-    for (const { groupListedMaxAmps: _, ...answers } of MOTORS.slice(0, 3))
+    for (const m of MOTORS.slice(0, 3)) {
+      const { groupListedMaxAmps: _, ...answers } = m as typeof base & { tag: string; hp: number };
       await send(designer, 'post', `/api/panels/${panel.id}/loads`, { answers }).expect(201);
+    }
     const bom = (await send(designer, 'post', `/api/panels/${panel.id}/bom/rebuild`, {}).expect(200)).body as {
       lines: Array<{ bucket: string; category: string; code: string | null }>;
     };

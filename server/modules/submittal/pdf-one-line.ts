@@ -2,6 +2,7 @@
 // at the top, labels to the right.
 import type { LoadSelection } from '../../../shared/schemas/selection';
 import { oneLineElements, type MotorFeed, type OneLineElement } from '../../../shared/calc/one-line';
+import type { GroupCircuit } from '../../../shared/schemas/group-circuit';
 import { COPPER, MARGIN, SLATE, fitLine, pdfSafe, type Doc, type Writer } from './pdf-writer';
 
 const STEP = 36;
@@ -151,12 +152,13 @@ function drawSymbol(doc: Doc, e: OneLineElement, x: number, y: number, bold: str
   doc.restore();
 }
 
-export const oneLineHeight = (s: LoadSelection, feed: MotorFeed = null) => oneLineElements(s, feed).length * STEP + 8;
+export const oneLineHeight = (s: LoadSelection, feed: MotorFeed = null, group: GroupCircuit | null = null) =>
+  oneLineElements(s, feed, group).length * STEP + 8;
 
 /** A bucket's one-line drawn with lines and symbols, supply at the top, labels to the right. */
-export function drawOneLine(w: Writer, s: LoadSelection, feed: MotorFeed): void {
-  const elements = oneLineElements(s, feed);
-  const height = oneLineHeight(s, feed);
+export function drawOneLine(w: Writer, s: LoadSelection, feed: MotorFeed, group: GroupCircuit | null = null): void {
+  const elements = oneLineElements(s, feed, group);
+  const height = oneLineHeight(s, feed, group);
   w.ensure(height + 24);
   w.sub(s.tag);
   const doc = w.doc;

@@ -4,6 +4,7 @@
 import { answerValueLabel, fieldLabel, starterTypeLabel } from '../../../shared/labels';
 import type { LoadSelection } from '../../../shared/schemas/selection';
 import { motorFeed, sourcesSummary } from '../../../shared/calc/other-sources';
+import { motorGroup } from '../../../shared/calc/group-circuits';
 import type { LineName } from '../../../shared/calc/connections';
 import { relayOf, relayWiringText } from '../../../shared/calc/overload';
 import { perWindingText } from '../../../shared/calc/scpd';
@@ -127,9 +128,10 @@ export function protectionSummary(w: Writer, data: SubmittalData): void {
 
 /** One-lines (the heading kept with the first diagram). */
 export function oneLineDiagrams(w: Writer, data: SubmittalData): void {
-  if (data.selections.length) w.ensure(oneLineHeight(data.selections[0], motorFeed(data.rollup, data.selections[0].tag)) + 90);
+  const first = data.selections[0];
+  if (first) w.ensure(oneLineHeight(first, motorFeed(data.rollup, first.tag), motorGroup(data.rollup, first.tag)) + 90);
   w.heading('One-line diagrams');
-  for (const s of data.selections) drawOneLine(w, s, motorFeed(data.rollup, s.tag));
+  for (const s of data.selections) drawOneLine(w, s, motorFeed(data.rollup, s.tag), motorGroup(data.rollup, s.tag));
 }
 
 /** Nameplate and feeder. */

@@ -23,6 +23,7 @@ import {
   protectionSummary,
   sccrWorksheet,
 } from './pdf-sections';
+import { groupCircuitsSection } from './pdf-group-circuits';
 
 export type { SubmittalData, SubmittalPdfOptions } from './pdf-data';
 export { pdfSafe } from './pdf-writer';
@@ -76,6 +77,7 @@ export function writeSubmittalPdf(
   oneLineDiagrams(w, data);
   nameplateAndFeeder(w, data);
   otherVoltages(w, data);
+  groupCircuitsSection(w, data);
   sccrWorksheet(w, data);
   heatCalculation(w, data);
   controlPower(w, data);

@@ -3,6 +3,7 @@ import { useParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { panelQueries } from '../../../features/panels/api/panels';
 import { checkQueries, submittalPdfUrl } from '../../../features/checks/api/checks';
 import { motorFeed } from '../../../../shared/calc/other-sources';
+import { motorGroup } from '../../../../shared/calc/group-circuits';
 import { Bucket } from '../../../features/drawings/components/bucket';
 import { Sheets } from '../../../features/drawings/components/sheets';
 import { queryClient } from '../../../lib/query-client';
@@ -53,7 +54,9 @@ export function Component() {
       {p.loads.length === 0 ? (
         <Empty title="No motors on this panel yet">Add motors to see their one-lines and connection cards.</Empty>
       ) : (
-        p.loads.map((l) => <Bucket key={l.id} load={l} card={cards.get(l.id)} feed={motorFeed(p.rollup, l.tag)} />)
+        p.loads.map((l) => (
+          <Bucket key={l.id} load={l} card={cards.get(l.id)} feed={motorFeed(p.rollup, l.tag)} group={motorGroup(p.rollup, l.tag)} />
+        ))
       )}
       <Caution />
     </div>

@@ -1,5 +1,6 @@
 import type { LoadSelection } from '../../../../shared/schemas/selection';
 import { oneLineElements, type MotorFeed, type OneLineElement } from '../../../../shared/calc/one-line';
+import type { GroupCircuit } from '../../../../shared/schemas/group-circuit';
 
 export { oneLineElements };
 export type { MotorFeed };
@@ -130,12 +131,14 @@ export interface OneLineProps {
   selection: LoadSelection;
   /** what the bucket is fed from (motorFeed of the panel roll-up); null: the feeder bus */
   feed?: MotorFeed;
+  /** the group whose device serves the motor (motorGroup of the panel roll-up, 430.53); null: its own device */
+  group?: GroupCircuit | null;
   width?: number;
 }
 
 /** One-line diagram of a bucket as SVG. */
-export function OneLine({ selection, feed = null, width = 420 }: OneLineProps) {
-  const elements = oneLineElements(selection, feed);
+export function OneLine({ selection, feed = null, group = null, width = 420 }: OneLineProps) {
+  const elements = oneLineElements(selection, feed, group);
   const height = elements.length * STEP + 10;
   const titleId = `one-line-${selection.tag}`;
   return (
