@@ -23,6 +23,8 @@ export function panelRollupOf(
   const feederFamily = supply.feeder.ocpdType === 'inverse-time-breaker' ? 'breaker' : 'fuse';
   const groups = panelGroups(supply, loads, results, edition);
   const groupDevice = new Map(groups.flatMap((g) => (g.device ? g.motors.map((t) => [t, g] as const) : [])));
+  // a group no path of 430.53 allows: a roll-up error (each motor stays on its own branch device meanwhile)
+  for (const g of groups) if (g.refusal !== null) errors.push(`group ${g.group} (${g.motors.join(', ')}) refused: ${g.refusal}`);
   results.forEach((r, i) => {
     const load = loads[i] as Load;
     if (r.flcAmps <= 0 || r.scpd.ratingAmps <= 0) {

@@ -132,6 +132,8 @@ describe('430.53 refusals', () => {
     expect(g?.path).toBeNull();
     expect(g?.device).toBeNull();
     for (const re of c.says) expect(g?.refusal).toMatch(re);
+    // the refusal is a roll-up error too: the motors page lists it and the CLI exits 3
+    expect(p.errors?.some((e) => e.startsWith('group G-1') && e.includes(g?.refusal ?? '—'))).toBe(true);
   });
 
   it('a refused group leaves each motor on its own device for the feeder (430.62(A))', async () => {
