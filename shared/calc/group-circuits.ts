@@ -100,7 +100,9 @@ function pathA(ms: readonly GroupMember[], volts: number, edition: CodeEdition, 
   if (big.length) reasons.push(`${big.map((m) => m.tag).join(', ')}: over 1 hp (or no horsepower given)`);
   const over6 = ms.filter((m) => m.selection.flcAmps > 6 + EPS);
   if (over6.length) reasons.push(`${over6.map((m) => `${m.tag} ${m.selection.flcAmps} A`).join(', ')}: full-load current over 6 A`);
-  let limit: number | null = volts <= 120 ? 20 : volts <= upTo ? 15 : null;
+  // a nominal 120 V AC circuit (motors rated 110–120 V): 20 A; any other circuit up to 1000 V (600 V in 2020): 15 A
+  const ac = ms.every((m) => m.selection.supply !== 'dc');
+  let limit: number | null = ac && volts >= 110 && volts <= 120 ? 20 : volts <= upTo ? 15 : null;
   if (limit === null) reasons.push(`${volts} V is above ${upTo} V`);
   const marked = ms.flatMap((m) => (m.listedMaxAmps !== null ? [m.listedMaxAmps] : []));
   if (limit !== null && marked.length) limit = Math.min(limit, ...marked);

@@ -150,9 +150,14 @@ describe('430.53(A) limits by voltage and edition', () => {
     { supply: 'ac1' as const, volts: 115, hp: 0.5, path: 'B', device: 25, source: 'NEC 2023 Table 430.248, 430.53(A)(1), (B)' },
     // 1/6 hp 115 V: 4.4 A ≤ 6 A; nominal 120 V circuit: not over 20 A; running 8.8 A
     { supply: 'ac1' as const, volts: 115, hp: 1 / 6, path: 'A', device: 20, source: 'NEC 2023 Table 430.248, 430.53(A)' },
+    // 1/3 hp 90 V DC: Table 430.247 5.2 A ≤ 6 A, but not a nominal 120 V AC circuit: not over 15 A; running 10.4 A
+    { supply: 'dc' as const, volts: 90, hp: 1 / 3, path: 'A', device: 15, source: 'NEC 2023 Table 430.247 (from memory), 430.53(A)' },
   ])('$hp hp at $volts V: 430.53($path) $device A ($source)', async (c) => {
     const loads = [m('F-1', c.hp, { supply: c.supply, volts: c.volts }), m('F-2', c.hp, { supply: c.supply, volts: c.volts })];
-    const out = await selector.selectPanel({ supply: { ...supply480, volts: 120, phases: 1 }, loads });
+    const out = await selector.selectPanel({
+      supply: { ...supply480, volts: c.supply === 'dc' ? 480 : 120, phases: c.supply === 'dc' ? 3 : 1 },
+      loads,
+    });
     const g = out.panel.groups?.[0];
     expect(g?.path).toBe(c.path);
     expect(g?.device?.ratingAmps).toBe(c.device);
