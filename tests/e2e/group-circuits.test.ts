@@ -44,6 +44,12 @@ describe('motors on one branch circuit in the browser', () => {
     await section.getByText(/430\.53\(C\) applies: one inverse-time circuit breaker of 50 A/).waitFor();
     await section.getByText('✔ every group allowed by 430.53').waitFor();
     expect(await section.getByRole('table', { name: 'G-1 taps and overloads' }).getByRole('row').count()).toBe(4);
+    // each grouped motor's card says the group's device serves it
+    await page
+      .getByText(/On group G-1: one inverse-time circuit breaker of 50 A serves CV-1, CV-2, CV-3 \(430\.53\(C\)\)/)
+      .first()
+      .waitFor();
+    expect(await page.getByText(/On group G-1: one inverse-time circuit breaker of 50 A/).count()).toBe(3);
     await screenshot(page, 'group-circuits');
 
     await page.goto(`${baseUrl()}/jobs/${job.id}/panels/${panel.id}/drawings`);
