@@ -57,6 +57,8 @@ export const ANSWER_LABELS: Record<keyof LoadInput, string> = {
   driveInputAmps: 'Drive input current',
   sharedDrive: 'Shared drive',
   scpdOverride: 'Protective-device limit override',
+  branchGroup: 'Branch-circuit group',
+  groupListedMaxAmps: 'Group-installation listing, largest device',
 };
 
 /** Nested answers and the motor-list import's own column names. */

@@ -9,7 +9,7 @@ import type { LoadSelection, PanelRollup } from '../schemas/selection';
 import { BRANCH_FUSE_CLASS_ORDER, type BranchFuseClass } from '../standards/fuse-classes';
 import { controlWireSize } from '../standards/control-schemes';
 import { ENCLOSURE_DEPTH, WIRE_ALLOWANCE_FT } from '../standards/panel-layout';
-import { addBucketParts } from './bom-stages/bucket-parts';
+import { addBucketParts, addGroupBranchProtection } from './bom-stages/bucket-parts';
 import type { BomContext } from './bom-stages/context';
 import { chooseEnclosure, depthByKindMm, type EnclosureNeed } from './bom-stages/enclosure';
 import { LineBuilder } from './bom-stages/lines';
@@ -96,8 +96,16 @@ export function buildBom(input: BuildBomInput): BuildBomResult {
   // a drive feeding several motors: one bucket for the drive, one per motor for its output contactor and overload
   const drives = (input.panel.sharedDrives ?? []).filter((d) => d.motors.every((m) => input.selections.some((s) => s.tag === m.tag)));
   const onDrive = new Set(drives.flatMap((d) => d.motors.map((m) => m.tag)));
-  for (const s of input.selections) if (!onDrive.has(s.tag)) addBucketParts(ctx, s);
+  // motors on one branch circuit (430.53): the group's device once, in place of each motor's own
+  const groups = (input.panel.groups ?? []).filter((g) => g.device !== null);
+  const grouped = new Set(groups.flatMap((g) => g.motors));
+  for (const s of input.selections) if (!onDrive.has(s.tag)) addBucketParts(ctx, s, grouped.has(s.tag));
   for (const d of drives) addSharedDriveParts(ctx, d, input.selections);
+  for (const g of groups) {
+    const members = input.selections.filter((s) => g.motors.includes(s.tag));
+    const largest = members.reduce<LoadSelection | null>((a, s) => (a === null || s.flcAmps > a.flcAmps ? s : a), null);
+    if (largest && g.device) addGroupBranchProtection(ctx, g.group, largest, g.device);
+  }
   const sources = input.panel.otherSources ?? [];
   for (const src of sources) addOtherSourceParts(ctx, src, input.supply);
   const hasMotors = input.selections.length > 0;

@@ -2,7 +2,8 @@
 // of the other motors' FLCs) and the feeder protective device per 430.62(A) (not greater than the
 // largest branch short-circuit device rating — at the maximum 430.52 permits — plus the sum of the
 // other motors' FLCs; where that is not a standard rating, the next lower standard rating).
-// Instantaneous-trip branches count at the Table 430.52 percentage of the feeder device type.
+// Instantaneous-trip branches count at the Table 430.52 percentage of the feeder device type. A group
+// device (430.53) counts once, with all its motors' FLCs as its own (not added again as other motors).
 // Other loads (the primary current of a transformer or DC supply in the panel for motors at another
 // voltage, shared/calc/other-sources) add at 100 % to both (430.24, 430.63); their own primary device
 // takes part in the choice of the largest device for 430.62(A).
@@ -19,6 +20,8 @@ export interface FeederBranch {
   flcAmps: number;
   /** branch device rating counted for 430.62(A) */
   branchDeviceAmps: number;
+  /** a device shared by several motors (430.53): its tag and the sum of their FLCs, left out of "the other motors" */
+  sharedDevice?: { tag: string; flcAmps: number };
 }
 
 /** A non-motor load on the feeder: a transformer's or DC supply's primary current and its primary device. */
@@ -66,7 +69,7 @@ export function feederRollup(
 
   // the largest protective device among the motor branches and the other loads' primary devices
   const devices = [
-    ...b.map((x) => ({ tag: x.tag, deviceAmps: x.branchDeviceAmps, amps: x.flcAmps })),
+    ...b.map((x) => ({ tag: x.sharedDevice?.tag ?? x.tag, deviceAmps: x.branchDeviceAmps, amps: x.sharedDevice?.flcAmps ?? x.flcAmps })),
     ...others.map((x) => ({ tag: x.tag, deviceAmps: x.deviceAmps, amps: x.amps })),
   ];
   let largestDevice = devices[0] as (typeof devices)[number];

@@ -1,5 +1,6 @@
 // The one-line of a bucket as a list of elements, supply to motor: drawn on screen (SVG) and in the
 // submittal (PDF vector drawing) from the same list.
+import type { GroupCircuit } from '../schemas/group-circuit';
 import type { LoadSelection } from '../schemas/selection';
 import { relayWiringText } from './overload';
 import { SCPD_WORDS } from './scpd';
@@ -76,19 +77,37 @@ function feedElements(s: LoadSelection, feed: MotorFeed): OneLineElement[] {
   return out;
 }
 
-/** The one-line of a bucket, top (supply) to bottom (motor). Pure: same selection and feed, same list. */
-export function oneLineElements(s: LoadSelection, feed: MotorFeed = null): OneLineElement[] {
+/** The group's one device feeding several buckets (430.53), then this motor's tap to its overload relay. */
+function groupElements(s: LoadSelection, g: GroupCircuit): OneLineElement[] {
+  const d = g.device as NonNullable<GroupCircuit['device']>;
+  const tap = g.taps.find((t) => t.tag === s.tag);
+  const others = g.motors.filter((t) => t !== s.tag);
+  return [
+    {
+      kind: d.type.endsWith('fuse') ? 'fuse' : 'breaker',
+      label: `${d.ratingAmps} A ${SCPD_WORDS[d.type]}, group ${g.group} (430.53(${g.path}))`,
+      detail: `also feeds ${others.join(', ')}; group conductor ${g.conductor?.size ?? '—'}; ${d.basis}`,
+    },
+    ...(tap ? [{ kind: 'bus' as const, label: `Tap ${tap.size} (430.53(${tap.rule}))`, detail: tap.basis }] : []),
+  ];
+}
+
+/** The one-line of a bucket, top (supply) to bottom (motor). Pure: same selection, feed and group, same list.
+ *  A motor of a group (430.53) shows the group's device and its tap in place of a device of its own. */
+export function oneLineElements(s: LoadSelection, feed: MotorFeed = null, group: GroupCircuit | null = null): OneLineElement[] {
   const out: OneLineElement[] = feedElements(s, feed);
   out.push({
     kind: 'disconnect',
     label: 'Disconnect',
     detail: `≥ ${s.disconnect.minAmps} A${s.disconnect.minHp !== null ? `, ≥ ${s.disconnect.minHp} hp` : ''}`,
   });
-  out.push({
-    kind: s.scpd.type.endsWith('fuse') ? 'fuse' : 'breaker',
-    label: `${s.scpd.ratingAmps} A ${SCPD_WORDS[s.scpd.type]}`,
-    detail: s.scpd.basis,
-  });
+  if (group?.device) out.push(...groupElements(s, group));
+  else
+    out.push({
+      kind: s.scpd.type.endsWith('fuse') ? 'fuse' : 'breaker',
+      label: `${s.scpd.ratingAmps} A ${SCPD_WORDS[s.scpd.type]}`,
+      detail: s.scpd.basis,
+    });
   if (s.starter.type === 'VFD' || s.starter.type === 'dc-drive') {
     out.push({
       kind: 'vfd',

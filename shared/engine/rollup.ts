@@ -1,7 +1,10 @@
 // The panel roll-up from the motors' selections: the feeder (430.24, 430.62(A)), motors left out with
-// the reason, an instantaneous-trip branch counted at the feeder device type's Table 430.52 percent.
+// the reason, an instantaneous-trip branch counted at the feeder device type's Table 430.52 percent,
+// a drive feeding several motors counted once at its input, and the motors grouped on one branch circuit (430.53), each counted at its group's device for 430.62(A).
 
 import { feederRollup, type FeederBranch } from '../calc/feeder';
+import { round2 } from '../calc/round';
+import { groupCircuits, type GroupMember } from '../calc/group-circuits';
 import { otherSources, sourceNeed } from '../calc/other-sources';
 import { branchProtection, motorKind } from '../calc/scpd';
 import { sharedDrives } from '../calc/shared-drives';
@@ -37,6 +40,10 @@ export function panelRollupOf(
       `${d.tag}: one drive for ${d.motors.map((m) => m.tag).join(', ')}, counted once in the feeder at ${d.input.amps} A with its ${deviceAmps} A input device (430.122, 430.130, 430.24)`,
     );
   }
+  const groups = panelGroups(supply, loads, results, edition);
+  const groupDevice = new Map(groups.flatMap((g) => (g.device ? g.motors.map((t) => [t, g] as const) : [])));
+  // a group no path of 430.53 allows: a roll-up error (each motor stays on its own branch device meanwhile)
+  for (const g of groups) if (g.refusal !== null) errors.push(`group ${g.group} (${g.motors.join(', ')}) refused: ${g.refusal}`);
   results.forEach((r, i) => {
     const load = loads[i] as Load;
     if (r.flcAmps <= 0 || r.scpd.ratingAmps <= 0) {
@@ -51,7 +58,12 @@ export function panelRollupOf(
     if (sourceNeed(load, r, supply).on !== 'bus') return;
     if (shared.memberTags.has(r.tag)) return;
     let deviceAmps = r.scpd.ratingAmps;
-    if (r.scpd.type === 'instantaneous-trip-breaker') {
+    const group = groupDevice.get(r.tag);
+    if (group?.device) {
+      // 430.62(A): the device provided for the motor is its group's
+      deviceAmps = group.device.ratingAmps;
+      notes.push(`${r.tag}: on group ${group.group}'s ${deviceAmps} A device (430.53(${group.path})) for 430.62(A)`);
+    } else if (r.scpd.type === 'instantaneous-trip-breaker') {
       // 430.62(A): an instantaneous-trip branch counts at the Table 430.52 % of the feeder device type
       const p = branchProtection({ flcAmps: r.flcAmps, type: supply.feeder.ocpdType, motor: motorKind(load) }, edition);
       deviceAmps = p.ratingAmps;
@@ -59,7 +71,10 @@ export function panelRollupOf(
         `${r.tag}: instantaneous-trip branch counted at ${p.maxPercent} % (${supply.feeder.ocpdType}) = ${p.ratingAmps} A per 430.62(A)`,
       );
     }
-    branches.push({ tag: r.tag, flcAmps: r.flcAmps, branchDeviceAmps: deviceAmps });
+    const onGroupDevice = group?.device
+      ? { sharedDevice: { tag: group.group, flcAmps: round2(group.taps.reduce((sum, t) => sum + t.flcAmps, 0)) } }
+      : {};
+    branches.push({ tag: r.tag, flcAmps: r.flcAmps, branchDeviceAmps: deviceAmps, ...onGroupDevice });
   });
   const os = otherSources(supply, loads, results, edition);
   const f = feederRollup(
@@ -85,5 +100,17 @@ export function panelRollupOf(
     otherLoadsAmps: f.otherLoadsAmps,
     ...(shared.drives.length > 0 ? { sharedDrives: shared.drives } : {}),
     ...(shared.errors.length > 0 ? { sharedDriveErrors: shared.errors } : {}),
+    ...(groups.length ? { groups } : {}),
   };
+}
+
+/** The motors whose answers name a branch-circuit group, as groups (430.53). */
+function panelGroups(supply: Supply, loads: ReadonlyArray<Load>, results: ReadonlyArray<LoadSelection>, edition: CodeEdition) {
+  const members: GroupMember[] = [];
+  results.forEach((r, i) => {
+    const load = loads[i];
+    if (load?.branchGroup === undefined) return;
+    members.push({ tag: r.tag, branchGroup: load.branchGroup, listedMaxAmps: load.groupListedMaxAmps ?? null, selection: r });
+  });
+  return groupCircuits(members, { ambientC: supply.ambientC, terminationsListed75C: supply.terminationsListed75C !== false }, edition);
 }

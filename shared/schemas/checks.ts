@@ -8,6 +8,7 @@ import type { ConnectionCard } from '../calc/connections';
 import type { SourcesSummary } from '../calc/other-sources';
 import type { ControlConductorCheck } from '../calc/control-conductors';
 import type { SharedDrive } from './selection';
+import type { GroupCircuit } from './group-circuit';
 
 export interface ExcludedComponent {
   location: string;
@@ -58,6 +59,13 @@ export interface MotorConnectionCard {
   reason: string | null;
 }
 
+/** Motors on one branch circuit (430.53): the groups and the findings on them. */
+export interface GroupCircuitCheck {
+  groups: GroupCircuit[];
+  findings: string[];
+  basis: string;
+}
+
 export interface PanelChecks {
   panel: { id: number; name: string; mounting: string; enclosureType: string; revision: string };
   job: {
@@ -86,6 +94,8 @@ export interface PanelChecks {
   sharedDrives?: SharedDriveCheck;
   /** every control conductor against its protecting device (430.72(A), (B), Table 430.72(B)) */
   controlConductors: ControlConductorCheck;
+  /** motors on one branch circuit (430.53); absent in answers built before it existed */
+  groupCircuits?: GroupCircuitCheck;
   connectionCards: MotorConnectionCard[];
   cautions: string[];
 }

@@ -119,6 +119,11 @@ const LoadObject = z
     driveInputAmps: positive('driveInputAmps').max(5000).optional(),
     /** the tag of a drive this motor shares with other motors of the panel (e.g. "VFD-1"); absent: its own drive */
     sharedDrive: z.string().trim().min(1, 'Give the shared drive a tag, or leave it empty').max(40).optional(),
+    /** several motors on one branch circuit (430.53): the group's tag, shared by its motors (absent: its own branch circuit) */
+    branchGroup: z.string().trim().min(1, 'Give the group a tag, e.g. G-1').max(20).optional(),
+    /** the largest fuse or inverse-time breaker marked on this motor's controller and overload relay where both are
+     *  listed for group installation (430.53(C)(1)(a), (2)(a)); absent: not listed for group installation */
+    groupListedMaxAmps: positive('groupListedMaxAmps').max(6000).optional(),
     /** 430.52(C)(1) Exception 2: a higher protective-device limit, only with a reason */
     scpdOverride: z
       .object({

@@ -87,6 +87,7 @@ export interface MotorLeadConductors {
 }
 
 import type { VoltageDropResult } from '../calc/voltage-drop';
+import type { GroupCircuit } from './group-circuit';
 
 export interface LoadSelection {
   tag: string;
@@ -195,6 +196,8 @@ export interface PanelRollup {
   externalMotors?: ExternalMotor[];
   /** the other sources' primary (input) currents counted in the feeder and the 409.110 full-load current, A */
   otherLoadsAmps?: number;
+  /** motors on one branch circuit (430.53), by group tag (absent: none grouped) */
+  groups?: GroupCircuit[];
   /** drives that feed several motors (shared/calc/shared-drives); absent or empty: every drive feeds one motor */
   sharedDrives?: SharedDrive[];
   /** motors that name a shared drive and could not join it, or drives whose motors disagree, in words */

@@ -75,6 +75,27 @@ describe('motor wizard', () => {
     expect(sent).toMatchObject({ answers: { tag: 'P-101', hp: 10, fla: 13.2, supply: 'ac3', volts: 460 } });
   });
 
+  it('asks for the branch-circuit group and its group-installation listing and sends them with the motor (NEC 2023 430.53)', async () => {
+    let sent: { answers: Record<string, unknown> } | null = null;
+    server.use(
+      http.post(`/api/panels/${PANEL.id}/loads`, async ({ request }) => {
+        sent = (await request.json()) as { answers: Record<string, unknown> };
+        return HttpResponse.json(
+          { id: 502, tag: 'P-101', position: 1, answers: sent.answers, selection: null, effective: null, overrides: [], version: 0 },
+          { status: 201 },
+        );
+      }),
+    );
+    openWizard();
+    await answerTenHorsepower();
+    fireEvent.click(screen.getByRole('button', { name: /Protection/ }));
+    fireEvent.change(await screen.findByRole('textbox', { name: /^Branch-circuit group/ }), { target: { value: 'G-1' } });
+    fireEvent.change(screen.getByRole('textbox', { name: /^Group-installation listing/ }), { target: { value: '60' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Add motor' }));
+    expect(await screen.findByRole('heading', { name: 'Motors of this panel' })).toBeTruthy();
+    expect(sent).toMatchObject({ answers: { tag: 'P-101', branchGroup: 'G-1', groupListedMaxAmps: 60 } });
+  });
+
   it('shows the server error and stays on the wizard when saving fails', async () => {
     server.use(
       http.post(`/api/panels/${PANEL.id}/loads`, () => apiError(500, 'internal', 'The database did not answer; nothing was saved.')),

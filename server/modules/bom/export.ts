@@ -147,7 +147,7 @@ export async function writeBomWorkbook(job: BomExportJob, panels: readonly BomEx
   const layouts = panels.map((p, i) => layoutPanel(names[i]!, p.lines));
   const jobLines = panels.flatMap((p) => p.lines);
   writeSummarySheet(wb, job, panels, layouts, jobLines);
-  panels.forEach((p, i) => writePanelSheet(wb, job, p, layouts[i]!));
+  for (const [i, p] of panels.entries()) writePanelSheet(wb, job, p, layouts[i]!);
   writeRollupSheet(wb, job, jobLines);
   await wb.commit();
 }

@@ -74,6 +74,11 @@ const COLUMN_TEXT: Record<string, ColumnText> = {
   quickStop: { note: 'yes/no; DC quick stops (dynamic braking)', example: 'no' },
   driveInputAmps: { note: "the chosen drive's rated input current, A (430.122(A))", example: '' },
   sharedDrive: { note: 'tag of a drive shared with other variable-speed motors at the same voltage, e.g. VFD-1', example: '' },
+  branchGroup: { note: 'tag of the group of motors on one branch circuit (430.53), e.g. G-1; empty: own branch circuit', example: '' },
+  groupListedMaxAmps: {
+    note: 'largest fuse or inverse-time breaker, A, marked on the controller and overload relay listed for group installation (430.53(C)); empty: not listed',
+    example: '',
+  },
   'conductor.material': { header: 'conductorMaterial', note: 'cu or al (cu by default)', example: 'cu' },
   'conductor.tempRatingC': { header: 'conductorTempC', note: 'insulation rating 60, 75 or 90 (75 by default)', example: 75 },
   'scpdOverride.maxPercent': {

@@ -164,7 +164,7 @@ export async function commitImport(actor: CurrentUser, panelId: number, buffer: 
   }
   const answers = preview.rows.map((r) => r.answers!);
   const count = await changePanel(actor, panelId, null, `imported ${answers.length} motors`, async (p, t) => {
-    const n = await addLoads(actor, panelId, answers, t, p);
+    const n = await addLoads(actor, answers, t, p);
     await recordPanelActivity(
       actor,
       p,

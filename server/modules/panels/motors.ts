@@ -66,7 +66,7 @@ export async function addLoad(actor: CurrentUser, panelId: number, answers: unkn
   });
 }
 
-export async function addLoads(actor: CurrentUser, panelId: number, answersList: LoadInput[], t: Transaction, p: Panel & { job: Job }) {
+export async function addLoads(actor: CurrentUser, answersList: LoadInput[], t: Transaction, p: Panel & { job: Job }) {
   const existing = await repo.loadsOf(p.id, t);
   const tags = new Set(existing.map((l) => l.tag.toLowerCase()));
   let position = existing.reduce((m, l) => Math.max(m, l.position), 0);

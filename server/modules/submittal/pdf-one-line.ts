@@ -4,6 +4,7 @@ import type { LoadSelection } from '../../../shared/schemas/selection';
 import { oneLineElements, type MotorFeed, type OneLineElement } from '../../../shared/calc/one-line';
 import { sharedDriveOneLine } from '../../../shared/calc/shared-drive-one-line';
 import type { SharedDrive } from '../../../shared/schemas/selection';
+import type { GroupCircuit } from '../../../shared/schemas/group-circuit';
 import { COPPER, MARGIN, SLATE, fitLine, pdfSafe, type Doc, type Writer } from './pdf-writer';
 
 const STEP = 36;
@@ -153,16 +154,22 @@ function drawSymbol(doc: Doc, e: OneLineElement, x: number, y: number, bold: str
   doc.restore();
 }
 
-const elementsOf = (s: LoadSelection, feed: MotorFeed, drive: SharedDrive | null) =>
-  drive ? sharedDriveOneLine(s, drive) : oneLineElements(s, feed);
+/** What else shapes a bucket's one-line: the drive it shares with other motors, or its 430.53 group's device. */
+export interface OneLineShare {
+  drive?: SharedDrive | null;
+  group?: GroupCircuit | null;
+}
 
-export const oneLineHeight = (s: LoadSelection, feed: MotorFeed = null, drive: SharedDrive | null = null) =>
-  elementsOf(s, feed, drive).length * STEP + 8;
+const elementsOf = (s: LoadSelection, feed: MotorFeed, share: OneLineShare) =>
+  share.drive ? sharedDriveOneLine(s, share.drive) : oneLineElements(s, feed, share.group ?? null);
+
+export const oneLineHeight = (s: LoadSelection, feed: MotorFeed = null, share: OneLineShare = {}) =>
+  elementsOf(s, feed, share).length * STEP + 8;
 
 /** A bucket's one-line drawn with lines and symbols, supply at the top, labels to the right. */
-export function drawOneLine(w: Writer, s: LoadSelection, feed: MotorFeed, drive: SharedDrive | null = null): void {
-  const elements = elementsOf(s, feed, drive);
-  const height = oneLineHeight(s, feed, drive);
+export function drawOneLine(w: Writer, s: LoadSelection, feed: MotorFeed, share: OneLineShare = {}): void {
+  const elements = elementsOf(s, feed, share);
+  const height = oneLineHeight(s, feed, share);
   w.ensure(height + 24);
   w.sub(s.tag);
   const doc = w.doc;

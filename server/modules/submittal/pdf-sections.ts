@@ -5,6 +5,7 @@ import { answerValueLabel, fieldLabel, starterTypeLabel } from '../../../shared/
 import type { LoadSelection } from '../../../shared/schemas/selection';
 import { motorFeed, sourcesSummary } from '../../../shared/calc/other-sources';
 import { sharedDriveOf } from '../../../shared/calc/shared-drive-one-line';
+import { motorGroup } from '../../../shared/calc/group-circuits';
 import type { LineName } from '../../../shared/calc/connections';
 import { relayOf, relayWiringText } from '../../../shared/calc/overload';
 import { perWindingText } from '../../../shared/calc/scpd';
@@ -128,16 +129,11 @@ export function protectionSummary(w: Writer, data: SubmittalData): void {
 
 /** One-lines (the heading kept with the first diagram). */
 export function oneLineDiagrams(w: Writer, data: SubmittalData): void {
-  if (data.selections.length)
-    w.ensure(
-      oneLineHeight(
-        data.selections[0],
-        motorFeed(data.rollup, data.selections[0].tag),
-        sharedDriveOf(data.rollup, data.selections[0].tag),
-      ) + 90,
-    );
+  const shareOf = (tag: string) => ({ drive: sharedDriveOf(data.rollup, tag), group: motorGroup(data.rollup, tag) });
+  const first = data.selections[0];
+  if (first) w.ensure(oneLineHeight(first, motorFeed(data.rollup, first.tag), shareOf(first.tag)) + 90);
   w.heading('One-line diagrams');
-  for (const s of data.selections) drawOneLine(w, s, motorFeed(data.rollup, s.tag), sharedDriveOf(data.rollup, s.tag));
+  for (const s of data.selections) drawOneLine(w, s, motorFeed(data.rollup, s.tag), shareOf(s.tag));
 }
 
 /** Nameplate and feeder. */

@@ -24,6 +24,7 @@ import {
   protectionSummary,
   sccrWorksheet,
 } from './pdf-sections';
+import { groupCircuitsSection } from './pdf-group-circuits';
 
 export type { SubmittalData, SubmittalPdfOptions } from './pdf-data';
 export { pdfSafe } from './pdf-writer';
@@ -78,6 +79,7 @@ export function writeSubmittalPdf(
   nameplateAndFeeder(w, data);
   otherVoltages(w, data);
   sharedDrivesSection(w, data);
+  groupCircuitsSection(w, data);
   sccrWorksheet(w, data);
   heatCalculation(w, data);
   controlPower(w, data);

@@ -245,16 +245,34 @@ export function addTerminalsAndWire(ctx: BomContext, k: Bucket): void {
   lines.add(tag, ctx.controlWire, ctx.controlWireFtPerBucket);
 }
 
-/** Every part of one motor's bucket, in the order the bill of materials lists them; the panel's tally grows with it. */
-export function addBucketParts(ctx: BomContext, s: LoadSelection): void {
+/** Every part of one motor's bucket, in the order the bill of materials lists them; the panel's tally grows with it.
+ *  A motor on a group's branch circuit (430.53) has no branch device of its own: the group's serves it. */
+export function addBucketParts(ctx: BomContext, s: LoadSelection, onGroupDevice = false): void {
   const k = bucketOf(s);
   const { tally } = ctx;
   tally.minDepthMm = Math.max(tally.minDepthMm, bucketMinDepthMm(s));
   const coilsVa = addContactors(ctx, k);
   const overloadBuiltIn = addElectronicController(ctx, k);
   if (!overloadBuiltIn && s.starter.type !== 'dc-drive' && s.starter.type !== 'dc-armature-resistance') addOverloadRelays(ctx, k);
-  addBranchProtection(ctx, k);
+  if (!onGroupDevice) addBranchProtection(ctx, k);
   addProtectiveRelays(ctx, k);
   addControlParts(ctx, k.tag, s.starter.type, coilsVa, s.controlScheme);
   addTerminalsAndWire(ctx, k);
+}
+
+/** A group's one branch short-circuit and ground-fault protective device (430.53), listed under the group's tag,
+ *  on the circuit of its largest motor (voltage, poles). */
+export function addGroupBranchProtection(
+  ctx: BomContext,
+  group: string,
+  largest: LoadSelection,
+  device: { type: LoadSelection['scpd']['type']; ratingAmps: number },
+): void {
+  const s: LoadSelection = {
+    ...largest,
+    tag: group,
+    scpd: { ...largest.scpd, type: device.type, ratingAmps: device.ratingAmps },
+    disconnect: { ...largest.disconnect, minAmps: device.ratingAmps, minHp: null },
+  };
+  addBranchProtection(ctx, bucketOf(s));
 }

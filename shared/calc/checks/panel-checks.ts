@@ -13,6 +13,7 @@ import type { SccrInput } from '../sccr';
 import { CHECK_CAUTIONS } from '../../schemas/checks';
 import { motorConnectionCard } from './connection-card';
 import { controlPowerCheck } from './control-power-check';
+import { groupCircuitCheck } from './group-check';
 import { heatCheck } from './heat-check';
 import { nameplateCheck } from './nameplate-check';
 import { sccrCheck } from './sccr-check';
@@ -97,6 +98,7 @@ export function panelChecks(input: PanelChecksInput): PanelChecks {
     heat: heatCheck(lines, catalogue, bySel, panel.mounting, job.ambientC),
     controlPower: controlPowerCheck(lines, catalogue, job.supplyVolts),
     controlConductors: controlConductorChecks(lines, catalogue, selections),
+    groupCircuits: groupCircuitCheck(rollup, lines),
     nameplate: nameplateCheck(rollup, job, sccr.panelSccrKa, enclosureType, input.shopName),
     otherSources: sourcesSummary(rollup),
     sharedDrives: sharedDriveCheck(rollup),

@@ -58,7 +58,7 @@ export function sizeCircuit(ctx: StageContext, a: Assumptions, starterType: Star
       ruleId: 'sizing.conductor',
       decision: `conductor.size = ${cond.size} (${cond.ampacity} A >= ${cond.minAmpacity} A)`,
       words: `Conductors ${cond.size} (${cond.ampacity} A ≥ ${cond.minAmpacity} A)`,
-      reason: `smallest conductor whose allowable ampacity covers the minimum, at ${listed ? "75 °C terminations (the panel's equipment listed for 75 °C" + (supply.terminationsListed75C === undefined ? ', assumed' : '') + ')' : 'the termination column of 110.14(C)(1) (equipment not listed for 75 °C)'}`,
+      reason: `smallest conductor whose allowable ampacity covers the minimum, at ${listed ? `75 °C terminations (the panel's equipment listed for 75 °C${supply.terminationsListed75C === undefined ? ', assumed' : ''})` : 'the termination column of 110.14(C)(1) (equipment not listed for 75 °C)'}`,
       basis: cond.basis,
     });
     if (listed) {

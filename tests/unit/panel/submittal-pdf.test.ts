@@ -369,4 +369,24 @@ describe('PDF submittal drawing pages', () => {
       expect(text, s).toContain(s);
     expect(dr.terminals.length).toBe(dr.bomTerminalBlocks);
   });
+
+  it('shows a group of motors on one branch circuit: its path and device, and the group breaker on each one-line (NEC 2023 430.53)', async () => {
+    const { selector, supply480, motor } = await import('../engine/selector-setup');
+    const g = { branchGroup: 'G-1', groupListedMaxAmps: 60 };
+    const out = await selector.selectPanel({
+      supply: supply480,
+      loads: [motor({ tag: 'CV-1', hp: 10, ...g }), motor({ tag: 'CV-2', hp: 5, ...g }), motor({ tag: 'CV-3', hp: 5, ...g })],
+    });
+    const { buf } = await render({ compress: false }, { ...data(), selections: out.results, rollup: out.panel });
+    const text = extractPdfText(buf);
+    // 430.53(C)(4): 35 A (Table 430.52, 10 hp 14 A x 250 %) + 7.6 + 7.6 = 50.2 A -> 50 A (Table 240.6(A)); hand-worked
+    for (const s of [
+      'Motors on one branch circuit',
+      'G-1: CV-1, CV-2, CV-3 at 460 V',
+      '430.53(C) applies: one 50 A',
+      'group G-1 (430.53(C))',
+    ])
+      expect(text, s).toContain(s);
+    expect(text).not.toContain('?'); // every character within the font's range
+  });
 });

@@ -4,6 +4,7 @@ import { panelQueries } from '../../../features/panels/api/panels';
 import { checkQueries, submittalPdfUrl } from '../../../features/checks/api/checks';
 import { motorFeed } from '../../../../shared/calc/other-sources';
 import { sharedDriveOf } from '../../../../shared/calc/shared-drive-one-line';
+import { motorGroup } from '../../../../shared/calc/group-circuits';
 import { Bucket } from '../../../features/drawings/components/bucket';
 import { Sheets } from '../../../features/drawings/components/sheets';
 import { queryClient } from '../../../lib/query-client';
@@ -55,7 +56,14 @@ export function Component() {
         <Empty title="No motors on this panel yet">Add motors to see their one-lines and connection cards.</Empty>
       ) : (
         p.loads.map((l) => (
-          <Bucket key={l.id} load={l} card={cards.get(l.id)} feed={motorFeed(p.rollup, l.tag)} drive={sharedDriveOf(p.rollup, l.tag)} />
+          <Bucket
+            key={l.id}
+            load={l}
+            card={cards.get(l.id)}
+            feed={motorFeed(p.rollup, l.tag)}
+            drive={sharedDriveOf(p.rollup, l.tag)}
+            group={motorGroup(p.rollup, l.tag)}
+          />
         ))
       )}
       <Caution />

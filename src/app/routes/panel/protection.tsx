@@ -1,4 +1,5 @@
 import { useState } from 'react';
+import { motorGroup } from '../../../../shared/calc/group-circuits';
 import { selectionValueLabel } from '../../../../shared/labels';
 import { useQuery } from '@tanstack/react-query';
 import { useParams } from 'react-router-dom';
@@ -85,7 +86,11 @@ export function Component() {
               </span>
             </h3>
             {(l.effective ?? l.selection) ? (
-              <SelectionSummary selection={(l.effective ?? l.selection)!} overridden={l.overrides.map((o) => o.field)} />
+              <SelectionSummary
+                selection={(l.effective ?? l.selection)!}
+                overridden={l.overrides.map((o) => o.field)}
+                group={motorGroup(p.rollup, l.tag)}
+              />
             ) : (
               <p className="text-sm text-state-returned">✖ No selection</p>
             )}

@@ -3,6 +3,7 @@ import { checkQueries } from '../api/checks';
 import { Caution, ErrorNote, Loading } from '../../../components/ui/feedback';
 import { ControlConductorsSection } from './control-conductors';
 import { ControlPowerSection } from './control-power-section';
+import { GroupCircuitsSection } from './group-circuits-section';
 import { HeatSection } from './heat-section';
 import { NameplateSection } from './nameplate-section';
 import { OtherSourcesSection } from './other-sources-section';
@@ -34,6 +35,7 @@ export function PanelChecks({ panelId }: { panelId: number }) {
       <ControlPowerSection cp={c.controlPower} />
       <OtherSourcesSection os={c.otherSources} />
       <SharedDrivesSection sd={c.sharedDrives} />
+      {c.groupCircuits ? <GroupCircuitsSection gc={c.groupCircuits} /> : null}
       {c.controlConductors ? <ControlConductorsSection cc={c.controlConductors} /> : null}
       <NameplateSection np={c.nameplate} />
       <Caution />

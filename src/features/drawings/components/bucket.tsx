@@ -3,6 +3,7 @@
 import type { PanelChecks } from '../../../../shared/schemas/checks';
 import type { LoadView } from '../../../../shared/schemas/panel';
 import type { SharedDrive } from '../../../../shared/schemas/selection';
+import type { GroupCircuit } from '../../../../shared/schemas/group-circuit';
 import { OneLine, type MotorFeed } from './one-line';
 import { ConnectionCardDrawing } from './connection-card';
 
@@ -13,12 +14,15 @@ export function Bucket({
   card,
   feed,
   drive = null,
+  group = null,
 }: {
   load: LoadView;
   card: PanelChecks['connectionCards'][number] | undefined;
   feed: MotorFeed;
   /** the shared drive that feeds the motor, if any */
   drive?: SharedDrive | null;
+  /** the group whose device serves the motor (430.53); null: its own branch device */
+  group?: GroupCircuit | null;
 }) {
   const s = load.effective ?? load.selection;
   const answers = load.answers as { description?: string; hp?: number; kw?: number; volts?: number; supply?: string };
@@ -42,7 +46,7 @@ export function Bucket({
         <div>
           <h3 className="mb-1 text-xs font-semibold tracking-wide text-ink-soft uppercase">One-line</h3>
           {s && s.errors.length === 0 ? (
-            <OneLine selection={s} feed={feed} drive={drive} />
+            <OneLine selection={s} feed={feed} drive={drive} group={group} />
           ) : (
             <p className="text-sm text-state-returned">
               ✖ No one-line until the motor’s selection is fixed{s ? `: ${s.errors.join('; ')}` : ''}.

@@ -2,6 +2,7 @@ import type { LoadSelection } from '../../../../shared/schemas/selection';
 import { oneLineElements, type MotorFeed, type OneLineElement } from '../../../../shared/calc/one-line';
 import { sharedDriveOneLine } from '../../../../shared/calc/shared-drive-one-line';
 import type { SharedDrive } from '../../../../shared/schemas/selection';
+import type { GroupCircuit } from '../../../../shared/schemas/group-circuit';
 
 export { oneLineElements };
 export type { MotorFeed };
@@ -134,12 +135,14 @@ export interface OneLineProps {
   feed?: MotorFeed;
   /** the shared drive that feeds the motor (the drive, its output, the motor's contactor and overload) */
   drive?: SharedDrive | null;
+  /** the group whose device serves the motor (motorGroup of the panel roll-up, 430.53); null: its own device */
+  group?: GroupCircuit | null;
   width?: number;
 }
 
 /** One-line diagram of a bucket as SVG. */
-export function OneLine({ selection, feed = null, drive = null, width = 420 }: OneLineProps) {
-  const elements = drive ? sharedDriveOneLine(selection, drive) : oneLineElements(selection, feed);
+export function OneLine({ selection, feed = null, drive = null, group = null, width = 420 }: OneLineProps) {
+  const elements = drive ? sharedDriveOneLine(selection, drive) : oneLineElements(selection, feed, group);
   const height = elements.length * STEP + 10;
   const titleId = `one-line-${selection.tag}`;
   return (

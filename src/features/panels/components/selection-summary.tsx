@@ -1,4 +1,5 @@
 import type { LoadSelection } from '../../../../shared/schemas/selection';
+import type { GroupCircuit } from '../../../../shared/schemas/group-circuit';
 import { relayOf, relayWiringText } from '../../../../shared/calc/overload';
 import { perWindingText } from '../../../../shared/calc/scpd';
 import { motorLeadText, termination60Text, voltageDropText } from '../../../../shared/calc/conductor';
@@ -39,7 +40,16 @@ export function relayLabel(s: LoadSelection) {
 }
 
 /** The key results of one motor's selection, with reasons and citations: the live preview and the review card. */
-export function SelectionSummary({ selection, overridden = [] }: { selection: LoadSelection; overridden?: string[] }) {
+export function SelectionSummary({
+  selection,
+  overridden = [],
+  group = null,
+}: {
+  selection: LoadSelection;
+  overridden?: string[];
+  /** the group whose one device serves this motor (430.53); null: its own branch circuit */
+  group?: GroupCircuit | null;
+}) {
   const s = selection;
   // the relay's dial: the current it carries at full load (nameplate FLA, or its share in a wye-delta or
   // part-winding starter); the trip then falls within the 430.32 limit (common practice; the maker's instructions govern)
@@ -87,6 +97,12 @@ export function SelectionSummary({ selection, overridden = [] }: { selection: Lo
         <span className="text-ink-soft">
           (max {s.scpd.maxPercent} % = {s.scpd.computedMaxAmps} A)
         </span>
+        {group?.device ? (
+          <span className="block font-semibold">
+            On group {group.group}: one {answerValueLabel('scpdType', group.device.type).toLowerCase()} of {group.device.ratingAmps} A
+            serves {group.motors.join(', ')} (430.53({group.path})); the value above is this motor's own, for reference
+          </span>
+        ) : null}
         {perWindingText(s) ? (
           <span className="block text-ink-soft" data-testid="scpd-per-winding">
             {perWindingText(s)}

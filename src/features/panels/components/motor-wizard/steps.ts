@@ -47,7 +47,7 @@ export const STEP_FIELDS: Record<StepName, string[]> = {
     'controlScheme',
   ],
   'Site & hazards': ['environment', 'reverseRotationHazard', 'critical', 'cableLengthFt', 'fedFrom'],
-  Protection: ['scpdType', 'conductor'],
+  Protection: ['scpdType', 'conductor', 'branchGroup', 'groupListedMaxAmps'],
 };
 
 /** The step that holds the first answer with an error (the first step when none does). */
