@@ -5,7 +5,7 @@ import type { BackplateLayout } from '../calc/layout/backplate';
 import type { UnplacedPart } from '../calc/layout/layout-units';
 import type { LoadSelection } from '../schemas/selection';
 import type { ConnectionCard } from '../calc/connections';
-import type { BucketSchematic, FieldPoint } from './schematic-model';
+import type { BranchGroupDevice, BucketSchematic, FieldPoint } from './schematic-model';
 
 export interface DrawingBucketInput {
   selection: LoadSelection;
@@ -13,6 +13,8 @@ export interface DrawingBucketInput {
   jogging: boolean;
   /** the tag of the shared drive that feeds the motor (absent: its own controller) */
   sharedDrive?: string;
+  /** the 430.53 group whose device protects the motor's branch (absent: its own device) */
+  branchGroup?: BranchGroupDevice;
 }
 
 export interface PanelDrawingInput {

@@ -69,6 +69,7 @@ export function buildPanelDrawings(input: PanelDrawingInput): PanelDrawings {
         card: bi.card,
         jogging: bi.jogging,
         ...(bi.sharedDrive ? { sharedDrive: bi.sharedDrive } : {}),
+        ...(bi.branchGroup ? { branchGroup: bi.branchGroup } : {}),
       },
       rung,
     );

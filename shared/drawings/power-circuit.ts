@@ -45,8 +45,13 @@ export function powerCircuit(
   const n = t === 'dc-drive' ? 3 : lines.length;
   const inLines = t === 'dc-drive' ? ['1L1', '1L2', '1L3'] : lines;
   const wires = (k = n) => Array.from({ length: k }, nextWire);
-  // a motor on a shared drive has no protective device of its own: the drive's input device protects the circuit
-  const head = input.sharedDrive ? [] : protectionBands(input, d, dev, poles, wires);
+  // a motor on a shared drive has no protective device of its own: the drive's input device protects the circuit;
+  // a grouped motor (430.53) taps the group's one device, drawn under the group's tag and listed with the group
+  const head = input.sharedDrive
+    ? []
+    : input.branchGroup
+      ? [groupDeviceBand(input.branchGroup, wires)]
+      : protectionBands(input, d, dev, poles, wires);
   if (hasLine(input.bom, 'phase-monitor-relay')) head.push({ kind: 'pmr', device: d('PMR'), label: 'monitors', wires: [] });
   const ol = (name = 'OL'): PowerBand => ({ kind: 'ol', device: d(name), label: `class ${s.overload.tripClass}`, wires: wires() });
   const contactor = (name: string, label: string): PowerBand => ({ kind: 'contactor', device: d(name), label, wires: wires() });
@@ -80,6 +85,17 @@ export function powerCircuit(
 }
 
 /** the short-circuit protective device (and the phase monitor relay across the lines) */
+/** The group's device a grouped motor's tap comes from: not a part of the motor's bucket. */
+function groupDeviceBand(g: NonNullable<BucketInput['branchGroup']>, wires: () => string[]): PowerBand {
+  const kind = g.type === 'inverse-time-breaker' ? 'cb' : 'fuse';
+  return {
+    kind,
+    device: `${g.tag}-${kind === 'cb' ? 'CB' : 'FU'}`,
+    label: `group ${g.tag} ${g.ratingAmps} A, ${g.clause} (tap)`,
+    wires: wires(),
+  };
+}
+
 function protectionBands(
   input: BucketInput,
   d: (n: string) => string,

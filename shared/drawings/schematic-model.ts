@@ -17,6 +17,17 @@ export interface BucketInput {
   jogging: boolean;
   /** the tag of the shared drive that feeds the motor through its output contactor (absent: its own controller) */
   sharedDrive?: string;
+  /** the 430.53 group whose one device protects this motor's branch (absent: the motor's own device) */
+  branchGroup?: BranchGroupDevice;
+}
+
+/** A group's branch short-circuit and ground-fault protective device, as a grouped motor's power circuit draws it. */
+export interface BranchGroupDevice {
+  tag: string;
+  type: 'inverse-time-breaker' | 'dual-element-fuse' | 'non-time-delay-fuse';
+  ratingAmps: number;
+  /** "430.53(B)" */
+  clause: string;
 }
 
 /** One phase or pole of the power circuit between two devices. */

@@ -55,6 +55,20 @@ describe('a group of motors on one branch circuit', () => {
     expect(checks.groupCircuits.groups.map((x: { group: string; path: string }) => [x.group, x.path])).toEqual([['G-1', 'C']]);
     expect(checks.groupCircuits.findings).toEqual([]);
 
+    // the shop's drawings: a grouped motor's power circuit taps the group's breaker, drawn under the group's
+    // tag, and has no breaker of its own (the bill of materials has none); P-1 keeps its own
+    const sheet = async (tag: string) =>
+      (
+        await engineer.agent.get(`/api/panels/${panel.id}/drawings/schematic.svg?tag=${tag}`).buffer(true).parse(binary).expect(200)
+      ).body.toString('utf8') as string;
+    const cv2 = await sheet('CV-2');
+    expect(cv2).toContain('G-1-CB');
+    expect(cv2).toContain('group G-1 50 A, 430.53(C)');
+    expect(cv2).not.toMatch(/>2CB</);
+    const p1 = await sheet('P-1');
+    expect(p1).toMatch(/>4CB</);
+    expect(p1).not.toContain('G-1-CB');
+
     // the motor list carries the group and its listing; imported into another panel it forms the same group
     const file = (await designer.agent.get(`/api/panels/${panel.id}/motors.xlsx`).buffer(true).parse(binary).expect(200)).body as Buffer;
     const wb = new ExcelJS.Workbook();

@@ -18,6 +18,7 @@ import type { SubmittalDrawings } from '../../../shared/drawings/panel-drawings'
 import { computeChecks, type ChecksContext } from '../checks/service';
 import { CONTROL_VOLTS } from '../../../shared/calc/checks/control-power-check';
 import { backplateLayout } from '../../../shared/calc/layout/backplate';
+import { motorGroup } from '../../../shared/calc/group-circuits';
 import { layoutSheetSvg } from '../../../shared/drawings/svg-layout';
 
 export interface DrawingContext {
@@ -40,11 +41,22 @@ export function drawingsFrom(ctx: ChecksContext): DrawingContext {
     .filter((c) => byTag.has(c.tag))
     .map((c) => {
       const drive = ctx.checks.sharedDrives?.drives.find((d) => d.motors.some((m) => m.tag === c.tag));
+      const group = motorGroup({ groups: ctx.checks.groupCircuits?.groups }, c.tag);
       return {
         selection: byTag.get(c.tag)!,
         card: c.card,
         jogging: answersByTag.get(c.tag)?.jogging === true,
         ...(drive ? { sharedDrive: drive.tag } : {}),
+        ...(group?.device && group.path
+          ? {
+              branchGroup: {
+                tag: group.group,
+                type: group.device.type,
+                ratingAmps: group.device.ratingAmps,
+                clause: `430.53(${group.path})`,
+              },
+            }
+          : {}),
       };
     });
   // the revision as the sheets' title block and drawing numbers carry it: R1 when signed off, else a draft (D)
