@@ -12,6 +12,7 @@ import { ENVIRONMENT_LABELS } from '../../../features/panels/components/answer-l
 import { sourcesSummary } from '../../../../shared/calc/other-sources';
 import { ROLE_SETS } from '../../../../shared/schemas/auth';
 import { SharedDriveNote } from '../../../features/panels/components/shared-drive-note';
+import { GroupCircuitNote } from '../../../features/panels/components/group-circuit-note';
 
 export function Component() {
   const panelId = Number(useParams().panelId);
@@ -86,6 +87,7 @@ export function Component() {
         </div>
       ) : null}
       <SharedDriveNote rollup={p.rollup} />
+      <GroupCircuitNote rollup={p.rollup} />
       {p.rollup?.errors?.length ? (
         <div className="rounded border border-state-returned/40 bg-bad-bg px-3 py-2 text-sm" role="alert">
           {p.rollup.errors.map((e) => (
