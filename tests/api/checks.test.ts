@@ -2,7 +2,7 @@
 // (8 motors, available fault current 35 kA, ambient 35 °C, free-standing) and on a copy of its motors in a
 // job of the test's own (so the demo job is never changed).
 import { beforeAll, describe, expect, it } from 'vitest';
-import { send, signInAs, testApp, type Session } from '../setup/api';
+import { send, signInAs, testApp, type Session, binary } from '../setup/api';
 import { DEMO_MOTORS } from '../../server/db/seeders/demo-panels';
 import { db } from '../../server/db/sequelize';
 
@@ -24,13 +24,6 @@ async function demoPanelId(s: Session): Promise<number> {
   const job = jobs.find((j) => j.number === 'J-2041')!;
   const panels = (await s.agent.get(`/api/jobs/${job.id}/panels`).expect(200)).body as Array<{ id: number; name: string }>;
   return panels.find((p) => p.name === 'MCC-1 Pump hall')!.id;
-}
-
-function binary(res: unknown, cb: (err: Error | null, body: Buffer) => void) {
-  const stream = res as NodeJS.ReadableStream;
-  const chunks: Buffer[] = [];
-  stream.on('data', (c: Buffer) => chunks.push(c));
-  stream.on('end', () => cb(null, Buffer.concat(chunks)));
 }
 
 describe('panel checks', () => {

@@ -2,7 +2,7 @@
 // conveyor C-201, the wye-delta blower K-301, a drive, a soft starter, single-phase and DC motors).
 import { beforeAll, describe, expect, it } from 'vitest';
 import ExcelJS from 'exceljs';
-import { signInAs, testApp, type DemoRole, type Session } from '../setup/api';
+import { signInAs, testApp, type DemoRole, type Session, binary } from '../setup/api';
 import { Organisation } from '../../server/db/models/organisation';
 import { Job } from '../../server/db/models/job';
 import { Panel } from '../../server/db/models/panel';
@@ -14,13 +14,6 @@ async function demoPanelId(s: Session): Promise<number> {
   const job = jobs.find((j) => j.number === 'J-2041')!;
   const panels = (await s.agent.get(`/api/jobs/${job.id}/panels`).expect(200)).body as Array<{ id: number; name: string }>;
   return panels.find((p) => p.name === 'MCC-1 Pump hall')!.id;
-}
-
-function binary(res: unknown, cb: (err: Error | null, body: Buffer) => void) {
-  const stream = res as NodeJS.ReadableStream;
-  const chunks: Buffer[] = [];
-  stream.on('data', (c: Buffer) => chunks.push(c));
-  stream.on('end', () => cb(null, Buffer.concat(chunks)));
 }
 
 const csvRows = (text: string) =>

@@ -3,7 +3,7 @@
 // 10 hp 14 A, 5 hp 7.6 A; inverse-time breaker 250 % (Table 430.52): 35 A and 19 → 20 A.
 import ExcelJS from 'exceljs';
 import { describe, expect, it } from 'vitest';
-import { send, signInAs } from '../setup/api';
+import { send, signInAs, binary } from '../setup/api';
 
 const uniq = () => `G-${Date.now().toString(36)}-${Math.floor(Math.random() * 1e5)}`;
 const base = { supply: 'ac3', volts: 460, environment: 'indoor-dry', branchGroup: 'G-1', groupListedMaxAmps: 60 };
@@ -13,13 +13,6 @@ const MOTORS = [
   { ...base, tag: 'CV-3', hp: 5 },
   { tag: 'P-1', supply: 'ac3', hp: 5, volts: 460, environment: 'indoor-dry' },
 ];
-
-function binary(res: unknown, cb: (err: Error | null, body: Buffer) => void) {
-  const r = res as NodeJS.ReadableStream;
-  const chunks: Buffer[] = [];
-  r.on('data', (c: Buffer) => chunks.push(c));
-  r.on('end', () => cb(null, Buffer.concat(chunks)));
-}
 
 describe('a group of motors on one branch circuit', () => {
   it('430.53(C): one 50 A group breaker in the bill of materials, the path in the checks, the group carried by the motor list', async () => {

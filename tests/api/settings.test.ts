@@ -2,7 +2,7 @@
 // separation of duties at sign-off, in a shop of the test's own so the demo shop is never changed.
 import { beforeAll, describe, expect, it } from 'vitest';
 import argon2 from 'argon2';
-import { anonymous, send, signIn, testApp, type Session } from '../setup/api';
+import { anonymous, send, signIn, testApp, type Session, binary } from '../setup/api';
 import { Organisation } from '../../server/db/models/organisation';
 import { User } from '../../server/db/models/user';
 import { db } from '../../server/db/sequelize';
@@ -33,13 +33,6 @@ const NAMES: Record<Who, string> = {
 
 let shopName: string;
 const s = {} as Record<Who, Session>;
-
-function binary(res: unknown, cb: (err: Error | null, body: Buffer) => void) {
-  const stream = res as NodeJS.ReadableStream;
-  const chunks: Buffer[] = [];
-  stream.on('data', (c: Buffer) => chunks.push(c));
-  stream.on('end', () => cb(null, Buffer.concat(chunks)));
-}
 
 beforeAll(async () => {
   testApp();

@@ -3,7 +3,7 @@
 // FLC from NEC 2023 Table 430.250 at 460 V: 10 hp 14 A, 7.5 hp 11 A, 5 hp 7.6 A (sum 32.6 A); 15 hp 21 A.
 // Drive input device 250 % × 32.6 = 81.5 A -> 90 A (NEC 2023 430.130(A)(1), Table 430.52, 430.52(C)(1) Exc. 1).
 import { describe, expect, it } from 'vitest';
-import { send, signInAs, type Session } from '../setup/api';
+import { send, signInAs, type Session, binary } from '../setup/api';
 
 const uniq = () => `SD-${Date.now().toString(36)}-${Math.floor(Math.random() * 1e5)}`;
 const onDrive = (tag: string, hp: number) => ({
@@ -22,13 +22,6 @@ const MOTORS = [
   onDrive('CV-3', 5),
   { tag: 'P-4', supply: 'ac3', hp: 15, volts: 460, environment: 'indoor-dry' },
 ];
-
-function binary(res: unknown, cb: (err: Error | null, body: Buffer) => void) {
-  const stream = res as NodeJS.ReadableStream;
-  const chunks: Buffer[] = [];
-  stream.on('data', (c: Buffer) => chunks.push(c));
-  stream.on('end', () => cb(null, Buffer.concat(chunks)));
-}
 
 interface Line {
   bucket: string;

@@ -78,3 +78,11 @@ export async function addSecondMake(s: Session, code: string, extraCost = 20): P
   }).expect(201);
   return second;
 }
+
+/** A supertest parser that collects a binary answer (a workbook, a PDF, an SVG) into one Buffer. */
+export function binary(res: unknown, cb: (err: Error | null, body: Buffer) => void) {
+  const stream = res as NodeJS.ReadableStream;
+  const chunks: Buffer[] = [];
+  stream.on('data', (c: Buffer) => chunks.push(c));
+  stream.on('end', () => cb(null, Buffer.concat(chunks)));
+}

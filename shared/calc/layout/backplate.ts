@@ -43,21 +43,24 @@ export function depthNeedMm(units: readonly LayoutUnit[]): number {
   return deepest > 0 ? deepest + BACKPLATE.depthAllowanceMm : 0;
 }
 
+/** A unit's parts, named as not on the plate for the reason. */
+function namedParts(u: LayoutUnit, reason: string): UnplacedPart[] {
+  return u.parts.map((part) => ({
+    tag: part.tag,
+    bucket: u.bucket,
+    code: part.code,
+    category: part.category,
+    description: part.description,
+    reason,
+  }));
+}
+
 /** Every unit the placement could not put on a plate, as named parts. */
 export function unplacedOfPlacement(p: Placement, sectionsAllowed: number): UnplacedPart[] {
-  const named = (u: LayoutUnit, reason: string): UnplacedPart[] =>
-    u.parts.map((part) => ({
-      tag: part.tag,
-      bucket: u.bucket,
-      code: part.code,
-      category: part.category,
-      description: part.description,
-      reason,
-    }));
   return [
-    ...p.tooLarge.flatMap(({ unit, reason }) => named(unit, reason)),
+    ...p.tooLarge.flatMap(({ unit, reason }) => namedParts(unit, reason)),
     ...p.overflow.flatMap((u) =>
-      named(u, `no room left on the ${sectionsAllowed} section${sectionsAllowed === 1 ? '' : 's'} of the enclosure line`),
+      namedParts(u, `no room left on the ${sectionsAllowed} section${sectionsAllowed === 1 ? '' : 's'} of the enclosure line`),
     ),
   ];
 }
@@ -76,16 +79,7 @@ export function backplateLayout(lines: readonly BomLine[], itemOf: (code: string
   const plate = enc ? plateOf(enc) : null;
   if (!encLine || !enc || !plate) {
     const reason = 'the bill of materials has no enclosure with dimensions to lay it out on';
-    const all = units.flatMap((u) =>
-      u.parts.map((part) => ({
-        tag: part.tag,
-        bucket: u.bucket,
-        code: part.code,
-        category: part.category,
-        description: part.description,
-        reason,
-      })),
-    );
+    const all = units.flatMap((u) => namedParts(u, reason));
     return { enclosure: null, sections: 0, placement: null, unplaced: [...unplaced, ...all], minDepthMm, placedCount: 0 };
   }
   const sections = Math.max(1, Math.round(encLine.quantity));
