@@ -29,12 +29,8 @@ export function panelRollupOf(
     edition,
   );
   for (const d of shared.drives) {
-    const p = d.input.protection;
-    let deviceAmps = p.ratingAmps;
-    if (p.type === 'instantaneous-trip-breaker') {
-      const motor = motorKind(loads[results.findIndex((r) => r.tag === d.motors[0]?.tag)] as Load);
-      deviceAmps = branchProtection({ flcAmps: d.input.amps, type: supply.feeder.ocpdType, motor }, edition).ratingAmps;
-    }
+    const motor = motorKind(loads[results.findIndex((r) => r.tag === d.motors[0]?.tag)] as Load);
+    const deviceAmps = feederCountedDevice(supply, d.input.amps, d.input.protection, motor, edition).amps;
     branches.push({ tag: d.tag, flcAmps: d.input.amps, branchDeviceAmps: deviceAmps });
     notes.push(
       `${d.tag}: one drive for ${d.motors.map((m) => m.tag).join(', ')}, counted once in the feeder at ${d.input.amps} A with its ${deviceAmps} A input device (430.122, 430.130, 430.24)`,
@@ -63,13 +59,13 @@ export function panelRollupOf(
       // 430.62(A): the device provided for the motor is its group's
       deviceAmps = group.device.ratingAmps;
       notes.push(`${r.tag}: on group ${group.group}'s ${deviceAmps} A device (430.53(${group.path})) for 430.62(A)`);
-    } else if (r.scpd.type === 'instantaneous-trip-breaker') {
-      // 430.62(A): an instantaneous-trip branch counts at the Table 430.52 % of the feeder device type
-      const p = branchProtection({ flcAmps: r.flcAmps, type: supply.feeder.ocpdType, motor: motorKind(load) }, edition);
-      deviceAmps = p.ratingAmps;
-      notes.push(
-        `${r.tag}: instantaneous-trip branch counted at ${p.maxPercent} % (${supply.feeder.ocpdType}) = ${p.ratingAmps} A per 430.62(A)`,
-      );
+    } else {
+      const counted = feederCountedDevice(supply, r.flcAmps, r.scpd, motorKind(load), edition);
+      deviceAmps = counted.amps;
+      if (counted.percent !== null)
+        notes.push(
+          `${r.tag}: instantaneous-trip branch counted at ${counted.percent} % (${supply.feeder.ocpdType}) = ${counted.amps} A per 430.62(A)`,
+        );
     }
     const onGroupDevice = group?.device
       ? { sharedDevice: { tag: group.group, flcAmps: round2(group.taps.reduce((sum, t) => sum + t.flcAmps, 0)) } }
@@ -102,6 +98,22 @@ export function panelRollupOf(
     ...(shared.errors.length > 0 ? { sharedDriveErrors: shared.errors } : {}),
     ...(groups.length ? { groups } : {}),
   };
+}
+
+/**
+ * The branch device a feeder counts for 430.62(A): the device itself, or for an instantaneous-trip breaker
+ * (which has no inverse-time rating to add) the Table 430.52 value of the feeder's device type (`percent` set).
+ */
+function feederCountedDevice(
+  supply: Supply,
+  flcAmps: number,
+  device: { type: string; ratingAmps: number },
+  motor: ReturnType<typeof motorKind>,
+  edition: CodeEdition,
+): { amps: number; percent: number | null } {
+  if (device.type !== 'instantaneous-trip-breaker') return { amps: device.ratingAmps, percent: null };
+  const p = branchProtection({ flcAmps, type: supply.feeder.ocpdType, motor }, edition);
+  return { amps: p.ratingAmps, percent: p.maxPercent };
 }
 
 /** The motors whose answers name a branch-circuit group, as groups (430.53). */
